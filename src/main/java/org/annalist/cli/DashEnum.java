@@ -1,0 +1,23 @@
+package org.annalist.cli;
+
+import java.util.Locale;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.TypeConversionException;
+
+/** Lets enum options be written with dashes on the command line ({@code day-first}). */
+final class DashEnum {
+
+    private DashEnum() {
+    }
+
+    static final class DateOrderConverter implements ITypeConverter<ReadOptionsMixin.DateOrderChoice> {
+        @Override
+        public ReadOptionsMixin.DateOrderChoice convert(String value) {
+            try {
+                return ReadOptionsMixin.DateOrderChoice.valueOf(value.trim().toLowerCase(Locale.ROOT).replace('-', '_'));
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException("'" + value + "' is not a date order; expected auto, day-first or month-first");
+            }
+        }
+    }
+}

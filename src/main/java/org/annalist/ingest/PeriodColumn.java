@@ -1,0 +1,216 @@
+package org.annalist.ingest;
+
+import java.time.DayOfWeek;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeSet;
+import java.util.stream.Collectors;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+
+/**
+ * Settles the period column as a whole: one frequency for the file, the day/month order of
+ * {@code a/b/yyyy} dates, and the frequency of dated rows (daily, business-daily, weekly, monthly,
+ * quarterly or annual, from the spacing of the dates).
+ */
+final class PeriodColumn {
+
+    /** A cell of the period column where it stands in the file. */
+    record Cell(int line, int column, String text) {
+    }
+
+    /**
+     * @param periods   the period of each cell, in the order given (null where the cell was unusable)
+     * @param format    the format as written, e.g. {@code YYYY-MM}
+     * @param dateOrder how {@code a/b/yyyy} dates were read, or null when there were none
+     */
+    record Resolved(List<Period> periods, Frequency frequency, String format, DateOrder dateOrder) {
+    }
+
+    /** Share of the span's periods that must carry a date for a day/month reading to count as regular. */
+    private static final double REGULAR_COVERAGE = 0.5;
+
+    private PeriodColumn() {
+    }
+
+    static Resolved resolve(List<Cell> cells, DateOrder requestedOrder, ProblemLog log) {
+        List<PeriodCells.Parsed> parsed = new ArrayList<>(cells.size());
+        for (Cell cell : cells) {
+            Optional<PeriodCells.Parsed> p = PeriodCells.parse(cell.text());
+            if (p.isEmpty()) {
+                log.error(cell.line(), cell.column(), PeriodCells.describeFailure(cell.text())
+                        + "; expected a date or period such as 2024-03, 2024-Q1 or 2024-03-01");
+            }
+            parsed.add(p.orElse(null));
+        }
+        String format = parsed.stream().filter(p -> p != null).map(PeriodCells.Parsed::format).distinct()
+                .collect(Collectors.joining(", "));
+        rejectMixedKinds(cells, parsed, log);
+        log.throwIfErrors();
+
+        boolean dated = parsed.stream().anyMatch(p -> !(p instanceof PeriodCells.Fixed));
+        if (!dated) {
+            List<Period> periods = parsed.stream().map(p -> ((PeriodCells.Fixed) p).period()).toList();
+            return new Resolved(periods, periods.get(0).frequency(), format, null);
+        }
+        DateOrder order = parsed.stream().anyMatch(p -> p instanceof PeriodCells.AmbiguousDay)
+                ? settleOrder(cells, parsed, requestedOrder, log) : null;
+        List<LocalDate> dates = new ArrayList<>(cells.size());
+        for (int i = 0; i < cells.size(); i++) {
+            PeriodCells.Parsed p = parsed.get(i);
+            Optional<LocalDate> date = p instanceof PeriodCells.AmbiguousDay a ? a.as(order)
+                    : Optional.of(((PeriodCells.Day) p).date());
+            if (date.isEmpty()) {
+                log.error(cells.get(i).line(), cells.get(i).column(), "'" + cells.get(i).text()
+                        + "' is not a date when read " + describe(order) + "; expected the same day/month order in every row");
+            }
+            dates.add(date.orElse(null));
+        }
+        log.throwIfErrors();
+        TreeSet<LocalDate> distinct = new TreeSet<>(dates);
+        Frequency frequency = frequencyOfDates(distinct).orElseThrow(() -> log.fatal(cells.get(0).line(), cells.get(0).column(),
+                spacingMessage(distinct)));
+        List<Period> periods = dates.stream().map(d -> Period.containing(frequency, d)).toList();
+        return new Resolved(periods, frequency, format, order);
+    }
+
+    /**
+     * The frequency that the spacing of the dates shows: the median gap between consecutive dates
+     * picks the calendar, and dates that never fall on a weekend over at least two weeks make the
+     * calendar business-daily.
+     */
+    static Optional<Frequency> frequencyOfDates(TreeSet<LocalDate> dates) {
+        if (dates.size() < 2) {
+            return Optional.empty();
+        }
+        long[] gaps = new long[dates.size() - 1];
+        LocalDate previous = null;
+        int g = 0;
+        for (LocalDate d : dates) {
+            if (previous != null) {
+                gaps[g++] = d.toEpochDay() - previous.toEpochDay();
+            }
+            previous = d;
+        }
+        Arrays.sort(gaps);
+        long median = gaps[gaps.length / 2];
+        if (median >= 360) {
+            return Optional.of(Frequency.ANNUAL);
+        } else if (median >= 85 && median <= 95) {
+            return Optional.of(Frequency.QUARTERLY);
+        } else if (median >= 27 && median <= 32) {
+            return Optional.of(Frequency.MONTHLY);
+        } else if (median == 7) {
+            return Optional.of(Frequency.WEEKLY);
+        } else if (median <= 3) {
+            boolean weekendSeen = dates.stream().anyMatch(d -> d.getDayOfWeek() == DayOfWeek.SATURDAY
+                    || d.getDayOfWeek() == DayOfWeek.SUNDAY);
+            long spanDays = dates.last().toEpochDay() - dates.first().toEpochDay() + 1;
+            return Optional.of(!weekendSeen && spanDays >= 14 ? Frequency.BUSINESS_DAILY : Frequency.DAILY);
+        }
+        return Optional.empty();
+    }
+
+    private static void rejectMixedKinds(List<Cell> cells, List<PeriodCells.Parsed> parsed, ProblemLog log) {
+        Map<String, List<Integer>> byKind = new java.util.LinkedHashMap<>();
+        for (int i = 0; i < parsed.size(); i++) {
+            PeriodCells.Parsed p = parsed.get(i);
+            if (p != null) {
+                String kind = p instanceof PeriodCells.Fixed f ? f.period().frequency().label() : "dated";
+                byKind.computeIfAbsent(kind, k -> new ArrayList<>()).add(i);
+            }
+        }
+        if (byKind.size() <= 1) {
+            return;
+        }
+        String majority = byKind.entrySet().stream().max(Map.Entry.comparingByValue((a, b) -> a.size() - b.size()))
+                .orElseThrow().getKey();
+        byKind.forEach((kind, rows) -> {
+            if (!kind.equals(majority)) {
+                for (int i : rows.subList(0, Math.min(rows.size(), 10))) {
+                    log.error(cells.get(i).line(), cells.get(i).column(), "mixed frequencies: '" + cells.get(i).text()
+                            + "' is " + article(kind) + " period while most rows are " + majority
+                            + "; expected one frequency per file");
+                }
+            }
+        });
+    }
+
+    private static DateOrder settleOrder(List<Cell> cells, List<PeriodCells.Parsed> parsed, DateOrder requested,
+                                         ProblemLog log) {
+        if (requested != DateOrder.AUTO) {
+            return requested;
+        }
+        Map<DateOrder, Integer> firstImpossible = new EnumMap<>(DateOrder.class);
+        for (DateOrder order : List.of(DateOrder.DAY_FIRST, DateOrder.MONTH_FIRST)) {
+            for (int i = 0; i < parsed.size(); i++) {
+                if (parsed.get(i) instanceof PeriodCells.AmbiguousDay a && a.as(order).isEmpty()) {
+                    firstImpossible.put(order, i);
+                    break;
+                }
+            }
+        }
+        boolean dayFirstFits = !firstImpossible.containsKey(DateOrder.DAY_FIRST);
+        boolean monthFirstFits = !firstImpossible.containsKey(DateOrder.MONTH_FIRST);
+        if (dayFirstFits != monthFirstFits) {
+            DateOrder chosen = dayFirstFits ? DateOrder.DAY_FIRST : DateOrder.MONTH_FIRST;
+            Cell proof = cells.get(firstImpossible.get(chosen == DateOrder.DAY_FIRST ? DateOrder.MONTH_FIRST : DateOrder.DAY_FIRST));
+            log.warn(proof.line(), proof.column(), "dates read " + describe(chosen) + ", because '" + proof.text()
+                    + "' is no date the other way round");
+            return chosen;
+        }
+        if (!dayFirstFits) {
+            Cell bad = cells.get(firstImpossible.get(DateOrder.DAY_FIRST));
+            Cell other = cells.get(firstImpossible.get(DateOrder.MONTH_FIRST));
+            throw log.fatal(bad.line(), bad.column(), "'" + bad.text() + "' needs month first but '" + other.text()
+                    + "' (line " + other.line() + ") needs day first; expected one day/month order in the file");
+        }
+        boolean dayFirstRegular = regular(parsed, DateOrder.DAY_FIRST);
+        boolean monthFirstRegular = regular(parsed, DateOrder.MONTH_FIRST);
+        if (dayFirstRegular != monthFirstRegular) {
+            DateOrder chosen = dayFirstRegular ? DateOrder.DAY_FIRST : DateOrder.MONTH_FIRST;
+            log.warn(cells.get(0).line(), cells.get(0).column(), "dates read " + describe(chosen)
+                    + ", because only that reading gives evenly spaced dates; set --date-order if that is wrong");
+            return chosen;
+        }
+        throw log.fatal(cells.get(0).line(), cells.get(0).column(), "cannot tell whether '" + cells.get(0).text()
+                + "' is day/month/year or month/day/year: every date reads both ways; "
+                + "expected --date-order day-first or --date-order month-first");
+    }
+
+    /** True when reading the dates in {@code order} gives a calendar without large holes. */
+    private static boolean regular(List<PeriodCells.Parsed> parsed, DateOrder order) {
+        TreeSet<LocalDate> dates = new TreeSet<>();
+        for (PeriodCells.Parsed p : parsed) {
+            dates.add(p instanceof PeriodCells.AmbiguousDay a ? a.as(order).orElseThrow() : ((PeriodCells.Day) p).date());
+        }
+        Optional<Frequency> frequency = frequencyOfDates(dates);
+        if (frequency.isEmpty()) {
+            return false;
+        }
+        Period first = Period.containing(frequency.get(), dates.first());
+        Period last = Period.containing(frequency.get(), dates.last());
+        long distinctPeriods = dates.stream().map(d -> Period.containing(frequency.get(), d)).distinct().count();
+        return distinctPeriods == dates.size() && distinctPeriods >= REGULAR_COVERAGE * (first.until(last) + 1);
+    }
+
+    private static String describe(DateOrder order) {
+        return order == DateOrder.MONTH_FIRST ? "month first (MM/DD/YYYY)" : "day first (DD/MM/YYYY)";
+    }
+
+    private static String article(String kind) {
+        return kind.startsWith("a") ? "an " + kind : "a " + kind;
+    }
+
+    private static String spacingMessage(TreeSet<LocalDate> dates) {
+        if (dates.size() < 2) {
+            return "only one distinct date; expected at least two dates to tell the frequency";
+        }
+        return "the dates are unevenly spaced; expected daily, weekly, monthly, quarterly or annual dates";
+    }
+}

@@ -1,0 +1,63 @@
+package org.annalist.ingest;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/** Collects the errors and warnings of one file while it is read. */
+final class ProblemLog {
+
+    /** Beyond this many errors the rest of a hopeless file adds nothing but noise. */
+    private static final int MAX_ERRORS = 50;
+
+    private final String file;
+    private final List<DataProblem> errors = new ArrayList<>();
+    private final List<DataProblem> warnings = new ArrayList<>();
+    private int suppressedErrors;
+
+    ProblemLog(String file) {
+        this.file = file;
+    }
+
+    String file() {
+        return file;
+    }
+
+    void error(int line, int column, String message) {
+        if (errors.size() < MAX_ERRORS) {
+            errors.add(new DataProblem(file, line, column, message));
+        } else {
+            suppressedErrors++;
+        }
+    }
+
+    void warn(int line, int column, String message) {
+        warnings.add(new DataProblem(file, line, column, message));
+    }
+
+    boolean hasErrors() {
+        return !errors.isEmpty();
+    }
+
+    /** Throws the collected errors, if any. */
+    void throwIfErrors() {
+        if (errors.isEmpty()) {
+            return;
+        }
+        List<DataProblem> all = new ArrayList<>(errors);
+        if (suppressedErrors > 0) {
+            all.add(new DataProblem(file, 0, 0, suppressedErrors + " more problems of the same kinds not shown"));
+        }
+        throw new DataProblemException(all);
+    }
+
+    /** Stops reading at once with one problem (the file cannot be read further). */
+    DataProblemException fatal(int line, int column, String message) {
+        error(line, column, message);
+        List<DataProblem> all = new ArrayList<>(errors);
+        return new DataProblemException(all);
+    }
+
+    List<DataProblem> warnings() {
+        return List.copyOf(warnings);
+    }
+}

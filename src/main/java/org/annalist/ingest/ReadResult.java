@@ -1,0 +1,35 @@
+package org.annalist.ingest;
+
+import java.util.List;
+import java.util.Optional;
+import org.annalist.series.Series;
+
+/**
+ * What was read from one file: its series, and the facts about the file that a brief's data
+ * appendix states.
+ *
+ * @param file          the file as the user named it
+ * @param sha256        hex SHA-256 of the file's bytes
+ * @param rowsRead      data rows read (header, titles and notes not counted)
+ * @param layout        {@code wide} (a column per series) or {@code long} (a column naming the series)
+ * @param periodFormat  the period format(s) as written, e.g. {@code YYYY-MM}
+ * @param dateOrder     how {@code a/b/yyyy} dates were read, when the file has them
+ * @param decimalMark   the decimal mark used, when any number has a fraction or grouping
+ * @param aggregation   the aggregation applied, if any
+ * @param warnings      things worth knowing that did not stop the reading
+ */
+public record ReadResult(String file, String sha256, String charset, char delimiter, int rowsRead, String layout,
+                         String periodFormat, Optional<DateOrder> dateOrder, Optional<DecimalMark> decimalMark,
+                         Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings) {
+
+    public ReadResult {
+        series = List.copyOf(series);
+        warnings = List.copyOf(warnings);
+    }
+
+    /** The series named {@code name} (exact, then case-insensitive). */
+    public Optional<Series> find(String name) {
+        return series.stream().filter(s -> s.name().equals(name)).findFirst()
+                .or(() -> series.stream().filter(s -> s.name().equalsIgnoreCase(name)).findFirst());
+    }
+}

@@ -1,0 +1,255 @@
+package org.annalist.ingest;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import org.annalist.ingest.CsvRows.Row;
+import org.annalist.ingest.TableShape.Column;
+import org.annalist.ingest.TableShape.Role;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+import org.annalist.series.SeriesBuilder;
+import org.annalist.series.ValueFlag;
+
+/**
+ * Reads the series in a delimited text file as real exports come: any of the delimiters, encodings,
+ * number and period formats of {@link CsvRows}, {@link NumberCells} and {@link PeriodCells}, in a
+ * wide layout (a column per series) or a long one ({@code period, series, value}).
+ *
+ * <p>Reading goes: bytes → text → rows → table shape → periods → numbers → series (→ aggregation).
+ * Every problem found on the way is collected with its file, line and column; if there is any,
+ * {@link DataProblemException} carries them all.
+ */
+public final class SeriesFileReader {
+
+    private final ReadOptions options;
+
+    public SeriesFileReader(ReadOptions options) {
+        this.options = options;
+    }
+
+    /**
+     * @throws DataProblemException when the file cannot be read or holds no usable series
+     */
+    public ReadResult read(Path file) {
+        String name = file.toString();
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new DataProblemException(new DataProblem(name, 0, 0, "no such file; expected a CSV file"));
+        } catch (IOException e) {
+            throw new DataProblemException(new DataProblem(name, 0, 0, "cannot be read (" + e.getMessage() + ")"));
+        }
+        return read(name, bytes);
+    }
+
+    /** Reads {@code bytes} as the contents of a file called {@code fileName} (used in messages). */
+    public ReadResult read(String fileName, byte[] bytes) {
+        ProblemLog log = new ProblemLog(fileName);
+        TextDecoding.Decoded text = TextDecoding.decode(bytes, log);
+        char delimiter = CsvRows.detectDelimiter(text.text());
+        List<Row> rows = CsvRows.parse(text.text(), delimiter, log);
+        TableShape.Shape shape = TableShape.locate(rows, log);
+        Column periodColumn = shape.periodColumn();
+        List<Column> valueColumns = shape.with(Role.VALUE);
+        if (valueColumns.isEmpty()) {
+            throw log.fatal(shape.body().get(0).line(), 0, "no column holds numbers; expected one or more columns "
+                    + "of values beside the " + (periodColumn.name().isEmpty() ? "period" : "'" + periodColumn.name() + "'")
+                    + " column");
+        }
+        List<PeriodColumn.Cell> periodCells = shape.body().stream()
+                .map(r -> new PeriodColumn.Cell(r.line(), periodColumn.index() + 1, r.cell(periodColumn.index()))).toList();
+        PeriodColumn.Resolved periods = PeriodColumn.resolve(periodCells, options.dateOrder(), log);
+        Optional<DecimalMark> mark = decimalMark(shape, valueColumns, log);
+
+        Map<String, Collector> collectors = new LinkedHashMap<>();
+        List<Column> keys = shape.with(Role.KEY);
+        Optional<Column> unitColumn = shape.with(Role.UNIT).stream().findFirst();
+        Optional<Column> flagColumn = shape.with(Role.FLAG).stream().findFirst();
+        String fallbackName = baseName(fileName);
+        for (int r = 0; r < shape.body().size(); r++) {
+            Row row = shape.body().get(r);
+            Period period = periods.periods().get(r);
+            String key = String.join(" / ", keys.stream().map(k -> row.cell(k.index())).toList());
+            for (Column column : valueColumns) {
+                String seriesName = seriesName(key, column, valueColumns.size(), fallbackName);
+                Collector collector = collectors.computeIfAbsent(seriesName, n -> new Collector(n,
+                        column.unit().isEmpty() ? unitColumn.map(u -> row.cell(u.index())).orElse("") : column.unit()));
+                String cell = row.cell(column.index());
+                StringBuilder why = new StringBuilder();
+                Optional<NumberCells.Cell> value = NumberCells.parse(cell, mark.orElse(DecimalMark.POINT), why);
+                if (value.isEmpty()) {
+                    log.error(row.line(), column.index() + 1, why + "; expected a number (or a missing-value marker "
+                            + "such as NA, -, .. or :) in column '" + column.name() + "'");
+                    continue;
+                }
+                Set<ValueFlag> flags = withFlagColumn(value.get().flags(), flagColumn.map(f -> row.cell(f.index())), row, log,
+                        flagColumn.map(Column::index).orElse(-1));
+                collector.add(period, value.get(), flags, row.line(), column.index() + 1, log);
+            }
+        }
+        log.throwIfErrors();
+
+        List<Series> series = new ArrayList<>();
+        for (Collector collector : collectors.values()) {
+            collector.snapshot(log).ifPresent(series::add);
+        }
+        if (series.isEmpty()) {
+            throw log.fatal(0, 0, "every value is missing; expected at least one number");
+        }
+        if (options.aggregation().isPresent()) {
+            Aggregation to = options.aggregation().get();
+            series = series.stream().map(s -> Aggregator.aggregate(s, to, log)).toList();
+        }
+        log.throwIfErrors();
+        return new ReadResult(fileName, sha256(bytes), text.charset(), delimiter, shape.body().size(),
+                keys.isEmpty() ? "wide" : "long", periods.format(), Optional.ofNullable(periods.dateOrder()), mark,
+                options.aggregation(), series, log.warnings());
+    }
+
+    /** The decimal mark: as set, or as the numbers prove; ambiguous {@code 1,234} reads as thousands, with a warning. */
+    private Optional<DecimalMark> decimalMark(TableShape.Shape shape, List<Column> valueColumns, ProblemLog log) {
+        if (options.decimalMark().isPresent()) {
+            return options.decimalMark();
+        }
+        int[] firstLine = new int[DecimalMark.values().length];
+        int ambiguousLine = 0;
+        String ambiguousCell = null;
+        for (Row row : shape.body()) {
+            for (Column column : valueColumns) {
+                String cell = row.cell(column.index());
+                switch (NumberCells.evidence(cell)) {
+                    case POINT -> firstLine[0] = firstLine[0] == 0 ? row.line() : firstLine[0];
+                    case COMMA -> firstLine[1] = firstLine[1] == 0 ? row.line() : firstLine[1];
+                    case NONE -> {
+                        if (ambiguousCell == null && (cell.contains(",") || cell.contains("."))) {
+                            ambiguousCell = cell;
+                            ambiguousLine = row.line();
+                        }
+                    }
+                }
+            }
+        }
+        if (firstLine[0] > 0 && firstLine[1] > 0) {
+            throw log.fatal(Math.max(firstLine[0], firstLine[1]), 0, "numbers use a decimal point (line " + firstLine[0]
+                    + ") and a decimal comma (line " + firstLine[1] + "); expected one convention per file, "
+                    + "or --decimal-mark point|comma");
+        }
+        if (firstLine[0] > 0) {
+            return Optional.of(DecimalMark.POINT);
+        }
+        if (firstLine[1] > 0) {
+            return Optional.of(DecimalMark.COMMA);
+        }
+        if (ambiguousCell != null) {
+            DecimalMark assumed = ambiguousCell.contains(",") ? DecimalMark.POINT : DecimalMark.COMMA;
+            log.warn(ambiguousLine, 0, "'" + ambiguousCell + "' read as " + (assumed == DecimalMark.POINT
+                    ? "a number with a thousands comma" : "a number with a thousands point")
+                    + ", since no number in the file shows a decimal mark; set --decimal-mark if it is a fraction");
+            return Optional.of(assumed);
+        }
+        return Optional.empty();
+    }
+
+    private static Set<ValueFlag> withFlagColumn(Set<ValueFlag> flags, Optional<String> flagCell, Row row, ProblemLog log,
+                                                 int flagIndex) {
+        if (flagCell.isEmpty() || flagCell.get().isEmpty()) {
+            return flags;
+        }
+        EnumSet<ValueFlag> all = flags.isEmpty() ? EnumSet.noneOf(ValueFlag.class) : EnumSet.copyOf(flags);
+        for (char c : flagCell.get().replaceAll("[\\s,;]", "").toCharArray()) {
+            Optional<ValueFlag> flag = ValueFlag.fromCode(c);
+            if (flag.isEmpty()) {
+                log.error(row.line(), flagIndex + 1, "'" + flagCell.get() + "' is not a flag; expected letters among "
+                        + ValueFlag.knownCodes());
+                return flags;
+            }
+            all.add(flag.get());
+        }
+        return Set.copyOf(all);
+    }
+
+    private static String seriesName(String key, Column column, int valueColumns, String fallback) {
+        boolean unnamed = column.name().isEmpty() || column.name().equalsIgnoreCase("value")
+                || column.name().equalsIgnoreCase("values");
+        String columnName = unnamed ? (valueColumns == 1 ? fallback : "column " + (column.index() + 1)) : column.name();
+        if (key.isEmpty()) {
+            return columnName;
+        }
+        boolean genericValueColumn = valueColumns == 1 || unnamed;
+        return genericValueColumn ? key : key + " \u2014 " + columnName;
+    }
+
+    private static String baseName(String fileName) {
+        String base = Path.of(fileName).getFileName().toString();
+        int dot = base.lastIndexOf('.');
+        return dot > 0 ? base.substring(0, dot) : base;
+    }
+
+    private static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java platform has SHA-256", e);
+        }
+    }
+
+    /** The values of one series as they are met in the file, checked for repeated periods. */
+    private static final class Collector {
+        private final String name;
+        private final String unit;
+        private final Map<Period, Integer> lineOf = new LinkedHashMap<>();
+        private SeriesBuilder builder;
+        private Period previous;
+        private int firstOutOfOrderLine;
+        private boolean percent;
+        private boolean anyValue;
+
+        Collector(String name, String unit) {
+            this.name = name;
+            this.unit = unit;
+        }
+
+        void add(Period period, NumberCells.Cell cell, Set<ValueFlag> flags, int line, int column, ProblemLog log) {
+            Integer earlier = lineOf.putIfAbsent(period, line);
+            if (earlier != null) {
+                log.error(line, column, "period " + period + " appears again for series '" + name + "' (first on line "
+                        + earlier + "); expected one row per period");
+                return;
+            }
+            if (previous != null && period.compareTo(previous) < 0 && firstOutOfOrderLine == 0) {
+                firstOutOfOrderLine = line;
+            }
+            previous = period;
+            percent |= cell.percent();
+            anyValue |= !Double.isNaN(cell.value());
+            if (builder == null) {
+                builder = Series.builder(name, period.frequency());
+            }
+            builder.put(period, cell.value(), flags);
+        }
+
+        Optional<Series> snapshot(ProblemLog log) {
+            if (!anyValue) {
+                log.warn(0, 0, "series '" + name + "' has no values and was left out");
+                return Optional.empty();
+            }
+            if (firstOutOfOrderLine > 0) {
+                log.warn(firstOutOfOrderLine, 0, "rows of series '" + name + "' are not in time order; sorted them");
+            }
+            return Optional.of(builder.unit(unit.isEmpty() && percent ? "%" : unit).snapshot());
+        }
+    }
+}

@@ -1,0 +1,159 @@
+package org.annalist.ingest;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.annalist.ingest.CsvRows.Row;
+
+/**
+ * Finds the table inside a file's rows: the period column, the header row (if any), the data rows,
+ * and what each other column holds (values, the names of series in a long layout, units, flags).
+ * Title lines above the header and notes below the data are set aside with a warning.
+ */
+final class TableShape {
+
+    enum Role { PERIOD, VALUE, KEY, UNIT, FLAG, EMPTY }
+
+    /** A column with its role and its name (header text, without a unit in brackets). */
+    record Column(int index, Role role, String name, String unit) {
+    }
+
+    record Shape(Optional<Row> header, List<Row> body, List<Column> columns) {
+
+        Column periodColumn() {
+            return columns.stream().filter(c -> c.role() == Role.PERIOD).findFirst().orElseThrow();
+        }
+
+        List<Column> with(Role role) {
+            return columns.stream().filter(c -> c.role() == role).toList();
+        }
+    }
+
+    private static final Pattern PERIOD_HEADER = Pattern.compile(
+            "(?i).*(date|period|month|year|quarter|week|day|time|jahr|datum|monat|mois|ann[ée]e|fecha|periodo|mes|tid).*");
+    private static final Pattern UNIT_HEADER = Pattern.compile("(?i)units?|unit of measure|unit_measure|einheit|unité");
+    private static final Pattern FLAG_HEADER = Pattern.compile("(?i)flags?|obs_flag|obs_status|status|note|footnote");
+    private static final Pattern UNIT_IN_HEADER = Pattern.compile("(.*?)\\s*[(\\[]([^()\\[\\]]+)[)\\]]\\s*");
+
+    private TableShape() {
+    }
+
+    static Shape locate(List<Row> allRows, ProblemLog log) {
+        List<Row> rows = allRows.stream().filter(r -> !r.isBlank()).toList();
+        if (rows.isEmpty()) {
+            throw log.fatal(0, 0, "the file is empty; expected a header row and rows of dates or periods with values");
+        }
+        int width = rows.stream().mapToInt(TableShape::effectiveWidth).max().orElse(0);
+        int periodColumn = findPeriodColumn(rows, width, log);
+        int firstData = -1;
+        int lastData = -1;
+        for (int r = 0; r < rows.size(); r++) {
+            if (PeriodCells.parse(rows.get(r).cell(periodColumn)).isPresent()) {
+                firstData = firstData < 0 ? r : firstData;
+                lastData = r;
+            }
+        }
+        Optional<Row> header = Optional.empty();
+        if (firstData > 0) {
+            header = Optional.of(rows.get(firstData - 1));
+            for (Row title : rows.subList(0, firstData - 1)) {
+                log.warn(title.line(), 0, "line set aside as a title above the header: '" + preview(title) + "'");
+            }
+        }
+        for (Row note : rows.subList(lastData + 1, rows.size())) {
+            log.warn(note.line(), 0, "line set aside as a note below the data: '" + preview(note) + "'");
+        }
+        List<Row> body = rows.subList(firstData, lastData + 1);
+        if (header.isPresent() && effectiveWidth(header.get()) > width) {
+            width = effectiveWidth(header.get());
+        }
+        return new Shape(header, List.copyOf(body), classify(header, body, width, periodColumn));
+    }
+
+    private static int findPeriodColumn(List<Row> rows, int width, ProblemLog log) {
+        int best = -1;
+        double bestScore = 0;
+        for (int c = 0; c < width; c++) {
+            int parsed = 0;
+            for (Row row : rows) {
+                if (PeriodCells.parse(row.cell(c)).isPresent()) {
+                    parsed++;
+                }
+            }
+            // A named date column wins a near tie; otherwise the leftmost column with the most periods.
+            boolean named = PERIOD_HEADER.matcher(rows.get(0).cell(c)).matches();
+            double score = parsed + (named && parsed > 0 ? 0.5 : 0);
+            if (score > bestScore) {
+                best = c;
+                bestScore = score;
+            }
+        }
+        if (best < 0) {
+            Row first = rows.get(0);
+            throw log.fatal(first.line(), 0, rows.size() == 1
+                    ? "the file has a header but no data rows; expected rows of dates or periods with values below it"
+                    : "no column holds dates or periods; expected one column with values such as 2024-03, "
+                            + "Mar 2024, 2024-Q1, 2024-03-01 or 2024");
+        }
+        return best;
+    }
+
+    private static List<Column> classify(Optional<Row> header, List<Row> body, int width, int periodColumn) {
+        List<Column> columns = new ArrayList<>();
+        for (int c = 0; c < width; c++) {
+            int index = c;
+            String title = header.map(h -> h.cell(index)).orElse("");
+            if (c == periodColumn) {
+                columns.add(new Column(c, Role.PERIOD, title, ""));
+                continue;
+            }
+            int numeric = 0;
+            int text = 0;
+            for (Row row : body) {
+                String cell = row.cell(c);
+                if (NumberCells.isMissingMarker(cell)) {
+                    continue;
+                }
+                if (NumberCells.looksNumeric(cell)) {
+                    numeric++;
+                } else {
+                    text++;
+                }
+            }
+            Role role;
+            if (numeric == 0 && text == 0) {
+                role = title.isEmpty() ? Role.EMPTY : Role.VALUE;
+            } else if (UNIT_HEADER.matcher(title).matches() && text > 0) {
+                role = Role.UNIT;
+            } else if (FLAG_HEADER.matcher(title).matches() && numeric == 0) {
+                role = Role.FLAG;
+            } else {
+                role = text > numeric ? Role.KEY : Role.VALUE;
+            }
+            Matcher unit = UNIT_IN_HEADER.matcher(title);
+            if (role == Role.VALUE && unit.matches() && !unit.group(1).isEmpty()) {
+                columns.add(new Column(c, role, unit.group(1), unit.group(2).trim()));
+            } else {
+                columns.add(new Column(c, role, title, ""));
+            }
+        }
+        return List.copyOf(columns);
+    }
+
+    /** Number of cells up to the last non-empty one: trailing delimiters do not make a column. */
+    static int effectiveWidth(Row row) {
+        for (int c = row.cells().size() - 1; c >= 0; c--) {
+            if (!row.cells().get(c).isEmpty()) {
+                return c + 1;
+            }
+        }
+        return 0;
+    }
+
+    private static String preview(Row row) {
+        String text = String.join(" ", row.cells().stream().filter(s -> !s.isEmpty()).toList());
+        return text.length() > 60 ? text.substring(0, 57) + "..." : text;
+    }
+}
