@@ -1,5 +1,71 @@
 package org.annalist.cli;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.annalist.brief.BriefPipeline;
+import org.annalist.brief.BriefRequest;
 import picocli.CommandLine.Command;
-@Command(name = "brief")
-final class BriefCommand implements Callable<Integer> { public Integer call() { return 0; } }
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code annalist brief FILE}: the PDF brief of one series. */
+@Command(name = "brief", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Write the PDF brief of one series in FILE.")
+final class BriefCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated).")
+    Path file;
+
+    @Option(names = "--series", paramLabel = "NAME", description = "The series to brief, when FILE holds several.")
+    String series;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "OUT.pdf",
+            description = "Where to write the PDF. Default: FILE's name (and the series') with .pdf, in the current folder.")
+    Path output;
+
+    @Option(names = "--title", paramLabel = "TEXT", description = "Title of the brief. Default: the series name.")
+    String title = "";
+
+    @Option(names = "--organisation", paramLabel = "TEXT", description = "Organisation named on the brief.")
+    String organisation = "";
+
+    @Option(names = "--templates", paramLabel = "DIR",
+            description = "A folder of templates (brief.ftlx, brief.css) that replace the bundled ones.")
+    Path templates;
+
+    @Mixin
+    ReadOptionsMixin readOptions;
+
+    @Mixin
+    DebugOption debug;
+
+    @Override
+    public Integer call() {
+        Path target = output != null ? output : Path.of(defaultName(file, series));
+        BriefRequest request = new BriefRequest(file, readOptions.toReadOptions(), Optional.ofNullable(series), target,
+                title, organisation, Optional.ofNullable(templates), Instant.now());
+        BriefPipeline.Brief brief = new BriefPipeline().make(request);
+        spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series() + ")");
+        return Main.EXIT_OK;
+    }
+
+    static String defaultName(Path input, String series) {
+        String base = input.getFileName().toString().replaceFirst("\\.[^.]+$", "");
+        return slug(series == null ? base : base + "-" + series) + ".pdf";
+    }
+
+    /** A file-name-safe form: lower case, letters and digits, single dashes. */
+    static String slug(String text) {
+        String slug = text.toLowerCase(Locale.ROOT).replaceAll("[^\\p{L}\\p{N}]+", "-").replaceAll("(^-|-$)", "");
+        return slug.isEmpty() ? "brief" : slug;
+    }
+}

@@ -2,8 +2,10 @@ package org.annalist.cli;
 
 import java.io.PrintWriter;
 import java.util.Locale;
+import org.annalist.brief.BriefPipeline;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.DataProblemException;
+import org.annalist.narrative.TemplateEngine;
 import picocli.CommandLine;
 
 /**
@@ -55,8 +57,9 @@ public final class Main {
             }
             return EXIT_BAD_INPUT;
         }
-        if (e instanceof UserInputException user) {
-            err.println("annalist: " + user.getMessage());
+        if (e instanceof UserInputException || e instanceof BriefPipeline.SeriesChoiceException
+                || e instanceof TemplateEngine.TemplateProblem) {
+            err.println("annalist: " + e.getMessage());
             return EXIT_BAD_INPUT;
         }
         err.println("annalist: internal error: " + e + (debug(parsed) ? "" : " (run with --debug for details)"));

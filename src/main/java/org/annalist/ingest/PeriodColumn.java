@@ -25,7 +25,8 @@ final class PeriodColumn {
     }
 
     /**
-     * @param periods   the period of each cell, in the order given (null where the cell was unusable)
+     * @param periods   the period of each cell, in the order given (null where the cell was unusable, which
+     *                  the log reports as an error)
      * @param format    the format as written, e.g. {@code YYYY-MM}
      * @param dateOrder how {@code a/b/yyyy} dates were read, or null when there were none
      */
@@ -50,32 +51,33 @@ final class PeriodColumn {
         }
         String format = parsed.stream().filter(p -> p != null).map(PeriodCells.Parsed::format).distinct()
                 .collect(Collectors.joining(", "));
-        rejectMixedKinds(cells, parsed, log);
-        log.throwIfErrors();
-
-        boolean dated = parsed.stream().anyMatch(p -> !(p instanceof PeriodCells.Fixed));
+        dropMixedKinds(cells, parsed, log);
+        if (parsed.stream().allMatch(p -> p == null)) {
+            log.throwIfErrors();
+        }
+        boolean dated = parsed.stream().anyMatch(p -> p != null && !(p instanceof PeriodCells.Fixed));
         if (!dated) {
-            List<Period> periods = parsed.stream().map(p -> ((PeriodCells.Fixed) p).period()).toList();
-            return new Resolved(periods, periods.get(0).frequency(), format, null);
+            List<Period> periods = parsed.stream().map(p -> p == null ? null : ((PeriodCells.Fixed) p).period()).toList();
+            Frequency frequency = periods.stream().filter(p -> p != null).findFirst().orElseThrow().frequency();
+            return new Resolved(periods, frequency, format, null);
         }
         DateOrder order = parsed.stream().anyMatch(p -> p instanceof PeriodCells.AmbiguousDay)
                 ? settleOrder(cells, parsed, requestedOrder, log) : null;
         List<LocalDate> dates = new ArrayList<>(cells.size());
         for (int i = 0; i < cells.size(); i++) {
             PeriodCells.Parsed p = parsed.get(i);
-            Optional<LocalDate> date = p instanceof PeriodCells.AmbiguousDay a ? a.as(order)
-                    : Optional.of(((PeriodCells.Day) p).date());
-            if (date.isEmpty()) {
+            Optional<LocalDate> date = p == null ? Optional.empty()
+                    : p instanceof PeriodCells.AmbiguousDay a ? a.as(order) : Optional.of(((PeriodCells.Day) p).date());
+            if (p != null && date.isEmpty()) {
                 log.error(cells.get(i).line(), cells.get(i).column(), "'" + cells.get(i).text()
                         + "' is not a date when read " + describe(order) + "; expected the same day/month order in every row");
             }
             dates.add(date.orElse(null));
         }
-        log.throwIfErrors();
-        TreeSet<LocalDate> distinct = new TreeSet<>(dates);
+        TreeSet<LocalDate> distinct = dates.stream().filter(d -> d != null).collect(Collectors.toCollection(TreeSet::new));
         Frequency frequency = frequencyOfDates(distinct).orElseThrow(() -> log.fatal(cells.get(0).line(), cells.get(0).column(),
                 spacingMessage(distinct)));
-        List<Period> periods = dates.stream().map(d -> Period.containing(frequency, d)).toList();
+        List<Period> periods = dates.stream().map(d -> d == null ? null : Period.containing(frequency, d)).toList();
         return new Resolved(periods, frequency, format, order);
     }
 
@@ -116,7 +118,8 @@ final class PeriodColumn {
         return Optional.empty();
     }
 
-    private static void rejectMixedKinds(List<Cell> cells, List<PeriodCells.Parsed> parsed, ProblemLog log) {
+    /** Reports the rows whose frequency differs from most rows' and sets them aside (null). */
+    private static void dropMixedKinds(List<Cell> cells, List<PeriodCells.Parsed> parsed, ProblemLog log) {
         Map<String, List<Integer>> byKind = new java.util.LinkedHashMap<>();
         for (int i = 0; i < parsed.size(); i++) {
             PeriodCells.Parsed p = parsed.get(i);
@@ -132,7 +135,8 @@ final class PeriodColumn {
                 .orElseThrow().getKey();
         byKind.forEach((kind, rows) -> {
             if (!kind.equals(majority)) {
-                for (int i : rows.subList(0, Math.min(rows.size(), 10))) {
+                for (int i : rows) {
+                    parsed.set(i, null);
                     log.error(cells.get(i).line(), cells.get(i).column(), "mixed frequencies: '" + cells.get(i).text()
                             + "' is " + article(kind) + " period while most rows are " + majority
                             + "; expected one frequency per file");
@@ -187,6 +191,9 @@ final class PeriodColumn {
     private static boolean regular(List<PeriodCells.Parsed> parsed, DateOrder order) {
         TreeSet<LocalDate> dates = new TreeSet<>();
         for (PeriodCells.Parsed p : parsed) {
+            if (p == null) {
+                continue;
+            }
             dates.add(p instanceof PeriodCells.AmbiguousDay a ? a.as(order).orElseThrow() : ((PeriodCells.Day) p).date());
         }
         Optional<Frequency> frequency = frequencyOfDates(dates);

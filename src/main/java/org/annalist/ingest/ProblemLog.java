@@ -1,6 +1,7 @@
 package org.annalist.ingest;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 
 /** Collects the errors and warnings of one file while it is read. */
@@ -44,6 +45,7 @@ final class ProblemLog {
             return;
         }
         List<DataProblem> all = new ArrayList<>(errors);
+        all.sort(Comparator.comparingInt(DataProblem::line).thenComparingInt(DataProblem::column));
         if (suppressedErrors > 0) {
             all.add(new DataProblem(file, 0, 0, suppressedErrors + " more problems of the same kinds not shown"));
         }

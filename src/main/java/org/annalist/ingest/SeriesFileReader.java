@@ -82,11 +82,17 @@ public final class SeriesFileReader {
         for (int r = 0; r < shape.body().size(); r++) {
             Row row = shape.body().get(r);
             Period period = periods.periods().get(r);
+            if (period == null) {
+                continue;   // already reported
+            }
             String key = String.join(" / ", keys.stream().map(k -> row.cell(k.index())).toList());
             for (Column column : valueColumns) {
                 String seriesName = seriesName(key, column, valueColumns.size(), fallbackName);
                 Collector collector = collectors.computeIfAbsent(seriesName, n -> new Collector(n,
                         column.unit().isEmpty() ? unitColumn.map(u -> row.cell(u.index())).orElse("") : column.unit()));
+                if (!collector.claim(period, row.line(), column.index() + 1, log)) {
+                    continue;
+                }
                 String cell = row.cell(column.index());
                 StringBuilder why = new StringBuilder();
                 Optional<NumberCells.Cell> value = NumberCells.parse(cell, mark.orElse(DecimalMark.POINT), why);
@@ -97,7 +103,7 @@ public final class SeriesFileReader {
                 }
                 Set<ValueFlag> flags = withFlagColumn(value.get().flags(), flagColumn.map(f -> row.cell(f.index())), row, log,
                         flagColumn.map(Column::index).orElse(-1));
-                collector.add(period, value.get(), flags, row.line(), column.index() + 1, log);
+                collector.add(period, value.get(), flags, row.line());
             }
         }
         log.throwIfErrors();
@@ -222,13 +228,18 @@ public final class SeriesFileReader {
             this.unit = unit;
         }
 
-        void add(Period period, NumberCells.Cell cell, Set<ValueFlag> flags, int line, int column, ProblemLog log) {
+        /** Records that {@code line} holds {@code period}; false (and an error) when an earlier line did. */
+        boolean claim(Period period, int line, int column, ProblemLog log) {
             Integer earlier = lineOf.putIfAbsent(period, line);
             if (earlier != null) {
                 log.error(line, column, "period " + period + " appears again for series '" + name + "' (first on line "
                         + earlier + "); expected one row per period");
-                return;
+                return false;
             }
+            return true;
+        }
+
+        void add(Period period, NumberCells.Cell cell, Set<ValueFlag> flags, int line) {
             if (previous != null && period.compareTo(previous) < 0 && firstOutOfOrderLine == 0) {
                 firstOutOfOrderLine = line;
             }

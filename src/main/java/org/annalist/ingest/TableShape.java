@@ -55,6 +55,9 @@ final class TableShape {
                 lastData = r;
             }
         }
+        while (lastData + 1 < rows.size() && !isNote(rows.get(lastData + 1), periodColumn)) {
+            lastData++;   // a data row with a bad period: kept, so that it is reported rather than skipped
+        }
         Optional<Row> header = Optional.empty();
         if (firstData > 0) {
             header = Optional.of(rows.get(firstData - 1));
@@ -140,6 +143,16 @@ final class TableShape {
             }
         }
         return List.copyOf(columns);
+    }
+
+    /**
+     * A row below the data that reads as a footnote or total rather than a data row with a mistyped
+     * period: its period cell is empty or starts with a letter other than the Q of a quarter.
+     */
+    private static boolean isNote(Row row, int periodColumn) {
+        String cell = row.cell(periodColumn);
+        return cell.isEmpty() || (Character.isLetter(cell.charAt(0)) && !cell.matches("(?i)q[1-4].*")
+                && PeriodCells.parse(cell).isEmpty());
     }
 
     /** Number of cells up to the last non-empty one: trailing delimiters do not make a column. */

@@ -1,0 +1,111 @@
+package org.annalist.brief;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Locale;
+import org.annalist.chart.Figure;
+import org.annalist.chart.OverviewChart;
+import org.annalist.findings.Analyst;
+import org.annalist.findings.Findings;
+import org.annalist.findings.SourceFacts;
+import org.annalist.ingest.DataProblem;
+import org.annalist.ingest.ReadResult;
+import org.annalist.ingest.SeriesFileReader;
+import org.annalist.narrative.BriefView;
+import org.annalist.narrative.BriefViews;
+import org.annalist.narrative.Masthead;
+import org.annalist.narrative.TemplateEngine;
+import org.annalist.render.AtomicFiles;
+import org.annalist.render.Fonts;
+import org.annalist.render.PdfRenderer;
+import org.annalist.series.Series;
+
+/** Makes a brief: read → analyse → chart and narrative → PDF, written atomically. */
+public final class BriefPipeline {
+
+    private final Analyst analyst = new Analyst();
+    private final PdfRenderer renderer = new PdfRenderer();
+
+    /**
+     * @throws org.annalist.ingest.DataProblemException when the file cannot be used
+     * @throws SeriesChoiceException when the series asked for is not in the file, or none was named
+     *                               in a file of several
+     */
+    public Brief make(BriefRequest request) {
+        ReadResult read = new SeriesFileReader(request.readOptions()).read(request.input());
+        return make(request, read, choose(read, request));
+    }
+
+    /** Makes the brief of {@code series}, one of the series already read from {@code read}. */
+    public Brief make(BriefRequest request, ReadResult read, Series series) {
+        Fonts.registerWithAwt();
+        Findings findings = analyst.analyse(series);
+        Figure overview = OverviewChart.of(series, findings.smoothing());
+        Masthead masthead = new Masthead(request.title(), request.organisation(), Locale.ENGLISH,
+                request.generatedAt(), "Annalist " + Version.current());
+        BriefView view = BriefViews.of(series, findings, sourceFacts(read), masthead);
+        String xhtml = new TemplateEngine(request.templates()).render(TemplateEngine.BRIEF_TEMPLATE, view);
+        byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
+                List.of(overview), request.generatedAt(), documentId(read.sha256(), series.name()));
+        try {
+            AtomicFiles.write(request.output(), pdf);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + request.output(), e);
+        }
+        return new Brief(request.output(), series.name(), findings);
+    }
+
+    /** The brief made: where it is and what it found. */
+    public record Brief(java.nio.file.Path file, String series, Findings findings) {
+    }
+
+    static SourceFacts sourceFacts(ReadResult read) {
+        StringBuilder reading = new StringBuilder();
+        reading.append(read.charset()).append(", ").append(switch (read.delimiter()) {
+            case '\t' -> "tab";
+            case ';' -> "semicolon";
+            case '|' -> "bar";
+            default -> "comma";
+        }).append("-separated, ").append(read.layout()).append(" layout, periods written ").append(read.periodFormat());
+        read.dateOrder().ifPresent(o -> reading.append(", dates read ").append(o.name().toLowerCase(Locale.ROOT).replace('_', '-')));
+        read.decimalMark().ifPresent(m -> reading.append(", decimal ").append(m.name().toLowerCase(Locale.ROOT)));
+        read.aggregation().ifPresent(a -> reading.append("; aggregated to ").append(a.target()).append(" by ")
+                .append(a.method().label()));
+        return new SourceFacts(java.nio.file.Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading.toString(),
+                read.warnings().stream().map(DataProblem::toString).toList());
+    }
+
+    private static Series choose(ReadResult read, BriefRequest request) {
+        if (request.series().isPresent()) {
+            return read.find(request.series().get()).orElseThrow(() -> new SeriesChoiceException(read.file()
+                    + ": no series named '" + request.series().get() + "'; expected one of " + names(read)));
+        }
+        if (read.series().size() > 1) {
+            throw new SeriesChoiceException(read.file() + " holds " + read.series().size() + " series; expected --series "
+                    + "with one of " + names(read));
+        }
+        return read.series().get(0);
+    }
+
+    private static String names(ReadResult read) {
+        return String.join(", ", read.series().stream().map(s -> "'" + s.name() + "'").toList());
+    }
+
+    /** The same input always gets the same PDF trailer ID, so that equal briefs are equal files. */
+    private static long documentId(String sha256, String seriesName) {
+        byte[] digest = HexFormat.of().parseHex(sha256);
+        return ByteBuffer.wrap(digest).getLong() ^ seriesName.hashCode();
+    }
+
+    /** The user named a series the file does not hold (or none, where the file holds several). */
+    public static final class SeriesChoiceException extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        SeriesChoiceException(String message) {
+            super(message);
+        }
+    }
+}

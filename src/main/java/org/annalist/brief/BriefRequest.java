@@ -1,0 +1,30 @@
+package org.annalist.brief;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.Objects;
+import java.util.Optional;
+import org.annalist.ingest.ReadOptions;
+
+/**
+ * One brief to make.
+ *
+ * @param series      the series to brief; may be empty when the file holds only one
+ * @param title       empty to title the brief with the series name
+ * @param templates   a folder of templates that override the bundled ones
+ * @param generatedAt the time the brief states as made (pinned for reproducible output)
+ */
+public record BriefRequest(Path input, ReadOptions readOptions, Optional<String> series, Path output, String title,
+                           String organisation, Optional<Path> templates, Instant generatedAt) {
+
+    public BriefRequest {
+        Objects.requireNonNull(input, "input");
+        Objects.requireNonNull(readOptions, "readOptions");
+        Objects.requireNonNull(series, "series");
+        Objects.requireNonNull(output, "output");
+        Objects.requireNonNull(title, "title");
+        Objects.requireNonNull(organisation, "organisation");
+        Objects.requireNonNull(templates, "templates");
+        Objects.requireNonNull(generatedAt, "generatedAt");
+    }
+}

@@ -1,0 +1,98 @@
+package org.annalist.chart;
+
+import java.awt.Color;
+import java.awt.geom.Ellipse2D;
+import java.text.SimpleDateFormat;
+import java.time.ZoneOffset;
+import java.util.Locale;
+import java.util.TimeZone;
+import org.annalist.findings.Smoothing;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+import org.jfree.chart.ChartFactory;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.DateAxis;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.block.BlockBorder;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.LegendTitle;
+import org.jfree.chart.ui.RectangleEdge;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/** The series over its whole span with its trend-cycle line. */
+public final class OverviewChart {
+
+    private static final TimeZone UTC = TimeZone.getTimeZone(ZoneOffset.UTC);
+
+    private OverviewChart() {
+    }
+
+    public static Figure of(Series series, Smoothing smoothing) {
+        ChartStyle.install();
+        XYSeriesCollection data = new XYSeriesCollection();
+        XYSeries observed = new XYSeries("Observed", false, true);
+        for (int i = 0; i < series.size(); i++) {
+            observed.add(midpointMillis(series.period(i)), series.isMissing(i) ? null : series.value(i));
+        }
+        data.addSeries(observed);
+        if (smoothing != null) {
+            XYSeries trend = new XYSeries("Trend-cycle (" + smoothing.method() + ")", false, true);
+            double[] values = smoothing.trendCycle();
+            for (int i = 0; i < values.length; i++) {
+                trend.add(midpointMillis(series.period(i)), Double.isNaN(values[i]) ? null : values[i]);
+            }
+            data.addSeries(trend);
+        }
+        JFreeChart chart = ChartFactory.createXYLineChart(null, null, series.unit().isEmpty() ? null : series.unit(),
+                data);
+        XYPlot plot = chart.getXYPlot();
+        DateAxis time = new DateAxis(null, UTC, Locale.ROOT);
+        time.setDateFormatOverride(dateFormat(series.frequency()));
+        time.setLowerMargin(0.01);
+        time.setUpperMargin(0.01);
+        plot.setDomainAxis(time);
+        NumberAxis values = (NumberAxis) plot.getRangeAxis();
+        values.setAutoRangeIncludesZero(false);
+        values.setNumberFormatOverride(NumberFormats.axis());
+        plot.setOutlineVisible(false);
+        plot.setDomainGridlinesVisible(false);
+
+        ChartFactory.getChartTheme().apply(chart);   // the replaced axis takes the theme's fonts
+        plot.setRangeGridlineStroke(new java.awt.BasicStroke(0.5f));
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setDrawSeriesLineAsPath(true);   // one path per series instead of a stroke per segment
+        renderer.setSeriesPaint(0, ChartStyle.INK);
+        renderer.setSeriesStroke(0, ChartStyle.OBSERVED_STROKE);
+        renderer.setSeriesPaint(1, ChartStyle.ACCENT);
+        renderer.setSeriesStroke(1, ChartStyle.TREND_STROKE);
+        if (series.size() <= 60) {
+            renderer.setSeriesShapesVisible(0, true);
+            renderer.setSeriesShape(0, new Ellipse2D.Double(-2, -2, 4, 4));
+        }
+        plot.setRenderer(renderer);
+        LegendTitle legend = chart.getLegend();
+        legend.setPosition(RectangleEdge.TOP);
+        legend.setFrame(BlockBorder.NONE);
+        legend.setBackgroundPaint(Color.WHITE);
+
+        return new Figure("overview", chart);
+    }
+
+    /** Plotting each period at its middle keeps months of different lengths evenly placed. */
+    static double midpointMillis(Period period) {
+        long start = period.startDate().atStartOfDay(ZoneOffset.UTC).toInstant().toEpochMilli();
+        long end = period.endDate().plusDays(1).atStartOfDay(ZoneOffset.UTC).toInstant().toEpochMilli();
+        return (start + end) / 2.0;
+    }
+
+    private static SimpleDateFormat dateFormat(Frequency frequency) {
+        SimpleDateFormat format = new SimpleDateFormat(
+                frequency == Frequency.DAILY || frequency == Frequency.BUSINESS_DAILY || frequency == Frequency.WEEKLY
+                        ? "d MMM yyyy" : "yyyy", Locale.ENGLISH);
+        format.setTimeZone(UTC);
+        return format;
+    }
+}
