@@ -1,5 +1,76 @@
 package org.annalist.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.annalist.brief.BriefPipeline;
+import org.annalist.brief.BriefRequest;
+import org.annalist.ingest.Aggregation;
+import org.annalist.ingest.ReadOptions;
+import org.annalist.series.Frequency;
 import picocli.CommandLine.Command;
-@Command(name = "demo")
-final class DemoCommand implements Callable<Integer> { public Integer call() { return 0; } }
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code annalist demo}: the briefs of the invented Quennelmark scenario, from {@code demo-data/} into {@code out/}. */
+@Command(name = "demo", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Make the demo briefs from the invented data in demo-data/ and write them to out/.")
+final class DemoCommand implements Callable<Integer> {
+
+    private static final String ORGANISATION = "Quennelmark Visitor Board (invented demo)";
+
+    /** One demo brief: which file and series, how to read it, its title and output name. */
+    private record DemoBrief(String file, String series, ReadOptions options, String title, String output) {
+    }
+
+    private static final List<DemoBrief> BRIEFS = List.of(
+            new DemoBrief("quennelmark-guest-nights.csv", "Total", ReadOptions.defaults(),
+                    "Guest nights in Quennelmark", "guest-nights-total.pdf"),
+            new DemoBrief("quennelmark-guest-nights.csv", "Domestic", ReadOptions.defaults(),
+                    "Guest nights from the home market", "guest-nights-domestic.pdf"),
+            new DemoBrief("quennelmark-guest-nights.csv", "Brevania", ReadOptions.defaults(),
+                    "Guest nights from Brevania", "guest-nights-brevania.pdf"),
+            new DemoBrief("quennelmark-guest-nights.csv", "Long-haul", ReadOptions.defaults(),
+                    "Guest nights from long-haul markets", "guest-nights-long-haul.pdf"),
+            new DemoBrief("quennelmark-arrivals.csv", "Total", ReadOptions.defaults(),
+                    "Guest arrivals in Quennelmark", "arrivals-total.pdf"),
+            new DemoBrief("glassworks-daily-visitors.csv", "Visitors",
+                    ReadOptions.defaults().withAggregation(new Aggregation(Frequency.MONTHLY, Aggregation.Method.SUM)),
+                    "Glassworks Museum visitors by month", "glassworks-visitors-monthly.pdf"));
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = "--data", paramLabel = "DIR", description = "Folder of the demo data. Default: demo-data.")
+    Path data = Path.of("demo-data");
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Folder for the briefs. Default: out.")
+    Path out = Path.of("out");
+
+    @Mixin
+    DebugOption debug;
+
+    @Override
+    public Integer call() {
+        if (!Files.isDirectory(data)) {
+            throw new UserInputException(data + ": no such folder; expected the demo-data folder of the Annalist "
+                    + "repository (run from its top folder, or pass --data DIR)");
+        }
+        PrintWriter console = spec.commandLine().getOut();
+        BriefPipeline pipeline = new BriefPipeline();
+        Instant now = Instant.now();
+        for (DemoBrief demo : BRIEFS) {
+            BriefRequest request = new BriefRequest(data.resolve(demo.file()), demo.options(), Optional.of(demo.series()),
+                    out.resolve(demo.output()), demo.title(), ORGANISATION, Optional.empty(), now);
+            BriefPipeline.Brief brief = pipeline.make(request);
+            console.println("wrote " + brief.file());
+        }
+        return Main.EXIT_OK;
+    }
+}

@@ -89,7 +89,7 @@ public final class SeriesFileReader {
             for (Column column : valueColumns) {
                 String seriesName = seriesName(key, column, valueColumns.size(), fallbackName);
                 Collector collector = collectors.computeIfAbsent(seriesName, n -> new Collector(n,
-                        column.unit().isEmpty() ? unitColumn.map(u -> row.cell(u.index())).orElse("") : column.unit()));
+                        unitOf(column, unitColumn.map(u -> row.cell(u.index())), !keys.isEmpty())));
                 if (!collector.claim(period, row.line(), column.index() + 1, log)) {
                     continue;
                 }
@@ -185,6 +185,22 @@ public final class SeriesFileReader {
             all.add(flag.get());
         }
         return Set.copyOf(all);
+    }
+
+    /**
+     * The unit: from the header's brackets ({@code Nights (thousands)}), else a unit column, else, in a
+     * long layout, the value column's own name ({@code arrivals}), which there names the measure.
+     */
+    private static String unitOf(Column column, Optional<String> unitCell, boolean longLayout) {
+        if (!column.unit().isEmpty()) {
+            return column.unit();
+        }
+        if (unitCell.isPresent()) {
+            return unitCell.get();
+        }
+        boolean named = !column.name().isEmpty() && !column.name().equalsIgnoreCase("value")
+                && !column.name().equalsIgnoreCase("values");
+        return longLayout && named ? column.name() : "";
     }
 
     private static String seriesName(String key, Column column, int valueColumns, String fallback) {
