@@ -28,7 +28,7 @@ final class NumberCells {
             ":", "x", "#n/a", "#value!", "#div/0!");
     private static final String GROUPING_SPACES = " \u00A0\u202F\u2007";
     private static final Pattern NUMBER = Pattern.compile(
-            "([+\\-\u2212]?)([0-9][0-9.,'\u2019" + GROUPING_SPACES + "]*)(%?)[ ]*([A-Za-z]{0,3})");
+            "([+\\-\u2212]?)([0-9](?:[0-9.,'\u2019" + GROUPING_SPACES + "]*[0-9])?[.,]?)(%?)[ ]*([A-Za-z]{0,3})");
     private static final Pattern MISSING_WITH_FLAGS = Pattern.compile("(.*?)[ ]*([A-Za-z]{1,3})");
 
     private NumberCells() {
