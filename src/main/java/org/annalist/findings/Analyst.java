@@ -43,6 +43,7 @@ public final class Analyst {
             }
             recent.add(new RecentPeriod(series.period(i),
                     series.isMissing(i) ? null : series.value(i),
+                    series.period(i).plus(-YearOnYear.lag(series.frequency())),
                     earlier < 0 || series.isMissing(earlier) ? null : series.value(earlier),
                     change.map(YearOnYear.Change::absolute).orElse(null),
                     change.map(YearOnYear.Change::percent).filter(p -> !p.isNaN()).orElse(null),

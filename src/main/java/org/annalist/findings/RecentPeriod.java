@@ -8,11 +8,13 @@ import org.annalist.series.Period;
  * One row of the table of latest periods.
  *
  * @param value       {@code null} when missing
- * @param yearEarlier value of the same period a year before; {@code null} when unknown
+ * @param yearEarlierPeriod the same period a year before
+ * @param yearEarlier value of that period; {@code null} when unknown
  * @param changePct   year-on-year change in %; {@code null} when it cannot be computed
  * @param flags       the publisher's flags on either value (e.g. {@code provisional})
  */
-public record RecentPeriod(@JsonIgnore Period period, Double value, Double yearEarlier, Double change, Double changePct,
+public record RecentPeriod(@JsonIgnore Period period, Double value, @JsonIgnore Period yearEarlierPeriod,
+                           Double yearEarlier, Double change, Double changePct,
                            List<String> flags) {
 
     public RecentPeriod {

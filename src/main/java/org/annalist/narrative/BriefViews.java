@@ -2,7 +2,6 @@ package org.annalist.narrative;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.annalist.analysis.indicators.YearOnYear;
 import org.annalist.findings.Findings;
 import org.annalist.findings.RecentPeriod;
 import org.annalist.findings.SeriesFacts;
@@ -58,13 +57,11 @@ public final class BriefViews {
         if (last.value() == null || last.changePct() == null) {
             return null;
         }
-        Period period = series.end();
-        Period yearEarlier = period.plus(-YearOnYear.lag(period.frequency()));
         double pct = last.changePct();
         String direction = Math.abs(pct) < 0.05 ? "flat" : pct > 0 ? "up" : "down";
         boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
                 || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
-        return new BriefView.Latest(f.period(period), f.value(last.value()), f.period(yearEarlier),
+        return new BriefView.Latest(f.period(last.period()), f.value(last.value()), f.period(last.yearEarlierPeriod()),
                 f.percent(Math.abs(pct)), direction, provisional);
     }
 

@@ -1,0 +1,44 @@
+package org.annalist.render;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class AtomicFilesTest {
+
+    @TempDir
+    Path folder;
+
+    @Test
+    void replacesTheFileWholeAndLeavesNoTemporaryFile() throws IOException {
+        Path target = Files.writeString(folder.resolve("brief.pdf"), "old");
+        AtomicFiles.write(target, "new".getBytes());
+        assertThat(Files.readString(target)).isEqualTo("new");
+        try (var files = Files.list(folder)) {
+            assertThat(files).containsExactly(target);
+        }
+    }
+
+    @Test
+    void createsMissingFolders() throws IOException {
+        Path target = folder.resolve("out/2026-10/brief.pdf");
+        AtomicFiles.write(target, new byte[] {1, 2, 3});
+        assertThat(Files.readAllBytes(target)).containsExactly(1, 2, 3);
+    }
+
+    @Test
+    void aTargetThatIsAFolderIsLeftAsItWas() throws IOException {
+        Path occupied = Files.createDirectory(folder.resolve("brief.pdf"));
+        Files.writeString(occupied.resolve("keep.txt"), "kept");
+        assertThatThrownBy(() -> AtomicFiles.write(occupied, "x".getBytes())).isInstanceOf(IOException.class);
+        assertThat(Files.readString(occupied.resolve("keep.txt"))).isEqualTo("kept");
+        try (var files = Files.list(folder)) {
+            assertThat(files).containsExactly(occupied);
+        }
+    }
+}
