@@ -64,12 +64,7 @@ public final class BriefPipeline {
 
     static SourceFacts sourceFacts(ReadResult read) {
         StringBuilder reading = new StringBuilder();
-        reading.append(read.charset()).append(", ").append(switch (read.delimiter()) {
-            case '\t' -> "tab";
-            case ';' -> "semicolon";
-            case '|' -> "bar";
-            default -> "comma";
-        }).append("-separated, ").append(read.layout()).append(" layout, periods written ").append(read.periodFormat());
+        reading.append(read.charset()).append(", ").append(read.delimiterName()).append("-separated, ").append(read.layout()).append(" layout, periods written ").append(read.periodFormat());
         read.dateOrder().ifPresent(o -> reading.append(", dates read ").append(o.name().toLowerCase(Locale.ROOT).replace('_', '-')));
         read.decimalMark().ifPresent(m -> reading.append(", decimal ").append(m.name().toLowerCase(Locale.ROOT)));
         read.aggregation().ifPresent(a -> reading.append("; aggregated to ").append(a.target()).append(" by ")

@@ -24,9 +24,13 @@ public final class ChartStyle {
     public static final Color INK = new Color(0x26, 0x32, 0x3F);
     /** Trend-cycle line: a warm accent that prints mid grey, drawn dashed and heavier. */
     public static final Color ACCENT = new Color(0xB3, 0x5A, 0x1F);
+    /** Observed values of a long, dense series: light enough for the trend-cycle to read through. */
+    public static final Color INK_LIGHT = new Color(0x9A, 0xA4, 0xAE);
     public static final Color GRID = new Color(0xD4, 0xD8, 0xDD);
 
     public static final Stroke OBSERVED_STROKE = new BasicStroke(1.0f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    public static final Stroke OBSERVED_THIN_STROKE = new BasicStroke(0.5f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    public static final Stroke GRID_STROKE = new BasicStroke(0.5f);
     public static final Stroke TREND_STROKE = new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND,
             10f, new float[] {7f, 3.5f}, 0f);
 

@@ -15,6 +15,7 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.DateAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.block.BlockBorder;
+import org.jfree.chart.plot.SeriesRenderingOrder;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
@@ -26,6 +27,8 @@ import org.jfree.data.xy.XYSeriesCollection;
 public final class OverviewChart {
 
     private static final TimeZone UTC = TimeZone.getTimeZone(ZoneOffset.UTC);
+    /** Beyond this many periods the observed line turns light and thin so that the trend-cycle reads through it. */
+    private static final int DENSE_POINTS = 400;
 
     private OverviewChart() {
     }
@@ -57,15 +60,18 @@ public final class OverviewChart {
         NumberAxis values = (NumberAxis) plot.getRangeAxis();
         values.setAutoRangeIncludesZero(false);
         values.setNumberFormatOverride(NumberFormats.axis());
+        // A flat series would otherwise get a range so narrow that every tick shows the same number.
+        values.setAutoRangeMinimumSize(Math.max(1e-9, 0.1 * maxAbs(series)));
         plot.setOutlineVisible(false);
         plot.setDomainGridlinesVisible(false);
 
         ChartFactory.getChartTheme().apply(chart);   // the replaced axis takes the theme's fonts
-        plot.setRangeGridlineStroke(new java.awt.BasicStroke(0.5f));
+        plot.setRangeGridlineStroke(ChartStyle.GRID_STROKE);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         renderer.setDrawSeriesLineAsPath(true);   // one path per series instead of a stroke per segment
-        renderer.setSeriesPaint(0, ChartStyle.INK);
-        renderer.setSeriesStroke(0, ChartStyle.OBSERVED_STROKE);
+        boolean dense = series.size() > DENSE_POINTS;
+        renderer.setSeriesPaint(0, dense ? ChartStyle.INK_LIGHT : ChartStyle.INK);
+        renderer.setSeriesStroke(0, dense ? ChartStyle.OBSERVED_THIN_STROKE : ChartStyle.OBSERVED_STROKE);
         renderer.setSeriesPaint(1, ChartStyle.ACCENT);
         renderer.setSeriesStroke(1, ChartStyle.TREND_STROKE);
         if (series.size() <= 60) {
@@ -73,12 +79,23 @@ public final class OverviewChart {
             renderer.setSeriesShape(0, new Ellipse2D.Double(-2, -2, 4, 4));
         }
         plot.setRenderer(renderer);
+        plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);   // the trend-cycle on top of the data
         LegendTitle legend = chart.getLegend();
         legend.setPosition(RectangleEdge.TOP);
         legend.setFrame(BlockBorder.NONE);
         legend.setBackgroundPaint(Color.WHITE);
 
         return new Figure("overview", chart);
+    }
+
+    private static double maxAbs(Series series) {
+        double max = 0;
+        for (int i = 0; i < series.size(); i++) {
+            if (!series.isMissing(i)) {
+                max = Math.max(max, Math.abs(series.value(i)));
+            }
+        }
+        return max;
     }
 
     /** Plotting each period at its middle keeps months of different lengths evenly placed. */

@@ -54,7 +54,7 @@ final class CheckCommand implements Callable<Integer> {
 
     private static void printText(ReadResult read, PrintWriter out) {
         out.printf(Locale.ROOT, "%s: %d data rows, %s layout, %s, %s-separated, periods written %s%s%s%n",
-                read.file(), read.rowsRead(), read.layout(), read.charset(), delimiterName(read.delimiter()),
+                read.file(), read.rowsRead(), read.layout(), read.charset(), read.delimiterName(),
                 read.periodFormat(),
                 read.dateOrder().map(o -> ", dates " + o.name().toLowerCase(Locale.ROOT).replace('_', '-')).orElse(""),
                 read.decimalMark().map(m -> ", decimal " + m.name().toLowerCase(Locale.ROOT)).orElse(""));
@@ -79,14 +79,5 @@ final class CheckCommand implements Callable<Integer> {
     private static String abbreviate(List<String> periods) {
         return periods.size() <= 12 ? String.join(", ", periods)
                 : String.join(", ", periods.subList(0, 10)) + " and " + (periods.size() - 10) + " more";
-    }
-
-    private static String delimiterName(char delimiter) {
-        return switch (delimiter) {
-            case '\t' -> "tab";
-            case ';' -> "semicolon";
-            case '|' -> "bar";
-            default -> "comma";
-        };
     }
 }

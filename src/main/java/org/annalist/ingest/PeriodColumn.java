@@ -78,7 +78,10 @@ final class PeriodColumn {
         Frequency frequency = frequencyOfDates(distinct).orElseThrow(() -> log.fatal(cells.get(0).line(), cells.get(0).column(),
                 spacingMessage(distinct)));
         List<Period> periods = dates.stream().map(d -> d == null ? null : Period.containing(frequency, d)).toList();
-        return new Resolved(periods, frequency, format, order);
+        String settledFormat = order == null ? format
+                : format.replace("NN/NN", order == DateOrder.MONTH_FIRST ? "MM/DD" : "DD/MM")
+                        .replace("NN-NN", order == DateOrder.MONTH_FIRST ? "MM-DD" : "DD-MM");
+        return new Resolved(periods, frequency, settledFormat, order);
     }
 
     /**

@@ -27,6 +27,16 @@ public record ReadResult(String file, String sha256, String charset, char delimi
         warnings = List.copyOf(warnings);
     }
 
+    /** The delimiter in words: {@code comma}, {@code semicolon}, {@code tab} or {@code bar}. */
+    public String delimiterName() {
+        return switch (delimiter) {
+            case '\t' -> "tab";
+            case ';' -> "semicolon";
+            case '|' -> "bar";
+            default -> "comma";
+        };
+    }
+
     /** The series named {@code name} (exact, then case-insensitive). */
     public Optional<Series> find(String name) {
         return series.stream().filter(s -> s.name().equals(name)).findFirst()

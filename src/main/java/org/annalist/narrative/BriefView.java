@@ -34,10 +34,11 @@ public record BriefView(String language, String title, String organisation, Stri
     }
 
     /**
+     * @param atPeriod  the latest period as a sentence opens with it: {@code In October 2026}
      * @param direction {@code up}, {@code down} or {@code flat}
      * @param provisional true when the latest value is flagged provisional or estimated
      */
-    public record Latest(String period, String value, String yearEarlierPeriod, String changePercent,
+    public record Latest(String atPeriod, String value, String yearEarlierPeriod, String changePercent,
                          String direction, boolean provisional) {
     }
 

@@ -6,6 +6,7 @@ import org.annalist.findings.Findings;
 import org.annalist.findings.RecentPeriod;
 import org.annalist.findings.SeriesFacts;
 import org.annalist.findings.SourceFacts;
+import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 import org.annalist.series.ValueFlag;
@@ -61,7 +62,11 @@ public final class BriefViews {
         String direction = Math.abs(pct) < 0.05 ? "flat" : pct > 0 ? "up" : "down";
         boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
                 || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
-        return new BriefView.Latest(f.period(last.period()), f.value(last.value()), f.period(last.yearEarlierPeriod()),
+        String yearEarlier = last.period().frequency() == Frequency.DAILY
+                || last.period().frequency() == Frequency.BUSINESS_DAILY
+                ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
+                : f.period(last.yearEarlierPeriod());
+        return new BriefView.Latest(f.atPeriod(last.period()), f.value(last.value()), yearEarlier,
                 f.percent(Math.abs(pct)), direction, provisional);
     }
 

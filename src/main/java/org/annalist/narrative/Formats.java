@@ -79,6 +79,14 @@ public final class Formats {
         };
     }
 
+    /** A period as a sentence opens with it: {@code In October 2026}, {@code On 31 October 2026}. */
+    public String atPeriod(Period period) {
+        boolean day = period.frequency() == org.annalist.series.Frequency.DAILY
+                || period.frequency() == org.annalist.series.Frequency.BUSINESS_DAILY;
+        return (day ? "On " + period.startDate().format(DateTimeFormatter.ofPattern("EEEE", locale)) + " " : "In ")
+                + period(period);
+    }
+
     /** A period in few characters, for table rows: {@code Oct 2026}, {@code Q3 2026}, {@code 2024-W05}, {@code 2 Mar 2024}. */
     public String shortPeriod(Period period) {
         return switch (period.frequency()) {

@@ -21,7 +21,7 @@ public final class CentredMovingAverage {
     /**
      * @param trendCycle the smoothed values, {@code NaN} where no full window exists
      * @param window     the number of periods averaged ({@code m})
-     * @param label      how the brief names it, e.g. {@code 2×12 centred moving average}
+     * @param label      how the brief names it: {@code 2×12 centred moving average}, {@code 7-term centred moving average}
      */
     public record Result(double[] trendCycle, int window, String label) {
 
@@ -74,7 +74,7 @@ public final class CentredMovingAverage {
             }
             smooth[t] = sum;                       // NaN in the window makes the sum NaN, as intended
         }
-        String label = (even ? "2\u00D7" + window : String.valueOf(window)) + " centred moving average";
+        String label = (even ? "2\u00D7" + window : window + "-term") + " centred moving average";
         return new Result(smooth, window, label);
     }
 }
