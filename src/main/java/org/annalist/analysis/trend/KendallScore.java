@@ -1,0 +1,50 @@
+package org.annalist.analysis.trend;
+
+import java.util.Arrays;
+
+/**
+ * Kendall's S of a sequence against time, and its variance under no trend with the ties
+ * correction: {@code S = Σ_{i<j} sgn(x_j − x_i)},
+ * {@code Var(S) = [n(n−1)(2n+5) − Σ_p t_p(t_p−1)(2t_p+5)] / 18} (Kendall 1975, Rank Correlation
+ * Methods, 4th ed., Griffin; Gilbert 1987, eq. 16.4).
+ */
+record KendallScore(int n, long s, double variance, int tieGroups) {
+
+    /** The score of the non-missing values of {@code x}, in order. */
+    static KendallScore of(double[] x) {
+        double[] v = Arrays.stream(x).filter(d -> !Double.isNaN(d)).toArray();
+        int n = v.length;
+        long s = 0;
+        for (int i = 0; i < n - 1; i++) {
+            for (int j = i + 1; j < n; j++) {
+                s += Long.signum(Double.compare(v[j], v[i]));
+            }
+        }
+        double[] sorted = v.clone();
+        Arrays.sort(sorted);
+        double tieTerm = 0;
+        int groups = 0;
+        for (int i = 0; i < n; ) {
+            int j = i;
+            while (j + 1 < n && sorted[j + 1] == sorted[i]) {
+                j++;
+            }
+            int t = j - i + 1;
+            if (t > 1) {
+                tieTerm += t * (t - 1.0) * (2.0 * t + 5);
+                groups++;
+            }
+            i = j + 1;
+        }
+        double variance = (n * (n - 1.0) * (2.0 * n + 5) - tieTerm) / 18.0;
+        return new KendallScore(n, s, variance, groups);
+    }
+
+    /** Continuity-corrected z: (S − 1)/√Var if S > 0, (S + 1)/√Var if S < 0, else 0. */
+    static double z(long s, double variance) {
+        if (s == 0 || variance <= 0) {
+            return 0;
+        }
+        return (s > 0 ? s - 1 : s + 1) / Math.sqrt(variance);
+    }
+}
