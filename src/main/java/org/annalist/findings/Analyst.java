@@ -3,24 +3,138 @@ package org.annalist.findings;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.decompose.CentredMovingAverage;
+import org.annalist.analysis.decompose.Irregular;
+import org.annalist.analysis.decompose.ModelForm;
+import org.annalist.analysis.decompose.Stl;
 import org.annalist.analysis.indicators.YearOnYear;
+import org.annalist.analysis.season.SeasonalPattern;
+import org.annalist.series.Frequency;
 import org.annalist.series.Series;
 import org.annalist.series.ValueFlag;
 
-/** Runs the analysis methods on a series and turns their results into findings. */
+/**
+ * Runs the analysis on a series and turns the results into findings. The order is the order of
+ * dependence: additive or multiplicative → STL decomposition (on logs when multiplicative) →
+ * seasonal pattern → trend on the seasonally adjusted values → cycle on yearly means → irregular
+ * share → smoothing.
+ */
 public final class Analyst {
 
     /** For monthly data, a year of months and the month a year before the first: the brief's table. */
     private static final int RECENT_PERIODS = 13;
 
-    public Findings analyse(Series series) {
-        return new Findings(SeriesFacts.of(series), smoothing(series), recent(series));
+    private final Optional<ModelForm.Form> forcedForm;
+
+    public Analyst() {
+        this(Optional.empty());
     }
 
-    /** Empty when the series is too short for one full window. */
+    /** @param forcedForm additive or multiplicative as the user set it, instead of deciding from the data */
+    public Analyst(Optional<ModelForm.Form> forcedForm) {
+        this.forcedForm = forcedForm;
+    }
+
+    public Findings analyse(Series series) {
+        List<String> notes = new ArrayList<>();
+        double[] x = series.values();
+        int period = series.frequency().seasonalPeriod();
+        ModelForm.Choice form = chooseForm(x, period);
+        boolean log = form.multiplicative();
+        double[] y = log ? logOf(x) : x;
+        Stl.Result stl = decompose(y, period, notes);
+
+        SeasonalPattern.Result season = null;
+        if (period > 1) {
+            season = stl == null ? SeasonalPattern.tooShort(period)
+                    : SeasonalPattern.assess(y, series.start(), stl, log, meanOf(x));
+            if (season.verdict() == SeasonalPattern.Verdict.TOO_SHORT) {
+                notes.add("No seasonal statement: the series is shorter than " + DecisionRules.MIN_YEARS_FOR_SEASON
+                        + " full years.");
+            }
+        }
+        boolean seasonal = season != null && season.present();
+        double[] adjusted = seasonal ? fromWorking(stl.adjusted(), log) : x;
+        Decomposition decomposition = decomposition(stl, log);
+        TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, notes);
+        CycleFinding cycle = CycleAnalysis.of(series, seasonal ? stl.adjusted() : y);
+        IrregularFinding irregular = irregular(y, stl, series.frequency());
+        return new Findings(SeriesFacts.of(series), log ? "log" : "none", trend,
+                SeasonalityFindings.of(season, form), cycle, List.of(), List.of(), irregular, smoothing(series),
+                null, null, recent(series), notes, formChoice(form), decomposition);
+    }
+
+    private ModelForm.Choice chooseForm(double[] x, int period) {
+        if (forcedForm.isPresent()) {
+            if (forcedForm.get() == ModelForm.Form.MULTIPLICATIVE) {
+                for (double v : x) {
+                    if (v <= 0) {
+                        return ModelForm.choose(x, period);   // zeros or negatives force additive, said so
+                    }
+                }
+            }
+            return ModelForm.forced(forcedForm.get());
+        }
+        return ModelForm.choose(x, period);
+    }
+
+    /** Robust STL with a seasonal window of 13 when the series is long enough; null otherwise. */
+    private static Stl.Result decompose(double[] y, int period, List<String> notes) {
+        if (period < 2 || y.length <= 2 * period) {
+            return null;
+        }
+        for (int j = 0; j < period; j++) {
+            int observed = 0;
+            for (int t = j; t < y.length; t += period) {
+                observed += Double.isNaN(y[t]) ? 0 : 1;
+            }
+            if (observed < 2) {
+                notes.add("No decomposition: some season positions have fewer than two observed values.");
+                return null;
+            }
+        }
+        return Stl.withPeriod(period).with(Stl.Robustness.ON).fit(y);
+    }
+
+    private static Decomposition decomposition(Stl.Result stl, boolean log) {
+        if (stl == null) {
+            return new Decomposition(null, null, null, null, null, log);
+        }
+        Stl.Parameters p = stl.parameters();
+        String method = String.format(Locale.ROOT, "STL%s, seasonal window %d, trend window %d, robust (%d inner, %d outer)",
+                log ? " on logarithms" : "", p.seasonalWindow(), p.trendWindow(), p.inner(), p.outer());
+        return new Decomposition(method, fromWorking(stl.trend(), log), fromWorking(stl.seasonal(), log),
+                fromWorking(stl.remainder(), log), fromWorking(stl.adjusted(), log), log);
+    }
+
+    /** On the working scale: the STL remainder, or for series without a decomposition the deviations from the moving average. */
+    private static IrregularFinding irregular(double[] y, Stl.Result stl, Frequency frequency) {
+        double[] remainder;
+        if (stl != null) {
+            remainder = stl.remainder();
+        } else {
+            int window = CentredMovingAverage.windowFor(frequency);
+            if (y.length < window + 1) {
+                return new IrregularFinding(null, null);
+            }
+            double[] smooth = CentredMovingAverage.of(y, window).trendCycle();
+            remainder = new double[y.length];
+            for (int t = 0; t < y.length; t++) {
+                remainder[t] = y[t] - smooth[t];
+            }
+        }
+        try {
+            Irregular.Result r = Irregular.of(y, remainder);
+            return new IrregularFinding(r.share(), r.size().name().toLowerCase(Locale.ROOT));
+        } catch (IllegalArgumentException tooFew) {
+            return new IrregularFinding(null, null);
+        }
+    }
+
     private static Smoothing smoothing(Series series) {
         int window = CentredMovingAverage.windowFor(series.frequency());
         int needed = window % 2 == 0 ? window + 1 : window;
@@ -50,5 +164,50 @@ public final class Analyst {
                     List.copyOf(flags)));
         }
         return recent;
+    }
+
+    private static Findings.FormChoice formChoice(ModelForm.Choice c) {
+        String reason = switch (c.reason()) {
+            case SWING_GROWS_WITH_LEVEL -> "the seasonal swing grows with the level";
+            case SWING_INDEPENDENT_OF_LEVEL -> "the seasonal swing does not grow with the level";
+            case LEVEL_TOO_STABLE -> "the level varies too little to tell; the simpler additive form is kept";
+            case NOT_ALL_POSITIVE -> "the series has zero or negative values, which rule out logarithms";
+            case TOO_SHORT -> "too few complete years to tell; the simpler additive form is kept";
+            case NOT_SEASONAL -> "annual data have no seasonal swing to judge";
+            case FORCED -> "set by the user";
+        };
+        return new Findings.FormChoice(c.multiplicative() ? "multiplicative" : "additive", reason,
+                Numbers.orNull(c.elasticity()), Numbers.orNull(c.levelRatio()), c.cycles());
+    }
+
+    static double[] logOf(double[] x) {
+        double[] y = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            y[i] = Math.log(x[i]);
+        }
+        return y;
+    }
+
+    static double[] fromWorking(double[] y, boolean log) {
+        if (!log) {
+            return y.clone();
+        }
+        double[] x = new double[y.length];
+        for (int i = 0; i < y.length; i++) {
+            x[i] = Math.exp(y[i]);
+        }
+        return x;
+    }
+
+    static double meanOf(double[] x) {
+        double sum = 0;
+        int n = 0;
+        for (double v : x) {
+            if (!Double.isNaN(v)) {
+                sum += v;
+                n++;
+            }
+        }
+        return sum / n;
     }
 }

@@ -1,21 +1,52 @@
 package org.annalist.findings;
 
+import com.fasterxml.jackson.annotation.JsonIgnore;
+import com.fasterxml.jackson.annotation.JsonProperty;
+import com.fasterxml.jackson.annotation.JsonPropertyOrder;
 import java.util.List;
 
 /**
- * What the analysis found about one series, as the brief and the JSON state it.
+ * What the analysis found about one series: the findings JSON ({@code annalist.findings/1}) and,
+ * not written to it, what the brief needs besides.
  *
- * @param recent the latest periods, oldest first, with their year-on-year change
+ * @param transform     {@code none} or {@code log}
+ * @param outliers      filled by the outlier analysis (empty until it exists)
+ * @param breaks        filled by the break analysis (empty until it exists)
+ * @param indicators    latest-period indicators (null until they exist)
+ * @param outlook       forecasts (null until they exist)
+ * @param recent        the latest periods with their year-on-year change, oldest first
+ * @param notes         caveats in plain words (short series, forced choices, …)
+ * @param form          how additive or multiplicative was decided
+ * @param decomposition the components in the series' units
  */
-public record Findings(SeriesFacts series, Smoothing smoothing, List<RecentPeriod> recent) {
+@JsonPropertyOrder({"schema", "series", "transform", "trend", "seasonality", "cycle", "outliers", "breaks",
+    "irregular", "smoothing", "indicators", "outlook"})
+public record Findings(SeriesFacts series, String transform, TrendFinding trend, SeasonalityFinding seasonality,
+                       CycleFinding cycle, List<Object> outliers, List<Object> breaks, IrregularFinding irregular,
+                       Smoothing smoothing, Object indicators, Object outlook, @JsonIgnore List<RecentPeriod> recent,
+                       @JsonIgnore List<String> notes, @JsonIgnore FormChoice form,
+                       @JsonIgnore Decomposition decomposition) {
 
     public static final String SCHEMA = "annalist.findings/1";
 
     public Findings {
+        outliers = List.copyOf(outliers);
+        breaks = List.copyOf(breaks);
         recent = List.copyOf(recent);
+        notes = List.copyOf(notes);
     }
 
+    @JsonProperty("schema")
     public String schema() {
         return SCHEMA;
+    }
+
+    /**
+     * The evidence behind additive or multiplicative.
+     *
+     * @param reason     in words, e.g. {@code the seasonal swing grows with the level}
+     * @param elasticity growth of the swing with the level (null when not measured)
+     */
+    public record FormChoice(String form, String reason, Double elasticity, Double levelRatio, int cycles) {
     }
 }

@@ -3,6 +3,7 @@ package org.annalist.analysis.trend;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.annalist.analysis.Ranks;
 import org.annalist.analysis.TestResult;
 import org.apache.commons.math3.distribution.NormalDistribution;
 
@@ -70,7 +71,7 @@ public final class MannKendall {
         }
         double variance = score.variance() * factor;
         double z = KendallScore.z(score.s(), variance);
-        double p = Math.min(1, 2 * (1 - STANDARD_NORMAL.cumulativeProbability(Math.abs(z))));
+        double p = Math.min(1, 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(z)));
         String method = switch (correction) {
             case NONE -> "Mann-Kendall";
             case HAMED_RAO -> "Mann-Kendall (Hamed-Rao corrected)";
@@ -88,7 +89,7 @@ public final class MannKendall {
         for (int i = 0; i < n; i++) {
             detrended[i] = x[i] - slope * (i + 1);
         }
-        double[] ranks = ranks(detrended);
+        double[] ranks = Ranks.of(detrended);
         double mean = (n + 1) / 2.0;
         double denominator = 0;
         for (double r : ranks) {
@@ -126,28 +127,5 @@ public final class MannKendall {
             numerator += (ranks[t] - mean) * (ranks[t + k] - mean);
         }
         return numerator / denominator;
-    }
-
-    /** Ranks 1..n, ties given their mean rank. */
-    static double[] ranks(double[] x) {
-        int n = x.length;
-        Integer[] order = new Integer[n];
-        for (int i = 0; i < n; i++) {
-            order[i] = i;
-        }
-        Arrays.sort(order, (a, b) -> Double.compare(x[a], x[b]));
-        double[] ranks = new double[n];
-        for (int i = 0; i < n; ) {
-            int j = i;
-            while (j + 1 < n && x[order[j + 1]] == x[order[i]]) {
-                j++;
-            }
-            double rank = (i + j) / 2.0 + 1;
-            for (int k = i; k <= j; k++) {
-                ranks[order[k]] = rank;
-            }
-            i = j + 1;
-        }
-        return ranks;
     }
 }

@@ -47,7 +47,7 @@ public final class SeasonalKendall {
             throw new IllegalArgumentException("the seasonal Kendall test needs at least two years of one season");
         }
         double z = KendallScore.z(s, variance);
-        double p = Math.min(1, 2 * (1 - STANDARD_NORMAL.cumulativeProbability(Math.abs(z))));
+        double p = Math.min(1, 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(z)));
         return new Result(new TestResult("seasonal Kendall", z, p, n), s, variance,
                 SenSlope.seasonal(x, period, variance));
     }

@@ -1,0 +1,66 @@
+package org.annalist.analysis;
+
+/**
+ * Every threshold at which the analysis turns a number into a statement, in one place, each with
+ * where it comes from. A brief's methods appendix quotes them.
+ */
+public final class DecisionRules {
+
+    private DecisionRules() {
+    }
+
+    /** Significance level of every test behind a claim (common practice). */
+    public static final double ALPHA = 0.05;
+
+    // ---- additive or multiplicative ----------------------------------------------------------
+
+    /**
+     * Work in logs when the seasonal swing grows at least half as fast as the level: the elasticity
+     * b of {@code log(swing) = a + b·log(level)} over complete years is ≥ 0.5 (b = 0 is additive,
+     * b = 1 multiplicative, Hyndman &amp; Athanasopoulos 2021, §3.2; the midpoint is our rule).
+     */
+    public static final double MULTIPLICATIVE_ELASTICITY = 0.5;
+    /** ... and the yearly level varies enough for the elasticity to mean something: max/min ≥ 1.2 (our rule). */
+    public static final double MIN_LEVEL_RATIO_FOR_FORM = 1.2;
+
+    // ---- seasonal pattern -------------------------------------------------------------------
+
+    /** No seasonal claim from fewer than three full years (UN/ESS guidance, see research notes A4). */
+    public static final int MIN_YEARS_FOR_SEASON = 3;
+    /**
+     * A seasonal pattern is claimed only when its strength F_S (Wang, Smith &amp; Hyndman 2006) is at
+     * least 0.3: below, the remainder varies more than twice as much as the pattern (our rule; F_S
+     * has no published significance threshold).
+     */
+    public static final double MIN_SEASONAL_STRENGTH = 0.3;
+    /** ... and its swing (peak minus trough) is at least 1 % of the level (our rule: below, it is negligible). */
+    public static final double MIN_SEASONAL_SWING_PCT = 1.0;
+    /** Strength bands for the words: ≥ 0.6 strong (the gate of Hyndman 2021), ≥ 0.3 moderate, else weak. */
+    public static final double STRONG_SEASONAL_STRENGTH = 0.6;
+    /**
+     * The pattern "changed" when a position's index moved by more than a quarter of the overall
+     * swing between the first and the last three years, or the peak moved (our rule).
+     */
+    public static final double PATTERN_CHANGE_SHARE_OF_SWING = 0.25;
+
+    // ---- cycles -----------------------------------------------------------------------------
+
+    /** A cycle is longer than two years (FPP3 §2.3: cycles last "at least 2 years"). */
+    public static final double MIN_CYCLE_YEARS = 2.0;
+    /** At least two complete cycles in the data (rule of thumb, research notes C7). */
+    public static final double MIN_CYCLES_IN_DATA = 2.0;
+    /** Annual values needed to look for a cycle at all (our rule). */
+    public static final int MIN_YEARS_FOR_CYCLE = 12;
+    /**
+     * Peaks are regular when the gaps between them vary little: coefficient of variation ≤ 0.25
+     * (our rule, set so that gaps of 5, 4, 5 years are regular and 4, 10, 2 are not).
+     */
+    public static final double MAX_REGULAR_GAP_CV = 0.25;
+
+    // ---- irregular fluctuation --------------------------------------------------------------
+
+    /** Share of the variation around the long-run trend that is irregular: below 0.2 small (our rule). */
+    public static final double SMALL_IRREGULAR_SHARE = 0.2;
+    /** ... up to 0.5 moderate, above large (our rule). */
+    public static final double LARGE_IRREGULAR_SHARE = 0.5;
+}

@@ -1,0 +1,186 @@
+package org.annalist.analysis.season;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.annalist.analysis.DecisionRules;
+import org.annalist.analysis.TestResult;
+import org.annalist.analysis.decompose.Stl;
+import org.annalist.series.Period;
+
+/**
+ * Is there a seasonal pattern, how strong, and what does it look like?
+ *
+ * <p>Evidence, all from an STL fit on the working scale (logs for a multiplicative series):
+ * <ul>
+ * <li>a Kruskal–Wallis test of the detrended values (observed − trend) grouped by season position;</li>
+ * <li>the seasonal strength F_S = max(0, 1 − Var(R)/Var(S + R)) (Wang, Smith &amp; Hyndman 2006,
+ *     <i>Data Mining and Knowledge Discovery</i> 13, 335–364; in the STL form of Hyndman &amp;
+ *     Athanasopoulos 2021, §4.3);</li>
+ * <li>the seasonal profile: the mean seasonal component of each position over the last three
+ *     complete years, centred; as % above or below the yearly average for a multiplicative series,
+ *     in series units for an additive one; its peak, trough and swing;</li>
+ * <li>whether the pattern changed: the profile of the first three years against the last three;</li>
+ * <li>the period confirmed from the data: the autocorrelation of the detrended values at the
+ *     seasonal lag (positive, significant and a local peak).</li>
+ * </ul>
+ * A pattern is claimed only when the test rejects at {@link DecisionRules#ALPHA}, the strength is
+ * at least {@link DecisionRules#MIN_SEASONAL_STRENGTH} and the swing at least
+ * {@link DecisionRules#MIN_SEASONAL_SWING_PCT} % of the level; a detectable but negligible pattern
+ * is reported as "no meaningful seasonal pattern", with its numbers.
+ */
+public final class SeasonalPattern {
+
+    /** A season position with its index (% or units). */
+    public record Index(int position, String label, double value) {
+    }
+
+    /** What the data say about the seasonal period. */
+    public record PeriodCheck(int period, double autocorrelation, boolean confirmed) {
+    }
+
+    /**
+     * @param verdict         {@code PRESENT}, {@code NEGLIGIBLE}, {@code ABSENT} or {@code TOO_SHORT}
+     * @param swing           peak minus trough of the profile (percentage points or units)
+     * @param swingPctOfLevel the swing as % of the level
+     * @param earlyProfile    the profile of the first three complete years
+     * @param largestShift    largest change of a position's index between the two profiles
+     */
+    public record Result(Verdict verdict, int period, boolean multiplicative, double strength, TestResult test,
+                         List<Index> profile, Index peak, Index trough, double swing, double swingPctOfLevel,
+                         List<Index> earlyProfile, double largestShift, boolean changed, PeriodCheck periodCheck) {
+
+        public Result {
+            profile = List.copyOf(profile);
+            earlyProfile = List.copyOf(earlyProfile);
+        }
+
+        public boolean present() {
+            return verdict == Verdict.PRESENT;
+        }
+    }
+
+    public enum Verdict { PRESENT, NEGLIGIBLE, ABSENT, TOO_SHORT }
+
+    private static final int PROFILE_YEARS = 3;
+
+    private SeasonalPattern() {
+    }
+
+    /** The verdict for a series too short to judge, with nothing measured. */
+    public static Result tooShort(int period) {
+        return new Result(Verdict.TOO_SHORT, period, false, Double.NaN, null, List.of(), null, null, Double.NaN,
+                Double.NaN, List.of(), Double.NaN, false, null);
+    }
+
+    /**
+     * @param y       the working values (logs when {@code multiplicative}), NaN where missing
+     * @param start   the period of {@code y[0]}
+     * @param level   the series' mean level in its own units, to judge the size of an additive swing
+     */
+    public static Result assess(double[] y, Period start, Stl.Result stl, boolean multiplicative, double level) {
+        int period = stl.parameters().period();
+        int n = y.length;
+        if (n < DecisionRules.MIN_YEARS_FOR_SEASON * period) {
+            return tooShort(period);
+        }
+        double[] seasonal = stl.seasonal();
+        double[] trend = stl.trend();
+        double[] remainder = stl.remainder();
+        double[] detrended = new double[n];
+        int[] position = new int[n];
+        int firstPosition = start.seasonalPosition() - 1;
+        for (int t = 0; t < n; t++) {
+            detrended[t] = y[t] - trend[t];
+            position[t] = (firstPosition + t) % period;
+        }
+        TestResult test = KruskalWallis.test(detrended, position, period);
+        double strength = strength(seasonal, remainder);
+
+        int firstFull = (period - firstPosition) % period;   // index of the first position-1 value
+        int fullYears = (n - firstFull) / period;
+        if (fullYears < PROFILE_YEARS) {
+            return tooShort(period);
+        }
+        List<Index> late = profile(seasonal, start, firstFull + (fullYears - PROFILE_YEARS) * period, period,
+                multiplicative);
+        List<Index> early = profile(seasonal, start, firstFull, period, multiplicative);
+        Index peak = late.stream().max((a, b) -> Double.compare(a.value(), b.value())).orElseThrow();
+        Index trough = late.stream().min((a, b) -> Double.compare(a.value(), b.value())).orElseThrow();
+        double swing = peak.value() - trough.value();
+        double swingPct = multiplicative ? swing : 100 * swing / Math.abs(level);
+        double largestShift = 0;
+        for (int j = 0; j < period; j++) {
+            largestShift = Math.max(largestShift, Math.abs(late.get(j).value() - early.get(j).value()));
+        }
+        Index earlyPeak = early.stream().max((a, b) -> Double.compare(a.value(), b.value())).orElseThrow();
+        boolean changed = fullYears >= 2 * PROFILE_YEARS
+                && (largestShift > DecisionRules.PATTERN_CHANGE_SHARE_OF_SWING * swing
+                || earlyPeak.position() != peak.position());
+
+        Verdict verdict;
+        if (!test.reject(DecisionRules.ALPHA)) {
+            verdict = Verdict.ABSENT;
+        } else if (strength < DecisionRules.MIN_SEASONAL_STRENGTH || swingPct < DecisionRules.MIN_SEASONAL_SWING_PCT) {
+            verdict = Verdict.NEGLIGIBLE;
+        } else {
+            verdict = Verdict.PRESENT;
+        }
+        return new Result(verdict, period, multiplicative, strength, test, late, peak, trough, swing, swingPct, early,
+                largestShift, changed, checkPeriod(detrended, period));
+    }
+
+    /** F_S = max(0, 1 − Var(R) / Var(S + R)) over the observed periods. */
+    static double strength(double[] seasonal, double[] remainder) {
+        int n = 0;
+        double sumR = 0;
+        double sumSR = 0;
+        for (int t = 0; t < seasonal.length; t++) {
+            if (!Double.isNaN(remainder[t])) {
+                n++;
+                sumR += remainder[t];
+                sumSR += seasonal[t] + remainder[t];
+            }
+        }
+        double meanR = sumR / n;
+        double meanSR = sumSR / n;
+        double varR = 0;
+        double varSR = 0;
+        for (int t = 0; t < seasonal.length; t++) {
+            if (!Double.isNaN(remainder[t])) {
+                varR += (remainder[t] - meanR) * (remainder[t] - meanR);
+                varSR += (seasonal[t] + remainder[t] - meanSR) * (seasonal[t] + remainder[t] - meanSR);
+            }
+        }
+        return varSR == 0 ? 0 : Math.max(0, 1 - varR / varSR);
+    }
+
+    /** Mean seasonal component per position over three complete years from {@code from}, centred. */
+    private static List<Index> profile(double[] seasonal, Period start, int from, int period, boolean multiplicative) {
+        double[] mean = new double[period];
+        for (int year = 0; year < PROFILE_YEARS; year++) {
+            for (int j = 0; j < period; j++) {
+                mean[j] += seasonal[from + year * period + j] / PROFILE_YEARS;
+            }
+        }
+        double centre = 0;
+        for (double m : mean) {
+            centre += m / period;
+        }
+        List<Index> profile = new ArrayList<>(period);
+        for (int j = 0; j < period; j++) {
+            Period p = start.plus(from + j);
+            double value = multiplicative ? 100 * (Math.exp(mean[j] - centre) - 1) : mean[j] - centre;
+            profile.add(new Index(p.seasonalPosition(), p.seasonLabel(), value));
+        }
+        profile.sort((a, b) -> Integer.compare(a.position(), b.position()));
+        return profile;
+    }
+
+    /** The seasonal lag's autocorrelation is positive, beyond 2/√n, and higher than at the lags beside it. */
+    private static PeriodCheck checkPeriod(double[] detrended, int period) {
+        double[] acf = Autocorrelation.of(detrended, period + 1);
+        double bound = 2 / Math.sqrt(detrended.length);
+        boolean confirmed = acf[period] > bound && acf[period] > acf[period - 1] && acf[period] > acf[period + 1];
+        return new PeriodCheck(period, acf[period], confirmed);
+    }
+}

@@ -1,0 +1,111 @@
+package org.annalist.cli;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Collectors;
+import org.annalist.findings.CycleFinding;
+import org.annalist.findings.Findings;
+import org.annalist.findings.SeasonalityFinding;
+import org.annalist.findings.SeriesFacts;
+import org.annalist.findings.TrendFinding;
+
+/** The text form of {@code analyze}: one line per finding with its evidence, as an analyst's notes. */
+final class AnalystNotes {
+
+    private AnalystNotes() {
+    }
+
+    static String of(Findings f) {
+        StringBuilder out = new StringBuilder();
+        SeriesFacts s = f.series();
+        line(out, "series", "'%s'%s, %s, %s to %s, %d periods, %d missing", s.name(),
+                s.unit() == null ? "" : " (" + s.unit() + ")", s.frequency(), s.start(), s.end(), s.observations(),
+                s.missing());
+        Findings.FormChoice form = f.form();
+        line(out, "form", "%s%s: %s%s", form.form(), f.transform().equals("log") ? " (worked in logs)" : "",
+                form.reason(), form.elasticity() == null ? ""
+                        : String.format(Locale.ROOT, " (elasticity of swing to level %.2f over %d years, level ratio %.2f)",
+                        form.elasticity(), form.cycles(), form.levelRatio()));
+        line(out, "trend", "%s", trend(f.trend()));
+        line(out, "seasonality", "%s", seasonality(f.seasonality()));
+        line(out, "cycle", "%s", cycle(f.cycle()));
+        line(out, "irregular", "%s", f.irregular().share() == null ? "not measured"
+                : String.format(Locale.ROOT, "%s (share %.2f of the variation around the long-run trend)",
+                f.irregular().label(), f.irregular().share()));
+        line(out, "smoothing", "%s", f.smoothing() == null ? "none (series shorter than one window)"
+                : f.smoothing().method());
+        if (f.decomposition().method() != null) {
+            line(out, "decomposition", "%s", f.decomposition().method());
+        }
+        for (String note : f.notes()) {
+            line(out, "note", "%s", note);
+        }
+        return out.toString();
+    }
+
+    private static String trend(TrendFinding t) {
+        if (t.test() == null) {
+            return "not assessed: " + t.reason();
+        }
+        String words = t.direction().equals("none") ? "no clear trend" : t.direction();
+        String kendall = t.seasonalKendall() == null ? ""
+                : String.format(Locale.ROOT, "; %s z = %.2f, %s", t.seasonalKendall().test(),
+                t.seasonalKendall().statistic(), p(t.seasonalKendall().pValue()));
+        return String.format(Locale.ROOT, "%s — %s: z = %.2f, %s, n = %d; Sen slope %s per year (95%% CI %s to %s), %+.2f %% of the mean level per year%s",
+                words, t.test(), t.statistic(), p(t.pValue()), t.n(), num(t.slopePerYear()), num(t.slopeCi95().get(0)),
+                num(t.slopeCi95().get(1)), t.changePctPerYear() == null ? Double.NaN : t.changePctPerYear(), kendall);
+    }
+
+    private static String seasonality(SeasonalityFinding s) {
+        if (s.period() == null) {
+            return "not applicable (annual data)";
+        }
+        if (s.test() == null) {
+            return "not assessed: the series is too short (period " + s.period() + ")";
+        }
+        String unit = s.form().equals("multiplicative") ? "%" : "";
+        String profile = s.profile().stream()
+                .map(p -> String.format(Locale.ROOT, "%s %+.1f%s", p.label(), p.index(), unit))
+                .collect(Collectors.joining(", "));
+        String verdict = switch (s.verdict()) {
+            case "present" -> String.format(Locale.ROOT, "period %d, peak %s, trough %s", s.period(), s.peak().label(),
+                    s.trough().label());
+            case "negligible" -> "no meaningful seasonal pattern (detectable but small)";
+            default -> "no seasonal pattern";
+        };
+        String swing = s.form().equals("multiplicative")
+                ? String.format(Locale.ROOT, "%.1f percentage points", s.swing())
+                : String.format(Locale.ROOT, "%.4g (%.1f %% of the level)", s.swing(), s.swingPctOfLevel());
+        return String.format(Locale.ROOT, "%s — strength %.2f, %s H = %.1f, %s; swing %s%s; "
+                        + "lag-%d autocorrelation %.2f%s; profile: %s", verdict, s.strength(), s.test(), s.statistic(),
+                p(s.pValue()), swing, s.changed() ? "; the pattern changed over the years" : "",
+                s.period(), s.autocorrelationAtPeriod(), s.periodConfirmed() ? " (confirms the period)" : "", profile);
+    }
+
+    private static String cycle(CycleFinding c) {
+        if (!c.present()) {
+            return "none: " + c.reason();
+        }
+        return String.format(Locale.ROOT, "%s cycle of about %.1f years (spectral peak %.1f years, red-noise %s); peaks %s; gaps %s",
+                c.regular() ? "a regular" : "an irregular", c.length(), c.spectralPeriod(), p(c.pValue()),
+                String.join(", ", c.peaks()), c.gaps().stream().map(String::valueOf).collect(Collectors.joining(", ")));
+    }
+
+    private static void line(StringBuilder out, String label, String format, Object... args) {
+        out.append(String.format(Locale.ROOT, "%-14s", label + ":")).append(String.format(Locale.ROOT, format, args))
+                .append(System.lineSeparator());
+    }
+
+    /** "p < 0.0001" or "p = 0.0123". */
+    static String p(double p) {
+        return p < 0.0001 ? "p < 0.0001" : String.format(Locale.ROOT, "p = %.4f", p);
+    }
+
+    private static String num(double v) {
+        return Math.abs(v) >= 100 ? String.format(Locale.ROOT, "%.1f", v) : String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    static String all(List<Findings> findings) {
+        return findings.stream().map(AnalystNotes::of).collect(Collectors.joining(System.lineSeparator()));
+    }
+}

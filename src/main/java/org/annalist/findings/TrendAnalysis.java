@@ -1,0 +1,75 @@
+package org.annalist.findings;
+
+import java.util.List;
+import org.annalist.analysis.DecisionRules;
+import org.annalist.analysis.trend.MannKendall;
+import org.annalist.analysis.trend.SeasonalKendall;
+import org.annalist.analysis.trend.SenSlope;
+import org.annalist.series.Series;
+
+/**
+ * The trend finding: Mann–Kendall with its variance corrected for serial correlation, on the
+ * seasonally adjusted values when the series has a seasonal pattern (the raw values otherwise),
+ * Sen's slope with the Gilbert interval from the same corrected variance, and for seasonal
+ * series the seasonal Kendall test on the observed values beside it.
+ */
+final class TrendAnalysis {
+
+    /** Fewer values than this support no trend statement (our rule; Gilbert 1987 asks for more than 10 for the normal approximation). */
+    static final int MIN_VALUES = 10;
+    /** Longer series are averaged over blocks first: the tests are O(n²) (our rule, it keeps 20 years of days under a second). */
+    static final int MAX_VALUES = 600;
+
+    private TrendAnalysis() {
+    }
+
+    static TrendFinding of(Series series, double[] adjusted, boolean seasonal, double[] observed, List<String> notes) {
+        int present = 0;
+        for (double v : adjusted) {
+            present += Double.isNaN(v) ? 0 : 1;
+        }
+        if (present < MIN_VALUES) {
+            notes.add("No trend statement: fewer than " + MIN_VALUES + " values.");
+            return TrendFinding.notAssessed("fewer than " + MIN_VALUES + " values");
+        }
+        int block = (int) Math.ceil(adjusted.length / (double) MAX_VALUES);
+        double[] values = block > 1 ? blockMeans(adjusted, block) : adjusted;
+        String basis = (seasonal ? "seasonally adjusted values" : "observed values")
+                + (block > 1 ? ", averaged over blocks of " + block + " periods" : "");
+        MannKendall.Result mk = MannKendall.test(values, MannKendall.Correction.AR1_RANKS);
+        double periodsPerYear = series.frequency().periodsPerYear() / block;
+        SenSlope.Result sen = SenSlope.of(values, periodsPerYear, mk.varianceUsed());
+        double level = Analyst.meanOf(observed);
+        String direction = !mk.test().reject(DecisionRules.ALPHA) ? "none" : mk.s() > 0 ? "increasing" : "decreasing";
+        TrendFinding.Evidence seasonalKendall = null;
+        if (seasonal) {
+            try {
+                SeasonalKendall.Result sk = SeasonalKendall.test(observed, series.frequency().seasonalPeriod());
+                seasonalKendall = new TrendFinding.Evidence(sk.test().method(), sk.test().statistic(), sk.test().pValue());
+            } catch (IllegalArgumentException notComputable) {
+                seasonalKendall = null;
+            }
+        }
+        return new TrendFinding(direction, mk.test().method() + " on " + basis, mk.test().statistic(),
+                mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
+                level == 0 ? null : 100 * sen.perYear() / Math.abs(level), basis, seasonalKendall, mk.test().n(),
+                null);
+    }
+
+    private static double[] blockMeans(double[] x, int block) {
+        int blocks = x.length / block;
+        double[] means = new double[blocks];
+        for (int b = 0; b < blocks; b++) {
+            double sum = 0;
+            int n = 0;
+            for (int t = b * block; t < (b + 1) * block; t++) {
+                if (!Double.isNaN(x[t])) {
+                    sum += x[t];
+                    n++;
+                }
+            }
+            means[b] = n == 0 ? Double.NaN : sum / n;
+        }
+        return means;
+    }
+}
