@@ -1,6 +1,9 @@
 package org.annalist.analysis.trend;
 
-import java.util.Arrays;
+import java.util.HashMap;
+import java.util.Map;
+import java.util.TreeSet;
+import org.annalist.analysis.OrderStatistics;
 import org.apache.commons.math3.distribution.NormalDistribution;
 
 /**
@@ -54,8 +57,10 @@ public final class SenSlope {
     /** Median slope per step of a gap-free sequence (used to detrend in the Hamed–Rao correction). */
     static double medianSlope(double[] x) {
         double[] slopes = pairwise(x, 1);
-        Arrays.sort(slopes);
-        return median(slopes);
+        int n = slopes.length;
+        double[] middle = n % 2 == 1 ? OrderStatistics.select(slopes, n / 2)
+                : OrderStatistics.select(slopes, n / 2 - 1, n / 2);
+        return n % 2 == 1 ? middle[0] : (middle[0] + middle[1]) / 2;
     }
 
     /** Slopes per step of pairs {@code (i, j)} that lie a multiple of {@code stride} apart. */
@@ -93,29 +98,39 @@ public final class SenSlope {
     }
 
     private static Result interval(double[] slopes, double periodsPerYear, double varianceS, boolean seasonal) {
-        Arrays.sort(slopes);
         int pairs = slopes.length;
         double c = Z_975 * Math.sqrt(varianceS);
-        double lower = atRank(slopes, (pairs - c) / 2);
-        double upper = atRank(slopes, (pairs + c) / 2 + 1);
-        return new Result(median(slopes) * periodsPerYear, lower * periodsPerYear, upper * periodsPerYear, pairs,
-                seasonal);
+        double lowerRank = clip((pairs - c) / 2, pairs);
+        double upperRank = clip((pairs + c) / 2 + 1, pairs);
+        // Only the order statistics the estimate needs: the median and the neighbours of each limit's rank.
+        TreeSet<Integer> ranks = new TreeSet<>();
+        ranks.add((pairs - 1) / 2);
+        ranks.add(pairs / 2);
+        for (double r : new double[] {lowerRank, upperRank}) {
+            ranks.add((int) Math.floor(r) - 1);
+            ranks.add(Math.min(pairs - 1, (int) Math.floor(r)));
+        }
+        int[] wanted = ranks.stream().mapToInt(Integer::intValue).toArray();
+        double[] values = OrderStatistics.select(slopes, wanted);
+        Map<Integer, Double> at = new HashMap<>();
+        for (int i = 0; i < wanted.length; i++) {
+            at.put(wanted[i], values[i]);
+        }
+        double median = (at.get((pairs - 1) / 2) + at.get(pairs / 2)) / 2;
+        return new Result(median * periodsPerYear, atRank(at, lowerRank, pairs) * periodsPerYear,
+                atRank(at, upperRank, pairs) * periodsPerYear, pairs, seasonal);
     }
 
-    /** The value at 1-based rank {@code r}, interpolated between neighbours, clipped to the ends. */
-    private static double atRank(double[] sorted, double r) {
-        if (r <= 1) {
-            return sorted[0];
-        }
-        if (r >= sorted.length) {
-            return sorted[sorted.length - 1];
-        }
+    private static double clip(double rank, int pairs) {
+        return Math.max(1, Math.min(pairs, rank));
+    }
+
+    /** The value at 1-based rank {@code r}, interpolated between its neighbours. */
+    private static double atRank(Map<Integer, Double> at, double r, int pairs) {
         int below = (int) Math.floor(r);
-        return sorted[below - 1] + (r - below) * (sorted[below] - sorted[below - 1]);
-    }
-
-    private static double median(double[] sorted) {
-        int n = sorted.length;
-        return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+        if (below >= pairs) {
+            return at.get(pairs - 1);
+        }
+        return at.get(below - 1) + (r - below) * (at.get(below) - at.get(below - 1));
     }
 }

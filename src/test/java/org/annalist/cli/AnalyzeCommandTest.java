@@ -1,0 +1,80 @@
+package org.annalist.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/** The findings JSON follows the design brief's schema key for key. */
+class AnalyzeCommandTest {
+
+    private static List<String> keys(JsonNode node) {
+        List<String> keys = new ArrayList<>();
+        node.fieldNames().forEachRemaining(keys::add);
+        return keys;
+    }
+
+    @Test
+    void jsonHasExactlyTheContractsFields() throws IOException {
+        Run run = Run.of("analyze", "--format", "json", "src/test/resources/reference/AirPassengers.csv");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        JsonNode f = new ObjectMapper().readTree(run.out());
+        assertThat(keys(f)).containsExactly("schema", "series", "transform", "trend", "seasonality", "cycle", "outliers",
+                "breaks", "irregular", "smoothing", "indicators", "outlook");
+        assertThat(f.get("schema").asText()).isEqualTo("annalist.findings/1");
+        assertThat(keys(f.get("series"))).containsExactly("name", "unit", "frequency", "start", "end", "observations",
+                "missing");
+        assertThat(keys(f.get("trend"))).containsExactly("direction", "test", "statistic", "p_value", "slope_per_year",
+                "slope_ci95", "change_pct_per_year");
+        assertThat(keys(f.get("seasonality"))).containsExactly("present", "period", "strength", "test", "p_value",
+                "form", "peak", "trough");
+        assertThat(keys(f.get("seasonality").get("peak"))).containsExactly("position", "label");
+        assertThat(keys(f.get("cycle"))).containsExactly("present", "length", "length_unit", "peaks", "gaps", "regular");
+        assertThat(keys(f.get("irregular"))).containsExactly("share", "label");
+        assertThat(keys(f.get("smoothing"))).containsExactly("method", "window");
+        assertThat(f.get("transform").asText()).isEqualTo("log");
+        assertThat(f.get("trend").get("direction").asText()).isEqualTo("increasing");
+        assertThat(f.get("trend").get("slope_ci95").size()).isEqualTo(2);
+        assertThat(f.get("seasonality").get("period").asInt()).isEqualTo(12);
+        assertThat(f.get("outliers").isArray()).isTrue();
+        assertThat(f.get("indicators").isNull()).isTrue();
+    }
+
+    @Test
+    void severalSeriesGiveAnArray() throws IOException {
+        Run run = Run.of("analyze", "--format", "json", "demo-data/quennelmark-guest-nights.csv");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        JsonNode all = new ObjectMapper().readTree(run.out());
+        assertThat(all.isArray()).isTrue();
+        assertThat(all.size()).isEqualTo(4);
+        assertThat(all.get(0).get("series").get("name").asText()).isEqualTo("Total");
+        assertThat(all.get(0).get("series").get("unit").asText()).isEqualTo("nights");
+        Run one = Run.of("analyze", "--format", "json", "--series", "Brevania", "demo-data/quennelmark-guest-nights.csv");
+        assertThat(new ObjectMapper().readTree(one.out()).get("series").get("name").asText()).isEqualTo("Brevania");
+    }
+
+    @Test
+    void textReadsLikeNotesWithEvidence() {
+        Run run = Run.of("analyze", "src/test/resources/reference/Nile.csv");
+        assertThat(run.exitCode()).isZero();
+        assertThat(run.out()).contains("trend:", "Mann-Kendall", "Sen slope", "seasonality:  not applicable (annual data)",
+                "cycle:        none");
+    }
+
+    @Test
+    void unknownSeriesIsAUsageError() {
+        Run run = Run.of("analyze", "--series", "nope", "src/test/resources/reference/Nile.csv");
+        assertThat(run.exitCode()).isEqualTo(2);
+        assertThat(run.err()).contains("no series named 'nope'");
+    }
+
+    @Test
+    void theFormCanBeForced() throws IOException {
+        Run run = Run.of("analyze", "--format", "json", "--form", "additive", "src/test/resources/reference/AirPassengers.csv");
+        assertThat(new ObjectMapper().readTree(run.out()).get("transform").asText()).isEqualTo("none");
+    }
+}
