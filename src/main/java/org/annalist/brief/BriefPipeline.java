@@ -12,6 +12,7 @@ import org.annalist.findings.Analyst;
 import org.annalist.findings.Findings;
 import org.annalist.findings.SourceFacts;
 import org.annalist.ingest.DataProblem;
+import org.annalist.ingest.DataProblemException;
 import org.annalist.ingest.ReadResult;
 import org.annalist.ingest.SeriesFileReader;
 import org.annalist.narrative.BriefView;
@@ -30,9 +31,8 @@ public final class BriefPipeline {
     private final PdfRenderer renderer = new PdfRenderer();
 
     /**
-     * @throws org.annalist.ingest.DataProblemException when the file cannot be used
-     * @throws SeriesChoiceException when the series asked for is not in the file, or none was named
-     *                               in a file of several
+     * @throws DataProblemException when the file cannot be used, does not hold the series asked
+     *                              for, or holds several and none was named
      */
     public Brief make(BriefRequest request) {
         ReadResult read = new SeriesFileReader(request.readOptions()).read(request.input());
@@ -75,32 +75,18 @@ public final class BriefPipeline {
 
     private static Series choose(ReadResult read, BriefRequest request) {
         if (request.series().isPresent()) {
-            return read.find(request.series().get()).orElseThrow(() -> new SeriesChoiceException(read.file()
-                    + ": no series named '" + request.series().get() + "'; expected one of " + names(read)));
+            return read.require(request.series().get());
         }
         if (read.series().size() > 1) {
-            throw new SeriesChoiceException(read.file() + " holds " + read.series().size() + " series; expected --series "
-                    + "with one of " + names(read));
+            throw new DataProblemException(new DataProblem(read.file(), 0, 0, "holds " + read.series().size()
+                    + " series; expected --series with one of " + read.names()));
         }
         return read.series().get(0);
-    }
-
-    private static String names(ReadResult read) {
-        return String.join(", ", read.series().stream().map(s -> "'" + s.name() + "'").toList());
     }
 
     /** The same input always gets the same PDF trailer ID, so that equal briefs are equal files. */
     private static long documentId(String sha256, String seriesName) {
         byte[] digest = HexFormat.of().parseHex(sha256);
         return ByteBuffer.wrap(digest).getLong() ^ seriesName.hashCode();
-    }
-
-    /** The user named a series the file does not hold (or none, where the file holds several). */
-    public static final class SeriesChoiceException extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        SeriesChoiceException(String message) {
-            super(message);
-        }
     }
 }

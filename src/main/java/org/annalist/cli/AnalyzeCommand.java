@@ -1,7 +1,6 @@
 package org.annalist.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -10,12 +9,10 @@ import org.annalist.findings.Analyst;
 import org.annalist.findings.Findings;
 import org.annalist.findings.FindingsJson;
 import org.annalist.ingest.ReadResult;
-import org.annalist.ingest.SeriesFileReader;
 import org.annalist.series.Series;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -31,9 +28,6 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated).")
-    Path file;
-
     @Option(names = "--series", paramLabel = "NAME", description = "Only this series. Default: every series in FILE.")
     String series;
 
@@ -45,18 +39,15 @@ final class AnalyzeCommand implements Callable<Integer> {
     FormChoice form = FormChoice.auto;
 
     @Mixin
-    ReadOptionsMixin readOptions;
+    InputMixin input;
 
     @Mixin
     DebugOption debug;
 
     @Override
     public Integer call() {
-        ReadResult read = new SeriesFileReader(readOptions.toReadOptions()).read(file);
-        List<Series> chosen = series == null ? read.series()
-                : List.of(read.find(series).orElseThrow(() -> new UserInputException(read.file() + ": no series named '"
-                + series + "'; expected one of " + String.join(", ", read.series().stream()
-                .map(s -> "'" + s.name() + "'").toList()))));
+        ReadResult read = input.read();
+        List<Series> chosen = series == null ? read.series() : List.of(read.require(series));
         Analyst analyst = new Analyst(switch (form) {
             case auto -> Optional.empty();
             case additive -> Optional.of(ModelForm.Form.ADDITIVE);

@@ -10,7 +10,6 @@ import org.annalist.brief.BriefRequest;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -21,9 +20,6 @@ final class BriefCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
-
-    @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated).")
-    Path file;
 
     @Option(names = "--series", paramLabel = "NAME", description = "The series to brief, when FILE holds several.")
     String series;
@@ -43,15 +39,15 @@ final class BriefCommand implements Callable<Integer> {
     Path templates;
 
     @Mixin
-    ReadOptionsMixin readOptions;
+    InputMixin input;
 
     @Mixin
     DebugOption debug;
 
     @Override
     public Integer call() {
-        Path target = output != null ? output : Path.of(defaultName(file, series));
-        BriefRequest request = new BriefRequest(file, readOptions.toReadOptions(), Optional.ofNullable(series), target,
+        Path target = output != null ? output : Path.of(defaultName(input.file, series));
+        BriefRequest request = new BriefRequest(input.file, input.toReadOptions(), Optional.ofNullable(series), target,
                 title, organisation, Optional.ofNullable(templates), Instant.now());
         BriefPipeline.Brief brief = new BriefPipeline().make(request);
         spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series() + ")");

@@ -1,7 +1,6 @@
 package org.annalist.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -9,11 +8,9 @@ import org.annalist.brief.SeriesCheck;
 import org.annalist.findings.FindingsJson;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.ReadResult;
-import org.annalist.ingest.SeriesFileReader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -27,21 +24,18 @@ final class CheckCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated).")
-    Path file;
-
     @Option(names = "--format", paramLabel = "FORMAT", description = "text or json. Default: text.")
     Format format = Format.text;
 
     @Mixin
-    ReadOptionsMixin readOptions;
+    InputMixin input;
 
     @Mixin
     DebugOption debug;
 
     @Override
     public Integer call() {
-        ReadResult read = new SeriesFileReader(readOptions.toReadOptions()).read(file);
+        ReadResult read = input.read();
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
             out.print(FindingsJson.write(SeriesCheck.of(read)));

@@ -10,11 +10,11 @@ final class DashEnum {
     private DashEnum() {
     }
 
-    static final class DateOrderConverter implements ITypeConverter<ReadOptionsMixin.DateOrderChoice> {
+    static final class DateOrderConverter implements ITypeConverter<InputMixin.DateOrderChoice> {
         @Override
-        public ReadOptionsMixin.DateOrderChoice convert(String value) {
+        public InputMixin.DateOrderChoice convert(String value) {
             try {
-                return ReadOptionsMixin.DateOrderChoice.valueOf(value.trim().toLowerCase(Locale.ROOT).replace('-', '_'));
+                return InputMixin.DateOrderChoice.valueOf(value.trim().toLowerCase(Locale.ROOT).replace('-', '_'));
             } catch (IllegalArgumentException e) {
                 throw new TypeConversionException("'" + value + "' is not a date order; expected auto, day-first or month-first");
             }

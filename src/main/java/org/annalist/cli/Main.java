@@ -2,7 +2,6 @@ package org.annalist.cli;
 
 import java.io.PrintWriter;
 import java.util.Locale;
-import org.annalist.brief.BriefPipeline;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.DataProblemException;
 import org.annalist.narrative.TemplateEngine;
@@ -57,8 +56,7 @@ public final class Main {
             }
             return EXIT_BAD_INPUT;
         }
-        if (e instanceof UserInputException || e instanceof BriefPipeline.SeriesChoiceException
-                || e instanceof TemplateEngine.TemplateProblem) {
+        if (e instanceof UserInputException || e instanceof TemplateEngine.TemplateProblem) {
             err.println("annalist: " + e.getMessage());
             return EXIT_BAD_INPUT;
         }

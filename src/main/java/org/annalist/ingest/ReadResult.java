@@ -37,6 +37,21 @@ public record ReadResult(String file, String sha256, String charset, char delimi
         };
     }
 
+    /**
+     * The series named {@code name}, as {@link #find}.
+     *
+     * @throws DataProblemException naming the series the file does hold
+     */
+    public Series require(String name) {
+        return find(name).orElseThrow(() -> new DataProblemException(new DataProblem(file, 0, 0,
+                "no series named '" + name + "'; expected one of " + names())));
+    }
+
+    /** The series names, quoted and listed: {@code 'Total', 'Domestic'}. */
+    public String names() {
+        return String.join(", ", series.stream().map(s -> "'" + s.name() + "'").toList());
+    }
+
     /** The series named {@code name} (exact, then case-insensitive). */
     public Optional<Series> find(String name) {
         return series.stream().filter(s -> s.name().equals(name)).findFirst()

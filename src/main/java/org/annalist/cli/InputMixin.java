@@ -4,17 +4,24 @@ import org.annalist.ingest.Aggregation;
 import org.annalist.ingest.DateOrder;
 import org.annalist.ingest.DecimalMark;
 import org.annalist.ingest.ReadOptions;
+import org.annalist.ingest.ReadResult;
+import org.annalist.ingest.SeriesFileReader;
 import org.annalist.series.Frequency;
+import java.nio.file.Path;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 
-/** The options every command that reads a data file shares. */
-final class ReadOptionsMixin {
+/** The data file and the options for reading it, shared by every command that reads one. */
+final class InputMixin {
 
     enum DateOrderChoice { auto, day_first, month_first }
 
     enum DecimalChoice { auto, point, comma }
 
     enum AggregateTarget { week, month, quarter, year }
+
+    @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated).")
+    Path file;
 
     @Option(names = "--date-order", paramLabel = "ORDER", converter = DashEnum.DateOrderConverter.class,
             description = "How to read dates like 03/04/2024: auto (infer from the data), day-first, month-first. Default: auto.")
@@ -31,6 +38,11 @@ final class ReadOptionsMixin {
     @Option(names = "--aggregate-by", paramLabel = "HOW",
             description = "How --aggregate combines values: sum (flows such as nights) or mean (rates, prices). Default: sum.")
     Aggregation.Method aggregateBy = Aggregation.Method.SUM;
+
+    /** Reads the file; data problems surface as {@link org.annalist.ingest.DataProblemException} (exit 2). */
+    ReadResult read() {
+        return new SeriesFileReader(toReadOptions()).read(file);
+    }
 
     ReadOptions toReadOptions() {
         ReadOptions options = ReadOptions.defaults().withDateOrder(switch (dateOrder) {
