@@ -63,4 +63,36 @@ public final class DecisionRules {
     public static final double SMALL_IRREGULAR_SHARE = 0.2;
     /** ... up to 0.5 moderate, above large (our rule). */
     public static final double LARGE_IRREGULAR_SHARE = 0.5;
+
+    // ---- structural breaks ------------------------------------------------------------------
+
+    /**
+     * Minimum regime for annual data, in years (our rule; the literature's 15 % trimming would
+     * forbid breaks in the last 15 % of the data, where a board most needs to know of one). For
+     * sub-annual data the minimum regime is one seasonal period.
+     */
+    public static final int MIN_REGIME_YEARS_ANNUAL = 8;
+    /**
+     * Bai–Perron's dynamic programme costs O(n²) per break; above this many periods PELT (linear)
+     * takes over (our rule: 1,500 days is about four years of daily data).
+     */
+    public static final int PELT_ABOVE = 1500;
+    /**
+     * A break must move the level by at least 3 % (our rule): smaller steps are within what calendar
+     * effects and survey noise move a monthly tourism series, and a segmented line would otherwise
+     * "break" every smooth curve (co2's rise gives ten steps of 0.1–0.3 %).
+     */
+    public static final double MIN_BREAK_CHANGE_PCT = 3;
+    /** A collapse: a break that lowers the level by at least this % (our rule). */
+    public static final double COLLAPSE_PCT = -10;
+
+    // ---- outliers ---------------------------------------------------------------------------
+
+    /**
+     * An outlier's robust z (modified z-score) is at least 5 (our rule; Iglewicz &amp; Hoaglin suggest
+     * 3.5 for screening, but tourism remainders are heavy-tailed and a brief must not cry wolf:
+     * on the reference datasets 5 keeps false flags under one per ten years while finding ±30 %
+     * one-offs; see the injection study in the tests).
+     */
+    public static final double OUTLIER_SCORE = 5.0;
 }

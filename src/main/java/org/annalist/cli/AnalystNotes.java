@@ -3,8 +3,11 @@ package org.annalist.cli;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
+import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CycleFinding;
+import org.annalist.findings.Episode;
 import org.annalist.findings.Findings;
+import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.SeriesFacts;
 import org.annalist.findings.TrendFinding;
@@ -27,8 +30,37 @@ final class AnalystNotes {
                         : String.format(Locale.ROOT, " (elasticity of swing to level %.2f over %d years, level ratio %.2f)",
                         form.elasticity(), form.cycles(), form.levelRatio()));
         line(out, "trend", "%s", trend(f.trend()));
+        TrendFinding.LatestRegime latest = f.trend().latestRegime();
+        if (latest != null) {
+            line(out, "since break", "%s since %s: Sen slope %s per year (95%% CI %s to %s), %s", latest.direction()
+                    .equals("none") ? "no clear trend" : latest.direction(), latest.since(), num(latest.slopePerYear()),
+                    num(latest.lower95()), num(latest.upper95()), p(latest.pValue()));
+        }
         line(out, "seasonality", "%s", seasonality(f.seasonality()));
         line(out, "cycle", "%s", cycle(f.cycle()));
+        if (f.breaks().isEmpty()) {
+            line(out, "breaks", "none (%s)", f.breakMethod());
+        }
+        for (BreakFinding b : f.breaks()) {
+            line(out, "break", "%s (95%% interval %s to %s): level %s → %s, %+.1f %%; sup-F %.1f, %s%s", b.period(),
+                    b.ci95().get(0), b.ci95().get(1), num(b.levelBefore()), num(b.levelAfter()), b.changePct(),
+                    b.statistic(), p(b.pValue()), b.provisional() ? "; provisional" : "");
+        }
+        for (Episode e : f.episodes()) {
+            line(out, "episode", "collapse from %s, low point %s (%s), %.0f %% of the fall regained%s", e.start(),
+                    e.lowPoint(), num(e.lowValue()), 100 * e.regainedShare(),
+                    e.recovery() == null ? " by the latest period" : " by " + e.recovery());
+        }
+        if (!f.breaks().isEmpty()) {
+            line(out, "break method", "%s", f.breakMethod());
+        }
+        if (f.outliers().isEmpty()) {
+            line(out, "outliers", "none");
+        }
+        for (OutlierFinding o : f.outliers()) {
+            line(out, "outlier", "%s: %s against %s expected (%+.1f %%), score %.1f", o.period(), num(o.observed()),
+                    num(o.expected()), o.deviationPct(), o.score());
+        }
         line(out, "irregular", "%s", f.irregular().share() == null ? "not measured"
                 : String.format(Locale.ROOT, "%s (share %.2f of the variation around the long-run trend)",
                 f.irregular().label(), f.irregular().share()));

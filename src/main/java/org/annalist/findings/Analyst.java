@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 import org.annalist.analysis.DecisionRules;
+import org.annalist.analysis.anomaly.RemainderOutliers;
 import org.annalist.analysis.decompose.CentredMovingAverage;
 import org.annalist.analysis.decompose.Irregular;
 import org.annalist.analysis.decompose.ModelForm;
@@ -20,7 +21,9 @@ import org.annalist.series.ValueFlag;
 /**
  * Runs the analysis on a series and turns the results into findings. The order is the order of
  * dependence: additive or multiplicative → STL decomposition (on logs when multiplicative) →
- * seasonal pattern → trend on the seasonally adjusted values → cycle on yearly means → irregular
+ * seasonal pattern → outlier candidates on the remainder → structural breaks on the seasonally
+ * adjusted values with those screened out → outliers a break does not explain → trend on the
+ * seasonally adjusted values (and within the latest regime) → cycle on yearly means → irregular
  * share → smoothing.
  */
 public final class Analyst {
@@ -58,14 +61,54 @@ public final class Analyst {
             }
         }
         boolean seasonal = season != null && season.present();
-        double[] adjusted = seasonal ? fromWorking(stl.adjusted(), log) : x;
+        double[] workingAdjusted = seasonal ? stl.adjusted() : y;
+        double[] adjusted = fromWorking(workingAdjusted, log);
         Decomposition decomposition = decomposition(stl, log);
-        TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, notes);
-        CycleFinding cycle = CycleAnalysis.of(series, seasonal ? stl.adjusted() : y);
-        IrregularFinding irregular = irregular(y, stl, series.frequency());
+
+        double[] expected = expectedWorking(y, stl, series.frequency());
+        double[] remainder = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            remainder[t] = y[t] - expected[t];
+        }
+        List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(remainder, period);
+        notes.addAll(OutlierAnalysis.stretchNotes(series, remainder, period));
+        double[] screened = workingAdjusted.clone();
+        for (RemainderOutliers.Outlier o : OutlierAnalysis.screened(remainder)) {
+            // the value the period would have had without its one-off deviation
+            screened[o.index()] = seasonal ? stl.trend()[o.index()] : expected[o.index()];
+        }
+        BreakAnalysis.Result breaks = BreakAnalysis.of(series, screened, log);
+        List<OutlierFinding> outliers = OutlierAnalysis.of(series, candidates, expected, log, breaks.breaks());
+        breaks.breaks().stream().filter(BreakFinding::provisional).forEach(b -> notes.add("The break in " + b.period()
+                + " is provisional: the new regime is still short and the break may not hold."));
+
+        TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), notes);
+        CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
+        IrregularFinding irregular = irregular(y, remainder);
         return new Findings(SeriesFacts.of(series), log ? "log" : "none", trend,
-                SeasonalityFindings.of(season, form), cycle, List.of(), List.of(), irregular, smoothing(series),
-                null, null, recent(series), notes, formChoice(form), decomposition);
+                SeasonalityFindings.of(season, form), cycle, outliers, breaks.breaks(), irregular, smoothing(series),
+                null, null, recent(series), notes, formChoice(form), decomposition, breaks.episodes(),
+                breaks.method());
+    }
+
+    /**
+     * What trend-cycle and season predict on the working scale: STL's trend plus seasonal, or for a
+     * series without a decomposition its centred moving average (NaN where it has no window).
+     */
+    private static double[] expectedWorking(double[] y, Stl.Result stl, Frequency frequency) {
+        double[] expected = new double[y.length];
+        if (stl != null) {
+            for (int t = 0; t < y.length; t++) {
+                expected[t] = stl.trend()[t] + stl.seasonal()[t];
+            }
+            return expected;
+        }
+        int window = CentredMovingAverage.windowFor(frequency);
+        if (y.length < window + 1) {
+            java.util.Arrays.fill(expected, Double.NaN);
+            return expected;
+        }
+        return CentredMovingAverage.of(y, window).trendCycle();
     }
 
     private ModelForm.Choice chooseForm(double[] x, int period) {
@@ -111,22 +154,7 @@ public final class Analyst {
                 fromWorking(stl.remainder(), log), fromWorking(stl.adjusted(), log), log);
     }
 
-    /** On the working scale: the STL remainder, or for series without a decomposition the deviations from the moving average. */
-    private static IrregularFinding irregular(double[] y, Stl.Result stl, Frequency frequency) {
-        double[] remainder;
-        if (stl != null) {
-            remainder = stl.remainder();
-        } else {
-            int window = CentredMovingAverage.windowFor(frequency);
-            if (y.length < window + 1) {
-                return new IrregularFinding(null, null);
-            }
-            double[] smooth = CentredMovingAverage.of(y, window).trendCycle();
-            remainder = new double[y.length];
-            for (int t = 0; t < y.length; t++) {
-                remainder[t] = y[t] - smooth[t];
-            }
-        }
+    private static IrregularFinding irregular(double[] y, double[] remainder) {
         try {
             Irregular.Result r = Irregular.of(y, remainder);
             return new IrregularFinding(r.share(), r.size().name().toLowerCase(Locale.ROOT));

@@ -10,22 +10,26 @@ import java.util.List;
  * not written to it, what the brief needs besides.
  *
  * @param transform     {@code none} or {@code log}
- * @param outliers      filled by the outlier analysis (empty until it exists)
- * @param breaks        filled by the break analysis (empty until it exists)
+ * @param outliers      single periods far from trend and season
+ * @param breaks        structural changes, oldest first
  * @param indicators    latest-period indicators (null until they exist)
  * @param outlook       forecasts (null until they exist)
  * @param recent        the latest periods with their year-on-year change, oldest first
  * @param notes         caveats in plain words (short series, forced choices, …)
  * @param form          how additive or multiplicative was decided
  * @param decomposition the components in the series' units
+ * @param episodes      collapses followed by recoveries (pairs of breaks)
+ * @param breakMethod   how breaks were searched, for the methods appendix
  */
 @JsonPropertyOrder({"schema", "series", "transform", "trend", "seasonality", "cycle", "outliers", "breaks",
     "irregular", "smoothing", "indicators", "outlook"})
 public record Findings(SeriesFacts series, String transform, TrendFinding trend, SeasonalityFinding seasonality,
-                       CycleFinding cycle, List<Object> outliers, List<Object> breaks, IrregularFinding irregular,
+                       CycleFinding cycle, List<OutlierFinding> outliers, List<BreakFinding> breaks,
+                       IrregularFinding irregular,
                        Smoothing smoothing, Object indicators, Object outlook, @JsonIgnore List<RecentPeriod> recent,
                        @JsonIgnore List<String> notes, @JsonIgnore FormChoice form,
-                       @JsonIgnore Decomposition decomposition) {
+                       @JsonIgnore Decomposition decomposition, @JsonIgnore List<Episode> episodes,
+                       @JsonIgnore String breakMethod) {
 
     public static final String SCHEMA = "annalist.findings/1";
 
@@ -34,6 +38,7 @@ public record Findings(SeriesFacts series, String transform, TrendFinding trend,
         breaks = List.copyOf(breaks);
         recent = List.copyOf(recent);
         notes = List.copyOf(notes);
+        episodes = List.copyOf(episodes);
     }
 
     @JsonProperty("schema")

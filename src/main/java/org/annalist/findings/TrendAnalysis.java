@@ -23,7 +23,11 @@ final class TrendAnalysis {
     private TrendAnalysis() {
     }
 
-    static TrendFinding of(Series series, double[] adjusted, boolean seasonal, double[] observed, List<String> notes) {
+    /**
+     * @param regimeStart first index of the latest regime after structural breaks (0 when none)
+     */
+    static TrendFinding of(Series series, double[] adjusted, boolean seasonal, double[] observed, int regimeStart,
+                           List<String> notes) {
         int present = 0;
         for (double v : adjusted) {
             present += Double.isNaN(v) ? 0 : 1;
@@ -53,7 +57,24 @@ final class TrendAnalysis {
         return new TrendFinding(direction, mk.test().method() + " on " + basis, mk.test().statistic(),
                 mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
                 level == 0 ? null : 100 * sen.perYear() / Math.abs(level), basis, seasonalKendall, mk.test().n(),
-                null);
+                null, latestRegime(series, adjusted, regimeStart));
+    }
+
+    /** The same test and slope over the latest regime, when there is one with enough values. */
+    private static TrendFinding.LatestRegime latestRegime(Series series, double[] adjusted, int regimeStart) {
+        if (regimeStart <= 0) {
+            return null;
+        }
+        double[] regime = java.util.Arrays.copyOfRange(adjusted, regimeStart, adjusted.length);
+        long present = java.util.Arrays.stream(regime).filter(v -> !Double.isNaN(v)).count();
+        if (present < Math.max(MIN_VALUES, 2 * series.frequency().seasonalPeriod()) || regime.length > MAX_VALUES) {
+            return null;
+        }
+        MannKendall.Result mk = MannKendall.test(regime, MannKendall.Correction.AR1_RANKS);
+        SenSlope.Result sen = SenSlope.of(regime, series.frequency().periodsPerYear(), mk.varianceUsed());
+        String direction = !mk.test().reject(DecisionRules.ALPHA) ? "none" : mk.s() > 0 ? "increasing" : "decreasing";
+        return new TrendFinding.LatestRegime(series.period(regimeStart).label(), direction, sen.perYear(), sen.lower95(),
+                sen.upper95(), mk.test().pValue(), (int) present);
     }
 
     private static double[] blockMeans(double[] x, int block) {

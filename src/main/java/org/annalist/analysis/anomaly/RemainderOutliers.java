@@ -1,0 +1,117 @@
+package org.annalist.analysis.anomaly;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Single periods far from what trend and season predict: the robust score
+ * {@code z = (R − median R) / (1.4826 · MAD R)} of the decomposition's remainder (Iglewicz &amp;
+ * Hoaglin 1993, <i>How to Detect and Handle Outliers</i>, ASQC, the "modified z-score"; the MAD
+ * keeps the outliers themselves from inflating the scale). A period is flagged when |z| reaches the
+ * threshold. Outliers are one-offs, so two patterns of flags are left out: three or more flagged
+ * periods in a row with the same sign (a shift of level, which the break analysis describes), and
+ * three or more flags within any two seasonal cycles (a stretch the decomposition does not follow,
+ * such as a seasonal pattern in transition), which {@link #unusualStretches} reports instead.
+ */
+public final class RemainderOutliers {
+
+    /** @param index position in the series; score the robust z */
+    public record Outlier(int index, double score) {
+    }
+
+    /** Same-signed flagged runs this long are a change of level, not one-off periods (our rule). */
+    public static final int SHIFT_RUN = 3;
+
+    private RemainderOutliers() {
+    }
+
+    /** Robust scores of the remainder; NaN where it is missing. */
+    public static double[] scores(double[] remainder) {
+        double[] present = Arrays.stream(remainder).filter(v -> !Double.isNaN(v)).toArray();
+        double[] z = new double[remainder.length];
+        if (present.length < 3) {
+            Arrays.fill(z, Double.NaN);
+            return z;
+        }
+        double median = median(present);
+        double[] deviations = new double[present.length];
+        for (int i = 0; i < present.length; i++) {
+            deviations[i] = Math.abs(present[i] - median);
+        }
+        double scale = 1.4826 * median(deviations);
+        for (int t = 0; t < remainder.length; t++) {
+            z[t] = Double.isNaN(remainder[t]) ? Double.NaN
+                    : scale > 0 ? (remainder[t] - median) / scale : 0;
+        }
+        return z;
+    }
+
+    /** A run of periods with many flags: first and last index. */
+    public record Stretch(int from, int to) {
+    }
+
+    /** The flagged periods, isolated ones only, in time order. */
+    public static List<Outlier> find(double[] remainder, double threshold, int period) {
+        List<Outlier> flagged = flagged(remainder, threshold);
+        List<Stretch> stretches = stretches(flagged, period);
+        return flagged.stream().filter(o -> stretches.stream().noneMatch(s -> o.index() >= s.from() && o.index() <= s.to()))
+                .toList();
+    }
+
+    /** Stretches of three or more flags within two seasonal cycles. */
+    public static List<Stretch> unusualStretches(double[] remainder, double threshold, int period) {
+        return stretches(flagged(remainder, threshold), period);
+    }
+
+    private static List<Stretch> stretches(List<Outlier> flagged, int period) {
+        int window = 2 * Math.max(1, period);
+        List<Stretch> stretches = new ArrayList<>();
+        for (int i = 0; i + 2 < flagged.size(); i++) {
+            if (flagged.get(i + 2).index() - flagged.get(i).index() < window) {
+                int j = i + 2;
+                while (j + 1 < flagged.size() && flagged.get(j + 1).index() - flagged.get(j - 1).index() < window) {
+                    j++;
+                }
+                stretches.add(new Stretch(flagged.get(i).index(), flagged.get(j).index()));
+                i = j;
+            }
+        }
+        return stretches;
+    }
+
+    /**
+     * Flags that are not part of a same-signed run of {@link #SHIFT_RUN} or more: isolated ones and
+     * those of unusual stretches. These are the values to keep out of a break search.
+     */
+    public static List<Outlier> flagged(double[] remainder, double threshold) {
+        double[] z = scores(remainder);
+        List<Outlier> found = new ArrayList<>();
+        int t = 0;
+        while (t < z.length) {
+            if (Double.isNaN(z[t]) || Math.abs(z[t]) < threshold) {
+                t++;
+                continue;
+            }
+            int end = t;
+            while (end + 1 < z.length && !Double.isNaN(z[end + 1]) && Math.abs(z[end + 1]) >= threshold
+                    && Math.signum(z[end + 1]) == Math.signum(z[t])) {
+                end++;
+            }
+            if (end - t + 1 < SHIFT_RUN) {
+                for (int i = t; i <= end; i++) {
+                    found.add(new Outlier(i, z[i]));
+                }
+            }
+            t = end + 1;
+        }
+        return found;
+    }
+
+    private static double median(double[] x) {
+        double[] s = x.clone();
+        Arrays.sort(s);
+        int n = s.length;
+        return n % 2 == 1 ? s[n / 2] : (s[n / 2 - 1] + s[n / 2]) / 2;
+    }
+}

@@ -1,0 +1,106 @@
+package org.annalist.analysis.breaks;
+
+/**
+ * Residual sums of squares of any segment in O(1) from cumulative sums: for a constant level
+ * (y ~ 1) or a straight line (y ~ 1 + t), fitted by least squares to the observed values of the
+ * segment (missing values are skipped). Values and time are centred first, so the sums do not
+ * lose precision to cancellation.
+ */
+final class SegmentCost {
+
+    private final BaiPerron.Model model;
+    private final double[] count;
+    private final double[] sumT;
+    private final double[] sumTT;
+    private final double[] sumY;
+    private final double[] sumTY;
+    private final double[] sumYY;
+
+    SegmentCost(double[] y, BaiPerron.Model model) {
+        this.model = model;
+        int n = y.length;
+        double mean = 0;
+        int observed = 0;
+        for (double v : y) {
+            if (!Double.isNaN(v)) {
+                mean += v;
+                observed++;
+            }
+        }
+        mean /= Math.max(1, observed);
+        double tCentre = (n - 1) / 2.0;
+        count = new double[n + 1];
+        sumT = new double[n + 1];
+        sumTT = new double[n + 1];
+        sumY = new double[n + 1];
+        sumTY = new double[n + 1];
+        sumYY = new double[n + 1];
+        for (int i = 0; i < n; i++) {
+            boolean present = !Double.isNaN(y[i]);
+            double t = i - tCentre;
+            double v = present ? y[i] - mean : 0;
+            double w = present ? 1 : 0;
+            count[i + 1] = count[i] + w;
+            sumT[i + 1] = sumT[i] + w * t;
+            sumTT[i + 1] = sumTT[i] + w * t * t;
+            sumY[i + 1] = sumY[i] + v;
+            sumTY[i + 1] = sumTY[i] + t * v;
+            sumYY[i + 1] = sumYY[i] + v * v;
+        }
+    }
+
+    /** Observed values in {@code from..to} (inclusive, 0-based). */
+    double observed(int from, int to) {
+        return count[to + 1] - count[from];
+    }
+
+    /** Residual sum of squares of the fit over {@code from..to} (inclusive, 0-based). */
+    double rss(int from, int to) {
+        double n = count[to + 1] - count[from];
+        if (n < 1) {
+            return 0;
+        }
+        double sy = sumY[to + 1] - sumY[from];
+        double syy = sumYY[to + 1] - sumYY[from];
+        double level = syy - sy * sy / n;
+        if (model == BaiPerron.Model.LEVEL || n < 2) {
+            return Math.max(0, level);
+        }
+        double st = sumT[to + 1] - sumT[from];
+        double stt = sumTT[to + 1] - sumTT[from];
+        double sty = sumTY[to + 1] - sumTY[from];
+        double ctt = stt - st * st / n;
+        double cty = sty - st * sy / n;
+        return ctt <= 0 ? Math.max(0, level) : Math.max(0, level - cty * cty / ctt);
+    }
+
+    /** Least-squares coefficients over the segment: {intercept at t = position, slope per period}. */
+    double[] fitAt(int from, int to, int position, double[] y) {
+        double n = count[to + 1] - count[from];
+        double mean = 0;
+        double tMean = 0;
+        for (int i = from; i <= to; i++) {
+            if (!Double.isNaN(y[i])) {
+                mean += y[i] / n;
+                tMean += i / n;
+            }
+        }
+        if (model == BaiPerron.Model.LEVEL || n < 2) {
+            return new double[] {mean, 0};
+        }
+        double sxy = 0;
+        double sxx = 0;
+        for (int i = from; i <= to; i++) {
+            if (!Double.isNaN(y[i])) {
+                sxy += (i - tMean) * (y[i] - mean);
+                sxx += (i - tMean) * (i - tMean);
+            }
+        }
+        double slope = sxx == 0 ? 0 : sxy / sxx;
+        return new double[] {mean + slope * (position - tMean), slope};
+    }
+
+    int parameters() {
+        return model == BaiPerron.Model.LEVEL ? 1 : 2;
+    }
+}

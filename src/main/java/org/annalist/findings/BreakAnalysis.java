@@ -1,0 +1,191 @@
+package org.annalist.findings;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.annalist.analysis.DecisionRules;
+import org.annalist.analysis.TestResult;
+import org.annalist.analysis.breaks.BaiPerron;
+import org.annalist.analysis.breaks.BreakDateInterval;
+import org.annalist.analysis.breaks.Pelt;
+import org.annalist.analysis.breaks.SupF;
+import org.annalist.series.Frequency;
+import org.annalist.series.Series;
+
+/**
+ * The breaks finding, on the seasonally adjusted series (logs when multiplicative) with outliers
+ * screened out first, so that one wild month cannot pull a regime boundary.
+ *
+ * <p>Up to {@link DecisionRules#PELT_ABOVE} periods: Bai–Perron for changes in level and for
+ * changes in level and slope, the model and number of breaks with the lower BIC, then as many
+ * breaks as pass their own sup-F test. Longer series: PELT for changes in level. Each break then gets
+ * its own sup-F test over the span of its two regimes, a Bai (1997) interval, and levels before
+ * and after in the series' units.
+ */
+final class BreakAnalysis {
+
+    /**
+     * @param method   how the breaks were searched, for the methods appendix
+     * @param regimeStart first index of the latest regime (0 without breaks)
+     */
+    record Result(List<BreakFinding> breaks, List<Episode> episodes, String method, int regimeStart) {
+    }
+
+    private BreakAnalysis() {
+    }
+
+    /** @param screened working-scale adjusted values with outliers replaced, NaN where missing */
+    static Result of(Series series, double[] screened, boolean log) {
+        int n = screened.length;
+        int h = minimumRegime(series.frequency());
+        if (n < 2 * h) {
+            return new Result(List.of(), List.of(), "not searched: fewer than two regimes of " + h + " periods", 0);
+        }
+        int[] starts;
+        BaiPerron.Model model;
+        String method;
+        if (n > DecisionRules.PELT_ABOVE) {
+            model = BaiPerron.Model.LEVEL;
+            Pelt.Result pelt = Pelt.fit(screened, h);
+            starts = pelt.starts();
+            method = "PELT, changes in level, penalty 3 log n on the robust noise scale, minimum regime " + h;
+        } else {
+            BaiPerron.Result level = BaiPerron.withMinimumRegime(Math.max(h, 2)).fit(screened);
+            BaiPerron.Result slope = BaiPerron.withMinimumRegime(Math.max(h, 3)).with(BaiPerron.Model.LEVEL_AND_SLOPE)
+                    .fit(screened);
+            BaiPerron.Result best = slope.chosen().bic() < level.chosen().bic() ? slope : level;
+            model = best.model();
+            starts = confirmed(screened, best, model, h, log);
+            method = "Bai-Perron, changes in " + (model == BaiPerron.Model.LEVEL ? "level" : "level and slope")
+                    + ", number of breaks by BIC, then reduced until every break passes its own sup-F test"
+                    + " (AR(1) Monte Carlo null, 5 %), minimum regime " + best.minimumRegime();
+        }
+        List<BreakFinding> breaks = new ArrayList<>();
+        for (int j = 0; j < starts.length; j++) {
+            int from = j == 0 ? 0 : starts[j - 1];
+            int start = starts[j];
+            int to = j + 1 < starts.length ? starts[j + 1] - 1 : n - 1;
+            breaks.add(describe(series, screened, log, model, h, from, start, to));
+        }
+        return new Result(List.copyOf(breaks), episodes(series, screened, log, breaks), method,
+                starts.length == 0 ? 0 : starts[starts.length - 1]);
+    }
+
+    /**
+     * From BIC's number of breaks down: the first partition in which every break moves the level by
+     * at least {@link DecisionRules#MIN_BREAK_CHANGE_PCT} % and passes its own sup-F test (over the
+     * span of its two regimes), or none. Serial correlation makes BIC propose too
+     * many breaks (Bai &amp; Perron 2003); this backward check removes those the data do not carry.
+     */
+    private static int[] confirmed(double[] y, BaiPerron.Result fit, BaiPerron.Model model, int h, boolean log) {
+        for (int m = fit.chosen().breaks(); m >= 1; m--) {
+            int[] starts = fit.byBreaks().get(m).starts();
+            boolean all = true;
+            for (int j = 0; j < starts.length && all; j++) {
+                int from = j == 0 ? 0 : starts[j - 1];
+                int to = j + 1 < starts.length ? starts[j + 1] - 1 : y.length - 1;
+                all = Math.abs(changePct(y, model, from, starts[j], to, log)) >= DecisionRules.MIN_BREAK_CHANGE_PCT
+                        && localTest(y, model, h, from, starts[j], to).reject(DecisionRules.ALPHA);
+            }
+            if (all) {
+                return starts;
+            }
+        }
+        return new int[0];
+    }
+
+    /** Change of the fitted level at the break, in % of the level before. */
+    private static double changePct(double[] y, BaiPerron.Model model, int from, int start, int to, boolean log) {
+        double before = BaiPerron.regimeFit(y, model, from, start - 1, start - 1)[0];
+        double after = BaiPerron.regimeFit(y, model, start, to, start)[0];
+        return log ? 100 * (Math.exp(after - before) - 1) : 100 * (after - before) / Math.abs(before);
+    }
+
+    private static TestResult localTest(double[] y, BaiPerron.Model model, int h, int from, int start, int to) {
+        double[] span = java.util.Arrays.copyOfRange(y, from, to + 1);
+        int localH = Math.max(model == BaiPerron.Model.LEVEL ? 2 : 3, Math.min(h, Math.min(start - from, to - start + 1)));
+        try {
+            return SupF.test(span, model, localH).test();
+        } catch (IllegalArgumentException tooShort) {
+            return new TestResult("sup-F (Monte Carlo p, AR(1) noise)", Double.NaN, 1, span.length);
+        }
+    }
+
+    /** One seasonal period for sub-annual data; {@link DecisionRules#MIN_REGIME_YEARS_ANNUAL} years for annual. */
+    static int minimumRegime(Frequency frequency) {
+        return frequency == Frequency.ANNUAL ? DecisionRules.MIN_REGIME_YEARS_ANNUAL
+                : Math.max(3, frequency.seasonalPeriod());
+    }
+
+    private static BreakFinding describe(Series series, double[] y, boolean log, BaiPerron.Model model, int h, int from,
+                                         int start, int to) {
+        double before = BaiPerron.regimeFit(y, model, from, start - 1, start - 1)[0];
+        double after = BaiPerron.regimeFit(y, model, start, to, start)[0];
+        double sdBefore = residualSd(y, model, from, start - 1);
+        double sdAfter = residualSd(y, model, start, to);
+        BreakDateInterval.Offsets ci = BreakDateInterval.of(after - before, sdBefore, sdAfter, start - from - 1,
+                to - start);
+        TestResult local = localTest(y, model, h, from, start, to);
+        double levelBefore = log ? Math.exp(before) : before;
+        double levelAfter = log ? Math.exp(after) : after;
+        double changePct = 100 * (levelAfter - levelBefore) / Math.abs(levelBefore);
+        boolean provisional = to == y.length - 1 && to - start + 1 < 2 * h;   // the latest regime, still short
+        return new BreakFinding(series.period(start).label(),
+                List.of(series.period(start + ci.lower()).label(), series.period(start + ci.upper()).label()),
+                levelBefore, levelAfter, changePct, local.statistic(), local.pValue(), provisional, start);
+    }
+
+    private static double residualSd(double[] y, BaiPerron.Model model, int from, int to) {
+        double[] fit = BaiPerron.regimeFit(y, model, from, to, from);
+        double ss = 0;
+        int n = 0;
+        for (int i = from; i <= to; i++) {
+            if (!Double.isNaN(y[i])) {
+                double r = y[i] - (fit[0] + fit[1] * (i - from));
+                ss += r * r;
+                n++;
+            }
+        }
+        return n > 1 ? Math.sqrt(ss / n) : 0;
+    }
+
+    /**
+     * A collapse (a break that lowers the level by {@link DecisionRules#COLLAPSE_PCT} % or more) and
+     * what followed it: the low point in the collapsed regime, and how much of the fall the level
+     * has regained by the next break (or by the latest period when no break follows).
+     */
+    private static List<Episode> episodes(Series series, double[] y, boolean log, List<BreakFinding> breaks) {
+        List<Episode> episodes = new ArrayList<>();
+        for (int j = 0; j < breaks.size(); j++) {
+            BreakFinding fall = breaks.get(j);
+            if (fall.changePct() > DecisionRules.COLLAPSE_PCT) {
+                continue;
+            }
+            int end = j + 1 < breaks.size() ? breaks.get(j + 1).index() : y.length;
+            int low = -1;
+            for (int i = fall.index(); i < end; i++) {
+                if (!Double.isNaN(y[i]) && (low < 0 || y[i] < y[low])) {
+                    low = i;
+                }
+            }
+            if (low < 0) {
+                continue;
+            }
+            double lowValue = log ? Math.exp(y[low]) : y[low];
+            double recovered;
+            String recovery;
+            if (j + 1 < breaks.size()) {
+                recovered = breaks.get(j + 1).levelAfter();
+                recovery = breaks.get(j + 1).period();
+            } else {
+                double[] fit = BaiPerron.regimeFit(y, BaiPerron.Model.LEVEL_AND_SLOPE, fall.index(), y.length - 1,
+                        y.length - 1);
+                recovered = log ? Math.exp(fit[0]) : fit[0];
+                recovery = null;
+            }
+            double fallSize = fall.levelBefore() - lowValue;
+            double regained = fallSize <= 0 ? 1 : Math.max(0, (recovered - lowValue) / fallSize);
+            episodes.add(new Episode(fall.period(), recovery, series.period(low).label(), lowValue, regained));
+        }
+        return List.copyOf(episodes);
+    }
+}
