@@ -11,7 +11,7 @@ import java.util.List;
  * keeps the outliers themselves from inflating the scale). A period is flagged when |z| reaches the
  * threshold. Outliers are one-offs, so two patterns of flags are left out: three or more flagged
  * periods in a row with the same sign (a shift of level, which the break analysis describes), and
- * three or more flags within any two seasonal cycles (a stretch the decomposition does not follow,
+ * four or more flags within any two seasonal cycles (a stretch the decomposition does not follow,
  * such as a seasonal pattern in transition), which {@link #unusualStretches} reports instead.
  */
 public final class RemainderOutliers {
@@ -22,6 +22,8 @@ public final class RemainderOutliers {
 
     /** Same-signed flagged runs this long are a change of level, not one-off periods (our rule). */
     public static final int SHIFT_RUN = 3;
+    /** This many flags within two seasonal cycles make a stretch the decomposition does not follow (our rule). */
+    public static final int STRETCH_FLAGS = 4;
 
     private RemainderOutliers() {
     }
@@ -59,7 +61,7 @@ public final class RemainderOutliers {
                 .toList();
     }
 
-    /** Stretches of three or more flags within two seasonal cycles. */
+    /** Stretches of {@link #STRETCH_FLAGS} or more flags within two seasonal cycles. */
     public static List<Stretch> unusualStretches(double[] remainder, double threshold, int period) {
         return stretches(flagged(remainder, threshold), period);
     }
@@ -67,10 +69,11 @@ public final class RemainderOutliers {
     private static List<Stretch> stretches(List<Outlier> flagged, int period) {
         int window = 2 * Math.max(1, period);
         List<Stretch> stretches = new ArrayList<>();
-        for (int i = 0; i + 2 < flagged.size(); i++) {
-            if (flagged.get(i + 2).index() - flagged.get(i).index() < window) {
-                int j = i + 2;
-                while (j + 1 < flagged.size() && flagged.get(j + 1).index() - flagged.get(j - 1).index() < window) {
+        int k = STRETCH_FLAGS - 1;
+        for (int i = 0; i + k < flagged.size(); i++) {
+            if (flagged.get(i + k).index() - flagged.get(i).index() <= window) {
+                int j = i + k;
+                while (j + 1 < flagged.size() && flagged.get(j + 1).index() - flagged.get(j + 1 - k).index() <= window) {
                     j++;
                 }
                 stretches.add(new Stretch(flagged.get(i).index(), flagged.get(j).index()));
