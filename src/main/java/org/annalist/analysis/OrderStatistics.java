@@ -29,36 +29,40 @@ public final class OrderStatistics {
         return values;
     }
 
-    /** Rearranges a[lo..hi] so that a[k] holds the value of rank k, smaller values left, larger right. */
+    /**
+     * Rearranges a[lo..hi] so that a[k] holds the value of rank k, smaller values left, larger
+     * right. Three-way partitioning (Dijkstra's "Dutch national flag") keeps it linear when many
+     * values are equal, as pairwise slopes of rounded data are.
+     */
     private static void selectInPlace(double[] a, int lo, int hi, int k) {
         while (hi > lo) {
             int mid = (lo + hi) >>> 1;
-            // median of three as the pivot, moved to a[hi]
-            if (a[mid] < a[lo]) {
-                swap(a, mid, lo);
-            }
-            if (a[hi] < a[lo]) {
-                swap(a, hi, lo);
-            }
-            if (a[mid] < a[hi]) {
-                swap(a, mid, hi);
-            }
-            double pivot = a[hi];
-            int store = lo;
-            for (int i = lo; i < hi; i++) {
+            double pivot = medianOfThree(a[lo], a[mid], a[hi]);
+            int lt = lo;
+            int gt = hi;
+            int i = lo;
+            while (i <= gt) {
                 if (a[i] < pivot) {
-                    swap(a, i, store++);
+                    swap(a, lt++, i++);
+                } else if (a[i] > pivot) {
+                    swap(a, i, gt--);
+                } else {
+                    i++;
                 }
             }
-            swap(a, store, hi);
-            if (k == store) {
-                return;
-            } else if (k < store) {
-                hi = store - 1;
+            // now a[lo..lt-1] < pivot, a[lt..gt] == pivot, a[gt+1..hi] > pivot
+            if (k < lt) {
+                hi = lt - 1;
+            } else if (k > gt) {
+                lo = gt + 1;
             } else {
-                lo = store + 1;
+                return;
             }
         }
+    }
+
+    private static double medianOfThree(double x, double y, double z) {
+        return Math.max(Math.min(x, y), Math.min(Math.max(x, y), z));
     }
 
     private static void swap(double[] a, int i, int j) {

@@ -84,7 +84,7 @@ final class BreakAnalysis {
                 int from = j == 0 ? 0 : starts[j - 1];
                 int to = j + 1 < starts.length ? starts[j + 1] - 1 : y.length - 1;
                 all = Math.abs(changePct(y, model, from, starts[j], to, log)) >= DecisionRules.MIN_BREAK_CHANGE_PCT
-                        && localTest(y, model, h, from, starts[j], to).reject(DecisionRules.ALPHA);
+                        && localRejects(y, model, h, from, starts[j], to);
             }
             if (all) {
                 return starts;
@@ -100,11 +100,23 @@ final class BreakAnalysis {
         return log ? 100 * (Math.exp(after - before) - 1) : 100 * (after - before) / Math.abs(before);
     }
 
+    private static boolean localRejects(double[] y, BaiPerron.Model model, int h, int from, int start, int to) {
+        double[] span = java.util.Arrays.copyOfRange(y, from, to + 1);
+        try {
+            return SupF.rejects(span, model, localMinimum(model, h, from, start, to), DecisionRules.ALPHA);
+        } catch (IllegalArgumentException tooShort) {
+            return false;
+        }
+    }
+
+    private static int localMinimum(BaiPerron.Model model, int h, int from, int start, int to) {
+        return Math.max(model == BaiPerron.Model.LEVEL ? 2 : 3, Math.min(h, Math.min(start - from, to - start + 1)));
+    }
+
     private static TestResult localTest(double[] y, BaiPerron.Model model, int h, int from, int start, int to) {
         double[] span = java.util.Arrays.copyOfRange(y, from, to + 1);
-        int localH = Math.max(model == BaiPerron.Model.LEVEL ? 2 : 3, Math.min(h, Math.min(start - from, to - start + 1)));
         try {
-            return SupF.test(span, model, localH).test();
+            return SupF.test(span, model, localMinimum(model, h, from, start, to)).test();
         } catch (IllegalArgumentException tooShort) {
             return new TestResult("sup-F (Monte Carlo p, AR(1) noise)", Double.NaN, 1, span.length);
         }

@@ -40,9 +40,11 @@ final class TrendAnalysis {
         double[] values = block > 1 ? blockMeans(adjusted, block) : adjusted;
         String basis = (seasonal ? "seasonally adjusted values" : "observed values")
                 + (block > 1 ? ", averaged over blocks of " + block + " periods" : "");
-        MannKendall.Result mk = MannKendall.test(values, MannKendall.Correction.AR1_RANKS);
+        SenSlope.Pairwise slopes = SenSlope.pairwise(values);
+        MannKendall.Result mk = MannKendall.test(values, MannKendall.Correction.AR1_RANKS, gapFree(values)
+                ? slopes.medianPerStep() : Double.NaN);
         double periodsPerYear = series.frequency().periodsPerYear() / block;
-        SenSlope.Result sen = SenSlope.of(values, periodsPerYear, mk.varianceUsed());
+        SenSlope.Result sen = slopes.estimate(periodsPerYear, mk.varianceUsed());
         double level = Analyst.meanOf(observed);
         String direction = !mk.test().reject(DecisionRules.ALPHA) ? "none" : mk.s() > 0 ? "increasing" : "decreasing";
         TrendFinding.Evidence seasonalKendall = null;
@@ -75,6 +77,16 @@ final class TrendAnalysis {
         String direction = !mk.test().reject(DecisionRules.ALPHA) ? "none" : mk.s() > 0 ? "increasing" : "decreasing";
         return new TrendFinding.LatestRegime(series.period(regimeStart).label(), direction, sen.perYear(), sen.lower95(),
                 sen.upper95(), mk.test().pValue(), (int) present);
+    }
+
+    /** The correction detrends the observed values in sequence; the series' own slope fits it only without gaps. */
+    private static boolean gapFree(double[] x) {
+        for (double v : x) {
+            if (Double.isNaN(v)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static double[] blockMeans(double[] x, int block) {

@@ -30,8 +30,11 @@ public final class BaiPerron {
     public record Result(Model model, int minimumRegime, List<Segmentation> byBreaks, Segmentation chosen, int observed) {
     }
 
-    /** No brief needs more; it also bounds the O(M n²) work (our rule). */
-    public static final int DEFAULT_MAX_BREAKS = 10;
+    /**
+     * Six breaks (seven regimes) are more than a brief can tell well, and serial correlation makes
+     * BIC propose too many anyway; the cap also bounds the O(M n²) work (our rule).
+     */
+    public static final int DEFAULT_MAX_BREAKS = 6;
 
     private final Model model;
     private final int minimumRegime;
@@ -70,23 +73,36 @@ public final class BaiPerron {
         }
         // strucchange: at most ceil(n / h) − 2 breaks
         int maxM = Math.min(maxBreaks, Math.max(0, (int) Math.ceil(n / (double) h) - 2));
+        // The triangular table of segment costs (Bai & Perron 2003, §3), stored by segment end so
+        // that the inner loop below reads it in order: byEnd[j][s] = RSS of s..j.
+        double[][] byEnd = new double[n][];
+        for (int j = 0; j < n; j++) {
+            byEnd[j] = new double[Math.max(0, j - h + 2)];
+            for (int start = 0; start <= j - h + 1; start++) {
+                byEnd[j][start] = cost.rss(start, j);
+            }
+        }
         double[][] best = new double[maxM + 1][n];
         int[][] from = new int[maxM + 1][n];
         for (int j = 0; j < n; j++) {
-            best[0][j] = j >= h - 1 ? cost.rss(0, j) : Double.POSITIVE_INFINITY;
+            best[0][j] = j >= h - 1 ? byEnd[j][0] : Double.POSITIVE_INFINITY;
         }
         for (int m = 1; m <= maxM; m++) {
+            double[] previous = best[m - 1];
             for (int j = 0; j < n; j++) {
-                best[m][j] = Double.POSITIVE_INFINITY;
-                from[m][j] = -1;
-                // the last regime is i+1..j with j − i ≥ h; the m earlier regimes need (m)·h values
+                double bestHere = Double.POSITIVE_INFINITY;
+                int bestFrom = -1;
+                double[] ending = byEnd[j];
+                // the last regime is i+1..j with j − i ≥ h; the m earlier regimes need m·h values
                 for (int i = m * h - 1; i <= j - h; i++) {
-                    double candidate = best[m - 1][i] + cost.rss(i + 1, j);
-                    if (candidate < best[m][j]) {
-                        best[m][j] = candidate;
-                        from[m][j] = i;
+                    double candidate = previous[i] + ending[i + 1];
+                    if (candidate < bestHere) {
+                        bestHere = candidate;
+                        bestFrom = i;
                     }
                 }
+                best[m][j] = bestHere;
+                from[m][j] = bestFrom;
             }
         }
         double observed = cost.observed(0, n - 1);

@@ -20,7 +20,7 @@ import java.util.Random;
 public final class BreakDateInterval {
 
     public static final int REPLICATIONS = 2000;
-    static final int STEPS_PER_PERIOD = 10;
+    static final int STEPS_PER_PERIOD = 4;
     private static final long SEED = 19970801L;
 
     /** @param lower,upper offsets in whole periods from the estimated date (lower ≤ 0 ≤ upper) */

@@ -19,6 +19,21 @@ final class SegmentCost {
     SegmentCost(double[] y, BaiPerron.Model model) {
         this.model = model;
         int n = y.length;
+        count = new double[n + 1];
+        sumT = new double[n + 1];
+        sumTT = new double[n + 1];
+        sumY = new double[n + 1];
+        sumTY = new double[n + 1];
+        sumYY = new double[n + 1];
+        load(y);
+    }
+
+    /**
+     * Replaces the values by {@code y} (same length), reusing the arrays: the Monte Carlo tests
+     * load thousands of series.
+     */
+    void load(double[] y) {
+        int n = y.length;
         double mean = 0;
         int observed = 0;
         for (double v : y) {
@@ -29,12 +44,6 @@ final class SegmentCost {
         }
         mean /= Math.max(1, observed);
         double tCentre = (n - 1) / 2.0;
-        count = new double[n + 1];
-        sumT = new double[n + 1];
-        sumTT = new double[n + 1];
-        sumY = new double[n + 1];
-        sumTY = new double[n + 1];
-        sumYY = new double[n + 1];
         for (int i = 0; i < n; i++) {
             boolean present = !Double.isNaN(y[i]);
             double t = i - tCentre;

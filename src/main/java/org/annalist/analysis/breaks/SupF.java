@@ -38,24 +38,48 @@ public final class SupF {
 
     /** @throws IllegalArgumentException when no date leaves both regimes h long */
     public static Result test(double[] y, BaiPerron.Model model, int h) {
-        double[] observed = statistic(y, model, h);
+        return test(y, model, h, REPLICATIONS, false);
+    }
+
+    /**
+     * Whether the sup-F test rejects at {@code alpha}, with {@value #DECISION_REPLICATIONS}
+     * replications that stop as soon as the answer is no: cheap enough to run for every candidate
+     * break (the p-values reported come from {@link #test(double[], BaiPerron.Model, int)}).
+     */
+    public static boolean rejects(double[] y, BaiPerron.Model model, int h, double alpha) {
+        return test(y, model, h, DECISION_REPLICATIONS, true).test().pValue() < alpha;
+    }
+
+    /** Enough for a 5 % decision (Davison &amp; Hinkley 1997, §4.2.5, ask for 99 or more). */
+    public static final int DECISION_REPLICATIONS = 199;
+
+    private static Result test(double[] y, BaiPerron.Model model, int h, int replications, boolean stopWhenClear) {
+        double[] observed = statistic(new SegmentCost(y, model), y.length, h);
         int start = (int) observed[1];
         double phi = Math.max(0, Math.min(0.95, residualLag1(y, model)));
         Random random = new Random(SEED);
         double[] noise = new double[y.length];
+        SegmentCost cost = new SegmentCost(noise, model);
         double innovationSd = Math.sqrt(1 - phi * phi);
         int exceed = 0;
-        for (int r = 0; r < REPLICATIONS; r++) {
+        int limit = (int) Math.ceil(0.05 * (replications + 1)) - 1;   // beyond this p ≥ 5 %
+        int run = 0;
+        for (int r = 0; r < replications; r++) {
             double e = random.nextGaussian();
             for (int i = 0; i < y.length; i++) {
                 e = i == 0 ? e : phi * e + innovationSd * random.nextGaussian();
                 noise[i] = Double.isNaN(y[i]) ? Double.NaN : e;
             }
-            if (statistic(noise, model, h)[0] >= observed[0]) {
+            cost.load(noise);
+            if (statistic(cost, y.length, h)[0] >= observed[0]) {
                 exceed++;
             }
+            run++;
+            if (stopWhenClear && exceed > limit) {
+                break;
+            }
         }
-        double p = (1.0 + exceed) / (1.0 + REPLICATIONS);
+        double p = run < replications ? 1 : (1.0 + exceed) / (1.0 + replications);
         int n = 0;
         for (double v : y) {
             n += Double.isNaN(v) ? 0 : 1;
@@ -82,10 +106,18 @@ public final class SupF {
         return den == 0 ? 0 : num / den;
     }
 
-    /** {sup F, first index of the new regime at the sup}. */
-    static double[] statistic(double[] y, BaiPerron.Model model, int h) {
+    /** The Chow statistic of a break with the new regime from {@code start}. */
+    public static double chow(double[] y, BaiPerron.Model model, int start) {
         SegmentCost cost = new SegmentCost(y, model);
         int n = y.length;
+        int k = cost.parameters();
+        double rss0 = cost.rss(0, n - 1);
+        double rss1 = cost.rss(0, start - 1) + cost.rss(start, n - 1);
+        return ((rss0 - rss1) / k) / (rss1 / (cost.observed(0, n - 1) - 2 * k));
+    }
+
+    /** {sup F, first index of the new regime at the sup}. */
+    static double[] statistic(SegmentCost cost, int n, int h) {
         int k = cost.parameters();
         double observed = cost.observed(0, n - 1);
         double rss0 = cost.rss(0, n - 1);

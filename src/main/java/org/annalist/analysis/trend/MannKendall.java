@@ -58,6 +58,14 @@ public final class MannKendall {
 
     /** @throws IllegalArgumentException with fewer than 3 observed values */
     public static Result test(double[] x, Correction correction) {
+        return test(x, correction, Double.NaN);
+    }
+
+    /**
+     * As {@link #test(double[], Correction)}, with the Sen slope per step of the observed values
+     * already known (NaN to compute it): the corrections detrend with it.
+     */
+    public static Result test(double[] x, Correction correction, double senSlopePerStep) {
         double[] observed = Arrays.stream(x).filter(d -> !Double.isNaN(d)).toArray();
         int n = observed.length;
         if (n < 3) {
@@ -67,7 +75,8 @@ public final class MannKendall {
         double factor = 1;
         List<Integer> lags = new ArrayList<>();
         if (correction != Correction.NONE) {
-            factor = varianceFactor(observed, correction, lags);
+            double slope = Double.isNaN(senSlopePerStep) ? SenSlope.medianSlope(observed) : senSlopePerStep;
+            factor = varianceFactor(observed, correction, slope, lags);
         }
         double variance = score.variance() * factor;
         double z = KendallScore.z(score.s(), variance);
@@ -82,9 +91,8 @@ public final class MannKendall {
     }
 
     /** [Hamed &amp; Rao 1998, eq. 18] from the ranks of the Sen-detrended series. */
-    private static double varianceFactor(double[] x, Correction correction, List<Integer> lags) {
+    private static double varianceFactor(double[] x, Correction correction, double slope, List<Integer> lags) {
         int n = x.length;
-        double slope = SenSlope.medianSlope(x);
         double[] detrended = new double[n];
         for (int i = 0; i < n; i++) {
             detrended[i] = x[i] - slope * (i + 1);

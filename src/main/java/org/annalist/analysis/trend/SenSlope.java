@@ -54,9 +54,38 @@ public final class SenSlope {
         return interval(slopes, period, varianceS, true);
     }
 
+    /**
+     * The pairwise slopes of a series, computed once: their median (which the serial-correlation
+     * correction of the Kendall test needs first) and then the estimate with its interval.
+     */
+    public static final class Pairwise {
+        private final double[] slopes;
+
+        private Pairwise(double[] slopes) {
+            this.slopes = slopes;
+        }
+
+        /** Median slope per period. */
+        public double medianPerStep() {
+            return medianOf(slopes);
+        }
+
+        /** The estimate per year with the Gilbert interval from {@code varianceS}. */
+        public Result estimate(double periodsPerYear, double varianceS) {
+            return interval(slopes, periodsPerYear, varianceS, false);
+        }
+    }
+
+    public static Pairwise pairwise(double[] x) {
+        return new Pairwise(pairwise(x, 1));
+    }
+
     /** Median slope per step of a gap-free sequence (used to detrend in the Hamed–Rao correction). */
     static double medianSlope(double[] x) {
-        double[] slopes = pairwise(x, 1);
+        return medianOf(pairwise(x, 1));
+    }
+
+    private static double medianOf(double[] slopes) {
         int n = slopes.length;
         double[] middle = n % 2 == 1 ? OrderStatistics.select(slopes, n / 2)
                 : OrderStatistics.select(slopes, n / 2 - 1, n / 2);
