@@ -66,7 +66,7 @@ final class BreakAnalysis {
             int to = j + 1 < starts.length ? starts[j + 1] - 1 : n - 1;
             breaks.add(describe(series, screened, log, model, h, from, start, to));
         }
-        return new Result(List.copyOf(breaks), episodes(series, screened, log, breaks), method,
+        return new Result(List.copyOf(breaks), episodes(series, screened, log, breaks, model), method,
                 starts.length == 0 ? 0 : starts[starts.length - 1]);
     }
 
@@ -161,42 +161,34 @@ final class BreakAnalysis {
     }
 
     /**
-     * A collapse (a break that lowers the level by {@link DecisionRules#COLLAPSE_PCT} % or more) and
-     * what followed it: the low point in the collapsed regime, and how much of the fall the level
-     * has regained by the next break (or by the latest period when no break follows).
+     * A collapse (a break that lowers the level by {@link DecisionRules#COLLAPSE_PCT} % or more)
+     * followed by a recovery: the next break raises the level again, or the collapsed regime itself
+     * rises (a level-and-slope regime that ends higher than it began). The low point is the lower
+     * end of the collapsed regime's fitted line; the share regained compares the level after the
+     * recovery (or at the latest period) with it.
      */
-    private static List<Episode> episodes(Series series, double[] y, boolean log, List<BreakFinding> breaks) {
+    private static List<Episode> episodes(Series series, double[] y, boolean log, List<BreakFinding> breaks,
+                                          BaiPerron.Model model) {
         List<Episode> episodes = new ArrayList<>();
         for (int j = 0; j < breaks.size(); j++) {
             BreakFinding fall = breaks.get(j);
             if (fall.changePct() > DecisionRules.COLLAPSE_PCT) {
                 continue;
             }
-            int end = j + 1 < breaks.size() ? breaks.get(j + 1).index() : y.length;
-            int low = -1;
-            for (int i = fall.index(); i < end; i++) {
-                if (!Double.isNaN(y[i]) && (low < 0 || y[i] < y[low])) {
-                    low = i;
-                }
+            boolean followed = j + 1 < breaks.size();
+            int end = followed ? breaks.get(j + 1).index() - 1 : y.length - 1;
+            double atStart = BaiPerron.regimeFit(y, model, fall.index(), end, fall.index())[0];
+            double atEnd = BaiPerron.regimeFit(y, model, fall.index(), end, end)[0];
+            double recovered = followed ? breaks.get(j + 1).levelAfter() : log ? Math.exp(atEnd) : atEnd;
+            int lowIndex = atEnd < atStart ? end : fall.index();
+            double low = log ? Math.exp(Math.min(atStart, atEnd)) : Math.min(atStart, atEnd);
+            if (recovered <= low * (1 + DecisionRules.MIN_BREAK_CHANGE_PCT / 100)) {
+                continue;   // no recovery to speak of: a lasting fall, which the break itself describes
             }
-            if (low < 0) {
-                continue;
-            }
-            double lowValue = log ? Math.exp(y[low]) : y[low];
-            double recovered;
-            String recovery;
-            if (j + 1 < breaks.size()) {
-                recovered = breaks.get(j + 1).levelAfter();
-                recovery = breaks.get(j + 1).period();
-            } else {
-                double[] fit = BaiPerron.regimeFit(y, BaiPerron.Model.LEVEL_AND_SLOPE, fall.index(), y.length - 1,
-                        y.length - 1);
-                recovered = log ? Math.exp(fit[0]) : fit[0];
-                recovery = null;
-            }
-            double fallSize = fall.levelBefore() - lowValue;
-            double regained = fallSize <= 0 ? 1 : Math.max(0, (recovered - lowValue) / fallSize);
-            episodes.add(new Episode(fall.period(), recovery, series.period(low).label(), lowValue, regained));
+            double fallSize = fall.levelBefore() - low;
+            double regained = fallSize <= 0 ? 1 : Math.min(1.5, (recovered - low) / fallSize);
+            episodes.add(new Episode(fall.period(), followed ? breaks.get(j + 1).period() : null,
+                    series.period(lowIndex).label(), low, regained));
         }
         return List.copyOf(episodes);
     }

@@ -5,8 +5,8 @@ package org.annalist.findings;
  *
  * @param start         first period of the collapse
  * @param recovery      first period of the regime after the collapsed one (null while the series is still in it)
- * @param lowPoint      the period of the lowest seasonally adjusted value between them
- * @param lowValue      that value, in the series' units
+ * @param lowPoint      the period where the collapsed regime's fitted level is lowest
+ * @param lowValue      that level, seasonally adjusted, in the series' units
  * @param regainedShare how much of the fall the level had regained by then, or by the latest period (1 = all)
  */
 public record Episode(String start, String recovery, String lowPoint, double lowValue, double regainedShare) {
