@@ -3,11 +3,16 @@ package org.annalist.brief;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 import org.annalist.chart.Figure;
+import org.annalist.chart.IrregularChart;
 import org.annalist.chart.OverviewChart;
+import org.annalist.chart.SeasonalProfileChart;
+import org.annalist.chart.YearOverlayChart;
 import org.annalist.findings.Analyst;
 import org.annalist.findings.Findings;
 import org.annalist.findings.SourceFacts;
@@ -43,23 +48,59 @@ public final class BriefPipeline {
     public Brief make(BriefRequest request, ReadResult read, Series series) {
         Fonts.registerWithAwt();
         Findings findings = analyst.analyse(series);
-        Figure overview = OverviewChart.of(series, findings.smoothing());
-        Masthead masthead = new Masthead(request.title(), request.organisation(), Locale.ENGLISH,
+        Masthead masthead = new Masthead(request.title(), request.organisation(), Locale.ENGLISH, request.paper(),
                 request.generatedAt(), "Annalist " + Version.current());
-        BriefView view = BriefViews.of(series, findings, sourceFacts(read), masthead);
+        SourceFacts source = sourceFacts(read);
+        List<String> warnings = new ArrayList<>();
+        String missing = Fonts.missingGlyphs(String.join(" ", request.title(), request.organisation(), series.name(),
+                series.unit(), source.file(), String.join(" ", source.notes())));
+        if (!missing.isEmpty()) {
+            String warning = "the brief's font has no glyph for " + missing.codePoints().mapToObj(Character::toString)
+                    .map(c -> "'" + c + "' (U+" + String.format(Locale.ROOT, "%04X", c.codePointAt(0)) + ")")
+                    .reduce((a, b) -> a + ", " + b).orElse("") + "; they print as # in the text and ? in charts";
+            warnings.add(warning);
+            source = new SourceFacts(source.file(), source.sha256(), source.rowsRead(), source.reading(),
+                    concat(source.notes(), "Note: " + warning + "."));
+        }
+        BriefView view = BriefViews.of(series, findings, source, masthead);
         String xhtml = new TemplateEngine(request.templates()).render(TemplateEngine.BRIEF_TEMPLATE, view);
         byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
-                List.of(overview), request.generatedAt(), documentId(read.sha256(), series.name()));
+                figures(series, findings, view), request.generatedAt(), documentId(read.sha256(), series.name()));
         try {
             AtomicFiles.write(request.output(), pdf);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + request.output(), e);
         }
-        return new Brief(request.output(), series.name(), findings);
+        return new Brief(request.output(), series.name(), findings, List.copyOf(warnings));
     }
 
-    /** The brief made: where it is and what it found. */
-    public record Brief(java.nio.file.Path file, String series, Findings findings) {
+    /** The charts the template places; those the view does not draw are left out. */
+    private static List<Figure> figures(Series series, Findings findings, BriefView view) {
+        List<Figure> figures = new ArrayList<>();
+        figures.add(OverviewChart.of(series, findings));
+        if (view.charts().profile().drawn()) {
+            figures.add(SeasonalProfileChart.of(findings.seasonality(), series.unit()));
+        }
+        if (view.charts().years().drawn()) {
+            figures.add(YearOverlayChart.of(series));
+        }
+        if (view.charts().irregular().drawn()) {
+            figures.add(IrregularChart.of(series, findings));
+        }
+        return figures;
+    }
+
+    private static List<String> concat(List<String> list, String item) {
+        List<String> all = new ArrayList<>(list);
+        all.add(item);
+        return all;
+    }
+
+    /**
+     * The brief made: where it is, what it found, and warnings for the user (characters the font
+     * lacks).
+     */
+    public record Brief(Path file, String series, Findings findings, List<String> warnings) {
     }
 
     static SourceFacts sourceFacts(ReadResult read) {

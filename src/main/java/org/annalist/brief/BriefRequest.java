@@ -5,6 +5,7 @@ import java.time.Instant;
 import java.util.Objects;
 import java.util.Optional;
 import org.annalist.ingest.ReadOptions;
+import org.annalist.narrative.Masthead;
 
 /**
  * One brief to make.
@@ -12,10 +13,10 @@ import org.annalist.ingest.ReadOptions;
  * @param series      the series to brief; may be empty when the file holds only one
  * @param title       empty to title the brief with the series name
  * @param templates   a folder of templates that override the bundled ones
- * @param generatedAt the time the brief states as made (pinned for reproducible output)
+ * @param generatedAt the time the brief states as made (pinned for reproducible output; see {@link GenerationTime})
  */
 public record BriefRequest(Path input, ReadOptions readOptions, Optional<String> series, Path output, String title,
-                           String organisation, Optional<Path> templates, Instant generatedAt) {
+                           String organisation, Optional<Path> templates, Instant generatedAt, Masthead.Paper paper) {
 
     public BriefRequest {
         Objects.requireNonNull(input, "input");
@@ -26,5 +27,6 @@ public record BriefRequest(Path input, ReadOptions readOptions, Optional<String>
         Objects.requireNonNull(organisation, "organisation");
         Objects.requireNonNull(templates, "templates");
         Objects.requireNonNull(generatedAt, "generatedAt");
+        Objects.requireNonNull(paper, "paper");
     }
 }

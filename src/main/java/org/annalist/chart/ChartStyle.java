@@ -27,16 +27,70 @@ public final class ChartStyle {
     /** Observed values of a long, dense series: light enough for the trend-cycle to read through. */
     public static final Color INK_LIGHT = new Color(0x9A, 0xA4, 0xAE);
     public static final Color GRID = new Color(0xD4, 0xD8, 0xDD);
+    /** Shaded intervals (break dates): light enough for the lines to read over it, in print too. */
+    public static final Color SHADE = new Color(0xE4, 0xE7, 0xEB);
+    /** Bars of the seasonal profile. */
+    public static final Color BAR = new Color(0x5B, 0x6B, 0x7B);
 
     public static final Stroke OBSERVED_STROKE = new BasicStroke(1.0f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
     public static final Stroke OBSERVED_THIN_STROKE = new BasicStroke(0.5f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
     public static final Stroke GRID_STROKE = new BasicStroke(0.5f);
+    public static final Stroke MARKER_STROKE = new BasicStroke(1.0f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER,
+            10f, new float[] {3f, 2f}, 0f);
     public static final Stroke TREND_STROKE = new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND,
             10f, new float[] {7f, 3.5f}, 0f);
+
+    private static final String[] MONTHS = {"Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov",
+        "Dec"};
 
     private static boolean installed;
 
     private ChartStyle() {
+    }
+
+    /** The 8 pt font of chart labels and annotations (the minimum the brief prints). */
+    public static Font smallFont() {
+        return new Font(FONT_FAMILY, Font.PLAIN, 8);
+    }
+
+    /** A period as a chart label: {@code Jul 2019}, {@code Q3 2019}, {@code 2019}, {@code 3 Mar 2024}. */
+    public static String shortLabel(org.annalist.series.Period p) {
+        return switch (p.frequency()) {
+            case ANNUAL -> String.valueOf(p.year());
+            case QUARTERLY -> p.seasonLabel() + " " + p.year();
+            case MONTHLY -> MONTHS[p.seasonalPosition() - 1] + " " + p.year();
+            case WEEKLY -> p.label();
+            case DAILY, BUSINESS_DAILY -> p.startDate().getDayOfMonth() + " "
+                    + MONTHS[p.startDate().getMonthValue() - 1] + " " + p.startDate().getYear();
+        };
+    }
+
+    /** An arrow to (x, y) from above (for a high value) or below, carrying {@code label} in the 8 pt font. */
+    public static org.jfree.chart.annotations.XYPointerAnnotation pointer(String label, double x, double y,
+                                                                          boolean fromAbove) {
+        org.jfree.chart.annotations.XYPointerAnnotation pointer = new org.jfree.chart.annotations.XYPointerAnnotation(
+                label, x, y, fromAbove ? -Math.PI / 2 : Math.PI / 2);
+        pointer.setFont(smallFont());
+        pointer.setPaint(INK);
+        pointer.setArrowPaint(INK);
+        pointer.setArrowLength(5);
+        pointer.setArrowWidth(2.5);
+        pointer.setBaseRadius(15);
+        pointer.setTipRadius(3);
+        pointer.setTextAnchor(fromAbove ? org.jfree.chart.ui.TextAnchor.BOTTOM_CENTER
+                : org.jfree.chart.ui.TextAnchor.TOP_CENTER);
+        return pointer;
+    }
+
+    /**
+     * Replaces the characters the embedded font cannot draw by {@code ?}: chart text drawn by AWT
+     * has no per-glyph fallback and would show empty boxes instead.
+     */
+    public static String drawable(String text) {
+        Font font = new Font(FONT_FAMILY, Font.PLAIN, 9);
+        StringBuilder out = new StringBuilder(text.length());
+        text.codePoints().forEach(cp -> out.appendCodePoint(font.canDisplay(cp) ? cp : '?'));
+        return out.toString();
     }
 
     /**

@@ -6,6 +6,10 @@ import java.text.SimpleDateFormat;
 import java.time.ZoneOffset;
 import java.util.Locale;
 import java.util.TimeZone;
+import java.util.List;
+import org.annalist.findings.BreakFinding;
+import org.annalist.findings.Findings;
+import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.Smoothing;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
@@ -15,7 +19,13 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.DateAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.block.BlockBorder;
+import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.SeriesRenderingOrder;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.TextAnchor;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
@@ -23,7 +33,10 @@ import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
-/** The series over its whole span with its trend-cycle line. */
+/**
+ * The series over its whole span with its trend-cycle line; structural breaks as a dashed line at
+ * the new regime's first period over their shaded 95 % interval; outliers pointed at and labelled.
+ */
 public final class OverviewChart {
 
     private static final TimeZone UTC = TimeZone.getTimeZone(ZoneOffset.UTC);
@@ -33,7 +46,8 @@ public final class OverviewChart {
     private OverviewChart() {
     }
 
-    public static Figure of(Series series, Smoothing smoothing) {
+    public static Figure of(Series series, Findings findings) {
+        Smoothing smoothing = findings.smoothing();
         ChartStyle.install();
         XYSeriesCollection data = new XYSeriesCollection();
         XYSeries observed = new XYSeries("Observed", false, true);
@@ -49,7 +63,7 @@ public final class OverviewChart {
             }
             data.addSeries(trend);
         }
-        JFreeChart chart = ChartFactory.createXYLineChart(null, null, series.unit().isEmpty() ? null : series.unit(),
+        JFreeChart chart = ChartFactory.createXYLineChart(null, null, series.unit().isEmpty() ? null : ChartStyle.drawable(series.unit()),
                 data);
         XYPlot plot = chart.getXYPlot();
         DateAxis time = new DateAxis(null, UTC, Locale.ROOT);
@@ -62,6 +76,7 @@ public final class OverviewChart {
         values.setNumberFormatOverride(NumberFormats.axis());
         // A flat series would otherwise get a range so narrow that every tick shows the same number.
         values.setAutoRangeMinimumSize(Math.max(1e-9, 0.1 * maxAbs(series)));
+        values.setUpperMargin(0.2);   // room above the highest value for an outlier's label
         plot.setOutlineVisible(false);
         plot.setDomainGridlinesVisible(false);
 
@@ -80,12 +95,64 @@ public final class OverviewChart {
         }
         plot.setRenderer(renderer);
         plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);   // the trend-cycle on top of the data
+        markBreaks(plot, series, findings.breaks());
+        markOutliers(plot, series, findings.outliers());
         LegendTitle legend = chart.getLegend();
         legend.setPosition(RectangleEdge.TOP);
         legend.setFrame(BlockBorder.NONE);
         legend.setBackgroundPaint(Color.WHITE);
 
         return new Figure("overview", chart);
+    }
+
+    /** Each break: its 95 % interval shaded, its first period as a dashed line. */
+    private static void markBreaks(XYPlot plot, Series series, List<BreakFinding> breaks) {
+        for (int j = 0; j < breaks.size(); j++) {
+            BreakFinding b = breaks.get(j);
+            int from = indexOf(series, b.ci95().get(0));
+            int to = indexOf(series, b.ci95().get(1));
+            IntervalMarker interval = new IntervalMarker(startMillis(series.period(from)), endMillis(series.period(to)));
+            interval.setPaint(ChartStyle.SHADE);
+            interval.setAlpha(1f);
+            plot.addDomainMarker(interval, Layer.BACKGROUND);
+            ValueMarker line = new ValueMarker(startMillis(series.period(b.index())));
+            line.setPaint(ChartStyle.INK);
+            line.setStroke(ChartStyle.MARKER_STROKE);
+            line.setLabel(ChartStyle.shortLabel(series.period(b.index())));
+            // alternate heights so that the labels of breaks close together do not overlap
+            line.setLabelOffset(new RectangleInsets(j % 2 == 0 ? 2 : 12, 2, 2, 2));
+            line.setLabelFont(ChartStyle.smallFont());
+            line.setLabelPaint(ChartStyle.INK);
+            line.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            line.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+            line.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+            plot.addDomainMarker(line, Layer.FOREGROUND);
+        }
+    }
+
+    /** Each outlier: an arrow to the value, labelled with its period, from above or below. */
+    private static void markOutliers(XYPlot plot, Series series, List<OutlierFinding> outliers) {
+        for (OutlierFinding o : outliers) {
+            plot.addAnnotation(ChartStyle.pointer(ChartStyle.shortLabel(series.period(o.index())),
+                    midpointMillis(series.period(o.index())), o.observed(), o.direction().equals("above")));
+        }
+    }
+
+    private static int indexOf(Series series, String label) {
+        for (int i = 0; i < series.size(); i++) {
+            if (series.period(i).label().equals(label)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("no period " + label);
+    }
+
+    static double startMillis(Period period) {
+        return period.startDate().atStartOfDay(ZoneOffset.UTC).toInstant().toEpochMilli();
+    }
+
+    static double endMillis(Period period) {
+        return period.endDate().plusDays(1).atStartOfDay(ZoneOffset.UTC).toInstant().toEpochMilli();
     }
 
     private static double maxAbs(Series series) {

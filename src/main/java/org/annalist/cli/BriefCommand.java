@@ -1,7 +1,6 @@
 package org.annalist.cli;
 
 import java.nio.file.Path;
-import java.time.Instant;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -42,14 +41,18 @@ final class BriefCommand implements Callable<Integer> {
     InputMixin input;
 
     @Mixin
+    BriefOptions briefOptions;
+
+    @Mixin
     DebugOption debug;
 
     @Override
     public Integer call() {
         Path target = output != null ? output : Path.of(defaultName(input.file, series));
         BriefRequest request = new BriefRequest(input.file, input.toReadOptions(), Optional.ofNullable(series), target,
-                title, organisation, Optional.ofNullable(templates), Instant.now());
+                title, organisation, Optional.ofNullable(templates), briefOptions.generatedAt(), briefOptions.paper());
         BriefPipeline.Brief brief = new BriefPipeline().make(request);
+        brief.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
         spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series() + ")");
         return Main.EXIT_OK;
     }

@@ -54,6 +54,9 @@ final class DemoCommand implements Callable<Integer> {
     Path out = Path.of("out");
 
     @Mixin
+    BriefOptions briefOptions;
+
+    @Mixin
     DebugOption debug;
 
     @Override
@@ -64,10 +67,10 @@ final class DemoCommand implements Callable<Integer> {
         }
         PrintWriter console = spec.commandLine().getOut();
         BriefPipeline pipeline = new BriefPipeline();
-        Instant now = Instant.now();
+        Instant now = briefOptions.generatedAt();
         for (DemoBrief demo : BRIEFS) {
             BriefRequest request = new BriefRequest(data.resolve(demo.file()), demo.options(), Optional.of(demo.series()),
-                    out.resolve(demo.output()), demo.title(), ORGANISATION, Optional.empty(), now);
+                    out.resolve(demo.output()), demo.title(), ORGANISATION, Optional.empty(), now, briefOptions.paper());
             BriefPipeline.Brief brief = pipeline.make(request);
             console.println("wrote " + brief.file());
         }

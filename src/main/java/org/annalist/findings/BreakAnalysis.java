@@ -188,7 +188,8 @@ final class BreakAnalysis {
             double fallSize = fall.levelBefore() - low;
             double regained = fallSize <= 0 ? 1 : Math.min(1.5, (recovered - low) / fallSize);
             episodes.add(new Episode(fall.period(), followed ? breaks.get(j + 1).period() : null,
-                    series.period(lowIndex).label(), low, regained));
+                    series.period(lowIndex).label(), low, regained, fall.index(),
+                    followed ? breaks.get(j + 1).index() : -1, lowIndex));
         }
         return List.copyOf(episodes);
     }

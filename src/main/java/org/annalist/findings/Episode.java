@@ -8,6 +8,8 @@ package org.annalist.findings;
  * @param lowPoint      the period where the collapsed regime's fitted level is lowest
  * @param lowValue      that level, seasonally adjusted, in the series' units
  * @param regainedShare how much of the fall the level had regained by then, or by the latest period (1 = all)
+ * @param recoveryIndex position of {@code recovery}, or -1
  */
-public record Episode(String start, String recovery, String lowPoint, double lowValue, double regainedShare) {
+public record Episode(String start, String recovery, String lowPoint, double lowValue, double regainedShare,
+                      int startIndex, int recoveryIndex, int lowIndex) {
 }

@@ -3,48 +3,132 @@ package org.annalist.narrative;
 import java.util.List;
 
 /**
- * Everything the brief template shows, already worded and formatted: the template arranges, it
- * does not compute.
- *
- * @param language     BCP 47 tag of the narrative, e.g. {@code en}
- * @param latest       the latest period's comparison with a year before, absent when it cannot be made
- * @param facts        the data summary, label and value
- * @param notes        what the reader of the data should know (warnings from reading the file)
+ * Everything the brief template shows, already formatted: numbers as text in the brief's
+ * language, flags for the template's choices. The template chooses the sentences; nothing here
+ * is a sentence.
  */
-public record BriefView(String language, String title, String organisation, String seriesName, String unit,
-                        String periodCovered, String latestPeriod, Latest latest, List<Fact> facts,
-                        FigureView overview, String smoothingNote, List<Row> recent, List<String> notes,
-                        Provenance provenance) {
+public record BriefView(Document document, Header header, Lead lead, List<KeyFigure> keyFigures, Charts charts,
+                        TrendView trend, SeasonView season, CycleView cycle, List<OutlierRow> outliers,
+                        List<BreakRow> breaks, List<EpisodeView> episodes, IrregularView irregular,
+                        List<Row> recent, List<Fact> facts, List<String> notes, List<MethodRow> methods,
+                        List<Fact> thresholds, Provenance provenance) {
 
     public BriefView {
-        facts = List.copyOf(facts);
+        keyFigures = List.copyOf(keyFigures);
+        outliers = List.copyOf(outliers);
+        breaks = List.copyOf(breaks);
+        episodes = List.copyOf(episodes);
         recent = List.copyOf(recent);
+        facts = List.copyOf(facts);
         notes = List.copyOf(notes);
+        methods = List.copyOf(methods);
+        thresholds = List.copyOf(thresholds);
+    }
+
+    /** @param paper CSS page size, {@code A4} or {@code letter} */
+    public record Document(String language, String paper, String author, String keywords) {
+    }
+
+    /**
+     * @param unitPerPeriod the unit with its period, e.g. {@code nights a month}; empty without a unit
+     */
+    public record Header(String title, String organisation, String seriesName, String unit, String periodCovered,
+                         String latestPeriod, String generatedAt, String frequency, String unitPerPeriod) {
+    }
+
+    /**
+     * The latest period against a year earlier; {@code comparable} false when that cannot be said.
+     *
+     * @param atPeriod  {@code In October 2026} / {@code On Saturday 31 October 2026}
+     * @param direction {@code up}, {@code down} or {@code flat}
+     */
+    public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
+                       String changePercent, String direction, boolean provisional) {
+    }
+
+    /** One of the first page's four figures. */
+    public record KeyFigure(String label, String value, String note) {
+    }
+
+    /** A chart's place and the facts its text alternative states. */
+    public record ChartView(String id, boolean drawn) {
+    }
+
+    /**
+     * @param firstLevel trend-cycle level in the first full year, formatted
+     * @param lastLevel  in the last full year
+     * @param rose       whether it is higher at the end
+     * @param drops      years of collapses (breaks of −10 % or more)
+     */
+    public record Charts(ChartView overview, ChartView profile, ChartView years, ChartView irregular, String firstYear,
+                         String lastYear, String firstLevel, String lastLevel, boolean rose, List<String> drops,
+                         String smoothingMethod, int smoothingWindow) {
+
+        public Charts {
+            drops = List.copyOf(drops);
+        }
+    }
+
+    /**
+     * @param direction {@code increasing}, {@code decreasing} or {@code none}
+     * @param slopeSize  the slope without its sign, for "by about 2,120 a year"
+     * @param sinceBreak the trend within the latest regime, or null
+     */
+    public record TrendView(boolean assessed, String direction, String test, String statistic, String pValue,
+                            String slopePerYear, String slopeSize, String lower, String upper, String percentPerYear, String basis,
+                            String reason, SinceBreak sinceBreak, String seasonalKendall) {
+    }
+
+    /** @param since the first period of the latest regime, in words */
+    public record SinceBreak(String since, String direction, String slopePerYear, String lower, String upper,
+                             String pValue) {
+    }
+
+    /**
+     * @param verdict {@code present}, {@code negligible}, {@code absent}, {@code too short} or {@code not applicable}
+     * @param strengthWord {@code strong}, {@code moderate} or {@code weak}
+     * @param indexUnit {@code %} for multiplicative, the series unit for additive
+     */
+    public record SeasonView(String verdict, String period, String strength, String strengthWord, String test,
+                             String statistic, String pValue, String peak, String peakIndex, String trough,
+                             String troughIndex, String swing, String indexUnit, boolean multiplicative,
+                             boolean changed, String formReason, String years) {
+    }
+
+    public record CycleView(boolean present, String length, boolean regular, List<String> peaks, String spectralPeriod,
+                            String pValue, String reason) {
+
+        public CycleView {
+            peaks = List.copyOf(peaks);
+        }
+    }
+
+    public record OutlierRow(String period, String observed, String expected, String deviation, String score,
+                             boolean above) {
+    }
+
+    public record BreakRow(String period, String from, String to, String before, String after, String change,
+                           boolean rise, String statistic, String pValue, boolean provisional) {
+    }
+
+    /** @param recovery null while the series is still in the collapsed regime */
+    public record EpisodeView(String start, String recovery, String lowPoint, String lowValue, String regained) {
+    }
+
+    /** @param label {@code small}, {@code moderate} or {@code large}; null when not measured */
+    public record IrregularView(String label, String share) {
     }
 
     public record Fact(String label, String value) {
     }
 
-    /**
-     * A chart's place on the page: {@code id} matches the drawn chart.
-     *
-     * @param smoothing the trend-cycle method drawn, empty when none
-     */
-    public record FigureView(String id, String smoothing) {
-    }
-
-    /**
-     * @param atPeriod  the latest period as a sentence opens with it: {@code In October 2026}
-     * @param direction {@code up}, {@code down} or {@code flat}
-     * @param provisional true when the latest value is flagged provisional or estimated
-     */
-    public record Latest(String atPeriod, String value, String yearEarlierPeriod, String changePercent,
-                         String direction, boolean provisional) {
-    }
-
     /** A row of the table of latest periods. */
     public record Row(String period, String value, String yearEarlier, String change, String changePercent,
                       String note) {
+    }
+
+    /** A method of the appendix: what, its source, and the settings actually used. */
+    public record MethodRow(String name, String citation, String settings) {
     }
 
     public record Provenance(String file, String sha256, String rowsRead, String reading, String software,

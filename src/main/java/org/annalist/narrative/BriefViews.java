@@ -2,6 +2,7 @@ package org.annalist.narrative;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.annalist.findings.BreakFinding;
 import org.annalist.findings.Findings;
 import org.annalist.findings.RecentPeriod;
 import org.annalist.findings.SeriesFacts;
@@ -19,8 +20,48 @@ public final class BriefViews {
 
     public static BriefView of(Series series, Findings findings, SourceFacts source, Masthead masthead) {
         Formats f = Formats.forValues(series.values(), masthead.language());
-        SeriesFacts facts = findings.series();
+        SectionViews sections = new SectionViews(series, findings, f);
         String title = masthead.title().isEmpty() ? series.name() : masthead.title();
+        String author = masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation();
+        BriefView.Document document = new BriefView.Document(masthead.language().toLanguageTag(), masthead.paper().css(),
+                author, "time series, " + series.name());
+        BriefView.Header header = new BriefView.Header(title, masthead.organisation(), series.name(), series.unit(),
+                f.period(series.start()) + " to " + f.period(series.end()), f.period(series.end()),
+                f.timestamp(masthead.generatedAt()), findings.series().frequency(), unitPerPeriod(series));
+        BriefView.Lead lead = lead(series, findings, f);
+        BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
+                f.count(source.rowsRead()), source.reading(), masthead.software(), f.timestamp(masthead.generatedAt()));
+        List<String> notes = new ArrayList<>(source.notes());
+        notes.addAll(findings.notes());
+        return new BriefView(document, header, lead, sections.keyFigures(lead), sections.charts(), sections.trend(),
+                sections.season(), sections.cycle(), sections.outliers(), sections.breaks(), sections.episodes(),
+                sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(), facts(series, findings, f),
+                notes, AppendixViews.methods(findings, f), AppendixViews.thresholds(), provenance);
+    }
+
+    private static BriefView.Lead lead(Series series, Findings findings, Formats f) {
+        if (findings.recent().isEmpty()) {
+            return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", "flat", false);
+        }
+        RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
+        boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
+                || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
+        if (last.value() == null || last.changePct() == null) {
+            return new BriefView.Lead(false, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
+                    "", "", "flat", provisional);
+        }
+        double pct = last.changePct();
+        String direction = Math.abs(pct) < 0.05 ? "flat" : pct > 0 ? "up" : "down";
+        String yearEarlier = last.period().frequency() == Frequency.DAILY
+                || last.period().frequency() == Frequency.BUSINESS_DAILY
+                ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
+                : f.period(last.yearEarlierPeriod());
+        return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
+                yearEarlier, f.percent(Math.abs(pct)), direction, provisional);
+    }
+
+    private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {
+        SeriesFacts facts = findings.series();
         List<BriefView.Fact> summary = new ArrayList<>();
         summary.add(new BriefView.Fact("Series", series.name() + (series.unit().isEmpty() ? "" : " (" + series.unit() + ")")));
         summary.add(new BriefView.Fact("Frequency", facts.frequency()));
@@ -34,54 +75,42 @@ public final class BriefViews {
                 summary.add(new BriefView.Fact(capitalise(flag.description()), listPeriods(flagged, f)));
             }
         }
-        String smoothingNote = findings.smoothing() == null
-                ? "The series is too short for a trend-cycle line."
-                : "The dashed line is a " + findings.smoothing().method() + ": each point is the average of the "
-                        + findings.smoothing().window() + " periods around it, which evens out the seasonal pattern. "
-                        + "It cannot be computed for the first and last " + (findings.smoothing().window() / 2)
-                        + " periods.";
-        BriefView.FigureView overview = new BriefView.FigureView("overview",
-                findings.smoothing() == null ? "" : findings.smoothing().method());
-        List<BriefView.Row> rows = findings.recent().stream().map(r -> row(r, f)).toList();
-        BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
-                f.count(source.rowsRead()), source.reading(), masthead.software(), f.timestamp(masthead.generatedAt()));
-        return new BriefView(masthead.language().toLanguageTag(), title, masthead.organisation(), series.name(),
-                series.unit(), f.period(series.start()) + " to " + f.period(series.end()), f.period(series.end()),
-                latest(series, findings, f), summary, overview, smoothingNote, rows, source.notes(), provenance);
-    }
-
-    private static BriefView.Latest latest(Series series, Findings findings, Formats f) {
-        if (findings.recent().isEmpty()) {
-            return null;
-        }
-        RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
-        if (last.value() == null || last.changePct() == null) {
-            return null;
-        }
-        double pct = last.changePct();
-        String direction = Math.abs(pct) < 0.05 ? "flat" : pct > 0 ? "up" : "down";
-        boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
-                || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
-        String yearEarlier = last.period().frequency() == Frequency.DAILY
-                || last.period().frequency() == Frequency.BUSINESS_DAILY
-                ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
-                : f.period(last.yearEarlierPeriod());
-        return new BriefView.Latest(f.atPeriod(last.period()), f.value(last.value()), yearEarlier,
-                f.percent(Math.abs(pct)), direction, provisional);
+        return summary;
     }
 
     private static BriefView.Row row(RecentPeriod r, Formats f) {
-        return new BriefView.Row(f.shortPeriod(r.period()), f.value(r.value()), f.value(r.yearEarlier()), f.signedValue(r.change()),
-                f.signedPercent(r.changePct()), String.join("; ", r.flags()));
+        return new BriefView.Row(f.shortPeriod(r.period()), f.value(r.value()), f.value(r.yearEarlier()),
+                f.signedValue(r.change()), f.signedPercent(r.changePct()), String.join("; ", r.flags()));
     }
 
-    private static String listPeriods(List<Period> periods, Formats f) {
+    /** {@code nights a month}: the unit and the period it is counted over. */
+    private static String unitPerPeriod(Series series) {
+        if (series.unit().isEmpty()) {
+            return "";
+        }
+        String per = switch (series.frequency()) {
+            case ANNUAL -> "a year";
+            case QUARTERLY -> "a quarter";
+            case MONTHLY -> "a month";
+            case WEEKLY -> "a week";
+            case DAILY, BUSINESS_DAILY -> "a day";
+        };
+        return series.unit() + " " + per;
+    }
+
+    static String listPeriods(List<Period> periods, Formats f) {
         List<String> words = periods.stream().limit(6).map(f::period).toList();
         String list = String.join(", ", words);
         return periods.size() > 6 ? list + " and " + (periods.size() - 6) + " more" : list;
     }
 
-    private static String capitalise(String s) {
+    static String capitalise(String s) {
         return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+
+    /** Breaks that lowered the level by 10 % or more, by year. */
+    static List<String> dropYears(Series series, List<BreakFinding> breaks) {
+        return breaks.stream().filter(b -> b.changePct() <= -10).map(b -> String.valueOf(series.period(b.index()).year()))
+                .distinct().toList();
     }
 }

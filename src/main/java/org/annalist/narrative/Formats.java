@@ -64,6 +64,47 @@ public final class Formats {
         return pattern(1).format(pct) + "\u00A0%";
     }
 
+    /** {@code p < 0.001} or {@code p = 0.023}; at or below {@code floor} (a Monte Carlo test's smallest p), {@code p ≤ floor}. */
+    public String pValue(double p, double floor) {
+        if (p <= floor) {
+            return "p \u2264 " + pattern(3).format(floor);
+        }
+        if (p < 0.001) {
+            return "p < 0.001";
+        }
+        return "p = " + pattern(3).format(p);
+    }
+
+    public String pValue(double p) {
+        return pValue(p, 0);
+    }
+
+    /** Three significant digits, grouped: {@code 2,940}, {@code 1.34}, {@code 0.0712}. */
+    public String significant(double v) {
+        if (v == 0 || Double.isNaN(v)) {
+            return Double.isNaN(v) ? "\u2013" : "0";
+        }
+        double magnitude = Math.floor(Math.log10(Math.abs(v)));
+        int places = (int) Math.max(0, 2 - magnitude);
+        double rounded = Math.round(v / Math.pow(10, magnitude - 2)) * Math.pow(10, magnitude - 2);
+        return (rounded < 0 ? "\u2212" : "") + pattern(places).format(Math.abs(rounded));
+    }
+
+    /** As {@link #significant}, with a sign: {@code +2,940}. */
+    public String signedSignificant(double v) {
+        return v > 0 ? "+" + significant(v) : significant(v);
+    }
+
+    /** A number with {@code places} decimals. */
+    public String fixed(double v, int places) {
+        return pattern(places).format(v);
+    }
+
+    /** A signed number with {@code places} decimals: {@code +1.9}. */
+    public String signedFixed(double v, int places) {
+        return sign(v) + pattern(places).format(Math.abs(v));
+    }
+
     public String count(long n) {
         return pattern(0).format(n);
     }

@@ -49,6 +49,16 @@ public final class Fonts {
         registeredWithAwt = true;
     }
 
+    /** The characters of {@code text} that the brief's font has no glyph for, each once, in order. */
+    public static String missingGlyphs(String text) {
+        registerWithAwt();
+        Font font = new Font(ChartStyle.FONT_FAMILY, Font.PLAIN, 10);
+        StringBuilder missing = new StringBuilder();
+        text.codePoints().filter(cp -> !Character.isWhitespace(cp) && !font.canDisplay(cp)).distinct()
+                .forEach(missing::appendCodePoint);
+        return missing.toString();
+    }
+
     static void registerWith(PdfRendererBuilder builder) {
         for (Face face : FACES) {
             builder.useFont(() -> open(face.resource()), ChartStyle.FONT_FAMILY, face.weight(), face.style(), true);

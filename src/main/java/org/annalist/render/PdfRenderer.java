@@ -21,12 +21,19 @@ import java.util.logging.Logger;
 import java.util.stream.Collectors;
 import java.awt.geom.Rectangle2D;
 import org.annalist.chart.Figure;
+import java.awt.color.ColorSpace;
+import java.awt.color.ICC_Profile;
+import java.nio.charset.StandardCharsets;
 import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.common.PDMetadata;
+import org.apache.pdfbox.util.DateConverter;
 
 /**
- * Lays out the brief's XHTML (paged-media CSS) as PDF with openhtmltopdf on PDFBox, drawing each
- * {@code <object type="application/x-jfreechart" data-chart="ID">} as vector graphics in the
- * brief's embedded font, so that chart text stays real, searchable text.
+ * Lays out the brief's XHTML (paged-media CSS) as PDF/A-2u and PDF/UA-1 with openhtmltopdf on
+ * PDFBox, drawing each {@code <object type="application/x-jfreechart" data-chart="ID" alt="…">} as
+ * vector graphics in the brief's embedded font, so that chart text stays real, searchable text and
+ * the {@code alt} becomes the figure's alternative text. Creation date and document ID are pinned
+ * by the caller, so the same input gives the same bytes.
  */
 public final class PdfRenderer {
 
@@ -58,6 +65,11 @@ public final class PdfRenderer {
         PdfRendererBuilder builder = new PdfRendererBuilder();
         builder.useFastMode();
         builder.withHtmlContent(xhtml, baseUri);
+        // PDF/A-2u for archiving, PDF/UA-1 for screen readers (tagged, alternative texts); the sRGB
+        // OutputIntent PDF/A requires is the JDK's own profile.
+        builder.usePdfAConformance(PdfRendererBuilder.PdfAConformance.PDFA_2_U);
+        builder.usePdfUaAccessibility(true);
+        builder.useColorProfile(ICC_Profile.getInstance(ColorSpace.CS_sRGB).getData());
         builder.useObjectDrawerFactory(drawers);
         Fonts.registerWith(builder);
         ByteArrayOutputStream pdf = new ByteArrayOutputStream(256 * 1024);
@@ -68,7 +80,7 @@ public final class PdfRenderer {
                 Calendar created = new GregorianCalendar(TimeZone.getTimeZone("UTC"));
                 created.setTimeInMillis(createdAt.toEpochMilli());
                 document.getDocumentInformation().setCreationDate(created);
-                document.getDocumentInformation().setProducer("Annalist");
+                pinXmpCreateDate(document, created);
                 document.setDocumentId(documentId);
                 document.save(pdf);
             }
@@ -76,6 +88,26 @@ public final class PdfRenderer {
             throw new UncheckedIOException("the PDF could not be laid out", e);
         }
         return pdf.toByteArray();
+    }
+
+    /**
+     * openhtmltopdf copies the clock's time into the XMP metadata, which PDF/A requires to agree
+     * with the document information; the XMP text is patched (xmpbox's strict parser rejects the
+     * PDF/UA namespace openhtmltopdf writes).
+     */
+    private static void pinXmpCreateDate(PDDocument document, Calendar created) throws IOException {
+        PDMetadata metadata = document.getDocumentCatalog().getMetadata();
+        if (metadata == null) {
+            return;
+        }
+        String xmp;
+        try (var in = metadata.exportXMPMetadata()) {
+            xmp = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+        String date = DateConverter.toISO8601(created);
+        String patched = xmp.replaceAll("<xmp:CreateDate>[^<]*</xmp:CreateDate>", "<xmp:CreateDate>" + date + "</xmp:CreateDate>")
+                .replaceAll("xmp:CreateDate=\"[^\"]*\"", "xmp:CreateDate=\"" + date + "\"");
+        metadata.importXMPMetadata(patched.getBytes(StandardCharsets.UTF_8));
     }
 
     private static FSObjectDrawer chartDrawer(Map<String, Figure> figures) {

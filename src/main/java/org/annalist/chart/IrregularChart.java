@@ -1,0 +1,72 @@
+package org.annalist.chart;
+
+import java.text.SimpleDateFormat;
+import java.time.ZoneOffset;
+import java.util.Locale;
+import java.util.TimeZone;
+import org.annalist.findings.Findings;
+import org.annalist.findings.OutlierFinding;
+import org.annalist.series.Series;
+import org.jfree.chart.ChartFactory;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.DateAxis;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYBarRenderer;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * The irregular component over time, as thin bars around zero (% of the expected value for a
+ * multiplicative series, units otherwise), with the outliers pointed at and labelled.
+ */
+public final class IrregularChart {
+
+    private IrregularChart() {
+    }
+
+    public static Figure of(Series series, Findings findings) {
+        ChartStyle.install();
+        boolean multiplicative = findings.decomposition().multiplicative();
+        double[] irregular = findings.decomposition().irregular();
+        XYSeries bars = new XYSeries("irregular", false, true);
+        for (int i = 0; i < irregular.length; i++) {
+            double v = irregular[i];
+            bars.add(OverviewChart.midpointMillis(series.period(i)),
+                    Double.isNaN(v) ? null : multiplicative ? 100 * (v - 1) : v);
+        }
+        XYSeriesCollection data = new XYSeriesCollection(bars);
+        String axis = multiplicative ? "% against trend and season" : ChartStyle.drawable(series.unit().isEmpty()
+                ? "against trend and season" : series.unit() + " against trend and season");
+        JFreeChart chart = ChartFactory.createXYBarChart(null, null, true, axis, data);
+        XYPlot plot = chart.getXYPlot();
+        TimeZone utc = TimeZone.getTimeZone(ZoneOffset.UTC);
+        DateAxis time = new DateAxis(null, utc, Locale.ROOT);
+        SimpleDateFormat years = new SimpleDateFormat("yyyy", Locale.ENGLISH);
+        years.setTimeZone(utc);
+        time.setDateFormatOverride(years);
+        plot.setDomainAxis(time);
+        ChartFactory.getChartTheme().apply(chart);
+        chart.removeLegend();
+        plot.setOutlineVisible(false);
+        plot.setDomainGridlinesVisible(false);
+        plot.setRangeGridlineStroke(ChartStyle.GRID_STROKE);
+        plot.setRangeZeroBaselineVisible(true);
+        plot.setRangeZeroBaselinePaint(ChartStyle.INK);
+        ((NumberAxis) plot.getRangeAxis()).setNumberFormatOverride(NumberFormats.axis());
+        plot.getRangeAxis().setUpperMargin(0.2);
+        plot.getRangeAxis().setLowerMargin(0.2);
+        XYBarRenderer renderer = (XYBarRenderer) plot.getRenderer();
+        renderer.setSeriesPaint(0, ChartStyle.BAR);
+        renderer.setShadowVisible(false);
+        renderer.setDrawBarOutline(false);
+        renderer.setMargin(0.15);
+        for (OutlierFinding o : findings.outliers()) {
+            double v = irregular[o.index()];
+            double y = multiplicative ? 100 * (v - 1) : v;
+            plot.addAnnotation(ChartStyle.pointer(ChartStyle.shortLabel(series.period(o.index())),
+                    OverviewChart.midpointMillis(series.period(o.index())), y, y >= 0));
+        }
+        return new Figure("irregular", chart);
+    }
+}

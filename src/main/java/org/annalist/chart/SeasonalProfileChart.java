@@ -1,0 +1,65 @@
+package org.annalist.chart;
+
+import java.awt.Color;
+import java.text.DecimalFormat;
+import java.text.DecimalFormatSymbols;
+import java.util.Locale;
+import org.annalist.findings.SeasonalityFinding;
+import org.jfree.chart.ChartFactory;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.CategoryAxis;
+import org.jfree.chart.labels.ItemLabelAnchor;
+import org.jfree.chart.labels.ItemLabelPosition;
+import org.jfree.chart.labels.StandardCategoryItemLabelGenerator;
+import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.renderer.category.BarRenderer;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.category.DefaultCategoryDataset;
+
+/**
+ * The seasonal profile: one bar per season position, its index (% above or below the yearly
+ * average, or units), each bar labelled with its value so the peak and trough can be read off.
+ */
+public final class SeasonalProfileChart {
+
+    private SeasonalProfileChart() {
+    }
+
+    public static Figure of(SeasonalityFinding season, String unit) {
+        ChartStyle.install();
+        boolean multiplicative = season.form().equals("multiplicative");
+        DefaultCategoryDataset data = new DefaultCategoryDataset();
+        for (SeasonalityFinding.ProfilePoint p : season.profile()) {
+            // rounded as labelled, so that a tiny index reads 0, not −0
+            data.addValue(multiplicative ? Math.rint(p.index()) + 0.0 : p.index(), "index", p.label());
+        }
+        String axis = multiplicative ? "% against the yearly average" : ChartStyle.drawable(unit.isEmpty()
+                ? "against the yearly average" : unit + " against the yearly average");
+        JFreeChart chart = ChartFactory.createBarChart(null, null, axis, data, PlotOrientation.VERTICAL, false, false,
+                false);
+        CategoryPlot plot = chart.getCategoryPlot();
+        plot.setOutlineVisible(false);
+        plot.setRangeGridlineStroke(ChartStyle.GRID_STROKE);
+        plot.setRangeZeroBaselineVisible(true);
+        plot.setRangeZeroBaselinePaint(ChartStyle.INK);
+        plot.getRangeAxis().setUpperMargin(0.15);
+        plot.getRangeAxis().setLowerMargin(0.15);
+        ((org.jfree.chart.axis.NumberAxis) plot.getRangeAxis()).setNumberFormatOverride(NumberFormats.axis());
+        CategoryAxis positions = plot.getDomainAxis();
+        positions.setCategoryMargin(0.25);
+        BarRenderer bars = (BarRenderer) plot.getRenderer();
+        bars.setSeriesPaint(0, ChartStyle.BAR);
+        bars.setSeriesOutlinePaint(0, Color.WHITE);
+        bars.setDrawBarOutline(false);
+        bars.setDefaultItemLabelGenerator(new StandardCategoryItemLabelGenerator("{2}",
+                new DecimalFormat(multiplicative ? "+#,##0;\u2212#,##0" : "+#,##0.#;\u2212#,##0.#",
+                        DecimalFormatSymbols.getInstance(Locale.ENGLISH))));
+        bars.setDefaultItemLabelsVisible(true);
+        bars.setDefaultItemLabelFont(ChartStyle.smallFont());
+        bars.setDefaultItemLabelPaint(ChartStyle.INK);
+        bars.setDefaultPositiveItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE12, TextAnchor.BOTTOM_CENTER));
+        bars.setDefaultNegativeItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE6, TextAnchor.TOP_CENTER));
+        return new Figure("profile", chart);
+    }
+}

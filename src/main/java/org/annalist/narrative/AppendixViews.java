@@ -1,0 +1,56 @@
+package org.annalist.narrative;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.annalist.findings.Findings;
+import org.annalist.findings.RulesInForce;
+
+/** The methods appendix: each method with its source and the settings this brief used. */
+final class AppendixViews {
+
+    private AppendixViews() {
+    }
+
+    static List<BriefView.MethodRow> methods(Findings findings, Formats f) {
+        List<BriefView.MethodRow> rows = new ArrayList<>();
+        rows.add(new BriefView.MethodRow("Additive or multiplicative",
+                "elasticity of the yearly seasonal swing to the yearly level; Hyndman & Athanasopoulos (2021), "
+                        + "Forecasting: Principles and Practice, 3rd ed., section 3.2",
+                findings.form().form() + ": " + findings.form().reason()
+                        + (findings.form().elasticity() == null ? "" : " (elasticity " + f.fixed(findings.form().elasticity(), 2)
+                        + ", level ratio " + f.fixed(findings.form().levelRatio(), 2) + ")")));
+        if (findings.decomposition().method() != null) {
+            rows.add(new BriefView.MethodRow("Seasonal-trend decomposition",
+                    "STL: Cleveland, Cleveland, McRae & Terpenning (1990), Journal of Official Statistics 6, 3\u201373",
+                    findings.decomposition().method()));
+        }
+        if (findings.smoothing() != null) {
+            rows.add(new BriefView.MethodRow("Trend-cycle line", "centred moving average; Hyndman & Athanasopoulos (2021), "
+                    + "section 3.3", findings.smoothing().method()));
+        }
+        if (findings.trend().test() != null) {
+            rows.add(new BriefView.MethodRow("Trend test", "Mann (1945), Kendall (1975); variance corrected for "
+                    + "serial correlation after Hamed & Rao (1998); Sen (1968) slope with the interval of Gilbert (1987)",
+                    findings.trend().test()));
+        }
+        if (findings.seasonality().test() != null) {
+            rows.add(new BriefView.MethodRow("Seasonal pattern", "Kruskal & Wallis (1952) test of the detrended values "
+                    + "by season; strength after Wang, Smith & Hyndman (2006)", "period " + findings.seasonality().period()
+                    + "; profile from the last three complete years"));
+        }
+        rows.add(new BriefView.MethodRow("Cycles", "periodogram against an AR(1) red-noise background (Gilman, "
+                + "Fuglister & Mitchell 1963), confirmed by the peaks", "yearly values"
+                + (findings.seasonality().present() ? " (means of the seasonally adjusted series)" : "")));
+        rows.add(new BriefView.MethodRow("Structural breaks", "Bai & Perron (1998, 2003); dates' intervals after "
+                + "Bai (1997); PELT: Killick, Fearnhead & Eckley (2012)", findings.breakMethod()));
+        rows.add(new BriefView.MethodRow("Outliers", "modified z-score of the decomposition remainder (Iglewicz & "
+                + "Hoaglin 1993), robust scale (MAD)", "outliers kept out of the break search; none reported next to a break"));
+        rows.add(new BriefView.MethodRow("Irregular fluctuation", "share of the variation around the long-run "
+                + "straight line carried by the remainder", ""));
+        return rows;
+    }
+
+    static List<BriefView.Fact> thresholds() {
+        return RulesInForce.all().stream().map(r -> new BriefView.Fact(r.decides(), r.value())).toList();
+    }
+}

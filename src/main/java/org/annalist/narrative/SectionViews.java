@@ -1,0 +1,215 @@
+package org.annalist.narrative;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.annalist.findings.BreakFinding;
+import org.annalist.findings.CycleFinding;
+import org.annalist.findings.Episode;
+import org.annalist.findings.Findings;
+import org.annalist.findings.OutlierFinding;
+import org.annalist.findings.RulesInForce;
+import org.annalist.findings.SeasonalityFinding;
+import org.annalist.findings.TrendFinding;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+
+/** The views of the brief's sections "what the series is doing", formatted from the findings. */
+final class SectionViews {
+
+    /** Monte Carlo p-values cannot go below 1 / (replications + 1). */
+    private static final double BREAK_P_FLOOR = 0.002;
+
+    private final Series series;
+    private final Findings findings;
+    private final Formats f;
+
+    SectionViews(Series series, Findings findings, Formats f) {
+        this.series = series;
+        this.findings = findings;
+        this.f = f;
+    }
+
+    BriefView.TrendView trend() {
+        TrendFinding t = findings.trend();
+        if (t.test() == null) {
+            return new BriefView.TrendView(false, "none", "", "", "", "", "", "", "", "", "", t.reason(), null, null);
+        }
+        BriefView.SinceBreak since = null;
+        TrendFinding.LatestRegime r = t.latestRegime();
+        if (r != null) {
+            since = new BriefView.SinceBreak(f.period(period(r.since())), r.direction(), f.signedSignificant(r.slopePerYear()),
+                    f.significant(r.lower95()), f.significant(r.upper95()), f.pValue(r.pValue()));
+        }
+        String kendall = t.seasonalKendall() == null ? null
+                : "seasonal Kendall z = " + f.fixed(t.seasonalKendall().statistic(), 2) + ", "
+                        + f.pValue(t.seasonalKendall().pValue());
+        return new BriefView.TrendView(true, t.direction(), t.test(), f.fixed(t.statistic(), 2), f.pValue(t.pValue()),
+                f.signedSignificant(t.slopePerYear()), f.significant(Math.abs(t.slopePerYear())),
+                f.significant(t.slopeCi95().get(0)),
+                f.significant(t.slopeCi95().get(1)),
+                t.changePctPerYear() == null ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%", t.basis(), null,
+                since, kendall);
+    }
+
+    BriefView.SeasonView season() {
+        SeasonalityFinding s = findings.seasonality();
+        String formReason = findings.form().reason();
+        if (s.period() == null || s.test() == null) {
+            return new BriefView.SeasonView(s.period() == null ? "not applicable" : "too short",
+                    s.period() == null ? "" : String.valueOf(s.period()), "", "", "", "", "", "", "", "", "", "", "",
+                    s.form().equals("multiplicative"), false, formReason,
+                    String.valueOf(RulesInForce.minimumYearsForSeason()));
+        }
+        boolean multiplicative = s.form().equals("multiplicative");
+        SeasonalityFinding.ProfilePoint peak = extreme(s, true);
+        SeasonalityFinding.ProfilePoint trough = extreme(s, false);
+        String strengthWord = RulesInForce.seasonalStrengthWord(s.strength());
+        return new BriefView.SeasonView(s.verdict(), String.valueOf(s.period()), f.fixed(s.strength(), 2), strengthWord,
+                s.test(), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), positionName(peak.label()),
+                index(peak.index(), multiplicative), positionName(trough.label()), index(trough.index(), multiplicative),
+                multiplicative ? f.fixed(s.swing(), 0) : f.significant(s.swing()),
+                multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason,
+                String.valueOf(RulesInForce.minimumYearsForSeason()));
+    }
+
+    BriefView.CycleView cycle() {
+        CycleFinding c = findings.cycle();
+        return new BriefView.CycleView(c.present(), c.length() == null ? "" : f.fixed(c.length(), 1), c.regular(),
+                c.peaks(), c.spectralPeriod() == null ? "" : f.fixed(c.spectralPeriod(), 1),
+                c.pValue() == null ? "" : f.pValue(c.pValue()), c.reason());
+    }
+
+    List<BriefView.OutlierRow> outliers() {
+        List<BriefView.OutlierRow> rows = new ArrayList<>();
+        for (OutlierFinding o : findings.outliers()) {
+            rows.add(new BriefView.OutlierRow(f.period(series.period(o.index())), f.value(o.observed()),
+                    f.value(o.expected()), f.signedPercent(o.deviationPct()), f.fixed(Math.abs(o.score()), 1),
+                    o.direction().equals("above")));
+        }
+        return rows;
+    }
+
+    List<BriefView.BreakRow> breaks() {
+        List<BriefView.BreakRow> rows = new ArrayList<>();
+        for (BreakFinding b : findings.breaks()) {
+            rows.add(new BriefView.BreakRow(f.period(series.period(b.index())), f.period(period(b.ci95().get(0))),
+                    f.period(period(b.ci95().get(1))), f.value(b.levelBefore()), f.value(b.levelAfter()),
+                    f.signedPercent(b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
+                    f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional()));
+        }
+        return rows;
+    }
+
+    List<BriefView.EpisodeView> episodes() {
+        List<BriefView.EpisodeView> views = new ArrayList<>();
+        for (Episode e : findings.episodes()) {
+            views.add(new BriefView.EpisodeView(f.period(series.period(e.startIndex())),
+                    e.recoveryIndex() < 0 ? null : f.period(series.period(e.recoveryIndex())),
+                    f.period(series.period(e.lowIndex())), f.value(e.lowValue()),
+                    f.fixed(Math.min(100, 100 * e.regainedShare()), 0) + "\u00A0%"));
+        }
+        return views;
+    }
+
+    BriefView.IrregularView irregular() {
+        return findings.irregular().share() == null ? new BriefView.IrregularView(null, "")
+                : new BriefView.IrregularView(findings.irregular().label(), f.fixed(100 * findings.irregular().share(), 0)
+                + "\u00A0%");
+    }
+
+    BriefView.Charts charts() {
+        boolean subAnnual = series.frequency() == Frequency.MONTHLY || series.frequency() == Frequency.QUARTERLY;
+        boolean seasonal = findings.seasonality().present();
+        double[] trend = findings.decomposition().trendCycle() != null ? findings.decomposition().trendCycle()
+                : findings.smoothing() != null ? findings.smoothing().trendCycle() : series.values();
+        int first = firstFinite(trend);
+        int last = lastFinite(trend);
+        return new BriefView.Charts(new BriefView.ChartView("overview", true),
+                new BriefView.ChartView("profile", seasonal), new BriefView.ChartView("years", subAnnual && seasonal
+                && series.size() >= 2 * series.frequency().seasonalPeriod()),
+                new BriefView.ChartView("irregular", findings.decomposition().irregular() != null),
+                String.valueOf(series.period(first).year()), String.valueOf(series.period(last).year()),
+                f.significant(trend[first]), f.significant(trend[last]), trend[last] > trend[first],
+                BriefViews.dropYears(series, findings.breaks()),
+                findings.smoothing() == null ? "" : findings.smoothing().method(),
+                findings.smoothing() == null ? 0 : findings.smoothing().window());
+    }
+
+    List<BriefView.KeyFigure> keyFigures(BriefView.Lead lead) {
+        List<BriefView.KeyFigure> figures = new ArrayList<>();
+        figures.add(new BriefView.KeyFigure(lead.period(), lead.value().isEmpty() ? "\u2013" : lead.value(),
+                lead.comparable() ? (lead.direction().equals("down") ? "\u2212" : "+") + lead.changePercent()
+                        + " on a year earlier" : "no comparison with a year earlier"));
+        BriefView.TrendView t = trend();
+        figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || t.direction().equals("none") ? "no clear trend"
+                : t.percentPerYear() + " a year", t.assessed() ? "Sen slope " + t.slopePerYear() + " a year, " + t.pValue()
+                : "too few values"));
+        BriefView.SeasonView s = season();
+        figures.add(new BriefView.KeyFigure("Seasonal peak", s.verdict().equals("present") ? s.peak() : "none claimed",
+                s.verdict().equals("present") ? s.peakIndex() + " against the yearly average; low in " + s.trough()
+                        : s.verdict().equals("not applicable") ? "annual data" : "no meaningful seasonal pattern"));
+        int breaks = findings.breaks().size();
+        int outliers = findings.outliers().size();
+        figures.add(new BriefView.KeyFigure("Unusual periods", breaks + " " + (breaks == 1 ? "break" : "breaks") + ", "
+                + outliers + " " + (outliers == 1 ? "one-off" : "one-offs"),
+                breaks == 0 ? "no structural change found" : "latest break " + f.period(series.period(
+                findings.breaks().get(breaks - 1).index()))));
+        return figures;
+    }
+
+    private String index(double value, boolean multiplicative) {
+        return multiplicative ? f.signedFixed(value, 0) + "\u00A0%" : f.signedSignificant(value)
+                + (series.unit().isEmpty() ? "" : " " + series.unit());
+    }
+
+    private static SeasonalityFinding.ProfilePoint extreme(SeasonalityFinding s, boolean highest) {
+        SeasonalityFinding.ProfilePoint best = s.profile().get(0);
+        for (SeasonalityFinding.ProfilePoint p : s.profile()) {
+            if (highest ? p.index() > best.index() : p.index() < best.index()) {
+                best = p;
+            }
+        }
+        return best;
+    }
+
+    /** Month abbreviations become names in running text; quarters and weekdays stay as they are. */
+    private static String positionName(String label) {
+        return switch (label) {
+            case "Jan" -> "January"; case "Feb" -> "February"; case "Mar" -> "March"; case "Apr" -> "April";
+            case "May" -> "May"; case "Jun" -> "June"; case "Jul" -> "July"; case "Aug" -> "August";
+            case "Sep" -> "September"; case "Oct" -> "October"; case "Nov" -> "November"; case "Dec" -> "December";
+            case "Mon" -> "Mondays"; case "Tue" -> "Tuesdays"; case "Wed" -> "Wednesdays"; case "Thu" -> "Thursdays";
+            case "Fri" -> "Fridays"; case "Sat" -> "Saturdays"; case "Sun" -> "Sundays";
+            default -> label;
+        };
+    }
+
+    /** The series' period with this label. */
+    private Period period(String label) {
+        for (int i = 0; i < series.size(); i++) {
+            if (series.period(i).label().equals(label)) {
+                return series.period(i);
+            }
+        }
+        throw new IllegalArgumentException("no period " + label + " in " + series.name());
+    }
+
+    private static int firstFinite(double[] x) {
+        for (int i = 0; i < x.length; i++) {
+            if (!Double.isNaN(x[i])) {
+                return i;
+            }
+        }
+        return 0;
+    }
+
+    private static int lastFinite(double[] x) {
+        for (int i = x.length - 1; i >= 0; i--) {
+            if (!Double.isNaN(x[i])) {
+                return i;
+            }
+        }
+        return x.length - 1;
+    }
+}

@@ -1,0 +1,150 @@
+package org.annalist.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.annalist.findings.Analyst;
+import org.annalist.findings.BreakFinding;
+import org.annalist.findings.Findings;
+import org.annalist.findings.OutlierFinding;
+import org.annalist.ingest.ReadOptions;
+import org.annalist.ingest.SeriesFileReader;
+import org.annalist.render.PdfConformance;
+import org.annalist.series.Series;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The brief as a document: its statements, its conformance, its reproducibility, its template sandbox. */
+class BriefDocumentTest {
+
+    private static final String NIGHTS = "demo-data/quennelmark-guest-nights.csv";
+    private static final String TIME = "2026-11-20T08:00:00Z";
+
+    @TempDir
+    static Path folder;
+
+    static Path total;
+    static PdfFacts totalFacts;
+    static Findings totalFindings;
+
+    @BeforeAll
+    static void makeTheDemoBrief() throws IOException {
+        total = folder.resolve("total.pdf");
+        Run run = Run.of("brief", NIGHTS, "--series", "Total", "-o", total.toString(), "--generated-at", TIME,
+                "--title", "Guest nights in Quennelmark");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        totalFacts = PdfFacts.of(total);
+        Series s = new SeriesFileReader(ReadOptions.defaults()).read(Path.of(NIGHTS)).require("Total");
+        totalFindings = new Analyst().analyse(s);
+    }
+
+    private static String flat(String text) {
+        return text.replace('\u00A0', ' ').replaceAll("\\s+", " ");
+    }
+
+    @Test
+    void everyFindingIsStatedWithItsNumbers() {
+        String text = flat(totalFacts.text());
+        Findings f = totalFindings;
+        assertThat(text).contains("the series has been increasing, by about 2,120 nights a year");
+        assertThat(text).contains(String.format(java.util.Locale.ROOT, "z = %.2f", f.trend().statistic()));
+        assertThat(text).contains("It peaks in August");
+        assertThat(text).contains("No cycle longer than a year stands out");
+        assertThat(text).contains("The level changed " + f.breaks().size() + " times");
+        for (BreakFinding b : f.breaks()) {
+            assertThat(text).contains(String.format(java.util.Locale.ROOT, "%.1f %%", Math.abs(b.changePct())));
+        }
+        for (OutlierFinding o : f.outliers()) {
+            assertThat(text).contains(String.format(java.util.Locale.ROOT, "%,.0f", o.observed()));
+        }
+        assertThat(text).contains("The fall from January 2021 reads as one episode");
+        assertThat(text).contains("Reading guide", "p-value", "Seasonally adjusted", "Trend-cycle");
+        assertThat(text).contains("decisions rest with the reader");
+        assertThat(text).contains(f.series().name());
+    }
+
+    @Test
+    void fontsAreEmbeddedAndChartsAreVectors() {
+        assertThat(totalFacts.unembeddedFonts()).isEmpty();
+        assertThat(totalFacts.images()).isZero();
+        assertThat(totalFacts.pages()).isBetween(4, 8);
+    }
+
+    @Test
+    void theDemoBriefIsPdfA2uAndPdfUa1() throws Exception {
+        assertThat(PdfConformance.violations(total, "2u")).isEmpty();
+        assertThat(PdfConformance.violations(total, "ua1")).isEmpty();
+    }
+
+    @Test
+    void briefsOfOtherLayoutsConformToo() throws Exception {
+        // annual (Nile), quarterly (UKgas), and daily data aggregated to months, on US Letter
+        for (String[] c : List.of(new String[] {"src/test/resources/reference/Nile.csv"},
+                new String[] {"src/test/resources/reference/UKgas.csv", "--paper", "letter"},
+                new String[] {"demo-data/glassworks-daily-visitors.csv", "--aggregate", "month"})) {
+            Path pdf = folder.resolve(Path.of(c[0]).getFileName() + ".pdf");
+            String[] args = new String[c.length + 5];
+            args[0] = "brief";
+            System.arraycopy(c, 0, args, 1, c.length);
+            args[c.length + 1] = "-o";
+            args[c.length + 2] = pdf.toString();
+            args[c.length + 3] = "--generated-at";
+            args[c.length + 4] = TIME;
+            Run run = Run.of(args);
+            assertThat(run.exitCode()).as(run.err()).isZero();
+            assertThat(PdfConformance.violations(pdf, "2u")).as(c[0]).isEmpty();
+            assertThat(PdfConformance.violations(pdf, "ua1")).as(c[0]).isEmpty();
+        }
+    }
+
+    @Test
+    void twoRendersOfTheSameInputAreByteIdentical() throws IOException {
+        Path again = folder.resolve("again.pdf");
+        Run run = Run.of("brief", NIGHTS, "--series", "Total", "-o", again.toString(), "--generated-at", TIME,
+                "--title", "Guest nights in Quennelmark");
+        assertThat(run.exitCode()).isZero();
+        assertThat(Files.readAllBytes(again)).isEqualTo(Files.readAllBytes(total));
+    }
+
+    @Test
+    void aTemplateThatTriesToRunJavaIsRefused() throws IOException {
+        Path templates = Files.createDirectories(folder.resolve("evil"));
+        Files.writeString(templates.resolve("brief.ftlx"),
+                "<html>\n<#assign run = \"freemarker.template.utility.Execute\"?new()>${run(\"id\")}</html>\n");
+        Run run = Run.of("brief", "src/test/resources/reference/Nile.csv", "-o", folder.resolve("evil.pdf").toString(),
+                "--templates", templates.toString());
+        assertThat(run.exitCode()).isEqualTo(2);
+        assertThat(run.err()).contains("brief.ftlx:2:").doesNotContain("uid=");
+        assertThat(folder.resolve("evil.pdf")).doesNotExist();
+    }
+
+    @Test
+    void aTemplateCannotReachOutsideItsFolder() throws IOException {
+        Path templates = Files.createDirectories(folder.resolve("escape/templates"));
+        Files.writeString(folder.resolve("escape/secret.ftl"), "SECRET");
+        Files.writeString(templates.resolve("brief.ftlx"), "<html><#include \"../secret.ftl\"></html>\n");
+        Run run = Run.of("brief", "src/test/resources/reference/Nile.csv", "-o", folder.resolve("escape.pdf").toString(),
+                "--templates", templates.toString());
+        assertThat(run.exitCode()).isEqualTo(2);
+        assertThat(run.err()).contains("brief.ftlx:1:");
+    }
+
+    @Test
+    void charactersOutsideTheFontRenderAndWarn() throws IOException {
+        Path csv = folder.resolve("cjk.csv");
+        Files.writeString(csv, "month,\u6e38\u5ba2 nights\n" + String.join("\n",
+                java.util.stream.IntStream.range(0, 40).mapToObj(i -> String.format(java.util.Locale.ROOT,
+                        "%d-%02d,%d", 2020 + i / 12, i % 12 + 1, 100 + (i % 12) * 10 + i)).toList()) + "\n",
+                StandardCharsets.UTF_8);
+        Path pdf = folder.resolve("cjk.pdf");
+        Run run = Run.of("brief", csv.toString(), "-o", pdf.toString());
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        assertThat(run.err()).contains("warning: the brief's font has no glyph for '\u6e38' (U+6E38)");
+        assertThat(PdfFacts.of(pdf).text()).contains("no glyph for");
+    }
+}
