@@ -1,8 +1,18 @@
 package org.annalist.cli;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Random;
 import org.annalist.analysis.breaks.BaiPerron;
+import org.annalist.brief.BriefPipeline;
+import org.annalist.brief.BriefRequest;
+import org.annalist.ingest.ReadOptions;
+import org.annalist.narrative.Masthead;
 import org.annalist.analysis.breaks.Pelt;
 import org.annalist.analysis.decompose.Stl;
 import org.annalist.findings.Analyst;
@@ -21,7 +31,7 @@ public final class Benchmark {
     private Benchmark() {
     }
 
-    public static void main(String[] args) {
+    public static void main(String[] args) throws Exception {
         Random random = new Random(42);
         double[] monthly144 = synthetic(random, 144);
         Stl stl = Stl.withPeriod(12).with(Stl.Robustness.ON);
@@ -92,6 +102,59 @@ public final class Benchmark {
         System.out.printf(Locale.ROOT, "Bai-Perron, n = 600, minimum regime 12, up to 6 breaks: level %.1f ms, level and slope %.1f ms (warm)%n",
                 bpLevelMs, bpSlopeMs);
         System.out.printf(Locale.ROOT, "PELT, n = 3,650 daily, minimum regime 7:                 %.1f ms (warm)%n", peltMs);
+        briefs();
+    }
+
+    /**
+     * The demo's total brief: warm in this JVM (its heap as started, e.g. -Xmx512m), and cold, JVM
+     * start to finished PDF, as a user's one command runs it (with default JVM flags and with C1 only).
+     */
+    private static void briefs() throws Exception {
+        Path data = Path.of("demo-data/quennelmark-guest-nights.csv");
+        if (!Files.exists(data)) {
+            System.out.println("(brief timings skipped: run from the repository's top folder, where demo-data/ is)");
+            return;
+        }
+        Path out = Files.createTempDirectory("annalist-bench");
+        Path pdf = out.resolve("total.pdf");
+        BriefRequest request = new BriefRequest(data, ReadOptions.defaults(), Optional.of("Total"), pdf,
+                "Guest nights in Quennelmark", "", Optional.empty(), Instant.parse("2026-11-20T08:00:00Z"),
+                Masthead.Paper.A4);
+        BriefPipeline pipeline = new BriefPipeline();
+        for (int i = 0; i < 10; i++) {
+            pipeline.make(request);
+        }
+        int runs = 20;
+        long start = System.nanoTime();
+        for (int i = 0; i < runs; i++) {
+            pipeline.make(request);
+        }
+        double warmMs = (System.nanoTime() - start) / 1e6 / runs;
+        int pages;
+        try (var document = org.apache.pdfbox.Loader.loadPDF(pdf.toFile())) {
+            pages = document.getNumberOfPages();
+        }
+        System.out.printf(Locale.ROOT, "Brief (demo total), warm, max heap %d MB:              %.0f ms per brief; %d pages, %d KB%n",
+                Runtime.getRuntime().maxMemory() >> 20, warmMs, pages, Files.size(pdf) >> 10);
+        String jar = Path.of(Benchmark.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toString();
+        for (String[] flags : new String[][] {{}, {"-XX:TieredStopAtLevel=1"}}) {
+            double best = Double.POSITIVE_INFINITY;
+            for (int i = 0; i < 3; i++) {
+                List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java")
+                        .toString()));
+                command.addAll(List.of(flags));
+                command.addAll(List.of("-jar", jar, "brief", data.toString(), "--series", "Total", "-o", pdf.toString()));
+                long t0 = System.nanoTime();
+                Process p = new ProcessBuilder(command).redirectErrorStream(true).redirectOutput(ProcessBuilder.Redirect.DISCARD)
+                        .start();
+                if (p.waitFor() != 0) {
+                    throw new IllegalStateException("the brief command failed: " + command);
+                }
+                best = Math.min(best, (System.nanoTime() - t0) / 1e9);
+            }
+            System.out.printf(Locale.ROOT, "Brief (demo total), cold, java %s-jar:%s %.2f s wall (best of 3)%n",
+                    flags.length == 0 ? "" : String.join(" ", flags) + " ", flags.length == 0 ? "                          " : "", best);
+        }
     }
 
     /** A positive monthly series: trend, multiplicative season, noise, an occasional shock. */

@@ -70,14 +70,15 @@ public final class Analyst {
         for (int t = 0; t < y.length; t++) {
             remainder[t] = y[t] - expected[t];
         }
-        List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(remainder, period);
-        notes.addAll(OutlierAnalysis.stretchNotes(series, remainder, period));
+        double[] scored = relativeWhereCounts(remainder, expected, x, log);
+        List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(scored, period);
+        notes.addAll(OutlierAnalysis.stretchNotes(series, scored, period));
         double[] screened = workingAdjusted.clone();
-        for (RemainderOutliers.Outlier o : OutlierAnalysis.screened(remainder)) {
+        for (RemainderOutliers.Outlier o : OutlierAnalysis.screened(scored)) {
             // the value the period would have had without its one-off deviation
             screened[o.index()] = seasonal ? stl.trend()[o.index()] : expected[o.index()];
         }
-        BreakAnalysis.Result breaks = BreakAnalysis.of(series, screened, log);
+        BreakAnalysis.Result breaks = BreakAnalysis.of(series, screened, log, notes);
         List<OutlierFinding> outliers = OutlierAnalysis.of(series, candidates, expected, log, breaks.breaks());
         breaks.breaks().stream().filter(BreakFinding::provisional).forEach(b -> notes.add("The break in " + b.period()
                 + " is provisional: the new regime is still short and the break may not hold."));
@@ -89,6 +90,27 @@ public final class Analyst {
                 SeasonalityFindings.of(season, form), cycle, outliers, breaks.breaks(), irregular, smoothing(series),
                 null, null, recent(series), notes, formChoice(form), decomposition, breaks.episodes(),
                 breaks.method());
+    }
+
+    /**
+     * The remainder as outliers are scored on: on logs it already is relative; for an additive
+     * series of counts (no negative values, a positive expected level) it is taken relative to the
+     * expected value, so that the busy season's larger swings are not read as outliers.
+     */
+    private static double[] relativeWhereCounts(double[] remainder, double[] expected, double[] x, boolean log) {
+        if (log) {
+            return remainder;
+        }
+        for (int t = 0; t < x.length; t++) {
+            if ((!Double.isNaN(x[t]) && x[t] < 0) || (!Double.isNaN(expected[t]) && expected[t] <= 0)) {
+                return remainder;
+            }
+        }
+        double[] relative = new double[remainder.length];
+        for (int t = 0; t < remainder.length; t++) {
+            relative[t] = remainder[t] / expected[t];
+        }
+        return relative;
     }
 
     /**

@@ -34,9 +34,15 @@ final class BreakAnalysis {
     }
 
     /** @param screened working-scale adjusted values with outliers replaced, NaN where missing */
-    static Result of(Series series, double[] screened, boolean log) {
+    static Result of(Series series, double[] screened, boolean log, List<String> notes) {
         int n = screened.length;
         int h = minimumRegime(series.frequency());
+        if (series.frequency() == Frequency.DAILY || series.frequency() == Frequency.BUSINESS_DAILY) {
+            // The weekday pattern is removed, but not the pattern of the year, whose waves would read as breaks.
+            notes.add("Structural changes are not searched in daily data, whose yearly pattern is not yet taken out; "
+                    + "aggregate to weeks or months (--aggregate) to look for them.");
+            return new Result(List.of(), List.of(), "not searched in daily data (the yearly pattern is not removed)", 0);
+        }
         if (n < 2 * h) {
             return new Result(List.of(), List.of(), "not searched: fewer than two regimes of " + h + " periods", 0);
         }
@@ -46,8 +52,9 @@ final class BreakAnalysis {
         if (n > DecisionRules.PELT_ABOVE) {
             model = BaiPerron.Model.LEVEL;
             Pelt.Result pelt = Pelt.fit(screened, h);
-            starts = pelt.starts();
-            method = "PELT, changes in level, penalty 3 log n on the robust noise scale, minimum regime " + h;
+            starts = confirmedPelt(screened, pelt.starts(), h, log);
+            method = "PELT, changes in level, penalty 3 log n on the robust noise scale, minimum regime " + h
+                    + ", then every break checked by its own sup-F test (AR(1) Monte Carlo null, 5 %)";
         } else {
             BaiPerron.Result level = BaiPerron.withMinimumRegime(Math.max(h, 2)).fit(screened);
             BaiPerron.Result slope = BaiPerron.withMinimumRegime(Math.max(h, 3)).with(BaiPerron.Model.LEVEL_AND_SLOPE)
@@ -91,6 +98,39 @@ final class BreakAnalysis {
             }
         }
         return new int[0];
+    }
+
+    /**
+     * PELT's breaks, checked as Bai–Perron's are: while some break moves the level by less than
+     * {@link DecisionRules#MIN_BREAK_CHANGE_PCT} % or fails its own sup-F test, the weakest of those
+     * (smallest change) is removed and the rest are checked again. A smooth yearly wave in daily
+     * data otherwise reads as a staircase of level changes.
+     */
+    private static int[] confirmedPelt(double[] y, int[] proposed, int h, boolean log) {
+        List<Integer> starts = new ArrayList<>();
+        for (int s : proposed) {
+            starts.add(s);
+        }
+        while (!starts.isEmpty()) {
+            int weakest = -1;
+            double weakestChange = Double.POSITIVE_INFINITY;
+            for (int j = 0; j < starts.size(); j++) {
+                int from = j == 0 ? 0 : starts.get(j - 1);
+                int to = j + 1 < starts.size() ? starts.get(j + 1) - 1 : y.length - 1;
+                double change = Math.abs(changePct(y, BaiPerron.Model.LEVEL, from, starts.get(j), to, log));
+                boolean holds = change >= DecisionRules.MIN_BREAK_CHANGE_PCT
+                        && localRejects(y, BaiPerron.Model.LEVEL, h, from, starts.get(j), to);
+                if (!holds && change < weakestChange) {
+                    weakest = j;
+                    weakestChange = change;
+                }
+            }
+            if (weakest < 0) {
+                break;
+            }
+            starts.remove(weakest);
+        }
+        return starts.stream().mapToInt(Integer::intValue).toArray();
     }
 
     /** Change of the fitted level at the break, in % of the level before. */

@@ -49,7 +49,8 @@ public final class CycleDetector {
     public static Result detect(double[] yearly) {
         int n = yearly.length;
         if (n < DecisionRules.MIN_YEARS_FOR_CYCLE) {
-            return absent("too few years (" + n + ", at least " + DecisionRules.MIN_YEARS_FOR_CYCLE + " needed)");
+            return absent("the data cover " + n + " years, and at least " + DecisionRules.MIN_YEARS_FOR_CYCLE
+                    + " are needed");
         }
         Periodogram.Result spectrum = Periodogram.of(yearly, 1);
         double[] power = spectrum.power();
@@ -93,8 +94,9 @@ public final class CycleDetector {
         double length = gaps.size() >= 2 ? gaps.stream().mapToInt(Integer::intValue).average().orElseThrow() : spectralPeriod;
         boolean regular = isRegular(gaps);
         if (pValue >= DecisionRules.ALPHA) {
-            return new Result(false, "the strongest period (" + Math.round(spectralPeriod * 10) / 10.0
-                    + " years) is not distinguishable from red noise", spectralPeriod, pValue, peaks, gaps, length, regular);
+            return new Result(false, "its strongest period, " + Math.round(spectralPeriod * 10) / 10.0
+                    + " years, is no stronger than random persistent wander would give", spectralPeriod, pValue, peaks,
+                    gaps, length, regular);
         }
         if (peaks.size() < 3) {
             return new Result(false, "fewer than three peaks confirm it", spectralPeriod, pValue, peaks, gaps, length,
