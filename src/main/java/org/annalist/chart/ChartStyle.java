@@ -65,6 +65,32 @@ public final class ChartStyle {
         };
     }
 
+    /**
+     * A time axis whose ticks fall on whole years (every 1, 2 or 5 years by span), or on months for
+     * spans under two years, labelled once each; in UTC, so labels do not move with the machine.
+     */
+    public static org.jfree.chart.axis.DateAxis timeAxis(org.annalist.series.Series series) {
+        java.util.TimeZone utc = java.util.TimeZone.getTimeZone(java.time.ZoneOffset.UTC);
+        org.jfree.chart.axis.DateAxis axis = new org.jfree.chart.axis.DateAxis(null, utc, java.util.Locale.ROOT);
+        double years = (series.end().endDate().toEpochDay() - series.start().startDate().toEpochDay()) / 365.25;
+        java.text.SimpleDateFormat format;
+        org.jfree.chart.axis.DateTickUnit unit;
+        if (years < 2) {
+            format = new java.text.SimpleDateFormat("MMM yyyy", java.util.Locale.ENGLISH);
+            unit = new org.jfree.chart.axis.DateTickUnit(org.jfree.chart.axis.DateTickUnitType.MONTH, years < 1 ? 1 : 3);
+        } else {
+            format = new java.text.SimpleDateFormat("yyyy", java.util.Locale.ENGLISH);
+            unit = new org.jfree.chart.axis.DateTickUnit(org.jfree.chart.axis.DateTickUnitType.YEAR,
+                    years <= 16 ? 1 : years <= 40 ? 5 : years <= 100 ? 10 : 20);
+        }
+        format.setTimeZone(utc);
+        axis.setDateFormatOverride(format);
+        axis.setTickUnit(unit);
+        axis.setLowerMargin(0.01);
+        axis.setUpperMargin(0.01);
+        return axis;
+    }
+
     /** An arrow to (x, y) from above (for a high value) or below, carrying {@code label} in the 8 pt font. */
     public static org.jfree.chart.annotations.XYPointerAnnotation pointer(String label, double x, double y,
                                                                           boolean fromAbove) {

@@ -1,9 +1,5 @@
 package org.annalist.chart;
 
-import java.text.SimpleDateFormat;
-import java.time.ZoneOffset;
-import java.util.Locale;
-import java.util.TimeZone;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.series.Series;
@@ -40,11 +36,7 @@ public final class IrregularChart {
                 ? "against trend and season" : series.unit() + " against trend and season");
         JFreeChart chart = ChartFactory.createXYBarChart(null, null, true, axis, data);
         XYPlot plot = chart.getXYPlot();
-        TimeZone utc = TimeZone.getTimeZone(ZoneOffset.UTC);
-        DateAxis time = new DateAxis(null, utc, Locale.ROOT);
-        SimpleDateFormat years = new SimpleDateFormat("yyyy", Locale.ENGLISH);
-        years.setTimeZone(utc);
-        time.setDateFormatOverride(years);
+        DateAxis time = ChartStyle.timeAxis(series);
         plot.setDomainAxis(time);
         ChartFactory.getChartTheme().apply(chart);
         chart.removeLegend();

@@ -2,16 +2,12 @@ package org.annalist.chart;
 
 import java.awt.Color;
 import java.awt.geom.Ellipse2D;
-import java.text.SimpleDateFormat;
 import java.time.ZoneOffset;
-import java.util.Locale;
-import java.util.TimeZone;
 import java.util.List;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.Smoothing;
-import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 import org.jfree.chart.ChartFactory;
@@ -39,7 +35,6 @@ import org.jfree.data.xy.XYSeriesCollection;
  */
 public final class OverviewChart {
 
-    private static final TimeZone UTC = TimeZone.getTimeZone(ZoneOffset.UTC);
     /** Beyond this many periods the observed line turns light and thin so that the trend-cycle reads through it. */
     private static final int DENSE_POINTS = 400;
 
@@ -66,10 +61,7 @@ public final class OverviewChart {
         JFreeChart chart = ChartFactory.createXYLineChart(null, null, series.unit().isEmpty() ? null : ChartStyle.drawable(series.unit()),
                 data);
         XYPlot plot = chart.getXYPlot();
-        DateAxis time = new DateAxis(null, UTC, Locale.ROOT);
-        time.setDateFormatOverride(dateFormat(series.frequency()));
-        time.setLowerMargin(0.01);
-        time.setUpperMargin(0.01);
+        DateAxis time = ChartStyle.timeAxis(series);
         plot.setDomainAxis(time);
         NumberAxis values = (NumberAxis) plot.getRangeAxis();
         values.setAutoRangeIncludesZero(false);
@@ -170,13 +162,5 @@ public final class OverviewChart {
         long start = period.startDate().atStartOfDay(ZoneOffset.UTC).toInstant().toEpochMilli();
         long end = period.endDate().plusDays(1).atStartOfDay(ZoneOffset.UTC).toInstant().toEpochMilli();
         return (start + end) / 2.0;
-    }
-
-    private static SimpleDateFormat dateFormat(Frequency frequency) {
-        SimpleDateFormat format = new SimpleDateFormat(
-                frequency == Frequency.DAILY || frequency == Frequency.BUSINESS_DAILY || frequency == Frequency.WEEKLY
-                        ? "d MMM yyyy" : "yyyy", Locale.ENGLISH);
-        format.setTimeZone(UTC);
-        return format;
     }
 }

@@ -151,8 +151,10 @@ final class SectionViews {
                         : s.verdict().equals("not applicable") ? "annual data" : "no meaningful seasonal pattern"));
         int breaks = findings.breaks().size();
         int outliers = findings.outliers().size();
-        figures.add(new BriefView.KeyFigure("Unusual periods", breaks + " " + (breaks == 1 ? "break" : "breaks") + ", "
-                + outliers + " " + (outliers == 1 ? "one-off" : "one-offs"),
+        String unusual = breaks == 0 && outliers == 0 ? "none"
+                : (breaks == 0 ? "no" : String.valueOf(breaks)) + " " + (breaks == 1 ? "break" : "breaks") + ", "
+                        + (outliers == 0 ? "no" : String.valueOf(outliers)) + " " + (outliers == 1 ? "one-off" : "one-offs");
+        figures.add(new BriefView.KeyFigure("Unusual periods", unusual,
                 breaks == 0 ? "no structural change found" : "latest break " + f.period(series.period(
                 findings.breaks().get(breaks - 1).index()))));
         return figures;
