@@ -10,6 +10,17 @@ public final class OrderStatistics {
     private OrderStatistics() {
     }
 
+    /** The median of {@code x} (the mean of the two middle values for an even count); {@code x} is left as it is. */
+    public static double median(double[] x) {
+        double[] a = x.clone();
+        int n = a.length;
+        if (n % 2 == 1) {
+            return select(a, n / 2)[0];
+        }
+        double[] middle = select(a, n / 2 - 1, n / 2);
+        return (middle[0] + middle[1]) / 2;
+    }
+
     /**
      * The values at 0-based ranks {@code ranks} (ascending, within the array), as if {@code a} were
      * sorted. Reorders {@code a}.

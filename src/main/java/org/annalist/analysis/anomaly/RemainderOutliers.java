@@ -3,6 +3,7 @@ package org.annalist.analysis.anomaly;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.annalist.analysis.OrderStatistics;
 
 /**
  * Single periods far from what trend and season predict: the robust score
@@ -36,12 +37,12 @@ public final class RemainderOutliers {
             Arrays.fill(z, Double.NaN);
             return z;
         }
-        double median = median(present);
+        double median = OrderStatistics.median(present);
         double[] deviations = new double[present.length];
         for (int i = 0; i < present.length; i++) {
             deviations[i] = Math.abs(present[i] - median);
         }
-        double scale = 1.4826 * median(deviations);
+        double scale = 1.4826 * OrderStatistics.median(deviations);
         for (int t = 0; t < remainder.length; t++) {
             z[t] = Double.isNaN(remainder[t]) ? Double.NaN
                     : scale > 0 ? (remainder[t] - median) / scale : 0;
@@ -109,12 +110,5 @@ public final class RemainderOutliers {
             t = end + 1;
         }
         return found;
-    }
-
-    private static double median(double[] x) {
-        double[] s = x.clone();
-        Arrays.sort(s);
-        int n = s.length;
-        return n % 2 == 1 ? s[n / 2] : (s[n / 2 - 1] + s[n / 2]) / 2;
     }
 }

@@ -3,6 +3,7 @@ package org.annalist.analysis.breaks;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.annalist.analysis.OrderStatistics;
 
 /**
  * PELT, exact penalised segmentation in linear expected time (Killick, Fearnhead &amp; Eckley 2012,
@@ -80,18 +81,11 @@ public final class Pelt {
             return 0;
         }
         double[] d = diffs.stream().mapToDouble(Double::doubleValue).toArray();
-        double median = median(d);
+        double median = OrderStatistics.median(d);
         double[] dev = new double[d.length];
         for (int i = 0; i < d.length; i++) {
             dev[i] = Math.abs(d[i] - median);
         }
-        return 1.4826 * median(dev) / Math.sqrt(2);
-    }
-
-    private static double median(double[] x) {
-        double[] s = x.clone();
-        Arrays.sort(s);
-        int n = s.length;
-        return n % 2 == 1 ? s[n / 2] : (s[n / 2 - 1] + s[n / 2]) / 2;
+        return 1.4826 * OrderStatistics.median(dev) / Math.sqrt(2);
     }
 }
