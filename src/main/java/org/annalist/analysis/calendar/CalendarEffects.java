@@ -1,0 +1,166 @@
+package org.annalist.analysis.calendar;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.annalist.analysis.DecisionRules;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+import org.apache.commons.math3.distribution.NormalDistribution;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.LUDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
+
+/**
+ * Calendar effects estimated on the irregular component (logs for a multiplicative series, so a
+ * coefficient is a relative effect): least squares on the Easter share and the number of Friday
+ * and Saturday nights, each centred on its mean for that calendar month
+ * (so that none of them takes over the seasonal pattern), with Newey–West standard errors that
+ * allow for autocorrelation (Newey &amp; West 1987, <i>Econometrica</i> 55, 703–708; Bartlett weights,
+ * lag ⌊4 (n/100)^{2/9}⌋ after Newey &amp; West 1994). An effect is kept when its two-sided normal
+ * p-value is below {@link DecisionRules#ALPHA}.
+ *
+ * <p>The length of the month is not estimated: only February varies, in one year of four, too
+ * rarely for a robust standard error; a leap-year February is noted instead (29/28, +3.6 % more
+ * days), see the indicators.
+ *
+ * <p>Monthly and quarterly data only: weekly and daily data carry the weekday in their seasonal
+ * pattern, and annual data have no calendar to speak of.
+ */
+public final class CalendarEffects {
+
+    public static final String EASTER = "easter";
+    public static final String WEEKEND = "friday_saturday_nights";
+
+    /**
+     * @param coefficient change of the irregular per unit of the regressor: per whole Easter
+     *                    window, per extra Friday or Saturday
+     */
+    public record Effect(String name, double coefficient, double standardError, double pValue, boolean kept) {
+    }
+
+    /** @param lags Newey–West lags used */
+    public record Result(List<Effect> effects, int n, int lags, int easterWindow) {
+
+        public Result {
+            effects = List.copyOf(effects);
+        }
+
+        public java.util.Optional<Effect> kept(String name) {
+            return effects.stream().filter(e -> e.name().equals(name) && e.kept()).findFirst();
+        }
+    }
+
+    private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(null, 0, 1);
+
+    private CalendarEffects() {
+    }
+
+    public static boolean applies(Frequency frequency) {
+        return frequency == Frequency.MONTHLY || frequency == Frequency.QUARTERLY;
+    }
+
+    /** The centred regressors of each period, columns in the order of {@link #names}. */
+    static double[][] regressors(Period start, int n, int easterWindow, List<String> names) {
+        int period = start.frequency().seasonalPeriod();
+        double[][] raw = new double[n][2];
+        for (int t = 0; t < n; t++) {
+            Period p = start.plus(t);
+            raw[t][0] = CalendarRegressors.easterShare(p, easterWindow);
+            raw[t][1] = CalendarRegressors.weekendNights(p);
+        }
+        String[] all = {EASTER, WEEKEND};
+        List<Integer> keep = new ArrayList<>();
+        double[][] centred = new double[n][2];
+        for (int c = 0; c < 2; c++) {
+            double[] sum = new double[period];
+            int[] count = new int[period];
+            for (int t = 0; t < n; t++) {
+                sum[t % period] += raw[t][c];
+                count[t % period]++;
+            }
+            double ss = 0;
+            for (int t = 0; t < n; t++) {
+                centred[t][c] = raw[t][c] - sum[t % period] / count[t % period];
+                ss += centred[t][c] * centred[t][c];
+            }
+            if (ss > 1e-12) {
+                keep.add(c);
+            }
+        }
+        double[][] x = new double[n][keep.size()];
+        for (int j = 0; j < keep.size(); j++) {
+            names.add(all[keep.get(j)]);
+            for (int t = 0; t < n; t++) {
+                x[t][j] = centred[t][keep.get(j)];
+            }
+        }
+        return x;
+    }
+
+    /**
+     * @param irregular the irregular component on the working scale, NaN where missing
+     * @param start     the period of {@code irregular[0]}
+     * @throws IllegalArgumentException for a frequency other than monthly or quarterly, or too few values
+     */
+    public static Result estimate(double[] irregular, Period start, int easterWindow) {
+        if (!applies(start.frequency())) {
+            throw new IllegalArgumentException("calendar effects are estimated for monthly or quarterly data, not "
+                    + start.frequency());
+        }
+        List<String> names = new ArrayList<>();
+        double[][] all = regressors(start, irregular.length, easterWindow, names);
+        List<Integer> rows = new ArrayList<>();
+        for (int t = 0; t < irregular.length; t++) {
+            if (!Double.isNaN(irregular[t])) {
+                rows.add(t);
+            }
+        }
+        int n = rows.size();
+        int k = names.size() + 1;
+        if (n < 3 * k + 10) {
+            throw new IllegalArgumentException("calendar effects need at least " + (3 * k + 10) + " values, got " + n);
+        }
+        double[][] x = new double[n][k];
+        double[] y = new double[n];
+        for (int r = 0; r < n; r++) {
+            int t = rows.get(r);
+            x[r][0] = 1;
+            System.arraycopy(all[t], 0, x[r], 1, k - 1);
+            y[r] = irregular[t];
+        }
+        RealMatrix design = new Array2DRowRealMatrix(x, false);
+        RealMatrix xtxInverse = new LUDecomposition(design.transpose().multiply(design)).getSolver().getInverse();
+        double[] beta = xtxInverse.operate(design.transpose().operate(y));
+        double[] e = new double[n];
+        for (int r = 0; r < n; r++) {
+            double fit = 0;
+            for (int j = 0; j < k; j++) {
+                fit += x[r][j] * beta[j];
+            }
+            e[r] = y[r] - fit;
+        }
+        int lags = (int) Math.floor(4 * Math.pow(n / 100.0, 2.0 / 9.0));
+        double[][] s = new double[k][k];
+        for (int lag = 0; lag <= lags; lag++) {
+            double w = lag == 0 ? 1 : 1 - lag / (lags + 1.0);
+            for (int r = lag; r < n; r++) {
+                double ee = e[r] * e[r - lag];
+                for (int a = 0; a < k; a++) {
+                    for (int b = 0; b < k; b++) {
+                        double term = x[r][a] * x[r - lag][b];
+                        s[a][b] += w * ee * (lag == 0 ? term : term + x[r - lag][a] * x[r][b]);
+                    }
+                }
+            }
+        }
+        RealMatrix covariance = xtxInverse.multiply(new Array2DRowRealMatrix(s, false)).multiply(xtxInverse)
+                .scalarMultiply(n / (double) (n - k));
+        List<Effect> effects = new ArrayList<>();
+        for (int j = 1; j < k; j++) {
+            double se = Math.sqrt(Math.max(0, covariance.getEntry(j, j)));
+            double p = se == 0 ? 1 : 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(beta[j] / se));
+            effects.add(new Effect(names.get(j - 1), beta[j], se, p, p < DecisionRules.ALPHA));
+        }
+        return new Result(effects, n, lags, easterWindow);
+    }
+}

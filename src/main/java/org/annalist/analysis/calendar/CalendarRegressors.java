@@ -1,0 +1,60 @@
+package org.annalist.analysis.calendar;
+
+import java.time.DayOfWeek;
+import java.time.LocalDate;
+import org.annalist.series.Period;
+
+/**
+ * What the calendar puts into a period: the share of the days before Easter that fall in it, how
+ * many of each weekday it has, and its length. Tourism counts respond to all three: Easter
+ * holidays move between March and April, Friday and Saturday nights fill hotels, and a leap-year
+ * February has 3.6 % more days.
+ */
+public final class CalendarRegressors {
+
+    /**
+     * The days before Easter Sunday counted as its holiday: 8, the usual default of the standard
+     * seasonal-adjustment programs' Easter regressor (common practice; from memory). 1 (Holy
+     * Saturday only) and 15 are tested alternatives.
+     */
+    public static final int DEFAULT_EASTER_WINDOW = 8;
+
+    private CalendarRegressors() {
+    }
+
+    /** Share of the {@code window} days before Easter Sunday (the Sunday itself not counted) that lie in {@code period}. */
+    public static double easterShare(Period period, int window) {
+        if (window < 1) {
+            throw new IllegalArgumentException("the Easter window needs at least one day, was " + window);
+        }
+        LocalDate from = period.startDate();
+        LocalDate to = period.endDate();
+        int inside = 0;
+        for (int year = from.getYear(); year <= to.getYear(); year++) {
+            LocalDate easter = Easter.sunday(year);
+            for (int d = 1; d <= window; d++) {
+                LocalDate day = easter.minusDays(d);
+                if (!day.isBefore(from) && !day.isAfter(to)) {
+                    inside++;
+                }
+            }
+        }
+        return inside / (double) window;
+    }
+
+    /** How many times {@code weekday} occurs in the period. */
+    public static int count(Period period, DayOfWeek weekday) {
+        int n = 0;
+        for (LocalDate d = period.startDate(); !d.isAfter(period.endDate()); d = d.plusDays(1)) {
+            if (d.getDayOfWeek() == weekday) {
+                n++;
+            }
+        }
+        return n;
+    }
+
+    /** Fridays plus Saturdays: the nights of the weekend. */
+    public static int weekendNights(Period period) {
+        return count(period, DayOfWeek.FRIDAY) + count(period, DayOfWeek.SATURDAY);
+    }
+}
