@@ -1,0 +1,140 @@
+package org.annalist.analysis.indicators;
+
+import java.time.Month;
+import java.util.EnumSet;
+import java.util.Set;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+import org.annalist.series.ValueFlag;
+
+/**
+ * The figures a monthly release leads with, for one period: the value; the same period one and
+ * two years earlier; year-to-date and the rolling year against the same spans a year before; the
+ * seasonally adjusted change on the previous period; the rank among the same period of every
+ * year; records. Flows (nights, arrivals) are summed over spans; levels and rates (occupancy,
+ * prices) are averaged, never summed (common practice in official tourism statistics, see
+ * research notes A1). Spans with a missing value are not compared.
+ */
+public final class LatestIndicators {
+
+    /** How values combine over time. */
+    public enum Measure { FLOW, LEVEL }
+
+    /** A value against an earlier one; {@code changePct} NaN when the earlier value is zero. */
+    public record Comparison(Period period, double value, double change, double changePct) {
+    }
+
+    /** A span against the same span a year earlier: sums for flows, means for levels. */
+    public record Span(Period from, Period to, double total, double previousTotal, double change, double changePct) {
+    }
+
+    /** Position among the same period of every year up to this one (1 = highest), of how many. */
+    public record Rank(int position, int of) {
+    }
+
+    /**
+     * @param flags             flags on any value the figures use (provisional, estimated …)
+     * @param adjustedChangePct change of the seasonally adjusted value on the previous period, NaN if unknown
+     * @param record            {@code high}, {@code low} or null: the highest or lowest value of the whole series so far
+     * @param longerFebruary    a February compared with one of another length: +1 when this one is longer, −1 shorter, 0 otherwise
+     */
+    public record Result(Period period, double value, Set<ValueFlag> flags, Measure measure, Comparison lastYear,
+                         Comparison twoYearsAgo, Span yearToDate, Span rollingYear, double adjustedChangePct, Rank rank,
+                         String record, int longerFebruary) {
+    }
+
+    private LatestIndicators() {
+    }
+
+    /**
+     * @param adjusted seasonally adjusted values in the series' units (null when there are none)
+     * @throws IllegalArgumentException when the value at {@code i} is missing
+     */
+    public static Result at(Series s, int i, Measure measure, double[] adjusted) {
+        if (s.isMissing(i)) {
+            throw new IllegalArgumentException("no value for " + s.period(i));
+        }
+        int lag = YearOnYear.lag(s.frequency());
+        EnumSet<ValueFlag> flags = EnumSet.noneOf(ValueFlag.class);
+        flags.addAll(s.flags(i));
+        Comparison lastYear = compare(s, i, i - lag, flags);
+        Comparison twoYears = compare(s, i, i - 2 * lag, flags);
+        Span ytd = null;
+        if (s.frequency() != Frequency.ANNUAL) {
+            int first = i;
+            while (first > 0 && s.period(first - 1).year() == s.period(i).year()) {
+                first--;
+            }
+            ytd = span(s, first, i, lag, measure, flags);
+        }
+        Span rolling = s.frequency() == Frequency.ANNUAL || i - lag + 1 < 0 ? null : span(s, i - lag + 1, i, lag, measure, flags);
+        double adjustedChange = Double.NaN;
+        if (adjusted != null && i > 0 && !Double.isNaN(adjusted[i]) && !Double.isNaN(adjusted[i - 1]) && adjusted[i - 1] != 0) {
+            adjustedChange = 100 * (adjusted[i] / adjusted[i - 1] - 1);
+        }
+        int above = 0;
+        int of = 0;
+        for (int j = i; j >= 0; j -= lag) {
+            if (!s.isMissing(j)) {
+                of++;
+                above += s.value(j) > s.value(i) ? 1 : 0;
+            }
+        }
+        boolean high = true;
+        boolean low = true;
+        int earlier = 0;
+        for (int j = 0; j < i; j++) {
+            if (!s.isMissing(j)) {
+                earlier++;
+                high &= s.value(j) < s.value(i);
+                low &= s.value(j) > s.value(i);
+            }
+        }
+        String record = earlier == 0 ? null : high ? "high" : low ? "low" : null;
+        int february = 0;
+        Period p = s.period(i);
+        if (s.frequency() == Frequency.MONTHLY && p.startDate().getMonth() == Month.FEBRUARY && lastYear != null) {
+            february = Integer.compare(p.lengthInDays(), lastYear.period().lengthInDays());
+        }
+        return new Result(p, s.value(i), Set.copyOf(flags), measure, lastYear, twoYears, ytd, rolling, adjustedChange,
+                new Rank(above + 1, of), record, february);
+    }
+
+    private static Comparison compare(Series s, int i, int earlier, Set<ValueFlag> flags) {
+        if (earlier < 0 || s.isMissing(earlier)) {
+            return null;
+        }
+        flags.addAll(s.flags(earlier));
+        double then = s.value(earlier);
+        double change = s.value(i) - then;
+        return new Comparison(s.period(earlier), then, change, then == 0 ? Double.NaN : 100 * change / Math.abs(then));
+    }
+
+    /** {@code from..to} against the same positions {@code lag} periods earlier; null if any value is missing. */
+    private static Span span(Series s, int from, int to, int lag, Measure measure, Set<ValueFlag> flags) {
+        if (from - lag < 0) {
+            return null;
+        }
+        double now = 0;
+        double before = 0;
+        for (int j = from; j <= to; j++) {
+            if (s.isMissing(j) || s.isMissing(j - lag)) {
+                return null;
+            }
+            now += s.value(j);
+            before += s.value(j - lag);
+        }
+        for (int j = from; j <= to; j++) {
+            flags.addAll(s.flags(j));
+            flags.addAll(s.flags(j - lag));
+        }
+        int n = to - from + 1;
+        if (measure == Measure.LEVEL) {
+            now /= n;
+            before /= n;
+        }
+        return new Span(s.period(from), s.period(to), now, before, now - before,
+                before == 0 ? Double.NaN : 100 * (now - before) / Math.abs(before));
+    }
+}
