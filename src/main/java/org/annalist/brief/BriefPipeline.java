@@ -32,8 +32,17 @@ import org.annalist.series.Series;
 /** Makes a brief: read → analyse → chart and narrative → PDF, written atomically. */
 public final class BriefPipeline {
 
-    private final Analyst analyst = new Analyst();
+    private final Analyst analyst;
     private final PdfRenderer renderer = new PdfRenderer();
+
+    public BriefPipeline() {
+        this(new Analyst());
+    }
+
+    /** @param analyst the analysis with the user's choices (form, measure) */
+    public BriefPipeline(Analyst analyst) {
+        this.analyst = analyst;
+    }
 
     /**
      * @throws DataProblemException when the file cannot be used, does not hold the series asked
@@ -41,7 +50,7 @@ public final class BriefPipeline {
      */
     public Brief make(BriefRequest request) {
         ReadResult read = new SeriesFileReader(request.readOptions()).read(request.input());
-        return make(request, read, choose(read, request));
+        return make(request, read, cutAtLatest(choose(read, request), request, read));
     }
 
     /** Makes the brief of {@code series}, one of the series already read from {@code read}. */
@@ -112,6 +121,17 @@ public final class BriefPipeline {
                 .append(a.method().label()));
         return new SourceFacts(java.nio.file.Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading.toString(),
                 read.warnings().stream().map(DataProblem::toString).toList());
+    }
+
+    /** The series up to the period the brief reports, when one is named. */
+    static Series cutAtLatest(Series series, BriefRequest request, ReadResult read) {
+        if (request.latestPeriod().isEmpty()) {
+            return series;
+        }
+        String label = request.latestPeriod().get();
+        return series.upTo(series.periodLabelled(label).orElseThrow(() -> new DataProblemException(new DataProblem(
+                read.file(), 0, 0, "series '" + series.name() + "' has no period " + label + "; expected a period from "
+                + series.start() + " to " + series.end() + ", written as " + series.start()))));
     }
 
     private static Series choose(ReadResult read, BriefRequest request) {

@@ -13,10 +13,12 @@ import org.annalist.narrative.Masthead;
  * @param series      the series to brief; may be empty when the file holds only one
  * @param title       empty to title the brief with the series name
  * @param templates   a folder of templates that override the bundled ones
+ * @param latestPeriod the period the brief reports as latest (its label, e.g. {@code 2025-04}); empty for the last in the data
  * @param generatedAt the time the brief states as made (pinned for reproducible output; see {@link GenerationTime})
  */
 public record BriefRequest(Path input, ReadOptions readOptions, Optional<String> series, Path output, String title,
-                           String organisation, Optional<Path> templates, Instant generatedAt, Masthead.Paper paper) {
+                           String organisation, Optional<Path> templates, Instant generatedAt, Masthead.Paper paper,
+                           Optional<String> latestPeriod) {
 
     public BriefRequest {
         Objects.requireNonNull(input, "input");
@@ -28,5 +30,6 @@ public record BriefRequest(Path input, ReadOptions readOptions, Optional<String>
         Objects.requireNonNull(templates, "templates");
         Objects.requireNonNull(generatedAt, "generatedAt");
         Objects.requireNonNull(paper, "paper");
+        Objects.requireNonNull(latestPeriod, "latestPeriod");
     }
 }

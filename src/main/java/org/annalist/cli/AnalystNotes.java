@@ -4,6 +4,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
 import org.annalist.findings.BreakFinding;
+import org.annalist.findings.CalendarFinding;
+import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
 import org.annalist.findings.Findings;
@@ -60,6 +62,27 @@ final class AnalystNotes {
         for (OutlierFinding o : f.outliers()) {
             line(out, "outlier", "%s: %s against %s expected (%+.1f %%), score %.1f", o.period(), num(o.observed()),
                     num(o.expected()), o.deviationPct(), o.score());
+        }
+        IndicatorsFinding i = f.indicators();
+        if (i != null) {
+            line(out, "latest", "%s: %s (%s)%s%s%s", i.period(), num(i.value()), i.measure(),
+                    i.samePeriodLastYear() == null ? "" : String.format(Locale.ROOT, "; a year earlier %s, %s",
+                            num(i.samePeriodLastYear().value()), pct(i.samePeriodLastYear().changePct())),
+                    i.yearToDate() == null ? "" : String.format(Locale.ROOT, "; year to date %s", pct(i.yearToDate().changePct())),
+                    i.rollingYear() == null ? "" : String.format(Locale.ROOT, "; rolling year %s", pct(i.rollingYear().changePct())));
+            line(out, "latest rank", "%d of %d in the same period of each year%s%s%s", i.rank().position(), i.rank().of(),
+                    i.record() == null ? "" : "; record " + i.record(),
+                    i.seasonallyAdjustedChangePct() == null ? "" : "; seasonally adjusted " + pct(i.seasonallyAdjustedChangePct())
+                            + " on the period before", i.flagged().isEmpty() ? "" : "; flagged " + String.join(", ", i.flagged()));
+        }
+        if (f.calendar() != null) {
+            for (CalendarFinding.Effect e : f.calendar().effects()) {
+                line(out, "calendar", "%s: %+.2f %% per unit, %s%s", e.name(), e.effectPct(), p(e.pValue()),
+                        e.kept() ? " (kept)" : " (not significant)");
+            }
+            for (String note : f.calendar().notes()) {
+                line(out, "calendar note", "%s", note);
+            }
         }
         line(out, "irregular", "%s", f.irregular().share() == null ? "not measured"
                 : String.format(Locale.ROOT, "%s (share %.2f of the variation around the long-run trend)",
@@ -131,6 +154,10 @@ final class AnalystNotes {
     /** "p < 0.0001" or "p = 0.0123". */
     static String p(double p) {
         return p < 0.0001 ? "p < 0.0001" : String.format(Locale.ROOT, "p = %.4f", p);
+    }
+
+    private static String pct(Double v) {
+        return v == null ? "n/a" : String.format(Locale.ROOT, "%+.1f %%", v);
     }
 
     private static String num(double v) {

@@ -2,9 +2,7 @@ package org.annalist.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.annalist.analysis.decompose.ModelForm;
 import org.annalist.findings.Analyst;
 import org.annalist.findings.Findings;
 import org.annalist.findings.FindingsJson;
@@ -23,7 +21,6 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     enum Format { text, json }
 
-    enum FormChoice { auto, additive, multiplicative }
 
     @Spec
     CommandSpec spec;
@@ -34,9 +31,12 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", description = "text or json. Default: text.")
     Format format = Format.text;
 
-    @Option(names = "--form", paramLabel = "FORM",
-            description = "auto (decide from the data), additive or multiplicative. Default: auto.")
-    FormChoice form = FormChoice.auto;
+    @Mixin
+    AnalysisOptions analysis;
+
+    @Option(names = "--period", paramLabel = "PERIOD",
+            description = "Analyse up to this period (2025-04, 2025-Q2, 2025). Default: the last in the data.")
+    String period;
 
     @Mixin
     InputMixin input;
@@ -48,12 +48,10 @@ final class AnalyzeCommand implements Callable<Integer> {
     public Integer call() {
         ReadResult read = input.read();
         List<Series> chosen = series == null ? read.series() : List.of(read.require(series));
-        Analyst analyst = new Analyst(switch (form) {
-            case auto -> Optional.empty();
-            case additive -> Optional.of(ModelForm.Form.ADDITIVE);
-            case multiplicative -> Optional.of(ModelForm.Form.MULTIPLICATIVE);
-        });
-        List<Findings> findings = chosen.stream().map(analyst::analyse).toList();
+        Analyst analyst = analysis.analyst();
+        List<Findings> findings = chosen.stream().map(s -> analyst.analyse(period == null ? s : s.upTo(s.periodLabelled(period)
+                .orElseThrow(() -> new UserInputException(read.file() + ": series '" + s.name() + "' has no period "
+                        + period + "; expected a period from " + s.start() + " to " + s.end()))))).toList();
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
             out.print(FindingsJson.write(findings.size() == 1 && series != null || read.series().size() == 1

@@ -119,7 +119,7 @@ public final class Benchmark {
         Path pdf = out.resolve("total.pdf");
         BriefRequest request = new BriefRequest(data, ReadOptions.defaults(), Optional.of("Total"), pdf,
                 "Guest nights in Quennelmark", "", Optional.empty(), Instant.parse("2026-11-20T08:00:00Z"),
-                Masthead.Paper.A4);
+                Masthead.Paper.A4, Optional.empty());
         BriefPipeline pipeline = new BriefPipeline();
         for (int i = 0; i < 10; i++) {
             pipeline.make(request);

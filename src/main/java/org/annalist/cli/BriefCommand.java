@@ -44,14 +44,18 @@ final class BriefCommand implements Callable<Integer> {
     BriefOptions briefOptions;
 
     @Mixin
+    AnalysisOptions analysis;
+
+    @Mixin
     DebugOption debug;
 
     @Override
     public Integer call() {
         Path target = output != null ? output : Path.of(defaultName(input.file, series));
         BriefRequest request = new BriefRequest(input.file, input.toReadOptions(), Optional.ofNullable(series), target,
-                title, organisation, Optional.ofNullable(templates), briefOptions.generatedAt(), briefOptions.paper());
-        BriefPipeline.Brief brief = new BriefPipeline().make(request);
+                title, organisation, Optional.ofNullable(templates), briefOptions.generatedAt(), briefOptions.paper(),
+                Optional.ofNullable(briefOptions.period));
+        BriefPipeline.Brief brief = new BriefPipeline(analysis.analyst()).make(request);
         brief.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
         spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series() + ")");
         return Main.EXIT_OK;

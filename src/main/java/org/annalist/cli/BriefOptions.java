@@ -19,6 +19,11 @@ final class BriefOptions {
                     + "SOURCE_DATE_EPOCH if set, else now. Either makes the PDF byte-for-byte reproducible.")
     String generatedAt;
 
+    @Option(names = "--period", paramLabel = "PERIOD",
+            description = "The period to report as latest, as the findings write periods (2025-04, 2025-Q2, 2025). "
+                    + "Default: the last in the data.")
+    String period;
+
     Masthead.Paper paper() {
         return paper == PaperChoice.letter ? Masthead.Paper.LETTER : Masthead.Paper.A4;
     }

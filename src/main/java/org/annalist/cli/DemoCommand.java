@@ -26,7 +26,12 @@ final class DemoCommand implements Callable<Integer> {
     private static final String ORGANISATION = "Quennelmark Visitor Board (invented demo)";
 
     /** One demo brief: which file and series, how to read it, its title and output name. */
-    private record DemoBrief(String file, String series, ReadOptions options, String title, String output) {
+    private record DemoBrief(String file, String series, ReadOptions options, String title, String output,
+                             Optional<String> period) {
+
+        DemoBrief(String file, String series, ReadOptions options, String title, String output) {
+            this(file, series, options, title, output, Optional.empty());
+        }
     }
 
     private static final List<DemoBrief> BRIEFS = List.of(
@@ -42,7 +47,10 @@ final class DemoCommand implements Callable<Integer> {
                     "Guest arrivals in Quennelmark", "arrivals-total.pdf"),
             new DemoBrief("glassworks-daily-visitors.csv", "Visitors",
                     ReadOptions.defaults().withAggregation(new Aggregation(Frequency.MONTHLY, Aggregation.Method.SUM)),
-                    "Glassworks Museum visitors by month", "glassworks-visitors-monthly.pdf"));
+                    "Glassworks Museum visitors by month", "glassworks-visitors-monthly.pdf"),
+            // Easter moved from 31 March 2024 to 20 April 2025: the April brief explains the swing
+            new DemoBrief("quennelmark-guest-nights.csv", "Total", ReadOptions.defaults(),
+                    "Guest nights in Quennelmark, April 2025", "guest-nights-total-2025-04.pdf", Optional.of("2025-04")));
 
     @Spec
     CommandSpec spec;
@@ -70,7 +78,8 @@ final class DemoCommand implements Callable<Integer> {
         Instant now = briefOptions.generatedAt();
         for (DemoBrief demo : BRIEFS) {
             BriefRequest request = new BriefRequest(data.resolve(demo.file()), demo.options(), Optional.of(demo.series()),
-                    out.resolve(demo.output()), demo.title(), ORGANISATION, Optional.empty(), now, briefOptions.paper());
+                    out.resolve(demo.output()), demo.title(), ORGANISATION, Optional.empty(), now, briefOptions.paper(),
+                    demo.period());
             BriefPipeline.Brief brief = pipeline.make(request);
             console.println("wrote " + brief.file());
         }

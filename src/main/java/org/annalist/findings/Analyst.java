@@ -12,6 +12,7 @@ import org.annalist.analysis.decompose.CentredMovingAverage;
 import org.annalist.analysis.decompose.Irregular;
 import org.annalist.analysis.decompose.ModelForm;
 import org.annalist.analysis.decompose.Stl;
+import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.analysis.indicators.YearOnYear;
 import org.annalist.analysis.season.SeasonalPattern;
 import org.annalist.series.Frequency;
@@ -32,14 +33,19 @@ public final class Analyst {
     private static final int RECENT_PERIODS = 13;
 
     private final Optional<ModelForm.Form> forcedForm;
+    private final Optional<LatestIndicators.Measure> measure;
 
     public Analyst() {
-        this(Optional.empty());
+        this(Optional.empty(), Optional.empty());
     }
 
-    /** @param forcedForm additive or multiplicative as the user set it, instead of deciding from the data */
-    public Analyst(Optional<ModelForm.Form> forcedForm) {
+    /**
+     * @param forcedForm additive or multiplicative as the user set it, instead of deciding from the data
+     * @param measure    flow or level as the user declared it, instead of reading it from unit and name
+     */
+    public Analyst(Optional<ModelForm.Form> forcedForm, Optional<LatestIndicators.Measure> measure) {
         this.forcedForm = forcedForm;
+        this.measure = measure;
     }
 
     public Findings analyse(Series series) {
@@ -84,12 +90,22 @@ public final class Analyst {
                 + " is provisional: the new regime is still short and the break may not hold."));
 
         TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), notes);
+        LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
+                : LatestIndicators.at(series, series.size() - 1, measure.orElse(MeasureKind.infer(series)),
+                        decomposition.adjusted());
+        double[] calendarIrregular = null;
+        if (stl != null) {
+            calendarIrregular = stl.remainder().clone();
+            for (RemainderOutliers.Outlier o : OutlierAnalysis.screened(scored)) {
+                calendarIrregular[o.index()] = Double.NaN;   // one-offs would pull the calendar estimates
+            }
+        }
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
         return new Findings(SeriesFacts.of(series), log ? "log" : "none", trend,
                 SeasonalityFindings.of(season, form), cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                null, null, recent(series), notes, formChoice(form), decomposition, breaks.episodes(),
-                breaks.method());
+                IndicatorsFindings.of(latest), CalendarAnalysis.of(series, calendarIrregular, log, latest), null,
+                recent(series), notes, formChoice(form), decomposition, breaks.episodes(), breaks.method());
     }
 
     /**

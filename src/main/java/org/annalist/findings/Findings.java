@@ -12,7 +12,8 @@ import java.util.List;
  * @param transform     {@code none} or {@code log}
  * @param outliers      single periods far from trend and season
  * @param breaks        structural changes, oldest first
- * @param indicators    latest-period indicators (null until they exist)
+ * @param indicators    the latest period against earlier ones (null when the latest period has no value)
+ * @param calendar      Easter dates, calendar effects and notes (monthly and quarterly data; else null)
  * @param outlook       forecasts (null until they exist)
  * @param recent        the latest periods with their year-on-year change, oldest first
  * @param notes         caveats in plain words (short series, forced choices, …)
@@ -22,11 +23,11 @@ import java.util.List;
  * @param breakMethod   how breaks were searched, for the methods appendix
  */
 @JsonPropertyOrder({"schema", "series", "transform", "trend", "seasonality", "cycle", "outliers", "breaks",
-    "irregular", "smoothing", "indicators", "outlook"})
+    "irregular", "smoothing", "indicators", "calendar", "outlook"})
 public record Findings(SeriesFacts series, String transform, TrendFinding trend, SeasonalityFinding seasonality,
                        CycleFinding cycle, List<OutlierFinding> outliers, List<BreakFinding> breaks,
                        IrregularFinding irregular,
-                       Smoothing smoothing, Object indicators, Object outlook, @JsonIgnore List<RecentPeriod> recent,
+                       Smoothing smoothing, IndicatorsFinding indicators, CalendarFinding calendar, Object outlook, @JsonIgnore List<RecentPeriod> recent,
                        @JsonIgnore List<String> notes, @JsonIgnore FormChoice form,
                        @JsonIgnore Decomposition decomposition, @JsonIgnore List<Episode> episodes,
                        @JsonIgnore String breakMethod) {

@@ -7,7 +7,8 @@ import java.util.List;
  * language, flags for the template's choices. The template chooses the sentences; nothing here
  * is a sentence.
  */
-public record BriefView(Document document, Header header, Lead lead, List<KeyFigure> keyFigures, Charts charts,
+public record BriefView(Document document, Header header, Lead lead, ThisPeriod thisPeriod, List<KeyFigure> keyFigures,
+                        Charts charts,
                         TrendView trend, SeasonView season, CycleView cycle, List<OutlierRow> outliers,
                         List<BreakRow> breaks, List<EpisodeView> episodes, IrregularView irregular,
                         List<Row> recent, List<Fact> facts, List<String> notes, List<MethodRow> methods,
@@ -44,6 +45,22 @@ public record BriefView(Document document, Header header, Lead lead, List<KeyFig
      */
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
                        String changePercent, String direction, boolean provisional) {
+    }
+
+    /**
+     * The latest period's figures beyond the year-on-year change; empty strings where they cannot be said.
+     *
+     * @param level       the measure is a level or rate (averaged over spans, changes in its own units)
+     * @param rankWord    e.g. {@code the highest October of 16} or {@code the 3rd highest October of 16}
+     * @param calendar    sentences on the calendar of the period (Easter, weekend nights, leap day)
+     */
+    public record ThisPeriod(boolean available, boolean level, String ytdFrom, String ytdTo, String ytdChange,
+                             String ytdTotal, String rollingChange, String rollingTotal, String rankWord,
+                             String record, String adjustedChange, List<String> calendar, boolean flagged) {
+
+        public ThisPeriod {
+            calendar = List.copyOf(calendar);
+        }
     }
 
     /** One of the first page's four figures. */

@@ -33,7 +33,9 @@ public final class BriefViews {
                 f.count(source.rowsRead()), source.reading(), masthead.software(), f.timestamp(masthead.generatedAt()));
         List<String> notes = new ArrayList<>(source.notes());
         notes.addAll(findings.notes());
-        return new BriefView(document, header, lead, sections.keyFigures(lead), sections.charts(), sections.trend(),
+        BriefView.ThisPeriod thisPeriod = sections.thisPeriod();
+        return new BriefView(document, header, lead, thisPeriod, sections.keyFigures(lead, thisPeriod), sections.charts(),
+                sections.trend(),
                 sections.season(), sections.cycle(), sections.outliers(), sections.breaks(), sections.episodes(),
                 sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(), facts(series, findings, f),
                 notes, AppendixViews.methods(findings, f), AppendixViews.thresholds(), provenance);

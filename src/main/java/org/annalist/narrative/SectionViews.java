@@ -6,6 +6,7 @@ import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
 import org.annalist.findings.Findings;
+import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.RulesInForce;
 import org.annalist.findings.SeasonalityFinding;
@@ -136,19 +137,68 @@ final class SectionViews {
                 findings.smoothing() == null ? 0 : findings.smoothing().window());
     }
 
-    List<BriefView.KeyFigure> keyFigures(BriefView.Lead lead) {
+    BriefView.ThisPeriod thisPeriod() {
+        IndicatorsFinding i = findings.indicators();
+        if (i == null) {
+            return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", "", "", List.of(), false);
+        }
+        boolean level = i.measure().equals("level");
+        IndicatorsFinding.Span ytd = i.yearToDate();
+        IndicatorsFinding.Span rolling = i.rollingYear();
+        Period period = period(i.period());
+        String rank = "";
+        if (i.rank().of() >= 3 && series.frequency() != Frequency.ANNUAL) {
+            String position = i.rank().position() == 1 ? "the highest" : i.rank().position() == i.rank().of() ? "the lowest"
+                    : "the " + ordinal(i.rank().position()) + " highest";
+            rank = position + " " + seasonName(period) + " of the " + i.rank().of() + " in the data";
+        }
+        return new BriefView.ThisPeriod(true, level,
+                ytd == null ? "" : f.period(period(ytd.from())), ytd == null ? "" : f.period(period(ytd.to())),
+                ytd == null ? "" : change(ytd, level), ytd == null ? "" : f.value(ytd.total()),
+                rolling == null ? "" : change(rolling, level), rolling == null ? "" : f.value(rolling.total()), rank,
+                i.record() == null ? "" : i.record(),
+                i.seasonallyAdjustedChangePct() == null ? "" : f.signedPercent(i.seasonallyAdjustedChangePct()),
+                findings.calendar() == null ? List.of() : findings.calendar().notes(), !i.flagged().isEmpty());
+    }
+
+    /** A change as a brief states it: % for flows, the measure's own units for levels and rates. */
+    private String change(IndicatorsFinding.Span s, boolean level) {
+        if (level) {
+            return f.signedValue(s.change()) + (series.unit().equals("%") ? " percentage points"
+                    : series.unit().isEmpty() ? "" : " " + series.unit());
+        }
+        return s.changePct() == null ? "" : f.signedPercent(s.changePct());
+    }
+
+    private static String ordinal(int n) {
+        String suffix = n % 100 >= 11 && n % 100 <= 13 ? "th" : n % 10 == 1 ? "st" : n % 10 == 2 ? "nd" : n % 10 == 3 ? "rd" : "th";
+        return n + suffix;
+    }
+
+    /** "October", "Q3", "Monday": the season a period's rank compares it within. */
+    private static String seasonName(Period p) {
+        return p.frequency() == Frequency.MONTHLY ? positionName(p.seasonLabel())
+                : p.frequency() == Frequency.QUARTERLY ? p.seasonLabel() : "week " + p.seasonalPosition();
+    }
+
+    List<BriefView.KeyFigure> keyFigures(BriefView.Lead lead, BriefView.ThisPeriod period) {
         List<BriefView.KeyFigure> figures = new ArrayList<>();
         figures.add(new BriefView.KeyFigure(lead.period(), lead.value().isEmpty() ? "\u2013" : lead.value(),
                 lead.comparable() ? (lead.direction().equals("down") ? "\u2212" : "+") + lead.changePercent()
                         + " on a year earlier" : "no comparison with a year earlier"));
+        if (period.available() && !period.ytdChange().isEmpty()) {
+            figures.add(new BriefView.KeyFigure("Year to date", period.ytdChange(),
+                    period.ytdFrom() + " to " + period.ytdTo() + " against a year earlier"));
+        } else {
+            BriefView.SeasonView s = season();
+            figures.add(new BriefView.KeyFigure("Seasonal peak", s.verdict().equals("present") ? s.peak() : "none claimed",
+                    s.verdict().equals("present") ? s.peakIndex() + " against the yearly average; low in " + s.trough()
+                            : s.verdict().equals("not applicable") ? "annual data" : "no meaningful seasonal pattern"));
+        }
         BriefView.TrendView t = trend();
         figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || t.direction().equals("none") ? "no clear trend"
                 : t.percentPerYear() + " a year", t.assessed() ? "Sen slope " + t.slopePerYear() + " a year, " + t.pValue()
                 : "too few values"));
-        BriefView.SeasonView s = season();
-        figures.add(new BriefView.KeyFigure("Seasonal peak", s.verdict().equals("present") ? s.peak() : "none claimed",
-                s.verdict().equals("present") ? s.peakIndex() + " against the yearly average; low in " + s.trough()
-                        : s.verdict().equals("not applicable") ? "annual data" : "no meaningful seasonal pattern"));
         int breaks = findings.breaks().size();
         int outliers = findings.outliers().size();
         String unusual = breaks == 0 && outliers == 0 ? "none"

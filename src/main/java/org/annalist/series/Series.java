@@ -130,6 +130,25 @@ public final class Series {
         return List.copyOf(flagged);
     }
 
+    /** The series up to and including {@code last}: what a brief of that period sees. */
+    public Series upTo(Period last) {
+        int i = indexOf(last);
+        if (i < 0) {
+            throw new IllegalArgumentException(last + " is not within " + start + " to " + end());
+        }
+        return new Series(name, unit, start, Arrays.copyOf(values, i + 1), Arrays.copyOf(flagBits, i + 1));
+    }
+
+    /** The period labelled {@code label} (as {@link Period#label()} writes it), if the series spans it. */
+    public java.util.Optional<Period> periodLabelled(String label) {
+        for (int i = 0; i < values.length; i++) {
+            if (period(i).label().equals(label)) {
+                return java.util.Optional.of(period(i));
+            }
+        }
+        return java.util.Optional.empty();
+    }
+
     /** The same values under another name and unit. */
     public Series renamed(String newName, String newUnit) {
         return new Series(newName, newUnit, start, values, flagBits);

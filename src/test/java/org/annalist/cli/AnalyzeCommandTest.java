@@ -24,7 +24,7 @@ class AnalyzeCommandTest {
         assertThat(run.exitCode()).as(run.err()).isZero();
         JsonNode f = new ObjectMapper().readTree(run.out());
         assertThat(keys(f)).containsExactly("schema", "series", "transform", "trend", "seasonality", "cycle", "outliers",
-                "breaks", "irregular", "smoothing", "indicators", "outlook");
+                "breaks", "irregular", "smoothing", "indicators", "calendar", "outlook");
         assertThat(f.get("schema").asText()).isEqualTo("annalist.findings/1");
         assertThat(keys(f.get("series"))).containsExactly("name", "unit", "frequency", "start", "end", "observations",
                 "missing");
@@ -41,7 +41,19 @@ class AnalyzeCommandTest {
         assertThat(f.get("trend").get("slope_ci95").size()).isEqualTo(2);
         assertThat(f.get("seasonality").get("period").asInt()).isEqualTo(12);
         assertThat(f.get("outliers").isArray()).isTrue();
-        assertThat(f.get("indicators").isNull()).isTrue();
+        JsonNode i = f.get("indicators");
+        assertThat(keys(i)).contains("period", "value", "flagged", "measure", "same_period_last_year", "year_to_date",
+                "rolling_year", "seasonally_adjusted_change_pct", "rank");
+        // AirPassengers, from the data: December 1960 = 432 against 405 a year earlier (+6.67 %)
+        assertThat(i.get("period").asText()).isEqualTo("1960-12");
+        assertThat(i.get("same_period_last_year").get("change_pct").asDouble()).isCloseTo(100 * (432.0 / 405 - 1),
+                org.assertj.core.api.Assertions.within(1e-9));
+        assertThat(keys(i.get("year_to_date"))).contains("from", "to", "total", "previous_total", "change_pct");
+        assertThat(keys(i.get("rank"))).containsExactly("position", "of");
+        JsonNode c = f.get("calendar");
+        assertThat(keys(c)).containsExactly("easter", "effects", "notes");
+        assertThat(c.get("easter").get(0).get("date").asText()).isEqualTo("1949-04-17");   // Easter 1949 (Meeus)
+        assertThat(f.get("outlook").isNull()).isTrue();
     }
 
     @Test
@@ -70,6 +82,22 @@ class AnalyzeCommandTest {
         Run run = Run.of("analyze", "--series", "nope", "src/test/resources/reference/Nile.csv");
         assertThat(run.exitCode()).isEqualTo(2);
         assertThat(run.err()).contains("no series named 'nope'");
+    }
+
+    @Test
+    void theDemoExplainsAnAprilWhenEasterMoved() throws IOException {
+        // Demo data (invented): Easter 31 March 2024, 20 April 2025, with a planted Easter effect.
+        Run run = Run.of("analyze", "--format", "json", "--series", "Total", "--period", "2025-04",
+                "demo-data/quennelmark-guest-nights.csv");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        JsonNode f = new ObjectMapper().readTree(run.out());
+        assertThat(f.get("indicators").get("period").asText()).isEqualTo("2025-04");
+        JsonNode easter = f.get("calendar").get("effects").get(0);
+        assertThat(easter.get("name").asText()).isEqualTo("easter");
+        assertThat(easter.get("kept").asBoolean()).isTrue();
+        String notes = f.get("calendar").get("notes").toString();
+        assertThat(notes).contains("Easter Sunday was on 20 April 2025, a year earlier on 31 March 2024",
+                "accounts for about", "March and April together");
     }
 
     @Test

@@ -113,7 +113,7 @@ class CommandLineTest {
         assertThat(run.exitCode()).as(run.err()).isZero();
         try (var briefs = Files.list(folder)) {
             assertThat(briefs.map(p -> p.getFileName().toString())).contains("guest-nights-total.pdf",
-                    "glassworks-visitors-monthly.pdf").hasSize(6);
+                    "glassworks-visitors-monthly.pdf", "guest-nights-total-2025-04.pdf").hasSize(7);
         }
         assertThat(PdfFacts.of(folder.resolve("guest-nights-total.pdf")).text()).contains("provisional");
     }

@@ -1,0 +1,36 @@
+package org.annalist.cli;
+
+import java.util.Optional;
+import org.annalist.analysis.decompose.ModelForm;
+import org.annalist.analysis.indicators.LatestIndicators;
+import org.annalist.findings.Analyst;
+import picocli.CommandLine.Option;
+
+/** The choices a user can make for the analysis instead of leaving them to the data. */
+final class AnalysisOptions {
+
+    enum FormChoice { auto, additive, multiplicative }
+
+    enum MeasureChoice { auto, flow, level }
+
+    @Option(names = "--form", paramLabel = "FORM",
+            description = "auto (decide from the data), additive or multiplicative. Default: auto.")
+    FormChoice form = FormChoice.auto;
+
+    @Option(names = "--measure", paramLabel = "KIND",
+            description = "flow (summed over time: nights, arrivals) or level (averaged: occupancy, prices). "
+                    + "Default: auto (level for a unit in % or a name saying rate, occupancy, average, price ...).")
+    MeasureChoice measure = MeasureChoice.auto;
+
+    Analyst analyst() {
+        return new Analyst(switch (form) {
+            case auto -> Optional.empty();
+            case additive -> Optional.of(ModelForm.Form.ADDITIVE);
+            case multiplicative -> Optional.of(ModelForm.Form.MULTIPLICATIVE);
+        }, switch (measure) {
+            case auto -> Optional.empty();
+            case flow -> Optional.of(LatestIndicators.Measure.FLOW);
+            case level -> Optional.of(LatestIndicators.Measure.LEVEL);
+        });
+    }
+}
