@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.UnaryOperator;
 import org.annalist.chart.Figure;
 import org.annalist.chart.IrregularChart;
 import org.annalist.chart.OverviewChart;
@@ -33,15 +34,20 @@ import org.annalist.series.Series;
 public final class BriefPipeline {
 
     private final Analyst analyst;
+    private final UnaryOperator<Series> prepare;
     private final PdfRenderer renderer = new PdfRenderer();
 
     public BriefPipeline() {
-        this(new Analyst());
+        this(new Analyst(), UnaryOperator.identity());
     }
 
-    /** @param analyst the analysis with the user's choices (form, measure) */
-    public BriefPipeline(Analyst analyst) {
+    /**
+     * @param analyst the analysis with the user's choices (form, measure)
+     * @param prepare what to do to the series before the analysis (per-day figures, say)
+     */
+    public BriefPipeline(Analyst analyst, UnaryOperator<Series> prepare) {
         this.analyst = analyst;
+        this.prepare = prepare;
     }
 
     /**
@@ -50,7 +56,7 @@ public final class BriefPipeline {
      */
     public Brief make(BriefRequest request) {
         ReadResult read = new SeriesFileReader(request.readOptions()).read(request.input());
-        return make(request, read, cutAtLatest(choose(read, request), request, read));
+        return make(request, read, cutAtLatest(prepare.apply(choose(read, request)), request, read));
     }
 
     /** Makes the brief of {@code series}, one of the series already read from {@code read}. */

@@ -3,7 +3,9 @@ package org.annalist.cli;
 import java.util.Optional;
 import org.annalist.analysis.decompose.ModelForm;
 import org.annalist.analysis.indicators.LatestIndicators;
+import org.annalist.analysis.calendar.PeriodLength;
 import org.annalist.findings.Analyst;
+import org.annalist.series.Series;
 import picocli.CommandLine.Option;
 
 /** The choices a user can make for the analysis instead of leaving them to the data. */
@@ -21,6 +23,22 @@ final class AnalysisOptions {
             description = "flow (summed over time: nights, arrivals) or level (averaged: occupancy, prices). "
                     + "Default: auto (level for a unit in % or a name saying rate, occupancy, average, price ...).")
     MeasureChoice measure = MeasureChoice.auto;
+
+    @Option(names = "--per-day", description = "Analyse a monthly or quarterly flow per average-length period "
+            + "(total / days x 30.4375 for months), so that months of unequal length compare fairly.")
+    boolean perDay;
+
+    /** The series as the analysis should see it. */
+    Series prepare(Series series) {
+        if (!perDay) {
+            return series;
+        }
+        try {
+            return PeriodLength.perAveragePeriod(series);
+        } catch (IllegalArgumentException e) {
+            throw new UserInputException("--per-day: " + e.getMessage());
+        }
+    }
 
     Analyst analyst() {
         return new Analyst(switch (form) {

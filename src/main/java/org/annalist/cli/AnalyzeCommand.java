@@ -49,7 +49,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         ReadResult read = input.read();
         List<Series> chosen = series == null ? read.series() : List.of(read.require(series));
         Analyst analyst = analysis.analyst();
-        List<Findings> findings = chosen.stream().map(s -> analyst.analyse(period == null ? s : s.upTo(s.periodLabelled(period)
+        List<Findings> findings = chosen.stream().map(analysis::prepare).map(s -> analyst.analyse(period == null ? s : s.upTo(s.periodLabelled(period)
                 .orElseThrow(() -> new UserInputException(read.file() + ": series '" + s.name() + "' has no period "
                         + period + "; expected a period from " + s.start() + " to " + s.end()))))).toList();
         PrintWriter out = spec.commandLine().getOut();
