@@ -1,6 +1,10 @@
 package org.annalist.cli;
 
+import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
+import org.annalist.analysis.calendar.Holiday;
+import org.annalist.ingest.HolidayFile;
 import org.annalist.analysis.decompose.ModelForm;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.analysis.calendar.PeriodLength;
@@ -23,6 +27,11 @@ final class AnalysisOptions {
             description = "flow (summed over time: nights, arrivals) or level (averaged: occupancy, prices). "
                     + "Default: auto (level for a unit in % or a name saying rate, occupancy, average, price ...).")
     MeasureChoice measure = MeasureChoice.auto;
+
+    @Option(names = "--holidays", paramLabel = "FILE",
+            description = "A file of your own moving holidays (a header, then date,name lines; a holiday of several "
+                    + "days has several lines), estimated beside Easter as calendar effects.")
+    Path holidays;
 
     @Option(names = "--per-day", description = "Analyse a monthly or quarterly flow per average-length period "
             + "(total / days x 30.4375 for months), so that months of unequal length compare fairly.")
@@ -49,6 +58,7 @@ final class AnalysisOptions {
             case auto -> Optional.empty();
             case flow -> Optional.of(LatestIndicators.Measure.FLOW);
             case level -> Optional.of(LatestIndicators.Measure.LEVEL);
-        });
+        }, holidays == null ? List.of() : HolidayFile.read(holidays).stream()
+                .map(h -> new Holiday(h.name(), h.days())).toList());
     }
 }

@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.Set;
 import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.anomaly.RemainderOutliers;
+import org.annalist.analysis.calendar.Holiday;
 import org.annalist.analysis.decompose.CentredMovingAverage;
 import org.annalist.analysis.decompose.Irregular;
 import org.annalist.analysis.decompose.ModelForm;
@@ -34,18 +35,22 @@ public final class Analyst {
 
     private final Optional<ModelForm.Form> forcedForm;
     private final Optional<LatestIndicators.Measure> measure;
+    private final List<Holiday> holidays;
 
     public Analyst() {
-        this(Optional.empty(), Optional.empty());
+        this(Optional.empty(), Optional.empty(), List.of());
     }
 
     /**
      * @param forcedForm additive or multiplicative as the user set it, instead of deciding from the data
      * @param measure    flow or level as the user declared it, instead of reading it from unit and name
+     * @param holidays   the user's moving holidays, estimated beside Easter
      */
-    public Analyst(Optional<ModelForm.Form> forcedForm, Optional<LatestIndicators.Measure> measure) {
+    public Analyst(Optional<ModelForm.Form> forcedForm, Optional<LatestIndicators.Measure> measure,
+                   List<Holiday> holidays) {
         this.forcedForm = forcedForm;
         this.measure = measure;
+        this.holidays = List.copyOf(holidays);
     }
 
     public Findings analyse(Series series) {
@@ -104,7 +109,7 @@ public final class Analyst {
         IrregularFinding irregular = irregular(y, remainder);
         return new Findings(SeriesFacts.of(series), log ? "log" : "none", trend,
                 SeasonalityFindings.of(season, form), cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest), CalendarAnalysis.of(series, calendarIrregular, log, latest), null,
+                IndicatorsFindings.of(latest), CalendarAnalysis.of(series, calendarIrregular, log, latest, holidays), null,
                 recent(series), notes, formChoice(form), decomposition, breaks.episodes(), breaks.method());
     }
 

@@ -10,6 +10,7 @@ import java.util.Optional;
 import org.annalist.analysis.calendar.CalendarEffects;
 import org.annalist.analysis.calendar.CalendarRegressors;
 import org.annalist.analysis.calendar.Easter;
+import org.annalist.analysis.calendar.Holiday;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
@@ -32,7 +33,8 @@ final class CalendarAnalysis {
      * @param workingIrregular the decomposition remainder on the working scale (null without a decomposition)
      * @param indicators       the latest period's indicators (null when it has no value)
      */
-    static CalendarFinding of(Series series, double[] workingIrregular, boolean log, LatestIndicators.Result indicators) {
+    static CalendarFinding of(Series series, double[] workingIrregular, boolean log, LatestIndicators.Result indicators,
+                              List<Holiday> holidays) {
         if (!CalendarEffects.applies(series.frequency())) {
             return null;
         }
@@ -44,7 +46,7 @@ final class CalendarAnalysis {
         if (workingIrregular != null) {
             try {
                 fit = Optional.of(CalendarEffects.estimate(workingIrregular, series.start(),
-                        CalendarRegressors.DEFAULT_EASTER_WINDOW));
+                        CalendarRegressors.DEFAULT_EASTER_WINDOW, holidays));
             } catch (IllegalArgumentException tooShort) {
                 fit = Optional.empty();
             }
@@ -54,12 +56,12 @@ final class CalendarAnalysis {
                 e.name(), e.coefficient(), effectPct(e.coefficient(), 1, log, level), e.pValue(), e.kept())).toList())
                 .orElse(List.of());
         List<String> notes = indicators == null || indicators.lastYear() == null ? List.of()
-                : notes(series, indicators, fit, log);
+                : notes(series, indicators, fit, log, holidays);
         return new CalendarFinding(easter, effects, notes);
     }
 
     private static List<String> notes(Series series, LatestIndicators.Result r, Optional<CalendarEffects.Result> fit,
-                                      boolean log) {
+                                      boolean log, List<Holiday> holidays) {
         List<String> notes = new ArrayList<>();
         Period now = r.period();
         Period before = r.lastYear().period();
@@ -82,6 +84,19 @@ final class CalendarAnalysis {
             }
             notes.add(s.toString());
             combinedSpring(series, r).ifPresent(notes::add);
+        }
+        for (Holiday holiday : holidays) {
+            double inNow = holiday.share(now);
+            double inBefore = holiday.share(before);
+            if (Math.abs(inNow - inBefore) > 1e-9) {
+                StringBuilder s = new StringBuilder(String.format(Locale.ROOT,
+                        "%s: %.0f %% of its days fell in %s, against %.0f %% in %s.", holiday.name(), 100 * inNow, name(now),
+                        100 * inBefore, name(before)));
+                fit.flatMap(f -> f.kept(holiday.name())).ifPresent(e -> s.append(String.format(Locale.ROOT,
+                        " By its estimated effect that accounts for about %+.1f %% of the change.",
+                        effectPct(e.coefficient(), inNow - inBefore, log, r.lastYear().value()))));
+                notes.add(s.toString());
+            }
         }
         int nightsNow = CalendarRegressors.weekendNights(now);
         int nightsBefore = CalendarRegressors.weekendNights(before);

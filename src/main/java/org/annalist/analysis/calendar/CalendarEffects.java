@@ -19,6 +19,9 @@ import org.apache.commons.math3.linear.RealMatrix;
  * lag ⌊4 (n/100)^{2/9}⌋ after Newey &amp; West 1994). An effect is kept when its two-sided normal
  * p-value is below {@link DecisionRules#ALPHA}.
  *
+ * <p>A user's own moving holidays ({@link Holiday}) enter the same way as Easter: the share of
+ * the year's holiday days in the period, centred per calendar month.
+ *
  * <p>The length of the month is not estimated: only February varies, in one year of four, too
  * rarely for a robust standard error; a leap-year February is noted instead (29/28, +3.6 % more
  * days), see the indicators.
@@ -61,17 +64,30 @@ public final class CalendarEffects {
 
     /** The centred regressors of each period, columns in the order of {@link #names}. */
     static double[][] regressors(Period start, int n, int easterWindow, List<String> names) {
+        return regressors(start, n, easterWindow, List.of(), names);
+    }
+
+    static double[][] regressors(Period start, int n, int easterWindow, List<Holiday> holidays, List<String> names) {
         int period = start.frequency().seasonalPeriod();
-        double[][] raw = new double[n][2];
+        int columns = 2 + holidays.size();
+        double[][] raw = new double[n][columns];
         for (int t = 0; t < n; t++) {
             Period p = start.plus(t);
             raw[t][0] = CalendarRegressors.easterShare(p, easterWindow);
             raw[t][1] = CalendarRegressors.weekendNights(p);
+            for (int h = 0; h < holidays.size(); h++) {
+                raw[t][2 + h] = holidays.get(h).share(p);
+            }
         }
-        String[] all = {EASTER, WEEKEND};
+        String[] all = new String[columns];
+        all[0] = EASTER;
+        all[1] = WEEKEND;
+        for (int h = 0; h < holidays.size(); h++) {
+            all[2 + h] = holidays.get(h).name();
+        }
         List<Integer> keep = new ArrayList<>();
-        double[][] centred = new double[n][2];
-        for (int c = 0; c < 2; c++) {
+        double[][] centred = new double[n][columns];
+        for (int c = 0; c < columns; c++) {
             double[] sum = new double[period];
             int[] count = new int[period];
             for (int t = 0; t < n; t++) {
@@ -103,12 +119,17 @@ public final class CalendarEffects {
      * @throws IllegalArgumentException for a frequency other than monthly or quarterly, or too few values
      */
     public static Result estimate(double[] irregular, Period start, int easterWindow) {
+        return estimate(irregular, start, easterWindow, List.of());
+    }
+
+    /** As {@link #estimate(double[], Period, int)}, with the user's own moving holidays as further regressors. */
+    public static Result estimate(double[] irregular, Period start, int easterWindow, List<Holiday> holidays) {
         if (!applies(start.frequency())) {
             throw new IllegalArgumentException("calendar effects are estimated for monthly or quarterly data, not "
                     + start.frequency());
         }
         List<String> names = new ArrayList<>();
-        double[][] all = regressors(start, irregular.length, easterWindow, names);
+        double[][] all = regressors(start, irregular.length, easterWindow, holidays, names);
         List<Integer> rows = new ArrayList<>();
         for (int t = 0; t < irregular.length; t++) {
             if (!Double.isNaN(irregular[t])) {

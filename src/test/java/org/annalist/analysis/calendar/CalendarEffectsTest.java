@@ -51,4 +51,31 @@ class CalendarEffectsTest {
         // rate measured 6.75 %, Newey-West's usual slight excess in samples of this size)
         assertThat(kept).isLessThanOrEqualTo(8);
     }
+
+    @Test
+    void aUsersMovingHolidayIsEstimatedLikeEaster() {
+        // A three-day festival that falls in late June in even years and early July in odd years (invented),
+        // with an effect of +6 % on its month.
+        java.util.Set<java.time.LocalDate> days = new java.util.HashSet<>();
+        for (int year = 2010; year < 2026; year++) {
+            java.time.LocalDate first = year % 2 == 0 ? java.time.LocalDate.of(year, 6, 27) : java.time.LocalDate.of(year, 7, 2);
+            for (int d = 0; d < 3; d++) {
+                days.add(first.plusDays(d));
+            }
+        }
+        Holiday festival = new Holiday("festival", days);
+        Random random = new Random(4);
+        double[] y = new double[192];
+        Period start = Period.month(2010, 1);
+        java.util.List<String> names = new java.util.ArrayList<>();
+        double[][] x = CalendarEffects.regressors(start, 192, 8, java.util.List.of(festival), names);
+        for (int t = 0; t < y.length; t++) {
+            y[t] = 0.06 * x[t][names.indexOf("festival")] + 0.01 * random.nextGaussian();
+        }
+        CalendarEffects.Result r = CalendarEffects.estimate(y, start, 8, java.util.List.of(festival));
+        CalendarEffects.Effect e = r.kept("festival").orElseThrow();
+        assertThat(Math.abs(e.coefficient() - 0.06)).isLessThanOrEqualTo(2 * e.standardError());
+        assertThat(festival.share(Period.month(2011, 7))).isEqualTo(1.0);
+        assertThat(festival.share(Period.month(2012, 7))).isEqualTo(1.0 / 3);
+    }
 }
