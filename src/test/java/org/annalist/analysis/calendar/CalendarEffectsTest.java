@@ -54,11 +54,11 @@ class CalendarEffectsTest {
 
     @Test
     void aUsersMovingHolidayIsEstimatedLikeEaster() {
-        // A three-day festival that falls in late June in even years and early July in odd years (invented),
+        // A three-day festival that starts on 30 June in even years and early July in odd years (invented),
         // with an effect of +6 % on its month.
         java.util.Set<java.time.LocalDate> days = new java.util.HashSet<>();
         for (int year = 2010; year < 2026; year++) {
-            java.time.LocalDate first = year % 2 == 0 ? java.time.LocalDate.of(year, 6, 27) : java.time.LocalDate.of(year, 7, 2);
+            java.time.LocalDate first = year % 2 == 0 ? java.time.LocalDate.of(year, 6, 30) : java.time.LocalDate.of(year, 7, 2);
             for (int d = 0; d < 3; d++) {
                 days.add(first.plusDays(d));
             }
@@ -76,6 +76,6 @@ class CalendarEffectsTest {
         CalendarEffects.Effect e = r.kept("festival").orElseThrow();
         assertThat(Math.abs(e.coefficient() - 0.06)).isLessThanOrEqualTo(2 * e.standardError());
         assertThat(festival.share(Period.month(2011, 7))).isEqualTo(1.0);
-        assertThat(festival.share(Period.month(2012, 7))).isEqualTo(1.0 / 3);
+        assertThat(festival.share(Period.month(2012, 7))).isEqualTo(2.0 / 3);   // 30 June, 1 and 2 July 2012
     }
 }
