@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.function.UnaryOperator;
 import org.annalist.chart.Figure;
 import org.annalist.chart.IrregularChart;
@@ -15,6 +16,7 @@ import org.annalist.chart.OverviewChart;
 import org.annalist.chart.SeasonalProfileChart;
 import org.annalist.chart.YearOverlayChart;
 import org.annalist.findings.Analyst;
+import org.annalist.findings.DerivedSeries;
 import org.annalist.findings.Findings;
 import org.annalist.findings.SourceFacts;
 import org.annalist.ingest.DataProblem;
@@ -56,13 +58,24 @@ public final class BriefPipeline {
      */
     public Brief make(BriefRequest request) {
         ReadResult read = new SeriesFileReader(request.readOptions()).read(request.input());
+        if (request.series().isPresent() && read.find(request.series().get()).isEmpty()) {
+            Optional<DerivedSeries.Derived> derived = DerivedSeries.of(read.series()).stream()
+                    .filter(d -> d.series().name().equalsIgnoreCase(request.series().get())).findFirst();
+            if (derived.isPresent()) {
+                Series cut = cutAtLatest(derived.get().series(), request, read);
+                return make(request, read, cut, analyst.analyse(new DerivedSeries.Derived(cut, derived.get().parts())));
+            }
+        }
         return make(request, read, cutAtLatest(prepare.apply(choose(read, request)), request, read));
     }
 
     /** Makes the brief of {@code series}, one of the series already read from {@code read}. */
     public Brief make(BriefRequest request, ReadResult read, Series series) {
+        return make(request, read, series, analyst.analyse(series));
+    }
+
+    private Brief make(BriefRequest request, ReadResult read, Series series, Findings findings) {
         Fonts.registerWithAwt();
-        Findings findings = analyst.analyse(series);
         Masthead masthead = new Masthead(request.title(), request.organisation(), Locale.ENGLISH, request.paper(),
                 request.generatedAt(), "Annalist " + Version.current());
         SourceFacts source = sourceFacts(read);
@@ -145,8 +158,11 @@ public final class BriefPipeline {
             return read.require(request.series().get());
         }
         if (read.series().size() > 1) {
+            List<DerivedSeries.Derived> derived = DerivedSeries.of(read.series());
+            String derivedNames = derived.isEmpty() ? "" : ", or a derived " + String.join(", ", derived.stream()
+                    .map(d -> "'" + d.series().name() + "'").toList());
             throw new DataProblemException(new DataProblem(read.file(), 0, 0, "holds " + read.series().size()
-                    + " series; expected --series with one of " + read.names()));
+                    + " series; expected --series with one of " + read.names() + derivedNames));
         }
         return read.series().get(0);
     }

@@ -1,9 +1,12 @@
 package org.annalist.cli;
 
 import java.io.PrintWriter;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.annalist.findings.Analyst;
+import org.annalist.findings.DerivedSeries;
 import org.annalist.findings.Findings;
 import org.annalist.findings.FindingsJson;
 import org.annalist.ingest.ReadResult;
@@ -44,18 +47,40 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Mixin
     DebugOption debug;
 
+    /** The series up to {@code --period}, when given. */
+    private Series cut(Series s, ReadResult read) {
+        if (period == null) {
+            return s;
+        }
+        return s.upTo(s.periodLabelled(period).orElseThrow(() -> new UserInputException(read.file() + ": series '"
+                + s.name() + "' has no period " + period + "; expected a period from " + s.start() + " to " + s.end())));
+    }
+
     @Override
     public Integer call() {
         ReadResult read = input.read();
-        List<Series> chosen = series == null ? read.series() : List.of(read.require(series));
         Analyst analyst = analysis.analyst();
-        List<Findings> findings = chosen.stream().map(analysis::prepare).map(s -> analyst.analyse(period == null ? s : s.upTo(s.periodLabelled(period)
-                .orElseThrow(() -> new UserInputException(read.file() + ": series '" + s.name() + "' has no period "
-                        + period + "; expected a period from " + s.start() + " to " + s.end()))))).toList();
+        List<DerivedSeries.Derived> derived = DerivedSeries.of(read.series());
+        List<Findings> findings = new ArrayList<>();
+        Optional<DerivedSeries.Derived> namedDerived = series == null || read.find(series).isPresent() ? Optional.empty()
+                : derived.stream().filter(d -> d.series().name().equalsIgnoreCase(series)).findFirst();
+        if (namedDerived.isPresent()) {
+            DerivedSeries.Derived d = namedDerived.get();
+            findings.add(analyst.analyse(new DerivedSeries.Derived(cut(d.series(), read), d.parts())));
+        } else {
+            List<Series> chosen = series == null ? read.series() : List.of(read.require(series));
+            for (Series s : chosen) {
+                findings.add(analyst.analyse(cut(analysis.prepare(s), read)));
+            }
+            if (series == null) {
+                for (DerivedSeries.Derived d : derived) {
+                    findings.add(analyst.analyse(new DerivedSeries.Derived(cut(d.series(), read), d.parts())));
+                }
+            }
+        }
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
-            out.print(FindingsJson.write(findings.size() == 1 && series != null || read.series().size() == 1
-                    ? findings.get(0) : findings));
+            out.print(FindingsJson.write(findings.size() == 1 ? findings.get(0) : findings));
         } else {
             out.print(AnalystNotes.all(findings));
         }

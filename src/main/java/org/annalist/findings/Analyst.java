@@ -54,6 +54,15 @@ public final class Analyst {
     }
 
     public Findings analyse(Series series) {
+        return analyse(series, null);
+    }
+
+    /** A derived ratio series, whose spans take the ratio of its parts' sums. */
+    public Findings analyse(DerivedSeries.Derived derived) {
+        return analyse(derived.series(), derived.parts());
+    }
+
+    private Findings analyse(Series series, LatestIndicators.Parts parts) {
         List<String> notes = new ArrayList<>();
         double[] x = series.values();
         int period = series.frequency().seasonalPeriod();
@@ -96,8 +105,8 @@ public final class Analyst {
 
         TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), notes);
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
-                : LatestIndicators.at(series, series.size() - 1, measure.orElse(MeasureKind.infer(series)),
-                        decomposition.adjusted());
+                : LatestIndicators.at(series, series.size() - 1, parts != null ? LatestIndicators.Measure.RATIO
+                        : measure.orElse(MeasureKind.infer(series)), decomposition.adjusted(), parts);
         double[] calendarIrregular = null;
         if (stl != null) {
             calendarIrregular = stl.remainder().clone();

@@ -142,7 +142,7 @@ final class SectionViews {
         if (i == null) {
             return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", "", "", List.of(), false);
         }
-        boolean level = i.measure().equals("level");
+        boolean level = !i.measure().equals("flow");
         IndicatorsFinding.Span ytd = i.yearToDate();
         IndicatorsFinding.Span rolling = i.rollingYear();
         Period period = period(i.period());

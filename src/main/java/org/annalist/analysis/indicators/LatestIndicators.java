@@ -14,12 +14,20 @@ import org.annalist.series.ValueFlag;
  * seasonally adjusted change on the previous period; the rank among the same period of every
  * year; records. Flows (nights, arrivals) are summed over spans; levels and rates (occupancy,
  * prices) are averaged, never summed (common practice in official tourism statistics, see
- * research notes A1). Spans with a missing value are not compared.
+ * research notes A1); ratios (average length of stay, occupancy) take the ratio of the parts'
+ * sums. Spans with a missing value are not compared.
  */
 public final class LatestIndicators {
 
     /** How values combine over time. */
-    public enum Measure { FLOW, LEVEL }
+    public enum Measure { FLOW, LEVEL, RATIO }
+
+    /**
+     * The parts of a ratio series (nights / arrivals, nights / bed-nights available × 100): over a
+     * span the ratio is the ratio of the sums, not the mean of the ratios (research notes A1).
+     */
+    public record Parts(Series numerator, Series denominator, double scale) {
+    }
 
     /** A value against an earlier one; {@code changePct} NaN when the earlier value is zero. */
     public record Comparison(Period period, double value, double change, double changePct) {
@@ -52,6 +60,11 @@ public final class LatestIndicators {
      * @throws IllegalArgumentException when the value at {@code i} is missing
      */
     public static Result at(Series s, int i, Measure measure, double[] adjusted) {
+        return at(s, i, measure, adjusted, null);
+    }
+
+    /** As {@link #at(Series, int, Measure, double[])}; for {@link Measure#RATIO}, {@code parts} give the spans' ratios of sums. */
+    public static Result at(Series s, int i, Measure measure, double[] adjusted, Parts parts) {
         if (s.isMissing(i)) {
             throw new IllegalArgumentException("no value for " + s.period(i));
         }
@@ -66,9 +79,9 @@ public final class LatestIndicators {
             while (first > 0 && s.period(first - 1).year() == s.period(i).year()) {
                 first--;
             }
-            ytd = span(s, first, i, lag, measure, flags);
+            ytd = span(s, first, i, lag, measure, flags, parts);
         }
-        Span rolling = s.frequency() == Frequency.ANNUAL || i - lag + 1 < 0 ? null : span(s, i - lag + 1, i, lag, measure, flags);
+        Span rolling = s.frequency() == Frequency.ANNUAL || i - lag + 1 < 0 ? null : span(s, i - lag + 1, i, lag, measure, flags, parts);
         double adjustedChange = Double.NaN;
         if (adjusted != null && i > 0 && !Double.isNaN(adjusted[i]) && !Double.isNaN(adjusted[i - 1]) && adjusted[i - 1] != 0) {
             adjustedChange = 100 * (adjusted[i] / adjusted[i - 1] - 1);
@@ -101,6 +114,22 @@ public final class LatestIndicators {
                 new Rank(above + 1, of), record, february);
     }
 
+    /** Σ numerator / Σ denominator × scale over {@code from..to}, shifted back {@code lag} periods. */
+    private static double ratioOfSums(Parts parts, Period from, Period to, int lag) {
+        double num = 0;
+        double den = 0;
+        for (Period p = from.plus(-lag); p.compareTo(to.plus(-lag)) <= 0; p = p.plus(1)) {
+            int a = parts.numerator().indexOf(p);
+            int b = parts.denominator().indexOf(p);
+            if (a < 0 || b < 0 || parts.numerator().isMissing(a) || parts.denominator().isMissing(b)) {
+                return Double.NaN;
+            }
+            num += parts.numerator().value(a);
+            den += parts.denominator().value(b);
+        }
+        return den == 0 ? Double.NaN : parts.scale() * num / den;
+    }
+
     private static Comparison compare(Series s, int i, int earlier, Set<ValueFlag> flags) {
         if (earlier < 0 || s.isMissing(earlier)) {
             return null;
@@ -112,7 +141,7 @@ public final class LatestIndicators {
     }
 
     /** {@code from..to} against the same positions {@code lag} periods earlier; null if any value is missing. */
-    private static Span span(Series s, int from, int to, int lag, Measure measure, Set<ValueFlag> flags) {
+    private static Span span(Series s, int from, int to, int lag, Measure measure, Set<ValueFlag> flags, Parts parts) {
         if (from - lag < 0) {
             return null;
         }
@@ -130,7 +159,10 @@ public final class LatestIndicators {
             flags.addAll(s.flags(j - lag));
         }
         int n = to - from + 1;
-        if (measure == Measure.LEVEL) {
+        if (measure == Measure.RATIO && parts != null) {
+            now = ratioOfSums(parts, s.period(from), s.period(to), 0);
+            before = ratioOfSums(parts, s.period(from), s.period(to), lag);
+        } else if (measure != Measure.FLOW) {
             now /= n;
             before /= n;
         }

@@ -66,4 +66,21 @@ class LatestIndicatorsTest {
         assertThat(LatestIndicators.at(s, 13, LatestIndicators.Measure.FLOW, null).longerFebruary()).isEqualTo(1);
         assertThat(LatestIndicators.at(s, 12, LatestIndicators.Measure.FLOW, null).longerFebruary()).isZero();
     }
+
+    @Test
+    void aRatioOverASpanIsTheRatioOfTheSums() {
+        // Invented: nights 100, 300 and arrivals 50, 100 in Jan-Feb 2026 (ALOS 2.0 and 3.0); a year
+        // earlier nights 90, 200 and arrivals 45, 80. Year-to-date ALOS = 400 / 150 = 2.667 (not the
+        // mean 2.5), a year earlier 290 / 125 = 2.32.
+        Series nights = Series.builder("nights", Frequency.MONTHLY).put(Period.month(2025, 1), 90)
+                .put(Period.month(2025, 2), 200).put(Period.month(2026, 1), 100).put(Period.month(2026, 2), 300).snapshot();
+        Series arrivals = Series.builder("arrivals", Frequency.MONTHLY).put(Period.month(2025, 1), 45)
+                .put(Period.month(2025, 2), 80).put(Period.month(2026, 1), 50).put(Period.month(2026, 2), 100).snapshot();
+        Series alos = Series.builder("ALOS", Frequency.MONTHLY).put(Period.month(2025, 1), 2.0)
+                .put(Period.month(2025, 2), 2.5).put(Period.month(2026, 1), 2.0).put(Period.month(2026, 2), 3.0).snapshot();
+        LatestIndicators.Result r = LatestIndicators.at(alos, alos.size() - 1, LatestIndicators.Measure.RATIO, null,
+                new LatestIndicators.Parts(nights, arrivals, 1));
+        assertThat(r.yearToDate().total()).isCloseTo(400.0 / 150, within(1e-12));
+        assertThat(r.yearToDate().previousTotal()).isCloseTo(290.0 / 125, within(1e-12));
+    }
 }
