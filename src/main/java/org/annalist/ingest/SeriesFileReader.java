@@ -79,6 +79,8 @@ public final class SeriesFileReader {
         Optional<Column> unitColumn = shape.with(Role.UNIT).stream().findFirst();
         Optional<Column> flagColumn = shape.with(Role.FLAG).stream().findFirst();
         String fallbackName = baseName(fileName);
+        Optional<SeasonGrid.Grid> grid = SeasonGrid.of(periods.frequency(), valueColumns, log,
+                shape.header().map(Row::line).orElse(0));
         for (int r = 0; r < shape.body().size(); r++) {
             Row row = shape.body().get(r);
             Period period = periods.periods().get(r);
@@ -87,10 +89,15 @@ public final class SeriesFileReader {
             }
             String key = String.join(" / ", keys.stream().map(k -> row.cell(k.index())).toList());
             for (Column column : valueColumns) {
-                String seriesName = seriesName(key, column, valueColumns.size(), fallbackName);
+                if (grid.isPresent() && grid.get().positions().get(column.index()) == 0) {
+                    continue;   // a totals column beside the months
+                }
+                Period cellPeriod = grid.isPresent() ? grid.get().period(period.year(), column.index()) : period;
+                String seriesName = grid.isPresent() ? (key.isEmpty() ? fallbackName : key)
+                        : seriesName(key, column, valueColumns.size(), fallbackName);
                 Collector collector = collectors.computeIfAbsent(seriesName, n -> new Collector(n,
                         unitOf(column, unitColumn.map(u -> row.cell(u.index())), !keys.isEmpty())));
-                if (!collector.claim(period, row.line(), column.index() + 1, log)) {
+                if (!collector.claim(cellPeriod, row.line(), column.index() + 1, log)) {
                     continue;
                 }
                 String cell = row.cell(column.index());
@@ -103,7 +110,7 @@ public final class SeriesFileReader {
                 }
                 Set<ValueFlag> flags = withFlagColumn(value.get().flags(), flagColumn.map(f -> row.cell(f.index())), row, log,
                         flagColumn.map(Column::index).orElse(-1));
-                collector.add(period, value.get(), flags, row.line());
+                collector.add(cellPeriod, value.get(), flags, row.line());
             }
         }
         log.throwIfErrors();
@@ -140,7 +147,7 @@ public final class SeriesFileReader {
                     case POINT -> firstLine[0] = firstLine[0] == 0 ? row.line() : firstLine[0];
                     case COMMA -> firstLine[1] = firstLine[1] == 0 ? row.line() : firstLine[1];
                     case NONE -> {
-                        if (ambiguousCell == null && (cell.contains(",") || cell.contains("."))) {
+                        if (ambiguousCell == null && (cell.contains(",") || cell.contains(".")) && NumberCells.looksNumeric(cell)) {
                             ambiguousCell = cell;
                             ambiguousLine = row.line();
                         }
@@ -276,7 +283,8 @@ public final class SeriesFileReader {
             if (firstOutOfOrderLine > 0) {
                 log.warn(firstOutOfOrderLine, 0, "rows of series '" + name + "' are not in time order; sorted them");
             }
-            return Optional.of(builder.unit(unit.isEmpty() && percent ? "%" : unit).snapshot());
+            // Empty cells before the first or after the last value (months not yet published) are not part of the span.
+            return Optional.of(builder.unit(unit.isEmpty() && percent ? "%" : unit).snapshot().trimmed());
         }
     }
 }

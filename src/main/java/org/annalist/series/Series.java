@@ -130,6 +130,30 @@ public final class Series {
         return List.copyOf(flagged);
     }
 
+    /**
+     * Without the missing periods before the first value and after the last.
+     *
+     * @throws IllegalStateException when every value is missing
+     */
+    public Series trimmed() {
+        int first = 0;
+        while (first < values.length && Double.isNaN(values[first])) {
+            first++;
+        }
+        if (first == values.length) {
+            throw new IllegalStateException("series " + name + " has no values");
+        }
+        int last = values.length - 1;
+        while (Double.isNaN(values[last])) {
+            last--;
+        }
+        if (first == 0 && last == values.length - 1) {
+            return this;
+        }
+        return new Series(name, unit, start.plus(first), Arrays.copyOfRange(values, first, last + 1),
+                Arrays.copyOfRange(flagBits, first, last + 1));
+    }
+
     /** The series up to and including {@code last}: what a brief of that period sees. */
     public Series upTo(Period last) {
         int i = indexOf(last);

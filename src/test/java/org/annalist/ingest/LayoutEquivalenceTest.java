@@ -66,6 +66,7 @@ class LayoutEquivalenceTest {
                 + "Source: Box and Jenkins\n", 1.0));
         cases.add(Arguments.of("rows in reverse order", reversed(), 1.0));
         cases.add(Arguments.of("long layout with another series", longLayout(), 1.0));
+        cases.add(Arguments.of("a row per year, a column per month, and a totals column", yearByMonthGrid(), 1.0));
         return cases.stream();
     }
 
@@ -75,6 +76,21 @@ class LayoutEquivalenceTest {
             rows.add(0, row[0] + "," + row[1]);
         }
         return "period,value\n" + String.join("\n", rows) + "\n";
+    }
+
+    private static String yearByMonthGrid() {
+        StringBuilder text = new StringBuilder("Year;Jan;Feb;Mar;Apr;May;Jun;Jul;Aug;Sep;Oct;Nov;Dec;Total\n");
+        for (int year = 0; year < 12; year++) {
+            text.append(1949 + year);
+            int total = 0;
+            for (int m = 0; m < 12; m++) {
+                int v = Integer.parseInt(ROWS.get(12 * year + m)[1]);
+                total += v;
+                text.append(';').append(v);
+            }
+            text.append(';').append(total).append('\n');
+        }
+        return text.toString();
     }
 
     private static String longLayout() {
