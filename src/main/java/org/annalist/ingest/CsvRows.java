@@ -14,11 +14,23 @@ import org.apache.commons.csv.CSVRecord;
 /** Splits text into rows of trimmed cells, each row with the line it starts on; finds the delimiter. */
 final class CsvRows {
 
-    /** One record of the file. {@code line} is 1-based, as an editor shows it. */
-    record Row(int line, List<String> cells) {
+    /**
+     * One record of the file. {@code line} is 1-based, as an editor shows it; {@code sourceColumns}
+     * gives each cell's 1-based column in the file when the table was rearranged (null: in order).
+     */
+    record Row(int line, List<String> cells, int[] sourceColumns) {
+
+        Row(int line, List<String> cells) {
+            this(line, cells, null);
+        }
 
         String cell(int column) {
             return column < cells.size() ? cells.get(column) : "";
+        }
+
+        /** The 1-based column in the file of the cell at {@code index}. */
+        int column(int index) {
+            return sourceColumns == null || index >= sourceColumns.length ? index + 1 : sourceColumns[index];
         }
 
         boolean isBlank() {

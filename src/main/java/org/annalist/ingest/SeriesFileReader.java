@@ -60,7 +60,7 @@ public final class SeriesFileReader {
         ProblemLog log = new ProblemLog(fileName);
         TextDecoding.Decoded text = TextDecoding.decode(bytes, log);
         char delimiter = CsvRows.detectDelimiter(text.text());
-        List<Row> rows = CsvRows.parse(text.text(), delimiter, log);
+        List<Row> rows = Transposed.unfold(CsvRows.parse(text.text(), delimiter, log), log);
         TableShape.Shape shape = TableShape.locate(rows, log);
         Column periodColumn = shape.periodColumn();
         List<Column> valueColumns = shape.with(Role.VALUE);
@@ -70,7 +70,8 @@ public final class SeriesFileReader {
                     + " column");
         }
         List<PeriodColumn.Cell> periodCells = shape.body().stream()
-                .map(r -> new PeriodColumn.Cell(r.line(), periodColumn.index() + 1, r.cell(periodColumn.index()))).toList();
+                .map(r -> new PeriodColumn.Cell(r.line(), r.column(periodColumn.index()), r.cell(periodColumn.index())))
+                .toList();
         PeriodColumn.Resolved periods = PeriodColumn.resolve(periodCells, options.dateOrder(), log);
         Optional<DecimalMark> mark = decimalMark(shape, valueColumns, log);
 
@@ -97,14 +98,14 @@ public final class SeriesFileReader {
                         : seriesName(key, column, valueColumns.size(), fallbackName);
                 Collector collector = collectors.computeIfAbsent(seriesName, n -> new Collector(n,
                         unitOf(column, unitColumn.map(u -> row.cell(u.index())), !keys.isEmpty())));
-                if (!collector.claim(cellPeriod, row.line(), column.index() + 1, log)) {
+                if (!collector.claim(cellPeriod, row.line(), row.column(column.index()), log)) {
                     continue;
                 }
                 String cell = row.cell(column.index());
                 StringBuilder why = new StringBuilder();
                 Optional<NumberCells.Cell> value = NumberCells.parse(cell, mark.orElse(DecimalMark.POINT), why);
                 if (value.isEmpty()) {
-                    log.error(row.line(), column.index() + 1, why + "; expected a number (or a missing-value marker "
+                    log.error(row.line(), row.column(column.index()), why + "; expected a number (or a missing-value marker "
                             + "such as NA, -, .. or :) in column '" + column.name() + "'");
                     continue;
                 }

@@ -55,6 +55,12 @@ class BadInputTest {
     }
 
     @Test
+    void cellsOfATransposedTableAreLocatedWhereTheyAreInTheFile() {
+        assertThat(problems("market;2024-01;2024-02;2024-03\nDomestic;100;110;12y\n")).singleElement().asString()
+                .startsWith("in.csv:2:4: '12y' ends in 'y'");
+    }
+
+    @Test
     void mixedFrequencies() {
         assertThat(problems("period,value\n2024-01,1\n2024-02,2\n2024-Q1,3\n2024-03,4\n")).singleElement().asString()
                 .isEqualTo("in.csv:4:1: mixed frequencies: '2024-Q1' is a quarterly period while most rows are monthly; "

@@ -67,6 +67,8 @@ class LayoutEquivalenceTest {
         cases.add(Arguments.of("rows in reverse order", reversed(), 1.0));
         cases.add(Arguments.of("long layout with another series", longLayout(), 1.0));
         cases.add(Arguments.of("a row per year, a column per month, and a totals column", yearByMonthGrid(), 1.0));
+        cases.add(Arguments.of("periods across the header, a row per series", periodsAcross(), 1.0));
+        cases.add(Arguments.of("a row per month, a column per year", monthByYearGrid(), 1.0));
         return cases.stream();
     }
 
@@ -91,6 +93,34 @@ class LayoutEquivalenceTest {
             text.append(';').append(total).append('\n');
         }
         return text.toString();
+    }
+
+    private static String monthByYearGrid() {
+        String[] months = {"January", "February", "March", "April", "May", "June", "July", "August", "September",
+            "October", "November", "December"};
+        StringBuilder text = new StringBuilder("Month");
+        for (int year = 1949; year <= 1960; year++) {
+            text.append(',').append(year);
+        }
+        text.append('\n');
+        for (int m = 0; m < 12; m++) {
+            text.append(months[m]);
+            for (int year = 0; year < 12; year++) {
+                text.append(',').append(ROWS.get(12 * year + m)[1]);
+            }
+            text.append('\n');
+        }
+        return text.toString();
+    }
+
+    private static String periodsAcross() {
+        StringBuilder header = new StringBuilder("series");
+        StringBuilder values = new StringBuilder("AirPassengers");
+        for (String[] row : ROWS) {
+            header.append('\t').append(row[0]);
+            values.append('\t').append(row[1]);
+        }
+        return header + "\n" + values + "\n";
     }
 
     private static String longLayout() {
