@@ -11,7 +11,7 @@ import org.annalist.series.ValueFlag;
 /**
  * Reads the value cells that statistical offices and spreadsheets write: decimal point or
  * comma, thousands grouped by comma, point, space or apostrophe, missing-value markers, a trailing
- * percent sign, and trailing flag letters ({@code 123p}, {@code 45 e}, {@code : c}).
+ * percent sign, a currency sign before or after the number, and trailing flag letters ({@code 123p}, {@code 45 e}, {@code : c}).
  */
 final class NumberCells {
 
@@ -26,9 +26,12 @@ final class NumberCells {
     private static final Set<String> MISSING_MARKERS = Set.of(
             "", "na", "n/a", "n.a.", "nan", "null", "none", "-", "--", "\u2013", "\u2014", "..", "...", "\u2026",
             ":", "x", "#n/a", "#value!", "#div/0!");
+    /** Currency signs before or after a price ({@code €12.50}, {@code 12,50 €}) are read past (common in exports). */
+    private static final String CURRENCY = "[\u20AC$\u00A3\u00A5]";
     private static final String GROUPING_SPACES = " \u00A0\u202F\u2007";
     private static final Pattern NUMBER = Pattern.compile(
-            "([+\\-\u2212]?)([0-9](?:[0-9.,'\u2019" + GROUPING_SPACES + "]*[0-9])?[.,]?)(%?)[ ]*([A-Za-z]{0,3})");
+            "(?:" + CURRENCY + " ?)?([+\\-\u2212]?)(?:" + CURRENCY + " ?)?([0-9](?:[0-9.,'\u2019" + GROUPING_SPACES
+                    + "]*[0-9])?[.,]?)(?: ?" + CURRENCY + ")?(%?)[ ]*([A-Za-z]{0,3})");
     private static final Pattern MISSING_WITH_FLAGS = Pattern.compile("(.*?)[ ]*([A-Za-z]{1,3})");
 
     private NumberCells() {

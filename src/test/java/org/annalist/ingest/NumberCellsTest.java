@@ -20,7 +20,8 @@ class NumberCellsTest {
     @CsvSource(delimiter = '|', value = {
         "12,345|POINT|12345", "1,234,567.5|POINT|1234567.5", "12.345|COMMA|12345", "1.234.567,5|COMMA|1234567.5",
         "12 345|POINT|12345", "12\u00A0345,5|COMMA|12345.5", "1'234.5|POINT|1234.5", "-3.5|POINT|-3.5",
-        "\u22123,5|COMMA|-3.5", "+7|POINT|7", "0,125|COMMA|0.125", "85.3%|POINT|85.3"})
+        "\u22123,5|COMMA|-3.5", "+7|POINT|7", "0,125|COMMA|0.125", "85.3%|POINT|85.3",
+        "\u20AC1,234.50|POINT|1234.5", "12,50 \u20AC|COMMA|12.5", "$-3|POINT|-3", "\u00A3 99|POINT|99"})
     void groupedAndDecimalForms(String cell, DecimalMark mark, double expected) {
         assertThat(read(cell, mark)).isEqualTo(expected);
     }
