@@ -106,9 +106,11 @@ final class AnalystNotes {
         String kendall = t.seasonalKendall() == null ? ""
                 : String.format(Locale.ROOT, "; %s z = %.2f, %s", t.seasonalKendall().test(),
                 t.seasonalKendall().statistic(), p(t.seasonalKendall().pValue()));
-        return String.format(Locale.ROOT, "%s — %s: z = %.2f, %s, n = %d; Sen slope %s per year (95%% CI %s to %s), %+.2f %% of the mean level per year%s",
+        String ofLevel = t.changePctPerYear() == null ? ""
+                : String.format(Locale.ROOT, ", %+.2f %% of the mean level per year", t.changePctPerYear());
+        return String.format(Locale.ROOT, "%s — %s: z = %.2f, %s, n = %d; Sen slope %s per year (95%% CI %s to %s)%s%s",
                 words, t.test(), t.statistic(), p(t.pValue()), t.n(), num(t.slopePerYear()), num(t.slopeCi95().get(0)),
-                num(t.slopeCi95().get(1)), t.changePctPerYear() == null ? Double.NaN : t.changePctPerYear(), kendall);
+                num(t.slopeCi95().get(1)), ofLevel, kendall);
     }
 
     private static String seasonality(SeasonalityFinding s) {
@@ -133,7 +135,7 @@ final class AnalystNotes {
                 : String.format(Locale.ROOT, "%.4g (%.1f %% of the level)", s.swing(), s.swingPctOfLevel());
         return String.format(Locale.ROOT, "%s — strength %.2f, %s H = %.1f, %s; swing %s%s; "
                         + "lag-%d autocorrelation %.2f%s; profile: %s", verdict, s.strength(), s.test(), s.statistic(),
-                p(s.pValue()), swing, s.changed() ? "; the pattern changed over the years" : "",
+                p(s.pValue()), swing, s.present() && s.changed() ? "; the pattern changed over the years" : "",
                 s.period(), s.autocorrelationAtPeriod(), s.periodConfirmed() ? " (confirms the period)" : "", profile);
     }
 

@@ -14,6 +14,9 @@ import org.annalist.series.Series;
  */
 final class OutlierAnalysis {
 
+    /** An outlier differs from what was expected by at least 0.1 % (our rule: below, it is rounding). */
+    static final double MIN_DEVIATION_PCT = 0.1;
+
     private OutlierAnalysis() {
     }
 
@@ -50,6 +53,9 @@ final class OutlierAnalysis {
             double observed = series.value(o.index());
             double expected = log ? Math.exp(expectedWorking[o.index()]) : expectedWorking[o.index()];
             double deviation = expected == 0 ? Double.NaN : 100 * (observed - expected) / Math.abs(expected);
+            if (Math.abs(deviation) < MIN_DEVIATION_PCT) {
+                continue;   // a tiny remainder scale makes a tiny deviation look large; it is no outlier
+            }
             outliers.add(new OutlierFinding(series.period(o.index()).label(), observed, expected, o.score(),
                     observed >= expected ? "above" : "below", deviation, o.index()));
         }

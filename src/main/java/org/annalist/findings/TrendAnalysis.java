@@ -45,7 +45,9 @@ final class TrendAnalysis {
                 ? slopes.medianPerStep() : Double.NaN);
         double periodsPerYear = series.frequency().periodsPerYear() / block;
         SenSlope.Result sen = slopes.estimate(periodsPerYear, mk.varianceUsed());
-        double level = Analyst.meanOf(observed);
+        // % of the level means nothing for a series that reaches zero or below (a net balance, say)
+        boolean positive = java.util.Arrays.stream(observed).filter(v -> !Double.isNaN(v)).allMatch(v -> v > 0);
+        double level = positive ? Analyst.meanOf(observed) : 0;
         String direction = !mk.test().reject(DecisionRules.ALPHA) ? "none" : mk.s() > 0 ? "increasing" : "decreasing";
         TrendFinding.Evidence seasonalKendall = null;
         if (seasonal) {

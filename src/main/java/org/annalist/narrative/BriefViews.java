@@ -54,12 +54,15 @@ public final class BriefViews {
         }
         double pct = last.changePct();
         String direction = Math.abs(pct) < 0.05 ? "flat" : pct > 0 ? "up" : "down";
+        // Percentages of a value at or below zero mislead: such series are compared in their own units.
+        String change = positive(series) ? f.percent(Math.abs(pct)) : f.value(Math.abs(last.change()))
+                + (series.unit().isEmpty() ? "" : " " + series.unit());
         String yearEarlier = last.period().frequency() == Frequency.DAILY
                 || last.period().frequency() == Frequency.BUSINESS_DAILY
                 ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
                 : f.period(last.yearEarlierPeriod());
         return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                yearEarlier, f.percent(Math.abs(pct)), direction, provisional);
+                yearEarlier, change, direction, provisional);
     }
 
     private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {
@@ -83,6 +86,16 @@ public final class BriefViews {
     private static BriefView.Row row(RecentPeriod r, Formats f) {
         return new BriefView.Row(f.shortPeriod(r.period()), f.value(r.value()), f.value(r.yearEarlier()),
                 f.signedValue(r.change()), f.signedPercent(r.changePct()), String.join("; ", r.flags()));
+    }
+
+    /** True when every value is above zero, so that changes can be read as percentages. */
+    static boolean positive(Series series) {
+        for (int i = 0; i < series.size(); i++) {
+            if (!series.isMissing(i) && series.value(i) <= 0) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** {@code nights a month}: the unit and the period it is counted over. */

@@ -157,13 +157,14 @@ final class SectionViews {
                 ytd == null ? "" : change(ytd, level), ytd == null ? "" : f.value(ytd.total()),
                 rolling == null ? "" : change(rolling, level), rolling == null ? "" : f.value(rolling.total()), rank,
                 i.record() == null ? "" : i.record(),
-                i.seasonallyAdjustedChangePct() == null ? "" : f.signedPercent(i.seasonallyAdjustedChangePct()),
+                i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) ? ""
+                        : f.signedPercent(i.seasonallyAdjustedChangePct()),
                 findings.calendar() == null ? List.of() : findings.calendar().notes(), !i.flagged().isEmpty());
     }
 
     /** A change as a brief states it: % for flows, the measure's own units for levels and rates. */
     private String change(IndicatorsFinding.Span s, boolean level) {
-        if (level) {
+        if (level || !BriefViews.positive(series)) {
             return f.signedValue(s.change()) + (series.unit().equals("%") ? " percentage points"
                     : series.unit().isEmpty() ? "" : " " + series.unit());
         }
@@ -197,7 +198,7 @@ final class SectionViews {
         }
         BriefView.TrendView t = trend();
         figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || t.direction().equals("none") ? "no clear trend"
-                : t.percentPerYear() + " a year", t.assessed() ? "Sen slope " + t.slopePerYear() + " a year, " + t.pValue()
+                : (t.percentPerYear().isEmpty() ? t.slopePerYear() : t.percentPerYear()) + " a year", t.assessed() ? "Sen slope " + t.slopePerYear() + " a year, " + t.pValue()
                 : "too few values"));
         int breaks = findings.breaks().size();
         int outliers = findings.outliers().size();
