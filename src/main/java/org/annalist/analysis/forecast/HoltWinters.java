@@ -1,0 +1,154 @@
+package org.annalist.analysis.forecast;
+
+import java.util.Arrays;
+import org.annalist.analysis.decompose.ClassicalDecomposition;
+import org.apache.commons.math3.analysis.MultivariateFunction;
+import org.apache.commons.math3.optim.InitialGuess;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.PointValuePair;
+import org.apache.commons.math3.optim.SimpleBounds;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
+import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.BOBYQAOptimizer;
+
+/**
+ * Holt–Winters exponential smoothing with additive or multiplicative seasonality (Winters 1960,
+ * <i>Management Science</i> 6, 324–342), as R's {@code stats::HoltWinters} computes it: start
+ * values from a classical decomposition of the first two seasons (the level and trend from a
+ * straight line through its moving average, the seasonal figure as the start of each season), the
+ * recursions of R's {@code C_HoltWinters} from the second season on, the sum of squared one-step
+ * errors as the criterion, and α, β, γ chosen to minimise it within [0, 1].
+ *
+ * <p>Missing values are not handled: the caller fills or refuses them.
+ */
+public final class HoltWinters {
+
+    public enum Seasonality { ADDITIVE, MULTIPLICATIVE }
+
+    /**
+     * @param level    the level at the end (R's coefficient a)
+     * @param trend    the trend at the end (b)
+     * @param seasonal the last period's seasonal effects (s1 … s_m)
+     * @param fitted   one-step forecasts from the second season on (NaN before)
+     */
+    public record Fit(double alpha, double beta, double gamma, double sse, double level, double trend, double[] seasonal,
+                      double[] fitted, Seasonality seasonality) {
+
+        /** Point forecasts 1 … h periods ahead: (a + h b) + s_h, or (a + h b) · s_h. */
+        public double[] forecast(int h) {
+            int m = seasonal.length;
+            double[] f = new double[h];
+            for (int k = 1; k <= h; k++) {
+                double base = level + k * trend;
+                double s = seasonal[(k - 1) % m];
+                f[k - 1] = seasonality == Seasonality.ADDITIVE ? base + s : base * s;
+            }
+            return f;
+        }
+    }
+
+    private final int period;
+    private final Seasonality seasonality;
+
+    private HoltWinters(int period, Seasonality seasonality) {
+        this.period = period;
+        this.seasonality = seasonality;
+    }
+
+    public static HoltWinters of(int period, Seasonality seasonality) {
+        if (period < 2) {
+            throw new IllegalArgumentException("Holt-Winters needs a seasonal period of at least 2, was " + period);
+        }
+        return new HoltWinters(period, seasonality);
+    }
+
+    /** The filter with given smoothing parameters (R's {@code C_HoltWinters}). */
+    public Fit filter(double[] x, double alpha, double beta, double gamma) {
+        int m = period;
+        int n = x.length;
+        if (n < 2 * m + 1) {
+            throw new IllegalArgumentException("Holt-Winters needs more than two seasons: at least " + (2 * m + 1)
+                    + " values, got " + n);
+        }
+        for (double v : x) {
+            if (Double.isNaN(v)) {
+                throw new IllegalArgumentException("Holt-Winters needs a series without missing values");
+            }
+        }
+        double[] start = startValues(x);
+        int startTime = m + 1;                           // R: start.time = f + 1 (1-based)
+        int len = n - startTime + 1;
+        double[] level = new double[len + 1];
+        double[] trend = new double[len + 1];
+        double[] season = new double[len + m];
+        level[0] = start[0];
+        trend[0] = start[1];
+        System.arraycopy(start, 2, season, 0, m);
+        double[] fitted = new double[n];
+        Arrays.fill(fitted, Double.NaN);
+        double sse = 0;
+        boolean additive = seasonality == Seasonality.ADDITIVE;
+        for (int i = startTime - 1; i < n; i++) {
+            int i0 = i - startTime + 2;
+            int s0 = i0 + m - 1;
+            double stmp = season[s0 - m];
+            double xhat = level[i0 - 1] + trend[i0 - 1];
+            xhat = additive ? xhat + stmp : xhat * stmp;
+            fitted[i] = xhat;
+            double res = x[i] - xhat;
+            sse += res * res;
+            level[i0] = alpha * (additive ? x[i] - stmp : x[i] / stmp) + (1 - alpha) * (level[i0 - 1] + trend[i0 - 1]);
+            trend[i0] = beta * (level[i0] - level[i0 - 1]) + (1 - beta) * trend[i0 - 1];
+            season[s0] = gamma * (additive ? x[i] - level[i0] : x[i] / level[i0]) + (1 - gamma) * stmp;
+        }
+        return new Fit(alpha, beta, gamma, sse, level[len], trend[len], Arrays.copyOfRange(season, len, len + m),
+                fitted, seasonality);
+    }
+
+    /** α, β, γ minimising the SSE within [0, 1] (BOBYQA, Powell 2009; started as R's optim at 0.3, 0.1, 0.1). */
+    public Fit fit(double[] x) {
+        MultivariateFunction sse = p -> filter(x, p[0], p[1], p[2]).sse();
+        BOBYQAOptimizer optimizer = new BOBYQAOptimizer(7, 0.1, 1e-10);
+        double best = Double.POSITIVE_INFINITY;
+        double[] bestPoint = {0.3, 0.1, 0.1};
+        // a few starts, since the SSE surface can have more than one valley
+        for (double[] start : new double[][] {{0.3, 0.1, 0.1}, {0.7, 0.05, 0.5}, {0.1, 0.01, 0.9}}) {
+            PointValuePair result = optimizer.optimize(new MaxEval(20_000), new ObjectiveFunction(sse), GoalType.MINIMIZE,
+                    new InitialGuess(start), new SimpleBounds(new double[] {0, 0, 0}, new double[] {1, 1, 1}));
+            if (result.getValue() < best) {
+                best = result.getValue();
+                bestPoint = result.getPoint();
+            }
+        }
+        return filter(x, bestPoint[0], bestPoint[1], bestPoint[2]);
+    }
+
+    /**
+     * R's start values: decompose the first two seasons; level and trend are the intercept and
+     * slope of a straight line fitted to the defined moving-average values against 1, 2, …; the
+     * seasonal start is the decomposition's figure. Returned as {level, trend, s_1 … s_m}.
+     */
+    double[] startValues(double[] x) {
+        int m = period;
+        ClassicalDecomposition.Result d = ClassicalDecomposition.of(Arrays.copyOf(x, 2 * m), m,
+                seasonality == Seasonality.ADDITIVE ? ClassicalDecomposition.Type.ADDITIVE
+                        : ClassicalDecomposition.Type.MULTIPLICATIVE);
+        double[] trend = Arrays.stream(d.trend()).filter(v -> !Double.isNaN(v)).toArray();
+        int k = trend.length;
+        double tMean = (k + 1) / 2.0;
+        double yMean = Arrays.stream(trend).average().orElseThrow();
+        double sxy = 0;
+        double sxx = 0;
+        for (int i = 0; i < k; i++) {
+            sxy += (i + 1 - tMean) * (trend[i] - yMean);
+            sxx += (i + 1 - tMean) * (i + 1 - tMean);
+        }
+        double slope = sxy / sxx;
+        double intercept = yMean - slope * tMean;
+        double[] start = new double[m + 2];
+        start[0] = intercept;
+        start[1] = slope;
+        System.arraycopy(d.figure(), 0, start, 2, m);
+        return start;
+    }
+}
