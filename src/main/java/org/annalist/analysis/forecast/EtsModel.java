@@ -1,0 +1,234 @@
+package org.annalist.analysis.forecast;
+
+import java.util.Arrays;
+import java.util.Locale;
+import org.apache.commons.math3.distribution.NormalDistribution;
+
+/**
+ * An exponential smoothing state-space model ETS(error, trend, season) (Hyndman, Koehler, Snyder &amp;
+ * Grose 2002, <i>International Journal of Forecasting</i> 18, 439–454; Hyndman, Koehler, Ord &amp;
+ * Snyder 2008, <i>Forecasting with Exponential Smoothing</i>, Springer, Table 2.3): the filter and
+ * likelihood as R's forecast package computes them (its C routines {@code etscalc},
+ * {@code forecast} and {@code update}), so that a model with R's parameters and initial states
+ * gives R's log-likelihood, information criteria and point forecasts.
+ *
+ * <p>Criterion: {@code lik = n log(Σ e²)}, plus {@code 2 Σ log|ŷ|} for multiplicative errors
+ * (e the one-step error, relative for multiplicative errors); log-likelihood −lik/2 as forecast
+ * reports it; k = parameters and initial states estimated + 1; AICc = AIC + 2k(k+1)/(n − k − 1).
+ * β is the trend's smoothing parameter as R writes it (β = α β*).
+ */
+public record EtsModel(Error error, Trend trend, boolean damped, Season season, int period) {
+
+    public enum Error { ADDITIVE, MULTIPLICATIVE }
+
+    public enum Trend { NONE, ADDITIVE }
+
+    public enum Season { NONE, ADDITIVE, MULTIPLICATIVE }
+
+    /**
+     * @param initial {level, trend (if any), s_1 … s_m (if seasonal)}, s_1 the most recent season
+     *                before the first observation, as R's {@code initstate}
+     */
+    public record Parameters(double alpha, double beta, double gamma, double phi, double[] initial) {
+    }
+
+    /**
+     * @param lik   the criterion n log(Σe²) [+ 2 Σ log|ŷ|]
+     * @param state the final state {level, trend, s_1 … s_m}
+     */
+    public record Fit(EtsModel model, Parameters parameters, double lik, double logLik, double aic, double aicc,
+                      double bic, double sigma2, double mse, double[] state, int estimated, int n) {
+
+        /** Point forecasts 1 … h ahead from the final state. */
+        public double[] forecast(int h) {
+            return model.forecastFrom(state, parameters.phi(), h);
+        }
+
+        /**
+         * The forecast distribution's mean and variance 1 … h ahead for a model with multiplicative
+         * error and multiplicative season (class 3 of Hyndman, Koehler, Ord &amp; Snyder 2008, §6.4,
+         * the recursions for M<sub>h</sub> and V<sub>h</sub>). The mean departs from the point
+         * forecast beyond one season, because the future level and seasonal factors are correlated.
+         *
+         * @throws IllegalStateException for models outside class 3
+         */
+        public Prediction predict(int h) {
+            if (model.error != Error.MULTIPLICATIVE || model.season != Season.MULTIPLICATIVE) {
+                throw new IllegalStateException(model.label() + " is not a class-3 model");
+            }
+            return model.classThree(state, parameters, sigma2, h);
+        }
+    }
+
+    /** Means and variances of the h-step forecast distributions, step 1 first. */
+    public record Prediction(double[] mean, double[] variance) {
+
+        /**
+         * The normal-approximation interval mean ± z·sd at {@code level} (e.g. 0.8), as
+         * {lower[], upper[]}; for class-3 models the distribution is not normal, so this is the
+         * approximation Hyndman et al. (2008, §6.4) recommend for short horizons.
+         */
+        public double[][] interval(double level) {
+            double z = new NormalDistribution(null, 0, 1).inverseCumulativeProbability(0.5 + level / 2);
+            double[] lower = new double[mean.length];
+            double[] upper = new double[mean.length];
+            for (int i = 0; i < mean.length; i++) {
+                double half = z * Math.sqrt(variance[i]);
+                lower[i] = mean[i] - half;
+                upper[i] = mean[i] + half;
+            }
+            return new double[][] {lower, upper};
+        }
+    }
+
+    /** ETS(M,Ad,M) style: error, trend (d when damped), season. */
+    public String label() {
+        String t = trend == Trend.NONE ? "N" : damped ? "Ad" : "A";
+        String s = season == Season.NONE ? "N" : season == Season.ADDITIVE ? "A" : "M";
+        return String.format(Locale.ROOT, "ETS(%s,%s,%s)", error == Error.ADDITIVE ? "A" : "M", t, s);
+    }
+
+    /** Parameters estimated with the initial states: smoothing parameters, φ, level, trend, m − 1 seasons. */
+    public int parameterCount() {
+        int smoothing = 1 + (trend != Trend.NONE ? 1 : 0) + (season != Season.NONE ? 1 : 0) + (damped ? 1 : 0);
+        int states = 1 + (trend != Trend.NONE ? 1 : 0) + (season != Season.NONE ? period - 1 : 0);
+        return smoothing + states;
+    }
+
+    /** @return the fit, or null when a forecast turns non-finite (the parameters are not admissible for the data) */
+    public Fit filter(double[] y, Parameters p) {
+        int m = season == Season.NONE ? 1 : period;
+        double l = p.initial()[0];
+        double b = trend != Trend.NONE ? p.initial()[1] : 0;
+        double[] s = new double[m];
+        if (season != Season.NONE) {
+            System.arraycopy(p.initial(), trend != Trend.NONE ? 2 : 1, s, 0, m);
+        }
+        double phi = damped ? p.phi() : 1;
+        double sumE2 = 0;
+        double sumLogF = 0;
+        double sumSq = 0;
+        for (double v : y) {
+            double f = point(l, b, s, phi, 1);
+            if (!Double.isFinite(f)) {
+                return null;
+            }
+            double e = error == Error.ADDITIVE ? v - f : (v - f) / f;
+            sumE2 += e * e;
+            sumLogF += Math.log(Math.abs(f));
+            sumSq += (v - f) * (v - f);
+            // update (R forecast: update())
+            double phib = trend == Trend.NONE ? 0 : phi * b;
+            double q = l + phib;
+            double oldest = season == Season.NONE ? 0 : s[m - 1];
+            double pp = season == Season.NONE ? v : season == Season.ADDITIVE ? v - oldest : v / oldest;
+            double newL = q + p.alpha() * (pp - q);
+            if (trend != Trend.NONE) {
+                b = phib + (p.beta() / p.alpha()) * ((newL - l) - phib);
+            }
+            if (season != Season.NONE) {
+                double t = season == Season.ADDITIVE ? v - q : v / q;
+                double newS = oldest + p.gamma() * (t - oldest);
+                System.arraycopy(s, 0, s, 1, m - 1);
+                s[0] = newS;
+            }
+            l = newL;
+        }
+        int n = y.length;
+        double lik = n * Math.log(sumE2) + (error == Error.MULTIPLICATIVE ? 2 * sumLogF : 0);
+        int k = parameterCount() + 1;
+        double logLik = -0.5 * lik;
+        double aic = -2 * logLik + 2 * k;
+        double aicc = aic + 2.0 * k * (k + 1) / (n - k - 1);
+        double bic = aic + (Math.log(n) - 2) * k;
+        double[] state = new double[2 + m];
+        state[0] = l;
+        state[1] = b;
+        System.arraycopy(s, 0, state, 2, m);
+        return new Fit(this, p, lik, logLik, aic, aicc, bic, sumE2 / (n - k + 1), sumSq / n, state, k - 1, n);
+    }
+
+    double[] forecastFrom(double[] state, double phi, int h) {
+        int m = season == Season.NONE ? 1 : period;
+        double[] s = Arrays.copyOfRange(state, 2, 2 + m);
+        double[] f = new double[h];
+        for (int i = 1; i <= h; i++) {
+            f[i - 1] = point(state[0], state[1], s, damped ? phi : 1, i);
+        }
+        return f;
+    }
+
+    /**
+     * Class-3 recursions with the level–trend part x = (l, b) and seasonal part s = (s_1 … s_m):
+     * y = (H1 x)(H2 s)(1 + ε), x' = F1 x + G1 x ε, s' = F2 s + G2 s ε. M = E[x s'] and V = Var(vec M)
+     * are carried forward; H1 = (1, φ) and F1's first row (1, φ) carry the damping, so the one-step
+     * mean equals the point forecast also for damped trends.
+     */
+    private Prediction classThree(double[] state, Parameters p, double sigma2, int h) {
+        int m = period;
+        int k = trend == Trend.NONE ? 1 : 2;
+        double phi = damped ? p.phi() : 1;
+        double[][] h1 = k == 1 ? new double[][] {{1}} : new double[][] {{1, phi}};
+        double[][] f1 = k == 1 ? new double[][] {{1}} : new double[][] {{1, phi}, {0, phi}};
+        double[][] g1 = k == 1 ? new double[][] {{p.alpha()}}
+                : new double[][] {{p.alpha(), p.alpha() * phi}, {p.beta(), p.beta() * phi}};
+        double[][] h2 = new double[1][m];
+        h2[0][m - 1] = 1;
+        double[][] f2 = new double[m][m];
+        f2[0][m - 1] = 1;
+        for (int i = 1; i < m; i++) {
+            f2[i][i - 1] = 1;
+        }
+        double[][] g2 = new double[m][m];
+        g2[0][m - 1] = p.gamma();
+        double[][] means = new double[k][m];
+        for (int r = 0; r < k; r++) {
+            for (int c = 0; c < m; c++) {
+                means[r][c] = state[r] * state[2 + c];
+            }
+        }
+        double[][] h21 = Matrices.kronecker(h2, h1);
+        double[][] f21 = Matrices.kronecker(f2, f1);
+        double[][] g21 = Matrices.kronecker(g2, g1);
+        double[][] cross = Matrices.add(Matrices.kronecker(g2, f1), Matrices.kronecker(f2, g1));
+        double[][] v = new double[k * m][k * m];
+        double[] mean = new double[h];
+        double[] variance = new double[h];
+        for (int i = 0; i < h; i++) {
+            mean[i] = Matrices.product(h1, means, Matrices.transpose(h2))[0][0];
+            variance[i] = (1 + sigma2) * Matrices.product(h21, v, Matrices.transpose(h21))[0][0]
+                    + sigma2 * mean[i] * mean[i];
+            double[][] vecM = Matrices.vec(means);
+            double[][] outer = Matrices.product(vecM, Matrices.transpose(vecM));
+            double[][] noise = Matrices.add(
+                    Matrices.add(Matrices.product(f21, v, Matrices.transpose(g21)),
+                            Matrices.product(g21, v, Matrices.transpose(f21))),
+                    Matrices.add(Matrices.product(cross, Matrices.add(v, outer), Matrices.transpose(cross)),
+                            Matrices.scale(sigma2, Matrices.product(g21,
+                                    Matrices.add(Matrices.scale(3, v), Matrices.scale(2, outer)),
+                                    Matrices.transpose(g21)))));
+            v = Matrices.add(Matrices.product(f21, v, Matrices.transpose(f21)), Matrices.scale(sigma2, noise));
+            means = Matrices.add(Matrices.product(f1, means, Matrices.transpose(f2)),
+                    Matrices.scale(sigma2, Matrices.product(g1, means, Matrices.transpose(g2))));
+        }
+        return new Prediction(mean, variance);
+    }
+
+    /** The h-step point forecast from a state (R forecast: forecast()). */
+    private double point(double l, double b, double[] s, double phi, int h) {
+        double phistar = 0;
+        for (int i = 1; i <= h; i++) {
+            phistar += Math.pow(phi, i);
+        }
+        double f = trend == Trend.NONE ? l : l + phistar * b;
+        if (season != Season.NONE) {
+            int m = s.length;
+            int j = m - 1 - (h - 1);
+            while (j < 0) {
+                j += m;
+            }
+            f = season == Season.ADDITIVE ? f + s[j] : f * s[j];
+        }
+        return f;
+    }
+}
