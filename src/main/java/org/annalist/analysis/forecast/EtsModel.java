@@ -2,7 +2,17 @@ package org.annalist.analysis.forecast;
 
 import java.util.Arrays;
 import java.util.Locale;
+import java.util.function.Function;
+import org.annalist.analysis.decompose.ClassicalDecomposition;
+import org.apache.commons.math3.analysis.MultivariateFunction;
 import org.apache.commons.math3.distribution.NormalDistribution;
+import org.apache.commons.math3.optim.InitialGuess;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.PointValuePair;
+import org.apache.commons.math3.optim.SimpleBounds;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
+import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.BOBYQAOptimizer;
 
 /**
  * An exponential smoothing state-space model ETS(error, trend, season) (Hyndman, Koehler, Snyder &amp;
@@ -93,6 +103,131 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         int smoothing = 1 + (trend != Trend.NONE ? 1 : 0) + (season != Season.NONE ? 1 : 0) + (damped ? 1 : 0);
         int states = 1 + (trend != Trend.NONE ? 1 : 0) + (season != Season.NONE ? period - 1 : 0);
         return smoothing + states;
+    }
+
+    /**
+     * Maximum-likelihood fit of the smoothing parameters and initial states (Hyndman et al. 2008,
+     * §5.2), started from the usual heuristic ({@link #initialStates}) and α = 0.5, β = 0.1α,
+     * γ = 0.05(1 − α), φ = 0.978 as common practice. The usual bounds hold by construction:
+     * 10⁻⁴ ≤ α ≤ 0.9999, β = αu and γ = (1 − α)v with u, v in the same range, 0.8 ≤ φ ≤ 0.98.
+     * Not yet checked: the admissible region (eigenvalues of F − g w′ inside the unit circle).
+     *
+     * @return the fit, or null when no admissible start gives a finite likelihood
+     */
+    public Fit fit(double[] y) {
+        double[] start = initialStates(y);
+        int states = start.length - (season == Season.NONE ? 0 : 1); // the last season follows from the others
+        double scale = Arrays.stream(y).map(Math::abs).average().orElse(1);
+        int smoothing = 3 + (damped ? 1 : 0);
+        int dimension = smoothing + states;
+        double[] lower = new double[dimension];
+        double[] upper = new double[dimension];
+        double[] guess = new double[dimension];
+        double[] boundsLow = {1e-4, 1e-4, 1e-4, 0.8};
+        double[] boundsHigh = {0.9999, 0.9999, 0.9999, 0.98};
+        double[] guesses = {0.5, 0.1, 0.05, 0.978};
+        for (int i = 0; i < smoothing; i++) {
+            lower[i] = boundsLow[i];
+            upper[i] = boundsHigh[i];
+            guess[i] = guesses[i];
+        }
+        // states are searched as offsets from the heuristic start in units of the series' scale
+        // (seasonal factors in their own units), so that BOBYQA sees variables of similar size
+        for (int i = 0; i < states; i++) {
+            boolean seasonalFactor = season == Season.MULTIPLICATIVE && i >= stateOffsetOfSeasons();
+            lower[smoothing + i] = seasonalFactor ? 0.01 - start[i] : -10;
+            upper[smoothing + i] = seasonalFactor ? 10 - start[i] : 10;
+        }
+        Function<double[], Fit> evaluate = z -> {
+            double alpha = z[0];
+            double beta = trend == Trend.NONE ? 0 : alpha * z[1];
+            double gamma = season == Season.NONE ? 0 : (1 - alpha) * z[2];
+            double phi = damped ? z[3] : 1;
+            double[] initial = new double[start.length];
+            double seasonalSum = 0;
+            for (int i = 0; i < states; i++) {
+                boolean seasonalFactor = season == Season.MULTIPLICATIVE && i >= stateOffsetOfSeasons();
+                initial[i] = start[i] + (seasonalFactor ? 1 : scale) * z[smoothing + i];
+                if (i >= stateOffsetOfSeasons()) {
+                    seasonalSum += initial[i];
+                }
+            }
+            if (season != Season.NONE) {
+                initial[start.length - 1] = (season == Season.MULTIPLICATIVE ? period : 0) - seasonalSum;
+                if (season == Season.MULTIPLICATIVE && initial[start.length - 1] <= 0) {
+                    return null;
+                }
+            }
+            return filter(y, new Parameters(alpha, beta, gamma, phi, initial));
+        };
+        MultivariateFunction criterion = z -> {
+            Fit f = evaluate.apply(z);
+            return f == null || !Double.isFinite(f.lik()) ? 1e10 : f.lik();
+        };
+        BOBYQAOptimizer optimizer =
+                new BOBYQAOptimizer(2 * dimension + 1, 0.05, 1e-6);
+        PointValuePair best = optimizer.optimize(
+                new MaxEval(50_000),
+                new ObjectiveFunction(criterion),
+                GoalType.MINIMIZE,
+                new InitialGuess(guess),
+                new SimpleBounds(lower, upper));
+        return best.getValue() >= 1e10 ? null : evaluate.apply(best.getPoint());
+    }
+
+    private int stateOffsetOfSeasons() {
+        return trend == Trend.NONE ? 1 : 2;
+    }
+
+    /**
+     * The usual starting states (Hyndman et al. 2008, §2.6.1, as R's forecast computes them): the
+     * seasonal states from a classical decomposition of the first three seasons (at least two),
+     * s_1 the season just before the first observation; level and trend from a least-squares line
+     * through the first max(10, 2m) seasonally adjusted values (the level their mean without a trend).
+     *
+     * @return {level, trend (if any), s_1 … s_m (if seasonal)}
+     */
+    double[] initialStates(double[] y) {
+        int m = season == Season.NONE ? 1 : period;
+        double[] adjusted = y;
+        double[] seasons = new double[0];
+        if (season != Season.NONE) {
+            int cycles = Math.min(3, y.length / m);
+            if (cycles < 2) {
+                throw new IllegalArgumentException("a seasonal ETS model needs two full seasons, got " + y.length
+                        + " values for period " + m);
+            }
+            boolean additive = season == Season.ADDITIVE;
+            double[] head = Arrays.copyOf(y, cycles * m);
+            ClassicalDecomposition.Result d = ClassicalDecomposition.of(head, m,
+                    additive ? ClassicalDecomposition.Type.ADDITIVE : ClassicalDecomposition.Type.MULTIPLICATIVE);
+            seasons = new double[m];
+            for (int j = 0; j < m; j++) {
+                seasons[j] = d.figure()[m - 1 - j];
+            }
+            adjusted = new double[head.length];
+            for (int i = 0; i < head.length; i++) {
+                adjusted[i] = additive ? head[i] - d.seasonal()[i] : head[i] / Math.max(d.seasonal()[i], 1e-2);
+            }
+        }
+        int count = Math.min(Math.max(10, 2 * m), adjusted.length);
+        double tMean = (count + 1) / 2.0;
+        double yMean = 0;
+        for (int i = 0; i < count; i++) {
+            yMean += adjusted[i] / count;
+        }
+        double sxy = 0;
+        double sxx = 0;
+        for (int i = 0; i < count; i++) {
+            sxy += (i + 1 - tMean) * (adjusted[i] - yMean);
+            sxx += (i + 1 - tMean) * (i + 1 - tMean);
+        }
+        double slope = sxy / sxx;
+        double[] levelAndTrend = trend == Trend.NONE ? new double[] {yMean}
+                : new double[] {yMean - slope * tMean, slope};
+        double[] out = Arrays.copyOf(levelAndTrend, levelAndTrend.length + seasons.length);
+        System.arraycopy(seasons, 0, out, levelAndTrend.length, seasons.length);
+        return out;
     }
 
     /** @return the fit, or null when a forecast turns non-finite (the parameters are not admissible for the data) */
