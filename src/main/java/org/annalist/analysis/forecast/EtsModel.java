@@ -211,20 +211,9 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
             }
         }
         int count = Math.min(Math.max(10, 2 * m), adjusted.length);
-        double tMean = (count + 1) / 2.0;
-        double yMean = 0;
-        for (int i = 0; i < count; i++) {
-            yMean += adjusted[i] / count;
-        }
-        double sxy = 0;
-        double sxx = 0;
-        for (int i = 0; i < count; i++) {
-            sxy += (i + 1 - tMean) * (adjusted[i] - yMean);
-            sxx += (i + 1 - tMean) * (i + 1 - tMean);
-        }
-        double slope = sxy / sxx;
-        double[] levelAndTrend = trend == Trend.NONE ? new double[] {yMean}
-                : new double[] {yMean - slope * tMean, slope};
+        StartLine line = StartLine.through(adjusted, count);
+        double[] levelAndTrend = trend == Trend.NONE ? new double[] {line.mean()}
+                : new double[] {line.intercept(), line.slope()};
         double[] out = Arrays.copyOf(levelAndTrend, levelAndTrend.length + seasons.length);
         System.arraycopy(seasons, 0, out, levelAndTrend.length, seasons.length);
         return out;

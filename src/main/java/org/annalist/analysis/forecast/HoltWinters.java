@@ -134,20 +134,10 @@ public final class HoltWinters {
                 seasonality == Seasonality.ADDITIVE ? ClassicalDecomposition.Type.ADDITIVE
                         : ClassicalDecomposition.Type.MULTIPLICATIVE);
         double[] trend = Arrays.stream(d.trend()).filter(v -> !Double.isNaN(v)).toArray();
-        int k = trend.length;
-        double tMean = (k + 1) / 2.0;
-        double yMean = Arrays.stream(trend).average().orElseThrow();
-        double sxy = 0;
-        double sxx = 0;
-        for (int i = 0; i < k; i++) {
-            sxy += (i + 1 - tMean) * (trend[i] - yMean);
-            sxx += (i + 1 - tMean) * (i + 1 - tMean);
-        }
-        double slope = sxy / sxx;
-        double intercept = yMean - slope * tMean;
+        StartLine line = StartLine.through(trend, trend.length);
         double[] start = new double[m + 2];
-        start[0] = intercept;
-        start[1] = slope;
+        start[0] = line.intercept();
+        start[1] = line.slope();
         System.arraycopy(d.figure(), 0, start, 2, m);
         return start;
     }
