@@ -1,0 +1,66 @@
+package org.annalist.analysis.forecast;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.Arrays;
+import java.util.Map;
+import org.annalist.analysis.Reference;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Automatic ETS choice on the last-two-seasons hold-out of forecast_accuracy_holdout.csv (R 4.2.2,
+ * forecast 8.20: {@code accuracy(forecast(ets(train), h), test)}).
+ */
+class EtsSelectionTest {
+
+    private static final String[] DATASETS = {"AirPassengers", "co2", "UKgas", "nottem"};
+
+    /**
+     * The issue's accuracy bar: averaged over the datasets, our chosen model's hold-out MASE is at
+     * most R's automatic ets(). Measured: ours 1.298, R 1.426 (AirPassengers 1.692 against 2.212,
+     * co2 0.228 against 0.211, UKgas 2.684 against 2.680, nottem 0.590 against 0.601).
+     */
+    @Test
+    void holdOutMaseAveragedOverDatasetsIsNoWorseThanRsEts() {
+        double ours = 0;
+        double rs = 0;
+        for (String dataset : DATASETS) {
+            Map<String, String> ref = Reference.csv("forecast_accuracy_holdout.csv").row(dataset);
+            int period = Integer.parseInt(ref.get("frequency"));
+            int train = Integer.parseInt(ref.get("n_train"));
+            int h = Integer.parseInt(ref.get("h"));
+            double[] x = Reference.dataset(dataset + ".csv");
+            double[] training = Arrays.copyOf(x, train);
+            EtsModel.Fit best = EtsSelection.select(training, period).orElseThrow().best();
+            ours += Accuracy.of(training, Arrays.copyOfRange(x, train, train + h), best.forecast(h), period).mase();
+            rs += Double.parseDouble(ref.get("ets_MASE"));
+        }
+        assertThat(ours / DATASETS.length).isLessThanOrEqualTo(rs / DATASETS.length);
+    }
+
+    /** Where R's own optimiser reaches the best likelihood, we choose the model it chose. */
+    @Test
+    void choosesRsModelOnUkGasAndNottem() {
+        for (String dataset : new String[] {"UKgas", "nottem"}) {
+            Map<String, String> ref = Reference.csv("forecast_accuracy_holdout.csv").row(dataset);
+            double[] training = Arrays.copyOf(Reference.dataset(dataset + ".csv"), Integer.parseInt(ref.get("n_train")));
+            EtsSelection.Choice choice = EtsSelection.select(training, Integer.parseInt(ref.get("frequency"))).orElseThrow();
+            assertThat(choice.best().model().label()).as(dataset).isEqualTo(ref.get("ets_model"));
+            assertThat(choice.candidates()).extracting(EtsModel.Fit::aicc).isSorted();
+        }
+    }
+
+    @Test
+    void nonPositiveDataGetsOnlyAdditiveModels() {
+        double[] y = new double[48];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = Math.sin(2 * Math.PI * i / 12) * 10 + 0.1 * i; // crosses zero
+        }
+        EtsSelection.Choice choice = EtsSelection.select(y, 12).orElseThrow();
+        assertThat(choice.candidates()).allSatisfy(f -> {
+            assertThat(f.model().error()).isEqualTo(EtsModel.Error.ADDITIVE);
+            assertThat(f.model().season()).isNotEqualTo(EtsModel.Season.MULTIPLICATIVE);
+        });
+        assertThat(choice.best().model().season()).isEqualTo(EtsModel.Season.ADDITIVE);
+    }
+}
