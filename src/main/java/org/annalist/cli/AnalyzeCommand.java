@@ -24,7 +24,6 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     enum Format { text, json }
 
-
     @Spec
     CommandSpec spec;
 

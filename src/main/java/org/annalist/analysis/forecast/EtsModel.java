@@ -47,7 +47,7 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
      * @param state the final state {level, trend, s_1 … s_m}
      */
     public record Fit(EtsModel model, Parameters parameters, double lik, double logLik, double aic, double aicc,
-                      double bic, double sigma2, double mse, double[] state, int estimated, int n) {
+                      double bic, double sigma2, double mse, double[] state, int n) {
 
         /** Point forecasts 1 … h ahead from the final state. */
         public double[] forecast(int h) {
@@ -235,7 +235,7 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         double sumLogF = 0;
         double sumSq = 0;
         for (double v : y) {
-            double f = point(l, b, s, phi, 1);
+            double f = point(l, b, s, phi, 1); // one step ahead: φ* = φ
             if (!Double.isFinite(f)) {
                 return null;
             }
@@ -271,15 +271,20 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         state[0] = l;
         state[1] = b;
         System.arraycopy(s, 0, state, 2, m);
-        return new Fit(this, p, lik, logLik, aic, aicc, bic, sumE2 / (n - k + 1), sumSq / n, state, k - 1, n);
+        return new Fit(this, p, lik, logLik, aic, aicc, bic, sumE2 / (n - k + 1), sumSq / n, state, n);
     }
 
     double[] forecastFrom(double[] state, double phi, int h) {
         int m = season == Season.NONE ? 1 : period;
         double[] s = Arrays.copyOfRange(state, 2, 2 + m);
+        double damping = damped ? phi : 1;
         double[] f = new double[h];
+        double phistar = 0;
+        double power = 1;
         for (int i = 1; i <= h; i++) {
-            f[i - 1] = point(state[0], state[1], s, damped ? phi : 1, i);
+            power *= damping;
+            phistar += power;
+            f[i - 1] = point(state[0], state[1], s, phistar, i);
         }
         return f;
     }
@@ -340,20 +345,15 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         return new Prediction(mean, variance);
     }
 
-    /** The h-step point forecast from a state (R forecast: forecast()). */
-    private double point(double l, double b, double[] s, double phi, int h) {
-        double phistar = 0;
-        for (int i = 1; i <= h; i++) {
-            phistar += Math.pow(phi, i);
-        }
+    /**
+     * The h-step point forecast from a state (R forecast: forecast()), given φ* = φ + φ² + … + φ^h
+     * (h when undamped).
+     */
+    private double point(double l, double b, double[] s, double phistar, int h) {
         double f = trend == Trend.NONE ? l : l + phistar * b;
         if (season != Season.NONE) {
-            int m = s.length;
-            int j = m - 1 - (h - 1);
-            while (j < 0) {
-                j += m;
-            }
-            f = season == Season.ADDITIVE ? f + s[j] : f * s[j];
+            double factor = s[Math.floorMod(s.length - h, s.length)]; // s_1 the most recent season
+            f = season == Season.ADDITIVE ? f + factor : f * factor;
         }
         return f;
     }

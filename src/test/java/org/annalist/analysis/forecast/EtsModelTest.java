@@ -1,5 +1,6 @@
 package org.annalist.analysis.forecast;
 
+import static org.annalist.analysis.forecast.AgainstR.relative;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
@@ -21,10 +22,6 @@ import org.junit.jupiter.params.provider.CsvSource;
  * information criteria, σ² and forecast distributions.
  */
 class EtsModelTest {
-
-    private static void relative(double ours, double r, double tolerance, String what) {
-        assertThat(Math.abs(ours - r) / Math.abs(r)).as("%s: ours %s, R %s", what, ours, r).isLessThanOrEqualTo(tolerance);
-    }
 
     @ParameterizedTest
     @CsvSource({"AirPassengers_auto,AirPassengers,12,true", "UKgas_auto,UKgas,4,false",

@@ -2,9 +2,6 @@ package org.annalist.analysis.forecast;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.util.Arrays;
-import java.util.Map;
-import org.annalist.analysis.Reference;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -25,15 +22,10 @@ class EtsSelectionTest {
         double ours = 0;
         double rs = 0;
         for (String dataset : DATASETS) {
-            Map<String, String> ref = Reference.csv("forecast_accuracy_holdout.csv").row(dataset);
-            int period = Integer.parseInt(ref.get("frequency"));
-            int train = Integer.parseInt(ref.get("n_train"));
-            int h = Integer.parseInt(ref.get("h"));
-            double[] x = Reference.dataset(dataset + ".csv");
-            double[] training = Arrays.copyOf(x, train);
-            EtsModel.Fit best = EtsSelection.select(training, period).orElseThrow().best();
-            ours += Accuracy.of(training, Arrays.copyOfRange(x, train, train + h), best.forecast(h), period).mase();
-            rs += Double.parseDouble(ref.get("ets_MASE"));
+            AgainstR.HoldOut split = AgainstR.HoldOut.of(dataset);
+            EtsModel.Fit best = EtsSelection.select(split.training(), split.period()).orElseThrow().best();
+            ours += Accuracy.of(split.training(), split.test(), best.forecast(split.horizon()), split.period()).mase();
+            rs += split.rValue("ets_MASE");
         }
         assertThat(ours / DATASETS.length).isLessThanOrEqualTo(rs / DATASETS.length);
     }
@@ -42,10 +34,9 @@ class EtsSelectionTest {
     @Test
     void choosesRsModelOnUkGasAndNottem() {
         for (String dataset : new String[] {"UKgas", "nottem"}) {
-            Map<String, String> ref = Reference.csv("forecast_accuracy_holdout.csv").row(dataset);
-            double[] training = Arrays.copyOf(Reference.dataset(dataset + ".csv"), Integer.parseInt(ref.get("n_train")));
-            EtsSelection.Choice choice = EtsSelection.select(training, Integer.parseInt(ref.get("frequency"))).orElseThrow();
-            assertThat(choice.best().model().label()).as(dataset).isEqualTo(ref.get("ets_model"));
+            AgainstR.HoldOut split = AgainstR.HoldOut.of(dataset);
+            EtsSelection.Choice choice = EtsSelection.select(split.training(), split.period()).orElseThrow();
+            assertThat(choice.best().model().label()).as(dataset).isEqualTo(split.rResults().get("ets_model"));
             assertThat(choice.candidates()).extracting(EtsModel.Fit::aicc).isSorted();
         }
     }

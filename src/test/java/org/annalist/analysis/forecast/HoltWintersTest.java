@@ -1,5 +1,6 @@
 package org.annalist.analysis.forecast;
 
+import static org.annalist.analysis.forecast.AgainstR.relative;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
@@ -11,10 +12,6 @@ import org.junit.jupiter.api.Test;
  * {@code HoltWinters(co2)} and {@code HoltWinters(AirPassengers, seasonal = "multiplicative")}.
  */
 class HoltWintersTest {
-
-    private static void relative(double ours, double r, double tolerance, String what) {
-        assertThat(Math.abs(ours - r) / Math.abs(r)).as("%s: ours %s, R %s", what, ours, r).isLessThanOrEqualTo(tolerance);
-    }
 
     @Test
     void additiveFilterOnCo2ReproducesRsSseCoefficientsAndForecasts() {

@@ -1,0 +1,43 @@
+package org.annalist.analysis.forecast;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.Arrays;
+import java.util.Map;
+import org.annalist.analysis.Reference;
+
+/** Shared checks of our forecasts against R's reference results. */
+final class AgainstR {
+
+    private AgainstR() {
+    }
+
+    /** |ours − R| / |R| ≤ tolerance, with both values in the failure message. */
+    static void relative(double ours, double r, double tolerance, String what) {
+        assertThat(Math.abs(ours - r) / Math.abs(r)).as("%s: ours %s, R %s", what, ours, r).isLessThanOrEqualTo(tolerance);
+    }
+
+    /**
+     * A dataset split as forecast_accuracy_holdout.csv splits it (the last two seasons held out),
+     * with that file's row of R's results.
+     */
+    record HoldOut(int period, double[] training, double[] test, Map<String, String> rResults) {
+
+        static HoldOut of(String dataset) {
+            Map<String, String> row = Reference.csv("forecast_accuracy_holdout.csv").row(dataset);
+            int train = Integer.parseInt(row.get("n_train"));
+            int h = Integer.parseInt(row.get("h"));
+            double[] x = Reference.dataset(dataset + ".csv");
+            return new HoldOut(Integer.parseInt(row.get("frequency")), Arrays.copyOf(x, train),
+                    Arrays.copyOfRange(x, train, train + h), row);
+        }
+
+        int horizon() {
+            return test.length;
+        }
+
+        double rValue(String column) {
+            return Double.parseDouble(rResults.get(column));
+        }
+    }
+}
