@@ -4,15 +4,9 @@ import java.util.Arrays;
 import java.util.Locale;
 import java.util.function.Function;
 import org.annalist.analysis.decompose.ClassicalDecomposition;
-import org.apache.commons.math3.analysis.MultivariateFunction;
 import org.apache.commons.math3.distribution.NormalDistribution;
-import org.apache.commons.math3.optim.InitialGuess;
-import org.apache.commons.math3.optim.MaxEval;
-import org.apache.commons.math3.optim.PointValuePair;
-import org.apache.commons.math3.optim.SimpleBounds;
-import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
-import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
-import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.BOBYQAOptimizer;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.EigenDecomposition;
 
 /**
  * An exponential smoothing state-space model ETS(error, trend, season) (Hyndman, Koehler, Snyder &amp;
@@ -110,9 +104,10 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
      * §5.2), started from the usual heuristic ({@link #initialStates}) and α = 0.5, β = 0.1α,
      * γ = 0.05(1 − α), φ = 0.978 as common practice. The usual bounds hold by construction:
      * 10⁻⁴ ≤ α ≤ 0.9999, β = αu and γ = (1 − α)v with u, v in the same range, 0.8 ≤ φ ≤ 0.98.
-     * Not yet checked: the admissible region (eigenvalues of F − g w′ inside the unit circle).
+     * The optimum found must also be forecastable ({@link #isAdmissible}); the search is a
+     * quasi-Newton one ({@link BoundedQuasiNewton}) started twice from the same point.
      *
-     * @return the fit, or null when no admissible start gives a finite likelihood
+     * @return the fit, or null when no start gives a finite likelihood or the optimum is not admissible
      */
     public Fit fit(double[] y) {
         double[] start = initialStates(y);
@@ -132,7 +127,7 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
             guess[i] = guesses[i];
         }
         // states are searched as offsets from the heuristic start in units of the series' scale
-        // (seasonal factors in their own units), so that BOBYQA sees variables of similar size
+        // (seasonal factors in their own units), so that the search sees variables of similar size
         for (int i = 0; i < states; i++) {
             boolean seasonalFactor = season == Season.MULTIPLICATIVE && i >= stateOffsetOfSeasons();
             lower[smoothing + i] = seasonalFactor ? 0.01 - start[i] : -10;
@@ -160,21 +155,70 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
             }
             return filter(y, new Parameters(alpha, beta, gamma, phi, initial));
         };
-        MultivariateFunction criterion = z -> {
+        // two searches from the same start, one with a free first step and one with a short one: on
+        // the reference series each finds the better of the likelihood's basins for some models
+        BoundedQuasiNewton search = new BoundedQuasiNewton(lower, upper, z -> {
             Fit f = evaluate.apply(z);
-            return f == null || !Double.isFinite(f.lik()) ? 1e10 : f.lik();
-        };
-        // the fewest interpolation points BOBYQA allows: each iteration costs in proportion to them and
-        // the optimum reached on AirPassengers and UKgas is the same as with 2n + 1 (a third faster)
-        BOBYQAOptimizer optimizer =
-                new BOBYQAOptimizer(dimension + 2, 0.05, 1e-6);
-        PointValuePair best = optimizer.optimize(
-                new MaxEval(50_000),
-                new ObjectiveFunction(criterion),
-                GoalType.MINIMIZE,
-                new InitialGuess(guess),
-                new SimpleBounds(lower, upper));
-        return best.getValue() >= 1e10 ? null : evaluate.apply(best.getPoint());
+            return f == null ? Double.POSITIVE_INFINITY : f.lik();
+        });
+        BoundedQuasiNewton.Minimum best = null;
+        for (double firstStepLimit : new double[] {Double.POSITIVE_INFINITY, 0.5}) {
+            BoundedQuasiNewton.Minimum found = search.minimise(guess, 1e-10, 500, firstStepLimit);
+            if (best == null || found.value() < best.value()) {
+                best = found;
+            }
+        }
+        Fit fit = Double.isFinite(best.value()) ? evaluate.apply(best.point()) : null;
+        return fit != null && isAdmissible(fit.parameters()) ? fit : null;
+    }
+
+    /**
+     * Whether the smoothing parameters lie in the forecastable region of the model's linear form
+     * (Hyndman, Akram &amp; Archibald 2008, <i>Annals of the Institute of Statistical Mathematics</i>
+     * 60, 407–426): no eigenvalue of the discount matrix D = F − g w′ outside the unit circle. With
+     * m seasonal states D keeps one unit eigenvalue from their redundancy, so unit moduli are allowed
+     * (tolerance 10⁻⁶). Hyndman et al. (2008, §10.1) apply the same region to the multiplicative
+     * models as common practice.
+     */
+    boolean isAdmissible(Parameters p) {
+        int m = season == Season.NONE ? 0 : period;
+        int t = trend == Trend.NONE ? 0 : 1;
+        int size = 1 + t + m;
+        double phi = damped ? p.phi() : 1;
+        double[][] f = new double[size][size];
+        double[] g = new double[size];
+        double[] w = new double[size];
+        f[0][0] = 1;
+        w[0] = 1;
+        g[0] = p.alpha();
+        if (t == 1) {
+            f[0][1] = phi;
+            f[1][1] = phi;
+            w[1] = phi;
+            g[1] = p.beta();
+        }
+        if (m > 0) {
+            int first = 1 + t;
+            f[first][first + m - 1] = 1; // the new first season is the oldest one, updated
+            for (int i = 1; i < m; i++) {
+                f[first + i][first + i - 1] = 1;
+            }
+            w[first + m - 1] = 1;
+            g[first] = p.gamma();
+        }
+        double[][] d = new double[size][size];
+        for (int i = 0; i < size; i++) {
+            for (int j = 0; j < size; j++) {
+                d[i][j] = f[i][j] - g[i] * w[j];
+            }
+        }
+        EigenDecomposition eigen = new EigenDecomposition(new Array2DRowRealMatrix(d, false));
+        for (int i = 0; i < size; i++) {
+            if (Math.hypot(eigen.getRealEigenvalue(i), eigen.getImagEigenvalue(i)) > 1 + 1e-6) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private int stateOffsetOfSeasons() {
