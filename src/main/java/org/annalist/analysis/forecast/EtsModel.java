@@ -49,18 +49,32 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         }
 
         /**
-         * The forecast distribution's mean and variance 1 … h ahead for a model with multiplicative
-         * error and multiplicative season (class 3 of Hyndman, Koehler, Ord &amp; Snyder 2008, §6.4,
-         * the recursions for M<sub>h</sub> and V<sub>h</sub>). The mean departs from the point
-         * forecast beyond one season, because the future level and seasonal factors are correlated.
+         * The forecast distribution's mean and variance 1 … h ahead where the model class has them
+         * in closed form (Hyndman, Koehler, Ord &amp; Snyder 2008, ch. 6): class 1, additive error
+         * without multiplicative parts (§6.2), and class 3, multiplicative error and season
+         * (§6.4, the recursions for M<sub>h</sub> and V<sub>h</sub>; the mean departs from the point
+         * forecast beyond one season, because the future level and seasonal factors are correlated).
          *
-         * @throws IllegalStateException for models outside class 3
+         * @throws IllegalStateException for the other models (class 2), see {@link #hasAnalyticIntervals}
          */
         public Prediction predict(int h) {
-            if (model.error != Error.MULTIPLICATIVE || model.season != Season.MULTIPLICATIVE) {
-                throw new IllegalStateException(model.label() + " is not a class-3 model");
+            if (model.error == Error.ADDITIVE && model.season != Season.MULTIPLICATIVE) {
+                return model.classOne(state, parameters, sigma2, h);
             }
-            return model.classThree(state, parameters, sigma2, h);
+            if (model.error == Error.MULTIPLICATIVE && model.season == Season.MULTIPLICATIVE) {
+                return model.classThree(state, parameters, sigma2, h);
+            }
+            throw new IllegalStateException(model.label() + " has no closed-form forecast variance");
+        }
+
+        public boolean hasAnalyticIntervals() {
+            return model.error == Error.ADDITIVE && model.season != Season.MULTIPLICATIVE
+                    || model.error == Error.MULTIPLICATIVE && model.season == Season.MULTIPLICATIVE;
+        }
+
+        /** Simulated future paths from the final state, one per row of standard normal {@code shocks}. */
+        public double[][] paths(double[][] shocks) {
+            return model.paths(state, parameters, sigma2, shocks);
         }
     }
 
@@ -181,35 +195,12 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
      * models as common practice.
      */
     boolean isAdmissible(Parameters p) {
-        int m = season == Season.NONE ? 0 : period;
-        int t = trend == Trend.NONE ? 0 : 1;
-        int size = 1 + t + m;
-        double phi = damped ? p.phi() : 1;
-        double[][] f = new double[size][size];
-        double[] g = new double[size];
-        double[] w = new double[size];
-        f[0][0] = 1;
-        w[0] = 1;
-        g[0] = p.alpha();
-        if (t == 1) {
-            f[0][1] = phi;
-            f[1][1] = phi;
-            w[1] = phi;
-            g[1] = p.beta();
-        }
-        if (m > 0) {
-            int first = 1 + t;
-            f[first][first + m - 1] = 1; // the new first season is the oldest one, updated
-            for (int i = 1; i < m; i++) {
-                f[first + i][first + i - 1] = 1;
-            }
-            w[first + m - 1] = 1;
-            g[first] = p.gamma();
-        }
+        LinearForm form = linearForm(p);
+        int size = form.g().length;
         double[][] d = new double[size][size];
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < size; j++) {
-                d[i][j] = f[i][j] - g[i] * w[j];
+                d[i][j] = form.f()[i][j] - form.g()[i] * form.w()[j];
             }
         }
         EigenDecomposition eigen = new EigenDecomposition(new Array2DRowRealMatrix(d, false));
@@ -278,6 +269,7 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         double sumE2 = 0;
         double sumLogF = 0;
         double sumSq = 0;
+        double[] lb = new double[2];
         for (double v : y) {
             double f = point(l, b, s, phi, 1); // one step ahead: φ* = φ
             if (!Double.isFinite(f)) {
@@ -287,22 +279,11 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
             sumE2 += e * e;
             sumLogF += Math.log(Math.abs(f));
             sumSq += (v - f) * (v - f);
-            // update (R forecast: update())
-            double phib = trend == Trend.NONE ? 0 : phi * b;
-            double q = l + phib;
-            double oldest = season == Season.NONE ? 0 : s[m - 1];
-            double pp = season == Season.NONE ? v : season == Season.ADDITIVE ? v - oldest : v / oldest;
-            double newL = q + p.alpha() * (pp - q);
-            if (trend != Trend.NONE) {
-                b = phib + (p.beta() / p.alpha()) * ((newL - l) - phib);
-            }
-            if (season != Season.NONE) {
-                double t = season == Season.ADDITIVE ? v - q : v / q;
-                double newS = oldest + p.gamma() * (t - oldest);
-                System.arraycopy(s, 0, s, 1, m - 1);
-                s[0] = newS;
-            }
-            l = newL;
+            lb[0] = l;
+            lb[1] = b;
+            advance(lb, s, phi, p, v);
+            l = lb[0];
+            b = lb[1];
         }
         int n = y.length;
         double lik = n * Math.log(sumE2) + (error == Error.MULTIPLICATIVE ? 2 * sumLogF : 0);
@@ -316,6 +297,121 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         state[1] = b;
         System.arraycopy(s, 0, state, 2, m);
         return new Fit(this, p, lik, logLik, aic, aicc, bic, sumE2 / (n - k + 1), sumSq / n, state, n);
+    }
+
+    /**
+     * The state equations for one observed value v (R forecast: {@code update()}): level and trend
+     * in {@code lb}, seasons in {@code s} (s_1 the most recent), both updated in place.
+     */
+    private void advance(double[] lb, double[] s, double phi, Parameters p, double v) {
+        int m = s.length;
+        double l = lb[0];
+        double phib = trend == Trend.NONE ? 0 : phi * lb[1];
+        double q = l + phib;
+        double oldest = season == Season.NONE ? 0 : s[m - 1];
+        double pp = season == Season.NONE ? v : season == Season.ADDITIVE ? v - oldest : v / oldest;
+        double newL = q + p.alpha() * (pp - q);
+        if (trend != Trend.NONE) {
+            lb[1] = phib + (p.beta() / p.alpha()) * ((newL - l) - phib);
+        }
+        if (season != Season.NONE) {
+            double t = season == Season.ADDITIVE ? v - q : v / q;
+            double newS = oldest + p.gamma() * (t - oldest);
+            System.arraycopy(s, 0, s, 1, m - 1);
+            s[0] = newS;
+        }
+        lb[0] = newL;
+    }
+
+    /**
+     * Future sample paths from a final state: each step draws y = ŷ + σz (additive error) or
+     * ŷ(1 + σz) (multiplicative) with z from {@code shocks}, then updates the state with y
+     * (Hyndman et al. 2008, §6.1, simulation of the forecast distribution).
+     *
+     * @param shocks standard normal draws, one row per path, one column per step
+     */
+    double[][] paths(double[] state, Parameters p, double sigma2, double[][] shocks) {
+        int m = season == Season.NONE ? 1 : period;
+        double phi = damped ? p.phi() : 1;
+        double sigma = Math.sqrt(sigma2);
+        double[][] out = new double[shocks.length][];
+        double[] lb = new double[2];
+        double[] s = new double[m];
+        for (int path = 0; path < shocks.length; path++) {
+            lb[0] = state[0];
+            lb[1] = state[1];
+            System.arraycopy(state, 2, s, 0, m);
+            double[] y = new double[shocks[path].length];
+            for (int i = 0; i < y.length; i++) {
+                double f = point(lb[0], lb[1], s, phi, 1);
+                double z = shocks[path][i];
+                y[i] = error == Error.ADDITIVE ? f + sigma * z : f * (1 + sigma * z);
+                advance(lb, s, phi, p, y[i]);
+            }
+            out[path] = y;
+        }
+        return out;
+    }
+
+    /**
+     * Class-1 forecast variances (additive errors, no multiplicative component; Hyndman et al.
+     * 2008, §6.2, eq. 6.3): v_h = σ²(1 + Σ_{j=1}^{h−1} c_j²), c_j = w′F^{j−1}g.
+     */
+    private Prediction classOne(double[] state, Parameters p, double sigma2, int h) {
+        LinearForm form = linearForm(p);
+        double[] mean = forecastFrom(state, p.phi(), h);
+        double[] variance = new double[h];
+        double[] fg = form.g().clone(); // F^{j−1} g
+        double sum = 0;
+        for (int i = 0; i < h; i++) {
+            variance[i] = sigma2 * (1 + sum);
+            double c = 0;
+            for (int k = 0; k < fg.length; k++) {
+                c += form.w()[k] * fg[k];
+            }
+            sum += c * c;
+            double[] next = new double[fg.length];
+            for (int r = 0; r < fg.length; r++) {
+                for (int k = 0; k < fg.length; k++) {
+                    next[r] += form.f()[r][k] * fg[k];
+                }
+            }
+            fg = next;
+        }
+        return new Prediction(mean, variance);
+    }
+
+    /** The linear state-space form x_t = F x_{t−1} + g ε_t, y_t = w′x_{t−1} + ε_t, state (l, b, s_1 … s_m). */
+    private record LinearForm(double[][] f, double[] g, double[] w) {
+    }
+
+    private LinearForm linearForm(Parameters p) {
+        int m = season == Season.NONE ? 0 : period;
+        int t = trend == Trend.NONE ? 0 : 1;
+        int size = 1 + t + m;
+        double phi = damped ? p.phi() : 1;
+        double[][] f = new double[size][size];
+        double[] g = new double[size];
+        double[] w = new double[size];
+        f[0][0] = 1;
+        w[0] = 1;
+        g[0] = p.alpha();
+        if (t == 1) {
+            f[0][1] = phi;
+            f[1][1] = phi;
+            w[1] = phi;
+            g[1] = p.beta();
+        }
+        if (m > 0) {
+            int first = 1 + t;
+            f[first][first + m - 1] = 1; // the new first season is the oldest one, updated
+            for (int i = 1; i < m; i++) {
+                f[first + i][first + i - 1] = 1;
+            }
+            w[first + m - 1] = 1;
+            g[first] = p.gamma();
+        }
+        return new LinearForm(f, g, w);
     }
 
     double[] forecastFrom(double[] state, double phi, int h) {
