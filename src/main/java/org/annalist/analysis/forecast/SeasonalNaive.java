@@ -20,4 +20,47 @@ public final class SeasonalNaive {
         }
         return f;
     }
+
+    /**
+     * The forecast distribution of the seasonal random walk y_t = y_{t−m} + ε_t (Hyndman &amp;
+     * Athanasopoulos 2021, §5.5, Table 5.2): variance σ²(k + 1), k = ⌊(h − 1)/m⌋, σ² the mean
+     * squared seasonal difference.
+     */
+    public static EtsModel.Prediction predict(double[] x, int period, int h) {
+        double sigma2 = residualVariance(x, period);
+        double[] variance = new double[h];
+        for (int k = 0; k < h; k++) {
+            variance[k] = sigma2 * (k / period + 1);
+        }
+        return new EtsModel.Prediction(forecast(x, period, h), variance);
+    }
+
+    /** Sample paths of the seasonal random walk, one per row of standard normal {@code shocks}. */
+    public static double[][] paths(double[] x, int period, double[][] shocks) {
+        double sigma = Math.sqrt(residualVariance(x, period));
+        double[][] out = new double[shocks.length][];
+        for (int p = 0; p < shocks.length; p++) {
+            double[] path = new double[shocks[p].length];
+            for (int k = 0; k < path.length; k++) {
+                double before = k < period ? x[x.length - period + k] : path[k - period];
+                path[k] = before + sigma * shocks[p][k];
+            }
+            out[p] = path;
+        }
+        return out;
+    }
+
+    private static double residualVariance(double[] x, int period) {
+        double sum = 0;
+        int count = 0;
+        for (int t = period; t < x.length; t++) {
+            double d = x[t] - x[t - period];
+            sum += d * d;
+            count++;
+        }
+        if (count == 0) {
+            throw new IllegalArgumentException("a seasonal naive interval needs more than one period of values");
+        }
+        return sum / count;
+    }
 }
