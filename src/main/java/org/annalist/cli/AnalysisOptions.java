@@ -15,6 +15,9 @@ import picocli.CommandLine.Option;
 /** The choices a user can make for the analysis instead of leaving them to the data. */
 final class AnalysisOptions {
 
+    /** Four years of daily periods: beyond that no interval means anything. */
+    static final int MAX_HORIZON = 1461;
+
     enum FormChoice { auto, additive, multiplicative }
 
     enum MeasureChoice { auto, flow, level }
@@ -37,6 +40,11 @@ final class AnalysisOptions {
             + "(total / days x 30.4375 for months), so that months of unequal length compare fairly.")
     boolean perDay;
 
+    @Option(names = "--horizon", paramLabel = "N",
+            description = "Periods to forecast in the outlook; 0 leaves the outlook out. "
+                    + "Default: the rest of the last observed year plus 12 periods.")
+    Integer horizon;
+
     /** The series as the analysis should see it. */
     Series prepare(Series series) {
         if (!perDay) {
@@ -50,6 +58,10 @@ final class AnalysisOptions {
     }
 
     Analyst analyst() {
+        if (horizon != null && (horizon < 0 || horizon > MAX_HORIZON)) {
+            throw new UserInputException("--horizon: expected a number of periods from 0 to " + MAX_HORIZON
+                    + ", got " + horizon);
+        }
         return new Analyst(switch (form) {
             case auto -> Optional.empty();
             case additive -> Optional.of(ModelForm.Form.ADDITIVE);
@@ -59,6 +71,6 @@ final class AnalysisOptions {
             case flow -> Optional.of(LatestIndicators.Measure.FLOW);
             case level -> Optional.of(LatestIndicators.Measure.LEVEL);
         }, holidays == null ? List.of() : HolidayFile.read(holidays).stream()
-                .map(h -> new Holiday(h.name(), h.days())).toList());
+                .map(h -> new Holiday(h.name(), h.days())).toList(), Optional.ofNullable(horizon));
     }
 }

@@ -9,6 +9,7 @@ import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
 import org.annalist.findings.Findings;
+import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.SeriesFacts;
@@ -87,6 +88,26 @@ final class AnalystNotes {
         line(out, "irregular", "%s", f.irregular().share() == null ? "not measured"
                 : String.format(Locale.ROOT, "%s (share %.2f of the variation around the long-run trend)",
                 f.irregular().label(), f.irregular().share()));
+        OutlookFinding o = f.outlook();
+        if (o == null) {
+            line(out, "outlook", "none");
+        } else {
+            OutlookFinding.Point first = o.forecasts().get(0);
+            line(out, "outlook", "%s (%s), fitted from %s, %d periods ahead; %s: %s (80%% %s to %s)", o.model(),
+                    o.chosenBecause(), o.fittedFrom(), o.horizon(), first.period(), num(first.mean()), num(first.lo80()),
+                    num(first.hi80()));
+            if (o.nextYearTotal() != null) {
+                line(out, "next year", "%d total %s (80%% %s to %s)", o.nextYear(), num(o.nextYearTotal().mean()),
+                        num(o.nextYearTotal().lo80()), num(o.nextYearTotal().hi80()));
+            }
+            if (o.nextYearAverage() != null) {
+                line(out, "next year", "%d average %s (80%% %s to %s)", o.nextYear(), num(o.nextYearAverage().mean()),
+                        num(o.nextYearAverage().lo80()), num(o.nextYearAverage().hi80()));
+            }
+            for (OutlookFinding.Score score : o.backtest()) {
+                line(out, "back-test", "%s: MASE %.2f, sMAPE %.1f %%", score.method(), score.mase(), score.smape());
+            }
+        }
         line(out, "smoothing", "%s", f.smoothing() == null ? "none (series shorter than one window)"
                 : f.smoothing().method());
         if (f.decomposition().method() != null) {

@@ -15,14 +15,16 @@ import org.annalist.ingest.ReadOptions;
 import org.annalist.narrative.Masthead;
 import org.annalist.analysis.breaks.Pelt;
 import org.annalist.analysis.decompose.Stl;
+import org.annalist.analysis.forecast.EtsSelection;
+import org.annalist.analysis.forecast.Outlook;
 import org.annalist.findings.Analyst;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 
 /**
- * Prints the speed figures of the analysis core on seeded synthetic data (STL, the whole Analyst,
- * Bai–Perron and PELT):
+ * Prints the speed figures of the analysis core on seeded synthetic data (STL, the whole Analyst
+ * without its outlook, automatic ETS, the outlook, Bai–Perron and PELT):
  * {@code java -cp target/annalist.jar org.annalist.cli.Benchmark}. Warm figures: each measurement
  * runs after a warm-up of the same work, single-threaded.
  */
@@ -50,7 +52,7 @@ public final class Benchmark {
             series[i] = Series.builder("s" + i, Frequency.MONTHLY).append(Period.month(2005, 1), synthetic(random, 240))
                     .snapshot();
         }
-        Analyst analyst = new Analyst();
+        Analyst analyst = new Analyst().withoutOutlook();
         for (int i = 0; i < 300; i++) {
             analyst.analyse(series[i]);
         }
@@ -82,6 +84,26 @@ public final class Benchmark {
         }
         double bpSlopeMs = (System.nanoTime() - start) / 1e6 / bpRuns;
 
+        double[][] monthly200 = new double[20][];
+        for (int i = 0; i < monthly200.length; i++) {
+            monthly200[i] = synthetic(random, 200);
+        }
+        for (int i = 0; i < 5; i++) {
+            for (double[] y : monthly200) {
+                EtsSelection.select(y, 12);
+            }
+        }
+        start = System.nanoTime();
+        for (double[] y : monthly200) {
+            EtsSelection.select(y, 12);
+        }
+        double etsMs = (System.nanoTime() - start) / 1e6 / monthly200.length;
+        start = System.nanoTime();
+        for (double[] y : monthly200) {
+            Outlook.of(y, 12, 14, Outlook.Bounds.NON_NEGATIVE);
+        }
+        double outlookMs = (System.nanoTime() - start) / 1e6 / monthly200.length;
+
         double[] daily = new double[3650];
         for (int t = 0; t < daily.length; t++) {
             daily[t] = (t >= 2000 ? 1.2 : 1) * (300 + 20 * random.nextGaussian());
@@ -97,8 +119,12 @@ public final class Benchmark {
 
         System.out.printf(Locale.ROOT, "STL, n = 144 monthly, robust (1 inner, 15 outer): %.3f ms per series (warm, %d runs)%n",
                 stlMs, stlRuns);
-        System.out.printf(Locale.ROOT, "Analyst, 1,000 monthly series of 20 years:        %.3f ms per series (warm)%n",
+        System.out.printf(Locale.ROOT, "Analyst without outlook, 1,000 monthly series of 20 years: %.3f ms per series (warm)%n",
                 analystMs);
+        System.out.printf(Locale.ROOT, "ETS automatic selection and fit, n = 200 monthly:  %.0f ms per series (warm, %d series)%n",
+                etsMs, monthly200.length);
+        System.out.printf(Locale.ROOT, "Outlook (4 methods, 24-origin back-test, 14 ahead), n = 200 monthly: %.0f ms per series (warm)%n",
+                outlookMs);
         System.out.printf(Locale.ROOT, "Bai-Perron, n = 600, minimum regime 12, up to 6 breaks: level %.1f ms, level and slope %.1f ms (warm)%n",
                 bpLevelMs, bpSlopeMs);
         System.out.printf(Locale.ROOT, "PELT, n = 3,650 daily, minimum regime 7:                 %.1f ms (warm)%n", peltMs);

@@ -26,7 +26,7 @@ import org.annalist.series.ValueFlag;
  * seasonal pattern → outlier candidates on the remainder → structural breaks on the seasonally
  * adjusted values with those screened out → outliers a break does not explain → trend on the
  * seasonally adjusted values (and within the latest regime) → cycle on yearly means → irregular
- * share → smoothing.
+ * share → smoothing → outlook (on the latest regime when it is long enough).
  */
 public final class Analyst {
 
@@ -36,21 +36,30 @@ public final class Analyst {
     private final Optional<ModelForm.Form> forcedForm;
     private final Optional<LatestIndicators.Measure> measure;
     private final List<Holiday> holidays;
+    private final Optional<Integer> horizon;
 
     public Analyst() {
-        this(Optional.empty(), Optional.empty(), List.of());
+        this(Optional.empty(), Optional.empty(), List.of(), Optional.empty());
     }
 
     /**
      * @param forcedForm additive or multiplicative as the user set it, instead of deciding from the data
      * @param measure    flow or level as the user declared it, instead of reading it from unit and name
      * @param holidays   the user's moving holidays, estimated beside Easter
+     * @param horizon    periods to forecast (0 for no outlook); empty for the rest of the last
+     *                   observed year plus {@value OutlookAnalysis#DEFAULT_EXTRA_PERIODS}
      */
     public Analyst(Optional<ModelForm.Form> forcedForm, Optional<LatestIndicators.Measure> measure,
-                   List<Holiday> holidays) {
+                   List<Holiday> holidays, Optional<Integer> horizon) {
         this.forcedForm = forcedForm;
         this.measure = measure;
         this.holidays = List.copyOf(holidays);
+        this.horizon = horizon;
+    }
+
+    /** The same analysis without the outlook, the costliest part (for bulk analysis and benchmarks). */
+    public Analyst withoutOutlook() {
+        return new Analyst(forcedForm, measure, holidays, Optional.of(0));
     }
 
     public Findings analyse(Series series) {
@@ -104,9 +113,10 @@ public final class Analyst {
                 + " is provisional: the new regime is still short and the break may not hold."));
 
         TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), notes);
+        LatestIndicators.Measure kind = parts != null ? LatestIndicators.Measure.RATIO
+                : measure.orElse(MeasureKind.infer(series));
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
-                : LatestIndicators.at(series, series.size() - 1, parts != null ? LatestIndicators.Measure.RATIO
-                        : measure.orElse(MeasureKind.infer(series)), decomposition.adjusted(), parts);
+                : LatestIndicators.at(series, series.size() - 1, kind, decomposition.adjusted(), parts);
         double[] calendarIrregular = null;
         if (stl != null) {
             calendarIrregular = stl.remainder().clone();
@@ -116,9 +126,10 @@ public final class Analyst {
         }
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
+        OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), kind, horizon);
         return new Findings(SeriesFacts.of(series), log ? "log" : "none", trend,
                 SeasonalityFindings.of(season, form), cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest), CalendarAnalysis.of(series, calendarIrregular, log, latest, holidays), null,
+                IndicatorsFindings.of(latest), CalendarAnalysis.of(series, calendarIrregular, log, latest, holidays), outlook,
                 recent(series), notes, formChoice(form), decomposition, breaks.episodes(), breaks.method());
     }
 

@@ -14,7 +14,7 @@ import java.util.List;
  * @param breaks        structural changes, oldest first
  * @param indicators    the latest period against earlier ones (null when the latest period has no value)
  * @param calendar      Easter dates, calendar effects and notes (monthly and quarterly data; else null)
- * @param outlook       forecasts (null until they exist)
+ * @param outlook       forecasts with intervals and their back-test (null when not made)
  * @param recent        the latest periods with their year-on-year change, oldest first
  * @param notes         caveats in plain words (short series, forced choices, …)
  * @param form          how additive or multiplicative was decided
@@ -27,7 +27,7 @@ import java.util.List;
 public record Findings(SeriesFacts series, String transform, TrendFinding trend, SeasonalityFinding seasonality,
                        CycleFinding cycle, List<OutlierFinding> outliers, List<BreakFinding> breaks,
                        IrregularFinding irregular,
-                       Smoothing smoothing, IndicatorsFinding indicators, CalendarFinding calendar, Object outlook, @JsonIgnore List<RecentPeriod> recent,
+                       Smoothing smoothing, IndicatorsFinding indicators, CalendarFinding calendar, OutlookFinding outlook, @JsonIgnore List<RecentPeriod> recent,
                        @JsonIgnore List<String> notes, @JsonIgnore FormChoice form,
                        @JsonIgnore Decomposition decomposition, @JsonIgnore List<Episode> episodes,
                        @JsonIgnore String breakMethod) {

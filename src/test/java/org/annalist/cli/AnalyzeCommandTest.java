@@ -53,7 +53,39 @@ class AnalyzeCommandTest {
         JsonNode c = f.get("calendar");
         assertThat(keys(c)).containsExactly("easter", "effects", "notes");
         assertThat(c.get("easter").get(0).get("date").asText()).isEqualTo("1949-04-17");   // Easter 1949 (Meeus)
-        assertThat(f.get("outlook").isNull()).isTrue();
+        JsonNode o = f.get("outlook");
+        assertThat(keys(o)).containsExactly("method", "model", "horizon", "fitted_from", "forecasts", "next_year_total",
+                "next_year_average", "backtest", "chosen_because", "typical_error_pct");
+        // the data end in December 1960: the rest of that year is empty, so 12 periods ahead, all of 1961
+        assertThat(o.get("horizon").asInt()).isEqualTo(12);
+        // fitted on the latest regime: it spans more than two years after the last break
+        JsonNode breaks = f.get("breaks");
+        assertThat(o.get("fitted_from").asText()).isEqualTo(breaks.isEmpty() ? "1949-01"
+                : breaks.get(breaks.size() - 1).get("period").asText());
+        assertThat(o.get("forecasts").size()).isEqualTo(12);
+        assertThat(keys(o.get("forecasts").get(0))).containsExactly("period", "mean", "lo80", "hi80", "lo95", "hi95");
+        assertThat(o.get("forecasts").get(0).get("period").asText()).isEqualTo("1961-01");
+        assertThat(keys(o.get("next_year_total"))).containsExactly("mean", "lo80", "hi80");
+        assertThat(o.get("next_year_average").isNull()).isTrue();
+        // 36 months since the 1958 break leave fewer than two years before a 24-month back-test
+        assertThat(o.get("backtest").isEmpty()).isTrue();
+        assertThat(o.get("chosen_because").asText()).contains("too short for a back-test");
+
+        Run demo = Run.of("analyze", "--format", "json", "--series", "Total", "demo-data/quennelmark-guest-nights.csv");
+        JsonNode backtest = new ObjectMapper().readTree(demo.out()).get("outlook").get("backtest");
+        assertThat(backtest.size()).isEqualTo(4);
+        assertThat(keys(backtest.get(0))).containsExactly("method", "mase", "smape");
+    }
+
+    @Test
+    void horizonSetsTheOutlooksLengthAndZeroLeavesItOut() throws IOException {
+        Run longer = Run.of("analyze", "--format", "json", "--horizon", "30", "src/test/resources/reference/AirPassengers.csv");
+        assertThat(new ObjectMapper().readTree(longer.out()).get("outlook").get("forecasts").size()).isEqualTo(30);
+        Run none = Run.of("analyze", "--format", "json", "--horizon", "0", "src/test/resources/reference/AirPassengers.csv");
+        assertThat(new ObjectMapper().readTree(none.out()).get("outlook").isNull()).isTrue();
+        Run negative = Run.of("analyze", "--horizon", "-3", "src/test/resources/reference/AirPassengers.csv");
+        assertThat(negative.exitCode()).isEqualTo(2);
+        assertThat(negative.err()).contains("--horizon").doesNotContain("Exception");
     }
 
     @Test

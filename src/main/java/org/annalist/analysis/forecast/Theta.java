@@ -98,9 +98,9 @@ public final class Theta {
         return new Fit(index, ses, StartLine.through(adjusted, n).slope() / 2, n);
     }
 
-    /** Positive data, at least three seasons, and a significant lag-m autocorrelation. */
+    /** Positive data, more than two seasons, and a significant lag-m autocorrelation (as R's thetaf, from memory). */
     static boolean isSeasonal(double[] y, int period) {
-        if (period < 2 || y.length < 3 * period) {
+        if (period < 2 || y.length <= 2 * period) {
             return false;
         }
         for (double v : y) {

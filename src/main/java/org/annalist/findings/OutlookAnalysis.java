@@ -1,0 +1,171 @@
+package org.annalist.findings;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.annalist.analysis.forecast.Outlook;
+import org.annalist.analysis.indicators.LatestIndicators;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+
+/**
+ * The outlook of a series ({@link Outlook}) as a finding: which values it is fitted on, how far it
+ * looks, the bounds the measure keeps, the periods of its forecasts and the next year's total.
+ *
+ * <p>After a structural break the methods are fitted on the latest regime when it spans at least
+ * two seasonal cycles (eight periods for non-seasonal data) — the old level would otherwise pull the
+ * forecasts; a shorter regime leaves all values in and the brief says the break may make the outlook
+ * err. Missing values inside the fitted span are filled with what trend and season predict there.
+ */
+final class OutlookAnalysis {
+
+    /** Periods beyond the rest of the last observed year, by default. */
+    static final int DEFAULT_EXTRA_PERIODS = 12;
+
+    private OutlookAnalysis() {
+    }
+
+    /**
+     * @param horizon the user's number of periods ahead (0: no outlook), or empty for the default
+     * @return null without an outlook
+     */
+    static OutlookFinding of(Series series, Decomposition decomposition, int regimeStart,
+                             LatestIndicators.Measure measure, Optional<Integer> horizon) {
+        int last = lastObserved(series);
+        if (last < 0 || horizon.isPresent() && horizon.get() == 0) {
+            return null;
+        }
+        int period = series.frequency().seasonalPeriod();
+        int h = horizon.orElse(restOfYear(series.period(last)) + DEFAULT_EXTRA_PERIODS);
+        int minimumRegime = period > 1 ? 2 * period : 8;
+        List<String> caveats = new ArrayList<>();
+        int from = 0;
+        if (regimeStart > 0) {
+            if (last + 1 - regimeStart >= minimumRegime) {
+                from = regimeStart;
+                caveats.add("The outlook is fitted on the values since the structural change in "
+                        + series.period(regimeStart).label() + " only.");
+            } else {
+                caveats.add("The latest structural change, in " + series.period(regimeStart).label()
+                        + ", is too recent to fit the outlook on the new level alone: it uses all values, "
+                        + "so it may lag behind the new level.");
+            }
+        }
+        double[] y = filled(series, decomposition, from, last, caveats);
+        Optional<Outlook.Result> result = Outlook.of(y, period, h, bounds(series, measure));
+        if (result.isEmpty()) {
+            return null;
+        }
+        Outlook.Result outlook = result.get();
+        if (outlook.backtest().isEmpty()) {
+            caveats.add("The series is too short to test the forecasts on its own past, so their accuracy is unknown.");
+        }
+        Outlook.Forecast f = outlook.chosen();
+        Period lastPeriod = series.period(last);
+        List<OutlookFinding.Point> points = new ArrayList<>();
+        for (int k = 0; k < h; k++) {
+            points.add(new OutlookFinding.Point(lastPeriod.plus(k + 1).toString(), f.mean()[k], f.lo80()[k],
+                    f.hi80()[k], f.lo95()[k], f.hi95()[k], k));
+        }
+        int nextYear = lastPeriod.year() + 1;
+        OutlookFinding.Span total = null;
+        OutlookFinding.Span average = null;
+        int[] span = yearSpan(lastPeriod, nextYear, h);
+        if (span != null) {
+            double[] sum = f.sumOver(span[0], span[1]);
+            int count = span[1] - span[0];
+            if (measure == LatestIndicators.Measure.FLOW) {
+                total = new OutlookFinding.Span(sum[0], sum[1], sum[2]);
+            } else {
+                average = new OutlookFinding.Span(sum[0] / count, sum[1] / count, sum[2] / count);
+            }
+        }
+        List<OutlookFinding.Score> scores = outlook.backtest().stream()
+                .map(s -> new OutlookFinding.Score(s.method() == Outlook.Method.ETS ? s.model() : s.method().label(),
+                        s.mase(), s.smape())).toList();
+        Double typical = outlook.backtest().isEmpty() ? null
+                : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
+        return new OutlookFinding(f.method().label(), f.model(), h, series.period(from).toString(), points, total,
+                average, scores, outlook.chosenBecause(), typical, nextYear, outlook.origins(), caveats);
+    }
+
+    /** Percent rates stay within 0–100, values that were never negative stay at or above zero. */
+    static Outlook.Bounds bounds(Series series, LatestIndicators.Measure measure) {
+        double min = Arrays.stream(series.values()).filter(v -> !Double.isNaN(v)).min().orElse(0);
+        if (min < 0) {
+            return Outlook.Bounds.NONE;
+        }
+        String unit = series.unit().toLowerCase(Locale.ROOT);
+        boolean percent = unit.contains("%") || unit.contains("percent");
+        return percent && measure != LatestIndicators.Measure.FLOW ? Outlook.Bounds.PERCENT : Outlook.Bounds.NON_NEGATIVE;
+    }
+
+    /** Periods after {@code last} still in its calendar year. */
+    static int restOfYear(Period last) {
+        int k = 0;
+        while (last.plus(k + 1).year() == last.year()) {
+            k++;
+        }
+        return k;
+    }
+
+    /** {from, to} steps (0-based, to exclusive) of the whole calendar year {@code year} within the horizon, or null. */
+    private static int[] yearSpan(Period last, int year, int h) {
+        int from = -1;
+        int to = -1;
+        for (int k = 0; k < h; k++) {
+            if (last.plus(k + 1).year() == year) {
+                from = from < 0 ? k : from;
+                to = k + 1;
+            }
+        }
+        return from < 0 || last.plus(to + 1).year() == year ? null : new int[] {from, to};
+    }
+
+    private static int lastObserved(Series series) {
+        for (int i = series.size() - 1; i >= 0; i--) {
+            if (!series.isMissing(i)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * The values from {@code from} to {@code last}, gaps filled with trend-cycle and season there
+     * (or, without a decomposition, by straight lines between their neighbours).
+     */
+    private static double[] filled(Series series, Decomposition d, int from, int last, List<String> caveats) {
+        double[] y = Arrays.copyOfRange(series.values(), from, last + 1);
+        int gaps = 0;
+        for (int i = 0; i < y.length; i++) {
+            if (!Double.isNaN(y[i])) {
+                continue;
+            }
+            gaps++;
+            int t = from + i;
+            if (d.trendCycle() != null && !Double.isNaN(d.trendCycle()[t])) {
+                y[i] = d.multiplicative() ? d.trendCycle()[t] * d.seasonal()[t] : d.trendCycle()[t] + d.seasonal()[t];
+            }
+        }
+        for (int i = 0; i < y.length; i++) {
+            if (Double.isNaN(y[i])) {
+                int before = i - 1;
+                int after = i + 1;
+                while (after < y.length && Double.isNaN(y[after])) {
+                    after++;
+                }
+                double left = before >= 0 ? y[before] : y[after];
+                double right = after < y.length ? y[after] : left;
+                y[i] = left + (right - left) * (i - before) / (double) (after - before);
+            }
+        }
+        if (gaps > 0) {
+            caveats.add(gaps + (gaps == 1 ? " missing value was" : " missing values were")
+                    + " filled with what trend and season predict before forecasting.");
+        }
+        return y;
+    }
+}
