@@ -12,6 +12,7 @@ import java.util.Optional;
 import java.util.function.UnaryOperator;
 import org.annalist.chart.Figure;
 import org.annalist.chart.IrregularChart;
+import org.annalist.chart.OutlookChart;
 import org.annalist.chart.OverviewChart;
 import org.annalist.chart.SeasonalProfileChart;
 import org.annalist.chart.YearOverlayChart;
@@ -114,6 +115,9 @@ public final class BriefPipeline {
         }
         if (view.charts().irregular().drawn()) {
             figures.add(IrregularChart.of(series, findings));
+        }
+        if (findings.outlook() != null) {
+            figures.add(OutlookChart.of(series, findings.outlook()));
         }
         return figures;
     }

@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import java.util.ArrayList;
 import java.util.List;
 import org.annalist.findings.Findings;
+import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.RulesInForce;
 
 /** The methods appendix: each method with its source and the settings this brief used. */
@@ -47,6 +48,15 @@ final class AppendixViews {
                 + "Hoaglin 1993), robust scale (MAD)", "outliers kept out of the break search; none reported next to a break"));
         rows.add(new BriefView.MethodRow("Irregular fluctuation", "share of the variation around the long-run "
                 + "straight line carried by the remainder", ""));
+        if (findings.outlook() != null) {
+            OutlookFinding o = findings.outlook();
+            rows.add(new BriefView.MethodRow("Outlook", "exponential smoothing state-space models chosen by AICc "
+                    + "(Hyndman, Koehler, Snyder & Grose 2002; Hyndman et al. 2008), Theta (Assimakopoulos & "
+                    + "Nikolopoulos 2000), seasonal naive and their equal-weight combination, compared in a "
+                    + "rolling-origin back-test (Tashman 2000) by MASE (Hyndman & Koehler 2006)",
+                    o.model() + ", fitted from " + o.fittedFrom() + ", " + o.horizon() + " periods ahead; "
+                    + o.chosenBecause() + "; intervals analytic or from 2,000 simulated paths"));
+        }
         return rows;
     }
 

@@ -11,7 +11,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                         Charts charts,
                         TrendView trend, SeasonView season, CycleView cycle, List<OutlierRow> outliers,
                         List<BreakRow> breaks, List<EpisodeView> episodes, IrregularView irregular,
-                        List<Row> recent, List<Fact> facts, List<String> notes, List<MethodRow> methods,
+                        List<Row> recent, OutlookView outlook, List<Fact> facts, List<String> notes, List<MethodRow> methods,
                         List<Fact> thresholds, Provenance provenance) {
 
     public BriefView {
@@ -137,6 +137,39 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     }
 
     public record Fact(String label, String value) {
+    }
+
+    /**
+     * The outlook page; {@code present} false when no outlook was made.
+     *
+     * @param method        the chosen method in words
+     * @param hasYear       the horizon covers the whole next calendar year
+     * @param total         that year as a total (a flow) rather than an average (a level)
+     * @param typicalError  the back-test's median absolute percentage error, e.g. {@code 4.4 %}; empty without a back-test
+     * @param backtestSpan  the periods the back-test's origins covered
+     */
+    public record OutlookView(boolean present, String method, String chosenBecause, String fittedFrom, String horizon,
+                              String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean more,
+                              boolean hasYear, boolean total, String nextYear, String yearMean, String yearLow,
+                              String yearHigh, String previousYear, String previousValue, String yearChange,
+                              String typicalError, String backtestSpan, List<ScoreRow> backtest, List<String> caveats) {
+
+        static final OutlookView ABSENT = new OutlookView(false, "", "", "", "", "", "", List.of(), false, false, false,
+                "", "", "", "", "", "", "", "", "", List.of(), List.of());
+
+        public OutlookView {
+            rows = List.copyOf(rows);
+            backtest = List.copyOf(backtest);
+            caveats = List.copyOf(caveats);
+        }
+    }
+
+    /** A row of the forecast table: the mean and its 80 and 95 % intervals as "low to high". */
+    public record ForecastRow(String period, String mean, String range80, String range95) {
+    }
+
+    /** A back-test row; {@code chosen} for the winner. */
+    public record ScoreRow(String method, String mase, String smape, boolean chosen) {
     }
 
     /** A row of the table of latest periods. */

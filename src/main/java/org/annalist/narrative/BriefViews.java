@@ -37,7 +37,8 @@ public final class BriefViews {
         return new BriefView(document, header, lead, thisPeriod, sections.keyFigures(lead, thisPeriod), sections.charts(),
                 sections.trend(),
                 sections.season(), sections.cycle(), sections.outliers(), sections.breaks(), sections.episodes(),
-                sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(), facts(series, findings, f),
+                sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(),
+                OutlookViews.of(series, findings.outlook(), f), facts(series, findings, f),
                 notes, AppendixViews.methods(findings, f), AppendixViews.thresholds(), provenance);
     }
 

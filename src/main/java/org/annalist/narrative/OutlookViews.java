@@ -1,0 +1,126 @@
+package org.annalist.narrative;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.annalist.findings.OutlookFinding;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+
+/**
+ * The outlook page's view: the next periods rounded to three significant digits (forecasts are not
+ * known to five), the next year against the last complete one, and the back-test in words.
+ */
+final class OutlookViews {
+
+    /** Rows of the forecast table: a year of months; more belong in the findings JSON. */
+    static final int TABLE_ROWS = 12;
+
+    private OutlookViews() {
+    }
+
+    static BriefView.OutlookView of(Series series, OutlookFinding o, Formats f) {
+        if (o == null) {
+            return BriefView.OutlookView.ABSENT;
+        }
+        Period last = lastObserved(series);
+        List<BriefView.ForecastRow> rows = new ArrayList<>();
+        for (OutlookFinding.Point p : o.forecasts().subList(0, Math.min(TABLE_ROWS, o.forecasts().size()))) {
+            rows.add(new BriefView.ForecastRow(f.shortPeriod(last.plus(p.index() + 1)), f.significant(p.mean()),
+                    f.significant(p.lo80()) + " to " + f.significant(p.hi80()),
+                    f.significant(p.lo95()) + " to " + f.significant(p.hi95())));
+        }
+        List<BriefView.ScoreRow> scores = new ArrayList<>();
+        for (int i = 0; i < o.backtest().size(); i++) {
+            OutlookFinding.Score s = o.backtest().get(i);
+            scores.add(new BriefView.ScoreRow(s.method(), f.fixed(s.mase(), 2), f.fixed(s.smape(), 1), i == 0));
+        }
+        OutlookFinding.Span year = o.nextYearTotal() != null ? o.nextYearTotal() : o.nextYearAverage();
+        boolean total = o.nextYearTotal() != null;
+        String previousYear = "";
+        String previousValue = "";
+        String change = "";
+        if (year != null) {
+            // the latest calendar year observed in full: the current one is usually still running
+            int comparedYear = o.nextYear() - 1;
+            Double previous = completeYear(series, comparedYear, total);
+            if (previous == null) {
+                comparedYear--;
+                previous = completeYear(series, comparedYear, total);
+            }
+            if (previous != null) {
+                previousYear = String.valueOf(comparedYear);
+                previousValue = f.significant(previous);
+                change = previous > 0 ? f.signedPercent(100 * (year.mean() / previous - 1)) : "";
+            }
+        }
+        String methodName = o.method().equals("ETS") ? "exponential smoothing, " + o.model()
+                : o.method().equals("combination") ? "the average of three methods (" + o.model().replaceFirst("^mean of ", "") + ")"
+                : o.model();
+        return new BriefView.OutlookView(true, methodName, o.chosenBecause(), f.period(periodOf(series, o.fittedFrom())),
+                f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
+                o.horizon() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
+                year == null ? "" : f.significant(year.mean()), year == null ? "" : f.significant(year.lo80()),
+                year == null ? "" : f.significant(year.hi80()), previousYear, previousValue, change,
+                o.typicalErrorPct() == null ? "" : f.fixed(Math.max(o.typicalErrorPct(), 0.1),
+                        o.typicalErrorPct() < 10 ? 1 : 0) + "\u00A0%",
+                f.count(o.backtestPeriods()), scores, o.caveats().stream().map(c -> inWords(c, series, f)).toList());
+    }
+
+    /** The sum (flow) or mean (level) of a calendar year with every period observed, or null. */
+    private static Double completeYear(Series series, int year, boolean sum) {
+        double total = 0;
+        int count = 0;
+        for (int i = 0; i < series.size(); i++) {
+            if (series.period(i).year() == year) {
+                if (series.isMissing(i)) {
+                    return null;
+                }
+                total += series.value(i);
+                count++;
+            }
+        }
+        int expected = 0;
+        Period first = null;
+        for (int i = 0; i < series.size() && first == null; i++) {
+            first = series.period(i).year() == year ? series.period(i) : null;
+        }
+        if (first == null || first.seasonalPosition() != 1 && series.frequency().seasonalPeriod() > 1) {
+            return null; // the year starts before the data
+        }
+        for (Period p = first; p.year() == year; p = p.plus(1)) {
+            expected++;
+        }
+        return count < expected ? null : sum ? total : total / count;
+    }
+
+    /** The findings write periods as the data do ({@code 2022-08}); the brief writes them in words. */
+    private static String inWords(String caveat, Series series, Formats f) {
+        String out = caveat;
+        for (String word : caveat.split("[\\s,.;:()]+")) {
+            if (!word.isEmpty() && Character.isDigit(word.charAt(0))) {
+                Period p = periodOf(series, word);
+                if (p.toString().equals(word)) {
+                    out = out.replace(word, f.period(p));
+                }
+            }
+        }
+        return out;
+    }
+
+    private static Period lastObserved(Series series) {
+        int last = series.size() - 1;
+        while (last > 0 && series.isMissing(last)) {
+            last--;
+        }
+        return series.period(last);
+    }
+
+    private static Period periodOf(Series series, String label) {
+        for (int i = 0; i < series.size(); i++) {
+            if (series.period(i).toString().equals(label)) {
+                return series.period(i);
+            }
+        }
+        return series.start();
+    }
+}
