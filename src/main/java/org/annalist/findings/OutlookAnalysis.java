@@ -83,8 +83,7 @@ final class OutlookAnalysis {
             }
         }
         List<OutlookFinding.Score> scores = outlook.backtest().stream()
-                .map(s -> new OutlookFinding.Score(s.method() == Outlook.Method.ETS ? s.model() : s.method().label(),
-                        s.mase(), s.smape())).toList();
+                .map(s -> new OutlookFinding.Score(s.method().label(), s.mase(), s.smape())).toList();
         Double typical = outlook.backtest().isEmpty() ? null
                 : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
         return new OutlookFinding(f.method().label(), f.model(), h, series.period(from).toString(), points, total,

@@ -67,9 +67,9 @@ class AnalyzeCommandTest {
         assertThat(o.get("forecasts").get(0).get("period").asText()).isEqualTo("1961-01");
         assertThat(keys(o.get("next_year_total"))).containsExactly("mean", "lo80", "hi80");
         assertThat(o.get("next_year_average").isNull()).isTrue();
-        // 36 months since the 1958 break leave fewer than two years before a 24-month back-test
-        assertThat(o.get("backtest").isEmpty()).isTrue();
-        assertThat(o.get("chosen_because").asText()).contains("too short for a back-test");
+        // 36 months since the 1958 break: two years before the first origin leave 12 origins to back-test
+        assertThat(o.get("backtest").size()).isEqualTo(4);
+        assertThat(o.get("chosen_because").asText()).contains("back-test over the last 12 periods");
 
         Run demo = Run.of("analyze", "--format", "json", "--series", "Total", "demo-data/quennelmark-guest-nights.csv");
         JsonNode backtest = new ObjectMapper().readTree(demo.out()).get("outlook").get("backtest");

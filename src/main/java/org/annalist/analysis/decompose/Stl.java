@@ -148,6 +148,16 @@ public final class Stl {
             observedWeight[i] = missing ? 0 : 1;
             values[i] = missing ? 0 : y[i];
         }
+        for (int j = 0; j < period; j++) {
+            int seen = 0;
+            for (int i = j; i < n; i += period) {
+                seen += (int) observedWeight[i];
+            }
+            if (seen < 2) {
+                throw new IllegalArgumentException("STL needs two observed values at every position of the period; "
+                        + "position " + (j + 1) + " of " + period + " has " + seen);
+            }
+        }
         double[] seasonal = new double[n];
         double[] trend = new double[n];
         double[] rw = observedWeight.clone();

@@ -20,8 +20,9 @@ import org.annalist.analysis.OrderStatistics;
  * <p>Choice rule: the lowest back-test MASE wins; ties go to the first of ETS, Theta, combination,
  * seasonal naive. Within ETS the model is chosen by AICc at the first origin, and its parameters are
  * kept for the later origins (updating, not re-estimating: Tashman 2000, §2.2), which keeps the
- * back-test to one model search. Too short a series for the back-test (fewer than two cycles, and
- * at least eight values, before the first origin) gets ETS by AICc, and the result says so.
+ * back-test to one model search. A shorter series is back-tested over fewer origins, as many as
+ * leave two cycles (and at least eight values) before the first, down to one cycle (four origins
+ * without a season); shorter still, ETS is chosen by AICc, and the result says so.
  *
  * <p>The chosen method is then refitted on all values. Intervals at 80 and 95 % are the normal
  * approximation to the closed-form forecast variance where the model has one (ETS classes 1 and 3,
@@ -117,11 +118,12 @@ public final class Outlook {
         if (y.length < MIN_VALUES || horizon < 1) {
             return Optional.empty();
         }
-        int origins = period > 1 ? 2 * period : NON_SEASONAL_BACKTEST;
         int cycle = Math.max(1, period);
+        int minimumTraining = Math.max(MIN_VALUES, 2 * period);
+        int origins = Math.min(period > 1 ? 2 * period : NON_SEASONAL_BACKTEST, y.length - minimumTraining);
         int firstOrigin = y.length - origins;
         List<Score> scores = List.of();
-        if (firstOrigin >= Math.max(MIN_VALUES, 2 * period)) {
+        if (origins >= (period > 1 ? period : NON_SEASONAL_BACKTEST / 2)) {
             try {
                 scores = backtest(y, period, firstOrigin, cycle);
             } catch (IllegalArgumentException constantBeforeFirstOrigin) {
@@ -137,24 +139,20 @@ public final class Outlook {
         if (chosen == null) {
             return Optional.empty();
         }
-        return Optional.of(new Result(chosen, scores, because(scores, origins), scores.isEmpty() ? 0 : origins, cycle));
+        return Optional.of(new Result(chosen, scores, because(scores, Math.max(origins, 0)),
+                scores.isEmpty() ? 0 : origins, cycle));
     }
 
     private static String because(List<Score> scores, int origins) {
         if (scores.isEmpty()) {
-            return "chosen by AICc among ETS models; the series is too short for a back-test over "
-                    + origins + " periods";
+            return "chosen by AICc among ETS models; the series is too short for a back-test";
         }
         Score best = scores.get(0);
         String next = scores.size() > 1
-                ? String.format(Locale.ROOT, "; next best %s %.2f", describe(scores.get(1)), scores.get(1).mase()) : "";
+                ? String.format(Locale.ROOT, "; next best %s %.2f", scores.get(1).method().label(), scores.get(1).mase()) : "";
         return String.format(Locale.ROOT,
                 "lowest mean absolute scaled error in a rolling-origin back-test over the last %d periods (%.2f%s)",
                 origins, best.mase(), next);
-    }
-
-    private static String describe(Score s) {
-        return s.method() == Method.ETS ? s.model() : s.method().label();
     }
 
     private static List<Score> backtest(double[] y, int period, int firstOrigin, int cycle) {

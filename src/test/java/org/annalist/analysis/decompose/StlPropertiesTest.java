@@ -1,9 +1,11 @@
 package org.annalist.analysis.decompose;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import java.util.Random;
+import net.jqwik.api.Assume;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
@@ -26,6 +28,7 @@ class StlPropertiesTest {
         for (int m = 0; m < missing; m++) {
             y[random.nextInt(n)] = Double.NaN;
         }
+        Assume.that(twoObservedPerPosition(y, period)); // below that, fit refuses the series
         Stl.Result fit = Stl.withPeriod(period).fit(y);
         for (int t = 0; t < n; t++) {
             assertThat(fit.seasonal()[t]).isFinite();
@@ -38,6 +41,26 @@ class StlPropertiesTest {
                 assertThat(fit.weights()[t]).isBetween(0.0, 1.0);
             }
         }
+    }
+
+    @Test
+    void refusesASeriesWithFewerThanTwoObservedValuesAtAPosition() {
+        double[] y = {1, 2, Double.NaN, 4, 5, Double.NaN, 7, 8, Double.NaN};
+        assertThatThrownBy(() -> Stl.withPeriod(3).fit(y)).isInstanceOf(IllegalArgumentException.class)
+                .hasMessageContaining("position 3 of 3 has 0");
+    }
+
+    private static boolean twoObservedPerPosition(double[] y, int period) {
+        for (int j = 0; j < period; j++) {
+            int seen = 0;
+            for (int t = j; t < y.length; t += period) {
+                seen += Double.isNaN(y[t]) ? 0 : 1;
+            }
+            if (seen < 2) {
+                return false;
+            }
+        }
+        return true;
     }
 
     @Test
