@@ -10,6 +10,7 @@ import java.util.List;
 import org.annalist.findings.Analyst;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.Findings;
+import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.ingest.SeriesFileReader;
@@ -66,6 +67,26 @@ class BriefDocumentTest {
         assertThat(text).contains("Reading guide", "p-value", "Seasonally adjusted", "Trend-cycle");
         assertThat(text).contains("decisions rest with the reader");
         assertThat(text).contains(f.series().name());
+    }
+
+    /** The outlook page states the findings' forecasts, rounded to three significant digits, and the caution. */
+    @Test
+    void theOutlookPageStatesTheForecastsTheirAccuracyAndTheCaution() {
+        String text = flat(totalFacts.text());
+        OutlookFinding o = totalFindings.outlook();
+        assertThat(text).contains("Outlook", "If the pattern of the past continues, the total for " + o.nextYear());
+        assertThat(text).contains(String.format(java.util.Locale.ROOT,
+                "In back-tests on this series, forecasts up to one year ahead were typically within \u00B1%.1f %%",
+                o.typicalErrorPct()));
+        assertThat(text).contains(roundedToThree(o.forecasts().get(0).mean()));
+        assertThat(text).contains("Forecasts are estimates, not promises");
+        assertThat(text).contains(o.method().equals("ETS") ? "exponential smoothing" : o.method());
+    }
+
+    /** As the brief rounds forecasts: three significant digits, grouped ({@code 77,700}). */
+    private static String roundedToThree(double v) {
+        double magnitude = Math.pow(10, Math.floor(Math.log10(Math.abs(v))) - 2);
+        return String.format(java.util.Locale.ROOT, "%,.0f", Math.round(v / magnitude) * magnitude);
     }
 
     @Test
