@@ -5,7 +5,7 @@ import java.util.function.ToDoubleFunction;
 /**
  * Minimises a smooth function inside a box by BFGS (Nocedal &amp; Wright 2006, <i>Numerical
  * Optimization</i>, 2nd ed., Algorithm 6.1) on unbounded variables u with x = lo + (hi − lo)·σ(u),
- * σ the logistic function, central-difference gradients and a backtracking Armijo line search
+ * σ the logistic function, forward-difference gradients and a backtracking Armijo line search
  * (ibid. Algorithm 3.1). The transform keeps every trial point strictly inside the box, so the
  * objective never sees a parameter outside its bounds.
  *
@@ -46,7 +46,7 @@ final class BoundedQuasiNewton {
             u[i] = Math.log(p / (1 - p));
         }
         double value = valueAt(u);
-        double[] gradient = gradientAt(u);
+        double[] gradient = gradientAt(u, value);
         double[][] inverseHessian = identity(n);
         for (int iteration = 0; iteration < maxIterations; iteration++) {
             double[] direction = new double[n];
@@ -94,7 +94,7 @@ final class BoundedQuasiNewton {
             if (!accepted) {
                 break;
             }
-            double[] trialGradient = gradientAt(trial);
+            double[] trialGradient = gradientAt(trial, trialValue);
             double[] s = new double[n];
             double[] yDiff = new double[n];
             double sy = 0;
@@ -146,17 +146,19 @@ final class BoundedQuasiNewton {
         }
     }
 
-    private double[] gradientAt(double[] u) {
+    /**
+     * Forward differences with steps of 10⁻⁷ (about the square root of the double precision, as
+     * Nocedal &amp; Wright, §8.1, recommend): half the cost of central differences, and on the
+     * reference series the same optima.
+     */
+    private double[] gradientAt(double[] u, double valueAtU) {
         double[] g = new double[u.length];
         double[] probe = u.clone();
         for (int i = 0; i < u.length; i++) {
-            double h = 1e-5 * Math.max(1, Math.abs(u[i]));
+            double h = 1e-7 * Math.max(1, Math.abs(u[i]));
             probe[i] = u[i] + h;
-            double up = valueAt(probe);
-            probe[i] = u[i] - h;
-            double down = valueAt(probe);
+            g[i] = (valueAt(probe) - valueAtU) / h;
             probe[i] = u[i];
-            g[i] = (up - down) / (2 * h);
             if (!Double.isFinite(g[i])) {
                 g[i] = 0; // at the edge of the finite region: leave this coordinate to the other directions
             }

@@ -147,7 +147,7 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
             lower[smoothing + i] = seasonalFactor ? 0.01 - start[i] : -10;
             upper[smoothing + i] = seasonalFactor ? 10 - start[i] : 10;
         }
-        Function<double[], Fit> evaluate = z -> {
+        Function<double[], Parameters> parametersOf = z -> {
             double alpha = z[0];
             double beta = trend == Trend.NONE ? 0 : alpha * z[1];
             double gamma = season == Season.NONE ? 0 : (1 - alpha) * z[2];
@@ -167,13 +167,13 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
                     return null;
                 }
             }
-            return filter(y, new Parameters(alpha, beta, gamma, phi, initial));
+            return new Parameters(alpha, beta, gamma, phi, initial);
         };
         // two searches from the same start, one with a free first step and one with a short one: on
         // the reference series each finds the better of the likelihood's basins for some models
         BoundedQuasiNewton search = new BoundedQuasiNewton(lower, upper, z -> {
-            Fit f = evaluate.apply(z);
-            return f == null ? Double.POSITIVE_INFINITY : f.lik();
+            Parameters p = parametersOf.apply(z);
+            return p == null ? Double.POSITIVE_INFINITY : criterion(y, p);
         });
         BoundedQuasiNewton.Minimum best = null;
         for (double firstStepLimit : new double[] {Double.POSITIVE_INFINITY, 0.5}) {
@@ -182,7 +182,7 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
                 best = found;
             }
         }
-        Fit fit = Double.isFinite(best.value()) ? evaluate.apply(best.point()) : null;
+        Fit fit = Double.isFinite(best.value()) ? filter(y, parametersOf.apply(best.point())) : null;
         return fit != null && isAdmissible(fit.parameters()) ? fit : null;
     }
 
@@ -254,6 +254,56 @@ public record EtsModel(Error error, Trend trend, boolean damped, Season season, 
         double[] out = Arrays.copyOf(levelAndTrend, levelAndTrend.length + seasons.length);
         System.arraycopy(seasons, 0, out, levelAndTrend.length, seasons.length);
         return out;
+    }
+
+    /**
+     * The criterion of {@link #filter} alone, the search's objective: the same recursions on a
+     * circular buffer of seasons and without the fit's bookkeeping, about twice as fast.
+     *
+     * @return +∞ where {@code filter} gives null
+     */
+    double criterion(double[] y, Parameters p) {
+        int m = season == Season.NONE ? 1 : period;
+        double l = p.initial()[0];
+        double b = trend != Trend.NONE ? p.initial()[1] : 0;
+        double[] s = new double[m]; // s_j at s[(head + j − 1) mod m]
+        if (season != Season.NONE) {
+            System.arraycopy(p.initial(), trend != Trend.NONE ? 2 : 1, s, 0, m);
+        }
+        int head = 0;
+        double phi = damped ? p.phi() : 1;
+        double alpha = p.alpha();
+        double betaStar = p.beta() / alpha;
+        double gamma = p.gamma();
+        double sumE2 = 0;
+        double sumLogF = 0;
+        for (double v : y) {
+            int oldestSlot = head == 0 ? m - 1 : head - 1;
+            double phib = trend == Trend.NONE ? 0 : phi * b;
+            double q = l + phib;
+            double oldest = season == Season.NONE ? 0 : s[oldestSlot];
+            double f = season == Season.NONE ? q : season == Season.ADDITIVE ? q + oldest : q * oldest;
+            if (!Double.isFinite(f)) {
+                return Double.POSITIVE_INFINITY;
+            }
+            double e = error == Error.ADDITIVE ? v - f : (v - f) / f;
+            sumE2 += e * e;
+            if (error == Error.MULTIPLICATIVE) {
+                sumLogF += Math.log(Math.abs(f));
+            }
+            double pp = season == Season.NONE ? v : season == Season.ADDITIVE ? v - oldest : v / oldest;
+            double newL = q + alpha * (pp - q);
+            if (trend != Trend.NONE) {
+                b = phib + betaStar * ((newL - l) - phib);
+            }
+            if (season != Season.NONE) {
+                double t = season == Season.ADDITIVE ? v - q : v / q;
+                head = oldestSlot; // the new s_1 takes the slot of the old s_m
+                s[head] = oldest + gamma * (t - oldest);
+            }
+            l = newL;
+        }
+        return y.length * Math.log(sumE2) + 2 * sumLogF;
     }
 
     /** @return the fit, or null when a forecast turns non-finite (the parameters are not admissible for the data) */

@@ -186,6 +186,24 @@ class EtsModelTest {
         }
     }
 
+    /** The search's fast criterion is the filter's likelihood criterion, for every model form. */
+    @Test
+    void searchCriterionEqualsTheFiltersLikelihood() {
+        double[] y = Reference.dataset("AirPassengers.csv");
+        for (EtsModel.Error error : EtsModel.Error.values()) {
+            for (EtsModel.Season season : EtsModel.Season.values()) {
+                for (int trend = 0; trend < 3; trend++) {
+                    EtsModel model = new EtsModel(error, trend == 0 ? EtsModel.Trend.NONE : EtsModel.Trend.ADDITIVE,
+                            trend == 2, season, season == EtsModel.Season.NONE ? 1 : 12);
+                    double[] initial = model.initialStates(y);
+                    EtsModel.Parameters p = new EtsModel.Parameters(0.4, 0.04, 0.1, 0.95, initial);
+                    EtsModel.Fit fit = model.filter(y, p);
+                    assertThat(model.criterion(y, p)).as(model.label()).isCloseTo(fit.lik(), within(1e-9 * Math.abs(fit.lik())));
+                }
+            }
+        }
+    }
+
     private static double[][] standardNormals(int paths, int horizon, long seed) {
         Random random = new Random(seed);
         double[][] z = new double[paths][horizon];
