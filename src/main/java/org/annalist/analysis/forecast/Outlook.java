@@ -324,8 +324,12 @@ public final class Outlook {
 
     /** Standard normal draws, {@value #PATHS} paths × h steps, the same for the same h. */
     private static double[][] shocks(int h) {
-        Random random = new Random(SEED);
-        double[][] z = new double[PATHS][h];
+        return standardNormals(PATHS, h, SEED);
+    }
+
+    static double[][] standardNormals(int paths, int h, long seed) {
+        Random random = new Random(seed);
+        double[][] z = new double[paths][h];
         for (double[] row : z) {
             for (int k = 0; k < h; k++) {
                 row[k] = random.nextGaussian();

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Arrays;
 import java.util.Map;
+import java.util.function.Function;
 import org.annalist.analysis.Reference;
 
 /** Shared checks of our forecasts against R's reference results. */
@@ -15,6 +16,24 @@ final class AgainstR {
     /** |ours − R| / |R| ≤ tolerance, with both values in the failure message. */
     static void relative(double ours, double r, double tolerance, String what) {
         assertThat(Math.abs(ours - r) / Math.abs(r)).as("%s: ours %s, R %s", what, ours, r).isLessThanOrEqualTo(tolerance);
+    }
+
+    /** The datasets of forecast_accuracy_holdout.csv. */
+    static final String[] HOLD_OUT_DATASETS = {"AirPassengers", "co2", "UKgas", "nottem"};
+
+    /**
+     * {ours, R's}: the hold-out MASE of {@code forecaster} and of R's automatic ets(), each averaged
+     * over {@link #HOLD_OUT_DATASETS}.
+     */
+    static double[] meanHoldOutMase(Function<HoldOut, double[]> forecaster) {
+        double ours = 0;
+        double rs = 0;
+        for (String dataset : HOLD_OUT_DATASETS) {
+            HoldOut split = HoldOut.of(dataset);
+            ours += Accuracy.of(split.training(), split.test(), forecaster.apply(split), split.period()).mase();
+            rs += split.rValue("ets_MASE");
+        }
+        return new double[] {ours / HOLD_OUT_DATASETS.length, rs / HOLD_OUT_DATASETS.length};
     }
 
     /**

@@ -152,7 +152,7 @@ class EtsModelTest {
     void simulatedPathsReproduceTheAnalyticForecastDistribution() throws IOException {
         EtsModel.Fit fit = fitWithRsParameters("AirPassengers_MAM", "AirPassengers", 12, false);
         int horizon = 18;
-        double[][] paths = fit.paths(standardNormals(20_000, horizon, 7));
+        double[][] paths = fit.paths(Outlook.standardNormals(20_000, horizon, 7));
         EtsModel.Prediction prediction = fit.predict(horizon);
         for (int h = 0; h < horizon; h++) {
             double sum = 0;
@@ -202,17 +202,6 @@ class EtsModelTest {
                 }
             }
         }
-    }
-
-    private static double[][] standardNormals(int paths, int horizon, long seed) {
-        Random random = new Random(seed);
-        double[][] z = new double[paths][horizon];
-        for (double[] row : z) {
-            for (int h = 0; h < horizon; h++) {
-                row[h] = random.nextGaussian();
-            }
-        }
-        return z;
     }
 
     private JsonNode reference(String key) throws IOException {

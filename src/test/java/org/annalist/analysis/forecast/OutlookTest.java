@@ -8,8 +8,6 @@ import org.junit.jupiter.api.Test;
 
 class OutlookTest {
 
-    private static final String[] DATASETS = {"AirPassengers", "co2", "UKgas", "nottem"};
-
     /**
      * The issue's accuracy table: with the last two seasons held out (forecast_accuracy_holdout.csv,
      * R 4.2.2, forecast 8.20), the method our back-test chooses has a mean MASE at most that of R's
@@ -19,18 +17,14 @@ class OutlookTest {
      */
     @Test
     void chosenMethodsHoldOutMaseIsNoWorseThanRsEtsOnAverage() {
-        double ours = 0;
-        double rs = 0;
-        for (String dataset : DATASETS) {
-            AgainstR.HoldOut split = AgainstR.HoldOut.of(dataset);
+        double[] mase = AgainstR.meanHoldOutMase(split -> {
             Outlook.Result outlook = Outlook.of(split.training(), split.period(), split.horizon(),
                     Outlook.Bounds.NON_NEGATIVE).orElseThrow();
-            assertThat(outlook.backtest()).as(dataset).hasSize(4);
+            assertThat(outlook.backtest()).hasSize(4);
             assertThat(outlook.backtest().get(0).method()).isEqualTo(outlook.chosen().method());
-            ours += Accuracy.of(split.training(), split.test(), outlook.chosen().mean(), split.period()).mase();
-            rs += split.rValue("ets_MASE");
-        }
-        assertThat(ours / DATASETS.length).isLessThanOrEqualTo(rs / DATASETS.length);
+            return outlook.chosen().mean();
+        });
+        assertThat(mase[0]).isLessThanOrEqualTo(mase[1]);
     }
 
     @Test
