@@ -50,7 +50,8 @@ final class OutlookViews {
             if (previous != null) {
                 previousYear = String.valueOf(comparedYear);
                 previousValue = f.significant(previous);
-                change = previous > 0 ? f.signedPercent(100 * (year.mean() / previous - 1)) : "";
+                double pct = 100 * (year.mean() / previous - 1);
+                change = previous <= 0 ? "" : Math.abs(pct) < 0.05 ? "unchanged" : f.signedPercent(pct);
             }
         }
         String methodName = o.method().equals("ETS") ? "exponential smoothing, " + o.model()
