@@ -46,8 +46,9 @@ public final class IrregularChart {
         plot.setRangeZeroBaselineVisible(true);
         plot.setRangeZeroBaselinePaint(ChartStyle.INK);
         ((NumberAxis) plot.getRangeAxis()).setNumberFormatOverride(NumberFormats.axis());
-        plot.getRangeAxis().setUpperMargin(0.2);
-        plot.getRangeAxis().setLowerMargin(0.2);
+        // room beyond the largest bars for an outlier's arrow and label (base radius 15 pt + 8 pt text)
+        plot.getRangeAxis().setUpperMargin(0.35);
+        plot.getRangeAxis().setLowerMargin(0.35);
         XYBarRenderer renderer = (XYBarRenderer) plot.getRenderer();
         renderer.setSeriesPaint(0, ChartStyle.BAR);
         renderer.setShadowVisible(false);

@@ -162,14 +162,17 @@ public final class SeasonalPattern {
                 mean[j] += seasonal[from + year * period + j] / PROFILE_YEARS;
             }
         }
+        // centred so that the positions average to zero: for a multiplicative series the factors
+        // exp(mean) are divided by their arithmetic mean, so that the bars read against the yearly
+        // average, as the chart says (a geometric centre would lift every bar by a few points)
         double centre = 0;
         for (double m : mean) {
-            centre += m / period;
+            centre += (multiplicative ? Math.exp(m) : m) / period;
         }
         List<Index> profile = new ArrayList<>(period);
         for (int j = 0; j < period; j++) {
             Period p = start.plus(from + j);
-            double value = multiplicative ? 100 * (Math.exp(mean[j] - centre) - 1) : mean[j] - centre;
+            double value = multiplicative ? 100 * (Math.exp(mean[j]) / centre - 1) : mean[j] - centre;
             profile.add(new Index(p.seasonalPosition(), p.seasonLabel(), value));
         }
         profile.sort((a, b) -> Integer.compare(a.position(), b.position()));

@@ -1,6 +1,7 @@
 package org.annalist.analysis.season;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.util.Random;
 import org.annalist.analysis.decompose.Stl;
@@ -30,6 +31,31 @@ class SeasonalPatternTest {
         assertThat(r.swing()).isBetween(100.0, 140.0);   // 2 × amplitude 60, smoothed by STL
         assertThat(r.periodCheck().confirmed()).isTrue();
         assertThat(r.changed()).isFalse();
+    }
+
+    /**
+     * A multiplicative profile reads "% against the yearly average": with exact factors 0.6 … 1.5
+     * (arithmetic mean 1, a synthetic series without noise) the profile gives each month's factor
+     * minus 1, and the months average to zero. A geometric centring would lift them all by ~3 points.
+     */
+    @Test
+    void multiplicativeProfileIsPercentAgainstTheArithmeticYearlyAverage() {
+        double[] factors = {0.6, 0.7, 0.9, 1.0, 1.1, 1.3, 1.5, 1.4, 1.1, 0.9, 0.8, 0.7};
+        double[] y = new double[12 * 8];
+        double[] logs = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            y[t] = 1000 * factors[t % 12];
+            logs[t] = Math.log(y[t]);
+        }
+        SeasonalPattern.Result r = SeasonalPattern.assess(logs, Period.month(2015, 1),
+                Stl.withPeriod(12).fit(logs), true, 1000);
+        double sum = 0;
+        for (SeasonalPattern.Index month : r.profile()) {
+            assertThat(month.value()).as(month.label()).isCloseTo(100 * (factors[month.position() - 1] - 1),
+                    within(0.5));
+            sum += month.value();
+        }
+        assertThat(sum).isCloseTo(0, within(1e-9));
     }
 
     @Test
