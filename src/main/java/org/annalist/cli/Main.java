@@ -2,6 +2,7 @@ package org.annalist.cli;
 
 import java.io.PrintWriter;
 import java.util.Locale;
+import org.annalist.brief.SpecProblem;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.DataProblemException;
 import org.annalist.narrative.TemplateEngine;
@@ -54,6 +55,10 @@ public final class Main {
             for (DataProblem problem : problems.problems()) {
                 err.println(problem);
             }
+            return EXIT_BAD_INPUT;
+        }
+        if (e instanceof SpecProblem) {
+            err.println(e.getMessage()); // already SPEC:LINE:COLUMN: message, as data problems are written
             return EXIT_BAD_INPUT;
         }
         if (e instanceof UserInputException || e instanceof TemplateEngine.TemplateProblem) {

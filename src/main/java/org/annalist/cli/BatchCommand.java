@@ -1,0 +1,65 @@
+package org.annalist.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.annalist.brief.Batch;
+import org.annalist.brief.BriefSpec;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code annalist batch SPEC.yaml}: every brief of a spec, on a pool sized to the cores; a line per
+ * brief as it finishes, then a summary. Exit 0 when all were made, {@value #EXIT_SOME_FAILED} when
+ * some failed (the others are written), 2 when the spec itself is wrong.
+ */
+@Command(name = "batch", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Make every brief a spec file describes, in parallel; one bad brief does not stop the others.")
+final class BatchCommand implements Callable<Integer> {
+
+    /** Some briefs failed, the rest were made. */
+    static final int EXIT_SOME_FAILED = 3;
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "SPEC", description = "The brief spec (YAML); see the README for its keys.")
+    Path specFile;
+
+    @Option(names = "--jobs", paramLabel = "N", description = "Briefs made at once. Default: the number of cores.")
+    int jobs = Runtime.getRuntime().availableProcessors();
+
+    @Mixin
+    DebugOption debug;
+
+    @Override
+    public Integer call() {
+        if (jobs < 1) {
+            throw new UserInputException("--jobs: expected 1 or more, got " + jobs);
+        }
+        BriefSpec briefs = BriefSpec.read(specFile);
+        PrintWriter out = spec.commandLine().getOut();
+        List<Batch.Outcome> outcomes = Batch.run(briefs, jobs, o -> {
+            synchronized (out) {
+                out.println((o.done() ? "done    " : "failed  ") + o.label());
+                out.flush();
+            }
+        });
+        long failed = outcomes.stream().filter(o -> !o.done()).count();
+        out.println();
+        out.printf(Locale.ROOT, "%d of %d briefs made%s%n", outcomes.size() - failed, outcomes.size(),
+                failed == 0 ? "" : ", " + failed + " failed:");
+        for (Batch.Outcome o : outcomes) {
+            out.println((o.done() ? "  done    " : "  FAILED  ") + o.label() + "  "
+                    + (o.done() ? o.file().get() : o.failure().orElse("")));
+        }
+        out.flush();
+        return failed == 0 ? Main.EXIT_OK : EXIT_SOME_FAILED;
+    }
+}

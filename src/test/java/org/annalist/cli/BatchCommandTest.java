@@ -1,0 +1,101 @@
+package org.annalist.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code annalist batch}: the spec validated before any work, failures isolated, parallel = serial. */
+class BatchCommandTest {
+
+    @TempDir
+    Path folder;
+
+    private Path spec(String yaml) throws IOException {
+        Files.copy(Path.of("demo-data/quennelmark-guest-nights.csv"), folder.resolve("nights.csv"),
+                java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        Path spec = folder.resolve("briefs.yaml");
+        Files.writeString(spec, yaml);
+        return spec;
+    }
+
+    private static Run batch(Path spec, String... more) {
+        String[] args = new String[2 + more.length];
+        args[0] = "batch";
+        args[1] = spec.toString();
+        System.arraycopy(more, 0, args, 2, more.length);
+        return Run.of(args);
+    }
+
+    @Test
+    void specMistakesAreReportedAtTheirLineAndColumnBeforeAnyWork() throws IOException {
+        String[][] cases = {
+            {"briefs:\n  - data: nights.csv\n    colour: blue\n", ":3:5: unknown key 'colour'"},
+            {"briefs:\n  - data: nights.csv\n    series: {Total: x}\n", ":3:13: series: expected a single value"},
+            {"briefs:\n  - data: missing.csv\n", ":2:11: no such file"},
+            {"briefs:\n  - data: ../nights.csv\n", ":2:11: data '../nights.csv' leaves the spec's folder"},
+            {"briefs:\n  - data: nights.csv\n    paper: a3\n", ":3:12: paper 'a3'; expected a4 or letter"},
+            {"briefs:\n  - data: nights.csv\n    horizon: soon\n", ":3:14: horizon 'soon'"},
+            {"briefs:\n  - data: nights.csv\n    measure: {Total: heavy}\n", ":3:22: measure of 'Total' is 'heavy'"},
+            {"reports: []\n", ":1:1: unknown key 'reports'"},
+            {"briefs:\n  - data: nights.csv\n    title: [unclosed\n", ":3:21: not valid YAML"},
+        };
+        for (String[] c : cases) {
+            Path spec = spec(c[0]);
+            Run run = batch(spec);
+            assertThat(run.exitCode()).as(c[0]).isEqualTo(2);
+            assertThat(run.err()).as(c[0]).startsWith(spec + c[1]).doesNotContain("Exception");
+            try (var files = Files.list(folder)) {
+                assertThat(files.filter(p -> p.toString().endsWith(".pdf"))).as("nothing written").isEmpty();
+            }
+        }
+    }
+
+    @Test
+    void aBrokenFileFailsItsOwnBriefAndTheOthersAreMade() throws IOException {
+        Files.writeString(folder.resolve("broken.csv"), "period,value\n2024-01,12\n2024-02,twelve\n");
+        Path spec = spec("""
+                briefs:
+                  - data: nights.csv
+                    series: [Brevania, Nowhere]
+                    output: "{series}.pdf"
+                    generated_at: 2026-11-20T08:00:00Z
+                  - data: broken.csv
+                    output: broken.pdf
+                """);
+        Run run = batch(spec);
+        assertThat(run.exitCode()).as(run.err()).isEqualTo(BatchCommand.EXIT_SOME_FAILED);
+        assertThat(folder.resolve("brevania.pdf")).exists();
+        assertThat(run.out()).contains("1 of 3 briefs made, 2 failed:");
+        assertThat(run.out()).contains("FAILED  briefs.yaml:2 Nowhere  no series named 'Nowhere'");
+        assertThat(run.out()).contains("FAILED  briefs.yaml:6 broken.csv").contains("broken.csv:3");
+    }
+
+    @Test
+    void parallelOutputEqualsSerialOutputByteForByte() throws IOException {
+        String yaml = """
+                briefs:
+                  - data: nights.csv
+                    series: [Total, Domestic, Brevania]
+                    output: "%s/{series}-{period}.pdf"
+                    generated_at: 2026-11-20T08:00:00Z
+                    horizon: 6
+                """;
+        Path spec = spec(yaml.formatted("serial") + yaml.substring(yaml.indexOf("  - data")).formatted("parallel"));
+        // the same three briefs twice, one set made serially, the other in parallel
+        Run serial = batch(spec, "--jobs", "1");
+        assertThat(serial.exitCode()).as(serial.out() + serial.err()).isZero();
+        Path serialTotal = folder.resolve("serial/total-2026-10.pdf");
+        byte[] first = Files.readAllBytes(serialTotal);
+        Run parallel = batch(spec, "--jobs", "3");
+        assertThat(parallel.exitCode()).isZero();
+        for (String name : new String[] {"total", "domestic", "brevania"}) {
+            assertThat(Files.readAllBytes(folder.resolve("parallel/" + name + "-2026-10.pdf")))
+                    .as(name).isEqualTo(Files.readAllBytes(folder.resolve("serial/" + name + "-2026-10.pdf")));
+        }
+        assertThat(Files.readAllBytes(serialTotal)).isEqualTo(first);
+    }
+}
