@@ -154,8 +154,9 @@ public final class Batch {
                 e.generatedAt().orElseGet(() -> GenerationTime.resolve(Optional.empty(), System.getenv(),
                         java.time.Instant.now())), e.paper(), e.period());
         try {
-            return new Outcome(job.label(), Optional.of(pipeline.make(request, job.read(), job.series()).file()),
-                    Optional.empty());
+            BriefPipeline.Brief brief = pipeline.make(request, job.read(), job.series());
+            SideOutputs.write(brief, job.series(), e.sideOutputs());
+            return new Outcome(job.label(), Optional.of(brief.file()), Optional.empty());
         } catch (DataProblemException ex) {
             return new Outcome(job.label(), Optional.empty(), Optional.of(reasons(ex)));
         } catch (RuntimeException ex) {

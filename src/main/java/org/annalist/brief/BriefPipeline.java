@@ -93,14 +93,15 @@ public final class BriefPipeline {
         }
         BriefView view = BriefViews.of(series, findings, source, masthead);
         String xhtml = new TemplateEngine(request.templates()).render(TemplateEngine.BRIEF_TEMPLATE, view);
+        List<Figure> figures = figures(series, findings, view);
         byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
-                figures(series, findings, view), request.generatedAt(), documentId(read.sha256(), series.name()));
+                figures, request.generatedAt(), documentId(read.sha256(), series.name()));
         try {
             AtomicFiles.write(request.output(), pdf);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + request.output(), e);
         }
-        return new Brief(request.output(), series.name(), findings, List.copyOf(warnings));
+        return new Brief(request.output(), series.name(), findings, List.copyOf(warnings), figures);
     }
 
     /** The charts the template places; those the view does not draw are left out. */
@@ -129,10 +130,10 @@ public final class BriefPipeline {
     }
 
     /**
-     * The brief made: where it is, what it found, and warnings for the user (characters the font
-     * lacks).
+     * The brief made: where it is, what it found, warnings for the user (characters the font
+     * lacks) and the charts it placed.
      */
-    public record Brief(Path file, String series, Findings findings, List<String> warnings) {
+    public record Brief(Path file, String series, Findings findings, List<String> warnings, List<Figure> figures) {
     }
 
     static SourceFacts sourceFacts(ReadResult read) {

@@ -34,6 +34,7 @@ import org.annalist.narrative.Masthead;
  *     output: out/{series}-{period}.pdf         # {series} and {period} are filled in
  *     generated_at: 2026-11-20T08:00:00Z        # pins the stated time, for identical output
  *     horizon: 14                               # periods of outlook; 0 for none
+ *     side_outputs: [findings, components, charts]   # JSON, components CSV, SVG charts beside the PDF
  * </pre>
  *
  * Paths resolve against the spec's folder and may not leave its folder tree unless written as
@@ -48,7 +49,7 @@ public record BriefSpec(Path file, List<Entry> briefs) {
     static final Set<String> LANGUAGES = Set.of("en");
 
     private static final Set<String> KEYS = Set.of("title", "organisation", "data", "series", "measure", "unit",
-            "period", "paper", "language", "templates", "output", "generated_at", "horizon");
+            "period", "paper", "language", "templates", "output", "generated_at", "horizon", "side_outputs");
 
     /**
      * One entry of {@code briefs}.
@@ -62,9 +63,10 @@ public record BriefSpec(Path file, List<Entry> briefs) {
     public record Entry(int line, String title, String organisation, Path data, List<String> series,
                         Map<String, String> measures, Map<String, String> units, Optional<String> period,
                         Masthead.Paper paper, String language, Optional<Path> templates, String output,
-                        Optional<Instant> generatedAt, Optional<Integer> horizon) {
+                        Optional<Instant> generatedAt, Optional<Integer> horizon, Set<SideOutputs.Kind> sideOutputs) {
 
         public Entry {
+            sideOutputs = Set.copyOf(sideOutputs);
             series = List.copyOf(series);
             measures = Map.copyOf(measures);
             units = Map.copyOf(units);
@@ -187,9 +189,22 @@ public record BriefSpec(Path file, List<Entry> briefs) {
             }
             throw problemAt(spec, m.entries().get("horizon"), "horizon '" + t + "'; expected a whole number from 0 to 1461");
         });
+        Set<SideOutputs.Kind> sides = SideOutputs.none();
+        YamlTree.Node sideNode = m.entries().get("side_outputs");
+        if (sideNode != null) {
+            List<YamlTree.Node> items = sideNode instanceof YamlTree.Sequence seq ? seq.items() : List.of(sideNode);
+            for (YamlTree.Node n : items) {
+                String kind = text(spec, n, "side_outputs");
+                try {
+                    sides.add(SideOutputs.Kind.valueOf(kind.toUpperCase(java.util.Locale.ROOT)));
+                } catch (IllegalArgumentException e) {
+                    throw problemAt(spec, n, "side output '" + kind + "'; expected findings, components or charts");
+                }
+            }
+        }
         return new Entry(m.line(), optionalText(spec, m, "title").orElse(""),
                 optionalText(spec, m, "organisation").orElse(""), data, series, measures, units,
-                optionalText(spec, m, "period"), paper, language, templates, output, generatedAt, horizon);
+                optionalText(spec, m, "period"), paper, language, templates, output, generatedAt, horizon, sides);
     }
 
     /**

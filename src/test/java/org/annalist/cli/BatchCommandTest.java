@@ -1,6 +1,7 @@
 package org.annalist.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -72,6 +73,40 @@ class BatchCommandTest {
         assertThat(run.out()).contains("1 of 3 briefs made, 2 failed:");
         assertThat(run.out()).contains("FAILED  briefs.yaml:2 Nowhere  no series named 'Nowhere'");
         assertThat(run.out()).contains("FAILED  briefs.yaml:6 broken.csv").contains("broken.csv:3");
+    }
+
+    @Test
+    void sideOutputsAreWrittenBesideTheBrief() throws IOException {
+        Path spec = spec("""
+                briefs:
+                  - data: nights.csv
+                    series: Brevania
+                    output: brevania.pdf
+                    horizon: 0
+                    side_outputs: [findings, components, charts]
+                """);
+        Run run = batch(spec);
+        assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
+        var json = new com.fasterxml.jackson.databind.ObjectMapper().readTree(folder.resolve("brevania.findings.json").toFile());
+        assertThat(json.get("schema").asText()).isEqualTo("annalist.findings/1");
+        java.util.List<String> rows = Files.readAllLines(folder.resolve("brevania.components.csv"));
+        assertThat(rows.get(0)).isEqualTo("period,observed,trend_cycle,seasonal,irregular,seasonally_adjusted");
+        assertThat(rows).hasSize(1 + json.get("series").get("observations").asInt());
+        // the components multiply (or add) back to the observed value, as the findings' form says
+        boolean multiplicative = json.get("transform").asText().equals("log");
+        for (String row : rows.subList(1, rows.size())) {
+            String[] c = row.split(",", -1);
+            if (c[2].isEmpty()) {
+                continue;
+            }
+            double observed = Double.parseDouble(c[1]);
+            double rebuilt = multiplicative
+                    ? Double.parseDouble(c[2]) * Double.parseDouble(c[3]) * Double.parseDouble(c[4])
+                    : Double.parseDouble(c[2]) + Double.parseDouble(c[3]) + Double.parseDouble(c[4]);
+            assertThat(rebuilt).as(c[0]).isCloseTo(observed, within(1e-4 * observed));
+        }
+        assertThat(Files.readString(folder.resolve("brevania-overview.svg"))).contains("<svg").contains("</svg>");
+        assertThat(folder.resolve("brevania-outlook.svg")).doesNotExist(); // horizon 0: no outlook chart
     }
 
     @Test

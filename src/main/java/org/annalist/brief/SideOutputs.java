@@ -1,0 +1,74 @@
+package org.annalist.brief;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.Locale;
+import java.util.Set;
+import org.annalist.chart.Figure;
+import org.annalist.findings.Decomposition;
+import org.annalist.findings.FindingsJson;
+import org.annalist.render.AtomicFiles;
+import org.annalist.render.SvgCharts;
+import org.annalist.series.Series;
+
+/**
+ * Files written beside a brief on request, named after it: {@code NAME.findings.json} (the
+ * findings schema), {@code NAME.components.csv} (period, observed, trend-cycle, seasonal,
+ * irregular, seasonally adjusted; empty cells where not decomposed) and {@code NAME-CHART.svg}.
+ */
+public final class SideOutputs {
+
+    public enum Kind { FINDINGS, COMPONENTS, CHARTS }
+
+    private static final int CHART_HEIGHT = 265;
+
+    private SideOutputs() {
+    }
+
+    static Set<Kind> none() {
+        return EnumSet.noneOf(Kind.class);
+    }
+
+    static void write(BriefPipeline.Brief brief, Series series, Set<Kind> kinds) {
+        String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
+        Path folder = brief.file().toAbsolutePath().getParent();
+        try {
+            if (kinds.contains(Kind.FINDINGS)) {
+                AtomicFiles.write(folder.resolve(stem + ".findings.json"),
+                        FindingsJson.write(brief.findings()).getBytes(StandardCharsets.UTF_8));
+            }
+            if (kinds.contains(Kind.COMPONENTS)) {
+                AtomicFiles.write(folder.resolve(stem + ".components.csv"),
+                        components(series, brief.findings().decomposition()).getBytes(StandardCharsets.UTF_8));
+            }
+            if (kinds.contains(Kind.CHARTS)) {
+                for (Figure figure : brief.figures()) {
+                    AtomicFiles.write(folder.resolve(stem + "-" + figure.id() + ".svg"), SvgCharts.svg(figure, CHART_HEIGHT));
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the side outputs of " + brief.file(), e);
+        }
+    }
+
+    static String components(Series series, Decomposition d) {
+        StringBuilder csv = new StringBuilder("period,observed,trend_cycle,seasonal,irregular,seasonally_adjusted\n");
+        for (int i = 0; i < series.size(); i++) {
+            csv.append(series.period(i)).append(',').append(cell(series.value(i)))
+                    .append(',').append(cell(d.trendCycle(), i)).append(',').append(cell(d.seasonal(), i))
+                    .append(',').append(cell(d.irregular(), i)).append(',').append(cell(d.adjusted(), i)).append('\n');
+        }
+        return csv.toString();
+    }
+
+    private static String cell(double[] values, int i) {
+        return values == null ? "" : cell(values[i]);
+    }
+
+    private static String cell(double v) {
+        return Double.isNaN(v) ? "" : String.format(Locale.ROOT, "%.6g", v);
+    }
+}
