@@ -86,7 +86,7 @@ public final class Batch {
         Map<Path, String> outputs = new HashMap<>();
         String specName = spec.file().getFileName().toString();
         for (BriefSpec.Entry entry : spec.briefs()) {
-            String where = specName + ":" + entry.line();
+            String where = entry.line() > 0 ? specName + ":" + entry.line() : entry.data().getFileName().toString();
             ReadResult read;
             try {
                 read = reads.computeIfAbsent(entry.data(), p -> new SeriesFileReader(ReadOptions.defaults()).read(p));
@@ -95,8 +95,9 @@ public final class Batch {
                         Optional.of(reasons(e))));
                 continue;
             }
-            List<String> names = entry.series().isEmpty() ? read.series().size() == 1
-                    ? List.of(read.series().get(0).name()) : List.of() : entry.series();
+            List<String> names = !entry.series().isEmpty() ? entry.series()
+                    : read.series().size() == 1 || entry.everySeries()
+                    ? read.series().stream().map(Series::name).toList() : List.of();
             if (names.isEmpty()) {
                 jobs.add(new Job(where, entry, read, null, null, Optional.of(entry.data().getFileName()
                         + " holds several series (" + read.names() + "); name the ones to brief under 'series'")));

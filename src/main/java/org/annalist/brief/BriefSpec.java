@@ -59,11 +59,14 @@ public record BriefSpec(Path file, List<Entry> briefs) {
      * @param measures {@code flow} or {@code level} by series name
      * @param units    unit by series name
      * @param output   the pattern, resolved against the spec's folder
+     * @param everySeries with no {@code series} given, brief every series of the file (the folder
+     *                 default) rather than require a file of one series
      */
     public record Entry(int line, String title, String organisation, Path data, List<String> series,
                         Map<String, String> measures, Map<String, String> units, Optional<String> period,
                         Masthead.Paper paper, String language, Optional<Path> templates, String output,
-                        Optional<Instant> generatedAt, Optional<Integer> horizon, Set<SideOutputs.Kind> sideOutputs) {
+                        Optional<Instant> generatedAt, Optional<Integer> horizon, Set<SideOutputs.Kind> sideOutputs,
+                        boolean everySeries) {
 
         public Entry {
             sideOutputs = Set.copyOf(sideOutputs);
@@ -85,6 +88,32 @@ public record BriefSpec(Path file, List<Entry> briefs) {
 
     public BriefSpec {
         briefs = List.copyOf(briefs);
+    }
+
+    /**
+     * The default spec of a folder: one brief per series of every CSV file in it (by name, not in
+     * subfolders), written to {@code briefs/FILE-SERIES-PERIOD.pdf} inside it.
+     */
+    public static BriefSpec forFolder(Path folder) {
+        Path root = folder.toAbsolutePath().normalize();
+        List<Entry> entries = new ArrayList<>();
+        try (var files = Files.list(root)) {
+            List<Path> csvs = files.filter(p -> p.getFileName().toString().toLowerCase(java.util.Locale.ROOT)
+                    .endsWith(".csv") && Files.isRegularFile(p)).sorted().toList();
+            for (Path csv : csvs) {
+                String stem = csv.getFileName().toString().replaceFirst("(?i)\\.csv$", "");
+                entries.add(new Entry(0, "", "", csv, List.of(), Map.of(), Map.of(), Optional.empty(),
+                        Masthead.Paper.A4, "en", Optional.empty(),
+                        root.resolve("briefs").resolve(stem + "-{series}-{period}.pdf").toString(), Optional.empty(),
+                        Optional.empty(), SideOutputs.none(), true));
+            }
+        } catch (IOException e) {
+            throw new SpecProblem(root, 1, 1, "cannot list the folder: " + e.getMessage());
+        }
+        if (entries.isEmpty()) {
+            throw new SpecProblem(root, 1, 1, "no CSV files in this folder; expected one or more *.csv");
+        }
+        return new BriefSpec(root.resolve("(folder)"), entries);
     }
 
     /** @throws SpecProblem for the first mistake, at its line and column */
@@ -204,7 +233,7 @@ public record BriefSpec(Path file, List<Entry> briefs) {
         }
         return new Entry(m.line(), optionalText(spec, m, "title").orElse(""),
                 optionalText(spec, m, "organisation").orElse(""), data, series, measures, units,
-                optionalText(spec, m, "period"), paper, language, templates, output, generatedAt, horizon, sides);
+                optionalText(spec, m, "period"), paper, language, templates, output, generatedAt, horizon, sides, false);
     }
 
     /**

@@ -15,7 +15,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code annalist batch SPEC.yaml}: every brief of a spec, on a pool sized to the cores; a line per
+ * {@code annalist batch SPEC.yaml|FOLDER}: every brief of a spec (or of a folder's CSV files), on a pool sized to the cores; a line per
  * brief as it finishes, then a summary. Exit 0 when all were made, {@value #EXIT_SOME_FAILED} when
  * some failed (the others are written), 2 when the spec itself is wrong.
  */
@@ -29,7 +29,8 @@ final class BatchCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "SPEC", description = "The brief spec (YAML); see the README for its keys.")
+    @Parameters(index = "0", paramLabel = "SPEC|FOLDER", description = "The brief spec (YAML; see the README for "
+            + "its keys), or a folder: one brief per series of every CSV file in it, into FOLDER/briefs/.")
     Path specFile;
 
     @Option(names = "--jobs", paramLabel = "N", description = "Briefs made at once. Default: the number of cores.")
@@ -43,7 +44,8 @@ final class BatchCommand implements Callable<Integer> {
         if (jobs < 1) {
             throw new UserInputException("--jobs: expected 1 or more, got " + jobs);
         }
-        BriefSpec briefs = BriefSpec.read(specFile);
+        BriefSpec briefs = java.nio.file.Files.isDirectory(specFile) ? BriefSpec.forFolder(specFile)
+                : BriefSpec.read(specFile);
         PrintWriter out = spec.commandLine().getOut();
         List<Batch.Outcome> outcomes = Batch.run(briefs, jobs, o -> {
             synchronized (out) {

@@ -76,6 +76,20 @@ class BatchCommandTest {
     }
 
     @Test
+    void aFolderGetsOneBriefPerSeriesOfEachCsvFile() throws IOException {
+        Files.copy(Path.of("demo-data/quennelmark-arrivals.csv"), folder.resolve("arrivals.csv"));
+        Files.writeString(folder.resolve("zz-broken.csv"), "period,value\n2024-01,12\n2024-02,twelve\n");
+        Run run = Run.of("batch", folder.toString(), "--jobs", "2");
+        assertThat(run.exitCode()).as(run.err()).isEqualTo(BatchCommand.EXIT_SOME_FAILED);
+        assertThat(run.out()).contains("4 of 5 briefs made, 1 failed:", "FAILED  zz-broken.csv");
+        try (var briefs = Files.list(folder.resolve("briefs"))) {
+            assertThat(briefs.map(p -> p.getFileName().toString()).sorted()).containsExactly(
+                    "arrivals-brevania-2026-10.pdf", "arrivals-domestic-2026-10.pdf", "arrivals-long-haul-2026-10.pdf",
+                    "arrivals-total-2026-10.pdf");
+        }
+    }
+
+    @Test
     void sideOutputsAreWrittenBesideTheBrief() throws IOException {
         Path spec = spec("""
                 briefs:
