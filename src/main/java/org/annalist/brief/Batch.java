@@ -35,8 +35,12 @@ public final class Batch {
      * @param label    {@code spec.yaml:3 Total}: where it comes from, for the summary
      * @param failure  why it cannot be made, when the plan already knows
      */
-    record Job(String label, BriefSpec.Entry entry, ReadResult read, Series series, Path output,
+    record Job(String label, BriefSpec.Entry entry, ReadResult read, List<Series> series, Path output,
                Optional<String> failure) {
+
+        Job {
+            series = series == null ? List.of() : List.copyOf(series);
+        }
     }
 
     /** @param file the brief written; empty when it failed, with the reason in {@code failure} */
@@ -102,41 +106,60 @@ public final class Batch {
                 jobs.add(new Job(where, entry, read, null, null, Optional.of(entry.data().getFileName()
                         + " holds several series (" + read.names() + "); name the ones to brief under 'series'")));
             }
+            List<Series> prepared = new ArrayList<>();
             for (String name : names) {
                 String label = where + " " + name;
                 Optional<Series> found = read.find(name);
                 if (found.isEmpty()) {
-                    jobs.add(new Job(label, entry, read, null, null, Optional.of("no series named '" + name + "' in "
-                            + entry.data().getFileName() + "; expected one of " + read.names())));
+                    jobs.add(new Job(entry.combined() ? where : label, entry, read, null, null, Optional.of(
+                            "no series named '" + name + "' in " + entry.data().getFileName() + "; expected one of "
+                            + read.names())));
+                    prepared = null;
+                    if (entry.combined()) {
+                        break;
+                    }
+                    prepared = new ArrayList<>();
                     continue;
                 }
                 Series series = found.get();
                 if (entry.units().containsKey(series.name())) {
                     series = series.renamed(series.name(), entry.units().get(series.name()));
                 }
-                Optional<String> cutFailure = Optional.empty();
-                String latest;
                 if (entry.period().isPresent()) {
-                    latest = entry.period().get();
-                    Optional<org.annalist.series.Period> at = series.periodLabelled(latest);
-                    if (at.isPresent()) {
-                        series = series.upTo(at.get());
-                    } else {
-                        cutFailure = Optional.of("series '" + name + "' has no period " + latest);
+                    Optional<org.annalist.series.Period> at = series.periodLabelled(entry.period().get());
+                    if (at.isEmpty()) {
+                        jobs.add(new Job(label, entry, read, null, null, Optional.of("series '" + name
+                                + "' has no period " + entry.period().get())));
+                        if (entry.combined()) {
+                            prepared = null;
+                            break;
+                        }
+                        continue;
                     }
+                    series = series.upTo(at.get());
+                }
+                if (entry.combined()) {
+                    prepared.add(series);
                 } else {
-                    latest = series.end().toString();
+                    jobs.add(claim(new Job(label, entry, read, List.of(series),
+                            entry.outputFor(series.name(), series.end().toString()), Optional.empty()), outputs));
                 }
-                Path output = entry.outputFor(series.name(), latest);
-                String earlier = outputs.putIfAbsent(output, label);
-                if (earlier != null && cutFailure.isEmpty()) {
-                    cutFailure = Optional.of("writes " + output + ", as " + earlier + " does; put {series} or {period} "
-                            + "in 'output'");
-                }
-                jobs.add(new Job(label, entry, read, series, output, cutFailure));
+            }
+            if (entry.combined() && prepared != null) {
+                String name = entry.title().isEmpty() ? "combined" : entry.title();
+                jobs.add(claim(new Job(where + " " + String.join(" + ", prepared.stream().map(Series::name).toList()),
+                        entry, read, prepared, entry.outputFor(name, prepared.get(0).end().toString()), Optional.empty()),
+                        outputs));
             }
         }
         return jobs;
+    }
+
+    /** The job, or the job failed when an earlier one writes the same file. */
+    private static Job claim(Job job, Map<Path, String> outputs) {
+        String earlier = outputs.putIfAbsent(job.output(), job.label());
+        return earlier == null ? job : new Job(job.label(), job.entry(), job.read(), job.series(), job.output(),
+                Optional.of("writes " + job.output() + ", as " + earlier + " does; put {series} or {period} in 'output'"));
     }
 
     private static Outcome make(Job job) {
@@ -144,19 +167,22 @@ public final class Batch {
             return new Outcome(job.label(), Optional.empty(), job.failure());
         }
         BriefSpec.Entry e = job.entry();
-        Optional<LatestIndicators.Measure> measure = Optional.ofNullable(e.measures().get(job.series().name()))
-                .map(m -> m.equals("flow") ? LatestIndicators.Measure.FLOW : LatestIndicators.Measure.LEVEL);
-        BriefPipeline pipeline = new BriefPipeline(new Analyst(Optional.empty(), measure, List.of(), e.horizon()),
-                s -> s);
-        String title = e.title().isEmpty() ? "" : e.series().size() > 1 ? e.title() + ": " + job.series().name()
-                : e.title();
-        BriefRequest request = new BriefRequest(e.data(), ReadOptions.defaults(), Optional.of(job.series().name()),
+        Series first = job.series().get(0);
+        BriefPipeline pipeline = new BriefPipeline(analyst(e, first), s -> s);
+        String title = e.title().isEmpty() || e.combined() ? e.title() : e.series().size() > 1
+                ? e.title() + ": " + first.name() : e.title();
+        BriefRequest request = new BriefRequest(e.data(), ReadOptions.defaults(), Optional.of(first.name()),
                 job.output(), title, e.organisation(), e.templates(),
                 e.generatedAt().orElseGet(() -> GenerationTime.resolve(Optional.empty(), System.getenv(),
                         java.time.Instant.now())), e.paper(), e.period());
         try {
-            BriefPipeline.Brief brief = pipeline.make(request, job.read(), job.series());
-            SideOutputs.write(brief, job.series(), e.sideOutputs());
+            if (e.combined()) {
+                BriefPipeline.MultiBrief multi = pipeline.makeMulti(request, job.read(), job.series(),
+                        s -> analyst(e, s).analyse(s), e.total(), e.sortBy());
+                return new Outcome(job.label(), Optional.of(multi.file()), Optional.empty());
+            }
+            BriefPipeline.Brief brief = pipeline.make(request, job.read(), first);
+            SideOutputs.write(brief, first, e.sideOutputs());
             return new Outcome(job.label(), Optional.of(brief.file()), Optional.empty());
         } catch (DataProblemException ex) {
             return new Outcome(job.label(), Optional.empty(), Optional.of(reasons(ex)));
@@ -165,6 +191,13 @@ public final class Batch {
             return new Outcome(job.label(), Optional.empty(), Optional.of(ex.getMessage() == null
                     ? ex.getClass().getSimpleName() : ex.getMessage()));
         }
+    }
+
+    /** The analysis with the spec's choices for this series: its measure kind and the outlook's horizon. */
+    private static Analyst analyst(BriefSpec.Entry e, Series series) {
+        Optional<LatestIndicators.Measure> measure = Optional.ofNullable(e.measures().get(series.name()))
+                .map(m -> m.equals("flow") ? LatestIndicators.Measure.FLOW : LatestIndicators.Measure.LEVEL);
+        return new Analyst(Optional.empty(), measure, List.of(), e.horizon());
     }
 
     private static String reasons(DataProblemException e) {

@@ -15,10 +15,12 @@ import org.annalist.chart.IrregularChart;
 import org.annalist.chart.OutlookChart;
 import org.annalist.chart.OverviewChart;
 import org.annalist.chart.SeasonalProfileChart;
+import org.annalist.chart.SmallMultiplesChart;
 import org.annalist.chart.YearOverlayChart;
 import org.annalist.findings.Analyst;
 import org.annalist.findings.DerivedSeries;
 import org.annalist.findings.Findings;
+import org.annalist.findings.PartsCheck;
 import org.annalist.findings.SourceFacts;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.DataProblemException;
@@ -27,6 +29,8 @@ import org.annalist.ingest.SeriesFileReader;
 import org.annalist.narrative.BriefView;
 import org.annalist.narrative.BriefViews;
 import org.annalist.narrative.Masthead;
+import org.annalist.narrative.MultiBriefView;
+import org.annalist.narrative.MultiBriefViews;
 import org.annalist.narrative.TemplateEngine;
 import org.annalist.render.AtomicFiles;
 import org.annalist.render.Fonts;
@@ -102,6 +106,41 @@ public final class BriefPipeline {
             throw new UncheckedIOException("cannot write " + request.output(), e);
         }
         return new Brief(request.output(), series.name(), findings, List.copyOf(warnings), figures);
+    }
+
+    /**
+     * Makes the multi-series brief of {@code series} (all read from {@code read}), each analysed by
+     * {@code analyse}; with {@code total} named, the other series are checked against it.
+     */
+    public MultiBrief makeMulti(BriefRequest request, ReadResult read, List<Series> series,
+                                java.util.function.Function<Series, Findings> analyse, Optional<String> total,
+                                MultiBriefViews.SortBy sortBy) {
+        Fonts.registerWithAwt();
+        Masthead masthead = new Masthead(request.title(), request.organisation(), Locale.ENGLISH, request.paper(),
+                request.generatedAt(), "Annalist " + Version.current());
+        List<Findings> findings = series.stream().map(analyse).toList();
+        Optional<PartsCheck> check = total.flatMap(name -> series.stream().filter(s -> s.name().equals(name)).findFirst())
+                .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
+        MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(read), masthead, check, sortBy);
+        String xhtml = new TemplateEngine(request.templates()).render(TemplateEngine.MULTI_TEMPLATE, view);
+        List<Figure> figures = new ArrayList<>();
+        figures.add(SmallMultiplesChart.of(series, findings));
+        for (int i = 0; i < series.size(); i++) {
+            figures.add(new Figure("overview-" + i, OverviewChart.of(series.get(i), findings.get(i)).chart()));
+        }
+        byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
+                figures, request.generatedAt(), documentId(read.sha256(), String.join("|",
+                        series.stream().map(Series::name).toList())));
+        try {
+            AtomicFiles.write(request.output(), pdf);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + request.output(), e);
+        }
+        return new MultiBrief(request.output(), findings, check);
+    }
+
+    /** The multi-series brief made: where it is, each series' findings, and the parts-and-total check. */
+    public record MultiBrief(Path file, List<Findings> findings, Optional<PartsCheck> check) {
     }
 
     /** The charts the template places; those the view does not draw are left out. */

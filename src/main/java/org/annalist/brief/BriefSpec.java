@@ -14,6 +14,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.annalist.narrative.Masthead;
+import org.annalist.narrative.MultiBriefViews;
 
 /**
  * A brief spec: the briefs an analyst makes every month, described once in YAML and validated
@@ -35,6 +36,9 @@ import org.annalist.narrative.Masthead;
  *     generated_at: 2026-11-20T08:00:00Z        # pins the stated time, for identical output
  *     horizon: 14                               # periods of outlook; 0 for none
  *     side_outputs: [findings, components, charts]   # JSON, components CSV, SVG charts beside the PDF
+ *     combined: true                            # one multi-series brief of all the series
+ *     total: Total                              # the series the others add up to (checked)
+ *     sort_by: change                           # order, name, latest, change or year_to_date
  * </pre>
  *
  * Paths resolve against the spec's folder and may not leave its folder tree unless written as
@@ -49,7 +53,8 @@ public record BriefSpec(Path file, List<Entry> briefs) {
     static final Set<String> LANGUAGES = Set.of("en");
 
     private static final Set<String> KEYS = Set.of("title", "organisation", "data", "series", "measure", "unit",
-            "period", "paper", "language", "templates", "output", "generated_at", "horizon", "side_outputs");
+            "period", "paper", "language", "templates", "output", "generated_at", "horizon", "side_outputs", "combined",
+            "total", "sort_by");
 
     /**
      * One entry of {@code briefs}.
@@ -66,7 +71,8 @@ public record BriefSpec(Path file, List<Entry> briefs) {
                         Map<String, String> measures, Map<String, String> units, Optional<String> period,
                         Masthead.Paper paper, String language, Optional<Path> templates, String output,
                         Optional<Instant> generatedAt, Optional<Integer> horizon, Set<SideOutputs.Kind> sideOutputs,
-                        boolean everySeries) {
+                        boolean everySeries, boolean combined, Optional<String> total,
+                        MultiBriefViews.SortBy sortBy) {
 
         public Entry {
             sideOutputs = Set.copyOf(sideOutputs);
@@ -105,7 +111,8 @@ public record BriefSpec(Path file, List<Entry> briefs) {
                 entries.add(new Entry(0, "", "", csv, List.of(), Map.of(), Map.of(), Optional.empty(),
                         Masthead.Paper.A4, "en", Optional.empty(),
                         root.resolve("briefs").resolve(stem + "-{series}-{period}.pdf").toString(), Optional.empty(),
-                        Optional.empty(), SideOutputs.none(), true));
+                        Optional.empty(), SideOutputs.none(), true, false, Optional.empty(),
+                        MultiBriefViews.SortBy.ORDER));
             }
         } catch (IOException e) {
             throw new SpecProblem(root, 1, 1, "cannot list the folder: " + e.getMessage());
@@ -231,9 +238,31 @@ public record BriefSpec(Path file, List<Entry> briefs) {
                 }
             }
         }
+        String combinedText = optionalText(spec, m, "combined").orElse("false");
+        if (!combinedText.equals("true") && !combinedText.equals("false")) {
+            throw problemAt(spec, m.entries().get("combined"), "combined '" + combinedText + "'; expected true or false");
+        }
+        boolean combined = combinedText.equals("true");
+        if (combined && series.size() < 2) {
+            throw problemAt(spec, m.entries().get("combined"), "a combined brief needs two or more names under 'series'");
+        }
+        Optional<String> total = optionalText(spec, m, "total");
+        if (total.isPresent() && !series.contains(total.get())) {
+            throw problemAt(spec, m.entries().get("total"), "total '" + total.get() + "' is not one of the series "
+                    + series);
+        }
+        String sortText = optionalText(spec, m, "sort_by").orElse("order");
+        MultiBriefViews.SortBy sortBy;
+        try {
+            sortBy = MultiBriefViews.SortBy.valueOf(sortText.toUpperCase(java.util.Locale.ROOT));
+        } catch (IllegalArgumentException e) {
+            throw problemAt(spec, m.entries().get("sort_by"), "sort_by '" + sortText
+                    + "'; expected order, name, latest, change or year_to_date");
+        }
         return new Entry(m.line(), optionalText(spec, m, "title").orElse(""),
                 optionalText(spec, m, "organisation").orElse(""), data, series, measures, units,
-                optionalText(spec, m, "period"), paper, language, templates, output, generatedAt, horizon, sides, false);
+                optionalText(spec, m, "period"), paper, language, templates, output, generatedAt, horizon, sides, false,
+                combined, total, sortBy);
     }
 
     /**

@@ -28,6 +28,7 @@ import java.util.Optional;
 public final class TemplateEngine {
 
     public static final String BRIEF_TEMPLATE = "brief.ftlx";
+    public static final String MULTI_TEMPLATE = "multi.ftlx";
 
     private final Configuration configuration;
 
@@ -47,10 +48,11 @@ public final class TemplateEngine {
         configuration.setObjectWrapper(new DefaultObjectWrapperBuilder(Configuration.VERSION_2_3_35).build());
     }
 
-    public String render(String templateName, BriefView brief) {
+    /** @param view the {@link BriefView} or {@link MultiBriefView} the template reads as {@code brief} */
+    public String render(String templateName, Object view) {
         try {
             StringWriter out = new StringWriter();
-            configuration.getTemplate(templateName).process(Map.of("brief", brief), out);
+            configuration.getTemplate(templateName).process(Map.of("brief", view), out);
             return out.toString();
         } catch (IOException e) {
             throw new UncheckedIOException("template " + templateName + " cannot be read", e);

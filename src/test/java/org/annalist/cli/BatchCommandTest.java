@@ -42,6 +42,10 @@ class BatchCommandTest {
             {"briefs:\n  - data: nights.csv\n    horizon: soon\n", ":3:14: horizon 'soon'"},
             {"briefs:\n  - data: nights.csv\n    measure: {Total: heavy}\n", ":3:22: measure of 'Total' is 'heavy'"},
             {"reports: []\n", ":1:1: unknown key 'reports'"},
+            {"briefs:\n  - data: nights.csv\n    series: Total\n    combined: true\n", ":4:15: a combined brief needs two"},
+            {"briefs:\n  - data: nights.csv\n    series: [Domestic, Brevania]\n    total: Total\n",
+                ":4:12: total 'Total' is not one of the series"},
+            {"briefs:\n  - data: nights.csv\n    sort_by: size\n", ":3:14: sort_by 'size'"},
             {"briefs:\n  - data: nights.csv\n    title: [unclosed\n", ":3:21: not valid YAML"},
         };
         for (String[] c : cases) {
@@ -73,6 +77,51 @@ class BatchCommandTest {
         assertThat(run.out()).contains("1 of 3 briefs made, 2 failed:");
         assertThat(run.out()).contains("FAILED  briefs.yaml:2 Nowhere  no series named 'Nowhere'");
         assertThat(run.out()).contains("FAILED  briefs.yaml:6 broken.csv").contains("broken.csv:3");
+    }
+
+    /**
+     * A combined brief compares the series and checks the parts against the declared total: here
+     * June 2020's total is 5 % above its parts (synthetic data), and the brief names that month.
+     */
+    @Test
+    void aCombinedBriefComparesTheSeriesAndNamesThePeriodsWhereThePartsMissTheTotal() throws Exception {
+        StringBuilder csv = new StringBuilder("period,Total,North,South\n");
+        java.util.Random random = new java.util.Random(4);
+        for (int t = 0; t < 60; t++) {
+            int year = 2018 + t / 12;
+            int month = t % 12 + 1;
+            long north = Math.round(1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) + 30 * random.nextGaussian());
+            long south = Math.round(400 * (1 + 0.5 * Math.sin(2 * Math.PI * (t - 2) / 12)) + 20 * random.nextGaussian());
+            long total = year == 2020 && month == 6 ? Math.round((north + south) * 1.05) : north + south;
+            csv.append(String.format(java.util.Locale.ROOT, "%d-%02d,%d,%d,%d%n", year, month, total, north, south));
+        }
+        Files.writeString(folder.resolve("regions.csv"), csv);
+        Path spec = spec("""
+                briefs:
+                  - title: Nights by region
+                    data: regions.csv
+                    series: [Total, North, South]
+                    combined: true
+                    total: Total
+                    sort_by: name
+                    output: regions-{period}.pdf
+                    generated_at: 2026-11-20T08:00:00Z
+                    horizon: 0
+                """);
+        Run run = batch(spec);
+        assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
+        String text = PdfFacts.of(folder.resolve("regions-2022-12.pdf")).text().replace('\u00A0', ' ')
+                .replaceAll("\\s+", " ");
+        assertThat(text).contains("The series side by side", "The parts do not add up.",
+                "North, South miss Total by more than 0.5 % in June 2020");
+        Path pdf = folder.resolve("regions-2022-12.pdf");
+        assertThat(org.annalist.render.PdfConformance.violations(pdf, "2u")).isEmpty();
+        assertThat(org.annalist.render.PdfConformance.violations(pdf, "ua1")).isEmpty();
+        // sorted by name: after the table's heading the rows name North, South, Total first in that order
+        assertThat(text).contains("Rows in order of name");
+        String table = text.substring(text.indexOf("The series side by side"));
+        assertThat(table.indexOf("North")).isLessThan(table.indexOf("South"));
+        assertThat(table.indexOf("South")).isLessThan(table.indexOf("Total"));
     }
 
     @Test

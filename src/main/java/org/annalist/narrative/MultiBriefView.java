@@ -1,0 +1,36 @@
+package org.annalist.narrative;
+
+import java.util.List;
+
+/**
+ * The multi-series brief: a comparison of several series (a total and its markets, say), small
+ * multiples on a shared time axis, whether the parts add up to the total, and a compact section
+ * per series built from that series' own {@link BriefView}.
+ */
+public record MultiBriefView(BriefView.Document document, Header header, List<ComparisonRow> rows, String sortedBy,
+                             Consistency consistency, List<BriefView> sections, List<String> notes,
+                             BriefView.Provenance provenance) {
+
+    public MultiBriefView {
+        rows = List.copyOf(rows);
+        sections = List.copyOf(sections);
+        notes = List.copyOf(notes);
+    }
+
+    public record Header(String title, String organisation, String periodCovered, String latestPeriod,
+                         String generatedAt, String seriesList) {
+    }
+
+    /** One row of the comparison table, formatted; a dash where a figure cannot be given. */
+    public record ComparisonRow(String series, String unit, String latest, String yearOnYear, String yearToDate,
+                                String trend, String peak, String breaks, String outliers, String nextYear) {
+    }
+
+    /**
+     * @param checked  a total was declared, so the parts were checked against it
+     * @param periods  the periods where they miss it, in words (the first six, then a count)
+     */
+    public record Consistency(boolean checked, boolean consistent, String total, String parts, String periods,
+                              String largestGap, String tolerance) {
+    }
+}

@@ -1,0 +1,94 @@
+package org.annalist.narrative;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import org.annalist.findings.Findings;
+import org.annalist.findings.IndicatorsFinding;
+import org.annalist.findings.PartsCheck;
+import org.annalist.findings.SourceFacts;
+import org.annalist.series.Series;
+
+/** Builds the {@link MultiBriefView} from each series' findings. */
+public final class MultiBriefViews {
+
+    /** How the comparison table can be ordered: as the spec lists the series, or by a figure. */
+    public enum SortBy { ORDER, NAME, LATEST, CHANGE, YEAR_TO_DATE }
+
+    private MultiBriefViews() {
+    }
+
+    public static MultiBriefView of(List<Series> series, List<Findings> findings, SourceFacts source,
+                                    Masthead masthead, Optional<PartsCheck> check, SortBy sortBy) {
+        List<BriefView> sections = new ArrayList<>();
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < series.size(); i++) {
+            sections.add(BriefViews.of(series.get(i), findings.get(i), source, masthead));
+            order.add(i);
+        }
+        Comparator<Integer> byFigure = switch (sortBy) {
+            case ORDER -> Comparator.comparingInt(i -> i);
+            case NAME -> Comparator.comparing(i -> series.get(i).name().toLowerCase(java.util.Locale.ROOT));
+            case LATEST -> Comparator.comparingDouble(i -> -orLowest(latest(findings.get(i))));
+            case CHANGE -> Comparator.comparingDouble(i -> -orLowest(yearOnYear(findings.get(i))));
+            case YEAR_TO_DATE -> Comparator.comparingDouble(i -> -orLowest(yearToDate(findings.get(i))));
+        };
+        order.sort(byFigure);
+        List<MultiBriefView.ComparisonRow> rows = new ArrayList<>();
+        for (int i : order) {
+            BriefView v = sections.get(i);
+            Formats f = Formats.forValues(series.get(i).values(), masthead.language());
+            Findings fi = findings.get(i);
+            String nextYear = "\u2013";
+            if (fi.outlook() != null && fi.outlook().nextYearTotal() != null) {
+                nextYear = f.significant(fi.outlook().nextYearTotal().mean());
+            } else if (fi.outlook() != null && fi.outlook().nextYearAverage() != null) {
+                nextYear = f.significant(fi.outlook().nextYearAverage().mean()) + " (average)";
+            }
+            rows.add(new MultiBriefView.ComparisonRow(series.get(i).name(), series.get(i).unit(),
+                    v.lead().value().isEmpty() ? "\u2013" : v.lead().value(),
+                    f.signedPercent(yearOnYear(fi)), f.signedPercent(yearToDate(fi)),
+                    v.trend().assessed() ? v.trend().direction().equals("none") ? "no clear trend" : v.trend().direction()
+                            : "not assessed",
+                    v.season().verdict().equals("present") ? v.season().peak() : "none claimed",
+                    String.valueOf(v.breaks().size()), String.valueOf(v.outliers().size()), nextYear));
+        }
+        Formats first = Formats.forValues(series.get(0).values(), masthead.language());
+        MultiBriefView.Consistency consistency = check.map(c -> new MultiBriefView.Consistency(true, c.consistent(),
+                c.total(), String.join(", ", c.parts()), BriefViews.listPeriods(c.periods(), first),
+                first.percent(c.largestGapPct()), first.percent(PartsCheck.TOLERANCE_PCT)))
+                .orElse(new MultiBriefView.Consistency(false, true, "", "", "", "", first.percent(PartsCheck.TOLERANCE_PCT)));
+        Series lead = series.get(0);
+        MultiBriefView.Header header = new MultiBriefView.Header(
+                masthead.title().isEmpty() ? String.join(", ", series.stream().map(Series::name).toList()) : masthead.title(),
+                masthead.organisation(), first.period(lead.start()) + " to " + first.period(lead.end()),
+                first.period(lead.end()), first.timestamp(masthead.generatedAt()),
+                String.join(", ", series.stream().map(Series::name).toList()));
+        BriefView.Document document = new BriefView.Document(masthead.language().toLanguageTag(),
+                masthead.paper().css(), masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation(),
+                "time series, " + header.seriesList());
+        List<String> notes = new ArrayList<>(source.notes());
+        BriefView.Provenance provenance = sections.get(0).provenance();
+        return new MultiBriefView(document, header, rows, sortBy.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '),
+                consistency, sections, notes, provenance);
+    }
+
+    private static double orLowest(Double v) {
+        return v == null || v.isNaN() ? Double.NEGATIVE_INFINITY : v;
+    }
+
+    private static Double latest(Findings f) {
+        return f.indicators() == null ? null : f.indicators().value();
+    }
+
+    private static Double yearOnYear(Findings f) {
+        IndicatorsFinding i = f.indicators();
+        return i == null || i.samePeriodLastYear() == null ? null : i.samePeriodLastYear().changePct();
+    }
+
+    private static Double yearToDate(Findings f) {
+        IndicatorsFinding i = f.indicators();
+        return i == null || i.yearToDate() == null ? null : i.yearToDate().changePct();
+    }
+}
