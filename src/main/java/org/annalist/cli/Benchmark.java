@@ -24,7 +24,8 @@ import org.annalist.series.Series;
 
 /**
  * Prints the speed figures of the analysis core on seeded synthetic data (STL, the whole Analyst
- * without its outlook, automatic ETS, the outlook, Bai–Perron and PELT):
+ * without its outlook, automatic ETS, the outlook, Bai–Perron and PELT), the demo brief, and the
+ * batch figures (10,000 series analysed, 200 briefs in one batch):
  * {@code java -cp target/annalist.jar org.annalist.cli.Benchmark}. Warm figures: each measurement
  * runs after a warm-up of the same work, single-threaded.
  */
@@ -129,6 +130,59 @@ public final class Benchmark {
                 bpLevelMs, bpSlopeMs);
         System.out.printf(Locale.ROOT, "PELT, n = 3,650 daily, minimum regime 7:                 %.1f ms (warm)%n", peltMs);
         briefs();
+        batches(random);
+    }
+
+    /**
+     * The monthly routine at scale: 200 single-series briefs in one batch on a pool sized to the
+     * cores (wall time and the heap's peak), and the analysis without outlook or PDF of 10,000
+     * monthly series of 20 years on all cores.
+     */
+    private static void batches(Random random) throws Exception {
+        int cores = Runtime.getRuntime().availableProcessors();
+        Series[] many = new Series[10_000];
+        for (int i = 0; i < many.length; i++) {
+            many[i] = Series.builder("s" + i, Frequency.MONTHLY).append(Period.month(2005, 1), synthetic(random, 240))
+                    .snapshot();
+        }
+        Analyst bulk = new Analyst().withoutOutlook();
+        long start = System.nanoTime();
+        java.util.Arrays.stream(many).parallel().forEach(bulk::analyse);
+        double analysisSeconds = (System.nanoTime() - start) / 1e9;
+        System.out.printf(Locale.ROOT, "Analysis without outlook or PDF, 10,000 monthly series of 20 years, %d cores: %.1f s%n",
+                cores, analysisSeconds);
+
+        Path data = Path.of("demo-data/quennelmark-guest-nights.csv").toAbsolutePath();
+        if (!Files.exists(data)) {
+            System.out.println("(batch timing skipped: run from the repository's top folder, where demo-data/ is)");
+            return;
+        }
+        Path folder = Files.createTempDirectory("annalist-batch");
+        Files.copy(data, folder.resolve("nights.csv"));
+        StringBuilder yaml = new StringBuilder("briefs:\n");
+        for (int i = 0; i < 50; i++) {
+            yaml.append("  - data: nights.csv\n    series: [Total, Domestic, Brevania, Long-haul]\n")
+                    .append("    output: out/").append(i).append("-{series}.pdf\n")
+                    .append("    generated_at: 2026-11-20T08:00:00Z\n");
+        }
+        Path spec = folder.resolve("briefs.yaml");
+        Files.writeString(spec, yaml);
+        for (java.lang.management.MemoryPoolMXBean pool : java.lang.management.ManagementFactory.getMemoryPoolMXBeans()) {
+            pool.resetPeakUsage();
+        }
+        start = System.nanoTime();
+        List<org.annalist.brief.Batch.Outcome> outcomes = org.annalist.brief.Batch.run(
+                org.annalist.brief.BriefSpec.read(spec), cores, o -> { });
+        double batchSeconds = (System.nanoTime() - start) / 1e9;
+        long peak = 0;
+        for (java.lang.management.MemoryPoolMXBean pool : java.lang.management.ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == java.lang.management.MemoryType.HEAP) {
+                peak += pool.getPeakUsage().getUsed();
+            }
+        }
+        System.out.printf(Locale.ROOT, "Batch of %d single-series briefs (%d made), %d threads, max heap %d MB: %.1f s wall, "
+                + "heap peak %d MB%n", outcomes.size(), outcomes.stream().filter(org.annalist.brief.Batch.Outcome::done).count(),
+                cores, Runtime.getRuntime().maxMemory() >> 20, batchSeconds, peak >> 20);
     }
 
     /**
