@@ -174,7 +174,7 @@ public final class Batch {
         BriefRequest request = new BriefRequest(e.data(), ReadOptions.defaults(), Optional.of(first.name()),
                 job.output(), title, e.organisation(), e.templates(),
                 e.generatedAt().orElseGet(() -> GenerationTime.resolve(Optional.empty(), System.getenv(),
-                        java.time.Instant.now())), e.paper(), e.period());
+                        java.time.Instant.now())), e.paper(), e.period(), e.logo());
         try {
             if (e.combined()) {
                 BriefPipeline.MultiBrief multi = pipeline.makeMulti(request, job.read(), job.series(),

@@ -81,8 +81,7 @@ public final class BriefPipeline {
 
     private Brief make(BriefRequest request, ReadResult read, Series series, Findings findings) {
         Fonts.registerWithAwt();
-        Masthead masthead = new Masthead(request.title(), request.organisation(), Locale.ENGLISH, request.paper(),
-                request.generatedAt(), "Annalist " + Version.current());
+        Masthead masthead = masthead(request);
         SourceFacts source = sourceFacts(read);
         List<String> warnings = new ArrayList<>();
         String missing = Fonts.missingGlyphs(String.join(" ", request.title(), request.organisation(), series.name(),
@@ -116,8 +115,7 @@ public final class BriefPipeline {
                                 java.util.function.Function<Series, Findings> analyse, Optional<String> total,
                                 MultiBriefViews.SortBy sortBy) {
         Fonts.registerWithAwt();
-        Masthead masthead = new Masthead(request.title(), request.organisation(), Locale.ENGLISH, request.paper(),
-                request.generatedAt(), "Annalist " + Version.current());
+        Masthead masthead = masthead(request);
         List<Findings> findings = series.stream().map(analyse).toList();
         Optional<PartsCheck> check = total.flatMap(name -> series.stream().filter(s -> s.name().equals(name)).findFirst())
                 .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
@@ -137,6 +135,12 @@ public final class BriefPipeline {
             throw new UncheckedIOException("cannot write " + request.output(), e);
         }
         return new MultiBrief(request.output(), findings, check);
+    }
+
+    private static Masthead masthead(BriefRequest request) {
+        return new Masthead(request.title(), request.organisation(), Locale.ENGLISH, request.paper(),
+                request.generatedAt(), "Annalist " + Version.current(),
+                request.logo().map(p -> p.toAbsolutePath().toUri().toString()));
     }
 
     /** The multi-series brief made: where it is, each series' findings, and the parts-and-total check. */

@@ -15,10 +15,19 @@ import org.annalist.narrative.Masthead;
  * @param templates   a folder of templates that override the bundled ones
  * @param latestPeriod the period the brief reports as latest (its label, e.g. {@code 2025-04}); empty for the last in the data
  * @param generatedAt the time the brief states as made (pinned for reproducible output; see {@link GenerationTime})
+ * @param logo        an image printed in the masthead
  */
 public record BriefRequest(Path input, ReadOptions readOptions, Optional<String> series, Path output, String title,
                            String organisation, Optional<Path> templates, Instant generatedAt, Masthead.Paper paper,
-                           Optional<String> latestPeriod) {
+                           Optional<String> latestPeriod, Optional<Path> logo) {
+
+    /** A brief without a logo. */
+    public BriefRequest(Path input, ReadOptions readOptions, Optional<String> series, Path output, String title,
+                        String organisation, Optional<Path> templates, Instant generatedAt, Masthead.Paper paper,
+                        Optional<String> latestPeriod) {
+        this(input, readOptions, series, output, title, organisation, templates, generatedAt, paper, latestPeriod,
+                Optional.empty());
+    }
 
     public BriefRequest {
         Objects.requireNonNull(input, "input");
@@ -31,5 +40,6 @@ public record BriefRequest(Path input, ReadOptions readOptions, Optional<String>
         Objects.requireNonNull(generatedAt, "generatedAt");
         Objects.requireNonNull(paper, "paper");
         Objects.requireNonNull(latestPeriod, "latestPeriod");
+        Objects.requireNonNull(logo, "logo");
     }
 }

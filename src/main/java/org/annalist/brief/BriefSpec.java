@@ -24,6 +24,7 @@ import org.annalist.narrative.MultiBriefViews;
  * briefs:
  *   - title: Guest nights in Quennelmark        # default: the series name
  *     organisation: Quennelmark Visitor Board   # default: none
+ *     logo: logo.png                            # a PNG, JPEG or GIF printed in the masthead
  *     data: data/guest-nights.csv               # required
  *     series: [Total, Domestic]                 # default: the file's only series
  *     measure: {Total: flow}                    # flow or level per series; default: from unit and name
@@ -54,7 +55,7 @@ public record BriefSpec(Path file, List<Entry> briefs) {
 
     private static final Set<String> KEYS = Set.of("title", "organisation", "data", "series", "measure", "unit",
             "period", "paper", "language", "templates", "output", "generated_at", "horizon", "side_outputs", "combined",
-            "total", "sort_by");
+            "total", "sort_by", "logo");
 
     /**
      * One entry of {@code briefs}.
@@ -72,7 +73,7 @@ public record BriefSpec(Path file, List<Entry> briefs) {
                         Masthead.Paper paper, String language, Optional<Path> templates, String output,
                         Optional<Instant> generatedAt, Optional<Integer> horizon, Set<SideOutputs.Kind> sideOutputs,
                         boolean everySeries, boolean combined, Optional<String> total,
-                        MultiBriefViews.SortBy sortBy) {
+                        MultiBriefViews.SortBy sortBy, Optional<Path> logo) {
 
         public Entry {
             sideOutputs = Set.copyOf(sideOutputs);
@@ -112,7 +113,7 @@ public record BriefSpec(Path file, List<Entry> briefs) {
                         Masthead.Paper.A4, "en", Optional.empty(),
                         root.resolve("briefs").resolve(stem + "-{series}-{period}.pdf").toString(), Optional.empty(),
                         Optional.empty(), SideOutputs.none(), true, false, Optional.empty(),
-                        MultiBriefViews.SortBy.ORDER));
+                        MultiBriefViews.SortBy.ORDER, Optional.empty()));
             }
         } catch (IOException e) {
             throw new SpecProblem(root, 1, 1, "cannot list the folder: " + e.getMessage());
@@ -262,7 +263,19 @@ public record BriefSpec(Path file, List<Entry> briefs) {
         return new Entry(m.line(), optionalText(spec, m, "title").orElse(""),
                 optionalText(spec, m, "organisation").orElse(""), data, series, measures, units,
                 optionalText(spec, m, "period"), paper, language, templates, output, generatedAt, horizon, sides, false,
-                combined, total, sortBy);
+                combined, total, sortBy, logo(spec, folder, m.entries().get("logo")));
+    }
+
+    /** The logo, checked to be an image the PDF can embed. */
+    private static Optional<Path> logo(Path spec, Path folder, YamlTree.Node node) {
+        if (node == null) {
+            return Optional.empty();
+        }
+        Path logo = path(spec, folder, node, "logo");
+        Logo.problem(logo).ifPresent(problem -> {
+            throw problemAt(spec, node, problem);
+        });
+        return Optional.of(logo);
     }
 
     /**

@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.BriefRequest;
+import org.annalist.brief.Logo;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -33,6 +34,9 @@ final class BriefCommand implements Callable<Integer> {
     @Option(names = "--organisation", paramLabel = "TEXT", description = "Organisation named on the brief.")
     String organisation = "";
 
+    @Option(names = "--logo", paramLabel = "FILE", description = "A PNG, JPEG or GIF logo printed in the masthead.")
+    Path logo;
+
     @Option(names = "--templates", paramLabel = "DIR",
             description = "A folder of templates (brief.ftlx, brief.css) that replace the bundled ones.")
     Path templates;
@@ -52,9 +56,14 @@ final class BriefCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Path target = output != null ? output : Path.of(defaultName(input.file, series));
+        if (logo != null) {
+            Logo.problem(logo).ifPresent(problem -> {
+                throw new UserInputException("--logo: " + problem);
+            });
+        }
         BriefRequest request = new BriefRequest(input.file, input.toReadOptions(), Optional.ofNullable(series), target,
                 title, organisation, Optional.ofNullable(templates), briefOptions.generatedAt(), briefOptions.paper(),
-                Optional.ofNullable(briefOptions.period));
+                Optional.ofNullable(briefOptions.period), Optional.ofNullable(logo));
         BriefPipeline.Brief brief = new BriefPipeline(analysis.analyst(), analysis::prepare).make(request);
         brief.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
         spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series() + ")");

@@ -32,9 +32,11 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
 
     /**
      * @param unitPerPeriod the unit with its period, e.g. {@code nights a month}; empty without a unit
+     * @param logo          the logo's URI; empty without one
      */
     public record Header(String title, String organisation, String seriesName, String unit, String periodCovered,
-                         String latestPeriod, String generatedAt, String frequency, String unitPerPeriod) {
+                         String latestPeriod, String generatedAt, String frequency, String unitPerPeriod,
+                         String logo) {
     }
 
     /**

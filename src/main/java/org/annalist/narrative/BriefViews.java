@@ -27,7 +27,8 @@ public final class BriefViews {
                 author, "time series, " + series.name());
         BriefView.Header header = new BriefView.Header(title, masthead.organisation(), series.name(), series.unit(),
                 f.period(series.start()) + " to " + f.period(series.end()), f.period(series.end()),
-                f.timestamp(masthead.generatedAt()), findings.series().frequency(), unitPerPeriod(series));
+                f.timestamp(masthead.generatedAt()), findings.series().frequency(), unitPerPeriod(series),
+                masthead.logoUri().orElse(""));
         BriefView.Lead lead = lead(series, findings, f);
         BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
                 f.count(source.rowsRead()), source.reading(), masthead.software(), f.timestamp(masthead.generatedAt()));

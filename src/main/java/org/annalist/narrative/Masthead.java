@@ -10,9 +10,10 @@ import java.util.Objects;
  *
  * @param title        empty to use the series name
  * @param organisation empty when none is named
+ * @param logoUri      the organisation's logo as a file URI, printed in the masthead
  */
 public record Masthead(String title, String organisation, Locale language, Paper paper, Instant generatedAt,
-                       String software) {
+                       String software, java.util.Optional<String> logoUri) {
 
     /** Paper sizes, by their CSS names. */
     public enum Paper {

@@ -18,7 +18,7 @@ public record MultiBriefView(BriefView.Document document, Header header, List<Co
     }
 
     public record Header(String title, String organisation, String periodCovered, String latestPeriod,
-                         String generatedAt, String seriesList) {
+                         String generatedAt, String seriesList, String logo) {
     }
 
     /** One row of the comparison table, formatted; a dash where a figure cannot be given. */

@@ -64,7 +64,7 @@ public final class MultiBriefViews {
                 masthead.title().isEmpty() ? String.join(", ", series.stream().map(Series::name).toList()) : masthead.title(),
                 masthead.organisation(), first.period(lead.start()) + " to " + first.period(lead.end()),
                 first.period(lead.end()), first.timestamp(masthead.generatedAt()),
-                String.join(", ", series.stream().map(Series::name).toList()));
+                String.join(", ", series.stream().map(Series::name).toList()), masthead.logoUri().orElse(""));
         BriefView.Document document = new BriefView.Document(masthead.language().toLanguageTag(),
                 masthead.paper().css(), masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation(),
                 "time series, " + header.seriesList());

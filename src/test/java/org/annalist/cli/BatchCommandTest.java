@@ -46,6 +46,7 @@ class BatchCommandTest {
             {"briefs:\n  - data: nights.csv\n    series: [Domestic, Brevania]\n    total: Total\n",
                 ":4:12: total 'Total' is not one of the series"},
             {"briefs:\n  - data: nights.csv\n    sort_by: size\n", ":3:14: sort_by 'size'"},
+            {"briefs:\n  - data: nights.csv\n    logo: nights.csv\n", ":3:11: logo nights.csv is not an image"},
             {"briefs:\n  - data: nights.csv\n    title: [unclosed\n", ":3:21: not valid YAML"},
         };
         for (String[] c : cases) {
@@ -122,6 +123,33 @@ class BatchCommandTest {
         String table = text.substring(text.indexOf("The series side by side"));
         assertThat(table.indexOf("North")).isLessThan(table.indexOf("South"));
         assertThat(table.indexOf("South")).isLessThan(table.indexOf("Total"));
+    }
+
+    /** A logo is printed in the masthead: the one image of a brief whose charts are all vectors. */
+    @Test
+    void theLogoIsPrintedInTheMasthead() throws Exception {
+        java.awt.image.BufferedImage logo = new java.awt.image.BufferedImage(120, 40, java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g = logo.createGraphics();
+        g.setColor(java.awt.Color.DARK_GRAY);
+        g.fillRect(0, 0, 120, 40);
+        g.dispose();
+        javax.imageio.ImageIO.write(logo, "png", folder.resolve("logo.png").toFile());
+        Path spec = spec("""
+                briefs:
+                  - data: nights.csv
+                    series: Brevania
+                    organisation: Invented Board
+                    logo: logo.png
+                    output: with-logo.pdf
+                    horizon: 0
+                    generated_at: 2026-11-20T08:00:00Z
+                """);
+        Run run = batch(spec);
+        assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
+        Path pdf = folder.resolve("with-logo.pdf");
+        assertThat(PdfFacts.of(pdf).images()).isEqualTo(1);
+        assertThat(org.annalist.render.PdfConformance.violations(pdf, "2u")).isEmpty();
+        assertThat(org.annalist.render.PdfConformance.violations(pdf, "ua1")).isEmpty();
     }
 
     @Test
