@@ -35,10 +35,10 @@ public final class Batch {
      * @param label    {@code spec.yaml:3 Total}: where it comes from, for the summary
      * @param failure  why it cannot be made, when the plan already knows
      */
-    record Job(String label, BriefSpec.Entry entry, ReadResult read, List<Series> series, Path output,
-               Optional<String> failure) {
+    public record Job(String label, BriefSpec.Entry entry, ReadResult read, List<Series> series, Path output,
+                      Optional<String> failure) {
 
-        Job {
+        public Job {
             series = series == null ? List.of() : List.copyOf(series);
         }
     }
@@ -58,7 +58,22 @@ public final class Batch {
      * @param finished told of each outcome as it comes (from the pool's threads)
      */
     public static List<Outcome> run(BriefSpec spec, int threads, Consumer<Outcome> finished) {
-        List<Job> jobs = plan(spec);
+        return run(plan(spec), threads, finished);
+    }
+
+    /** The briefs a spec makes, planned: one per series, or one per combined brief. */
+    public record Plan(List<Job> jobs) {
+        public Plan {
+            jobs = List.copyOf(jobs);
+        }
+
+        public int size() {
+            return jobs.size();
+        }
+    }
+
+    public static List<Outcome> run(Plan plan, int threads, Consumer<Outcome> finished) {
+        List<Job> jobs = plan.jobs();
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(threads, jobs.size())));
         try {
             List<Future<Outcome>> futures = new ArrayList<>();
@@ -84,7 +99,7 @@ public final class Batch {
         }
     }
 
-    static List<Job> plan(BriefSpec spec) {
+    public static Plan plan(BriefSpec spec) {
         List<Job> jobs = new ArrayList<>();
         Map<Path, ReadResult> reads = new HashMap<>();
         Map<Path, String> outputs = new HashMap<>();
@@ -152,7 +167,7 @@ public final class Batch {
                         outputs));
             }
         }
-        return jobs;
+        return new Plan(jobs);
     }
 
     /** The job, or the job failed when an earlier one writes the same file. */

@@ -7,6 +7,9 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.annalist.brief.Batch;
 import org.annalist.brief.BriefSpec;
+import me.tongfei.progressbar.ProgressBar;
+import me.tongfei.progressbar.ProgressBarBuilder;
+import me.tongfei.progressbar.ProgressBarStyle;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -15,7 +18,8 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code annalist batch SPEC.yaml|FOLDER}: every brief of a spec (or of a folder's CSV files), on a pool sized to the cores; a line per
+ * {@code annalist batch SPEC.yaml|FOLDER}: every brief of a spec (or of a folder's CSV files),
+ * with a progress bar on an interactive terminal and a plain line per brief otherwise, on a pool sized to the cores; a line per
  * brief as it finishes, then a summary. Exit 0 when all were made, {@value #EXIT_SOME_FAILED} when
  * some failed (the others are written), 2 when the spec itself is wrong.
  */
@@ -47,12 +51,22 @@ final class BatchCommand implements Callable<Integer> {
         BriefSpec briefs = java.nio.file.Files.isDirectory(specFile) ? BriefSpec.forFolder(specFile)
                 : BriefSpec.read(specFile);
         PrintWriter out = spec.commandLine().getOut();
-        List<Batch.Outcome> outcomes = Batch.run(briefs, jobs, o -> {
-            synchronized (out) {
-                out.println((o.done() ? "done    " : "failed  ") + o.label());
-                out.flush();
+        Batch.Plan plan = Batch.plan(briefs);
+        List<Batch.Outcome> outcomes;
+        if (System.console() != null) {
+            // an interactive terminal: a bar that redraws in place; the summary below names every brief
+            try (ProgressBar bar = new ProgressBarBuilder().setTaskName("Briefs").setInitialMax(plan.size())
+                    .setStyle(ProgressBarStyle.ASCII).continuousUpdate().build()) {
+                outcomes = Batch.run(plan, jobs, o -> bar.step());
             }
-        });
+        } else {
+            outcomes = Batch.run(plan, jobs, o -> {
+                synchronized (out) {
+                    out.println((o.done() ? "done    " : "failed  ") + o.label());
+                    out.flush();
+                }
+            });
+        }
         long failed = outcomes.stream().filter(o -> !o.done()).count();
         out.println();
         out.printf(Locale.ROOT, "%d of %d briefs made%s%n", outcomes.size() - failed, outcomes.size(),
