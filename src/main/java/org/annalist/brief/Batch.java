@@ -189,7 +189,8 @@ public final class Batch {
         BriefRequest request = new BriefRequest(e.data(), ReadOptions.defaults(), Optional.of(first.name()),
                 job.output(), title, e.organisation(), e.templates(),
                 e.generatedAt().orElseGet(() -> GenerationTime.resolve(Optional.empty(), System.getenv(),
-                        java.time.Instant.now())), e.paper(), e.period(), e.logo());
+                        java.time.Instant.now())), e.paper(), e.period(), e.logo(),
+                java.util.Locale.forLanguageTag(e.language()));
         try {
             if (e.combined()) {
                 BriefPipeline.MultiBrief multi = pipeline.makeMulti(request, job.read(), job.series(),

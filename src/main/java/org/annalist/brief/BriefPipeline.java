@@ -95,7 +95,8 @@ public final class BriefPipeline {
                     concat(source.notes(), "Note: " + warning + "."));
         }
         BriefView view = BriefViews.of(series, findings, source, masthead);
-        String xhtml = new TemplateEngine(request.templates()).render(TemplateEngine.BRIEF_TEMPLATE, view);
+        String xhtml = new TemplateEngine(request.templates())
+                .render(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
         List<Figure> figures = figures(series, findings, view);
         byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
                 figures, request.generatedAt(), documentId(read.sha256(), series.name()));
@@ -120,7 +121,8 @@ public final class BriefPipeline {
         Optional<PartsCheck> check = total.flatMap(name -> series.stream().filter(s -> s.name().equals(name)).findFirst())
                 .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
         MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(read), masthead, check, sortBy);
-        String xhtml = new TemplateEngine(request.templates()).render(TemplateEngine.MULTI_TEMPLATE, view);
+        String xhtml = new TemplateEngine(request.templates())
+                .render(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
         List<Figure> figures = new ArrayList<>();
         figures.add(SmallMultiplesChart.of(series, findings));
         for (int i = 0; i < series.size(); i++) {
@@ -138,7 +140,7 @@ public final class BriefPipeline {
     }
 
     private static Masthead masthead(BriefRequest request) {
-        return new Masthead(request.title(), request.organisation(), Locale.ENGLISH, request.paper(),
+        return new Masthead(request.title(), request.organisation(), request.language(), request.paper(),
                 request.generatedAt(), "Annalist " + Version.current(),
                 request.logo().map(p -> p.toAbsolutePath().toUri().toString()));
     }

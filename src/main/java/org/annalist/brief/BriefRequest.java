@@ -2,6 +2,7 @@ package org.annalist.brief;
 
 import java.nio.file.Path;
 import java.time.Instant;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import org.annalist.ingest.ReadOptions;
@@ -16,17 +17,19 @@ import org.annalist.narrative.Masthead;
  * @param latestPeriod the period the brief reports as latest (its label, e.g. {@code 2025-04}); empty for the last in the data
  * @param generatedAt the time the brief states as made (pinned for reproducible output; see {@link GenerationTime})
  * @param logo        an image printed in the masthead
+ * @param language    the narrative's language: the template {@code brief_LANG.ftlx} when it exists
+ *                    (FreeMarker's localized lookup), else {@code brief.ftlx}, in English
  */
 public record BriefRequest(Path input, ReadOptions readOptions, Optional<String> series, Path output, String title,
                            String organisation, Optional<Path> templates, Instant generatedAt, Masthead.Paper paper,
-                           Optional<String> latestPeriod, Optional<Path> logo) {
+                           Optional<String> latestPeriod, Optional<Path> logo, Locale language) {
 
     /** A brief without a logo. */
     public BriefRequest(Path input, ReadOptions readOptions, Optional<String> series, Path output, String title,
                         String organisation, Optional<Path> templates, Instant generatedAt, Masthead.Paper paper,
                         Optional<String> latestPeriod) {
         this(input, readOptions, series, output, title, organisation, templates, generatedAt, paper, latestPeriod,
-                Optional.empty());
+                Optional.empty(), Locale.ENGLISH);
     }
 
     public BriefRequest {
@@ -41,5 +44,6 @@ public record BriefRequest(Path input, ReadOptions readOptions, Optional<String>
         Objects.requireNonNull(paper, "paper");
         Objects.requireNonNull(latestPeriod, "latestPeriod");
         Objects.requireNonNull(logo, "logo");
+        Objects.requireNonNull(language, "language");
     }
 }

@@ -63,7 +63,7 @@ final class BriefCommand implements Callable<Integer> {
         }
         BriefRequest request = new BriefRequest(input.file, input.toReadOptions(), Optional.ofNullable(series), target,
                 title, organisation, Optional.ofNullable(templates), briefOptions.generatedAt(), briefOptions.paper(),
-                Optional.ofNullable(briefOptions.period), Optional.ofNullable(logo));
+                Optional.ofNullable(briefOptions.period), Optional.ofNullable(logo), Locale.ENGLISH);
         BriefPipeline.Brief brief = new BriefPipeline(analysis.analyst(), analysis::prepare).make(request);
         brief.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
         spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series() + ")");

@@ -48,11 +48,15 @@ public final class TemplateEngine {
         configuration.setObjectWrapper(new DefaultObjectWrapperBuilder(Configuration.VERSION_2_3_35).build());
     }
 
-    /** @param view the {@link BriefView} or {@link MultiBriefView} the template reads as {@code brief} */
-    public String render(String templateName, Object view) {
+    /**
+     * @param view     the {@link BriefView} or {@link MultiBriefView} the template reads as {@code brief}
+     * @param language picks {@code NAME_LANG.ftlx} over {@code NAME.ftlx} where it exists (FreeMarker's
+     *                 localized lookup): how a translated narrative is added
+     */
+    public String render(String templateName, Object view, Locale language) {
         try {
             StringWriter out = new StringWriter();
-            configuration.getTemplate(templateName).process(Map.of("brief", view), out);
+            configuration.getTemplate(templateName, language).process(Map.of("brief", view), out);
             return out.toString();
         } catch (IOException e) {
             throw new UncheckedIOException("template " + templateName + " cannot be read", e);
