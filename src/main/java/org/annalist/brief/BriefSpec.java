@@ -97,6 +97,15 @@ public record BriefSpec(Path file, List<Entry> briefs) {
         briefs = List.copyOf(briefs);
     }
 
+    /** The same briefs written into {@code folder}, each under its output pattern's file name. */
+    public BriefSpec withOutputFolder(Path folder) {
+        Path root = folder.toAbsolutePath().normalize();
+        return new BriefSpec(file, briefs.stream().map(e -> new Entry(e.line(), e.title(), e.organisation(), e.data(),
+                e.series(), e.measures(), e.units(), e.period(), e.paper(), e.language(), e.templates(),
+                root.resolve(Path.of(e.output()).getFileName()).toString(), e.generatedAt(), e.horizon(),
+                e.sideOutputs(), e.everySeries(), e.combined(), e.total(), e.sortBy(), e.logo())).toList());
+    }
+
     /**
      * The default spec of a folder: one brief per series of every CSV file in it (by name, not in
      * subfolders), written to {@code briefs/FILE-SERIES-PERIOD.pdf} inside it.

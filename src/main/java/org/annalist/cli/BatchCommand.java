@@ -40,6 +40,10 @@ final class BatchCommand implements Callable<Integer> {
     @Option(names = "--jobs", paramLabel = "N", description = "Briefs made at once. Default: the number of cores.")
     int jobs = Runtime.getRuntime().availableProcessors();
 
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Write every brief into DIR, under its output pattern's file name, instead of where the spec says.")
+    Path outFolder;
+
     @Mixin
     DebugOption debug;
 
@@ -50,6 +54,9 @@ final class BatchCommand implements Callable<Integer> {
         }
         BriefSpec briefs = java.nio.file.Files.isDirectory(specFile) ? BriefSpec.forFolder(specFile)
                 : BriefSpec.read(specFile);
+        if (outFolder != null) {
+            briefs = briefs.withOutputFolder(outFolder);
+        }
         PrintWriter out = spec.commandLine().getOut();
         Batch.Plan plan = Batch.plan(briefs);
         List<Batch.Outcome> outcomes;

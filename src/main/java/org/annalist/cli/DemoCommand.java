@@ -7,8 +7,10 @@ import java.time.Instant;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.annalist.brief.Batch;
 import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.BriefRequest;
+import org.annalist.brief.BriefSpec;
 import org.annalist.ingest.Aggregation;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.series.Frequency;
@@ -24,6 +26,9 @@ import picocli.CommandLine.Model.CommandSpec;
 final class DemoCommand implements Callable<Integer> {
 
     private static final String ORGANISATION = "Quennelmark Visitor Board (invented demo)";
+
+    /** The demo's brief spec, in the data folder. */
+    static final String ROUTINE_SPEC = "monthly-briefs.yaml";
 
     /** One demo brief: which file and series, how to read it, its title and output name. */
     private record DemoBrief(String file, String series, ReadOptions options, String title, String output,
@@ -82,6 +87,18 @@ final class DemoCommand implements Callable<Integer> {
                     demo.period());
             BriefPipeline.Brief brief = pipeline.make(request);
             console.println("wrote " + brief.file());
+        }
+        // the monthly routine: the board's multi-series brief and two market briefs, from a spec
+        Path routine = data.resolve(ROUTINE_SPEC);
+        if (Files.isRegularFile(routine)) {
+            List<Batch.Outcome> outcomes = Batch.run(BriefSpec.read(routine).withOutputFolder(out),
+                    Runtime.getRuntime().availableProcessors(), o -> { });
+            for (Batch.Outcome o : outcomes) {
+                if (!o.done()) {
+                    throw new IllegalStateException("the demo brief " + o.label() + " failed: " + o.failure().orElse(""));
+                }
+                console.println("wrote " + o.file().get());
+            }
         }
         return Main.EXIT_OK;
     }

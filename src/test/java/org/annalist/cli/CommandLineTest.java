@@ -113,7 +113,9 @@ class CommandLineTest {
         assertThat(run.exitCode()).as(run.err()).isZero();
         try (var briefs = Files.list(folder)) {
             assertThat(briefs.map(p -> p.getFileName().toString())).contains("guest-nights-total.pdf",
-                    "glassworks-visitors-monthly.pdf", "guest-nights-total-2025-04.pdf").hasSize(7);
+                    "glassworks-visitors-monthly.pdf", "guest-nights-total-2025-04.pdf",
+                    // from demo-data/monthly-briefs.yaml: the board's combined brief and two market briefs
+                    "board-2026-10.pdf", "market-brevania-2026-10.pdf", "market-long-haul-2026-10.pdf").hasSize(10);
         }
         assertThat(PdfFacts.of(folder.resolve("guest-nights-total.pdf")).text()).contains("provisional");
         // Easter moved from 31 March 2024 to 20 April 2025: the April brief explains the swing
