@@ -195,6 +195,7 @@ public final class Batch {
             if (e.combined()) {
                 BriefPipeline.MultiBrief multi = pipeline.makeMulti(request, job.read(), job.series(),
                         s -> analyst(e, s).analyse(s), e.total(), e.sortBy());
+                SideOutputs.write(multi, job.series(), e.sideOutputs());
                 return new Outcome(job.label(), Optional.of(multi.file()), Optional.empty());
             }
             BriefPipeline.Brief brief = pipeline.make(request, job.read(), first);

@@ -136,7 +136,7 @@ public final class BriefPipeline {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + request.output(), e);
         }
-        return new MultiBrief(request.output(), findings, check);
+        return new MultiBrief(request.output(), findings, check, List.copyOf(figures));
     }
 
     private static Masthead masthead(BriefRequest request) {
@@ -145,8 +145,8 @@ public final class BriefPipeline {
                 request.logo().map(p -> p.toAbsolutePath().toUri().toString()));
     }
 
-    /** The multi-series brief made: where it is, each series' findings, and the parts-and-total check. */
-    public record MultiBrief(Path file, List<Findings> findings, Optional<PartsCheck> check) {
+    /** The multi-series brief made: where it is, each series' findings, the parts-and-total check, its charts. */
+    public record MultiBrief(Path file, List<Findings> findings, Optional<PartsCheck> check, List<Figure> figures) {
     }
 
     /** The charts the template places; those the view does not draw are left out. */

@@ -5,10 +5,12 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.EnumSet;
+import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.annalist.chart.Figure;
 import org.annalist.findings.Decomposition;
+import org.annalist.findings.Findings;
 import org.annalist.findings.FindingsJson;
 import org.annalist.render.AtomicFiles;
 import org.annalist.render.SvgCharts;
@@ -17,7 +19,8 @@ import org.annalist.series.Series;
 /**
  * Files written beside a brief on request, named after it: {@code NAME.findings.json} (the
  * findings schema), {@code NAME.components.csv} (period, observed, trend-cycle, seasonal,
- * irregular, seasonally adjusted; empty cells where not decomposed) and {@code NAME-CHART.svg}.
+ * irregular, seasonally adjusted; empty cells where not decomposed) and {@code NAME-CHART.svg}; for a
+ * combined brief the data files per series, {@code NAME-SERIES.findings.json} and so on.
  */
 public final class SideOutputs {
 
@@ -35,22 +38,47 @@ public final class SideOutputs {
     static void write(BriefPipeline.Brief brief, Series series, Set<Kind> kinds) {
         String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
         Path folder = brief.file().toAbsolutePath().getParent();
+        writeData(folder, stem, brief.findings(), series, kinds);
+        writeCharts(folder, stem, brief.figures(), kinds);
+    }
+
+    /** For a combined brief: the data files per series ({@code NAME-SERIES.findings.json}, …) and its charts. */
+    static void write(BriefPipeline.MultiBrief brief, List<Series> series, Set<Kind> kinds) {
+        String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
+        Path folder = brief.file().toAbsolutePath().getParent();
+        for (int i = 0; i < series.size(); i++) {
+            String name = series.get(i).name().toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-");
+            writeData(folder, stem + "-" + name, brief.findings().get(i), series.get(i), kinds);
+        }
+        writeCharts(folder, stem, brief.figures(), kinds);
+    }
+
+    private static void writeData(Path folder, String stem, Findings findings, Series series,
+                                  Set<Kind> kinds) {
         try {
             if (kinds.contains(Kind.FINDINGS)) {
                 AtomicFiles.write(folder.resolve(stem + ".findings.json"),
-                        FindingsJson.write(brief.findings()).getBytes(StandardCharsets.UTF_8));
+                        FindingsJson.write(findings).getBytes(StandardCharsets.UTF_8));
             }
             if (kinds.contains(Kind.COMPONENTS)) {
                 AtomicFiles.write(folder.resolve(stem + ".components.csv"),
-                        components(series, brief.findings().decomposition()).getBytes(StandardCharsets.UTF_8));
+                        components(series, findings.decomposition()).getBytes(StandardCharsets.UTF_8));
             }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the side outputs " + stem, e);
+        }
+    }
+
+    private static void writeCharts(Path folder, String stem, List<Figure> figures, Set<Kind> kinds) {
+        try {
             if (kinds.contains(Kind.CHARTS)) {
-                for (Figure figure : brief.figures()) {
-                    AtomicFiles.write(folder.resolve(stem + "-" + figure.id() + ".svg"), SvgCharts.svg(figure, CHART_HEIGHT));
+                for (Figure figure : figures) {
+                    AtomicFiles.write(folder.resolve(stem + "-" + figure.id() + ".svg"),
+                            SvgCharts.svg(figure, CHART_HEIGHT));
                 }
             }
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the side outputs of " + brief.file(), e);
+            throw new UncheckedIOException("cannot write the charts of " + stem, e);
         }
     }
 

@@ -97,7 +97,7 @@ final class DemoCommand implements Callable<Integer> {
                 if (!o.done()) {
                     throw new IllegalStateException("the demo brief " + o.label() + " failed: " + o.failure().orElse(""));
                 }
-                console.println("wrote " + o.file().get());
+                console.println("wrote " + Path.of("").toAbsolutePath().relativize(o.file().get()));
             }
         }
         return Main.EXIT_OK;

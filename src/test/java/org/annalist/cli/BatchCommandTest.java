@@ -108,6 +108,7 @@ class BatchCommandTest {
                     output: regions-{period}.pdf
                     generated_at: 2026-11-20T08:00:00Z
                     horizon: 0
+                    side_outputs: [findings, charts]
                 """);
         Run run = batch(spec);
         assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
@@ -116,6 +117,8 @@ class BatchCommandTest {
         assertThat(text).contains("The series side by side", "The parts do not add up.",
                 "North, South miss Total by more than 0.5 % in June 2020");
         Path pdf = folder.resolve("regions-2022-12.pdf");
+        assertThat(folder.resolve("regions-2022-12-north.findings.json")).exists();
+        assertThat(folder.resolve("regions-2022-12-multiples.svg")).exists();
         assertThat(org.annalist.render.PdfConformance.violations(pdf, "2u")).isEmpty();
         assertThat(org.annalist.render.PdfConformance.violations(pdf, "ua1")).isEmpty();
         // sorted by name: after the table's heading the rows name North, South, Total first in that order
