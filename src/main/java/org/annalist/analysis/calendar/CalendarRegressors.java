@@ -44,13 +44,12 @@ public final class CalendarRegressors {
 
     /** How many times {@code weekday} occurs in the period. */
     public static int count(Period period, DayOfWeek weekday) {
-        int n = 0;
-        for (LocalDate d = period.startDate(); !d.isAfter(period.endDate()); d = d.plusDays(1)) {
-            if (d.getDayOfWeek() == weekday) {
-                n++;
-            }
-        }
-        return n;
+        LocalDate start = period.startDate();
+        int days = (int) (period.endDate().toEpochDay() - start.toEpochDay() + 1);
+        // whole weeks hold the weekday once each; the remaining days from the start hold it once
+        // more when it falls within them
+        int offset = Math.floorMod(weekday.getValue() - start.getDayOfWeek().getValue(), 7);
+        return days / 7 + (offset < days % 7 ? 1 : 0);
     }
 
     /** Fridays plus Saturdays: the nights of the weekend. */

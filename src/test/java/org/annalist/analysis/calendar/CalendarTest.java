@@ -92,4 +92,22 @@ class CalendarTest {
         assertThat(perDay.value(1)).isCloseTo(3043.75, within(1e-9));
         assertThat(perDay.unit()).isEqualTo("per average month");
     }
+
+    /** The arithmetic weekday count equals counting day by day, for every month and quarter of 1990–2040. */
+    @org.junit.jupiter.api.Test
+    void weekdayCountsEqualADayByDayCount() {
+        for (int year = 1990; year <= 2040; year++) {
+            for (int m = 1; m <= 12; m++) {
+                for (Period p : new Period[] {Period.month(year, m), Period.quarter(year, (m - 1) / 3 + 1)}) {
+                    for (DayOfWeek weekday : DayOfWeek.values()) {
+                        int byDay = 0;
+                        for (java.time.LocalDate d = p.startDate(); !d.isAfter(p.endDate()); d = d.plusDays(1)) {
+                            byDay += d.getDayOfWeek() == weekday ? 1 : 0;
+                        }
+                        assertThat(CalendarRegressors.count(p, weekday)).as("%s %s", p, weekday).isEqualTo(byDay);
+                    }
+                }
+            }
+        }
+    }
 }
