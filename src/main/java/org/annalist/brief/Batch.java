@@ -129,11 +129,10 @@ public final class Batch {
                     jobs.add(new Job(entry.combined() ? where : label, entry, read, null, null, Optional.of(
                             "no series named '" + name + "' in " + entry.data().getFileName() + "; expected one of "
                             + read.names())));
-                    prepared = null;
                     if (entry.combined()) {
+                        prepared = null; // a combined brief needs every one of its series
                         break;
                     }
-                    prepared = new ArrayList<>();
                     continue;
                 }
                 Series series = found.get();
