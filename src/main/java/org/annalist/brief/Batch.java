@@ -13,6 +13,7 @@ import java.util.concurrent.Future;
 import java.util.function.Consumer;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.findings.Analyst;
+import org.annalist.findings.DerivedSeries;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.DataProblemException;
 import org.annalist.ingest.ReadOptions;
@@ -34,9 +35,15 @@ public final class Batch {
      *
      * @param label    {@code spec.yaml:3 Total}: where it comes from, for the summary
      * @param failure  why it cannot be made, when the plan already knows
+     * @param derived  the series is a ratio of two of the file's series (average length of stay)
      */
     public record Job(String label, BriefSpec.Entry entry, ReadResult read, List<Series> series, Path output,
-                      Optional<String> failure) {
+                      Optional<String> failure, boolean derived) {
+
+        Job(String label, BriefSpec.Entry entry, ReadResult read, List<Series> series, Path output,
+            Optional<String> failure) {
+            this(label, entry, read, series, output, failure, false);
+        }
 
         public Job {
             series = series == null ? List.of() : List.copyOf(series);
@@ -125,6 +132,15 @@ public final class Batch {
             for (String name : names) {
                 String label = where + " " + name;
                 Optional<Series> found = read.find(name);
+                Optional<DerivedSeries.Derived> ratio = found.isPresent() || entry.combined() ? Optional.empty()
+                        : DerivedSeries.of(read.series()).stream()
+                        .filter(d -> d.series().name().equalsIgnoreCase(name)).findFirst();
+                if (ratio.isPresent()) {
+                    Series r = ratio.get().series();
+                    jobs.add(claim(new Job(label, entry, read, List.of(r), entry.outputFor(r.name(),
+                            entry.period().orElse(r.end().toString())), Optional.empty(), true), outputs));
+                    continue;
+                }
                 if (found.isEmpty()) {
                     jobs.add(new Job(entry.combined() ? where : label, entry, read, null, null, Optional.of(
                             "no series named '" + name + "' in " + entry.data().getFileName() + "; expected one of "
@@ -173,7 +189,8 @@ public final class Batch {
     private static Job claim(Job job, Map<Path, String> outputs) {
         String earlier = outputs.putIfAbsent(job.output(), job.label());
         return earlier == null ? job : new Job(job.label(), job.entry(), job.read(), job.series(), job.output(),
-                Optional.of("writes " + job.output() + ", as " + earlier + " does; put {series} or {period} in 'output'"));
+                Optional.of("writes " + job.output() + ", as " + earlier + " does; put {series} or {period} in 'output'"),
+                job.derived());
     }
 
     private static Outcome make(Job job) {
@@ -197,7 +214,8 @@ public final class Batch {
                 SideOutputs.write(multi, job.series(), e.sideOutputs());
                 return new Outcome(job.label(), Optional.of(multi.file()), Optional.empty());
             }
-            BriefPipeline.Brief brief = pipeline.make(request, job.read(), first);
+            // a ratio series goes the pipeline's own way: it reads, cuts and analyses the ratio of sums
+            BriefPipeline.Brief brief = job.derived() ? pipeline.make(request) : pipeline.make(request, job.read(), first);
             SideOutputs.write(brief, first, e.sideOutputs());
             return new Outcome(job.label(), Optional.of(brief.file()), Optional.empty());
         } catch (DataProblemException ex) {

@@ -155,6 +155,29 @@ class BatchCommandTest {
         assertThat(org.annalist.render.PdfConformance.violations(pdf, "ua1")).isEmpty();
     }
 
+    /** A ratio the file offers (nights per arrival of a market) can be briefed by its name. */
+    @Test
+    void aDerivedAverageLengthOfStayIsBriefedByName() throws IOException {
+        StringBuilder csv = new StringBuilder("period,Domestic nights,Domestic arrivals\n");
+        for (int t = 0; t < 48; t++) {
+            long arrivals = Math.round(1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)));
+            csv.append(String.format(java.util.Locale.ROOT, "%d-%02d,%d,%d%n", 2021 + t / 12, t % 12 + 1,
+                    Math.round(arrivals * (2.5 + 0.01 * t)), arrivals));
+        }
+        Files.writeString(folder.resolve("stays.csv"), csv);
+        Path spec = spec("""
+                briefs:
+                  - data: stays.csv
+                    series: Domestic average length of stay
+                    output: "{series}.pdf"
+                    horizon: 0
+                """);
+        Run run = batch(spec);
+        assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
+        assertThat(PdfFacts.of(folder.resolve("domestic-average-length-of-stay.pdf")).text())
+                .contains("nights per arrival");
+    }
+
     @Test
     void aFolderGetsOneBriefPerSeriesOfEachCsvFile() throws IOException {
         Files.copy(Path.of("demo-data/quennelmark-arrivals.csv"), folder.resolve("arrivals.csv"));
