@@ -83,10 +83,10 @@ final class OutlookAnalysis {
             }
         }
         List<OutlookFinding.Score> scores = outlook.backtest().stream()
-                .map(s -> new OutlookFinding.Score(s.method().label(), s.mase(), s.smape())).toList();
+                .map(s -> new OutlookFinding.Score(s.method().label(period), s.mase(), s.smape())).toList();
         Double typical = outlook.backtest().isEmpty() ? null
                 : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
-        return new OutlookFinding(f.method().label(), f.model(), h, series.period(from).toString(), points, total,
+        return new OutlookFinding(f.method().label(period), f.model(), h, series.period(from).toString(), points, total,
                 average, scores, outlook.chosenBecause(), typical, nextYear, outlook.origins(), caveats);
     }
 

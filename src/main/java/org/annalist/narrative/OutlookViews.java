@@ -54,9 +54,15 @@ final class OutlookViews {
                 change = previous <= 0 ? "" : Math.abs(pct) < 0.05 ? "unchanged" : f.signedPercent(pct);
             }
         }
-        String methodName = o.method().equals("ETS") ? "exponential smoothing, " + o.model()
-                : o.method().equals("combination") ? "the average of three methods (" + o.model().replaceFirst("^mean of ", "") + ")"
-                : o.model();
+        String methodName = switch (o.method()) {
+            case "ETS" -> "exponential smoothing, " + o.model();
+            case "combination" -> "the average of three methods (" + o.model().replaceFirst("^mean of ", "") + ")";
+            case "seasonal naive" -> "the seasonal naive rule (each period as the same period a year before)";
+            case "naive" -> "the naive rule (every period as the latest value)";
+            case "Theta" -> o.model().contains("seasonally") ? "the Theta method, on seasonally adjusted values"
+                    : "the Theta method";
+            default -> o.model();
+        };
         return new BriefView.OutlookView(true, methodName, o.chosenBecause(), f.period(periodOf(series, o.fittedFrom())),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
                 o.horizon() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),

@@ -51,6 +51,11 @@ public final class Outlook {
         public String label() {
             return label;
         }
+
+        /** As {@link #label()}; the seasonal naive forecast of non-seasonal data is the plain naive one. */
+        public String label(int period) {
+            return this == SEASONAL_NAIVE && period <= 1 ? "naive" : label;
+        }
     }
 
     /** The range a measure can take: counts are not negative, rates stay within 0–100 %. */
@@ -139,17 +144,17 @@ public final class Outlook {
         if (chosen == null) {
             return Optional.empty();
         }
-        return Optional.of(new Result(chosen, scores, because(scores, Math.max(origins, 0)),
+        return Optional.of(new Result(chosen, scores, because(scores, Math.max(origins, 0), period),
                 scores.isEmpty() ? 0 : origins, cycle));
     }
 
-    private static String because(List<Score> scores, int origins) {
+    private static String because(List<Score> scores, int origins, int period) {
         if (scores.isEmpty()) {
             return "chosen by AICc among ETS models; the series is too short for a back-test";
         }
         Score best = scores.get(0);
         String next = scores.size() > 1
-                ? String.format(Locale.ROOT, "; next best %s %.2f", scores.get(1).method().label(), scores.get(1).mase()) : "";
+                ? String.format(Locale.ROOT, "; next best %s %.2f", scores.get(1).method().label(period), scores.get(1).mase()) : "";
         return String.format(Locale.ROOT,
                 "lowest mean absolute scaled error in a rolling-origin back-test over the last %d periods (%.2f%s)",
                 origins, best.mase(), next);
@@ -217,8 +222,8 @@ public final class Outlook {
             double medianApe = counted == 0 ? Double.NaN : OrderStatistics.median(Arrays.copyOf(ape, counted));
             String model = switch (method) {
                 case ETS -> etsModel;
-                case COMBINATION -> "mean of " + etsModel + ", Theta and seasonal naive";
-                default -> method.label();
+                case COMBINATION -> "mean of " + etsModel + ", Theta and " + Method.SEASONAL_NAIVE.label(period);
+                default -> method.label(period);
             };
             scores.add(new Score(method, model, accuracy.mase(), accuracy.smape(), medianApe, pairs));
         }
@@ -239,7 +244,7 @@ public final class Outlook {
                         ? "Theta, seasonally adjusted" : "Theta", theta.predict(horizon), theta.paths(shocks), bounds);
             }
             case SEASONAL_NAIVE -> y.length <= cycle ? null : fromPrediction(Method.SEASONAL_NAIVE,
-                    Method.SEASONAL_NAIVE.label(), SeasonalNaive.predict(y, cycle, horizon),
+                    Method.SEASONAL_NAIVE.label(period), SeasonalNaive.predict(y, cycle, horizon),
                     SeasonalNaive.paths(y, cycle, shocks), bounds);
             case COMBINATION -> combination(y, period, horizon, shocks, bounds);
         };
@@ -273,7 +278,8 @@ public final class Outlook {
                 }
             }
         }
-        return fromPaths(Method.COMBINATION, "mean of " + best.model().label() + ", Theta and seasonal naive", mean,
+        return fromPaths(Method.COMBINATION, "mean of " + best.model().label() + ", Theta and "
+                + Method.SEASONAL_NAIVE.label(period), mean,
                 paths, bounds);
     }
 
