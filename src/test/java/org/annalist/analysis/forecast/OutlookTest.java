@@ -60,6 +60,17 @@ class OutlookTest {
         assertThat(year[2]).isBetween(year[0], 1200.0);
     }
 
+    /** Annual data have no season: the benchmark is the plain naive forecast and is named so (Nile, R datasets). */
+    @Test
+    void nonSeasonalDataAreBackTestedAgainstThePlainNaiveForecast() {
+        Outlook.Result outlook = Outlook.of(org.annalist.analysis.Reference.dataset("Nile.csv"), 1, 5,
+                Outlook.Bounds.NON_NEGATIVE).orElseThrow();
+        assertThat(outlook.backtest()).hasSize(4);
+        assertThat(outlook.backtest()).extracting(Outlook.Score::model).contains("naive")
+                .noneMatch(m -> m.contains("seasonal"));
+        assertThat(outlook.origins()).isEqualTo(8);
+    }
+
     @Test
     void aSeriesTooShortForTheBacktestGetsEtsByAiccAndSaysSo() {
         double[] y = new double[30];
