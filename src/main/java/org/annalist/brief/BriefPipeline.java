@@ -100,11 +100,7 @@ public final class BriefPipeline {
         List<Figure> figures = figures(series, findings, view);
         byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
                 figures, request.generatedAt(), documentId(read.sha256(), series.name()));
-        try {
-            AtomicFiles.write(request.output(), pdf);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + request.output(), e);
-        }
+        write(request.output(), pdf);
         return new Brief(request.output(), series.name(), findings, List.copyOf(warnings), figures);
     }
 
@@ -131,12 +127,16 @@ public final class BriefPipeline {
         byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
                 figures, request.generatedAt(), documentId(read.sha256(), String.join("|",
                         series.stream().map(Series::name).toList())));
-        try {
-            AtomicFiles.write(request.output(), pdf);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + request.output(), e);
-        }
+        write(request.output(), pdf);
         return new MultiBrief(request.output(), findings, check, List.copyOf(figures));
+    }
+
+    private static void write(Path output, byte[] pdf) {
+        try {
+            AtomicFiles.write(output, pdf);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + output, e);
+        }
     }
 
     private static Masthead masthead(BriefRequest request) {

@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import org.annalist.findings.Analyst;
 import org.annalist.narrative.Masthead;
 import org.annalist.narrative.MultiBriefViews;
 
@@ -88,9 +89,11 @@ public record BriefSpec(Path file, List<Entry> briefs) {
             return Path.of(name);
         }
 
-        private static String fileSafe(String s) {
-            return s.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
-        }
+    }
+
+    /** A name as it can stand in a file name: {@code Long-haul} → {@code long-haul}. */
+    static String fileSafe(String s) {
+        return s.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
     }
 
     public BriefSpec {
@@ -227,13 +230,14 @@ public record BriefSpec(Path file, List<Entry> briefs) {
         Optional<Integer> horizon = optionalText(spec, m, "horizon").map(t -> {
             try {
                 int h = Integer.parseInt(t);
-                if (h >= 0 && h <= 1461) {
+                if (h >= 0 && h <= Analyst.MAX_HORIZON) {
                     return h;
                 }
             } catch (NumberFormatException e) {
                 // reported below
             }
-            throw problemAt(spec, m.entries().get("horizon"), "horizon '" + t + "'; expected a whole number from 0 to 1461");
+            throw problemAt(spec, m.entries().get("horizon"), "horizon '" + t + "'; expected a whole number from 0 to "
+                    + Analyst.MAX_HORIZON);
         });
         Set<SideOutputs.Kind> sides = SideOutputs.none();
         YamlTree.Node sideNode = m.entries().get("side_outputs");

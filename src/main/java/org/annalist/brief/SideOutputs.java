@@ -47,8 +47,7 @@ public final class SideOutputs {
         String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
         Path folder = brief.file().toAbsolutePath().getParent();
         for (int i = 0; i < series.size(); i++) {
-            String name = series.get(i).name().toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-");
-            writeData(folder, stem + "-" + name, brief.findings().get(i), series.get(i), kinds);
+            writeData(folder, stem + "-" + BriefSpec.fileSafe(series.get(i).name()), brief.findings().get(i), series.get(i), kinds);
         }
         writeCharts(folder, stem, brief.figures(), kinds);
     }

@@ -15,9 +15,6 @@ import picocli.CommandLine.Option;
 /** The choices a user can make for the analysis instead of leaving them to the data. */
 final class AnalysisOptions {
 
-    /** Four years of daily periods: beyond that no interval means anything. */
-    static final int MAX_HORIZON = 1461;
-
     enum FormChoice { auto, additive, multiplicative }
 
     enum MeasureChoice { auto, flow, level }
@@ -58,8 +55,8 @@ final class AnalysisOptions {
     }
 
     Analyst analyst() {
-        if (horizon != null && (horizon < 0 || horizon > MAX_HORIZON)) {
-            throw new UserInputException("--horizon: expected a number of periods from 0 to " + MAX_HORIZON
+        if (horizon != null && (horizon < 0 || horizon > Analyst.MAX_HORIZON)) {
+            throw new UserInputException("--horizon: expected a number of periods from 0 to " + Analyst.MAX_HORIZON
                     + ", got " + horizon);
         }
         return new Analyst(switch (form) {

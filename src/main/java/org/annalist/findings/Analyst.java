@@ -38,6 +38,9 @@ public final class Analyst {
     private final List<Holiday> holidays;
     private final Optional<Integer> horizon;
 
+    /** The longest outlook asked for: four years of daily periods, beyond which no interval means anything. */
+    public static final int MAX_HORIZON = 1461;
+
     public Analyst() {
         this(Optional.empty(), Optional.empty(), List.of(), Optional.empty());
     }

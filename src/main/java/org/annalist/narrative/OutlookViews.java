@@ -1,5 +1,6 @@
 package org.annalist.narrative;
 
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import org.annalist.findings.OutlookFinding;
@@ -75,29 +76,21 @@ final class OutlookViews {
 
     /** The sum (flow) or mean (level) of a calendar year with every period observed, or null. */
     private static Double completeYear(Series series, int year, boolean sum) {
+        Period p = Period.containing(series.frequency(), LocalDate.of(year, 1, 1));
+        if (p.year() != year) {
+            p = p.plus(1); // an ISO week holding 1 January may belong to the year before
+        }
         double total = 0;
         int count = 0;
-        for (int i = 0; i < series.size(); i++) {
-            if (series.period(i).year() == year) {
-                if (series.isMissing(i)) {
-                    return null;
-                }
-                total += series.value(i);
-                count++;
+        for (; p.year() == year; p = p.plus(1)) {
+            int i = series.indexOf(p);
+            if (i < 0 || series.isMissing(i)) {
+                return null;
             }
+            total += series.value(i);
+            count++;
         }
-        int expected = 0;
-        Period first = null;
-        for (int i = 0; i < series.size() && first == null; i++) {
-            first = series.period(i).year() == year ? series.period(i) : null;
-        }
-        if (first == null || first.seasonalPosition() != 1 && series.frequency().seasonalPeriod() > 1) {
-            return null; // the year starts before the data
-        }
-        for (Period p = first; p.year() == year; p = p.plus(1)) {
-            expected++;
-        }
-        return count < expected ? null : sum ? total : total / count;
+        return count == 0 ? null : sum ? total : total / count;
     }
 
     /** The findings write periods as the data do ({@code 2022-08}); the brief writes them in words. */
