@@ -27,7 +27,8 @@ import org.annalist.series.Series;
  * without its outlook, automatic ETS, the outlook, Bai–Perron and PELT), the demo brief, and the
  * batch figures (10,000 series analysed, 200 briefs in one batch):
  * {@code java -cp target/annalist.jar org.annalist.cli.Benchmark}. Warm figures: each measurement
- * runs after a warm-up of the same work, single-threaded.
+ * runs after a warm-up of the same work, single-threaded. The bulk figures are also taken in fresh
+ * JVMs with a bounded heap, as a user's run would see them, with the process's peak memory.
  */
 public final class Benchmark {
 
@@ -35,6 +36,10 @@ public final class Benchmark {
     }
 
     public static void main(String[] args) throws Exception {
+        if (args.length > 0) {
+            child(args);
+            return;
+        }
         Random random = new Random(42);
         double[] monthly144 = synthetic(random, 144);
         Stl stl = Stl.withPeriod(12).with(Stl.Robustness.ON);
@@ -48,11 +53,7 @@ public final class Benchmark {
         }
         double stlMs = (System.nanoTime() - start) / 1e6 / stlRuns;
 
-        Series[] series = new Series[1000];
-        for (int i = 0; i < series.length; i++) {
-            series[i] = Series.builder("s" + i, Frequency.MONTHLY).append(Period.month(2005, 1), synthetic(random, 240))
-                    .snapshot();
-        }
+        Series[] series = syntheticMonthly(random, 1000);
         Analyst analyst = new Analyst().withoutOutlook();
         for (int i = 0; i < 300; i++) {
             analyst.analyse(series[i]);
@@ -130,27 +131,26 @@ public final class Benchmark {
                 bpLevelMs, bpSlopeMs);
         System.out.printf(Locale.ROOT, "PELT, n = 3,650 daily, minimum regime 7:                 %.1f ms (warm)%n", peltMs);
         briefs();
-        batches(random);
+        batches();
     }
 
+    /** The heap the fresh JVMs of the bulk figures get: the bound the figures are claimed under. */
+    private static final String CHILD_HEAP = "-Xmx512m";
+
     /**
-     * The monthly routine at scale: 200 single-series briefs in one batch on a pool sized to the
-     * cores (wall time and the heap's peak), and the analysis without outlook or PDF of 10,000
-     * monthly series of 20 years on all cores.
+     * The monthly routine at scale: the analysis without outlook or PDF of 10,000 monthly series of
+     * 20 years on all cores, warm in this JVM and in a fresh JVM (JIT compilation included), and
+     * 200 single-series briefs in one batch in a fresh JVM; the fresh JVMs run with
+     * {@value #CHILD_HEAP} and report their peak resident memory (the whole process, not the heap).
      */
-    private static void batches(Random random) throws Exception {
+    private static void batches() throws Exception {
         int cores = Runtime.getRuntime().availableProcessors();
-        Series[] many = new Series[10_000];
-        for (int i = 0; i < many.length; i++) {
-            many[i] = Series.builder("s" + i, Frequency.MONTHLY).append(Period.month(2005, 1), synthetic(random, 240))
-                    .snapshot();
-        }
-        Analyst bulk = new Analyst().withoutOutlook();
-        long start = System.nanoTime();
-        java.util.Arrays.stream(many).parallel().forEach(bulk::analyse);
-        double analysisSeconds = (System.nanoTime() - start) / 1e9;
-        System.out.printf(Locale.ROOT, "Analysis without outlook or PDF, 10,000 monthly series of 20 years, %d cores: %.1f s%n",
-                cores, analysisSeconds);
+        double warmSeconds = analyseMany(syntheticMonthly(new Random(4242), 10_000));
+        System.out.printf(Locale.ROOT, "Analysis without outlook or PDF, 10,000 monthly series of 20 years, %d cores, "
+                + "warm in this JVM: %.1f s%n", cores, warmSeconds);
+        String[] bulk = inFreshJvm("--bulk-analysis");
+        System.out.printf(Locale.ROOT, "  the same in a fresh JVM (%s), JIT warm-up included:      %s s, peak RSS %s MB%n",
+                CHILD_HEAP, bulk[0], bulk[1]);
 
         Path data = Path.of("demo-data/quennelmark-guest-nights.csv").toAbsolutePath();
         if (!Files.exists(data)) {
@@ -167,22 +167,74 @@ public final class Benchmark {
         }
         Path spec = folder.resolve("briefs.yaml");
         Files.writeString(spec, yaml);
-        for (java.lang.management.MemoryPoolMXBean pool : java.lang.management.ManagementFactory.getMemoryPoolMXBeans()) {
-            pool.resetPeakUsage();
+        String[] batch = inFreshJvm("--batch", spec.toString());
+        System.out.printf(Locale.ROOT, "Batch of 200 single-series briefs in a fresh JVM (%s), %d threads: %s made, "
+                + "%s s wall, peak RSS %s MB%n", CHILD_HEAP, cores, batch[2], batch[0], batch[1]);
+    }
+
+    /** Runs this class in a fresh JVM for one figure; its last line holds seconds, peak RSS and a count. */
+    private static String[] inFreshJvm(String... arguments) throws Exception {
+        String jar = Path.of(Benchmark.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toString();
+        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                CHILD_HEAP, "-cp", jar, Benchmark.class.getName()));
+        command.addAll(List.of(arguments));
+        Process p = new ProcessBuilder(command).redirectErrorStream(true).start();
+        String output = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        if (p.waitFor() != 0) {
+            throw new IllegalStateException("the benchmark's child JVM failed: " + command + "\n" + output);
         }
-        start = System.nanoTime();
-        List<org.annalist.brief.Batch.Outcome> outcomes = org.annalist.brief.Batch.run(
-                org.annalist.brief.BriefSpec.read(spec), cores, o -> { });
-        double batchSeconds = (System.nanoTime() - start) / 1e9;
-        long peak = 0;
-        for (java.lang.management.MemoryPoolMXBean pool : java.lang.management.ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == java.lang.management.MemoryType.HEAP) {
-                peak += pool.getPeakUsage().getUsed();
+        String[] lines = output.strip().split("\n");
+        return lines[lines.length - 1].strip().split(" ");
+    }
+
+    /** What a fresh JVM started by {@link #inFreshJvm} measures: prints seconds, peak RSS in MB and a count. */
+    private static void child(String[] args) throws Exception {
+        long start = System.nanoTime();
+        long count;
+        if (args[0].equals("--bulk-analysis")) {
+            Series[] many = syntheticMonthly(new Random(4242), 10_000);
+            start = System.nanoTime();
+            analyseMany(many);
+            count = many.length;
+        } else {
+            int cores = Runtime.getRuntime().availableProcessors();
+            count = org.annalist.brief.Batch.run(org.annalist.brief.BriefSpec.read(Path.of(args[1])), cores, o -> { })
+                    .stream().filter(org.annalist.brief.Batch.Outcome::done).count();
+        }
+        double seconds = (System.nanoTime() - start) / 1e9;
+        System.out.printf(Locale.ROOT, "%.1f %s %d%n", seconds, peakResidentMegabytes(), count);
+    }
+
+    /** The process's peak resident set (Linux {@code VmHWM}); "n/a" where /proc does not tell. */
+    private static String peakResidentMegabytes() {
+        try {
+            for (String line : Files.readAllLines(Path.of("/proc/self/status"))) {
+                if (line.startsWith("VmHWM:")) {
+                    long kilobytes = Long.parseLong(line.replaceAll("[^0-9]", ""));
+                    return Long.toString(kilobytes >> 10);
+                }
             }
+        } catch (java.io.IOException | NumberFormatException notLinux) {
+            return "n/a";
         }
-        System.out.printf(Locale.ROOT, "Batch of %d single-series briefs (%d made), %d threads, max heap %d MB: %.1f s wall, "
-                + "heap peak %d MB%n", outcomes.size(), outcomes.stream().filter(org.annalist.brief.Batch.Outcome::done).count(),
-                cores, Runtime.getRuntime().maxMemory() >> 20, batchSeconds, peak >> 20);
+        return "n/a";
+    }
+
+    private static Series[] syntheticMonthly(Random random, int count) {
+        Series[] many = new Series[count];
+        for (int i = 0; i < many.length; i++) {
+            many[i] = Series.builder("s" + i, Frequency.MONTHLY).append(Period.month(2005, 1), synthetic(random, 240))
+                    .snapshot();
+        }
+        return many;
+    }
+
+    /** Seconds to analyse every series without outlook, on all cores. */
+    private static double analyseMany(Series[] many) {
+        Analyst bulk = new Analyst().withoutOutlook();
+        long start = System.nanoTime();
+        java.util.Arrays.stream(many).parallel().forEach(bulk::analyse);
+        return (System.nanoTime() - start) / 1e9;
     }
 
     /**

@@ -1,6 +1,7 @@
 package org.annalist.analysis.breaks;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -89,11 +90,14 @@ public final class BaiPerron {
         }
         for (int m = 1; m <= maxM; m++) {
             double[] previous = best[m - 1];
-            for (int j = 0; j < n; j++) {
-                double bestHere = Double.POSITIVE_INFINITY;
-                int bestFrom = -1;
+            Arrays.fill(best[m], Double.POSITIVE_INFINITY);
+            Arrays.fill(from[m], -1);
+            // the most breaks are only ever read at the series' end; fewer are also read earlier
+            for (int j = m == maxM ? n - 1 : (m + 1) * h - 1; j < n; j++) {
                 double[] ending = byEnd[j];
                 // the last regime is i+1..j with j − i ≥ h; the m earlier regimes need m·h values
+                double bestHere = Double.POSITIVE_INFINITY;
+                int bestFrom = -1;
                 for (int i = m * h - 1; i <= j - h; i++) {
                     double candidate = previous[i] + ending[i + 1];
                     if (candidate < bestHere) {

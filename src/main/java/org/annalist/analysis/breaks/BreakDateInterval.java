@@ -1,7 +1,7 @@
 package org.annalist.analysis.breaks;
 
 import java.util.Arrays;
-import java.util.Random;
+import org.annalist.analysis.SeededNormals;
 
 /**
  * A 95 % interval for a break date, by Bai (1997, <i>Review of Economics and Statistics</i> 79,
@@ -49,14 +49,14 @@ public final class BreakDateInterval {
         int left = Math.min(roomRight, reach);
         double dt = 1.0 / STEPS_PER_PERIOD;
         double sqrtDt = Math.sqrt(dt);
-        Random random = new Random(SEED);
+        SeededNormals random = new SeededNormals(SEED);
         double[] error = new double[REPLICATIONS];
         for (int r = 0; r < REPLICATIONS; r++) {
             double best = 0;
             double at = 0;
             double brownian = 0;
             for (int step = 1; step <= right * STEPS_PER_PERIOD; step++) {
-                brownian += sqrtDt * random.nextGaussian();
+                brownian += sqrtDt * random.next();
                 double c = step * dt * d * d + 2 * d * sdAfter * brownian;
                 if (c < best) {
                     best = c;
@@ -65,7 +65,7 @@ public final class BreakDateInterval {
             }
             brownian = 0;
             for (int step = 1; step <= left * STEPS_PER_PERIOD; step++) {
-                brownian += sqrtDt * random.nextGaussian();
+                brownian += sqrtDt * random.next();
                 double c = step * dt * d * d + 2 * d * sdBefore * brownian;
                 if (c < best) {
                     best = c;

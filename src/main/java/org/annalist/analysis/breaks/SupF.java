@@ -1,6 +1,6 @@
 package org.annalist.analysis.breaks;
 
-import java.util.Random;
+import org.annalist.analysis.SeededNormals;
 import org.annalist.analysis.TestResult;
 
 /**
@@ -57,7 +57,7 @@ public final class SupF {
         double[] observed = statistic(new SegmentCost(y, model), y.length, h);
         int start = (int) observed[1];
         double phi = Math.max(0, Math.min(0.95, residualLag1(y, model)));
-        Random random = new Random(SEED);
+        SeededNormals random = new SeededNormals(SEED);
         double[] noise = new double[y.length];
         SegmentCost cost = new SegmentCost(noise, model);
         double innovationSd = Math.sqrt(1 - phi * phi);
@@ -65,9 +65,9 @@ public final class SupF {
         int limit = (int) Math.ceil(0.05 * (replications + 1)) - 1;   // beyond this p ≥ 5 %
         int run = 0;
         for (int r = 0; r < replications; r++) {
-            double e = random.nextGaussian();
+            double e = random.next();
             for (int i = 0; i < y.length; i++) {
-                e = i == 0 ? e : phi * e + innovationSd * random.nextGaussian();
+                e = i == 0 ? e : phi * e + innovationSd * random.next();
                 noise[i] = Double.isNaN(y[i]) ? Double.NaN : e;
             }
             cost.load(noise);

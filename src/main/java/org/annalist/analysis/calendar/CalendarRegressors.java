@@ -29,15 +29,13 @@ public final class CalendarRegressors {
         }
         LocalDate from = period.startDate();
         LocalDate to = period.endDate();
-        int inside = 0;
+        long first = from.toEpochDay();
+        long last = to.toEpochDay();
+        long inside = 0;
         for (int year = from.getYear(); year <= to.getYear(); year++) {
-            LocalDate easter = Easter.sunday(year);
-            for (int d = 1; d <= window; d++) {
-                LocalDate day = easter.minusDays(d);
-                if (!day.isBefore(from) && !day.isAfter(to)) {
-                    inside++;
-                }
-            }
+            long easter = Easter.sunday(year).toEpochDay();
+            // the window's days easter − window .. easter − 1 that the period covers
+            inside += Math.max(0, Math.min(easter - 1, last) - Math.max(easter - window, first) + 1);
         }
         return inside / (double) window;
     }

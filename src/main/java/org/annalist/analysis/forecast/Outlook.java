@@ -6,8 +6,8 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import java.util.Random;
 import org.annalist.analysis.OrderStatistics;
+import org.annalist.analysis.SeededNormals;
 
 /**
  * The outlook: four candidate methods — the best ETS model by AICc ({@link EtsSelection}), Theta,
@@ -334,11 +334,11 @@ public final class Outlook {
     }
 
     static double[][] standardNormals(int paths, int h, long seed) {
-        Random random = new Random(seed);
+        SeededNormals random = new SeededNormals(seed);
         double[][] z = new double[paths][h];
         for (double[] row : z) {
             for (int k = 0; k < h; k++) {
-                row[k] = random.nextGaussian();
+                row[k] = random.next();
             }
         }
         return z;
