@@ -6,6 +6,10 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
+import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -22,6 +26,25 @@ class AtomicFilesTest {
         try (var files = Files.list(folder)) {
             assertThat(files).containsExactly(target);
         }
+    }
+
+    @Test
+    void aNewFileGetsThePermissionsOfAnOrdinaryNewFileNotOwnerOnly() throws IOException {
+        Assumptions.assumeTrue(folder.getFileSystem().supportedFileAttributeViews().contains("posix"));
+        Path ordinary = Files.createFile(folder.resolve("ordinary.txt"));   // as the user's umask makes it
+        Path target = folder.resolve("brief.pdf");
+        AtomicFiles.write(target, new byte[] {1});
+        assertThat(Files.getPosixFilePermissions(target)).isEqualTo(Files.getPosixFilePermissions(ordinary));
+    }
+
+    @Test
+    void aReplacedFileKeepsItsPermissions() throws IOException {
+        Assumptions.assumeTrue(folder.getFileSystem().supportedFileAttributeViews().contains("posix"));
+        Path target = Files.writeString(folder.resolve("brief.pdf"), "old");
+        Set<PosixFilePermission> groupReadable = PosixFilePermissions.fromString("rw-r-----");
+        Files.setPosixFilePermissions(target, groupReadable);
+        AtomicFiles.write(target, "new".getBytes());
+        assertThat(Files.getPosixFilePermissions(target)).isEqualTo(groupReadable);
     }
 
     @Test
