@@ -119,16 +119,18 @@ public final class BriefPipeline {
         MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(read), masthead, check, sortBy);
         String xhtml = new TemplateEngine(request.templates())
                 .render(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
-        List<Figure> figures = new ArrayList<>();
-        figures.add(SmallMultiplesChart.of(series, findings));
+        Figure multiples = SmallMultiplesChart.of(series, findings);
+        List<Figure> overviews = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
-            figures.add(new Figure("overview-" + i, OverviewChart.of(series.get(i), findings.get(i)).chart()));
+            overviews.add(new Figure("overview-" + i, OverviewChart.of(series.get(i), findings.get(i)).chart()));
         }
+        List<Figure> figures = new ArrayList<>(overviews);
+        figures.add(0, multiples);
         byte[] pdf = renderer.render(xhtml, request.input().toAbsolutePath().getParent().toUri().toString(),
                 figures, request.generatedAt(), documentId(read.sha256(), String.join("|",
                         series.stream().map(Series::name).toList())));
         write(request.output(), pdf);
-        return new MultiBrief(request.output(), findings, check, List.copyOf(figures));
+        return new MultiBrief(request.output(), findings, check, multiples, List.copyOf(overviews));
     }
 
     private static void write(Path output, byte[] pdf) {
@@ -145,8 +147,12 @@ public final class BriefPipeline {
                 request.logo().map(p -> p.toAbsolutePath().toUri().toString()));
     }
 
-    /** The multi-series brief made: where it is, each series' findings, the parts-and-total check, its charts. */
-    public record MultiBrief(Path file, List<Findings> findings, Optional<PartsCheck> check, List<Figure> figures) {
+    /**
+     * The multi-series brief made: where it is, each series' findings, the parts-and-total check,
+     * its charts (the small multiples, and each series' overview in the order of {@code findings}).
+     */
+    public record MultiBrief(Path file, List<Findings> findings, Optional<PartsCheck> check, Figure multiples,
+                             List<Figure> overviews) {
     }
 
     /** The charts the template places; those the view does not draw are left out. */

@@ -20,7 +20,8 @@ import org.annalist.series.Series;
  * Files written beside a brief on request, named after it: {@code NAME.findings.json} (the
  * findings schema), {@code NAME.components.csv} (period, observed, trend-cycle, seasonal,
  * irregular, seasonally adjusted; empty cells where not decomposed) and {@code NAME-CHART.svg}; for a
- * combined brief the data files per series, {@code NAME-SERIES.findings.json} and so on.
+ * combined brief its small multiples ({@code NAME-multiples.svg}) and per series the data files and
+ * the overview chart: {@code NAME-SERIES.findings.json}, …, {@code NAME-SERIES-overview.svg}.
  */
 public final class SideOutputs {
 
@@ -42,14 +43,16 @@ public final class SideOutputs {
         writeCharts(folder, stem, brief.figures(), kinds);
     }
 
-    /** For a combined brief: the data files per series ({@code NAME-SERIES.findings.json}, …) and its charts. */
+    /** For a combined brief: its small multiples, and per series the data files and the overview chart. */
     static void write(BriefPipeline.MultiBrief brief, List<Series> series, Set<Kind> kinds) {
         String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
         Path folder = brief.file().toAbsolutePath().getParent();
+        writeCharts(folder, stem, List.of(brief.multiples()), kinds);
         for (int i = 0; i < series.size(); i++) {
-            writeData(folder, stem + "-" + BriefSpec.fileSafe(series.get(i).name()), brief.findings().get(i), series.get(i), kinds);
+            String seriesStem = stem + "-" + BriefSpec.fileSafe(series.get(i).name());
+            writeData(folder, seriesStem, brief.findings().get(i), series.get(i), kinds);
+            writeCharts(folder, seriesStem, List.of(new Figure("overview", brief.overviews().get(i).chart())), kinds);
         }
-        writeCharts(folder, stem, brief.figures(), kinds);
     }
 
     private static void writeData(Path folder, String stem, Findings findings, Series series,

@@ -91,9 +91,15 @@ public final class ChartStyle {
         return axis;
     }
 
-    /** An arrow to (x, y) from above (for a high value) or below, carrying {@code label} in the 8 pt font. */
+    /**
+     * An arrow to (x, y) from above (for a high value) or below, carrying {@code label} in the 8 pt
+     * font. The label is centred on the arrow, except near either end of the time axis, where it
+     * would be cut by the plot's edge: there it extends inwards from the arrow.
+     *
+     * @param across where x lies along the axis, 0 at the first period and 1 at the last
+     */
     public static org.jfree.chart.annotations.XYPointerAnnotation pointer(String label, double x, double y,
-                                                                          boolean fromAbove) {
+                                                                          boolean fromAbove, double across) {
         org.jfree.chart.annotations.XYPointerAnnotation pointer = new org.jfree.chart.annotations.XYPointerAnnotation(
                 label, x, y, fromAbove ? -Math.PI / 2 : Math.PI / 2);
         pointer.setFont(smallFont());
@@ -103,10 +109,23 @@ public final class ChartStyle {
         pointer.setArrowWidth(2.5);
         pointer.setBaseRadius(15);
         pointer.setTipRadius(3);
-        pointer.setTextAnchor(fromAbove ? org.jfree.chart.ui.TextAnchor.BOTTOM_CENTER
-                : org.jfree.chart.ui.TextAnchor.TOP_CENTER);
+        org.jfree.chart.ui.TextAnchor anchor;
+        if (across > 1 - LABEL_EDGE_SHARE) {
+            anchor = fromAbove ? org.jfree.chart.ui.TextAnchor.BOTTOM_RIGHT : org.jfree.chart.ui.TextAnchor.TOP_RIGHT;
+        } else if (across < LABEL_EDGE_SHARE) {
+            anchor = fromAbove ? org.jfree.chart.ui.TextAnchor.BOTTOM_LEFT : org.jfree.chart.ui.TextAnchor.TOP_LEFT;
+        } else {
+            anchor = fromAbove ? org.jfree.chart.ui.TextAnchor.BOTTOM_CENTER : org.jfree.chart.ui.TextAnchor.TOP_CENTER;
+        }
+        pointer.setTextAnchor(anchor);
         return pointer;
     }
+
+    /**
+     * Half a period label ("Sep 2026", about 36 pt at 8 pt) as a share of the narrowest plot a
+     * pointer is drawn in (about 300 pt), rounded up: closer to an end, a centred label is cut.
+     */
+    private static final double LABEL_EDGE_SHARE = 0.07;
 
     /**
      * Replaces the characters the embedded font cannot draw by {@code ?}: chart text drawn by AWT

@@ -58,7 +58,8 @@ public final class IrregularChart {
             double v = irregular[o.index()];
             double y = multiplicative ? 100 * (v - 1) : v;
             plot.addAnnotation(ChartStyle.pointer(ChartStyle.shortLabel(series.period(o.index())),
-                    OverviewChart.midpointMillis(series.period(o.index())), y, y >= 0));
+                    OverviewChart.midpointMillis(series.period(o.index())), y, y >= 0,
+                    OverviewChart.across(series, o.index())));
         }
         return new Figure("irregular", chart);
     }

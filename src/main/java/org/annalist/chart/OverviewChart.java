@@ -126,7 +126,8 @@ public final class OverviewChart {
     private static void markOutliers(XYPlot plot, Series series, List<OutlierFinding> outliers) {
         for (OutlierFinding o : outliers) {
             plot.addAnnotation(ChartStyle.pointer(ChartStyle.shortLabel(series.period(o.index())),
-                    midpointMillis(series.period(o.index())), o.observed(), o.direction().equals("above")));
+                    midpointMillis(series.period(o.index())), o.observed(), o.direction().equals("above"),
+                    across(series, o.index())));
         }
     }
 
@@ -137,6 +138,11 @@ public final class OverviewChart {
             }
         }
         throw new IllegalArgumentException("no period " + label);
+    }
+
+    /** Where period {@code index} lies along the time axis: 0 at the first period, 1 at the last. */
+    static double across(Series series, int index) {
+        return series.size() < 2 ? 0.5 : index / (series.size() - 1.0);
     }
 
     static double startMillis(Period period) {

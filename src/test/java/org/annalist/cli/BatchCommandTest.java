@@ -119,6 +119,8 @@ class BatchCommandTest {
         Path pdf = folder.resolve("regions-2022-12.pdf");
         assertThat(folder.resolve("regions-2022-12-north.findings.json")).exists();
         assertThat(folder.resolve("regions-2022-12-multiples.svg")).exists();
+        String northChart = Files.readString(folder.resolve("regions-2022-12-north-overview.svg"));
+        assertThat(northChart).contains("<svg").isNotEqualTo(Files.readString(folder.resolve("regions-2022-12-south-overview.svg")));
         assertThat(org.annalist.render.PdfConformance.violations(pdf, "2u")).isEmpty();
         assertThat(org.annalist.render.PdfConformance.violations(pdf, "ua1")).isEmpty();
         // sorted by name: after the table's heading the rows name North, South, Total first in that order
