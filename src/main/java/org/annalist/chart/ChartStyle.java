@@ -125,7 +125,7 @@ public final class ChartStyle {
      * Half a period label ("Sep 2026", about 36 pt at 8 pt) as a share of the narrowest plot a
      * pointer is drawn in (about 300 pt), rounded up: closer to an end, a centred label is cut.
      */
-    private static final double LABEL_EDGE_SHARE = 0.07;
+    static final double LABEL_EDGE_SHARE = 0.07;
 
     /**
      * Replaces the characters the embedded font cannot draw by {@code ?}: chart text drawn by AWT

@@ -116,8 +116,10 @@ public final class OverviewChart {
             line.setLabelFont(ChartStyle.smallFont());
             line.setLabelPaint(ChartStyle.INK);
             line.setLabelBackgroundColor(new Color(255, 255, 255, 0));
-            line.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-            line.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+            // right of the line, or left of it near the end of the axis, where the edge would cut it
+            boolean nearEnd = across(series, b.index()) > 1 - ChartStyle.LABEL_EDGE_SHARE;
+            line.setLabelAnchor(nearEnd ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
+            line.setLabelTextAnchor(nearEnd ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
             plot.addDomainMarker(line, Layer.FOREGROUND);
         }
     }
