@@ -65,10 +65,10 @@ public final class OrderStatistics {
                 return;
             }
             double pivot = medianOfThree(a[lo], a[(lo + hi) >>> 1], a[hi]);
-            int right = frontBelow(a, lo, hi, pivot);
+            int right = moveToFront(a, lo, hi, pivot, false);
             if (right == lo) {
                 // the pivot is the smallest value: its copies form the left part
-                right = frontAtMost(a, lo, hi, pivot);
+                right = moveToFront(a, lo, hi, pivot, true);
                 if (right == lo) {
                     throw new IllegalArgumentException("the values hold NaN, which has no rank");
                 }
@@ -94,26 +94,17 @@ public final class OrderStatistics {
         }
     }
 
-    /** Moves the values of a[lo..hi] below {@code pivot} to the front; returns the index after them. */
-    private static int frontBelow(double[] a, int lo, int hi, double pivot) {
+    /**
+     * Moves the values of a[lo..hi] below {@code pivot} (or, with {@code andEqual}, at or below it)
+     * to the front; returns the index after them.
+     */
+    private static int moveToFront(double[] a, int lo, int hi, double pivot, boolean andEqual) {
         int next = lo;
         for (int i = lo; i <= hi; i++) {
             double v = a[i];
             a[i] = a[next];
             a[next] = v;
-            next += v < pivot ? 1 : 0;
-        }
-        return next;
-    }
-
-    /** Moves the values of a[lo..hi] at or below {@code pivot} to the front; returns the index after them. */
-    private static int frontAtMost(double[] a, int lo, int hi, double pivot) {
-        int next = lo;
-        for (int i = lo; i <= hi; i++) {
-            double v = a[i];
-            a[i] = a[next];
-            a[next] = v;
-            next += v <= pivot ? 1 : 0;
+            next += v < pivot || (andEqual && v == pivot) ? 1 : 0;
         }
         return next;
     }
