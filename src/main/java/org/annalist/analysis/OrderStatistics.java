@@ -7,7 +7,7 @@ package org.annalist.analysis;
  *
  * <p>Several ranks are found in one descent: each partition sends every wanted rank to the side
  * that holds it, so the median and the two interval limits of Sen's slope cost little more than
- * the median alone (the multiple-selection idea of Chambers, CACM Algorithm 410, 1971).
+ * the median alone (the partial sorting of Chambers, CACM Algorithm 410, 1971; from memory).
  */
 public final class OrderStatistics {
 
@@ -52,11 +52,12 @@ public final class OrderStatistics {
     /**
      * Rearranges a[lo..hi] so that each of ranks[first..last] (all within lo..hi) holds the value of
      * that rank. The partition moves the values below the pivot to the front with a swap whose
-     * target advances by the comparison's outcome (a Lomuto partition without a branch on the data;
-     * why that pays: Edelkamp &amp; Weiß 2016, "BlockQuicksort: Avoiding Branch Mispredictions in
-     * Quicksort", ESA, from memory): on pairwise slopes a branch on each comparison is mispredicted
-     * about half the time, which made the partition four times slower here. When no value lies below the pivot, the values equal to it are
-     * moved next, so runs of equal values (slopes of rounded data) still make progress.
+     * target advances by the comparison's outcome: a Lomuto partition without a branch on the data
+     * (why that pays: Edelkamp &amp; Weiß 2016, "BlockQuicksort: Avoiding Branch Mispredictions in
+     * Quicksort", ESA; from memory). On pairwise slopes a branch on each comparison is mispredicted
+     * about half the time, which made the partition four times slower here. When no value lies
+     * below the pivot, the values equal to it are moved next, so runs of equal values (slopes of
+     * rounded data) still make progress.
      */
     private static void selectAll(double[] a, int lo, int hi, int[] ranks, int first, int last) {
         while (first <= last && lo < hi) {
