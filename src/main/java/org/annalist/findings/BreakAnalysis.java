@@ -181,8 +181,13 @@ final class BreakAnalysis {
         double levelAfter = log ? Math.exp(after) : after;
         double changePct = 100 * (levelAfter - levelBefore) / Math.abs(levelBefore);
         boolean provisional = to == y.length - 1 && to - start + 1 < 2 * h;   // the latest regime, still short
+        // No regime may be shorter than h, so a break found as close to an end of the series as
+        // that allows may really lie closer still, where the search could not place it: the
+        // interval then reaches that end rather than claim a precision the search did not have.
+        int lower = from == 0 && start - from <= h ? 1 : start + ci.lower();
+        int upper = to == y.length - 1 && to - start + 1 <= h ? to : start + ci.upper();
         return new BreakFinding(series.period(start).label(),
-                List.of(series.period(start + ci.lower()).label(), series.period(start + ci.upper()).label()),
+                List.of(series.period(lower).label(), series.period(upper).label()),
                 levelBefore, levelAfter, changePct, local.statistic(), local.pValue(), provisional, start);
     }
 

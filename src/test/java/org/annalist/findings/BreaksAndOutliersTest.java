@@ -37,6 +37,18 @@ class BreaksAndOutliersTest {
     }
 
     @Test
+    void aBreakInTheLastYearIsProvisionalAndItsIntervalReachesTheSeriesEnd() {
+        // the shift comes 8 months before the end; no regime may be shorter than 12 months, so the
+        // break can be placed no later than 12 months before the end, and the truth lies after that
+        Findings f = new Analyst().withoutOutlook().analyse(series(2, 0.02, t -> t >= 136 ? 1.4 : 1));
+        assertThat(f.breaks()).hasSize(1);
+        BreakFinding b = f.breaks().get(0);
+        assertThat(b.provisional()).isTrue();
+        assertThat(b.ci95().get(1)).isEqualTo(START.plus(143).label());
+        assertThat(covers(b, 136)).as("interval %s covers %s", b.ci95(), START.plus(136)).isTrue();
+    }
+
+    @Test
     void aSingleLevelShiftIsOneDatedBreak() {
         Findings f = new Analyst().analyse(series(1, 0.02, t -> t >= 70 ? 1.25 : 1));
         assertThat(f.breaks()).hasSize(1);
