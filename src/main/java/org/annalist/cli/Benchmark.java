@@ -174,9 +174,8 @@ public final class Benchmark {
 
     /** Runs this class in a fresh JVM for one figure; its last line holds seconds, peak RSS and a count. */
     private static String[] inFreshJvm(String... arguments) throws Exception {
-        String jar = Path.of(Benchmark.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toString();
-        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                CHILD_HEAP, "-cp", jar, Benchmark.class.getName()));
+        List<String> command = javaOnThisJar("-cp", CHILD_HEAP);
+        command.add(Benchmark.class.getName());
         command.addAll(List.of(arguments));
         Process p = new ProcessBuilder(command).redirectErrorStream(true).start();
         String output = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
@@ -268,14 +267,11 @@ public final class Benchmark {
         }
         System.out.printf(Locale.ROOT, "Brief (demo total), warm, max heap %d MB:              %.0f ms per brief; %d pages, %d KB%n",
                 Runtime.getRuntime().maxMemory() >> 20, warmMs, pages, Files.size(pdf) >> 10);
-        String jar = Path.of(Benchmark.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toString();
         for (String[] flags : new String[][] {{}, {"-XX:TieredStopAtLevel=1"}}) {
             double best = Double.POSITIVE_INFINITY;
             for (int i = 0; i < 3; i++) {
-                List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java")
-                        .toString()));
-                command.addAll(List.of(flags));
-                command.addAll(List.of("-jar", jar, "brief", data.toString(), "--series", "Total", "-o", pdf.toString()));
+                List<String> command = javaOnThisJar("-jar", flags);
+                command.addAll(List.of("brief", data.toString(), "--series", "Total", "-o", pdf.toString()));
                 long t0 = System.nanoTime();
                 Process p = new ProcessBuilder(command).redirectErrorStream(true).redirectOutput(ProcessBuilder.Redirect.DISCARD)
                         .start();
@@ -287,6 +283,15 @@ public final class Benchmark {
             System.out.printf(Locale.ROOT, "Brief (demo total), cold, java %s-jar:%s %.2f s wall (best of 3)%n",
                     flags.length == 0 ? "" : String.join(" ", flags) + " ", flags.length == 0 ? "                          " : "", best);
         }
+    }
+
+    /** {@code java FLAGS… -jar|-cp JAR}: this JVM's launcher on the jar this class runs from. */
+    private static List<String> javaOnThisJar(String jarOption, String... flags) throws Exception {
+        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString()));
+        command.addAll(List.of(flags));
+        command.add(jarOption);
+        command.add(Path.of(Benchmark.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toString());
+        return command;
     }
 
     /** A positive monthly series: trend, multiplicative season, noise, an occasional shock. */

@@ -60,11 +60,10 @@ public final class MultiBriefViews {
                 first.percent(c.largestGapPct()), first.percent(PartsCheck.TOLERANCE_PCT)))
                 .orElse(new MultiBriefView.Consistency(false, true, "", "", "", "", first.percent(PartsCheck.TOLERANCE_PCT)));
         Series lead = series.get(0);
-        MultiBriefView.Header header = new MultiBriefView.Header(
-                masthead.title().isEmpty() ? String.join(", ", series.stream().map(Series::name).toList()) : masthead.title(),
+        String names = String.join(", ", series.stream().map(Series::name).toList());
+        MultiBriefView.Header header = new MultiBriefView.Header(masthead.title().isEmpty() ? names : masthead.title(),
                 masthead.organisation(), first.period(lead.start()) + " to " + first.period(lead.end()),
-                first.period(lead.end()), first.timestamp(masthead.generatedAt()),
-                String.join(", ", series.stream().map(Series::name).toList()), masthead.logoUri().orElse(""));
+                first.period(lead.end()), first.timestamp(masthead.generatedAt()), names, masthead.logoUri().orElse(""));
         BriefView.Document document = new BriefView.Document(masthead.language().toLanguageTag(),
                 masthead.paper().css(), masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation(),
                 "time series, " + header.seriesList());

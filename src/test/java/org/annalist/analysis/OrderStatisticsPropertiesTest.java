@@ -49,6 +49,7 @@ class OrderStatisticsPropertiesTest {
     @Test
     void medianOfAnEvenCountIsTheMeanOfTheTwoMiddleValuesAndLeavesTheInputAlone() {
         double[] x = {9, 1, 7, 3};
+        // sorted 1, 3, 7, 9: the median of an even count is the mean of 3 and 7 (common practice)
         assertThat(OrderStatistics.median(x)).isEqualTo(5.0);
         assertThat(x).containsExactly(9, 1, 7, 3);
     }

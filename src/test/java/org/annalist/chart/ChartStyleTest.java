@@ -9,6 +9,7 @@ class ChartStyleTest {
 
     @Test
     void aPointerLabelNearAnEndOfTheAxisExtendsInwardsSoThePlotEdgeCannotCutIt() {
+        // our rule: within ChartStyle.LABEL_EDGE_SHARE (7 %) of either end the label turns inwards
         assertThat(ChartStyle.pointer("Q3 1986", 0, 0, false, 0.99).getTextAnchor()).isEqualTo(TextAnchor.TOP_RIGHT);
         assertThat(ChartStyle.pointer("Q3 1986", 0, 0, true, 0.99).getTextAnchor()).isEqualTo(TextAnchor.BOTTOM_RIGHT);
         assertThat(ChartStyle.pointer("Q1 1960", 0, 0, true, 0.0).getTextAnchor()).isEqualTo(TextAnchor.BOTTOM_LEFT);
