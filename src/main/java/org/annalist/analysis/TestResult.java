@@ -5,12 +5,28 @@ import java.util.Objects;
 /**
  * The outcome of a hypothesis test, as a sentence of the brief cites it.
  *
- * @param method    the test as actually run, e.g. {@code Mann-Kendall (Hamed-Rao corrected)}
+ * @param method    the test as actually run, e.g. {@link Method#MANN_KENDALL_HAMED_RAO}
  * @param statistic the test statistic (z, H, F, …)
  * @param pValue    two-sided unless the test is one-sided by nature
  * @param n         observations the test used
  */
-public record TestResult(String method, double statistic, double pValue, int n) {
+public record TestResult(Method method, double statistic, double pValue, int n) {
+
+    /** The tests the analysis runs, each as actually run (with its variance correction or null distribution). */
+    public enum Method {
+        /** Mann–Kendall with the ties-corrected variance. */
+        MANN_KENDALL,
+        /** Mann–Kendall, variance corrected for the significant rank autocorrelations (Hamed &amp; Rao 1998). */
+        MANN_KENDALL_HAMED_RAO,
+        /** Mann–Kendall, variance corrected for AR(1) serial correlation of the ranks. */
+        MANN_KENDALL_AR1,
+        /** The seasonal Kendall test (Hirsch, Slack &amp; Smith 1982). */
+        SEASONAL_KENDALL,
+        /** The Kruskal–Wallis test of equal distributions across the seasons. */
+        KRUSKAL_WALLIS,
+        /** The sup-F test of a structural break, Monte Carlo p-value under AR(1) noise. */
+        SUP_F_MONTE_CARLO
+    }
 
     public TestResult {
         Objects.requireNonNull(method, "method");

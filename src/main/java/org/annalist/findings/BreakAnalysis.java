@@ -158,7 +158,7 @@ final class BreakAnalysis {
         try {
             return SupF.test(span, model, localMinimum(model, h, from, start, to)).test();
         } catch (IllegalArgumentException tooShort) {
-            return new TestResult("sup-F (Monte Carlo p, AR(1) noise)", Double.NaN, 1, span.length);
+            return new TestResult(TestResult.Method.SUP_F_MONTE_CARLO, Double.NaN, 1, span.length);
         }
     }
 

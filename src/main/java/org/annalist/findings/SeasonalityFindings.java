@@ -21,7 +21,7 @@ final class SeasonalityFindings {
             return new SeasonalityFinding(false, season.period(), null, null, null, formName, null, null, "too short",
                     null, null, null, null, false, null, null, null);
         }
-        return new SeasonalityFinding(season.present(), season.period(), season.strength(), season.test().method(),
+        return new SeasonalityFinding(season.present(), season.period(), season.strength(), TestNames.of(season.test().method()),
                 season.test().pValue(), formName,
                 season.present() ? new SeasonalityFinding.Position(season.peak().position(), season.peak().label()) : null,
                 season.present() ? new SeasonalityFinding.Position(season.trough().position(), season.trough().label())

@@ -53,12 +53,12 @@ final class TrendAnalysis {
         if (seasonal) {
             try {
                 SeasonalKendall.Result sk = SeasonalKendall.test(observed, series.frequency().seasonalPeriod());
-                seasonalKendall = new TrendFinding.Evidence(sk.test().method(), sk.test().statistic(), sk.test().pValue());
+                seasonalKendall = new TrendFinding.Evidence(TestNames.of(sk.test().method()), sk.test().statistic(), sk.test().pValue());
             } catch (IllegalArgumentException notComputable) {
                 seasonalKendall = null;
             }
         }
-        return new TrendFinding(direction, mk.test().method() + " on " + basis, mk.test().statistic(),
+        return new TrendFinding(direction, TestNames.of(mk.test().method()) + " on " + basis, mk.test().statistic(),
                 mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
                 level == 0 ? null : 100 * sen.perYear() / Math.abs(level), basis, seasonalKendall, mk.test().n(),
                 null, latestRegime(series, adjusted, regimeStart));

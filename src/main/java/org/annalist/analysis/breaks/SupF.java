@@ -84,7 +84,7 @@ public final class SupF {
         for (double v : y) {
             n += Double.isNaN(v) ? 0 : 1;
         }
-        return new Result(new TestResult("sup-F (Monte Carlo p, AR(1) noise)", observed[0], p, n), start, phi);
+        return new Result(new TestResult(TestResult.Method.SUP_F_MONTE_CARLO, observed[0], p, n), start, phi);
     }
 
     /** Lag-1 autocorrelation of the residuals of the no-break fit. */

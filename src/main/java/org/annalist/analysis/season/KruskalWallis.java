@@ -60,6 +60,6 @@ public final class KruskalWallis {
         h = correction > 0 ? h / correction : 0;
         // The upper tail directly, so that very small p-values do not round to zero.
         double p = h <= 0 ? 1 : Gamma.regularizedGammaQ((nonEmpty - 1) / 2.0, h / 2);
-        return new TestResult("Kruskal-Wallis", h, Math.max(0, Math.min(1, p)), n);
+        return new TestResult(TestResult.Method.KRUSKAL_WALLIS, h, Math.max(0, Math.min(1, p)), n);
     }
 }

@@ -81,10 +81,10 @@ public final class MannKendall {
         double variance = score.variance() * factor;
         double z = KendallScore.z(score.s(), variance);
         double p = Math.min(1, 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(z)));
-        String method = switch (correction) {
-            case NONE -> "Mann-Kendall";
-            case HAMED_RAO -> "Mann-Kendall (Hamed-Rao corrected)";
-            case AR1_RANKS -> "Mann-Kendall (variance corrected for AR(1) serial correlation)";
+        TestResult.Method method = switch (correction) {
+            case NONE -> TestResult.Method.MANN_KENDALL;
+            case HAMED_RAO -> TestResult.Method.MANN_KENDALL_HAMED_RAO;
+            case AR1_RANKS -> TestResult.Method.MANN_KENDALL_AR1;
         };
         return new Result(new TestResult(method, z, p, n), score.s(), score.variance(), variance,
                 score.s() / (n * (n - 1) / 2.0), correction, factor, lags);

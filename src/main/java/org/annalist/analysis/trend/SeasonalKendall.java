@@ -48,7 +48,7 @@ public final class SeasonalKendall {
         }
         double z = KendallScore.z(s, variance);
         double p = Math.min(1, 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(z)));
-        return new Result(new TestResult("seasonal Kendall", z, p, n), s, variance,
+        return new Result(new TestResult(TestResult.Method.SEASONAL_KENDALL, z, p, n), s, variance,
                 SenSlope.seasonal(x, period, variance));
     }
 }
