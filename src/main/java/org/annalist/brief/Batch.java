@@ -11,7 +11,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.Consumer;
-import org.annalist.analysis.indicators.LatestIndicators;
+import org.annalist.findings.Measure;
 import org.annalist.findings.Analyst;
 import org.annalist.findings.DerivedSeries;
 import org.annalist.ingest.DataProblem;
@@ -229,8 +229,8 @@ public final class Batch {
 
     /** The analysis with the spec's choices for this series: its measure kind and the outlook's horizon. */
     private static Analyst analyst(BriefSpec.Entry e, Series series) {
-        Optional<LatestIndicators.Measure> measure = Optional.ofNullable(e.measures().get(series.name()))
-                .map(m -> m.equals("flow") ? LatestIndicators.Measure.FLOW : LatestIndicators.Measure.LEVEL);
+        Optional<Measure> measure = Optional.ofNullable(e.measures().get(series.name()))
+                .map(m -> m.equals("flow") ? Measure.FLOW : Measure.LEVEL);
         return new Analyst(Optional.empty(), measure, List.of(), e.horizon());
     }
 

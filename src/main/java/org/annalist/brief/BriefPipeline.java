@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.function.UnaryOperator;
+import org.annalist.chart.Captions;
 import org.annalist.chart.Figure;
 import org.annalist.chart.IrregularChart;
 import org.annalist.chart.OutlookChart;
@@ -28,6 +29,7 @@ import org.annalist.ingest.ReadResult;
 import org.annalist.ingest.SeriesFileReader;
 import org.annalist.narrative.BriefView;
 import org.annalist.narrative.BriefViews;
+import org.annalist.narrative.ChartWords;
 import org.annalist.narrative.Masthead;
 import org.annalist.narrative.MultiBriefView;
 import org.annalist.narrative.MultiBriefViews;
@@ -122,7 +124,8 @@ public final class BriefPipeline {
         Figure multiples = SmallMultiplesChart.of(series, findings);
         List<Figure> overviews = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
-            overviews.add(new Figure("overview-" + i, OverviewChart.of(series.get(i), findings.get(i)).chart()));
+            overviews.add(new Figure("overview-" + i, OverviewChart.of(series.get(i), findings.get(i),
+                    captions(series.get(i), findings.get(i))).chart()));
         }
         List<Figure> figures = new ArrayList<>(overviews);
         figures.add(0, multiples);
@@ -157,21 +160,30 @@ public final class BriefPipeline {
 
     /** The charts the template places; those the view does not draw are left out. */
     private static List<Figure> figures(Series series, Findings findings, BriefView view) {
+        Captions captions = captions(series, findings);
         List<Figure> figures = new ArrayList<>();
-        figures.add(OverviewChart.of(series, findings));
+        figures.add(OverviewChart.of(series, findings, captions));
         if (view.charts().profile().drawn()) {
-            figures.add(SeasonalProfileChart.of(findings.seasonality(), series.unit()));
+            figures.add(SeasonalProfileChart.of(findings.seasonality(), captions));
         }
         if (view.charts().years().drawn()) {
-            figures.add(YearOverlayChart.of(series));
+            figures.add(YearOverlayChart.of(series, captions));
         }
         if (view.charts().irregular().drawn()) {
-            figures.add(IrregularChart.of(series, findings));
+            figures.add(IrregularChart.of(series, findings, captions));
         }
         if (findings.outlook() != null) {
-            figures.add(OutlookChart.of(series, findings.outlook()));
+            figures.add(OutlookChart.of(series, findings.outlook(), captions));
         }
         return figures;
+    }
+
+    /** The charts' words, from the narrative. */
+    private static Captions captions(Series series, Findings findings) {
+        return new Captions(ChartWords.observed(), ChartWords.trendCycle(findings), ChartWords.forecast(),
+                ChartWords.forecastMean(), ChartWords.interval(80), ChartWords.interval(95),
+                ChartWords.profileAxis(series, findings), ChartWords.irregularAxis(series, findings),
+                ChartWords.earlierYears(series));
     }
 
     private static List<String> concat(List<String> list, String item) {

@@ -7,11 +7,13 @@ import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 import org.annalist.chart.Figure;
 import org.annalist.findings.Decomposition;
 import org.annalist.findings.Findings;
 import org.annalist.findings.FindingsJson;
+import org.annalist.narrative.JsonTerms;
 import org.annalist.render.AtomicFiles;
 import org.annalist.render.SvgCharts;
 import org.annalist.series.Series;
@@ -60,7 +62,7 @@ public final class SideOutputs {
         try {
             if (kinds.contains(Kind.FINDINGS)) {
                 AtomicFiles.write(folder.resolve(stem + ".findings.json"),
-                        FindingsJson.write(findings).getBytes(StandardCharsets.UTF_8));
+                        FindingsJson.write(findings, JsonTerms.ENGLISH).getBytes(StandardCharsets.UTF_8));
             }
             if (kinds.contains(Kind.COMPONENTS)) {
                 AtomicFiles.write(folder.resolve(stem + ".components.csv"),
@@ -84,12 +86,16 @@ public final class SideOutputs {
         }
     }
 
-    static String components(Series series, Decomposition d) {
+    static String components(Series series, Optional<Decomposition> decomposition) {
+        double[] trendCycle = decomposition.map(Decomposition::trendCycle).orElse(null);
+        double[] seasonal = decomposition.map(Decomposition::seasonal).orElse(null);
+        double[] irregular = decomposition.map(Decomposition::irregular).orElse(null);
+        double[] adjusted = decomposition.map(Decomposition::adjusted).orElse(null);
         StringBuilder csv = new StringBuilder("period,observed,trend_cycle,seasonal,irregular,seasonally_adjusted\n");
         for (int i = 0; i < series.size(); i++) {
             csv.append(series.period(i)).append(',').append(cell(series.value(i)))
-                    .append(',').append(cell(d.trendCycle(), i)).append(',').append(cell(d.seasonal(), i))
-                    .append(',').append(cell(d.irregular(), i)).append(',').append(cell(d.adjusted(), i)).append('\n');
+                    .append(',').append(cell(trendCycle, i)).append(',').append(cell(seasonal, i))
+                    .append(',').append(cell(irregular, i)).append(',').append(cell(adjusted, i)).append('\n');
         }
         return csv.toString();
     }

@@ -1,5 +1,6 @@
 package org.annalist.chart;
 
+import org.annalist.findings.Decomposition;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.series.Series;
@@ -21,10 +22,11 @@ public final class IrregularChart {
     private IrregularChart() {
     }
 
-    public static Figure of(Series series, Findings findings) {
+    public static Figure of(Series series, Findings findings, Captions captions) {
         ChartStyle.install();
-        boolean multiplicative = findings.decomposition().multiplicative();
-        double[] irregular = findings.decomposition().irregular();
+        Decomposition decomposition = findings.decomposition().orElseThrow();
+        boolean multiplicative = decomposition.multiplicative();
+        double[] irregular = decomposition.irregular();
         XYSeries bars = new XYSeries("irregular", false, true);
         for (int i = 0; i < irregular.length; i++) {
             double v = irregular[i];
@@ -32,8 +34,7 @@ public final class IrregularChart {
                     Double.isNaN(v) ? null : multiplicative ? 100 * (v - 1) : v);
         }
         XYSeriesCollection data = new XYSeriesCollection(bars);
-        String axis = multiplicative ? "% against trend and season" : ChartStyle.drawable(series.unit().isEmpty()
-                ? "against trend and season" : series.unit() + " against trend and season");
+        String axis = ChartStyle.drawable(captions.irregularAxis());
         JFreeChart chart = ChartFactory.createXYBarChart(null, null, true, axis, data);
         XYPlot plot = chart.getXYPlot();
         DateAxis time = ChartStyle.timeAxis(series);

@@ -41,7 +41,7 @@ public final class OutlookChart {
     private OutlookChart() {
     }
 
-    public static Figure of(Series series, OutlookFinding outlook) {
+    public static Figure of(Series series, OutlookFinding outlook, Captions captions) {
         ChartStyle.install();
         int last = series.size() - 1;
         while (last > 0 && series.isMissing(last)) {
@@ -51,9 +51,9 @@ public final class OutlookChart {
         int shown = series.frequency().seasonalPeriod() > 1 ? YEARS_SHOWN * cycle : 20;
         int first = Math.max(0, last + 1 - shown);
 
-        YIntervalSeries wide = new YIntervalSeries("95 % interval");
-        YIntervalSeries narrow = new YIntervalSeries("80 % interval");
-        XYSeries mean = new XYSeries("Forecast (mean)", false, true);
+        YIntervalSeries wide = new YIntervalSeries(captions.interval95());
+        YIntervalSeries narrow = new YIntervalSeries(captions.interval80());
+        XYSeries mean = new XYSeries(captions.forecastMean(), false, true);
         Period lastPeriod = series.period(last);
         double lastX = OverviewChart.midpointMillis(lastPeriod);
         double lastValue = series.value(last);
@@ -67,7 +67,7 @@ public final class OutlookChart {
             narrow.add(x, p.mean(), p.lo80(), p.hi80());
             mean.add(x, p.mean());
         }
-        XYSeries observed = new XYSeries("Observed", false, true);
+        XYSeries observed = new XYSeries(captions.observed(), false, true);
         for (int i = first; i <= last; i++) {
             observed.add(OverviewChart.midpointMillis(series.period(i)), series.isMissing(i) ? null : series.value(i));
         }
@@ -116,10 +116,10 @@ public final class OutlookChart {
 
         // the bands' renderer draws no lines, so its own legend items would show nothing: swatches instead
         LegendItemCollection items = new LegendItemCollection();
-        items.add(lineItem("Observed", ChartStyle.INK, ChartStyle.OBSERVED_STROKE));
-        items.add(lineItem("Forecast", ChartStyle.ACCENT, FORECAST_STROKE));
-        items.add(swatch("80 % interval", BAND_80));
-        items.add(swatch("95 % interval", BAND_95));
+        items.add(lineItem(captions.observed(), ChartStyle.INK, ChartStyle.OBSERVED_STROKE));
+        items.add(lineItem(captions.forecast(), ChartStyle.ACCENT, FORECAST_STROKE));
+        items.add(swatch(captions.interval80(), BAND_80));
+        items.add(swatch(captions.interval95(), BAND_95));
         plot.setFixedLegendItems(items);
         LegendTitle legend = chart.getLegend();
         legend.setPosition(RectangleEdge.TOP);

@@ -7,6 +7,7 @@ import java.util.List;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlierFinding;
+import org.annalist.findings.Side;
 import org.annalist.findings.Smoothing;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
@@ -41,17 +42,17 @@ public final class OverviewChart {
     private OverviewChart() {
     }
 
-    public static Figure of(Series series, Findings findings) {
+    public static Figure of(Series series, Findings findings, Captions captions) {
         Smoothing smoothing = findings.smoothing();
         ChartStyle.install();
         XYSeriesCollection data = new XYSeriesCollection();
-        XYSeries observed = new XYSeries("Observed", false, true);
+        XYSeries observed = new XYSeries(captions.observed(), false, true);
         for (int i = 0; i < series.size(); i++) {
             observed.add(midpointMillis(series.period(i)), series.isMissing(i) ? null : series.value(i));
         }
         data.addSeries(observed);
         if (smoothing != null) {
-            XYSeries trend = new XYSeries("Trend-cycle (" + smoothing.method() + ")", false, true);
+            XYSeries trend = new XYSeries(captions.trendCycle(), false, true);
             double[] values = smoothing.trendCycle();
             for (int i = 0; i < values.length; i++) {
                 trend.add(midpointMillis(series.period(i)), Double.isNaN(values[i]) ? null : values[i]);
@@ -128,7 +129,7 @@ public final class OverviewChart {
     private static void markOutliers(XYPlot plot, Series series, List<OutlierFinding> outliers) {
         for (OutlierFinding o : outliers) {
             plot.addAnnotation(ChartStyle.pointer(ChartStyle.shortLabel(series.period(o.index())),
-                    midpointMillis(series.period(o.index())), o.observed(), o.direction().equals("above"),
+                    midpointMillis(series.period(o.index())), o.observed(), o.direction() == Side.ABOVE,
                     across(series, o.index())));
         }
     }

@@ -26,16 +26,15 @@ public final class SeasonalProfileChart {
     private SeasonalProfileChart() {
     }
 
-    public static Figure of(SeasonalityFinding season, String unit) {
+    public static Figure of(SeasonalityFinding season, Captions captions) {
         ChartStyle.install();
-        boolean multiplicative = season.form().equals("multiplicative");
+        boolean multiplicative = season.multiplicative();
         DefaultCategoryDataset data = new DefaultCategoryDataset();
         for (SeasonalityFinding.ProfilePoint p : season.profile()) {
             // rounded as labelled, so that a tiny index reads 0, not −0
             data.addValue(multiplicative ? Math.rint(p.index()) + 0.0 : p.index(), "index", p.label());
         }
-        String axis = multiplicative ? "% against the yearly average" : ChartStyle.drawable(unit.isEmpty()
-                ? "against the yearly average" : unit + " against the yearly average");
+        String axis = ChartStyle.drawable(captions.profileAxis());
         JFreeChart chart = ChartFactory.createBarChart(null, null, axis, data, PlotOrientation.VERTICAL, false, false,
                 false);
         CategoryPlot plot = chart.getCategoryPlot();

@@ -34,7 +34,8 @@ public final class SmallMultiplesChart {
             }
             data.addSeries(observed);
             if (findings.get(k).smoothing() != null) {
-                XYSeries trend = new XYSeries(s.name() + " trend-cycle", false, true);
+                // a data key only: the small multiples have no legend
+                XYSeries trend = new XYSeries(k + "/trend", false, true);
                 double[] values = findings.get(k).smoothing().trendCycle();
                 for (int i = 0; i < values.length; i++) {
                     trend.add(OverviewChart.midpointMillis(s.period(i)), Double.isNaN(values[i]) ? null : values[i]);

@@ -29,7 +29,7 @@ public final class YearOverlayChart {
     private YearOverlayChart() {
     }
 
-    public static Figure of(Series series) {
+    public static Figure of(Series series, Captions captions) {
         ChartStyle.install();
         int period = series.frequency().seasonalPeriod();
         Map<Integer, XYSeries> byYear = new TreeMap<>();
@@ -75,7 +75,7 @@ public final class YearOverlayChart {
             }
         }
         if (years.length > 2) {
-            data.getSeries(0).setKey(years[0] + " to " + years[latest - 2] + " (thin)");
+            data.getSeries(0).setKey(captions.earlierYears());
         }
         plot.setRenderer(renderer);
         LegendTitle legend = chart.getLegend();

@@ -5,8 +5,8 @@ import java.util.List;
 import java.util.Optional;
 import org.annalist.analysis.calendar.Holiday;
 import org.annalist.ingest.HolidayFile;
-import org.annalist.analysis.decompose.ModelForm;
-import org.annalist.analysis.indicators.LatestIndicators;
+import org.annalist.findings.Form;
+import org.annalist.findings.Measure;
 import org.annalist.analysis.calendar.PeriodLength;
 import org.annalist.findings.Analyst;
 import org.annalist.series.Series;
@@ -61,12 +61,12 @@ final class AnalysisOptions {
         }
         return new Analyst(switch (form) {
             case auto -> Optional.empty();
-            case additive -> Optional.of(ModelForm.Form.ADDITIVE);
-            case multiplicative -> Optional.of(ModelForm.Form.MULTIPLICATIVE);
+            case additive -> Optional.of(Form.ADDITIVE);
+            case multiplicative -> Optional.of(Form.MULTIPLICATIVE);
         }, switch (measure) {
             case auto -> Optional.empty();
-            case flow -> Optional.of(LatestIndicators.Measure.FLOW);
-            case level -> Optional.of(LatestIndicators.Measure.LEVEL);
+            case flow -> Optional.of(Measure.FLOW);
+            case level -> Optional.of(Measure.LEVEL);
         }, holidays == null ? List.of() : HolidayFile.read(holidays).stream()
                 .map(h -> new Holiday(h.name(), h.days())).toList(), Optional.ofNullable(horizon));
     }

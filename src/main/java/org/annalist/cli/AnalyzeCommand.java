@@ -9,6 +9,8 @@ import org.annalist.findings.Analyst;
 import org.annalist.findings.DerivedSeries;
 import org.annalist.findings.Findings;
 import org.annalist.findings.FindingsJson;
+import org.annalist.narrative.AnalystNotes;
+import org.annalist.narrative.JsonTerms;
 import org.annalist.ingest.ReadResult;
 import org.annalist.series.Series;
 import picocli.CommandLine.Command;
@@ -79,7 +81,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         }
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
-            out.print(FindingsJson.write(findings.size() == 1 ? findings.get(0) : findings));
+            out.print(FindingsJson.write(findings.size() == 1 ? findings.get(0) : findings, JsonTerms.ENGLISH));
         } else {
             out.print(AnalystNotes.all(findings));
         }

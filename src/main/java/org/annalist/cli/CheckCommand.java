@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.annalist.brief.SeriesCheck;
 import org.annalist.findings.FindingsJson;
+import org.annalist.narrative.JsonTerms;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.ReadResult;
 import picocli.CommandLine.Command;
@@ -38,7 +39,7 @@ final class CheckCommand implements Callable<Integer> {
         ReadResult read = input.read();
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
-            out.print(FindingsJson.write(SeriesCheck.of(read)));
+            out.print(FindingsJson.write(SeriesCheck.of(read), JsonTerms.ENGLISH));
         } else {
             printText(read, out);
         }

@@ -2,7 +2,6 @@ package org.annalist.findings;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.TestResult;
 import org.annalist.analysis.breaks.BaiPerron;
 import org.annalist.analysis.breaks.BreakDateInterval;
@@ -34,13 +33,12 @@ final class BreakAnalysis {
     }
 
     /** @param screened working-scale adjusted values with outliers replaced, NaN where missing */
-    static Result of(Series series, double[] screened, boolean log, List<String> notes) {
+    static Result of(Series series, double[] screened, boolean log, List<Caveat> notes) {
         int n = screened.length;
         int h = minimumRegime(series.frequency());
         if (series.frequency() == Frequency.DAILY || series.frequency() == Frequency.BUSINESS_DAILY) {
             // The weekday pattern is removed, but not the pattern of the year, whose waves would read as breaks.
-            notes.add("Structural changes are not searched in daily data, whose yearly pattern is not yet taken out; "
-                    + "aggregate to weeks or months (--aggregate) to look for them.");
+            notes.add(new Caveat.BreaksNotSearchedInDailyData());
             return new Result(List.of(), List.of(), "not searched in daily data (the yearly pattern is not removed)", 0);
         }
         if (n < 2 * h) {

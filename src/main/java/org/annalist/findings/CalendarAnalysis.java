@@ -1,11 +1,7 @@
 package org.annalist.findings;
 
-import java.time.LocalDate;
-import java.time.format.DateTimeFormatter;
-import java.time.format.TextStyle;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.annalist.analysis.calendar.CalendarEffects;
 import org.annalist.analysis.calendar.CalendarRegressors;
@@ -17,14 +13,11 @@ import org.annalist.series.Period;
 import org.annalist.series.Series;
 
 /**
- * The calendar finding: Easter dates, the estimated calendar effects, and plain sentences on how
- * the calendar of the latest period differs from a year earlier and how much of the year-on-year
- * change that explains.
+ * The calendar finding: Easter dates, the estimated calendar effects (kept when significant at
+ * {@link DecisionRules#ALPHA}), and how the calendar of the latest period differs from a year
+ * earlier and how much of the year-on-year change that explains.
  */
 final class CalendarAnalysis {
-
-    private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("d MMMM yyyy", Locale.ENGLISH);
-    private static final String[] COUNT = {"no", "one", "two", "three", "four", "five"};
 
     private CalendarAnalysis() {
     }
@@ -42,85 +35,69 @@ final class CalendarAnalysis {
         for (int year = Math.max(1583, series.start().year()); year <= series.end().year(); year++) {
             easter.add(new CalendarFinding.EasterDate(year, Easter.sunday(year).toString()));
         }
-        Optional<CalendarEffects.Result> fit = Optional.empty();
-        if (workingIrregular != null) {
-            try {
-                fit = Optional.of(CalendarEffects.estimate(workingIrregular, series.start(),
-                        CalendarRegressors.DEFAULT_EASTER_WINDOW, holidays));
-            } catch (IllegalArgumentException tooShort) {
-                fit = Optional.empty();
-            }
-        }
+        Optional<CalendarEffects.Result> fit = workingIrregular == null ? Optional.empty()
+                : CalendarEffects.estimate(workingIrregular, series.start(), CalendarRegressors.DEFAULT_EASTER_WINDOW,
+                holidays);
         double level = Analyst.meanOf(series.values());
         List<CalendarFinding.Effect> effects = fit.map(r -> r.effects().stream().map(e -> new CalendarFinding.Effect(
-                e.name(), e.coefficient(), effectPct(e.coefficient(), 1, log, level), e.pValue(), e.kept())).toList())
+                e.name(), e.coefficient(), effectPct(e.coefficient(), 1, log, level), e.pValue(), counts(e))).toList())
                 .orElse(List.of());
-        List<String> notes = indicators == null || indicators.lastYear() == null ? List.of()
+        List<CalendarNote> notes = indicators == null || indicators.lastYear().isEmpty() ? List.of()
                 : notes(series, indicators, fit, log, holidays);
         return new CalendarFinding(easter, effects, notes);
     }
 
-    private static List<String> notes(Series series, LatestIndicators.Result r, Optional<CalendarEffects.Result> fit,
-                                      boolean log, List<Holiday> holidays) {
-        List<String> notes = new ArrayList<>();
+    /** An effect counts when it is significant at {@link DecisionRules#ALPHA}. */
+    private static boolean counts(CalendarEffects.Effect e) {
+        return e.pValue() < DecisionRules.ALPHA;
+    }
+
+    private static Optional<CalendarEffects.Effect> kept(Optional<CalendarEffects.Result> fit, String name) {
+        return fit.flatMap(f -> f.effect(name)).filter(CalendarAnalysis::counts);
+    }
+
+    private static List<CalendarNote> notes(Series series, LatestIndicators.Result r,
+                                            Optional<CalendarEffects.Result> fit, boolean log, List<Holiday> holidays) {
+        List<CalendarNote> notes = new ArrayList<>();
         Period now = r.period();
-        Period before = r.lastYear().period();
-        double yoy = r.lastYear().changePct();
+        LatestIndicators.Comparison lastYear = r.lastYear().orElseThrow();
+        Period before = lastYear.period();
+        double yoy = lastYear.changePct();
         int window = CalendarRegressors.DEFAULT_EASTER_WINDOW;
         double shareNow = CalendarRegressors.easterShare(now, window);
         double shareBefore = CalendarRegressors.easterShare(before, window);
         if (Math.abs(shareNow - shareBefore) > 1e-9) {
-            LocalDate easterNow = Easter.sunday(now.year());
-            LocalDate easterBefore = Easter.sunday(before.year());
-            StringBuilder s = new StringBuilder(String.format(Locale.ROOT,
-                    "Easter Sunday was on %s, a year earlier on %s: %s of the %d days before it fell in %s, against %s a year earlier.",
-                    DAY.format(easterNow), DAY.format(easterBefore), days(shareNow, window), window, name(now),
-                    days(shareBefore, window)));
-            Optional<CalendarEffects.Effect> effect = fit.flatMap(f -> f.kept(CalendarEffects.EASTER));
-            if (effect.isPresent() && !Double.isNaN(yoy)) {
-                double explained = effectPct(effect.get().coefficient(), shareNow - shareBefore, log, r.lastYear().value());
-                s.append(String.format(Locale.ROOT, " By the estimated Easter effect that accounts for about %+.1f %% of the %+.1f %% change.",
-                        explained, yoy));
-            }
-            notes.add(s.toString());
-            combinedSpring(series, r).ifPresent(notes::add);
+            Optional<Double> explained = kept(fit, CalendarEffects.EASTER).filter(e -> !Double.isNaN(yoy))
+                    .map(e -> effectPct(e.coefficient(), shareNow - shareBefore, log, lastYear.value()));
+            notes.add(new CalendarNote.EasterShift(now, Easter.sunday(now.year()), Easter.sunday(before.year()), window,
+                    Math.round(shareNow * window), Math.round(shareBefore * window), explained, yoy));
+            easterSpanTogether(series, r).ifPresent(notes::add);
         }
         for (Holiday holiday : holidays) {
             double inNow = holiday.share(now);
             double inBefore = holiday.share(before);
             if (Math.abs(inNow - inBefore) > 1e-9) {
-                StringBuilder s = new StringBuilder(String.format(Locale.ROOT,
-                        "%s: %.0f %% of its days fell in %s, against %.0f %% in %s.", holiday.name(), 100 * inNow, name(now),
-                        100 * inBefore, name(before)));
-                fit.flatMap(f -> f.kept(holiday.name())).ifPresent(e -> s.append(String.format(Locale.ROOT,
-                        " By its estimated effect that accounts for about %+.1f %% of the change.",
-                        effectPct(e.coefficient(), inNow - inBefore, log, r.lastYear().value()))));
-                notes.add(s.toString());
+                notes.add(new CalendarNote.HolidayShift(holiday.name(), now, before, inNow, inBefore,
+                        kept(fit, holiday.name()).map(e -> effectPct(e.coefficient(), inNow - inBefore, log,
+                                lastYear.value()))));
             }
         }
         int nightsNow = CalendarRegressors.weekendNights(now);
         int nightsBefore = CalendarRegressors.weekendNights(before);
         if (series.frequency() == Frequency.MONTHLY && nightsNow != nightsBefore) {
-            int d = nightsNow - nightsBefore;
-            StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "%s had %d Friday and Saturday nights, %s %s than %s.",
-                    name(now), nightsNow, COUNT[Math.min(Math.abs(d), COUNT.length - 1)], d > 0 ? "more" : "fewer",
-                    name(before)));
-            fit.flatMap(f -> f.kept(CalendarEffects.WEEKEND)).ifPresent(e -> s.append(String.format(Locale.ROOT,
-                    " By the estimated weekend effect that is worth about %+.1f %%.",
-                    effectPct(e.coefficient(), d, log, r.lastYear().value()))));
-            notes.add(s.toString());
+            notes.add(new CalendarNote.WeekendNights(now, before, nightsNow, nightsBefore,
+                    kept(fit, CalendarEffects.WEEKEND).map(e -> effectPct(e.coefficient(), nightsNow - nightsBefore, log,
+                            lastYear.value()))));
         }
         if (r.longerFebruary() != 0) {
-            notes.add(String.format(Locale.ROOT, "February %d had %d days, February %d had %d: about %.1f %% %s days.",
-                    now.year(), now.lengthInDays(), before.year(), before.lengthInDays(),
-                    100 * Math.abs(now.lengthInDays() / (double) before.lengthInDays() - 1),
-                    r.longerFebruary() > 0 ? "more" : "fewer"));
+            notes.add(new CalendarNote.LeapFebruary(now, before,
+                    100 * (now.lengthInDays() / (double) before.lengthInDays() - 1)));
         }
         return notes;
     }
 
     /** March and April (or the first two quarters) together, when Easter moved between them. */
-    private static Optional<String> combinedSpring(Series series, LatestIndicators.Result r) {
+    private static Optional<CalendarNote> easterSpanTogether(Series series, LatestIndicators.Result r) {
         int i = series.indexOf(r.period());
         int lag = series.frequency().seasonalPeriod();
         int position = r.period().seasonalPosition();
@@ -134,23 +111,11 @@ final class CalendarAnalysis {
         if (Double.isNaN(now) || Double.isNaN(before) || before == 0) {
             return Optional.empty();
         }
-        return Optional.of(String.format(Locale.ROOT, "%s together, which Easter's move does not affect: %+.1f %% on a year earlier.",
-                april ? "March and April" : "The first two quarters", 100 * (now / before - 1)));
+        return Optional.of(new CalendarNote.EasterSpanTogether(april, 100 * (now / before - 1)));
     }
 
     /** An effect in % of the value: on logs exp(β·Δ) − 1; on the series' units β·Δ / value. */
     private static double effectPct(double coefficient, double units, boolean log, double value) {
         return log ? 100 * (Math.exp(coefficient * units) - 1) : value == 0 ? Double.NaN : 100 * coefficient * units / value;
-    }
-
-    private static String days(double share, int window) {
-        long days = Math.round(share * window);
-        return days == 0 ? "none" : days == window ? "all" : days < COUNT.length ? COUNT[(int) days] : String.valueOf(days);
-    }
-
-    private static String name(Period p) {
-        return p.frequency() == Frequency.MONTHLY
-                ? p.startDate().getMonth().getDisplayName(TextStyle.FULL, Locale.ENGLISH) + " " + p.year()
-                : p.seasonLabel() + " " + p.year();
     }
 }

@@ -7,9 +7,9 @@ import java.util.List;
  *
  * @param easter  Easter Sunday of every year the series covers
  * @param effects the calendar effects estimated (kept or not; {@code kept} says which count)
- * @param notes   plain sentences about the calendar of the latest period
+ * @param notes   how the calendar of the latest period differs from a year earlier
  */
-public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, List<String> notes) {
+public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, List<CalendarNote> notes) {
 
     public CalendarFinding {
         easter = List.copyOf(easter);

@@ -1,94 +1,57 @@
 package org.annalist.findings;
 
-import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.annalist.analysis.cycle.CycleDetector;
-import org.annalist.series.Frequency;
+import org.annalist.analysis.cycle.YearlyValues;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 
 /**
- * The cycle finding, on one value per year: the annual values themselves, or for sub-annual data
- * the yearly means of the seasonally adjusted values (working scale) over the calendar years the
- * data cover completely. Interior missing years are filled by straight lines between their
- * neighbours for the periodogram.
+ * The cycle finding, on one value per year ({@link YearlyValues}: the annual values, or the yearly
+ * means of the seasonally adjusted values on the working scale), judged by the decision rules.
  */
 final class CycleAnalysis {
+
+    /** Peaks that must confirm a periodogram peak (our rule: two gaps at least). */
+    static final int MIN_PEAKS = 3;
+
+    private static final CycleDetector DETECTOR = CycleDetector.withDefaults()
+            .withMinimumYears(DecisionRules.MIN_YEARS_FOR_CYCLE)
+            .withShortestCycleYears(DecisionRules.MIN_CYCLE_YEARS)
+            .withCyclesInData(DecisionRules.MIN_CYCLES_IN_DATA);
 
     private CycleAnalysis() {
     }
 
     static CycleFinding of(Series series, double[] workingAdjusted) {
-        List<Integer> years = new ArrayList<>();
-        double[] yearly = yearly(series, workingAdjusted, years);
-        if (yearly == null) {
-            return new CycleFinding(false, null, "years", List.of(), List.of(), false, "too few complete years", null, null);
+        Optional<YearlyValues> yearly = YearlyValues.of(workingAdjusted, series.start());
+        if (yearly.isEmpty()) {
+            return absent(CycleFinding.Reason.TOO_FEW_COMPLETE_YEARS, 0, null, null);
         }
-        CycleDetector.Result r = CycleDetector.detect(yearly);
-        List<String> peaks = r.present() ? r.peaks().stream().map(i -> String.valueOf(years.get(i))).toList() : List.of();
-        return new CycleFinding(r.present(), r.present() ? Numbers.orNull(r.length()) : null, "years", peaks,
-                r.present() ? r.gaps() : List.of(), r.present() && r.regular(), r.reason(),
-                Numbers.orNull(r.spectralPeriod()), Numbers.orNull(r.pValue()));
+        List<Integer> years = yearly.get().years();
+        CycleDetector.Result r = DETECTOR.detect(yearly.get().values());
+        if (r.status() == CycleDetector.Status.TOO_FEW_YEARS) {
+            return absent(CycleFinding.Reason.TOO_FEW_YEARS, r.years(), null, null);
+        }
+        if (r.status() == CycleDetector.Status.NO_CANDIDATE_PERIOD) {
+            return absent(CycleFinding.Reason.NO_CANDIDATE_PERIOD, r.years(), null, null);
+        }
+        if (r.pValue() >= DecisionRules.ALPHA) {
+            return absent(CycleFinding.Reason.NOT_BEYOND_RED_NOISE, r.years(), r.spectralPeriod(), r.pValue());
+        }
+        if (r.peaks().size() < MIN_PEAKS) {
+            return absent(CycleFinding.Reason.TOO_FEW_PEAKS, r.years(), r.spectralPeriod(), r.pValue());
+        }
+        // regular when the gaps between the peaks vary little
+        boolean regular = r.gapVariation() <= DecisionRules.MAX_REGULAR_GAP_CV;
+        return new CycleFinding(true, Numbers.orNull(r.length()), CycleFinding.YEARS,
+                r.peaks().stream().map(i -> Period.year(years.get(i))).toList(), r.gaps(), regular,
+                CycleFinding.Reason.CLAIMED, r.years(), r.spectralPeriod(), r.pValue());
     }
 
-    private static double[] yearly(Series series, double[] values, List<Integer> years) {
-        List<Double> means = new ArrayList<>();
-        int firstYear = series.start().year();
-        int lastYear = series.end().year();
-        for (int year = firstYear; year <= lastYear; year++) {
-            double sum = 0;
-            int n = 0;
-            int expected = 0;
-            for (int i = 0; i < series.size(); i++) {
-                Period p = series.period(i);
-                if (p.year() == year) {
-                    expected++;
-                    if (!Double.isNaN(values[i])) {
-                        sum += values[i];
-                        n++;
-                    }
-                }
-            }
-            boolean complete = expected >= fullYear(series.frequency());
-            if (!complete && (year == firstYear || year == lastYear)) {
-                continue;   // a partial first or last year would bias its mean by season
-            }
-            years.add(year);
-            means.add(n == 0 || n < expected ? Double.NaN : sum / n);
-        }
-        double[] yearly = means.stream().mapToDouble(Double::doubleValue).toArray();
-        if (!fillInterior(yearly)) {
-            return null;
-        }
-        return yearly;
-    }
-
-    /** Periods of a complete calendar year (weeks and days vary; the lower count is enough). */
-    private static int fullYear(Frequency frequency) {
-        return switch (frequency) {
-            case ANNUAL -> 1;
-            case QUARTERLY -> 4;
-            case MONTHLY -> 12;
-            case WEEKLY -> 52;
-            case DAILY -> 365;
-            case BUSINESS_DAILY -> 260;
-        };
-    }
-
-    /** Fills interior NaN linearly; false when the ends are missing or nothing is left. */
-    private static boolean fillInterior(double[] x) {
-        if (x.length == 0 || Double.isNaN(x[0]) || Double.isNaN(x[x.length - 1])) {
-            return false;
-        }
-        int last = 0;
-        for (int t = 1; t < x.length; t++) {
-            if (!Double.isNaN(x[t])) {
-                for (int g = last + 1; g < t; g++) {
-                    x[g] = x[last] + (x[t] - x[last]) * (g - last) / (t - last);
-                }
-                last = t;
-            }
-        }
-        return true;
+    private static CycleFinding absent(CycleFinding.Reason reason, int years, Double spectralPeriod, Double pValue) {
+        return new CycleFinding(false, null, CycleFinding.YEARS, List.of(), List.of(), false, reason, years,
+                spectralPeriod, pValue);
     }
 }

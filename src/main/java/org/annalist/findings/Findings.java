@@ -4,32 +4,33 @@ import com.fasterxml.jackson.annotation.JsonIgnore;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import com.fasterxml.jackson.annotation.JsonPropertyOrder;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * What the analysis found about one series: the findings JSON ({@code annalist.findings/1}) and,
  * not written to it, what the brief needs besides.
  *
- * @param transform     {@code none} or {@code log}
+ * @param transform     whether the analysis worked on logarithms
  * @param outliers      single periods far from trend and season
  * @param breaks        structural changes, oldest first
  * @param indicators    the latest period against earlier ones (null when the latest period has no value)
  * @param calendar      Easter dates, calendar effects and notes (monthly and quarterly data; else null)
  * @param outlook       forecasts with intervals and their back-test (null when not made)
  * @param recent        the latest periods with their year-on-year change, oldest first
- * @param notes         caveats in plain words (short series, forced choices, …)
+ * @param notes         what limits the findings (short series, sparse data, provisional breaks, …)
  * @param form          how additive or multiplicative was decided
- * @param decomposition the components in the series' units
+ * @param decomposition the components in the series' units; empty when the series could not be decomposed
  * @param episodes      collapses followed by recoveries (pairs of breaks)
  * @param breakMethod   how breaks were searched, for the methods appendix
  */
 @JsonPropertyOrder({"schema", "series", "transform", "trend", "seasonality", "cycle", "outliers", "breaks",
     "irregular", "smoothing", "indicators", "calendar", "outlook"})
-public record Findings(SeriesFacts series, String transform, TrendFinding trend, SeasonalityFinding seasonality,
+public record Findings(SeriesFacts series, Transform transform, TrendFinding trend, SeasonalityFinding seasonality,
                        CycleFinding cycle, List<OutlierFinding> outliers, List<BreakFinding> breaks,
                        IrregularFinding irregular,
                        Smoothing smoothing, IndicatorsFinding indicators, CalendarFinding calendar, OutlookFinding outlook, @JsonIgnore List<RecentPeriod> recent,
-                       @JsonIgnore List<String> notes, @JsonIgnore FormChoice form,
-                       @JsonIgnore Decomposition decomposition, @JsonIgnore List<Episode> episodes,
+                       @JsonIgnore List<Caveat> notes, @JsonIgnore FormChoice form,
+                       @JsonIgnore Optional<Decomposition> decomposition, @JsonIgnore List<Episode> episodes,
                        @JsonIgnore String breakMethod) {
 
     public static final String SCHEMA = "annalist.findings/1";
@@ -45,14 +46,5 @@ public record Findings(SeriesFacts series, String transform, TrendFinding trend,
     @JsonProperty("schema")
     public String schema() {
         return SCHEMA;
-    }
-
-    /**
-     * The evidence behind additive or multiplicative.
-     *
-     * @param reason     in words, e.g. {@code the seasonal swing grows with the level}
-     * @param elasticity growth of the swing with the level (null when not measured)
-     */
-    public record FormChoice(String form, String reason, Double elasticity, Double levelRatio, int cycles) {
     }
 }

@@ -1,10 +1,37 @@
 package org.annalist.findings;
 
+import com.fasterxml.jackson.annotation.JsonProperty;
+import com.fasterxml.jackson.annotation.JsonValue;
+import java.util.Locale;
+
 /**
  * The findings JSON {@code irregular} block.
  *
- * @param share share of the variation around the long-run trend that is irregular (0–1)
- * @param label {@code small}, {@code moderate} or {@code large}
+ * @param share share of the variation around the long-run trend that is irregular (0–1); null when not measured
+ * @param size  small, moderate or large; null when not measured
  */
-public record IrregularFinding(Double share, String label) {
+public record IrregularFinding(Double share, @JsonProperty("label") Size size) {
+
+    /** How much of the movement is irregular, by {@link DecisionRules#SMALL_IRREGULAR_SHARE} and {@link DecisionRules#LARGE_IRREGULAR_SHARE}. */
+    public enum Size {
+        SMALL, MODERATE, LARGE;
+
+        @JsonValue
+        public String code() {
+            return name().toLowerCase(Locale.ROOT);
+        }
+
+        static Size of(double share) {
+            return share < DecisionRules.SMALL_IRREGULAR_SHARE ? SMALL
+                    : share <= DecisionRules.LARGE_IRREGULAR_SHARE ? MODERATE : LARGE;
+        }
+    }
+
+    static IrregularFinding notMeasured() {
+        return new IrregularFinding(null, null);
+    }
+
+    static IrregularFinding of(double share) {
+        return new IrregularFinding(share, Size.of(share));
+    }
 }

@@ -2,7 +2,6 @@ package org.annalist.findings;
 
 import java.util.Locale;
 import java.util.regex.Pattern;
-import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Series;
 
 /**
@@ -19,12 +18,12 @@ public final class MeasureKind {
     private MeasureKind() {
     }
 
-    public static LatestIndicators.Measure infer(Series series) {
+    public static Measure infer(Series series) {
         String unit = series.unit().toLowerCase(Locale.ROOT);
         if (unit.contains("%") || unit.contains("percent") || LEVEL_WORDS.matcher(series.name()).matches()
                 || LEVEL_WORDS.matcher(unit).matches()) {
-            return LatestIndicators.Measure.LEVEL;
+            return Measure.LEVEL;
         }
-        return LatestIndicators.Measure.FLOW;
+        return Measure.FLOW;
     }
 }

@@ -2,7 +2,6 @@ package org.annalist.findings;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.anomaly.RemainderOutliers;
 import org.annalist.series.Series;
 
@@ -30,12 +29,10 @@ final class OutlierAnalysis {
         return RemainderOutliers.flagged(remainder, DecisionRules.OUTLIER_SCORE);
     }
 
-    /** Notes on stretches with many unusual values, which are not reported as outliers. */
-    static List<String> stretchNotes(Series series, double[] remainder, int period) {
+    /** Stretches with many unusual values, which are not reported as outliers. */
+    static List<Caveat> stretchNotes(Series series, double[] remainder, int period) {
         return RemainderOutliers.unusualStretches(remainder, DecisionRules.OUTLIER_SCORE, period).stream()
-                .map(s -> "From " + series.period(s.from()).label() + " to " + series.period(s.to()).label()
-                        + " several values lie far from what trend and season predict (the pattern may have been"
-                        + " changing); they are not reported as one-off outliers.")
+                .<Caveat>map(s -> new Caveat.UnusualStretch(series.period(s.from()), series.period(s.to())))
                 .toList();
     }
 
@@ -56,8 +53,8 @@ final class OutlierAnalysis {
             if (Math.abs(deviation) < MIN_DEVIATION_PCT) {
                 continue;   // a tiny remainder scale makes a tiny deviation look large; it is no outlier
             }
-            outliers.add(new OutlierFinding(series.period(o.index()).label(), observed, expected, o.score(),
-                    observed >= expected ? "above" : "below", deviation, o.index()));
+            outliers.add(new OutlierFinding(series.period(o.index()), observed, expected, o.score(),
+                    observed >= expected ? Side.ABOVE : Side.BELOW, deviation, o.index()));
         }
         return List.copyOf(outliers);
     }

@@ -31,7 +31,7 @@ final class OutlookAnalysis {
      * @param horizon the user's number of periods ahead (0: no outlook), or empty for the default
      * @return null without an outlook
      */
-    static OutlookFinding of(Series series, Decomposition decomposition, int regimeStart,
+    static OutlookFinding of(Series series, Optional<Decomposition> decomposition, int regimeStart,
                              LatestIndicators.Measure measure, Optional<Integer> horizon) {
         int last = lastObserved(series);
         if (last < 0 || horizon.isPresent() && horizon.get() == 0) {
@@ -136,7 +136,10 @@ final class OutlookAnalysis {
      * The values from {@code from} to {@code last}, gaps filled with trend-cycle and season there
      * (or, without a decomposition, by straight lines between their neighbours).
      */
-    private static double[] filled(Series series, Decomposition d, int from, int last, List<String> caveats) {
+    private static double[] filled(Series series, Optional<Decomposition> d, int from, int last, List<String> caveats) {
+        double[] trendCycle = d.map(Decomposition::trendCycle).orElse(null);
+        double[] seasonal = d.map(Decomposition::seasonal).orElse(null);
+        boolean multiplicative = d.map(Decomposition::multiplicative).orElse(false);
         double[] y = Arrays.copyOfRange(series.values(), from, last + 1);
         int gaps = 0;
         for (int i = 0; i < y.length; i++) {
@@ -145,8 +148,8 @@ final class OutlookAnalysis {
             }
             gaps++;
             int t = from + i;
-            if (d.trendCycle() != null && !Double.isNaN(d.trendCycle()[t])) {
-                y[i] = d.multiplicative() ? d.trendCycle()[t] * d.seasonal()[t] : d.trendCycle()[t] + d.seasonal()[t];
+            if (trendCycle != null && !Double.isNaN(trendCycle[t])) {
+                y[i] = multiplicative ? trendCycle[t] * seasonal[t] : trendCycle[t] + seasonal[t];
             }
         }
         for (int i = 0; i < y.length; i++) {

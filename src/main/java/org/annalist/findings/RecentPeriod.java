@@ -1,29 +1,25 @@
 package org.annalist.findings;
 
-import com.fasterxml.jackson.annotation.JsonIgnore;
-import java.util.List;
+import java.util.Collections;
+import java.util.Set;
 import org.annalist.series.Period;
+import org.annalist.series.ValueFlag;
 
 /**
  * One row of the table of latest periods.
  *
- * @param value       {@code null} when missing
+ * @param value             {@code null} when missing
  * @param yearEarlierPeriod the same period a year before
- * @param yearEarlier value of that period; {@code null} when unknown
- * @param changePct   year-on-year change in %; {@code null} when it cannot be computed
- * @param flags       the publisher's flags on either value (e.g. {@code provisional})
+ * @param yearEarlier       value of that period; {@code null} when unknown
+ * @param changePct         year-on-year change in %; {@code null} when it cannot be computed
+ * @param flags             the publisher's flags on the value (e.g. provisional)
+ * @param yearEarlierFlags  the publisher's flags on the value a year before
  */
-public record RecentPeriod(@JsonIgnore Period period, Double value, @JsonIgnore Period yearEarlierPeriod,
-                           Double yearEarlier, Double change, Double changePct,
-                           List<String> flags) {
+public record RecentPeriod(Period period, Double value, Period yearEarlierPeriod, Double yearEarlier, Double change,
+                           Double changePct, Set<ValueFlag> flags, Set<ValueFlag> yearEarlierFlags) {
 
     public RecentPeriod {
-        flags = List.copyOf(flags);
-    }
-
-    /** The period as the findings JSON writes it. */
-    @com.fasterxml.jackson.annotation.JsonProperty("period")
-    public String label() {
-        return period.label();
+        flags = Collections.unmodifiableSet(flags);
+        yearEarlierFlags = Collections.unmodifiableSet(yearEarlierFlags);
     }
 }

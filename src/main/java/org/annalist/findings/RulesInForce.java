@@ -2,7 +2,6 @@ package org.annalist.findings;
 
 import java.util.List;
 import java.util.Locale;
-import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.anomaly.RemainderOutliers;
 
 /** The decision thresholds of {@link DecisionRules} in words, for the brief's methods appendix. */
@@ -43,16 +42,6 @@ public final class RulesInForce {
                 new Rule("Irregular fluctuation called small / large", "share below "
                         + fmt(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + " % / above "
                         + fmt(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + " %"));
-    }
-
-    /** {@code strong}, {@code moderate} or {@code weak} for a seasonal strength. */
-    public static String seasonalStrengthWord(double strength) {
-        return strength >= DecisionRules.STRONG_SEASONAL_STRENGTH ? "strong"
-                : strength >= DecisionRules.MIN_SEASONAL_STRENGTH ? "moderate" : "weak";
-    }
-
-    public static int minimumYearsForSeason() {
-        return DecisionRules.MIN_YEARS_FOR_SEASON;
     }
 
     private static String fmt(double v) {

@@ -7,23 +7,31 @@ import java.util.List;
  * The findings JSON {@code seasonality} block.
  *
  * @param period   observations per seasonal cycle (null for annual data, which have none)
- * @param form     {@code additive} or {@code multiplicative}
- * @param verdict  {@code present}, {@code negligible} (detectable but too small to claim),
- *                 {@code absent} or {@code too short}
+ * @param test     the test of the seasons' difference (null when not run)
+ * @param verdict  what may be said
  * @param profile  index per position: % above/below the yearly average (multiplicative) or units (additive)
  * @param swing    peak minus trough of the profile, in the profile's unit
  * @param changed  whether the pattern of the last three years differs from the first three
  */
-public record SeasonalityFinding(boolean present, Integer period, Double strength, String test, Double pValue,
-                                 String form, Position peak, Position trough, @JsonIgnore String verdict,
+public record SeasonalityFinding(boolean present, Integer period, Double strength, TestName test, Double pValue,
+                                 Form form, Position peak, Position trough, @JsonIgnore SeasonVerdict verdict,
                                  @JsonIgnore Double statistic, @JsonIgnore List<ProfilePoint> profile,
                                  @JsonIgnore Double swing, @JsonIgnore Double swingPctOfLevel,
                                  @JsonIgnore boolean changed, @JsonIgnore Double largestShift,
                                  @JsonIgnore Boolean periodConfirmed, @JsonIgnore Double autocorrelationAtPeriod) {
 
+    public SeasonalityFinding {
+        profile = profile == null ? null : List.copyOf(profile);
+    }
+
+    /** @param label English label of the position: {@code Jul}, {@code Q3}, {@code Mon} */
     public record Position(int position, String label) {
     }
 
     public record ProfilePoint(int position, String label, double index) {
+    }
+
+    public boolean multiplicative() {
+        return form == Form.MULTIPLICATIVE;
     }
 }

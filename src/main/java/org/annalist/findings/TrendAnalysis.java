@@ -1,7 +1,6 @@
 package org.annalist.findings;
 
 import java.util.List;
-import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.trend.MannKendall;
 import org.annalist.analysis.trend.SeasonalKendall;
 import org.annalist.analysis.trend.SenSlope;
@@ -15,8 +14,6 @@ import org.annalist.series.Series;
  */
 final class TrendAnalysis {
 
-    /** Fewer values than this support no trend statement (our rule; Gilbert 1987 asks for more than 10 for the normal approximation). */
-    static final int MIN_VALUES = 10;
     /** Longer series are averaged over blocks first: the tests are O(n²) (our rule, it keeps 20 years of days under a second). */
     static final int MAX_VALUES = 600;
 
@@ -27,19 +24,17 @@ final class TrendAnalysis {
      * @param regimeStart first index of the latest regime after structural breaks (0 when none)
      */
     static TrendFinding of(Series series, double[] adjusted, boolean seasonal, double[] observed, int regimeStart,
-                           List<String> notes) {
+                           List<Caveat> notes) {
         int present = 0;
         for (double v : adjusted) {
             present += Double.isNaN(v) ? 0 : 1;
         }
-        if (present < MIN_VALUES) {
-            notes.add("No trend statement: fewer than " + MIN_VALUES + " values.");
-            return TrendFinding.notAssessed("fewer than " + MIN_VALUES + " values");
+        if (present < DecisionRules.MIN_VALUES_FOR_TREND) {
+            notes.add(new Caveat.TooShortForTrend());
+            return TrendFinding.notAssessed();
         }
         int block = (int) Math.ceil(adjusted.length / (double) MAX_VALUES);
         double[] values = block > 1 ? blockMeans(adjusted, block) : adjusted;
-        String basis = (seasonal ? "seasonally adjusted values" : "observed values")
-                + (block > 1 ? ", averaged over blocks of " + block + " periods" : "");
         SenSlope.Pairwise slopes = SenSlope.pairwise(values);
         MannKendall.Result mk = MannKendall.test(values, MannKendall.Correction.AR1_RANKS, gapFree(values)
                 ? slopes.medianPerStep() : Double.NaN);
@@ -48,20 +43,15 @@ final class TrendAnalysis {
         // % of the level means nothing for a series that reaches zero or below (a net balance, say)
         boolean positive = java.util.Arrays.stream(observed).filter(v -> !Double.isNaN(v)).allMatch(v -> v > 0);
         double level = positive ? Analyst.meanOf(observed) : 0;
-        String direction = !mk.test().reject(DecisionRules.ALPHA) ? "none" : mk.s() > 0 ? "increasing" : "decreasing";
-        TrendFinding.Evidence seasonalKendall = null;
-        if (seasonal) {
-            try {
-                SeasonalKendall.Result sk = SeasonalKendall.test(observed, series.frequency().seasonalPeriod());
-                seasonalKendall = new TrendFinding.Evidence(TestNames.of(sk.test().method()), sk.test().statistic(), sk.test().pValue());
-            } catch (IllegalArgumentException notComputable) {
-                seasonalKendall = null;
-            }
-        }
-        return new TrendFinding(direction, TestNames.of(mk.test().method()) + " on " + basis, mk.test().statistic(),
-                mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
-                level == 0 ? null : 100 * sen.perYear() / Math.abs(level), basis, seasonalKendall, mk.test().n(),
-                null, latestRegime(series, adjusted, regimeStart));
+        TrendFinding.Evidence seasonalKendall = !seasonal ? null
+                : SeasonalKendall.test(observed, series.frequency().seasonalPeriod())
+                .map(sk -> new TrendFinding.Evidence(TestName.of(sk.test().method()), sk.test().statistic(),
+                        sk.test().pValue()))
+                .orElse(null);
+        return new TrendFinding(direction(mk), new TrendFinding.Test(TestName.of(mk.test().method()), seasonal, block),
+                mk.test().statistic(), mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
+                level == 0 ? null : 100 * sen.perYear() / Math.abs(level), seasonalKendall, mk.test().n(),
+                latestRegime(series, adjusted, regimeStart));
     }
 
     /** The same test and slope over the latest regime, when there is one with enough values. */
@@ -71,14 +61,20 @@ final class TrendAnalysis {
         }
         double[] regime = java.util.Arrays.copyOfRange(adjusted, regimeStart, adjusted.length);
         long present = java.util.Arrays.stream(regime).filter(v -> !Double.isNaN(v)).count();
-        if (present < Math.max(MIN_VALUES, 2 * series.frequency().seasonalPeriod()) || regime.length > MAX_VALUES) {
+        if (present < Math.max(DecisionRules.MIN_VALUES_FOR_TREND, 2 * series.frequency().seasonalPeriod())
+                || regime.length > MAX_VALUES) {
             return null;
         }
         MannKendall.Result mk = MannKendall.test(regime, MannKendall.Correction.AR1_RANKS);
         SenSlope.Result sen = SenSlope.of(regime, series.frequency().periodsPerYear(), mk.varianceUsed());
-        String direction = !mk.test().reject(DecisionRules.ALPHA) ? "none" : mk.s() > 0 ? "increasing" : "decreasing";
-        return new TrendFinding.LatestRegime(series.period(regimeStart).label(), direction, sen.perYear(), sen.lower95(),
+        return new TrendFinding.LatestRegime(series.period(regimeStart), direction(mk), sen.perYear(), sen.lower95(),
                 sen.upper95(), mk.test().pValue(), (int) present);
+    }
+
+    /** A direction only where the test rejects "no trend" at {@link DecisionRules#ALPHA}. */
+    private static Direction direction(MannKendall.Result mk) {
+        return !mk.test().reject(DecisionRules.ALPHA) ? Direction.NONE : mk.s() > 0 ? Direction.INCREASING
+                : Direction.DECREASING;
     }
 
     /** The correction detrends the observed values in sequence; the series' own slope fits it only without gaps. */

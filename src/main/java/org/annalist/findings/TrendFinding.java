@@ -2,38 +2,51 @@ package org.annalist.findings;
 
 import com.fasterxml.jackson.annotation.JsonIgnore;
 import java.util.List;
+import org.annalist.series.Period;
 
 /**
  * The findings JSON {@code trend} block: the direction and its evidence.
  *
- * @param direction        {@code increasing}, {@code decreasing} or {@code none} (no clear trend)
- * @param test             the test as run, with what it ran on
+ * @param direction        {@link Direction#NONE} also when the trend was not assessed
+ * @param test             the test as run and what it ran on (null when not assessed: fewer than
+ *                         {@value DecisionRules#MIN_VALUES_FOR_TREND} values)
  * @param slopePerYear     Sen's slope in series units per year
  * @param slopeCi95        its 95 % interval [lower, upper]
  * @param changePctPerYear the slope as % of the mean level
- * @param basis            what the test ran on, in words (e.g. {@code seasonally adjusted values})
  * @param seasonalKendall  the seasonal Kendall test on the observed values, for seasonal series
  * @param latestRegime     the trend within the latest regime, when there are breaks and it is long enough
  */
-public record TrendFinding(String direction, String test, Double statistic, Double pValue, Double slopePerYear,
-                           List<Double> slopeCi95, Double changePctPerYear, @JsonIgnore String basis,
-                           @JsonIgnore Evidence seasonalKendall, @JsonIgnore int n, @JsonIgnore String reason,
-                           @JsonIgnore LatestRegime latestRegime) {
+public record TrendFinding(Direction direction, Test test, Double statistic, Double pValue, Double slopePerYear,
+                           List<Double> slopeCi95, Double changePctPerYear, @JsonIgnore Evidence seasonalKendall,
+                           @JsonIgnore int n, @JsonIgnore LatestRegime latestRegime) {
+
+    /**
+     * The test as run.
+     *
+     * @param seasonallyAdjusted whether it ran on the seasonally adjusted values (else the observed)
+     * @param block              periods averaged into one value first (1: none), for long series
+     */
+    public record Test(TestName name, boolean seasonallyAdjusted, int block) {
+    }
 
     /**
      * The trend since the latest structural break ("rising again since 2021-06").
      *
      * @param since the first period of the latest regime
      */
-    public record LatestRegime(String since, String direction, double slopePerYear, double lower95, double upper95,
+    public record LatestRegime(Period since, Direction direction, double slopePerYear, double lower95, double upper95,
                                double pValue, int n) {
     }
 
     /** A test outcome quoted beside the main one. */
-    public record Evidence(String test, double statistic, double pValue) {
+    public record Evidence(TestName test, double statistic, double pValue) {
     }
 
-    static TrendFinding notAssessed(String reason) {
-        return new TrendFinding("none", null, null, null, null, null, null, null, null, 0, reason, null);
+    public boolean assessed() {
+        return test != null;
+    }
+
+    static TrendFinding notAssessed() {
+        return new TrendFinding(Direction.NONE, null, null, null, null, null, null, null, 0, null);
     }
 }

@@ -17,22 +17,20 @@ final class AppendixViews {
         rows.add(new BriefView.MethodRow("Additive or multiplicative",
                 "elasticity of the yearly seasonal swing to the yearly level; Hyndman & Athanasopoulos (2021), "
                         + "Forecasting: Principles and Practice, 3rd ed., section 3.2",
-                findings.form().form() + ": " + findings.form().reason()
+                findings.form().form().code() + ": " + Terms.formReason(findings.form().reason())
                         + (findings.form().elasticity() == null ? "" : " (elasticity " + f.fixed(findings.form().elasticity(), 2)
                         + ", level ratio " + f.fixed(findings.form().levelRatio(), 2) + ")")));
-        if (findings.decomposition().method() != null) {
-            rows.add(new BriefView.MethodRow("Seasonal-trend decomposition",
-                    "STL: Cleveland, Cleveland, McRae & Terpenning (1990), Journal of Official Statistics 6, 3\u201373",
-                    findings.decomposition().method()));
-        }
+        findings.decomposition().ifPresent(d -> rows.add(new BriefView.MethodRow("Seasonal-trend decomposition",
+                "STL: Cleveland, Cleveland, McRae & Terpenning (1990), Journal of Official Statistics 6, 3\u201373",
+                Terms.decomposition(d.method()))));
         if (findings.smoothing() != null) {
             rows.add(new BriefView.MethodRow("Trend-cycle line", "centred moving average; Hyndman & Athanasopoulos (2021), "
-                    + "section 3.3", findings.smoothing().method()));
+                    + "section 3.3", Terms.movingAverage(findings.smoothing().method())));
         }
-        if (findings.trend().test() != null) {
+        if (findings.trend().assessed()) {
             rows.add(new BriefView.MethodRow("Trend test", "Mann (1945), Kendall (1975); variance corrected for "
                     + "serial correlation after Hamed & Rao (1998); Sen (1968) slope with the interval of Gilbert (1987)",
-                    findings.trend().test()));
+                    Terms.trendTest(findings.trend().test())));
         }
         if (findings.seasonality().test() != null) {
             rows.add(new BriefView.MethodRow("Seasonal pattern", "Kruskal & Wallis (1952) test of the detrended values "

@@ -1,6 +1,7 @@
 package org.annalist.narrative;
 
 import java.util.List;
+import org.annalist.series.Frequency;
 
 /**
  * Everything the brief template shows, already formatted: numbers as text in the brief's
@@ -35,18 +36,27 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param logo          the logo's URI; empty without one
      */
     public record Header(String title, String organisation, String seriesName, String unit, String periodCovered,
-                         String latestPeriod, String generatedAt, String frequency, String unitPerPeriod,
+                         String latestPeriod, String generatedAt, Calendar calendar, String unitPerPeriod,
                          String logo) {
+    }
+
+    /** The series' frequency, for the template's words; all false: daily or business-daily. */
+    public record Calendar(boolean annual, boolean quarterly, boolean monthly, boolean weekly) {
+
+        static Calendar of(Frequency frequency) {
+            return new Calendar(frequency == Frequency.ANNUAL, frequency == Frequency.QUARTERLY,
+                    frequency == Frequency.MONTHLY, frequency == Frequency.WEEKLY);
+        }
     }
 
     /**
      * The latest period against a year earlier; {@code comparable} false when that cannot be said.
      *
      * @param atPeriod  {@code In October 2026} / {@code On Saturday 31 October 2026}
-     * @param direction {@code up}, {@code down} or {@code flat}
+     * @param up        higher than a year earlier ({@code up} and {@code down} both false: about the same)
      */
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
-                       String changePercent, String direction, boolean provisional) {
+                       String changePercent, boolean up, boolean down, boolean provisional) {
     }
 
     /**
@@ -58,7 +68,8 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      */
     public record ThisPeriod(boolean available, boolean level, String ytdFrom, String ytdTo, String ytdChange,
                              String ytdTotal, String rollingChange, String rollingTotal, String rankWord,
-                             String record, String adjustedChange, List<String> calendar, boolean flagged) {
+                             boolean recordHigh, boolean recordLow, String adjustedChange, List<String> calendar,
+                             boolean flagged) {
 
         public ThisPeriod {
             calendar = List.copyOf(calendar);
@@ -89,26 +100,28 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     }
 
     /**
-     * @param direction {@code increasing}, {@code decreasing} or {@code none}
+     * @param rising     the trend is increasing ({@code rising} and {@code falling} both false: no clear trend)
      * @param slopeSize  the slope without its sign, for "by about 2,120 a year"
      * @param sinceBreak the trend within the latest regime, or null
      */
-    public record TrendView(boolean assessed, String direction, String test, String statistic, String pValue,
+    public record TrendView(boolean assessed, boolean rising, boolean falling, String test, String statistic, String pValue,
                             String slopePerYear, String slopeSize, String lower, String upper, String percentPerYear, String basis,
                             String reason, SinceBreak sinceBreak, String seasonalKendall) {
     }
 
     /** @param since the first period of the latest regime, in words */
-    public record SinceBreak(String since, String direction, String slopePerYear, String lower, String upper,
+    public record SinceBreak(String since, boolean rising, boolean falling, String slopePerYear, String lower, String upper,
                              String pValue) {
     }
 
     /**
-     * @param verdict {@code present}, {@code negligible}, {@code absent}, {@code too short} or {@code not applicable}
+     * The seasonal pattern; at most one of {@code present}, {@code negligible}, {@code tooShort}
+     * and {@code notApplicable} holds (none: the seasons do not differ beyond chance).
+     *
      * @param strengthWord {@code strong}, {@code moderate} or {@code weak}
      * @param indexUnit {@code %} for multiplicative, the series unit for additive
      */
-    public record SeasonView(String verdict, String period, String strength, String strengthWord, String test,
+    public record SeasonView(boolean present, boolean negligible, boolean tooShort, boolean notApplicable, String period, String strength, String strengthWord, String test,
                              String statistic, String pValue, String peak, String peakIndex, String trough,
                              String troughIndex, String swing, String indexUnit, boolean multiplicative,
                              boolean changed, String formReason, String years) {
@@ -134,8 +147,11 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     public record EpisodeView(String start, String recovery, String lowPoint, String lowValue, String regained) {
     }
 
-    /** @param label {@code small}, {@code moderate} or {@code large}; null when not measured */
-    public record IrregularView(String label, String share) {
+    /**
+     * @param label {@code small}, {@code moderate} or {@code large}; null when not measured
+     * @param large the irregular part is large, so single periods are to be read with care
+     */
+    public record IrregularView(String label, String share, boolean large) {
     }
 
     public record Fact(String label, String value) {

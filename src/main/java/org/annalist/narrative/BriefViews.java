@@ -27,13 +27,13 @@ public final class BriefViews {
                 author, "time series, " + series.name());
         BriefView.Header header = new BriefView.Header(title, masthead.organisation(), series.name(), series.unit(),
                 f.period(series.start()) + " to " + f.period(series.end()), f.period(series.end()),
-                f.timestamp(masthead.generatedAt()), findings.series().frequency(), unitPerPeriod(series),
+                f.timestamp(masthead.generatedAt()), BriefView.Calendar.of(series.frequency()), unitPerPeriod(series),
                 masthead.logoUri().orElse(""));
         BriefView.Lead lead = lead(series, findings, f);
         BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
                 f.count(source.rowsRead()), source.reading(), masthead.software(), f.timestamp(masthead.generatedAt()));
         List<String> notes = new ArrayList<>(source.notes());
-        notes.addAll(findings.notes());
+        findings.notes().forEach(note -> notes.add(Terms.caveat(note)));
         BriefView.ThisPeriod thisPeriod = sections.thisPeriod();
         return new BriefView(document, header, lead, thisPeriod, sections.keyFigures(lead, thisPeriod), sections.charts(),
                 sections.trend(),
@@ -45,17 +45,18 @@ public final class BriefViews {
 
     private static BriefView.Lead lead(Series series, Findings findings, Formats f) {
         if (findings.recent().isEmpty()) {
-            return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", "flat", false);
+            return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", false, false,
+                    false);
         }
         RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
         boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
                 || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
         if (last.value() == null || last.changePct() == null) {
             return new BriefView.Lead(false, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                    "", "", "flat", provisional);
+                    "", "", false, false, provisional);
         }
         double pct = last.changePct();
-        String direction = Math.abs(pct) < 0.05 ? "flat" : pct > 0 ? "up" : "down";
+        boolean flat = Math.abs(pct) < 0.05;
         // Percentages of a value at or below zero mislead: such series are compared in their own units.
         String change = positive(series) ? f.percent(Math.abs(pct)) : f.value(Math.abs(last.change()))
                 + (series.unit().isEmpty() ? "" : " " + series.unit());
@@ -64,7 +65,7 @@ public final class BriefViews {
                 ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
                 : f.period(last.yearEarlierPeriod());
         return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                yearEarlier, change, direction, provisional);
+                yearEarlier, change, !flat && pct > 0, !flat && pct < 0, provisional);
     }
 
     private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {
@@ -87,7 +88,7 @@ public final class BriefViews {
 
     private static BriefView.Row row(RecentPeriod r, Formats f) {
         return new BriefView.Row(f.shortPeriod(r.period()), f.value(r.value()), f.value(r.yearEarlier()),
-                f.signedValue(r.change()), f.signedPercent(r.changePct()), String.join("; ", r.flags()));
+                f.signedValue(r.change()), f.signedPercent(r.changePct()), Terms.flags(r.flags(), r.yearEarlierFlags()));
     }
 
     /** True when every value is above zero, so that changes can be read as percentages. */

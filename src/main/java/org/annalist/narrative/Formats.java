@@ -3,10 +3,14 @@ package org.annalist.narrative;
 import java.math.RoundingMode;
 import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
+import java.time.DayOfWeek;
 import java.time.Instant;
+import java.time.Month;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
+import java.time.format.TextStyle;
 import java.util.Locale;
+import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 
 /**
@@ -122,8 +126,8 @@ public final class Formats {
 
     /** A period as a sentence opens with it: {@code In October 2026}, {@code On 31 October 2026}. */
     public String atPeriod(Period period) {
-        boolean day = period.frequency() == org.annalist.series.Frequency.DAILY
-                || period.frequency() == org.annalist.series.Frequency.BUSINESS_DAILY;
+        boolean day = period.frequency() == Frequency.DAILY
+                || period.frequency() == Frequency.BUSINESS_DAILY;
         return (day ? "On " + period.startDate().format(DateTimeFormatter.ofPattern("EEEE", locale)) + " " : "In ")
                 + period(period);
     }
@@ -136,6 +140,20 @@ public final class Formats {
             case MONTHLY -> period.seasonLabel() + " " + period.year();
             case WEEKLY -> period.label();
             case DAILY, BUSINESS_DAILY -> period.startDate().format(DateTimeFormatter.ofPattern("EEE d MMM yyyy", locale));
+        };
+    }
+
+    /**
+     * A season position in running text: {@code January} (months), {@code Q3}, {@code W05} (ISO
+     * weeks), {@code Mondays} (days, Monday first).
+     */
+    public String seasonName(Frequency frequency, int position) {
+        return switch (frequency) {
+            case MONTHLY -> Month.of(position).getDisplayName(TextStyle.FULL, locale);
+            case DAILY, BUSINESS_DAILY -> DayOfWeek.of(position).getDisplayName(TextStyle.FULL, locale) + "s";
+            case QUARTERLY -> "Q" + position;
+            case WEEKLY -> String.format(Locale.ROOT, "W%02d", position);
+            case ANNUAL -> String.valueOf(position);
         };
     }
 

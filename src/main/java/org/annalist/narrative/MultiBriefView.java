@@ -6,8 +6,12 @@ import java.util.List;
  * The multi-series brief: a comparison of several series (a total and its markets, say), small
  * multiples on a shared time axis, whether the parts add up to the total, and a compact section
  * per series built from that series' own {@link BriefView}.
+ *
+ * @param listedOrder the rows keep the order in which the brief lists the series
+ * @param sortedBy    otherwise, the figure they are sorted by, in words
  */
-public record MultiBriefView(BriefView.Document document, Header header, List<ComparisonRow> rows, String sortedBy,
+public record MultiBriefView(BriefView.Document document, Header header, List<ComparisonRow> rows, boolean listedOrder,
+                             String sortedBy,
                              Consistency consistency, List<BriefView> sections, List<String> notes,
                              BriefView.Provenance provenance) {
 

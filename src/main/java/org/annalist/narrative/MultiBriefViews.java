@@ -49,9 +49,9 @@ public final class MultiBriefViews {
             rows.add(new MultiBriefView.ComparisonRow(series.get(i).name(), series.get(i).unit(),
                     v.lead().value().isEmpty() ? "\u2013" : v.lead().value(),
                     f.signedPercent(yearOnYear(fi)), f.signedPercent(yearToDate(fi)),
-                    v.trend().assessed() ? v.trend().direction().equals("none") ? "no clear trend" : v.trend().direction()
+                    v.trend().assessed() ? Terms.direction(fi.trend().direction())
                             : "not assessed",
-                    v.season().verdict().equals("present") ? v.season().peak() : "none claimed",
+                    v.season().present() ? v.season().peak() : "none claimed",
                     String.valueOf(v.breaks().size()), String.valueOf(v.outliers().size()), nextYear));
         }
         Formats first = Formats.forValues(series.get(0).values(), masthead.language());
@@ -69,7 +69,8 @@ public final class MultiBriefViews {
                 "time series, " + header.seriesList());
         List<String> notes = new ArrayList<>(source.notes());
         BriefView.Provenance provenance = sections.get(0).provenance();
-        return new MultiBriefView(document, header, rows, sortBy.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '),
+        return new MultiBriefView(document, header, rows, sortBy == SortBy.ORDER,
+                sortBy.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '),
                 consistency, sections, notes, provenance);
     }
 

@@ -8,7 +8,13 @@ import org.annalist.findings.Episode;
 import org.annalist.findings.Findings;
 import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.OutlierFinding;
-import org.annalist.findings.RulesInForce;
+import org.annalist.findings.Decomposition;
+import org.annalist.findings.DecisionRules;
+import org.annalist.findings.Direction;
+import org.annalist.findings.IrregularFinding;
+import org.annalist.findings.Measure;
+import org.annalist.findings.SeasonVerdict;
+import org.annalist.findings.Side;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.TrendFinding;
 import org.annalist.series.Frequency;
@@ -33,52 +39,55 @@ final class SectionViews {
 
     BriefView.TrendView trend() {
         TrendFinding t = findings.trend();
-        if (t.test() == null) {
-            return new BriefView.TrendView(false, "none", "", "", "", "", "", "", "", "", "", t.reason(), null, null);
+        if (!t.assessed()) {
+            return new BriefView.TrendView(false, false, false, "", "", "", "", "", "", "", "", "",
+                    Terms.trendNotAssessed(), null, null);
         }
         BriefView.SinceBreak since = null;
         TrendFinding.LatestRegime r = t.latestRegime();
         if (r != null) {
-            since = new BriefView.SinceBreak(f.period(period(r.since())), r.direction(), f.signedSignificant(r.slopePerYear()),
+            since = new BriefView.SinceBreak(f.period(r.since()), r.direction() == Direction.INCREASING,
+                    r.direction() == Direction.DECREASING, f.signedSignificant(r.slopePerYear()),
                     f.significant(r.lower95()), f.significant(r.upper95()), f.pValue(r.pValue()));
         }
         String kendall = t.seasonalKendall() == null ? null
-                : "seasonal Kendall z = " + f.fixed(t.seasonalKendall().statistic(), 2) + ", "
+                : Terms.test(t.seasonalKendall().test()) + " z = " + f.fixed(t.seasonalKendall().statistic(), 2) + ", "
                         + f.pValue(t.seasonalKendall().pValue());
-        return new BriefView.TrendView(true, t.direction(), t.test(), f.fixed(t.statistic(), 2), f.pValue(t.pValue()),
+        return new BriefView.TrendView(true, t.direction() == Direction.INCREASING, t.direction() == Direction.DECREASING,
+                Terms.trendTest(t.test()), f.fixed(t.statistic(), 2), f.pValue(t.pValue()),
                 f.signedSignificant(t.slopePerYear()), f.significant(Math.abs(t.slopePerYear())),
                 f.significant(t.slopeCi95().get(0)),
                 f.significant(t.slopeCi95().get(1)),
-                t.changePctPerYear() == null ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%", t.basis(), null,
+                t.changePctPerYear() == null ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%", Terms.trendBasis(t.test()), null,
                 since, kendall);
     }
 
     BriefView.SeasonView season() {
         SeasonalityFinding s = findings.seasonality();
-        String formReason = findings.form().reason();
-        if (s.period() == null || s.test() == null) {
-            return new BriefView.SeasonView(s.period() == null ? "not applicable" : "too short",
-                    s.period() == null ? "" : String.valueOf(s.period()), "", "", "", "", "", "", "", "", "", "", "",
-                    s.form().equals("multiplicative"), false, formReason,
-                    String.valueOf(RulesInForce.minimumYearsForSeason()));
+        SeasonVerdict verdict = s.verdict();
+        String formReason = Terms.formReason(findings.form().reason());
+        String years = String.valueOf(DecisionRules.MIN_YEARS_FOR_SEASON);
+        if (verdict == SeasonVerdict.NOT_APPLICABLE || verdict == SeasonVerdict.TOO_SHORT) {
+            return new BriefView.SeasonView(false, false, verdict == SeasonVerdict.TOO_SHORT,
+                    verdict == SeasonVerdict.NOT_APPLICABLE, s.period() == null ? "" : String.valueOf(s.period()), "", "",
+                    "", "", "", "", "", "", "", "", "", s.multiplicative(), false, formReason, years);
         }
-        boolean multiplicative = s.form().equals("multiplicative");
+        boolean multiplicative = s.multiplicative();
         SeasonalityFinding.ProfilePoint peak = extreme(s, true);
         SeasonalityFinding.ProfilePoint trough = extreme(s, false);
-        String strengthWord = RulesInForce.seasonalStrengthWord(s.strength());
-        return new BriefView.SeasonView(s.verdict(), String.valueOf(s.period()), f.fixed(s.strength(), 2), strengthWord,
-                s.test(), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), positionName(peak.label()),
-                index(peak.index(), multiplicative), positionName(trough.label()), index(trough.index(), multiplicative),
+        return new BriefView.SeasonView(verdict == SeasonVerdict.PRESENT, verdict == SeasonVerdict.NEGLIGIBLE, false,
+                false, String.valueOf(s.period()), f.fixed(s.strength(), 2), Terms.seasonalStrength(s.strength()),
+                Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), f.seasonName(series.frequency(), peak.position()),
+                index(peak.index(), multiplicative), f.seasonName(series.frequency(), trough.position()), index(trough.index(), multiplicative),
                 multiplicative ? f.fixed(s.swing(), 0) : f.significant(s.swing()),
-                multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason,
-                String.valueOf(RulesInForce.minimumYearsForSeason()));
+                multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years);
     }
 
     BriefView.CycleView cycle() {
         CycleFinding c = findings.cycle();
         return new BriefView.CycleView(c.present(), c.length() == null ? "" : f.fixed(c.length(), 1), c.regular(),
-                c.peaks(), c.spectralPeriod() == null ? "" : f.fixed(c.spectralPeriod(), 1),
-                c.pValue() == null ? "" : f.pValue(c.pValue()), c.reason());
+                c.peaks().stream().map(f::period).toList(), c.spectralPeriod() == null ? "" : f.fixed(c.spectralPeriod(), 1),
+                c.pValue() == null ? "" : f.pValue(c.pValue()), Terms.cycleReason(c));
     }
 
     List<BriefView.OutlierRow> outliers() {
@@ -86,7 +95,7 @@ final class SectionViews {
         for (OutlierFinding o : findings.outliers()) {
             rows.add(new BriefView.OutlierRow(f.period(series.period(o.index())), f.value(o.observed()),
                     f.value(o.expected()), f.signedPercent(o.deviationPct()), f.fixed(Math.abs(o.score()), 1),
-                    o.direction().equals("above")));
+                    o.direction() == Side.ABOVE));
         }
         return rows;
     }
@@ -114,38 +123,39 @@ final class SectionViews {
     }
 
     BriefView.IrregularView irregular() {
-        return findings.irregular().share() == null ? new BriefView.IrregularView(null, "")
-                : new BriefView.IrregularView(findings.irregular().label(), f.fixed(100 * findings.irregular().share(), 0)
-                + "\u00A0%");
+        IrregularFinding irregular = findings.irregular();
+        return irregular.share() == null ? new BriefView.IrregularView(null, "", false)
+                : new BriefView.IrregularView(irregular.size().code(), f.fixed(100 * irregular.share(), 0) + "\u00A0%",
+                irregular.size() == IrregularFinding.Size.LARGE);
     }
 
     BriefView.Charts charts() {
         boolean subAnnual = series.frequency() == Frequency.MONTHLY || series.frequency() == Frequency.QUARTERLY;
         boolean seasonal = findings.seasonality().present();
-        double[] trend = findings.decomposition().trendCycle() != null ? findings.decomposition().trendCycle()
-                : findings.smoothing() != null ? findings.smoothing().trendCycle() : series.values();
+        double[] trend = findings.decomposition().map(Decomposition::trendCycle)
+                .orElse(findings.smoothing() != null ? findings.smoothing().trendCycle() : series.values());
         int first = firstFinite(trend);
         int last = lastFinite(trend);
         return new BriefView.Charts(new BriefView.ChartView("overview", true),
                 new BriefView.ChartView("profile", seasonal), new BriefView.ChartView("years", subAnnual && seasonal
                 && series.size() >= 2 * series.frequency().seasonalPeriod()),
-                new BriefView.ChartView("irregular", findings.decomposition().irregular() != null),
+                new BriefView.ChartView("irregular", findings.decomposition().isPresent()),
                 String.valueOf(series.period(first).year()), String.valueOf(series.period(last).year()),
                 f.significant(trend[first]), f.significant(trend[last]), trend[last] > trend[first],
                 BriefViews.dropYears(series, findings.breaks()),
-                findings.smoothing() == null ? "" : findings.smoothing().method(),
+                findings.smoothing() == null ? "" : Terms.movingAverage(findings.smoothing().method()),
                 findings.smoothing() == null ? 0 : findings.smoothing().window());
     }
 
     BriefView.ThisPeriod thisPeriod() {
         IndicatorsFinding i = findings.indicators();
         if (i == null) {
-            return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", "", "", List.of(), false);
+            return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", false, false, "", List.of(), false);
         }
-        boolean level = !i.measure().equals("flow");
+        boolean level = i.measure() != Measure.FLOW;
         IndicatorsFinding.Span ytd = i.yearToDate();
         IndicatorsFinding.Span rolling = i.rollingYear();
-        Period period = period(i.period());
+        Period period = i.period();
         String rank = "";
         if (i.rank().of() >= 3 && series.frequency() != Frequency.ANNUAL) {
             String position = i.rank().position() == 1 ? "the highest" : i.rank().position() == i.rank().of() ? "the lowest"
@@ -153,13 +163,14 @@ final class SectionViews {
             rank = position + " " + seasonName(period) + " of the " + i.rank().of() + " in the data";
         }
         return new BriefView.ThisPeriod(true, level,
-                ytd == null ? "" : f.period(period(ytd.from())), ytd == null ? "" : f.period(period(ytd.to())),
+                ytd == null ? "" : f.period(ytd.from()), ytd == null ? "" : f.period(ytd.to()),
                 ytd == null ? "" : change(ytd, level), ytd == null ? "" : f.value(ytd.total()),
                 rolling == null ? "" : change(rolling, level), rolling == null ? "" : f.value(rolling.total()), rank,
-                i.record() == null ? "" : i.record(),
+                i.record() == IndicatorsFinding.Extreme.HIGH, i.record() == IndicatorsFinding.Extreme.LOW,
                 i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) ? ""
                         : f.signedPercent(i.seasonallyAdjustedChangePct()),
-                findings.calendar() == null ? List.of() : findings.calendar().notes(), !i.flagged().isEmpty());
+                findings.calendar() == null ? List.of()
+                        : findings.calendar().notes().stream().map(CalendarSentences::of).toList(), !i.flagged().isEmpty());
     }
 
     /** A change as a brief states it: % for flows, the measure's own units for levels and rates. */
@@ -177,27 +188,27 @@ final class SectionViews {
     }
 
     /** "October", "Q3", "Monday": the season a period's rank compares it within. */
-    private static String seasonName(Period p) {
-        return p.frequency() == Frequency.MONTHLY ? positionName(p.seasonLabel())
+    private String seasonName(Period p) {
+        return p.frequency() == Frequency.MONTHLY ? f.seasonName(p.frequency(), p.seasonalPosition())
                 : p.frequency() == Frequency.QUARTERLY ? p.seasonLabel() : "week " + p.seasonalPosition();
     }
 
     List<BriefView.KeyFigure> keyFigures(BriefView.Lead lead, BriefView.ThisPeriod period) {
         List<BriefView.KeyFigure> figures = new ArrayList<>();
         figures.add(new BriefView.KeyFigure(lead.period(), lead.value().isEmpty() ? "\u2013" : lead.value(),
-                lead.comparable() ? (lead.direction().equals("down") ? "\u2212" : "+") + lead.changePercent()
+                lead.comparable() ? (lead.down() ? "\u2212" : "+") + lead.changePercent()
                         + " on a year earlier" : "no comparison with a year earlier"));
         if (period.available() && !period.ytdChange().isEmpty()) {
             figures.add(new BriefView.KeyFigure("Year to date", period.ytdChange(),
                     period.ytdFrom() + " to " + period.ytdTo() + " against a year earlier"));
         } else {
             BriefView.SeasonView s = season();
-            figures.add(new BriefView.KeyFigure("Seasonal peak", s.verdict().equals("present") ? s.peak() : "none claimed",
-                    s.verdict().equals("present") ? s.peakIndex() + " against the yearly average; low in " + s.trough()
-                            : s.verdict().equals("not applicable") ? "annual data" : "no meaningful seasonal pattern"));
+            figures.add(new BriefView.KeyFigure("Seasonal peak", s.present() ? s.peak() : "none claimed",
+                    s.present() ? s.peakIndex() + " against the yearly average; low in " + s.trough()
+                            : s.notApplicable() ? "annual data" : "no meaningful seasonal pattern"));
         }
         BriefView.TrendView t = trend();
-        figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || t.direction().equals("none") ? "no clear trend"
+        figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || !t.rising() && !t.falling() ? "no clear trend"
                 : (t.percentPerYear().isEmpty() ? t.slopePerYear() : t.percentPerYear()) + " a year", t.assessed() ? "Sen slope " + t.slopePerYear() + " a year, " + t.pValue()
                 : "too few values"));
         int breaks = findings.breaks().size();
@@ -224,18 +235,6 @@ final class SectionViews {
             }
         }
         return best;
-    }
-
-    /** Month abbreviations become names in running text; quarters and weekdays stay as they are. */
-    private static String positionName(String label) {
-        return switch (label) {
-            case "Jan" -> "January"; case "Feb" -> "February"; case "Mar" -> "March"; case "Apr" -> "April";
-            case "May" -> "May"; case "Jun" -> "June"; case "Jul" -> "July"; case "Aug" -> "August";
-            case "Sep" -> "September"; case "Oct" -> "October"; case "Nov" -> "November"; case "Dec" -> "December";
-            case "Mon" -> "Mondays"; case "Tue" -> "Tuesdays"; case "Wed" -> "Wednesdays"; case "Thu" -> "Thursdays";
-            case "Fri" -> "Fridays"; case "Sat" -> "Saturdays"; case "Sun" -> "Sundays";
-            default -> label;
-        };
     }
 
     /** The series' period with this label. */

@@ -28,11 +28,11 @@ class AnalystReferenceTest {
     @Test
     void airPassengers() throws IOException {
         Findings f = analyse("AirPassengers");
-        assertThat(f.trend().direction()).isEqualTo("increasing");
+        assertThat(f.trend().direction()).isEqualTo(Direction.INCREASING);
         assertThat(f.seasonality().present()).isTrue();
         assertThat(f.seasonality().period()).isEqualTo(12);
-        assertThat(f.seasonality().form()).isEqualTo("multiplicative");
-        assertThat(f.transform()).isEqualTo("log");
+        assertThat(f.seasonality().form()).isEqualTo(Form.MULTIPLICATIVE);
+        assertThat(f.transform()).isEqualTo(Transform.LOG);
         assertThat(f.seasonality().peak().label()).isIn("Jul", "Aug");
         assertThat(f.cycle().present()).isFalse();
     }
@@ -40,7 +40,7 @@ class AnalystReferenceTest {
     @Test
     void co2() throws IOException {
         Findings f = analyse("co2");
-        assertThat(f.trend().direction()).isEqualTo("increasing");
+        assertThat(f.trend().direction()).isEqualTo(Direction.INCREASING);
         assertThat(f.seasonality().present()).isTrue();
         assertThat(f.seasonality().period()).isEqualTo(12);
         assertThat(f.cycle().present()).isFalse();
@@ -59,13 +59,13 @@ class AnalystReferenceTest {
         assertThat(f.series().frequency()).isEqualTo("quarterly");
         assertThat(f.seasonality().period()).isEqualTo(4);
         assertThat(f.seasonality().present()).isTrue();
-        assertThat(f.trend().direction()).isEqualTo("increasing");
+        assertThat(f.trend().direction()).isEqualTo(Direction.INCREASING);
     }
 
     @Test
     void nile() throws IOException {
         Findings f = analyse("Nile");
-        assertThat(f.trend().direction()).isIn("decreasing", "none");
+        assertThat(f.trend().direction()).isIn(Direction.DECREASING, Direction.NONE);
         assertThat(f.seasonality().present()).isFalse();
         assertThat(f.cycle().present()).isFalse();
     }

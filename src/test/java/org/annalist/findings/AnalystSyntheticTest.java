@@ -24,12 +24,12 @@ class AnalystSyntheticTest {
 
     @Test
     void trendOrNoTrend() {
-        assertThat(new Analyst().analyse(monthly(5, 0.3, false, 1)).trend().direction()).isEqualTo("increasing");
-        assertThat(new Analyst().analyse(monthly(-5, 0.3, false, 1)).trend().direction()).isEqualTo("decreasing");
+        assertThat(new Analyst().analyse(monthly(5, 0.3, false, 1)).trend().direction()).isEqualTo(Direction.INCREASING);
+        assertThat(new Analyst().analyse(monthly(-5, 0.3, false, 1)).trend().direction()).isEqualTo(Direction.DECREASING);
         // Without a trend the 5 % test may still fire by chance: over 20 seeds, expect about one.
         int falseTrends = 0;
         for (long seed = 1; seed <= 20; seed++) {
-            falseTrends += new Analyst().analyse(monthly(0, 0.3, false, seed)).trend().direction().equals("none") ? 0 : 1;
+            falseTrends += new Analyst().analyse(monthly(0, 0.3, false, seed)).trend().direction() == Direction.NONE ? 0 : 1;
         }
         assertThat(falseTrends).isLessThanOrEqualTo(3);
     }
@@ -44,8 +44,8 @@ class AnalystSyntheticTest {
 
     @Test
     void additiveOrMultiplicative() {
-        assertThat(new Analyst().analyse(monthly(20, 0.3, true, 3)).seasonality().form()).isEqualTo("multiplicative");
-        assertThat(new Analyst().analyse(monthly(20, 0.3, false, 3)).seasonality().form()).isEqualTo("additive");
+        assertThat(new Analyst().analyse(monthly(20, 0.3, true, 3)).seasonality().form()).isEqualTo(Form.MULTIPLICATIVE);
+        assertThat(new Analyst().analyse(monthly(20, 0.3, false, 3)).seasonality().form()).isEqualTo(Form.ADDITIVE);
     }
 
     @Test
@@ -57,8 +57,8 @@ class AnalystSyntheticTest {
         Findings f = new Analyst().analyse(Series.builder("short", Frequency.MONTHLY).append(Period.month(2024, 1), x)
                 .snapshot());
         assertThat(f.seasonality().present()).isFalse();
-        assertThat(f.seasonality().verdict()).isEqualTo("too short");
-        assertThat(f.notes()).anySatisfy(n -> assertThat(n).contains("shorter than 3 full years"));
+        assertThat(f.seasonality().verdict()).isEqualTo(SeasonVerdict.TOO_SHORT);
+        assertThat(f.notes()).contains(new Caveat.TooShortForSeason());
     }
 
     @Test
@@ -71,6 +71,6 @@ class AnalystSyntheticTest {
                 .snapshot());
         assertThat(f.series().missing()).isEqualTo(2);
         assertThat(f.seasonality().present()).isTrue();
-        assertThat(f.trend().direction()).isEqualTo("increasing");
+        assertThat(f.trend().direction()).isEqualTo(Direction.INCREASING);
     }
 }

@@ -74,9 +74,9 @@ class BreaksAndOutliersTest {
         Findings f = new Analyst().analyse(series(3, 0.02, t -> (t >= 70 ? 1.25 : 1) * (t == 30 ? 1.5 : 1)));
         assertThat(f.breaks()).hasSize(1);
         assertThat(covers(f.breaks().get(0), 70)).isTrue();
-        assertThat(f.outliers()).extracting(OutlierFinding::period).containsExactly(START.plus(30).label());
+        assertThat(f.outliers()).extracting(OutlierFinding::period).containsExactly(START.plus(30));
         OutlierFinding o = f.outliers().get(0);
-        assertThat(o.direction()).isEqualTo("above");
+        assertThat(o.direction()).isEqualTo(Side.ABOVE);
         assertThat(o.deviationPct()).isBetween(35.0, 65.0);
     }
 
@@ -133,7 +133,7 @@ class BreaksAndOutliersTest {
             x[t] = 50 + 12 * Math.sin(2 * Math.PI * (t - 3) / 12) + random.nextGaussian() + (t >= 90 ? 5 : 0);
         }
         Findings f = new Analyst().analyse(Series.builder("temps", Frequency.MONTHLY).append(START, x).snapshot());
-        assertThat(f.transform()).isEqualTo("none");
+        assertThat(f.transform()).isEqualTo(Transform.NONE);
         assertThat(f.breaks()).hasSize(1);
         assertThat(covers(f.breaks().get(0), 90)).isTrue();
     }
@@ -164,6 +164,6 @@ class BreaksAndOutliersTest {
         Findings f = new Analyst().analyse(Series.builder("daily", Frequency.DAILY)
                 .append(Period.day(java.time.LocalDate.of(2020, 1, 1)), x).snapshot());
         assertThat(f.breaks()).isEmpty();
-        assertThat(f.notes()).anySatisfy(n -> assertThat(n).contains("not searched in daily data"));
+        assertThat(f.notes()).contains(new Caveat.BreaksNotSearchedInDailyData());
     }
 }

@@ -54,7 +54,7 @@ class OutlierInjectionTest {
         int extra = 0;
         for (String dataset : DATASETS) {
             Series s = read(dataset);
-            Set<String> before = new HashSet<>(new Analyst().analyse(s).outliers().stream().map(OutlierFinding::period).toList());
+            Set<String> before = new HashSet<>(new Analyst().analyse(s).outliers().stream().map(o -> o.period().label()).toList());
             Random random = new Random(dataset.hashCode());
             int datasetPlanted = 0;
             int datasetFound = 0;
@@ -72,7 +72,7 @@ class OutlierInjectionTest {
                     x[i] *= random.nextBoolean() ? 1 + size : 1 - size;
                 }
                 Set<String> flagged = new HashSet<>(new Analyst().analyse(withValues(s, x)).outliers().stream()
-                        .map(OutlierFinding::period).toList());
+                        .map(o -> o.period().label()).toList());
                 for (int i : at) {
                     datasetPlanted++;
                     datasetFound += flagged.contains(s.period(i).label()) ? 1 : 0;
@@ -103,7 +103,7 @@ class OutlierInjectionTest {
                     .replaceAll("(?m)^\\d+,([^,]+),[^,]+,", "$1,").replaceFirst("^index,period,original,modified", "period,value");
             Series s = new SeriesFileReader(ReadOptions.defaults()).read("modified.csv",
                     text.getBytes(java.nio.charset.StandardCharsets.UTF_8)).series().get(0);
-            List<String> found = new Analyst().analyse(s).outliers().stream().map(OutlierFinding::period).toList();
+            List<String> found = new Analyst().analyse(s).outliers().stream().map(o -> o.period().label()).toList();
             assertThat(found).contains("1952-04", "1957-04");
             assertThat(found.size()).isLessThanOrEqualTo(4);
         }

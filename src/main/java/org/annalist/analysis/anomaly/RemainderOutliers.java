@@ -29,6 +29,31 @@ public final class RemainderOutliers {
     private RemainderOutliers() {
     }
 
+    /**
+     * The remainder as outliers are scored on: on logs it already is relative; for an additive
+     * series of counts (no negative values, a positive expected level) it is taken relative to the
+     * expected value, so that the busy season's larger swings are not read as outliers; otherwise
+     * as it is.
+     *
+     * @param expected what trend and season predict, on the scale of {@code remainder}
+     * @param observed the series' values
+     */
+    public static double[] scaled(double[] remainder, double[] expected, double[] observed, boolean logs) {
+        if (logs) {
+            return remainder;
+        }
+        for (int t = 0; t < observed.length; t++) {
+            if ((!Double.isNaN(observed[t]) && observed[t] < 0) || (!Double.isNaN(expected[t]) && expected[t] <= 0)) {
+                return remainder;
+            }
+        }
+        double[] relative = new double[remainder.length];
+        for (int t = 0; t < remainder.length; t++) {
+            relative[t] = remainder[t] / expected[t];
+        }
+        return relative;
+    }
+
     /** Robust scores of the remainder; NaN where it is missing. */
     public static double[] scores(double[] remainder) {
         double[] present = Arrays.stream(remainder).filter(v -> !Double.isNaN(v)).toArray();

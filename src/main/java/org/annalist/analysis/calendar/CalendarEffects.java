@@ -2,7 +2,7 @@ package org.annalist.analysis.calendar;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.annalist.analysis.DecisionRules;
+import java.util.Optional;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.apache.commons.math3.distribution.NormalDistribution;
@@ -16,8 +16,8 @@ import org.apache.commons.math3.linear.RealMatrix;
  * and Saturday nights, each centred on its mean for that calendar month
  * (so that none of them takes over the seasonal pattern), with Newey–West standard errors that
  * allow for autocorrelation (Newey &amp; West 1987, <i>Econometrica</i> 55, 703–708; Bartlett weights,
- * lag ⌊4 (n/100)^{2/9}⌋ after Newey &amp; West 1994). An effect is kept when its two-sided normal
- * p-value is below {@link DecisionRules#ALPHA}.
+ * lag ⌊4 (n/100)^{2/9}⌋ after Newey &amp; West 1994), and two-sided normal p-values; whether an
+ * effect counts is the caller's decision.
  *
  * <p>A user's own moving holidays ({@link Holiday}) enter the same way as Easter: the share of
  * the year's holiday days in the period, centred per calendar month.
@@ -38,7 +38,7 @@ public final class CalendarEffects {
      * @param coefficient change of the irregular per unit of the regressor: per whole Easter
      *                    window, per extra Friday or Saturday
      */
-    public record Effect(String name, double coefficient, double standardError, double pValue, boolean kept) {
+    public record Effect(String name, double coefficient, double standardError, double pValue) {
     }
 
     /** @param lags Newey–West lags used */
@@ -48,8 +48,8 @@ public final class CalendarEffects {
             effects = List.copyOf(effects);
         }
 
-        public java.util.Optional<Effect> kept(String name) {
-            return effects.stream().filter(e -> e.name().equals(name) && e.kept()).findFirst();
+        public Optional<Effect> effect(String name) {
+            return effects.stream().filter(e -> e.name().equals(name)).findFirst();
         }
     }
 
@@ -116,14 +116,16 @@ public final class CalendarEffects {
     /**
      * @param irregular the irregular component on the working scale, NaN where missing
      * @param start     the period of {@code irregular[0]}
-     * @throws IllegalArgumentException for a frequency other than monthly or quarterly, or too few values
+     * @return empty with fewer than 3k + 10 values for k regressors and the intercept
+     * @throws IllegalArgumentException for a frequency other than monthly or quarterly
      */
-    public static Result estimate(double[] irregular, Period start, int easterWindow) {
+    public static Optional<Result> estimate(double[] irregular, Period start, int easterWindow) {
         return estimate(irregular, start, easterWindow, List.of());
     }
 
     /** As {@link #estimate(double[], Period, int)}, with the user's own moving holidays as further regressors. */
-    public static Result estimate(double[] irregular, Period start, int easterWindow, List<Holiday> holidays) {
+    public static Optional<Result> estimate(double[] irregular, Period start, int easterWindow,
+                                            List<Holiday> holidays) {
         if (!applies(start.frequency())) {
             throw new IllegalArgumentException("calendar effects are estimated for monthly or quarterly data, not "
                     + start.frequency());
@@ -139,7 +141,7 @@ public final class CalendarEffects {
         int n = rows.size();
         int k = names.size() + 1;
         if (n < 3 * k + 10) {
-            throw new IllegalArgumentException("calendar effects need at least " + (3 * k + 10) + " values, got " + n);
+            return Optional.empty();   // too few values for the regressors (our rule)
         }
         double[][] x = new double[n][k];
         double[] y = new double[n];
@@ -180,8 +182,8 @@ public final class CalendarEffects {
         for (int j = 1; j < k; j++) {
             double se = Math.sqrt(Math.max(0, covariance.getEntry(j, j)));
             double p = se == 0 ? 1 : 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(beta[j] / se));
-            effects.add(new Effect(names.get(j - 1), beta[j], se, p, p < DecisionRules.ALPHA));
+            effects.add(new Effect(names.get(j - 1), beta[j], se, p));
         }
-        return new Result(effects, n, lags, easterWindow);
+        return Optional.of(new Result(effects, n, lags, easterWindow));
     }
 }

@@ -2,39 +2,56 @@ package org.annalist.analysis.cycle;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.season.Periodogram;
 
 /**
  * Rises and falls longer than a year that recur: a cycle, as opposed to a seasonal pattern.
+ * Evidence only; whether it is worth a statement is decided by the caller.
  *
  * <p>Works on one value per year (annual data, or the yearly means of a seasonally adjusted
  * series), so a seasonal pattern can never be taken for a cycle. Steps:
  * <ol>
  * <li>the periodogram of the linearly detrended values ({@link Periodogram}); candidate periods
- *     lie between {@link DecisionRules#MIN_CYCLE_YEARS} years and n / {@link DecisionRules#MIN_CYCLES_IN_DATA};</li>
+ *     lie between the shortest cycle (default {@value #DEFAULT_SHORTEST_CYCLE_YEARS} years) and n
+ *     divided by the cycles the data must hold (default {@value #DEFAULT_CYCLES_IN_DATA});</li>
  * <li>the highest candidate ordinate is tested against a red-noise background: an AR(1) spectrum
- *     {@code S(f) ∝ (1 − r²)/(1 − 2r cos 2πf + r²)} with r the lag-1 autocorrelation of the
+ *     {@code S(f) ∝ (1 − r²)/(1 − 2r cos 2πf + r²)} [1] with r the lag-1 autocorrelation of the
  *     detrended values, scaled to the periodogram's mean; under it each ordinate is
  *     S(f)·χ²₂/2, so the chance that the largest of M candidates reaches I is
- *     {@code 1 − (1 − e^{−I/S})^M} (Gilman, Fuglister &amp; Mitchell 1963, <i>J. Atmos. Sci.</i> 20,
- *     182–184, for the red-noise spectrum; the maximum over M ordinates, Fisher's idea, from memory);</li>
- * <li>the peaks themselves confirm it: local maxima at least half a period apart; their gaps give
- *     the length; the cycle is regular when the gaps' coefficient of variation is at most
- *     {@link DecisionRules#MAX_REGULAR_GAP_CV}.</li>
+ *     {@code 1 − (1 − e^{−I/S})^M} (the maximum over M ordinates, Fisher's idea, from memory);</li>
+ * <li>the peaks: local maxima at least half a period apart; their gaps give the length, and the
+ *     gaps' coefficient of variation how regular the cycle is.</li>
+ * </ol>
+ *
+ * <p>References:
+ * <ol>
+ * <li>D. L. Gilman, F. J. Fuglister and J. M. Mitchell (1963), "On the power spectrum of 'red
+ *     noise'", <i>Journal of the Atmospheric Sciences</i> 20, 182–184,
+ *     doi:10.1175/1520-0469(1963)020&lt;0182:OTPSON&gt;2.0.CO;2 (DOI from memory).</li>
  * </ol>
  */
 public final class CycleDetector {
 
+    /** Whether the search could measure anything. */
+    public enum Status {
+        /** Fewer yearly values than the search needs. */
+        TOO_FEW_YEARS,
+        /** No periodogram period between the shortest cycle and the longest the data can hold. */
+        NO_CANDIDATE_PERIOD,
+        MEASURED
+    }
+
     /**
-     * @param spectralPeriod the period of the periodogram peak, in years
-     * @param pValue         chance of so high a peak under red noise
+     * @param years          yearly values searched
+     * @param spectralPeriod the period of the periodogram peak, in years (NaN unless measured)
+     * @param pValue         chance of so high a peak under red noise (NaN unless measured)
      * @param peaks          0-based positions of the peaks in the yearly values
      * @param gaps           years between successive peaks
      * @param length         mean gap in years (the spectral period when fewer than two gaps)
+     * @param gapVariation   coefficient of variation of the gaps (NaN with fewer than two gaps)
      */
-    public record Result(boolean present, String reason, double spectralPeriod, double pValue, List<Integer> peaks,
-                         List<Integer> gaps, double length, boolean regular) {
+    public record Result(Status status, int years, double spectralPeriod, double pValue, List<Integer> peaks,
+                         List<Integer> gaps, double length, double gapVariation) {
 
         public Result {
             peaks = List.copyOf(peaks);
@@ -42,18 +59,49 @@ public final class CycleDetector {
         }
     }
 
-    private CycleDetector() {
+    /** Yearly values needed to look for a cycle at all (our rule). */
+    public static final int DEFAULT_MINIMUM_YEARS = 12;
+    /** A cycle is longer than two years (Hyndman &amp; Athanasopoulos 2021, §2.3: cycles last "at least 2 years"). */
+    public static final double DEFAULT_SHORTEST_CYCLE_YEARS = 2.0;
+    /** At least two complete cycles in the data (rule of thumb, research notes C7). */
+    public static final double DEFAULT_CYCLES_IN_DATA = 2.0;
+
+    private final int minimumYears;
+    private final double shortestCycleYears;
+    private final double cyclesInData;
+
+    private CycleDetector(int minimumYears, double shortestCycleYears, double cyclesInData) {
+        this.minimumYears = minimumYears;
+        this.shortestCycleYears = shortestCycleYears;
+        this.cyclesInData = cyclesInData;
+    }
+
+    public static CycleDetector withDefaults() {
+        return new CycleDetector(DEFAULT_MINIMUM_YEARS, DEFAULT_SHORTEST_CYCLE_YEARS, DEFAULT_CYCLES_IN_DATA);
+    }
+
+    public CycleDetector withMinimumYears(int years) {
+        return new CycleDetector(years, shortestCycleYears, cyclesInData);
+    }
+
+    public CycleDetector withShortestCycleYears(double years) {
+        return new CycleDetector(minimumYears, years, cyclesInData);
+    }
+
+    /** How many whole cycles the data must hold: the longest candidate period is n / cycles. */
+    public CycleDetector withCyclesInData(double cycles) {
+        return new CycleDetector(minimumYears, shortestCycleYears, cycles);
     }
 
     /** @param yearly one value per year, no missing values */
-    public static Result detect(double[] yearly) {
+    public Result detect(double[] yearly) {
         int n = yearly.length;
-        if (n < DecisionRules.MIN_YEARS_FOR_CYCLE) {
-            return absent("the data cover " + n + " years, and at least " + DecisionRules.MIN_YEARS_FOR_CYCLE
-                    + " are needed");
+        if (n < minimumYears) {
+            return unmeasured(Status.TOO_FEW_YEARS, n);
         }
         Periodogram.Result spectrum = Periodogram.of(yearly, 1);
         double[] power = spectrum.power();
+        double[] frequency = spectrum.frequency();
         double meanPower = 0;
         for (double p : power) {
             meanPower += p / power.length;
@@ -62,8 +110,8 @@ public final class CycleDetector {
         double[] background = new double[power.length];
         double meanBackground = 0;
         for (int k = 0; k < power.length; k++) {
-            double f = spectrum.frequency()[k];
-            background[k] = (1 - r * r) / (1 - 2 * r * Math.cos(2 * Math.PI * f) + r * r);
+            double f = frequency[k];
+            background[k] = (1 - r * r) / (1 - 2 * r * Math.cos(2 * Math.PI * f) + r * r);   // [1]
             meanBackground += background[k] / power.length;
         }
         int best = -1;
@@ -71,7 +119,7 @@ public final class CycleDetector {
         double bestRatio = 0;
         for (int k = 0; k < power.length; k++) {
             double period = spectrum.period(k);
-            if (period < DecisionRules.MIN_CYCLE_YEARS || period > n / DecisionRules.MIN_CYCLES_IN_DATA) {
+            if (period < shortestCycleYears || period > n / cyclesInData) {
                 continue;
             }
             candidates++;
@@ -82,7 +130,7 @@ public final class CycleDetector {
             }
         }
         if (best < 0) {
-            return absent("no period between " + DecisionRules.MIN_CYCLE_YEARS + " years and half the span");
+            return unmeasured(Status.NO_CANDIDATE_PERIOD, n);
         }
         double pValue = 1 - Math.pow(1 - Math.exp(-bestRatio), candidates);
         double spectralPeriod = spectrum.period(best);
@@ -92,23 +140,13 @@ public final class CycleDetector {
             gaps.add(peaks.get(i) - peaks.get(i - 1));
         }
         double length = gaps.size() >= 2 ? gaps.stream().mapToInt(Integer::intValue).average().orElseThrow() : spectralPeriod;
-        boolean regular = isRegular(gaps);
-        if (pValue >= DecisionRules.ALPHA) {
-            return new Result(false, "its strongest period, " + Math.round(spectralPeriod * 10) / 10.0
-                    + " years, is no stronger than random persistent wander would give", spectralPeriod, pValue, peaks,
-                    gaps, length, regular);
-        }
-        if (peaks.size() < 3) {
-            return new Result(false, "fewer than three peaks confirm it", spectralPeriod, pValue, peaks, gaps, length,
-                    regular);
-        }
-        return new Result(true, "", spectralPeriod, pValue, peaks, gaps, length, regular);
+        return new Result(Status.MEASURED, n, spectralPeriod, pValue, peaks, gaps, length, variation(gaps));
     }
 
-    /** Gaps are regular when there are at least two and their coefficient of variation is small. */
-    public static boolean isRegular(List<Integer> gaps) {
+    /** The gaps' coefficient of variation (sample standard deviation over mean); NaN with fewer than two. */
+    public static double variation(List<Integer> gaps) {
         if (gaps.size() < 2) {
-            return false;
+            return Double.NaN;
         }
         double mean = gaps.stream().mapToInt(Integer::intValue).average().orElseThrow();
         double ss = 0;
@@ -116,11 +154,11 @@ public final class CycleDetector {
             ss += (g - mean) * (g - mean);
         }
         double sd = Math.sqrt(ss / (gaps.size() - 1));
-        return sd / mean <= DecisionRules.MAX_REGULAR_GAP_CV;
+        return sd / mean;
     }
 
-    private static Result absent(String reason) {
-        return new Result(false, reason, Double.NaN, Double.NaN, List.of(), List.of(), Double.NaN, false);
+    private static Result unmeasured(Status status, int years) {
+        return new Result(status, years, Double.NaN, Double.NaN, List.of(), List.of(), Double.NaN, Double.NaN);
     }
 
     /** Positions that hold the highest value within half a period on either side (the first of equals). */

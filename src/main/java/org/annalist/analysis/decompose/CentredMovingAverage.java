@@ -20,10 +20,9 @@ public final class CentredMovingAverage {
 
     /**
      * @param trendCycle the smoothed values, {@code NaN} where no full window exists
-     * @param window     the number of periods averaged ({@code m})
-     * @param label      how the brief names it: {@code 2×12 centred moving average}, {@code 7-term centred moving average}
+     * @param window     the number of periods averaged ({@code m}); an even one is averaged twice (2×m)
      */
-    public record Result(double[] trendCycle, int window, String label) {
+    public record Result(double[] trendCycle, int window) {
 
         public Result {
             trendCycle = trendCycle.clone();
@@ -74,7 +73,6 @@ public final class CentredMovingAverage {
             }
             smooth[t] = sum;                       // NaN in the window makes the sum NaN, as intended
         }
-        String label = (even ? "2\u00D7" + window : window + "-term") + " centred moving average";
-        return new Result(smooth, window, label);
+        return new Result(smooth, window);
     }
 }

@@ -1,6 +1,6 @@
 package org.annalist.analysis.decompose;
 
-import org.annalist.analysis.DecisionRules;
+import java.util.Optional;
 
 /**
  * How much of a series' movement is irregular fluctuation: the share of the variation around the
@@ -10,16 +10,15 @@ import org.annalist.analysis.DecisionRules;
  */
 public final class Irregular {
 
-    public enum Size { SMALL, MODERATE, LARGE }
-
-    public record Result(double share, Size size) {
+    /** @param share Var(R) / Var(y − line), at most 1 */
+    public record Result(double share) {
     }
 
     private Irregular() {
     }
 
-    /** @throws IllegalArgumentException when fewer than three periods have a remainder */
-    public static Result of(double[] y, double[] remainder) {
+    /** @return empty when fewer than three periods have a remainder */
+    public static Optional<Result> of(double[] y, double[] remainder) {
         int n = y.length;
         int count = 0;
         double tMean = 0;
@@ -32,7 +31,7 @@ public final class Irregular {
             }
         }
         if (count < 3) {
-            throw new IllegalArgumentException("the irregular share needs at least 3 remainders, got " + count);
+            return Optional.empty();
         }
         tMean /= count;
         yMean /= count;
@@ -57,8 +56,6 @@ public final class Irregular {
             }
         }
         double share = varAround == 0 ? 0 : Math.min(1, varR / varAround);
-        Size size = share < DecisionRules.SMALL_IRREGULAR_SHARE ? Size.SMALL
-                : share <= DecisionRules.LARGE_IRREGULAR_SHARE ? Size.MODERATE : Size.LARGE;
-        return new Result(share, size);
+        return Optional.of(new Result(share));
     }
 }

@@ -1,60 +1,60 @@
 package org.annalist.analysis.decompose;
 
-import org.annalist.analysis.DecisionRules;
-
 /**
- * Whether a series is additive (the seasonal swing keeps its size) or multiplicative (the swing
- * grows with the level, so the decomposition is done on logs).
+ * The evidence for an additive (the seasonal swing keeps its size) or a multiplicative series
+ * (the swing grows with the level, so the decomposition is done on logs); the caller decides.
  *
- * <p>Rule: with a value of zero or below, additive (logs do not exist). Otherwise, over every
- * complete cycle of the centred moving average, the level L is the mean of the moving average and
- * the swing W the standard deviation of the values around it; the elasticity b is the
- * least-squares slope of log W on log L. Multiplicative when b ≥
- * {@value DecisionRules#MULTIPLICATIVE_ELASTICITY} and the level varies by a factor of at least
- * {@value DecisionRules#MIN_LEVEL_RATIO_FOR_FORM}; with a level that varies less, both forms fit
- * alike and the simpler additive one is kept. The evidence is returned with the choice.
+ * <p>With a value of zero or below there is nothing to measure: logs do not exist. Otherwise, over
+ * every complete cycle of the centred moving average, the level L is the mean of the moving
+ * average and the swing W the standard deviation of the values around it; the elasticity b is the
+ * least-squares slope of log W on log L (b = 0 additive, b = 1 multiplicative, [1] §3.2), and the
+ * level ratio the largest over the smallest yearly level, which says whether the level varied
+ * enough for b to mean something.
+ *
+ * <p>References:
+ * <ol>
+ * <li>R. J. Hyndman and G. Athanasopoulos (2021), <i>Forecasting: Principles and Practice</i>,
+ *     3rd ed., OTexts.</li>
+ * </ol>
  */
 public final class ModelForm {
 
-    public enum Form { ADDITIVE, MULTIPLICATIVE }
-
-    public enum Reason {
-        SWING_GROWS_WITH_LEVEL, SWING_INDEPENDENT_OF_LEVEL, LEVEL_TOO_STABLE, NOT_ALL_POSITIVE, TOO_SHORT, NOT_SEASONAL,
-        FORCED
+    /** What could be measured. */
+    public enum Status {
+        MEASURED,
+        /** A value of zero or below: logs do not exist. */
+        NOT_ALL_POSITIVE,
+        /** No seasonal period (annual data): no swing to measure. */
+        NOT_SEASONAL,
+        /** Fewer than {@value #MIN_CYCLES} complete cycles. */
+        TOO_SHORT
     }
 
     /**
-     * @param elasticity b (NaN when not computed)
-     * @param levelRatio largest over smallest yearly level (NaN when not computed)
+     * @param elasticity b (NaN unless measured)
+     * @param levelRatio largest over smallest yearly level (NaN unless measured)
      * @param cycles     complete cycles the evidence used
      */
-    public record Choice(Form form, Reason reason, double elasticity, double levelRatio, int cycles) {
-
-        public boolean multiplicative() {
-            return form == Form.MULTIPLICATIVE;
-        }
+    public record Evidence(Status status, double elasticity, double levelRatio, int cycles) {
     }
 
-    private static final int MIN_CYCLES = 3;
+    /** Complete cycles the elasticity needs (our rule: a slope through fewer points means little). */
+    public static final int MIN_CYCLES = 3;
 
     private ModelForm() {
     }
 
-    public static Choice forced(Form form) {
-        return new Choice(form, Reason.FORCED, Double.NaN, Double.NaN, 0);
-    }
-
-    public static Choice choose(double[] x, int period) {
+    public static Evidence measure(double[] x, int period) {
         for (double v : x) {
             if (!Double.isNaN(v) && v <= 0) {
-                return new Choice(Form.ADDITIVE, Reason.NOT_ALL_POSITIVE, Double.NaN, Double.NaN, 0);
+                return new Evidence(Status.NOT_ALL_POSITIVE, Double.NaN, Double.NaN, 0);
             }
         }
         if (period < 2) {
-            return new Choice(Form.ADDITIVE, Reason.NOT_SEASONAL, Double.NaN, Double.NaN, 0);
+            return new Evidence(Status.NOT_SEASONAL, Double.NaN, Double.NaN, 0);
         }
         if (x.length < (MIN_CYCLES + 1) * period + 1) {
-            return new Choice(Form.ADDITIVE, Reason.TOO_SHORT, Double.NaN, Double.NaN, 0);
+            return new Evidence(Status.TOO_SHORT, Double.NaN, Double.NaN, 0);
         }
         double[] trend = CentredMovingAverage.of(x, period).trendCycle();
         int cycles = x.length / period;
@@ -92,16 +92,9 @@ public final class ModelForm {
             used++;
         }
         if (used < MIN_CYCLES) {
-            return new Choice(Form.ADDITIVE, Reason.TOO_SHORT, Double.NaN, Double.NaN, used);
+            return new Evidence(Status.TOO_SHORT, Double.NaN, Double.NaN, used);
         }
-        double b = slope(logLevel, logSwing, used);
-        double ratio = maxLevel / minLevel;
-        if (ratio < DecisionRules.MIN_LEVEL_RATIO_FOR_FORM) {
-            return new Choice(Form.ADDITIVE, Reason.LEVEL_TOO_STABLE, b, ratio, used);
-        }
-        return b >= DecisionRules.MULTIPLICATIVE_ELASTICITY
-                ? new Choice(Form.MULTIPLICATIVE, Reason.SWING_GROWS_WITH_LEVEL, b, ratio, used)
-                : new Choice(Form.ADDITIVE, Reason.SWING_INDEPENDENT_OF_LEVEL, b, ratio, used);
+        return new Evidence(Status.MEASURED, slope(logLevel, logSwing, used), maxLevel / minLevel, used);
     }
 
     private static double standardDeviation(double[] v) {

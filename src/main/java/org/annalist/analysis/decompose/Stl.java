@@ -1,6 +1,7 @@
 package org.annalist.analysis.decompose;
 
 import java.util.Arrays;
+import java.util.Optional;
 
 /**
  * STL, the seasonal-trend decomposition by loess: {@code y = seasonal + trend + remainder}.
@@ -43,11 +44,48 @@ public final class Stl {
                              int inner, int outer, boolean periodic) {
     }
 
+    /** Why a series cannot be decomposed. */
+    public enum Obstacle {
+        /** No more than two full periods (R's {@code stl} asks for more). */
+        TOO_SHORT,
+        /** A position of the period with fewer than two observed values. */
+        SPARSE_POSITION
+    }
+
     /**
+     * The components, each a fresh copy on access.
+     *
      * @param weights final robustness weights (1 for a non-robust fit, 0 at missing values)
      */
     public record Result(double[] seasonal, double[] trend, double[] remainder, double[] weights,
                          Parameters parameters) {
+
+        public Result {
+            seasonal = seasonal.clone();
+            trend = trend.clone();
+            remainder = remainder.clone();
+            weights = weights.clone();
+        }
+
+        @Override
+        public double[] seasonal() {
+            return seasonal.clone();
+        }
+
+        @Override
+        public double[] trend() {
+            return trend.clone();
+        }
+
+        @Override
+        public double[] remainder() {
+            return remainder.clone();
+        }
+
+        @Override
+        public double[] weights() {
+            return weights.clone();
+        }
 
         /** Seasonally adjusted values: observed minus seasonal ({@code NaN} where observed is missing). */
         public double[] adjusted() {
@@ -120,9 +158,27 @@ public final class Stl {
         return new Stl(period, seasonalWindow, trendWindow, robustness, innerLoops, outerLoops);
     }
 
+    /** Why {@link #fit} would refuse {@code y}; empty when it can decompose it. */
+    public Optional<Obstacle> obstacle(double[] y) {
+        if (y.length <= 2 * period) {
+            return Optional.of(Obstacle.TOO_SHORT);
+        }
+        for (int j = 0; j < period; j++) {
+            int observed = 0;
+            for (int t = j; t < y.length; t += period) {
+                observed += Double.isNaN(y[t]) ? 0 : 1;
+            }
+            if (observed < 2) {
+                return Optional.of(Obstacle.SPARSE_POSITION);
+            }
+        }
+        return Optional.empty();
+    }
+
     /**
      * @throws IllegalArgumentException if the series has no more than two full periods (as R's
-     *                                  {@code stl}), or fewer than two observed values per cycle position
+     *                                  {@code stl}), or fewer than two observed values per cycle
+     *                                  position: ask {@link #obstacle} first
      */
     public Result fit(double[] y) {
         int n = y.length;

@@ -2,6 +2,7 @@ package org.annalist.analysis.indicators;
 
 import java.time.Month;
 import java.util.EnumSet;
+import java.util.Optional;
 import java.util.Set;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
@@ -41,15 +42,21 @@ public final class LatestIndicators {
     public record Rank(int position, int of) {
     }
 
+    /** The value is the highest or the lowest of the whole series so far. */
+    public enum Extreme { HIGHEST, LOWEST }
+
     /**
      * @param flags             flags on any value the figures use (provisional, estimated …)
+     * @param lastYear          empty when the value a year earlier is missing or before the data
+     * @param yearToDate        empty for annual data or when a value of either span is missing
      * @param adjustedChangePct change of the seasonally adjusted value on the previous period, NaN if unknown
-     * @param record            {@code high}, {@code low} or null: the highest or lowest value of the whole series so far
+     * @param extreme           whether the value is the highest or lowest so far
      * @param longerFebruary    a February compared with one of another length: +1 when this one is longer, −1 shorter, 0 otherwise
      */
-    public record Result(Period period, double value, Set<ValueFlag> flags, Measure measure, Comparison lastYear,
-                         Comparison twoYearsAgo, Span yearToDate, Span rollingYear, double adjustedChangePct, Rank rank,
-                         String record, int longerFebruary) {
+    public record Result(Period period, double value, Set<ValueFlag> flags, Measure measure,
+                         Optional<Comparison> lastYear, Optional<Comparison> twoYearsAgo, Optional<Span> yearToDate,
+                         Optional<Span> rollingYear, double adjustedChangePct, Rank rank, Optional<Extreme> extreme,
+                         int longerFebruary) {
     }
 
     private LatestIndicators() {
@@ -71,9 +78,9 @@ public final class LatestIndicators {
         int lag = YearOnYear.lag(s.frequency());
         EnumSet<ValueFlag> flags = EnumSet.noneOf(ValueFlag.class);
         flags.addAll(s.flags(i));
-        Comparison lastYear = compare(s, i, i - lag, flags);
-        Comparison twoYears = compare(s, i, i - 2 * lag, flags);
-        Span ytd = null;
+        Optional<Comparison> lastYear = compare(s, i, i - lag, flags);
+        Optional<Comparison> twoYears = compare(s, i, i - 2 * lag, flags);
+        Optional<Span> ytd = Optional.empty();
         if (s.frequency() != Frequency.ANNUAL) {
             int first = i;
             while (first > 0 && s.period(first - 1).year() == s.period(i).year()) {
@@ -81,7 +88,8 @@ public final class LatestIndicators {
             }
             ytd = span(s, first, i, lag, measure, flags, parts);
         }
-        Span rolling = s.frequency() == Frequency.ANNUAL || i - lag + 1 < 0 ? null : span(s, i - lag + 1, i, lag, measure, flags, parts);
+        Optional<Span> rolling = s.frequency() == Frequency.ANNUAL || i - lag + 1 < 0 ? Optional.empty()
+                : span(s, i - lag + 1, i, lag, measure, flags, parts);
         double adjustedChange = Double.NaN;
         if (adjusted != null && i > 0 && !Double.isNaN(adjusted[i]) && !Double.isNaN(adjusted[i - 1]) && adjusted[i - 1] != 0) {
             adjustedChange = 100 * (adjusted[i] / adjusted[i - 1] - 1);
@@ -104,14 +112,15 @@ public final class LatestIndicators {
                 low &= s.value(j) > s.value(i);
             }
         }
-        String record = earlier == 0 ? null : high ? "high" : low ? "low" : null;
+        Optional<Extreme> extreme = earlier == 0 ? Optional.empty() : high ? Optional.of(Extreme.HIGHEST)
+                : low ? Optional.of(Extreme.LOWEST) : Optional.empty();
         int february = 0;
         Period p = s.period(i);
-        if (s.frequency() == Frequency.MONTHLY && p.startDate().getMonth() == Month.FEBRUARY && lastYear != null) {
-            february = Integer.compare(p.lengthInDays(), lastYear.period().lengthInDays());
+        if (s.frequency() == Frequency.MONTHLY && p.startDate().getMonth() == Month.FEBRUARY && lastYear.isPresent()) {
+            february = Integer.compare(p.lengthInDays(), lastYear.get().period().lengthInDays());
         }
         return new Result(p, s.value(i), Set.copyOf(flags), measure, lastYear, twoYears, ytd, rolling, adjustedChange,
-                new Rank(above + 1, of), record, february);
+                new Rank(above + 1, of), extreme, february);
     }
 
     /** Σ numerator / Σ denominator × scale over {@code from..to}, shifted back {@code lag} periods. */
@@ -130,26 +139,28 @@ public final class LatestIndicators {
         return den == 0 ? Double.NaN : parts.scale() * num / den;
     }
 
-    private static Comparison compare(Series s, int i, int earlier, Set<ValueFlag> flags) {
+    private static Optional<Comparison> compare(Series s, int i, int earlier, Set<ValueFlag> flags) {
         if (earlier < 0 || s.isMissing(earlier)) {
-            return null;
+            return Optional.empty();
         }
         flags.addAll(s.flags(earlier));
         double then = s.value(earlier);
         double change = s.value(i) - then;
-        return new Comparison(s.period(earlier), then, change, then == 0 ? Double.NaN : 100 * change / Math.abs(then));
+        return Optional.of(new Comparison(s.period(earlier), then, change,
+                then == 0 ? Double.NaN : 100 * change / Math.abs(then)));
     }
 
-    /** {@code from..to} against the same positions {@code lag} periods earlier; null if any value is missing. */
-    private static Span span(Series s, int from, int to, int lag, Measure measure, Set<ValueFlag> flags, Parts parts) {
+    /** {@code from..to} against the same positions {@code lag} periods earlier; empty if any value is missing. */
+    private static Optional<Span> span(Series s, int from, int to, int lag, Measure measure, Set<ValueFlag> flags,
+                                       Parts parts) {
         if (from - lag < 0) {
-            return null;
+            return Optional.empty();
         }
         double now = 0;
         double before = 0;
         for (int j = from; j <= to; j++) {
             if (s.isMissing(j) || s.isMissing(j - lag)) {
-                return null;
+                return Optional.empty();
             }
             now += s.value(j);
             before += s.value(j - lag);
@@ -166,7 +177,7 @@ public final class LatestIndicators {
             now /= n;
             before /= n;
         }
-        return new Span(s.period(from), s.period(to), now, before, now - before,
-                before == 0 ? Double.NaN : 100 * (now - before) / Math.abs(before));
+        return Optional.of(new Span(s.period(from), s.period(to), now, before, now - before,
+                before == 0 ? Double.NaN : 100 * (now - before) / Math.abs(before)));
     }
 }

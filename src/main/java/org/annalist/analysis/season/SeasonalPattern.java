@@ -2,31 +2,39 @@ package org.annalist.analysis.season;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.annalist.analysis.DecisionRules;
+import java.util.Optional;
 import org.annalist.analysis.TestResult;
 import org.annalist.analysis.decompose.Stl;
 import org.annalist.series.Period;
 
 /**
- * Is there a seasonal pattern, how strong, and what does it look like?
+ * How strong is the seasonal pattern and what does it look like? Evidence only; whether it is
+ * worth a statement is decided by the caller.
  *
- * <p>Evidence, all from an STL fit on the working scale (logs for a multiplicative series):
+ * <p>All from an STL fit on the working scale (logs for a multiplicative series):
  * <ul>
- * <li>a Kruskal–Wallis test of the detrended values (observed − trend) grouped by season position;</li>
- * <li>the seasonal strength F_S = max(0, 1 − Var(R)/Var(S + R)) (Wang, Smith &amp; Hyndman 2006,
- *     <i>Data Mining and Knowledge Discovery</i> 13, 335–364; in the STL form of Hyndman &amp;
- *     Athanasopoulos 2021, §4.3);</li>
- * <li>the seasonal profile: the mean seasonal component of each position over the last three
- *     complete years, centred; as % above or below the yearly average for a multiplicative series,
- *     in series units for an additive one; its peak, trough and swing;</li>
- * <li>whether the pattern changed: the profile of the first three years against the last three;</li>
+ * <li>a Kruskal–Wallis test of the detrended values (observed − trend) grouped by season position [2];</li>
+ * <li>the seasonal strength F_S = max(0, 1 − Var(R)/Var(S + R)) [1], in the STL form of [3], §4.3;</li>
+ * <li>the seasonal profile: the mean seasonal component of each position over the last
+ *     {@value #PROFILE_YEARS} complete years, centred; as % above or below the yearly average for a
+ *     multiplicative series, in series units for an additive one; its peak, trough and swing;</li>
+ * <li>the profile of the first {@value #PROFILE_YEARS} complete years against the last, for a
+ *     pattern that changed;</li>
  * <li>the period confirmed from the data: the autocorrelation of the detrended values at the
- *     seasonal lag (positive, significant and a local peak).</li>
+ *     seasonal lag (positive, beyond 2/√n and a local peak).</li>
  * </ul>
- * A pattern is claimed only when the test rejects at {@link DecisionRules#ALPHA}, the strength is
- * at least {@link DecisionRules#MIN_SEASONAL_STRENGTH} and the swing at least
- * {@link DecisionRules#MIN_SEASONAL_SWING_PCT} % of the level; a detectable but negligible pattern
- * is reported as "no meaningful seasonal pattern", with its numbers.
+ *
+ * <p>References:
+ * <ol>
+ * <li>X. Wang, K. A. Smith and R. J. Hyndman (2006), "Characteristic-based clustering for time
+ *     series data", <i>Data Mining and Knowledge Discovery</i> 13, 335–364,
+ *     doi:10.1007/s10618-005-0039-x (DOI from memory).</li>
+ * <li>W. H. Kruskal and W. A. Wallis (1952), "Use of ranks in one-criterion variance analysis",
+ *     <i>Journal of the American Statistical Association</i> 47, 583–621,
+ *     doi:10.1080/01621459.1952.10483441 (DOI from memory).</li>
+ * <li>R. J. Hyndman and G. Athanasopoulos (2021), <i>Forecasting: Principles and Practice</i>,
+ *     3rd ed., OTexts.</li>
+ * </ol>
  */
 public final class SeasonalPattern {
 
@@ -39,49 +47,43 @@ public final class SeasonalPattern {
     }
 
     /**
-     * @param verdict         {@code PRESENT}, {@code NEGLIGIBLE}, {@code ABSENT} or {@code TOO_SHORT}
      * @param swing           peak minus trough of the profile (percentage points or units)
      * @param swingPctOfLevel the swing as % of the level
-     * @param earlyProfile    the profile of the first three complete years
+     * @param fullYears       complete years in the data: the early and late profiles overlap when
+     *                        fewer than twice {@value #PROFILE_YEARS}
+     * @param earlyProfile    the profile of the first complete years
+     * @param earlyPeak       the highest position of the early profile
      * @param largestShift    largest change of a position's index between the two profiles
      */
-    public record Result(Verdict verdict, int period, boolean multiplicative, double strength, TestResult test,
+    public record Result(int period, boolean multiplicative, double strength, TestResult test,
                          List<Index> profile, Index peak, Index trough, double swing, double swingPctOfLevel,
-                         List<Index> earlyProfile, double largestShift, boolean changed, PeriodCheck periodCheck) {
+                         int fullYears, List<Index> earlyProfile, Index earlyPeak, double largestShift,
+                         PeriodCheck periodCheck) {
 
         public Result {
             profile = List.copyOf(profile);
             earlyProfile = List.copyOf(earlyProfile);
         }
-
-        public boolean present() {
-            return verdict == Verdict.PRESENT;
-        }
     }
 
-    public enum Verdict { PRESENT, NEGLIGIBLE, ABSENT, TOO_SHORT }
-
-    private static final int PROFILE_YEARS = 3;
+    /** Complete years a profile averages over (our rule: enough to steady each position's mean). */
+    public static final int PROFILE_YEARS = 3;
 
     private SeasonalPattern() {
-    }
-
-    /** The verdict for a series too short to judge, with nothing measured. */
-    public static Result tooShort(int period) {
-        return new Result(Verdict.TOO_SHORT, period, false, Double.NaN, null, List.of(), null, null, Double.NaN,
-                Double.NaN, List.of(), Double.NaN, false, null);
     }
 
     /**
      * @param y       the working values (logs when {@code multiplicative}), NaN where missing
      * @param start   the period of {@code y[0]}
      * @param level   the series' mean level in its own units, to judge the size of an additive swing
+     * @return empty when the data hold fewer than {@value #PROFILE_YEARS} complete years
      */
-    public static Result assess(double[] y, Period start, Stl.Result stl, boolean multiplicative, double level) {
+    public static Optional<Result> assess(double[] y, Period start, Stl.Result stl, boolean multiplicative,
+                                          double level) {
         int period = stl.parameters().period();
         int n = y.length;
-        if (n < DecisionRules.MIN_YEARS_FOR_SEASON * period) {
-            return tooShort(period);
+        if (n < PROFILE_YEARS * period) {
+            return Optional.empty();
         }
         double[] seasonal = stl.seasonal();
         double[] trend = stl.trend();
@@ -94,12 +96,12 @@ public final class SeasonalPattern {
             position[t] = (firstPosition + t) % period;
         }
         TestResult test = KruskalWallis.test(detrended, position, period);
-        double strength = strength(seasonal, remainder);
+        double strength = strength(seasonal, remainder);   // [1]
 
         int firstFull = (period - firstPosition) % period;   // index of the first position-1 value
         int fullYears = (n - firstFull) / period;
         if (fullYears < PROFILE_YEARS) {
-            return tooShort(period);
+            return Optional.empty();
         }
         List<Index> late = profile(seasonal, start, firstFull + (fullYears - PROFILE_YEARS) * period, period,
                 multiplicative);
@@ -113,23 +115,11 @@ public final class SeasonalPattern {
             largestShift = Math.max(largestShift, Math.abs(late.get(j).value() - early.get(j).value()));
         }
         Index earlyPeak = early.stream().max((a, b) -> Double.compare(a.value(), b.value())).orElseThrow();
-        boolean changed = fullYears >= 2 * PROFILE_YEARS
-                && (largestShift > DecisionRules.PATTERN_CHANGE_SHARE_OF_SWING * swing
-                || earlyPeak.position() != peak.position());
-
-        Verdict verdict;
-        if (!test.reject(DecisionRules.ALPHA)) {
-            verdict = Verdict.ABSENT;
-        } else if (strength < DecisionRules.MIN_SEASONAL_STRENGTH || swingPct < DecisionRules.MIN_SEASONAL_SWING_PCT) {
-            verdict = Verdict.NEGLIGIBLE;
-        } else {
-            verdict = Verdict.PRESENT;
-        }
-        return new Result(verdict, period, multiplicative, strength, test, late, peak, trough, swing, swingPct, early,
-                largestShift, changed, checkPeriod(detrended, period));
+        return Optional.of(new Result(period, multiplicative, strength, test, late, peak, trough, swing, swingPct,
+                fullYears, early, earlyPeak, largestShift, checkPeriod(detrended, period)));
     }
 
-    /** F_S = max(0, 1 − Var(R) / Var(S + R)) over the observed periods. */
+    /** F_S = max(0, 1 − Var(R) / Var(S + R)) over the observed periods ([1]; [3] §4.3). */
     static double strength(double[] seasonal, double[] remainder) {
         int n = 0;
         double sumR = 0;

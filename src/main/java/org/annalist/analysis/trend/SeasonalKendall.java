@@ -1,5 +1,6 @@
 package org.annalist.analysis.trend;
 
+import java.util.Optional;
 import org.annalist.analysis.TestResult;
 import org.apache.commons.math3.distribution.NormalDistribution;
 
@@ -24,9 +25,9 @@ public final class SeasonalKendall {
     /**
      * @param x      the series, first value at season position 0
      * @param period seasons per year
-     * @throws IllegalArgumentException when no season has two observed years
+     * @return empty when no season has two observed years
      */
-    public static Result test(double[] x, int period) {
+    public static Optional<Result> test(double[] x, int period) {
         long s = 0;
         double variance = 0;
         int n = 0;
@@ -44,11 +45,11 @@ public final class SeasonalKendall {
             }
         }
         if (variance <= 0) {
-            throw new IllegalArgumentException("the seasonal Kendall test needs at least two years of one season");
+            return Optional.empty();
         }
         double z = KendallScore.z(s, variance);
         double p = Math.min(1, 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(z)));
-        return new Result(new TestResult(TestResult.Method.SEASONAL_KENDALL, z, p, n), s, variance,
-                SenSlope.seasonal(x, period, variance));
+        return Optional.of(new Result(new TestResult(TestResult.Method.SEASONAL_KENDALL, z, p, n), s, variance,
+                SenSlope.seasonal(x, period, variance)));
     }
 }

@@ -12,8 +12,8 @@ class CycleDetectorTest {
 
     @Test
     void sunspotsHaveARoughlyElevenYearCycle() {
-        CycleDetector.Result r = CycleDetector.detect(Reference.dataset("sunspot.year.csv"));
-        assertThat(r.present()).isTrue();
+        CycleDetector.Result r = CycleDetector.withDefaults().detect(Reference.dataset("sunspot.year.csv"));
+        assertThat(r.status()).isEqualTo(CycleDetector.Status.MEASURED);
         // R 4.2.2: spec.pgram(sunspot.year, taper = 0, detrend = TRUE, fast = FALSE) peaks at
         // 11.1153846153846 years (cycle_sunspot_year.json); the Schwabe cycle of about 11 years (from memory).
         assertThat(r.spectralPeriod()).isCloseTo(11.1153846153846, within(1e-9));
@@ -22,10 +22,11 @@ class CycleDetectorTest {
     }
 
     @Test
-    void seriesWithoutACycleReportNone() {
-        assertThat(CycleDetector.detect(Reference.dataset("Nile.csv")).present()).isFalse();
-        assertThat(CycleDetector.detect(yearlyMeans(Reference.dataset("co2.csv"))).present()).isFalse();
-        assertThat(CycleDetector.detect(yearlyMeans(Reference.dataset("AirPassengers.csv"))).present()).isFalse();
+    void seriesWithoutACycleHaveNoSignificantPeak() {
+        assertThat(CycleDetector.withDefaults().detect(Reference.dataset("Nile.csv")).pValue()).isGreaterThan(0.05);
+        assertThat(CycleDetector.withDefaults().detect(yearlyMeans(Reference.dataset("co2.csv"))).pValue())
+                .isGreaterThan(0.05);
+        // whether no cycle is then claimed is the findings' decision: AnalystReferenceTest
     }
 
     @Test
@@ -35,11 +36,19 @@ class CycleDetectorTest {
         for (int t = 0; t < x.length; t++) {
             x[t] = 100 + 0.5 * t + 10 * Math.sin(2 * Math.PI * t / 8) + random.nextGaussian();
         }
-        CycleDetector.Result r = CycleDetector.detect(x);
-        assertThat(r.present()).isTrue();
+        CycleDetector.Result r = CycleDetector.withDefaults().detect(x);
+        assertThat(r.pValue()).isLessThan(0.05);
         assertThat(r.spectralPeriod()).isEqualTo(8.0);
-        assertThat(r.regular()).isTrue();
+        assertThat(r.gapVariation()).isLessThan(0.25);
         assertThat(r.gaps()).allSatisfy(g -> assertThat(g).isBetween(7, 9));
+    }
+
+    @Test
+    void fewerYearsThanTheMinimumAreNotSearched() {
+        CycleDetector.Result r = CycleDetector.withDefaults().withMinimumYears(20).detect(new double[19]);
+        assertThat(r.status()).isEqualTo(CycleDetector.Status.TOO_FEW_YEARS);
+        assertThat(r.years()).isEqualTo(19);
+        assertThat(r.spectralPeriod()).isNaN();
     }
 
     @Test
@@ -49,15 +58,15 @@ class CycleDetectorTest {
         for (int t = 0; t < x.length; t++) {
             x[t] = random.nextGaussian();
         }
-        assertThat(CycleDetector.detect(x).present()).isFalse();
+        assertThat(CycleDetector.withDefaults().detect(x).pValue()).isGreaterThan(0.05);
     }
 
     @Test
-    void regularityOfTheGapsBetweenPeaks() {
-        // Common practice: gaps of 5, 4, 5 years count as regular; 4, 10, 2 do not.
-        assertThat(CycleDetector.isRegular(List.of(5, 4, 5))).isTrue();
-        assertThat(CycleDetector.isRegular(List.of(4, 10, 2))).isFalse();
-        assertThat(CycleDetector.isRegular(List.of(5))).isFalse();
+    void variationOfTheGapsBetweenPeaks() {
+        // sample sd / mean, derived by hand: 5, 4, 5 → 0.577 / 4.667 = 0.124; 4, 10, 2 → 4.163 / 5.333 = 0.781
+        assertThat(CycleDetector.variation(List.of(5, 4, 5))).isCloseTo(0.1237, within(1e-4));
+        assertThat(CycleDetector.variation(List.of(4, 10, 2))).isCloseTo(0.7806, within(1e-4));
+        assertThat(CycleDetector.variation(List.of(5))).isNaN();
     }
 
     private static double[] yearlyMeans(double[] monthly) {

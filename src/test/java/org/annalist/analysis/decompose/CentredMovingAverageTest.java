@@ -40,7 +40,7 @@ class CentredMovingAverageTest {
                 assertThat(trend[i]).as(rows.get(i)[1]).isCloseTo(Double.parseDouble(expected), within(1e-9));
             }
         }
-        assertThat(ma.label()).isEqualTo("2\u00D712 centred moving average");
+        assertThat(ma.window()).isEqualTo(12);
     }
 
     @Test

@@ -3,7 +3,6 @@ package org.annalist.analysis.decompose;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Random;
-import org.annalist.analysis.Reference;
 import org.junit.jupiter.api.Test;
 
 class ModelFormTest {
@@ -22,35 +21,37 @@ class ModelFormTest {
     }
 
     @Test
-    void swingGrowingWithTheLevelIsMultiplicative() {
-        ModelForm.Choice c = ModelForm.choose(synthetic(true, 3), 12);
-        assertThat(c.form()).isEqualTo(ModelForm.Form.MULTIPLICATIVE);
-        assertThat(c.elasticity()).isBetween(0.8, 1.2);
+    void swingGrowingWithTheLevelHasAnElasticityNearOne() {
+        ModelForm.Evidence e = ModelForm.measure(synthetic(true, 3), 12);
+        assertThat(e.status()).isEqualTo(ModelForm.Status.MEASURED);
+        assertThat(e.elasticity()).isBetween(0.8, 1.2);
+        assertThat(e.levelRatio()).isGreaterThan(2.0);
+        assertThat(e.cycles()).isEqualTo(8);   // ten years, less the first and last, whose ends have no centred window
     }
 
     @Test
-    void swingOfFixedSizeIsAdditive() {
-        ModelForm.Choice c = ModelForm.choose(synthetic(false, 3), 12);
-        assertThat(c.form()).isEqualTo(ModelForm.Form.ADDITIVE);
-        assertThat(c.reason()).isEqualTo(ModelForm.Reason.SWING_INDEPENDENT_OF_LEVEL);
-        assertThat(c.elasticity()).isBetween(-0.3, 0.3);
+    void swingOfFixedSizeHasAnElasticityNearZero() {
+        assertThat(ModelForm.measure(synthetic(false, 3), 12).elasticity()).isBetween(-0.3, 0.3);
     }
 
     @Test
-    void aStableLevelCannotTellAndStaysAdditive() {
-        assertThat(ModelForm.choose(synthetic(true, 1.05), 12).reason()).isEqualTo(ModelForm.Reason.LEVEL_TOO_STABLE);
+    void aStableLevelShowsInTheLevelRatio() {
+        assertThat(ModelForm.measure(synthetic(true, 1.05), 12).levelRatio()).isLessThan(1.1);
     }
 
     @Test
-    void zerosForceAdditive() {
+    void zerosLeaveNothingToMeasure() {
         double[] x = synthetic(true, 3);
         x[40] = 0;
-        assertThat(ModelForm.choose(x, 12).reason()).isEqualTo(ModelForm.Reason.NOT_ALL_POSITIVE);
+        ModelForm.Evidence e = ModelForm.measure(x, 12);
+        assertThat(e.status()).isEqualTo(ModelForm.Status.NOT_ALL_POSITIVE);
+        assertThat(e.elasticity()).isNaN();
     }
 
     @Test
-    void airPassengersIsMultiplicative() {
-        // The classic example of a multiplicative series (Box, Jenkins & Reinsel 1976, Series G, analysed in logs).
-        assertThat(ModelForm.choose(Reference.dataset("AirPassengers.csv"), 12).multiplicative()).isTrue();
+    void annualDataAndShortSeriesHaveNoEvidence() {
+        assertThat(ModelForm.measure(synthetic(true, 3), 1).status()).isEqualTo(ModelForm.Status.NOT_SEASONAL);
+        assertThat(ModelForm.measure(java.util.Arrays.copyOf(synthetic(true, 3), 48), 12).status())
+                .isEqualTo(ModelForm.Status.TOO_SHORT);
     }
 }

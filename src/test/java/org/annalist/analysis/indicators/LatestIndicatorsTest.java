@@ -23,15 +23,15 @@ class LatestIndicatorsTest {
         // From the data itself (Box & Jenkins Series G): Dec 1960 = 432, Dec 1959 = 405, Dec 1958 = 337;
         // 1960 total 5,714 against 5,140 in 1959; December ranks first of the 12 Decembers.
         LatestIndicators.Result r = LatestIndicators.at(air(), 143, LatestIndicators.Measure.FLOW, null);
-        assertThat(r.lastYear().value()).isEqualTo(405);
-        assertThat(r.lastYear().changePct()).isCloseTo(100 * (432.0 / 405 - 1), within(1e-12));   // +6.67 %
-        assertThat(r.twoYearsAgo().value()).isEqualTo(337);
-        assertThat(r.yearToDate().from()).isEqualTo(Period.month(1960, 1));
-        assertThat(r.yearToDate().total()).isEqualTo(5714);
-        assertThat(r.yearToDate().previousTotal()).isEqualTo(5140);
-        assertThat(r.rollingYear().total()).isEqualTo(5714);
+        assertThat(r.lastYear().orElseThrow().value()).isEqualTo(405);
+        assertThat(r.lastYear().orElseThrow().changePct()).isCloseTo(100 * (432.0 / 405 - 1), within(1e-12));   // +6.67 %
+        assertThat(r.twoYearsAgo().orElseThrow().value()).isEqualTo(337);
+        assertThat(r.yearToDate().orElseThrow().from()).isEqualTo(Period.month(1960, 1));
+        assertThat(r.yearToDate().orElseThrow().total()).isEqualTo(5714);
+        assertThat(r.yearToDate().orElseThrow().previousTotal()).isEqualTo(5140);
+        assertThat(r.rollingYear().orElseThrow().total()).isEqualTo(5714);
         assertThat(r.rank()).isEqualTo(new LatestIndicators.Rank(1, 12));
-        assertThat(r.record()).isNull();   // July and August 1960 were higher
+        assertThat(r.extreme()).isEmpty();   // July and August 1960 were higher
     }
 
     @Test
@@ -40,11 +40,11 @@ class LatestIndicatorsTest {
         Series s = Series.builder("occupancy", Frequency.QUARTERLY).unit("%")
                 .append(Period.quarter(2024, 1), 60, 70, 80, 90, 66, 72, 84).snapshot();
         LatestIndicators.Result r = LatestIndicators.at(s, 6, LatestIndicators.Measure.LEVEL, null);
-        assertThat(r.yearToDate().total()).isCloseTo(74, within(1e-12));             // (66 + 72 + 84) / 3
-        assertThat(r.yearToDate().previousTotal()).isCloseTo(70, within(1e-12));     // (60 + 70 + 80) / 3
-        assertThat(r.yearToDate().change()).isCloseTo(4, within(1e-12));             // percentage points
-        assertThat(r.lastYear().change()).isCloseTo(4, within(1e-12));
-        assertThat(r.rollingYear()).as("four quarters need four earlier ones to compare with").isNull();
+        assertThat(r.yearToDate().orElseThrow().total()).isCloseTo(74, within(1e-12));             // (66 + 72 + 84) / 3
+        assertThat(r.yearToDate().orElseThrow().previousTotal()).isCloseTo(70, within(1e-12));     // (60 + 70 + 80) / 3
+        assertThat(r.yearToDate().orElseThrow().change()).isCloseTo(4, within(1e-12));             // percentage points
+        assertThat(r.lastYear().orElseThrow().change()).isCloseTo(4, within(1e-12));
+        assertThat(r.rollingYear()).as("four quarters need four earlier ones to compare with").isEmpty();
     }
 
     @Test
@@ -54,10 +54,10 @@ class LatestIndicatorsTest {
                 .put(Period.month(2026, 1), 11).put(Period.month(2026, 3), 15, Set.of(ValueFlag.PROVISIONAL))
                 .snapshot();
         LatestIndicators.Result r = LatestIndicators.at(s, 14, LatestIndicators.Measure.FLOW, null);
-        assertThat(r.yearToDate()).isNull();                 // February 2026 is missing
-        assertThat(r.lastYear().changePct()).isCloseTo(100 * (15.0 / 14 - 1), within(1e-12));
+        assertThat(r.yearToDate()).isEmpty();                 // February 2026 is missing
+        assertThat(r.lastYear().orElseThrow().changePct()).isCloseTo(100 * (15.0 / 14 - 1), within(1e-12));
         assertThat(r.flags()).contains(ValueFlag.PROVISIONAL);
-        assertThat(r.record()).isEqualTo("high");
+        assertThat(r.extreme()).contains(LatestIndicators.Extreme.HIGHEST);
     }
 
     @Test
@@ -80,7 +80,7 @@ class LatestIndicatorsTest {
                 .put(Period.month(2025, 2), 2.5).put(Period.month(2026, 1), 2.0).put(Period.month(2026, 2), 3.0).snapshot();
         LatestIndicators.Result r = LatestIndicators.at(alos, alos.size() - 1, LatestIndicators.Measure.RATIO, null,
                 new LatestIndicators.Parts(nights, arrivals, 1));
-        assertThat(r.yearToDate().total()).isCloseTo(400.0 / 150, within(1e-12));
-        assertThat(r.yearToDate().previousTotal()).isCloseTo(290.0 / 125, within(1e-12));
+        assertThat(r.yearToDate().orElseThrow().total()).isCloseTo(400.0 / 150, within(1e-12));
+        assertThat(r.yearToDate().orElseThrow().previousTotal()).isCloseTo(290.0 / 125, within(1e-12));
     }
 }

@@ -18,19 +18,20 @@ class SeasonalPatternTest {
             y[t] = 500 + 0.5 * t + amplitude * -Math.cos(2 * Math.PI * t / 12) + 5 * random.nextGaussian();
         }
         Stl.Result stl = Stl.withPeriod(12).fit(y);
-        return SeasonalPattern.assess(y, Period.month(2015, 1), stl, false, 500);
+        return SeasonalPattern.assess(y, Period.month(2015, 1), stl, false, 500).orElseThrow();
     }
 
     @Test
     void aClearPatternIsFoundWithItsPeakAndTrough() {
         SeasonalPattern.Result r = assess(60, 8, 1);
-        assertThat(r.verdict()).isEqualTo(SeasonalPattern.Verdict.PRESENT);
+        assertThat(r.test().reject(0.05)).isTrue();
         assertThat(r.peak().label()).isEqualTo("Jul");
         assertThat(r.trough().label()).isEqualTo("Jan");
         assertThat(r.strength()).isGreaterThan(0.9);
         assertThat(r.swing()).isBetween(100.0, 140.0);   // 2 × amplitude 60, smoothed by STL
         assertThat(r.periodCheck().confirmed()).isTrue();
-        assertThat(r.changed()).isFalse();
+        assertThat(r.earlyPeak().position()).isEqualTo(r.peak().position());
+        assertThat(r.largestShift()).isLessThan(0.25 * r.swing());
     }
 
     /**
@@ -48,7 +49,7 @@ class SeasonalPatternTest {
             logs[t] = Math.log(y[t]);
         }
         SeasonalPattern.Result r = SeasonalPattern.assess(logs, Period.month(2015, 1),
-                Stl.withPeriod(12).fit(logs), true, 1000);
+                Stl.withPeriod(12).fit(logs), true, 1000).orElseThrow();
         double sum = 0;
         for (SeasonalPattern.Index month : r.profile()) {
             assertThat(month.value()).as(month.label()).isCloseTo(100 * (factors[month.position() - 1] - 1),
@@ -59,10 +60,9 @@ class SeasonalPatternTest {
     }
 
     @Test
-    void noiseAloneHasNoPattern() {
+    void noiseAloneHasAWeakPattern() {
         SeasonalPattern.Result r = assess(0, 8, 2);
-        assertThat(r.present()).isFalse();
-        assertThat(r.verdict()).isIn(SeasonalPattern.Verdict.ABSENT, SeasonalPattern.Verdict.NEGLIGIBLE);
+        assertThat(r.strength()).isLessThan(0.3);
     }
 
     @Test
@@ -73,32 +73,32 @@ class SeasonalPatternTest {
         for (int t = 0; t < y.length; t++) {
             y[t] = 500 + 2 * Math.sin(2 * Math.PI * t / 12) + 0.2 * random.nextGaussian();
         }
-        SeasonalPattern.Result r = SeasonalPattern.assess(y, Period.month(2015, 1), Stl.withPeriod(12).fit(y), false, 500);
+        SeasonalPattern.Result r = SeasonalPattern.assess(y, Period.month(2015, 1), Stl.withPeriod(12).fit(y), false, 500)
+                .orElseThrow();
         assertThat(r.test().reject(0.05)).isTrue();
-        assertThat(r.verdict()).isEqualTo(SeasonalPattern.Verdict.NEGLIGIBLE);
         assertThat(r.swingPctOfLevel()).isLessThan(1.0);
     }
 
     @Test
-    void fewerThanThreeYearsMakeNoClaim() {
+    void fewerThanThreeYearsGiveNoProfile() {
         double[] y = new double[30];
         for (int t = 0; t < y.length; t++) {
             y[t] = 100 + 20 * Math.sin(2 * Math.PI * t / 12);
         }
-        assertThat(SeasonalPattern.assess(y, Period.month(2020, 1), Stl.withPeriod(12).fit(y), false, 100).verdict())
-                .isEqualTo(SeasonalPattern.Verdict.TOO_SHORT);
+        assertThat(SeasonalPattern.assess(y, Period.month(2020, 1), Stl.withPeriod(12).fit(y), false, 100)).isEmpty();
     }
 
     @Test
-    void aPatternWhosePeakMovesIsReportedAsChanged() {
+    void aPatternWhosePeakMovesShowsInTheEarlyProfile() {
         double[] y = new double[12 * 10];
         for (int t = 0; t < y.length; t++) {
             double peakMonth = t < 60 ? 6 : 1;   // from a July peak to a February peak
             y[t] = 500 + 50 * Math.cos(2 * Math.PI * (t % 12 - peakMonth) / 12);
         }
         SeasonalPattern.Result r = SeasonalPattern.assess(y, Period.month(2010, 1),
-                Stl.withPeriod(12).withSeasonalWindow(7).fit(y), false, 500);
-        assertThat(r.changed()).isTrue();
+                Stl.withPeriod(12).withSeasonalWindow(7).fit(y), false, 500).orElseThrow();
+        assertThat(r.fullYears()).isEqualTo(10);
+        assertThat(r.earlyPeak().label()).isEqualTo("Jul");
         assertThat(r.peak().label()).isEqualTo("Feb");
     }
 }

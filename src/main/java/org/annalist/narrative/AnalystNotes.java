@@ -1,12 +1,16 @@
-package org.annalist.cli;
+package org.annalist.narrative;
 
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CalendarFinding;
+import org.annalist.findings.Caveat;
+import org.annalist.findings.Transform;
+import org.annalist.findings.CalendarNote;
 import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.CycleFinding;
+import org.annalist.findings.FormChoice;
 import org.annalist.findings.Episode;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookFinding;
@@ -14,29 +18,30 @@ import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.SeriesFacts;
 import org.annalist.findings.TrendFinding;
+import org.annalist.series.Period;
 
 /** The text form of {@code analyze}: one line per finding with its evidence, as an analyst's notes. */
-final class AnalystNotes {
+public final class AnalystNotes {
 
     private AnalystNotes() {
     }
 
-    static String of(Findings f) {
+    public static String of(Findings f) {
         StringBuilder out = new StringBuilder();
         SeriesFacts s = f.series();
         line(out, "series", "'%s'%s, %s, %s to %s, %d periods, %d missing", s.name(),
                 s.unit() == null ? "" : " (" + s.unit() + ")", s.frequency(), s.start(), s.end(), s.observations(),
                 s.missing());
-        Findings.FormChoice form = f.form();
-        line(out, "form", "%s%s: %s%s", form.form(), f.transform().equals("log") ? " (worked in logs)" : "",
-                form.reason(), form.elasticity() == null ? ""
+        FormChoice form = f.form();
+        line(out, "form", "%s%s: %s%s", form.form().code(), f.transform() == Transform.LOG ? " (worked in logs)" : "",
+                Terms.formReason(form.reason()), form.elasticity() == null ? ""
                         : String.format(Locale.ROOT, " (elasticity of swing to level %.2f over %d years, level ratio %.2f)",
                         form.elasticity(), form.cycles(), form.levelRatio()));
         line(out, "trend", "%s", trend(f.trend()));
         TrendFinding.LatestRegime latest = f.trend().latestRegime();
         if (latest != null) {
-            line(out, "since break", "%s since %s: Sen slope %s per year (95%% CI %s to %s), %s", latest.direction()
-                    .equals("none") ? "no clear trend" : latest.direction(), latest.since(), num(latest.slopePerYear()),
+            line(out, "since break", "%s since %s: Sen slope %s per year (95%% CI %s to %s), %s",
+                    Terms.direction(latest.direction()), latest.since().label(), num(latest.slopePerYear()),
                     num(latest.lower95()), num(latest.upper95()), p(latest.pValue()));
         }
         line(out, "seasonality", "%s", seasonality(f.seasonality()));
@@ -66,13 +71,13 @@ final class AnalystNotes {
         }
         IndicatorsFinding i = f.indicators();
         if (i != null) {
-            line(out, "latest", "%s: %s (%s)%s%s%s", i.period(), num(i.value()), i.measure(),
+            line(out, "latest", "%s: %s (%s)%s%s%s", i.period(), num(i.value()), i.measure().code(),
                     i.samePeriodLastYear() == null ? "" : String.format(Locale.ROOT, "; a year earlier %s, %s",
                             num(i.samePeriodLastYear().value()), pct(i.samePeriodLastYear().changePct())),
                     i.yearToDate() == null ? "" : String.format(Locale.ROOT, "; year to date %s", pct(i.yearToDate().changePct())),
                     i.rollingYear() == null ? "" : String.format(Locale.ROOT, "; rolling year %s", pct(i.rollingYear().changePct())));
             line(out, "latest rank", "%d of %d in the same period of each year%s%s%s", i.rank().position(), i.rank().of(),
-                    i.record() == null ? "" : "; record " + i.record(),
+                    i.record() == null ? "" : "; record " + i.record().code(),
                     i.seasonallyAdjustedChangePct() == null ? "" : "; seasonally adjusted " + pct(i.seasonallyAdjustedChangePct())
                             + " on the period before", i.flagged().isEmpty() ? "" : "; flagged " + String.join(", ", i.flagged()));
         }
@@ -81,13 +86,13 @@ final class AnalystNotes {
                 line(out, "calendar", "%s: %+.2f %% per unit, %s%s", e.name(), e.effectPct(), p(e.pValue()),
                         e.kept() ? " (kept)" : " (not significant)");
             }
-            for (String note : f.calendar().notes()) {
-                line(out, "calendar note", "%s", note);
+            for (CalendarNote note : f.calendar().notes()) {
+                line(out, "calendar note", "%s", CalendarSentences.of(note));
             }
         }
         line(out, "irregular", "%s", f.irregular().share() == null ? "not measured"
                 : String.format(Locale.ROOT, "%s (share %.2f of the variation around the long-run trend)",
-                f.irregular().label(), f.irregular().share()));
+                f.irregular().size().code(), f.irregular().share()));
         OutlookFinding o = f.outlook();
         if (o == null) {
             line(out, "outlook", "none");
@@ -109,28 +114,26 @@ final class AnalystNotes {
             }
         }
         line(out, "smoothing", "%s", f.smoothing() == null ? "none (series shorter than one window)"
-                : f.smoothing().method());
-        if (f.decomposition().method() != null) {
-            line(out, "decomposition", "%s", f.decomposition().method());
-        }
-        for (String note : f.notes()) {
-            line(out, "note", "%s", note);
+                : Terms.movingAverage(f.smoothing().method()));
+        f.decomposition().ifPresent(d -> line(out, "decomposition", "%s", Terms.decomposition(d.method())));
+        for (Caveat note : f.notes()) {
+            line(out, "note", "%s", Terms.caveat(note));
         }
         return out.toString();
     }
 
     private static String trend(TrendFinding t) {
-        if (t.test() == null) {
-            return "not assessed: " + t.reason();
+        if (!t.assessed()) {
+            return "not assessed: " + Terms.trendNotAssessed();
         }
-        String words = t.direction().equals("none") ? "no clear trend" : t.direction();
+        String words = Terms.direction(t.direction());
         String kendall = t.seasonalKendall() == null ? ""
-                : String.format(Locale.ROOT, "; %s z = %.2f, %s", t.seasonalKendall().test(),
+                : String.format(Locale.ROOT, "; %s z = %.2f, %s", Terms.test(t.seasonalKendall().test()),
                 t.seasonalKendall().statistic(), p(t.seasonalKendall().pValue()));
         String ofLevel = t.changePctPerYear() == null ? ""
                 : String.format(Locale.ROOT, ", %+.2f %% of the mean level per year", t.changePctPerYear());
         return String.format(Locale.ROOT, "%s — %s: z = %.2f, %s, n = %d; Sen slope %s per year (95%% CI %s to %s)%s%s",
-                words, t.test(), t.statistic(), p(t.pValue()), t.n(), num(t.slopePerYear()), num(t.slopeCi95().get(0)),
+                words, Terms.trendTest(t.test()), t.statistic(), p(t.pValue()), t.n(), num(t.slopePerYear()), num(t.slopeCi95().get(0)),
                 num(t.slopeCi95().get(1)), ofLevel, kendall);
     }
 
@@ -141,32 +144,32 @@ final class AnalystNotes {
         if (s.test() == null) {
             return "not assessed: the series is too short (period " + s.period() + ")";
         }
-        String unit = s.form().equals("multiplicative") ? "%" : "";
+        String unit = s.multiplicative() ? "%" : "";
         String profile = s.profile().stream()
                 .map(p -> String.format(Locale.ROOT, "%s %+.1f%s", p.label(), p.index(), unit))
                 .collect(Collectors.joining(", "));
         String verdict = switch (s.verdict()) {
-            case "present" -> String.format(Locale.ROOT, "period %d, peak %s, trough %s", s.period(), s.peak().label(),
+            case PRESENT -> String.format(Locale.ROOT, "period %d, peak %s, trough %s", s.period(), s.peak().label(),
                     s.trough().label());
-            case "negligible" -> "no meaningful seasonal pattern (detectable but small)";
+            case NEGLIGIBLE -> "no meaningful seasonal pattern (detectable but small)";
             default -> "no seasonal pattern";
         };
-        String swing = s.form().equals("multiplicative")
+        String swing = s.multiplicative()
                 ? String.format(Locale.ROOT, "%.1f percentage points", s.swing())
                 : String.format(Locale.ROOT, "%.4g (%.1f %% of the level)", s.swing(), s.swingPctOfLevel());
         return String.format(Locale.ROOT, "%s — strength %.2f, %s H = %.1f, %s; swing %s%s; "
-                        + "lag-%d autocorrelation %.2f%s; profile: %s", verdict, s.strength(), s.test(), s.statistic(),
+                        + "lag-%d autocorrelation %.2f%s; profile: %s", verdict, s.strength(), Terms.test(s.test()), s.statistic(),
                 p(s.pValue()), swing, s.present() && s.changed() ? "; the pattern changed over the years" : "",
                 s.period(), s.autocorrelationAtPeriod(), s.periodConfirmed() ? " (confirms the period)" : "", profile);
     }
 
     private static String cycle(CycleFinding c) {
         if (!c.present()) {
-            return "none: " + c.reason();
+            return "none: " + Terms.cycleReason(c);
         }
         return String.format(Locale.ROOT, "%s cycle of about %.1f years (spectral peak %.1f years, red-noise %s); peaks %s; gaps %s",
                 c.regular() ? "a regular" : "an irregular", c.length(), c.spectralPeriod(), p(c.pValue()),
-                String.join(", ", c.peaks()), c.gaps().stream().map(String::valueOf).collect(Collectors.joining(", ")));
+                String.join(", ", c.peaks().stream().map(Period::label).toList()), c.gaps().stream().map(String::valueOf).collect(Collectors.joining(", ")));
     }
 
     private static void line(StringBuilder out, String label, String format, Object... args) {
@@ -187,7 +190,7 @@ final class AnalystNotes {
         return Math.abs(v) >= 100 ? String.format(Locale.ROOT, "%.1f", v) : String.format(Locale.ROOT, "%.4g", v);
     }
 
-    static String all(List<Findings> findings) {
+    public static String all(List<Findings> findings) {
         return findings.stream().map(AnalystNotes::of).collect(Collectors.joining(System.lineSeparator()));
     }
 }

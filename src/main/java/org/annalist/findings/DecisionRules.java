@@ -1,4 +1,4 @@
-package org.annalist.analysis;
+package org.annalist.findings;
 
 /**
  * Every threshold at which the analysis turns a number into a statement, in one place, each with
@@ -11,6 +11,14 @@ public final class DecisionRules {
 
     /** Significance level of every test behind a claim (common practice). */
     public static final double ALPHA = 0.05;
+
+    // ---- trend ------------------------------------------------------------------------------
+
+    /**
+     * Fewer values than this support no trend statement (our rule; Gilbert 1987 asks for more than
+     * 10 for the normal approximation of the Mann–Kendall statistic).
+     */
+    public static final int MIN_VALUES_FOR_TREND = 10;
 
     // ---- additive or multiplicative ----------------------------------------------------------
 

@@ -1,0 +1,46 @@
+package org.annalist.findings;
+
+import java.time.LocalDate;
+import java.util.Optional;
+import org.annalist.series.Period;
+
+/**
+ * How the calendar of the latest period differs from a year earlier, and how much of the
+ * year-on-year change the estimated effect explains. The narrative words each kind.
+ */
+public sealed interface CalendarNote {
+
+    /**
+     * Easter moved between the periods compared.
+     *
+     * @param window       days before Easter Sunday that count as Easter's
+     * @param daysNow      of those days, how many fell in the latest period
+     * @param explainedPct the change the Easter effect accounts for, in %, when the effect counts
+     * @param changePct    the year-on-year change, in % (NaN when unknown)
+     */
+    record EasterShift(Period now, LocalDate easterNow, LocalDate easterBefore, int window, long daysNow,
+                       long daysBefore, Optional<Double> explainedPct, double changePct) implements CalendarNote {
+    }
+
+    /**
+     * March and April (or the first two quarters) together, which Easter's move does not affect.
+     *
+     * @param months whether the periods are months (else quarters)
+     */
+    record EasterSpanTogether(boolean months, double changePct) implements CalendarNote {
+    }
+
+    /** A user's moving holiday fell differently: shares of its days in the two periods. */
+    record HolidayShift(String holiday, Period now, Period before, double shareNow, double shareBefore,
+                        Optional<Double> explainedPct) implements CalendarNote {
+    }
+
+    /** A month had more or fewer Friday and Saturday nights than a year earlier. */
+    record WeekendNights(Period now, Period before, int nightsNow, int nightsBefore, Optional<Double> effectPct)
+            implements CalendarNote {
+    }
+
+    /** A February compared with one of another length. */
+    record LeapFebruary(Period now, Period before, double morePct) implements CalendarNote {
+    }
+}

@@ -1,0 +1,141 @@
+package org.annalist.narrative;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import org.annalist.findings.Caveat;
+import org.annalist.findings.CycleFinding;
+import org.annalist.findings.Decomposition;
+import org.annalist.findings.DecisionRules;
+import org.annalist.findings.Direction;
+import org.annalist.findings.FormChoice;
+import org.annalist.findings.Smoothing;
+import org.annalist.findings.TestName;
+import org.annalist.findings.TrendFinding;
+import org.annalist.series.ValueFlag;
+
+/**
+ * The words for typed facts that the brief, the plain-text notes and the findings JSON share: the
+ * names of tests, the reasons for a choice, the reasons a statement is withheld. One place, so that
+ * every reader of a fact words it alike.
+ */
+final class Terms {
+
+    private Terms() {
+    }
+
+    static String test(TestName test) {
+        return switch (test) {
+            case MANN_KENDALL -> "Mann-Kendall";
+            case MANN_KENDALL_HAMED_RAO -> "Mann-Kendall (Hamed-Rao corrected)";
+            case MANN_KENDALL_AR1 -> "Mann-Kendall (variance corrected for AR(1) serial correlation)";
+            case SEASONAL_KENDALL -> "seasonal Kendall";
+            case KRUSKAL_WALLIS -> "Kruskal-Wallis";
+            case SUP_F_MONTE_CARLO -> "sup-F (Monte Carlo p, AR(1) noise)";
+        };
+    }
+
+    /** {@code increasing}, {@code decreasing} or {@code no clear trend}. */
+    static String direction(Direction direction) {
+        return switch (direction) {
+            case INCREASING -> "increasing";
+            case DECREASING -> "decreasing";
+            case NONE -> "no clear trend";
+        };
+    }
+
+    /** The trend test as run, with what it ran on. */
+    static String trendTest(TrendFinding.Test test) {
+        return test(test.name()) + " on " + trendBasis(test);
+    }
+
+    /** What the trend test ran on: {@code seasonally adjusted values}, {@code observed values}, …. */
+    static String trendBasis(TrendFinding.Test test) {
+        return (test.seasonallyAdjusted() ? "seasonally adjusted values" : "observed values")
+                + (test.block() > 1 ? ", averaged over blocks of " + test.block() + " periods" : "");
+    }
+
+    /** Why no trend is stated. */
+    static String trendNotAssessed() {
+        return "fewer than " + DecisionRules.MIN_VALUES_FOR_TREND + " values";
+    }
+
+    /** Why the series was taken as additive or multiplicative. */
+    static String formReason(FormChoice.Reason reason) {
+        return switch (reason) {
+            case SWING_GROWS_WITH_LEVEL -> "the seasonal swing grows with the level";
+            case SWING_INDEPENDENT_OF_LEVEL -> "the seasonal swing does not grow with the level";
+            case LEVEL_TOO_STABLE -> "the level varies too little to tell; the simpler additive form is kept";
+            case NOT_ALL_POSITIVE -> "the series has zero or negative values, which rule out logarithms";
+            case TOO_SHORT -> "too few complete years to tell; the simpler additive form is kept";
+            case NOT_SEASONAL -> "annual data have no seasonal swing to judge";
+            case FORCED -> "set by the user";
+        };
+    }
+
+    /** Why no cycle is claimed, as the clause after "No cycle longer than a year stands out:". */
+    static String cycleReason(CycleFinding c) {
+        return switch (c.reason()) {
+            case CLAIMED -> "";
+            case TOO_FEW_COMPLETE_YEARS -> "too few complete years";
+            case TOO_FEW_YEARS -> "the data cover " + c.years() + " years, and at least "
+                    + DecisionRules.MIN_YEARS_FOR_CYCLE + " are needed";
+            case NO_CANDIDATE_PERIOD -> "no period between " + DecisionRules.MIN_CYCLE_YEARS + " years and half the span";
+            case NOT_BEYOND_RED_NOISE -> "its strongest period, " + Math.round(c.spectralPeriod() * 10) / 10.0
+                    + " years, is no stronger than random persistent wander would give";
+            case TOO_FEW_PEAKS -> "fewer than three peaks confirm it";
+        };
+    }
+
+    /** A note on what limits the findings. */
+    static String caveat(Caveat caveat) {
+        if (caveat instanceof Caveat.NotDecomposed) {
+            return "No decomposition: some season positions have fewer than two observed values.";
+        }
+        if (caveat instanceof Caveat.TooShortForSeason) {
+            return "No seasonal statement: the series is shorter than " + DecisionRules.MIN_YEARS_FOR_SEASON
+                    + " full years.";
+        }
+        if (caveat instanceof Caveat.TooShortForTrend) {
+            return "No trend statement: fewer than " + DecisionRules.MIN_VALUES_FOR_TREND + " values.";
+        }
+        if (caveat instanceof Caveat.UnusualStretch s) {
+            return "From " + s.from().label() + " to " + s.to().label() + " several values lie far from what trend"
+                    + " and season predict (the pattern may have been changing); they are not reported as one-off"
+                    + " outliers.";
+        }
+        if (caveat instanceof Caveat.BreaksNotSearchedInDailyData) {
+            return "Structural changes are not searched in daily data, whose yearly pattern is not yet taken out; "
+                    + "aggregate to weeks or months (--aggregate) to look for them.";
+        }
+        Caveat.ProvisionalBreak b = (Caveat.ProvisionalBreak) caveat;
+        return "The break in " + b.start().label() + " is provisional: the new regime is still short and the break"
+                + " may not hold.";
+    }
+
+    /** The decomposition as made: {@code STL on logarithms, seasonal window 13, …}. */
+    static String decomposition(Decomposition.Method m) {
+        return String.format(Locale.ROOT, "STL%s, seasonal window %d, trend window %d, robust (%d inner, %d outer)",
+                m.onLogs() ? " on logarithms" : "", m.seasonalWindow(), m.trendWindow(), m.innerLoops(), m.outerLoops());
+    }
+
+    /** {@code 2×12 centred moving average}, {@code 5-term centred moving average}. */
+    static String movingAverage(Smoothing.CentredAverage average) {
+        return (average.twice() ? "2\u00D7" + average.window() : average.window() + "-term") + " centred moving average";
+    }
+
+    /** A value's flags and those of the value a year before, as a table's note. */
+    static String flags(Set<ValueFlag> flags, Set<ValueFlag> yearEarlier) {
+        List<String> words = new ArrayList<>();
+        flags.forEach(f -> words.add(f.description()));
+        yearEarlier.forEach(f -> words.add(f.description() + " (year before)"));
+        return String.join("; ", words);
+    }
+
+    /** {@code strong}, {@code moderate} or {@code weak} for a seasonal strength. */
+    static String seasonalStrength(double strength) {
+        return strength >= DecisionRules.STRONG_SEASONAL_STRENGTH ? "strong"
+                : strength >= DecisionRules.MIN_SEASONAL_STRENGTH ? "moderate" : "weak";
+    }
+}
