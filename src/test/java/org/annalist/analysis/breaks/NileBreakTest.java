@@ -63,7 +63,7 @@ class NileBreakTest {
             assertThat(SupF.chow(NILE, BaiPerron.Model.LEVEL, start)).as("F at %d", start)
                     .isCloseTo(expected[i], within(expected[i] * 1e-9));
         }
-        SupF.Result sup = SupF.test(NILE, BaiPerron.Model.LEVEL, 15);
+        SupF.Result sup = SupF.test(NILE, BaiPerron.Model.LEVEL, 15).orElseThrow();
         assertThat(sup.test().statistic()).isCloseTo(75.9297694274854, within(1e-8));
         assertThat(sup.breakStart()).isEqualTo(28);
         // sctest reports p = 2.2e-16 (its floor); the Monte Carlo p is at its floor, 1/500.
