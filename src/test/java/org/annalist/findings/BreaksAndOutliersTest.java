@@ -149,7 +149,8 @@ class BreaksAndOutliersTest {
         }
         Findings f = new Analyst().analyse(Series.builder("weekly", Frequency.WEEKLY)
                 .append(Period.isoWeek(1990, 1), x).snapshot());
-        assertThat(f.breakMethod()).startsWith("PELT");
+        assertThat(f.breakMethod()).isEqualTo("PELT, changes in level, penalty 3 log n on the robust noise scale,"
+                + " minimum regime 52, then every break checked by its own sup-F test (AR(1) Monte Carlo null, 5 %)");
         assertThat(f.breaks()).hasSize(1);
         assertThat(Math.abs(f.breaks().get(0).index() - 1000)).isLessThanOrEqualTo(3);
     }
@@ -165,5 +166,23 @@ class BreaksAndOutliersTest {
                 .append(Period.day(java.time.LocalDate.of(2020, 1, 1)), x).snapshot());
         assertThat(f.breaks()).isEmpty();
         assertThat(f.notes()).anySatisfy(n -> assertThat(n).contains("not searched in daily data"));
+        assertThat(f.breakMethod()).isEqualTo("not searched in daily data (the yearly pattern is not removed)");
+    }
+
+    @Test
+    void theMethodsAppendixSaysHowBreaksWereSearched() {
+        Findings shifted = new Analyst().withoutOutlook().analyse(series(1, 0.02, t -> t >= 70 ? 1.25 : 1));
+        // the base revision's words, run on this series before the search moved to analysis.breaks
+        assertThat(shifted.breakMethod()).isEqualTo("Bai-Perron, changes in level and slope, number of breaks by BIC,"
+                + " then reduced until every break passes its own sup-F test (AR(1) Monte Carlo null, 5 %),"
+                + " minimum regime 12");
+        double[] x = new double[20];
+        for (int t = 0; t < x.length; t++) {
+            x[t] = 100 + t % 5;
+        }
+        Findings tooShort = new Analyst().withoutOutlook().analyse(Series.builder("short", Frequency.MONTHLY)
+                .append(START, x).snapshot());
+        assertThat(tooShort.breaks()).isEmpty();
+        assertThat(tooShort.breakMethod()).isEqualTo("not searched: fewer than two regimes of 12 periods");
     }
 }
