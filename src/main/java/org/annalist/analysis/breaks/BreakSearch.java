@@ -40,7 +40,7 @@ import org.annalist.series.Frequency;
  *
  * <p>Edge behaviour: missing values ({@code NaN}) are left out of every fit. Daily and
  * business-daily values are not searched ({@link Method#NOT_SEARCHED_DAILY}): the yearly pattern,
- * which the adjustment for the weekday pattern leaves in, would read as breaks. A series shorter
+ * which an adjustment for the weekday pattern leaves in, would read as breaks. A series shorter
  * than two minimum regimes is not searched ({@link Method#NOT_SEARCHED_SHORT}). Neither is an
  * error: the result says so.
  *
@@ -116,7 +116,7 @@ public final class BreakSearch {
      * @param low           index of the period where the collapsed regime's fitted level is lowest
      * @param lowLevel      that level, in the series' units
      * @param regainedShare how much of the fall the level had regained by the recovery, or by the
-     *                      latest period (1 = all, capped at {@value #MAX_REGAINED_SHARE})
+     *                      latest period (1 = all, capped at {@value BreakSearch#MAX_REGAINED_SHARE})
      */
     public record Episode(int start, OptionalInt recovery, int low, double lowLevel, double regainedShare) {
 
