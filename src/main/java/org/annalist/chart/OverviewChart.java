@@ -102,8 +102,8 @@ public final class OverviewChart {
     private static void markBreaks(XYPlot plot, Series series, List<BreakFinding> breaks) {
         for (int j = 0; j < breaks.size(); j++) {
             BreakFinding b = breaks.get(j);
-            int from = indexOf(series, b.ci95().get(0));
-            int to = indexOf(series, b.ci95().get(1));
+            int from = series.indexOf(b.ci95().get(0));
+            int to = series.indexOf(b.ci95().get(1));
             IntervalMarker interval = new IntervalMarker(startMillis(series.period(from)), endMillis(series.period(to)));
             interval.setPaint(ChartStyle.SHADE);
             interval.setAlpha(1f);
@@ -132,15 +132,6 @@ public final class OverviewChart {
                     midpointMillis(series.period(o.index())), o.observed(), o.direction() == Side.ABOVE,
                     across(series, o.index())));
         }
-    }
-
-    private static int indexOf(Series series, String label) {
-        for (int i = 0; i < series.size(); i++) {
-            if (series.period(i).label().equals(label)) {
-                return i;
-            }
-        }
-        throw new IllegalArgumentException("no period " + label);
     }
 
     /** Where period {@code index} lies along the time axis: 0 at the first period, 1 at the last. */

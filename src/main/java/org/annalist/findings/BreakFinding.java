@@ -2,6 +2,7 @@ package org.annalist.findings;
 
 import com.fasterxml.jackson.annotation.JsonIgnore;
 import java.util.List;
+import org.annalist.series.Period;
 
 /**
  * One entry of the findings JSON {@code breaks} list: a structural change.
@@ -13,8 +14,9 @@ import java.util.List;
  * @param changePct   levelAfter against levelBefore, in %
  * @param statistic   sup-F of this break within the span of its two regimes
  * @param provisional the new regime is still shorter than two minimum regimes: the break may not hold
+ * @param index       the position of {@code period} in the series
  */
-public record BreakFinding(String period, List<String> ci95, double levelBefore, double levelAfter, double changePct,
+public record BreakFinding(Period period, List<Period> ci95, double levelBefore, double levelAfter, double changePct,
                            double statistic, double pValue, @JsonIgnore boolean provisional,
                            @JsonIgnore int index) {
 

@@ -1,5 +1,7 @@
 package org.annalist.findings;
 
+import org.annalist.analysis.anomaly.RemainderOutliers;
+
 /**
  * Every threshold at which the analysis turns a number into a statement, in one place, each with
  * where it comes from. A brief's methods appendix quotes them.
@@ -104,4 +106,8 @@ public final class DecisionRules {
      * more and, through the stretch rule, found fewer.
      */
     public static final double OUTLIER_SCORE = 5.0;
+    /** Flagged periods in a same-signed run this long are a shift of level, not one-offs ({@link RemainderOutliers#SHIFT_RUN}). */
+    public static final int OUTLIER_SHIFT_RUN = RemainderOutliers.SHIFT_RUN;
+    /** This many flags within two seasonal cycles are an unusual stretch ({@link RemainderOutliers#STRETCH_FLAGS}). */
+    public static final int OUTLIER_STRETCH_FLAGS = RemainderOutliers.STRETCH_FLAGS;
 }

@@ -31,7 +31,7 @@ public record Findings(SeriesFacts series, Transform transform, TrendFinding tre
                        Smoothing smoothing, IndicatorsFinding indicators, CalendarFinding calendar, OutlookFinding outlook, @JsonIgnore List<RecentPeriod> recent,
                        @JsonIgnore List<Caveat> notes, @JsonIgnore FormChoice form,
                        @JsonIgnore Optional<Decomposition> decomposition, @JsonIgnore List<Episode> episodes,
-                       @JsonIgnore String breakMethod) {
+                       @JsonIgnore BreakMethod breakMethod) {
 
     public static final String SCHEMA = "annalist.findings/1";
 

@@ -47,7 +47,7 @@ public final class AnalystNotes {
         line(out, "seasonality", "%s", seasonality(f.seasonality()));
         line(out, "cycle", "%s", cycle(f.cycle()));
         if (f.breaks().isEmpty()) {
-            line(out, "breaks", "none (%s)", f.breakMethod());
+            line(out, "breaks", "none (%s)", Terms.breakMethod(f.breakMethod()));
         }
         for (BreakFinding b : f.breaks()) {
             line(out, "break", "%s (95%% interval %s to %s): level %s → %s, %+.1f %%; sup-F %.1f, %s%s", b.period(),
@@ -57,10 +57,10 @@ public final class AnalystNotes {
         for (Episode e : f.episodes()) {
             line(out, "episode", "collapse from %s, low point %s (%s), %.0f %% of the fall regained%s", e.start(),
                     e.lowPoint(), num(e.lowValue()), 100 * e.regainedShare(),
-                    e.recovery() == null ? " by the latest period" : " by " + e.recovery());
+                    e.recovery().map(r -> " by " + r).orElse(" by the latest period"));
         }
         if (!f.breaks().isEmpty()) {
-            line(out, "break method", "%s", f.breakMethod());
+            line(out, "break method", "%s", Terms.breakMethod(f.breakMethod()));
         }
         if (f.outliers().isEmpty()) {
             line(out, "outliers", "none");

@@ -103,8 +103,8 @@ final class SectionViews {
     List<BriefView.BreakRow> breaks() {
         List<BriefView.BreakRow> rows = new ArrayList<>();
         for (BreakFinding b : findings.breaks()) {
-            rows.add(new BriefView.BreakRow(f.period(series.period(b.index())), f.period(period(b.ci95().get(0))),
-                    f.period(period(b.ci95().get(1))), f.value(b.levelBefore()), f.value(b.levelAfter()),
+            rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
+                    f.period(b.ci95().get(1)), f.value(b.levelBefore()), f.value(b.levelAfter()),
                     f.signedPercent(b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
                     f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional()));
         }
@@ -114,9 +114,8 @@ final class SectionViews {
     List<BriefView.EpisodeView> episodes() {
         List<BriefView.EpisodeView> views = new ArrayList<>();
         for (Episode e : findings.episodes()) {
-            views.add(new BriefView.EpisodeView(f.period(series.period(e.startIndex())),
-                    e.recoveryIndex() < 0 ? null : f.period(series.period(e.recoveryIndex())),
-                    f.period(series.period(e.lowIndex())), f.value(e.lowValue()),
+            views.add(new BriefView.EpisodeView(f.period(e.start()), e.recovery().map(f::period).orElse(null),
+                    f.period(e.lowPoint()), f.value(e.lowValue()),
                     f.fixed(Math.min(100, 100 * e.regainedShare()), 0) + "\u00A0%"));
         }
         return views;

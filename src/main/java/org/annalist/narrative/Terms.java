@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import org.annalist.findings.BreakMethod;
 import org.annalist.findings.Caveat;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Decomposition;
@@ -112,6 +113,25 @@ final class Terms {
         Caveat.ProvisionalBreak b = (Caveat.ProvisionalBreak) caveat;
         return "The break in " + b.start().label() + " is provisional: the new regime is still short and the break"
                 + " may not hold.";
+    }
+
+    /** How the breaks were searched, for the methods appendix. */
+    static String breakMethod(BreakMethod m) {
+        String checked = "its own sup-F test (AR(1) Monte Carlo null, " + number(100 * DecisionRules.ALPHA) + " %)";
+        return switch (m.search()) {
+            case NOT_SEARCHED_IN_DAILY_DATA -> "not searched in daily data (the yearly pattern is not removed)";
+            case NOT_SEARCHED_TOO_SHORT -> "not searched: fewer than two regimes of " + m.minimumRegime() + " periods";
+            case PELT -> "PELT, changes in level, penalty 3 log n on the robust noise scale, minimum regime "
+                    + m.minimumRegime() + ", then every break checked by " + checked;
+            case BAI_PERRON -> "Bai-Perron, changes in " + (m.levelAndSlope() ? "level and slope" : "level")
+                    + ", number of breaks by BIC, then reduced until every break passes " + checked
+                    + ", minimum regime " + m.minimumRegime();
+        };
+    }
+
+    /** A threshold as the appendix writes it: {@code 5}, {@code 0.25}. */
+    static String number(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.format(Locale.ROOT, "%s", v);
     }
 
     /** The decomposition as made: {@code STL on logarithms, seasonal window 13, …}. */

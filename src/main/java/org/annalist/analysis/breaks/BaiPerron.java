@@ -6,15 +6,26 @@ import java.util.List;
 
 /**
  * Optimal partition of a series into regimes of constant level (or of straight lines), by dynamic
- * programming over segment residual sums of squares (Bai &amp; Perron 1998, <i>Econometrica</i> 66,
- * 47–78; 2003, <i>J. Applied Econometrics</i> 18, 1–22): for every number of breaks m up to the
+ * programming over segment residual sums of squares [1, 2]: for every number of breaks m up to the
  * maximum, the break dates that minimise the total RSS with every regime at least {@code h}
- * observations long; m chosen by BIC as in R's strucchange, with
+ * observations long; m chosen by BIC as in R's strucchange [3], with
  * {@code log L = −n/2 (log RSS + 1 − log n + log 2π)} and {@code df = (k + 1)(m + 1)} (k coefficients
  * per regime, plus the break date or the variance).
  *
  * <p>Breaks are given as the <b>first index of each new regime</b> (0-based); strucchange reports
- * the last index of the old one, i.e. one less.
+ * the last index of the old one, i.e. one less. Missing values ({@code NaN}) are left out of every
+ * segment's fit; n in the BIC counts the observed values.
+ *
+ * <p>References:
+ * <ol>
+ * <li>J. Bai and P. Perron (1998), "Estimating and Testing Linear Models with Multiple Structural
+ *     Changes", <i>Econometrica</i> 66(1), 47–78. doi:10.2307/2998540</li>
+ * <li>J. Bai and P. Perron (2003), "Computation and Analysis of Multiple Structural Change Models",
+ *     <i>Journal of Applied Econometrics</i> 18(1), 1–22. doi:10.1002/jae.659</li>
+ * <li>A. Zeileis, C. Kleiber, W. Krämer and K. Hornik (2003), "Testing and Dating of Structural
+ *     Changes in Practice", <i>Computational Statistics &amp; Data Analysis</i> 44(1–2), 109–123.
+ *     doi:10.1016/S0167-9473(03)00030-6 (the {@code breakpoints} function of strucchange)</li>
+ * </ol>
  */
 public final class BaiPerron {
 
@@ -22,9 +33,39 @@ public final class BaiPerron {
     public enum Model { LEVEL, LEVEL_AND_SLOPE }
 
     /**
+     * The best partition with a given number of breaks. The array is copied in and out, so a
+     * segmentation cannot be changed after it is made.
+     *
      * @param starts first index of each new regime, ascending
      */
     public record Segmentation(int breaks, int[] starts, double rss, double bic) {
+
+        public Segmentation {
+            starts = starts.clone();
+        }
+
+        /** A copy of the first index of each new regime. */
+        @Override
+        public int[] starts() {
+            return starts.clone();
+        }
+
+        @Override
+        public boolean equals(Object other) {
+            return other instanceof Segmentation s && breaks == s.breaks && Arrays.equals(starts, s.starts)
+                    && Double.compare(rss, s.rss) == 0 && Double.compare(bic, s.bic) == 0;
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * (31 * (31 * breaks + Arrays.hashCode(starts)) + Double.hashCode(rss)) + Double.hashCode(bic);
+        }
+
+        @Override
+        public String toString() {
+            return "Segmentation[breaks=" + breaks + ", starts=" + Arrays.toString(starts) + ", rss=" + rss
+                    + ", bic=" + bic + "]";
+        }
     }
 
     /** @param byBreaks index m holds the best partition with m breaks */
@@ -63,7 +104,10 @@ public final class BaiPerron {
         return new BaiPerron(model, minimumRegime, m);
     }
 
-    /** @throws IllegalArgumentException when the series is shorter than two regimes' worth of values */
+    /**
+     * @throws IllegalArgumentException when the series is shorter than one regime, or the minimum
+     *                                  regime does not exceed the coefficients per regime
+     */
     public Result fit(double[] y) {
         int n = y.length;
         int h = minimumRegime;
@@ -74,7 +118,7 @@ public final class BaiPerron {
         }
         // strucchange: at most ceil(n / h) − 2 breaks
         int maxM = Math.min(maxBreaks, Math.max(0, (int) Math.ceil(n / (double) h) - 2));
-        // The triangular table of segment costs (Bai & Perron 2003, §3), stored by segment end so
+        // [2] §3: the triangular table of segment costs, stored by segment end so
         // that the inner loop below reads it in order: byEnd[j][s] = RSS of s..j.
         double[][] byEnd = new double[n][];
         for (int j = 0; j < n; j++) {
@@ -99,6 +143,7 @@ public final class BaiPerron {
                 double bestHere = Double.POSITIVE_INFINITY;
                 int bestFrom = -1;
                 for (int i = m * h - 1; i <= j - h; i++) {
+                    // [2] §3: SSR(T_{m,j}) = min over i of SSR(T_{m−1,i}) + SSR(i+1..j)
                     double candidate = previous[i] + ending[i + 1];
                     if (candidate < bestHere) {
                         bestHere = candidate;
@@ -124,6 +169,7 @@ public final class BaiPerron {
                 starts[b - 1] = i + 1;
                 j = i;
             }
+            // [3] the BIC of strucchange's summary of breakpoints
             double logLik = -observed / 2 * (Math.log(rss) + 1 - Math.log(observed) + Math.log(2 * Math.PI));
             double bic = -2 * logLik + Math.log(observed) * (k + 1) * (m + 1);
             Segmentation s = new Segmentation(m, starts, rss, bic);

@@ -1,6 +1,7 @@
 package org.annalist.analysis.breaks;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import org.annalist.analysis.Reference;
@@ -63,11 +64,37 @@ class NileBreakTest {
             assertThat(SupF.chow(NILE, BaiPerron.Model.LEVEL, start)).as("F at %d", start)
                     .isCloseTo(expected[i], within(expected[i] * 1e-9));
         }
-        SupF.Result sup = SupF.test(NILE, BaiPerron.Model.LEVEL, 15);
+        SupF.Result sup = SupF.test(NILE, BaiPerron.Model.LEVEL, 15).orElseThrow();
         assertThat(sup.test().statistic()).isCloseTo(75.9297694274854, within(1e-8));
         assertThat(sup.breakStart()).isEqualTo(28);
         // sctest reports p = 2.2e-16 (its floor); the Monte Carlo p is at its floor, 1/500.
         assertThat(sup.test().pValue()).isEqualTo(1.0 / (SupF.REPLICATIONS + 1));
+    }
+
+    @Test
+    void supFSaysNotTestableWhenNoDateLeavesTwoRegimes() {
+        double[] tooShort = java.util.Arrays.copyOf(NILE, 29);   // two regimes of 15 need 30 values
+        assertThat(SupF.test(tooShort, BaiPerron.Model.LEVEL, 15)).isEmpty();
+        assertThat(SupF.decide(tooShort, BaiPerron.Model.LEVEL, 15, 0.05)).isEqualTo(SupF.Verdict.NOT_TESTABLE);
+        double[] justLongEnough = java.util.Arrays.copyOf(NILE, 30);
+        assertThat(SupF.test(justLongEnough, BaiPerron.Model.LEVEL, 15)).isPresent();
+        assertThat(SupF.decide(NILE, BaiPerron.Model.LEVEL, 15, 0.05)).isEqualTo(SupF.Verdict.REJECTS);
+        assertThatThrownBy(() -> SupF.test(NILE, BaiPerron.Model.LEVEL, 0))
+                .isInstanceOf(IllegalArgumentException.class);
+        assertThatThrownBy(() -> SupF.decide(NILE, BaiPerron.Model.LEVEL, 15, 1))
+                .isInstanceOf(IllegalArgumentException.class);
+    }
+
+    @Test
+    void segmentationsCopyTheirBreaksInAndOut() {
+        BaiPerron.Segmentation s = BaiPerron.withMinimumRegime(15).fit(NILE).chosen();
+        s.starts()[0] = 99;
+        assertThat(s.starts()).containsExactly(28);
+        int[] given = {28};
+        BaiPerron.Segmentation made = new BaiPerron.Segmentation(1, given, s.rss(), s.bic());
+        given[0] = 99;
+        assertThat(made.starts()).containsExactly(28);
+        assertThat(made).isEqualTo(s).hasSameHashCodeAs(s);
     }
 
     @Test

@@ -25,6 +25,19 @@ class PeltTest {
     }
 
     @Test
+    void resultsCopyTheirBreaksInAndOut() {
+        Pelt.Result r = Pelt.fit(steps(1, 3650, 2, 10, 14, 11, 11), 7);
+        int[] first = r.starts();
+        first[0] = -1;
+        assertThat(r.starts()[0]).isBetween(995, 1005);
+        int[] given = {5, 9};
+        Pelt.Result made = new Pelt.Result(given, 1, 1);
+        given[0] = 7;
+        assertThat(made.starts()).containsExactly(5, 9);
+        assertThat(made).isEqualTo(new Pelt.Result(new int[] {5, 9}, 1, 1));
+    }
+
+    @Test
     void theUnitsDoNotChangeTheBreaks() {
         double[] y = steps(2, 2000, 1, 5, 6);
         double[] scaled = y.clone();
