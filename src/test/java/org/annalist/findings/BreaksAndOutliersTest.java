@@ -27,7 +27,7 @@ class BreaksAndOutliersTest {
         return Series.builder("synthetic", Frequency.MONTHLY).append(START, x).snapshot();
     }
 
-    private static List<String> breakPeriods(Findings f) {
+    private static List<Period> breakPeriods(Findings f) {
         return f.breaks().stream().map(BreakFinding::period).toList();
     }
 

@@ -6,7 +6,6 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.Arrays;
 import java.util.Random;
-import org.annalist.analysis.DecisionRules;
 import org.annalist.analysis.Reference;
 import org.annalist.analysis.TestResult;
 import org.annalist.series.Frequency;
@@ -21,6 +20,16 @@ import org.junit.jupiter.api.Test;
 class BreakSearchTest {
 
     private static final double[] NILE = Reference.dataset("Nile.csv");
+
+    @Test
+    void theMinimumRegimeIsOneSeasonalCycleOrEightYears() {
+        BreakSearch defaults = BreakSearch.withDefaults();
+        assertThat(defaults.minimumRegime(Frequency.ANNUAL)).isEqualTo(8);
+        assertThat(defaults.minimumRegime(Frequency.QUARTERLY)).isEqualTo(4);
+        assertThat(defaults.minimumRegime(Frequency.MONTHLY)).isEqualTo(12);
+        assertThat(defaults.minimumRegime(Frequency.WEEKLY)).isEqualTo(52);
+        assertThat(defaults.minimumRegime(Frequency.DAILY)).isEqualTo(7);
+    }
 
     @Test
     void nileWithStrucchangesMinimumRegimeGivesItsBreakLevelsAndStatistic() {
@@ -49,21 +58,6 @@ class BreakSearchTest {
         assertThat(b.latest()).isBetween(32 - 1, 32 + 1);
         assertThat(b.provisional()).isFalse();
         assertThat(r.episodes()).isEmpty();
-    }
-
-    @Test
-    void theDefaultsAreTheDecisionRules() {
-        assertThat(BreakSearch.DEFAULT_ALPHA).isEqualTo(DecisionRules.ALPHA);
-        assertThat(BreakSearch.DEFAULT_MINIMUM_CHANGE_PCT).isEqualTo(DecisionRules.MIN_BREAK_CHANGE_PCT);
-        assertThat(BreakSearch.DEFAULT_PELT_ABOVE).isEqualTo(DecisionRules.PELT_ABOVE);
-        assertThat(BreakSearch.DEFAULT_COLLAPSE_PCT).isEqualTo(DecisionRules.COLLAPSE_PCT);
-        assertThat(BreakSearch.DEFAULT_ANNUAL_MINIMUM_REGIME).isEqualTo(DecisionRules.MIN_REGIME_YEARS_ANNUAL);
-        BreakSearch defaults = BreakSearch.withDefaults();
-        assertThat(defaults.minimumRegime(Frequency.ANNUAL)).isEqualTo(8);
-        assertThat(defaults.minimumRegime(Frequency.QUARTERLY)).isEqualTo(4);
-        assertThat(defaults.minimumRegime(Frequency.MONTHLY)).isEqualTo(12);
-        assertThat(defaults.minimumRegime(Frequency.WEEKLY)).isEqualTo(52);
-        assertThat(defaults.minimumRegime(Frequency.DAILY)).isEqualTo(7);
     }
 
     @Test
@@ -190,7 +184,7 @@ class BreakSearchTest {
         }
         BreakSearch.Result r = BreakSearch.withDefaults().search(y, Frequency.MONTHLY, BreakSearch.Scale.UNITS);
         assertThat(r.breaks()).extracting(BreakSearch.Break::start).containsExactly(60);
-        assertThat(r.breaks().get(0).changePct()).isLessThan(DecisionRules.COLLAPSE_PCT);
+        assertThat(r.breaks().get(0).changePct()).isLessThan(BreakSearch.DEFAULT_COLLAPSE_PCT);
         assertThat(r.episodes()).isEmpty();
     }
 
