@@ -18,6 +18,9 @@ import org.annalist.series.Series;
  * two seasonal cycles (eight periods for non-seasonal data) — the old level would otherwise pull the
  * forecasts; a shorter regime leaves all values in and the brief says the break may make the outlook
  * err. Missing values inside the fitted span are filled with what trend and season predict there.
+ *
+ * <p>The outlook returns typed evidence; the names of its methods and models and the sentence on
+ * the choice of method are worded here.
  */
 final class OutlookAnalysis {
 
@@ -64,10 +67,15 @@ final class OutlookAnalysis {
         }
         Outlook.Forecast f = outlook.chosen();
         Period lastPeriod = series.period(last);
+        double[] mean = f.mean();
+        double[] lo80 = f.lo80();
+        double[] hi80 = f.hi80();
+        double[] lo95 = f.lo95();
+        double[] hi95 = f.hi95();
         List<OutlookFinding.Point> points = new ArrayList<>();
         for (int k = 0; k < h; k++) {
-            points.add(new OutlookFinding.Point(lastPeriod.plus(k + 1).toString(), f.mean()[k], f.lo80()[k],
-                    f.hi80()[k], f.lo95()[k], f.hi95()[k], k));
+            points.add(new OutlookFinding.Point(lastPeriod.plus(k + 1).toString(), mean[k], lo80[k], hi80[k], lo95[k],
+                    hi95[k], k));
         }
         int nextYear = lastPeriod.year() + 1;
         OutlookFinding.Span total = null;
@@ -83,11 +91,49 @@ final class OutlookAnalysis {
             }
         }
         List<OutlookFinding.Score> scores = outlook.backtest().stream()
-                .map(s -> new OutlookFinding.Score(s.method().label(period), s.mase(), s.smape())).toList();
+                .map(s -> new OutlookFinding.Score(methodName(s.method(), period), s.mase(), s.smape())).toList();
         Double typical = outlook.backtest().isEmpty() ? null
                 : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
-        return new OutlookFinding(f.method().label(period), f.model(), h, series.period(from).toString(), points, total,
-                average, scores, outlook.chosenBecause(), typical, nextYear, outlook.origins(), caveats);
+        return new OutlookFinding(methodName(f.method(), period), modelName(f.model(), period), h,
+                series.period(from).toString(), points, total, average, scores, chosenBecause(outlook.choice(), period),
+                typical, nextYear, outlook.origins(), caveats);
+    }
+
+    /**
+     * The method's name in the findings: ETS, Theta, combination, seasonal naive — or naive, the
+     * seasonal naive forecast of data without a season ({@code period} ≤ 1).
+     */
+    private static String methodName(Outlook.Method method, int period) {
+        return switch (method) {
+            case ETS -> "ETS";
+            case THETA -> "Theta";
+            case COMBINATION -> "combination";
+            case SEASONAL_NAIVE -> period <= 1 ? "naive" : "seasonal naive";
+        };
+    }
+
+    /** The model in the findings, e.g. ETS(M,A,M), "Theta, seasonally adjusted" or "mean of ETS(A,N,A), Theta and seasonal naive". */
+    private static String modelName(Outlook.Model model, int period) {
+        return switch (model.method()) {
+            case ETS -> model.ets().orElseThrow().label();
+            case THETA -> model.seasonallyAdjusted() ? "Theta, seasonally adjusted" : "Theta";
+            case SEASONAL_NAIVE -> methodName(Outlook.Method.SEASONAL_NAIVE, period);
+            case COMBINATION -> "mean of " + model.ets().orElseThrow().label() + ", Theta and "
+                    + methodName(Outlook.Method.SEASONAL_NAIVE, period);
+        };
+    }
+
+    /** The choice rule as it applied, in words. */
+    private static String chosenBecause(Outlook.Choice choice, int period) {
+        if (choice.basis() == Outlook.Choice.Basis.AICC_WITHOUT_BACKTEST) {
+            return "chosen by AICc among ETS models; the series is too short for a back-test";
+        }
+        String next = choice.nextBest()
+                .map(s -> String.format(Locale.ROOT, "; next best %s %.2f", methodName(s.method(), period), s.mase()))
+                .orElse("");
+        return String.format(Locale.ROOT,
+                "lowest mean absolute scaled error in a rolling-origin back-test over the last %d periods (%.2f%s)",
+                choice.origins(), choice.best().orElseThrow().mase(), next);
     }
 
     /** Percent rates stay within 0–100, values that were never negative stay at or above zero. */

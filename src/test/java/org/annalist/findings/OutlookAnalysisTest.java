@@ -3,8 +3,10 @@ package org.annalist.findings;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.Random;
+import org.annalist.analysis.Reference;
 import org.annalist.analysis.forecast.Outlook;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Frequency;
@@ -74,6 +76,56 @@ class OutlookAnalysisTest {
         assertThat(OutlookAnalysis.bounds(nights(24, 1000, 0, 1), LatestIndicators.Measure.FLOW))
                 .isEqualTo(Outlook.Bounds.NON_NEGATIVE);
         assertThat(OutlookAnalysis.bounds(change, LatestIndicators.Measure.FLOW)).isEqualTo(Outlook.Bounds.NONE);
+    }
+
+    /**
+     * The finding words the typed evidence of the outlook: the methods' names, the model and the
+     * sentence on the choice, which quotes the back-test's origins and its best two scores.
+     */
+    @Test
+    void theChoiceByBacktestIsWordedFromItsScores() {
+        OutlookFinding o = new Analyst().analyse(nights(72, 1000, 0, 8)).outlook();
+        List<String> methods = List.of("ETS", "Theta", "combination", "seasonal naive");
+        assertThat(o.backtest()).hasSize(4).extracting(OutlookFinding.Score::method)
+                .containsExactlyInAnyOrderElementsOf(methods);
+        OutlookFinding.Score best = o.backtest().get(0);
+        OutlookFinding.Score next = o.backtest().get(1);
+        assertThat(o.method()).isEqualTo(best.method());
+        assertThat(o.backtestPeriods()).isEqualTo(24);
+        assertThat(o.chosenBecause()).isEqualTo(String.format(Locale.ROOT, "lowest mean absolute scaled error in a "
+                + "rolling-origin back-test over the last 24 periods (%.2f; next best %s %.2f)", best.mase(),
+                next.method(), next.mase()));
+        String ets = "ETS\\([AM],(N|A|Ad),[NAM]\\)";
+        assertThat(o.model()).matches(switch (o.method()) {
+            case "ETS" -> ets;
+            case "Theta" -> "Theta(, seasonally adjusted)?";
+            case "combination" -> "mean of " + ets + ", Theta and seasonal naive";
+            default -> "seasonal naive";
+        });
+    }
+
+    /** Annual data (Nile, R datasets): the benchmark is the plain naive forecast and is named so. */
+    @Test
+    void theSeasonalNaiveForecastOfAnnualDataIsCalledNaive() {
+        Series nile = Series.builder("Nile", Frequency.ANNUAL).unit("10^8 m^3")
+                .append(Period.year(1871), Reference.dataset("Nile.csv")).snapshot();
+        OutlookFinding o = new Analyst().analyse(nile).outlook();
+        assertThat(o.backtest()).extracting(OutlookFinding.Score::method).contains("naive")
+                .noneMatch(m -> m.contains("seasonal"));
+        assertThat(o.chosenBecause()).doesNotContain("seasonal");
+        // measured: the combination wins the back-test (MASE 0.95; ETS 0.97, Theta 0.98, naive 1.09)
+        assertThat(o.method()).isEqualTo("combination");
+        assertThat(o.model()).matches("mean of ETS\\([AM],(N|A|Ad),N\\), Theta and naive");
+    }
+
+    @Test
+    void aSeriesTooShortForTheBacktestSaysSo() {
+        OutlookFinding o = new Analyst().analyse(nights(30, 1000, 0, 9)).outlook();
+        assertThat(o.backtest()).isEmpty();
+        assertThat(o.method()).isEqualTo("ETS");
+        assertThat(o.model()).matches("ETS\\([AM],(N|A|Ad),[NAM]\\)");
+        assertThat(o.chosenBecause()).isEqualTo("chosen by AICc among ETS models; the series is too short for a back-test");
+        assertThat(o.caveats()).anySatisfy(c -> assertThat(c).contains("too short to test the forecasts"));
     }
 
     @Test
