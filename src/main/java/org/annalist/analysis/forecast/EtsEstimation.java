@@ -35,8 +35,24 @@ final class EtsEstimation {
     private static final double[] START = {0.5, 0.1, 0.05, 0.978};
     /** How far outside the unit circle an eigenvalue of the discount matrix may lie (rounding). */
     private static final double ADMISSIBLE_TOLERANCE = 1e-6;
-    /** The smallest seasonal factor a multiplicative model's start may be searched down to. */
+    /** The smallest seasonal factor a multiplicative model's start may be searched down to: a bound of this search. */
     private static final double SMALLEST_FACTOR = 0.01;
+    /**
+     * How far the level and trend starts are searched from the heuristic ones, in units of the
+     * series' mean absolute value, and how large a seasonal factor may get: a bound of this search.
+     */
+    private static final double STATE_RANGE = 10;
+    /** The smallest seasonal factor the start divides by when it adjusts the first seasons: a guard against a factor near zero. */
+    private static final double ADJUSTMENT_FLOOR = 1e-2;
+    /** The search stops when an iteration improves the criterion by less than this, relative. */
+    private static final double RELATIVE_CHANGE = 1e-10;
+    /** The most quasi-Newton iterations per search. */
+    private static final int MAX_ITERATIONS = 500;
+    /**
+     * The short first step of the second search, on the logistic scale: on the reference series
+     * a free first step and this one each find the better of the likelihood's basins for some models.
+     */
+    private static final double SHORT_FIRST_STEP = 0.5;
 
     private EtsEstimation() {
     }
@@ -51,8 +67,9 @@ final class EtsEstimation {
         // the reference series each finds the better of the likelihood's basins for some models
         BoundedQuasiNewton search = new BoundedQuasiNewton(coordinates.lower, coordinates.upper, coordinates::criterion);
         BoundedQuasiNewton.Minimum best = null;
-        for (double firstStepLimit : new double[] {Double.POSITIVE_INFINITY, 0.5}) {
-            BoundedQuasiNewton.Minimum found = search.minimise(coordinates.guess, 1e-10, 500, firstStepLimit);
+        for (double firstStepLimit : new double[] {Double.POSITIVE_INFINITY, SHORT_FIRST_STEP}) {
+            BoundedQuasiNewton.Minimum found = search.minimise(coordinates.guess, RELATIVE_CHANGE, MAX_ITERATIONS,
+                    firstStepLimit);
             if (best == null || found.value() < best.value()) {
                 best = found;
             }
@@ -102,8 +119,8 @@ final class EtsEstimation {
             }
             for (int i = 0; i < states; i++) {
                 boolean factor = isSeasonalFactor(i);
-                lower[smoothing + i] = factor ? SMALLEST_FACTOR - start[i] : -10;
-                upper[smoothing + i] = factor ? 10 - start[i] : 10;
+                lower[smoothing + i] = factor ? SMALLEST_FACTOR - start[i] : -STATE_RANGE;
+                upper[smoothing + i] = factor ? STATE_RANGE - start[i] : STATE_RANGE;
             }
             initial = new double[start.length];
         }
@@ -208,7 +225,7 @@ final class EtsEstimation {
             }
             adjusted = new double[head.length];
             for (int i = 0; i < head.length; i++) {
-                adjusted[i] = additive ? head[i] - seasonal[i] : head[i] / Math.max(seasonal[i], 1e-2);
+                adjusted[i] = additive ? head[i] - seasonal[i] : head[i] / Math.max(seasonal[i], ADJUSTMENT_FLOOR);
             }
         }
         int count = Math.min(Math.max(10, 2 * m), adjusted.length);
