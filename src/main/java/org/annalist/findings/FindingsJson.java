@@ -32,6 +32,9 @@ public final class FindingsJson {
                     .addSerializer(TrendFinding.Test.class, new Worded<>(TrendFinding.Test.class, JsonWording::trendTest))
                     .addSerializer(Smoothing.CentredAverage.class,
                             new Worded<>(Smoothing.CentredAverage.class, JsonWording::movingAverage))
+                    .addSerializer(OutlookFinding.Model.class,
+                            new Worded<>(OutlookFinding.Model.class, JsonWording::forecastModel))
+                    .addSerializer(OutlookFinding.Choice.class, new Worded<>(OutlookFinding.Choice.class, JsonWording::choice))
                     .addSerializer(CalendarNote.class, new Worded<>(CalendarNote.class, JsonWording::calendarNote)))
             .build();
 

@@ -15,6 +15,12 @@ public interface JsonWording {
     /** The smoothing's moving average, e.g. {@code 2×12 centred moving average}. */
     String movingAverage(Smoothing.CentredAverage average);
 
+    /** The outlook's model, e.g. {@code ETS(M,A,M)}. */
+    String forecastModel(OutlookFinding.Model model);
+
+    /** How the outlook's method was chosen. */
+    String choice(OutlookFinding.Choice choice);
+
     /** A sentence on the calendar of the latest period. */
     String calendarNote(CalendarNote note);
 }

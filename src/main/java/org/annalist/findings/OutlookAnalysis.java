@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import org.annalist.analysis.forecast.EtsModel;
 import org.annalist.analysis.forecast.Outlook;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Period;
@@ -40,17 +41,14 @@ final class OutlookAnalysis {
         int period = series.frequency().seasonalPeriod();
         int h = horizon.orElse(restOfYear(series.period(last)) + DEFAULT_EXTRA_PERIODS);
         int minimumRegime = period > 1 ? 2 * period : 8;
-        List<String> caveats = new ArrayList<>();
+        List<OutlookCaveat> caveats = new ArrayList<>();
         int from = 0;
         if (regimeStart > 0) {
             if (last + 1 - regimeStart >= minimumRegime) {
                 from = regimeStart;
-                caveats.add("The outlook is fitted on the values since the structural change in "
-                        + series.period(regimeStart).label() + " only.");
+                caveats.add(new OutlookCaveat.FittedSinceBreak(series.period(regimeStart)));
             } else {
-                caveats.add("The latest structural change, in " + series.period(regimeStart).label()
-                        + ", is too recent to fit the outlook on the new level alone: it uses all values, "
-                        + "so it may lag behind the new level.");
+                caveats.add(new OutlookCaveat.BreakTooRecent(series.period(regimeStart)));
             }
         }
         double[] y = filled(series, decomposition, from, last, caveats);
@@ -60,14 +58,19 @@ final class OutlookAnalysis {
         }
         Outlook.Result outlook = result.get();
         if (outlook.backtest().isEmpty()) {
-            caveats.add("The series is too short to test the forecasts on its own past, so their accuracy is unknown.");
+            caveats.add(new OutlookCaveat.NoBacktest());
         }
         Outlook.Forecast f = outlook.chosen();
         Period lastPeriod = series.period(last);
+        double[] mean = f.mean();
+        double[] lo80 = f.lo80();
+        double[] hi80 = f.hi80();
+        double[] lo95 = f.lo95();
+        double[] hi95 = f.hi95();
         List<OutlookFinding.Point> points = new ArrayList<>();
         for (int k = 0; k < h; k++) {
-            points.add(new OutlookFinding.Point(lastPeriod.plus(k + 1).toString(), f.mean()[k], f.lo80()[k],
-                    f.hi80()[k], f.lo95()[k], f.hi95()[k], k));
+            points.add(new OutlookFinding.Point(lastPeriod.plus(k + 1), mean[k], lo80[k], hi80[k], lo95[k],
+                    hi95[k], k));
         }
         int nextYear = lastPeriod.year() + 1;
         OutlookFinding.Span total = null;
@@ -83,11 +86,33 @@ final class OutlookAnalysis {
             }
         }
         List<OutlookFinding.Score> scores = outlook.backtest().stream()
-                .map(s -> new OutlookFinding.Score(s.method().label(period), s.mase(), s.smape())).toList();
+                .map(s -> new OutlookFinding.Score(method(s.method(), period), s.mase(), s.smape())).toList();
         Double typical = outlook.backtest().isEmpty() ? null
                 : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
-        return new OutlookFinding(f.method().label(period), f.model(), h, series.period(from).toString(), points, total,
-                average, scores, outlook.chosenBecause(), typical, nextYear, outlook.origins(), caveats);
+        return new OutlookFinding(method(f.method(), period), model(f.model(), period), h, series.period(from), points,
+                total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats);
+    }
+
+    /** The method; the seasonal naive forecast of data without a season ({@code period} ≤ 1) is the naive one. */
+    private static OutlookMethod method(Outlook.Method method, int period) {
+        return switch (method) {
+            case ETS -> OutlookMethod.ETS;
+            case THETA -> OutlookMethod.THETA;
+            case COMBINATION -> OutlookMethod.COMBINATION;
+            case SEASONAL_NAIVE -> period <= 1 ? OutlookMethod.NAIVE : OutlookMethod.SEASONAL_NAIVE;
+        };
+    }
+
+    private static OutlookFinding.Model model(Outlook.Model model, int period) {
+        return new OutlookFinding.Model(method(model.method(), period), model.ets().map(EtsModel::label),
+                model.seasonallyAdjusted(), method(Outlook.Method.SEASONAL_NAIVE, period));
+    }
+
+    private static OutlookFinding.Choice choice(Outlook.Choice choice, int period) {
+        return new OutlookFinding.Choice(choice.basis() != Outlook.Choice.Basis.AICC_WITHOUT_BACKTEST, choice.origins(),
+                choice.best().map(Outlook.Score::mase).orElse(Double.NaN),
+                choice.nextBest().map(s -> method(s.method(), period)),
+                choice.nextBest().map(Outlook.Score::mase).orElse(Double.NaN));
     }
 
     /** Percent rates stay within 0–100, values that were never negative stay at or above zero. */
@@ -136,7 +161,8 @@ final class OutlookAnalysis {
      * The values from {@code from} to {@code last}, gaps filled with trend-cycle and season there
      * (or, without a decomposition, by straight lines between their neighbours).
      */
-    private static double[] filled(Series series, Optional<Decomposition> d, int from, int last, List<String> caveats) {
+    private static double[] filled(Series series, Optional<Decomposition> d, int from, int last,
+                                   List<OutlookCaveat> caveats) {
         double[] trendCycle = d.map(Decomposition::trendCycle).orElse(null);
         double[] seasonal = d.map(Decomposition::seasonal).orElse(null);
         boolean multiplicative = d.map(Decomposition::multiplicative).orElse(false);
@@ -165,8 +191,7 @@ final class OutlookAnalysis {
             }
         }
         if (gaps > 0) {
-            caveats.add(gaps + (gaps == 1 ? " missing value was" : " missing values were")
-                    + " filled with what trend and season predict before forecasting.");
+            caveats.add(new OutlookCaveat.GapsFilled(gaps));
         }
         return y;
     }

@@ -3,28 +3,30 @@ package org.annalist.findings;
 import com.fasterxml.jackson.annotation.JsonIgnore;
 import com.fasterxml.jackson.annotation.JsonPropertyOrder;
 import java.util.List;
+import java.util.Optional;
+import org.annalist.series.Period;
 
 /**
  * The findings JSON {@code outlook} block: forecasts with 80 and 95 % intervals from the method the
  * back-test chose.
  *
- * @param method          {@code ETS}, {@code Theta}, {@code seasonal naive} or {@code combination}
- * @param model           e.g. {@code ETS(M,A,M)}
+ * @param model           the method's model, e.g. ETS(M,A,M)
  * @param fittedFrom      the first period the method was fitted on (the latest regime's start after a break)
  * @param nextYearTotal   the next calendar year's sum for a flow (null for a level, or when the
  *                        horizon does not reach the year's end)
  * @param nextYearAverage the next calendar year's mean for a level (null for a flow)
+ * @param chosenBecause   how the method was chosen
  * @param typicalErrorPct the median absolute percentage error of the chosen method in the back-test
  *                        (null without a back-test)
  * @param nextYear        the calendar year the totals cover
- * @param caveats         what limits the outlook, in plain words, for the brief
+ * @param caveats         what limits the outlook, for the brief
  */
 @JsonPropertyOrder({"method", "model", "horizon", "fitted_from", "forecasts", "next_year_total", "next_year_average",
     "backtest", "chosen_because", "typical_error_pct"})
-public record OutlookFinding(String method, String model, int horizon, String fittedFrom, List<Point> forecasts,
-                             Span nextYearTotal, Span nextYearAverage, List<Score> backtest, String chosenBecause,
+public record OutlookFinding(OutlookMethod method, Model model, int horizon, Period fittedFrom, List<Point> forecasts,
+                             Span nextYearTotal, Span nextYearAverage, List<Score> backtest, Choice chosenBecause,
                              Double typicalErrorPct, @JsonIgnore int nextYear, @JsonIgnore int backtestPeriods,
-                             @JsonIgnore List<String> caveats) {
+                             @JsonIgnore List<OutlookCaveat> caveats) {
 
     public OutlookFinding {
         forecasts = List.copyOf(forecasts);
@@ -32,8 +34,28 @@ public record OutlookFinding(String method, String model, int horizon, String fi
         caveats = List.copyOf(caveats);
     }
 
+    /**
+     * A method's model.
+     *
+     * @param ets                the ETS model in the usual notation, e.g. {@code ETS(M,A,M)}, for ETS
+     *                           and the combination (empty otherwise)
+     * @param seasonallyAdjusted Theta worked on seasonally adjusted values
+     * @param naive              the naive method for this series: seasonal naive, or naive for data
+     *                           without a season (a member of the combination)
+     */
+    public record Model(OutlookMethod method, Optional<String> ets, boolean seasonallyAdjusted, OutlookMethod naive) {
+    }
+
+    /**
+     * How the method was chosen: by the lowest MASE in the back-test over {@code origins} periods,
+     * or, without a back-test, by AICc among ETS models.
+     */
+    public record Choice(boolean backtested, int origins, double bestMase, Optional<OutlookMethod> nextBest,
+                         double nextBestMase) {
+    }
+
     /** @param index 0-based position after the series' last observation */
-    public record Point(String period, double mean, double lo80, double hi80, double lo95, double hi95,
+    public record Point(Period period, double mean, double lo80, double hi80, double lo95, double hi95,
                         @JsonIgnore int index) {
     }
 
@@ -42,6 +64,6 @@ public record OutlookFinding(String method, String model, int horizon, String fi
     }
 
     /** A candidate's back-test errors: MASE (below 1 beats the seasonal naive forecast) and sMAPE in %. */
-    public record Score(String method, double mase, double smape) {
+    public record Score(OutlookMethod method, double mase, double smape) {
     }
 }

@@ -98,8 +98,8 @@ public final class AnalystNotes {
             line(out, "outlook", "none");
         } else {
             OutlookFinding.Point first = o.forecasts().get(0);
-            line(out, "outlook", "%s (%s), fitted from %s, %d periods ahead; %s: %s (80%% %s to %s)", o.model(),
-                    o.chosenBecause(), o.fittedFrom(), o.horizon(), first.period(), num(first.mean()), num(first.lo80()),
+            line(out, "outlook", "%s (%s), fitted from %s, %d periods ahead; %s: %s (80%% %s to %s)",
+                    Terms.forecastModel(o.model()), Terms.choice(o.chosenBecause()), o.fittedFrom(), o.horizon(), first.period(), num(first.mean()), num(first.lo80()),
                     num(first.hi80()));
             if (o.nextYearTotal() != null) {
                 line(out, "next year", "%d total %s (80%% %s to %s)", o.nextYear(), num(o.nextYearTotal().mean()),
@@ -110,7 +110,8 @@ public final class AnalystNotes {
                         num(o.nextYearAverage().lo80()), num(o.nextYearAverage().hi80()));
             }
             for (OutlookFinding.Score score : o.backtest()) {
-                line(out, "back-test", "%s: MASE %.2f, sMAPE %.1f %%", score.method(), score.mase(), score.smape());
+                line(out, "back-test", "%s: MASE %.2f, sMAPE %.1f %%", score.method().code(), score.mase(),
+                        score.smape());
             }
         }
         line(out, "smoothing", "%s", f.smoothing() == null ? "none (series shorter than one window)"

@@ -51,8 +51,9 @@ final class AppendixViews {
                     + "(Hyndman, Koehler, Snyder & Grose 2002; Hyndman et al. 2008), Theta (Assimakopoulos & "
                     + "Nikolopoulos 2000), seasonal naive and their equal-weight combination, compared in a "
                     + "rolling-origin back-test (Tashman 2000) by MASE (Hyndman & Koehler 2006)",
-                    o.model() + ", fitted from " + o.fittedFrom() + ", " + o.horizon() + " periods ahead; "
-                    + o.chosenBecause() + "; intervals analytic or from 2,000 simulated paths"));
+                    Terms.forecastModel(o.model()) + ", fitted from " + o.fittedFrom() + ", " + o.horizon()
+                    + " periods ahead; " + Terms.choice(o.chosenBecause())
+                    + "; intervals analytic or from 2,000 simulated paths"));
         }
         return rows;
     }

@@ -2,6 +2,7 @@ package org.annalist.narrative;
 
 import org.annalist.findings.CalendarNote;
 import org.annalist.findings.JsonWording;
+import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.Smoothing;
 import org.annalist.findings.TestName;
 import org.annalist.findings.TrendFinding;
@@ -28,6 +29,16 @@ public final class JsonTerms implements JsonWording {
     @Override
     public String movingAverage(Smoothing.CentredAverage average) {
         return Terms.movingAverage(average);
+    }
+
+    @Override
+    public String forecastModel(OutlookFinding.Model model) {
+        return Terms.forecastModel(model);
+    }
+
+    @Override
+    public String choice(OutlookFinding.Choice choice) {
+        return Terms.choice(choice);
     }
 
     @Override

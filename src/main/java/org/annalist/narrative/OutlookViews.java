@@ -33,7 +33,7 @@ final class OutlookViews {
         List<BriefView.ScoreRow> scores = new ArrayList<>();
         for (int i = 0; i < o.backtest().size(); i++) {
             OutlookFinding.Score s = o.backtest().get(i);
-            scores.add(new BriefView.ScoreRow(s.method(), f.fixed(s.mase(), 2), f.fixed(s.smape(), 1), i == 0));
+            scores.add(new BriefView.ScoreRow(s.method().code(), f.fixed(s.mase(), 2), f.fixed(s.smape(), 1), i == 0));
         }
         OutlookFinding.Span year = o.nextYearTotal() != null ? o.nextYearTotal() : o.nextYearAverage();
         boolean total = o.nextYearTotal() != null;
@@ -55,23 +55,24 @@ final class OutlookViews {
                 change = previous <= 0 ? "" : Math.abs(pct) < 0.05 ? "unchanged" : f.signedPercent(pct);
             }
         }
+        OutlookFinding.Model model = o.model();
         String methodName = switch (o.method()) {
-            case "ETS" -> "exponential smoothing, " + o.model();
-            case "combination" -> "the average of three methods (" + o.model().replaceFirst("^mean of ", "") + ")";
-            case "seasonal naive" -> "the seasonal naive rule (each period as the same period a year before)";
-            case "naive" -> "the naive rule (every period as the latest value)";
-            case "Theta" -> o.model().contains("seasonally") ? "the Theta method, on seasonally adjusted values"
+            case ETS -> "exponential smoothing, " + model.ets().orElseThrow();
+            case COMBINATION -> "the average of three methods (" + model.ets().orElseThrow() + ", Theta and "
+                    + model.naive().code() + ")";
+            case SEASONAL_NAIVE -> "the seasonal naive rule (each period as the same period a year before)";
+            case NAIVE -> "the naive rule (every period as the latest value)";
+            case THETA -> model.seasonallyAdjusted() ? "the Theta method, on seasonally adjusted values"
                     : "the Theta method";
-            default -> o.model();
         };
-        return new BriefView.OutlookView(true, methodName, o.chosenBecause(), f.period(periodOf(series, o.fittedFrom())),
+        return new BriefView.OutlookView(true, methodName, Terms.choice(o.chosenBecause()), f.period(o.fittedFrom()),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
                 o.horizon() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
                 year == null ? "" : f.significant(year.mean()), year == null ? "" : f.significant(year.lo80()),
                 year == null ? "" : f.significant(year.hi80()), previousYear, previousValue, change,
                 o.typicalErrorPct() == null ? "" : f.fixed(Math.max(o.typicalErrorPct(), 0.1),
                         o.typicalErrorPct() < 10 ? 1 : 0) + "\u00A0%",
-                f.count(o.backtestPeriods()), scores, o.caveats().stream().map(c -> inWords(c, series, f)).toList());
+                f.count(o.backtestPeriods()), scores, o.caveats().stream().map(c -> Terms.outlookCaveat(c, f)).toList());
     }
 
     /** The sum (flow) or mean (level) of a calendar year with every period observed, or null. */
@@ -93,34 +94,11 @@ final class OutlookViews {
         return count == 0 ? null : sum ? total : total / count;
     }
 
-    /** The findings write periods as the data do ({@code 2022-08}); the brief writes them in words. */
-    private static String inWords(String caveat, Series series, Formats f) {
-        String out = caveat;
-        for (String word : caveat.split("[\\s,.;:()]+")) {
-            if (!word.isEmpty() && Character.isDigit(word.charAt(0))) {
-                Period p = periodOf(series, word);
-                if (p.toString().equals(word)) {
-                    out = out.replace(word, f.period(p));
-                }
-            }
-        }
-        return out;
-    }
-
     private static Period lastObserved(Series series) {
         int last = series.size() - 1;
         while (last > 0 && series.isMissing(last)) {
             last--;
         }
         return series.period(last);
-    }
-
-    private static Period periodOf(Series series, String label) {
-        for (int i = 0; i < series.size(); i++) {
-            if (series.period(i).toString().equals(label)) {
-                return series.period(i);
-            }
-        }
-        return series.start();
     }
 }

@@ -11,6 +11,8 @@ import org.annalist.findings.Decomposition;
 import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Direction;
 import org.annalist.findings.FormChoice;
+import org.annalist.findings.OutlookCaveat;
+import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.Smoothing;
 import org.annalist.findings.TestName;
 import org.annalist.findings.TrendFinding;
@@ -113,6 +115,45 @@ final class Terms {
         Caveat.ProvisionalBreak b = (Caveat.ProvisionalBreak) caveat;
         return "The break in " + b.start().label() + " is provisional: the new regime is still short and the break"
                 + " may not hold.";
+    }
+
+    /** The outlook's model: {@code ETS(M,A,M)}, {@code Theta, seasonally adjusted}, {@code mean of …}. */
+    static String forecastModel(OutlookFinding.Model m) {
+        return switch (m.method()) {
+            case ETS -> m.ets().orElseThrow();
+            case THETA -> m.seasonallyAdjusted() ? "Theta, seasonally adjusted" : "Theta";
+            case SEASONAL_NAIVE, NAIVE -> m.method().code();
+            case COMBINATION -> "mean of " + m.ets().orElseThrow() + ", Theta and " + m.naive().code();
+        };
+    }
+
+    /** How the outlook's method was chosen. */
+    static String choice(OutlookFinding.Choice c) {
+        if (!c.backtested()) {
+            return "chosen by AICc among ETS models; the series is too short for a back-test";
+        }
+        String next = c.nextBest().map(m -> String.format(Locale.ROOT, "; next best %s %.2f", m.code(), c.nextBestMase()))
+                .orElse("");
+        return String.format(Locale.ROOT,
+                "lowest mean absolute scaled error in a rolling-origin back-test over the last %d periods (%.2f%s)",
+                c.origins(), c.bestMase(), next);
+    }
+
+    /** What limits the outlook, with its periods in words. */
+    static String outlookCaveat(OutlookCaveat caveat, Formats f) {
+        if (caveat instanceof OutlookCaveat.FittedSinceBreak b) {
+            return "The outlook is fitted on the values since the structural change in " + f.period(b.start()) + " only.";
+        }
+        if (caveat instanceof OutlookCaveat.BreakTooRecent b) {
+            return "The latest structural change, in " + f.period(b.start()) + ", is too recent to fit the outlook on the"
+                    + " new level alone: it uses all values, so it may lag behind the new level.";
+        }
+        if (caveat instanceof OutlookCaveat.NoBacktest) {
+            return "The series is too short to test the forecasts on its own past, so their accuracy is unknown.";
+        }
+        int gaps = ((OutlookCaveat.GapsFilled) caveat).count();
+        return gaps + (gaps == 1 ? " missing value was" : " missing values were")
+                + " filled with what trend and season predict before forecasting.";
     }
 
     /** How the breaks were searched, for the methods appendix. */

@@ -11,6 +11,7 @@ import org.annalist.findings.Analyst;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookFinding;
+import org.annalist.findings.OutlookMethod;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.ingest.SeriesFileReader;
@@ -80,7 +81,7 @@ class BriefDocumentTest {
                 o.typicalErrorPct()));
         assertThat(text).contains(roundedToThree(o.forecasts().get(0).mean()));
         assertThat(text).contains("Forecasts are estimates, not promises");
-        assertThat(text).contains(o.method().equals("ETS") ? "exponential smoothing" : o.method());
+        assertThat(text).contains(o.method() == OutlookMethod.ETS ? "exponential smoothing" : o.method().code());
     }
 
     /** As the brief rounds forecasts: three significant digits, grouped ({@code 77,700}). */

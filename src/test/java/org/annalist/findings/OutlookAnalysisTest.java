@@ -3,8 +3,10 @@ package org.annalist.findings;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.Random;
+import org.annalist.analysis.Reference;
 import org.annalist.analysis.forecast.Outlook;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Frequency;
@@ -32,7 +34,7 @@ class OutlookAnalysisTest {
         assertThat(f.breaks()).isNotEmpty();
         BreakFinding last = f.breaks().get(f.breaks().size() - 1);
         assertThat(f.outlook().fittedFrom()).isEqualTo(last.period());
-        assertThat(f.outlook().caveats()).anySatisfy(c -> assertThat(c).contains("since the structural change"));
+        assertThat(f.outlook().caveats()).contains(new OutlookCaveat.FittedSinceBreak(last.period()));
         // the forecasts continue the new level, not a mix with the old one
         assertThat(f.outlook().nextYearTotal().mean()).isBetween(0.5 * 12_000, 0.7 * 12_000);
     }
@@ -41,8 +43,8 @@ class OutlookAnalysisTest {
     void aBreakTooRecentForItsOwnFitIsNamedAsACaveat() {
         Findings f = new Analyst().analyse(nights(150, 138, 0.4, 6));
         assertThat(f.breaks()).isNotEmpty();
-        assertThat(f.outlook().fittedFrom()).isEqualTo("2012-01");
-        assertThat(f.outlook().caveats()).anySatisfy(c -> assertThat(c).contains("too recent"));
+        assertThat(f.outlook().fittedFrom()).isEqualTo(Period.month(2012, 1));
+        assertThat(f.outlook().caveats()).hasAtLeastOneElementOfType(OutlookCaveat.BreakTooRecent.class);
     }
 
     /** Data to October 2016: November and December, then 12 months, so all of 2017 is covered. */
@@ -50,7 +52,7 @@ class OutlookAnalysisTest {
     void defaultHorizonIsTheRestOfTheYearPlusTwelvePeriods() {
         Findings f = new Analyst().analyse(nights(58, 1000, 0, 7));
         assertThat(f.outlook().horizon()).isEqualTo(14);
-        assertThat(f.outlook().forecasts().get(0).period()).isEqualTo("2016-11");
+        assertThat(f.outlook().forecasts().get(0).period()).isEqualTo(Period.month(2016, 11));
         assertThat(f.outlook().nextYear()).isEqualTo(2017);
         assertThat(f.outlook().nextYearTotal()).isNotNull();
         assertThat(OutlookAnalysis.restOfYear(Period.quarter(2026, 2))).isEqualTo(2);
@@ -76,6 +78,54 @@ class OutlookAnalysisTest {
         assertThat(OutlookAnalysis.bounds(change, LatestIndicators.Measure.FLOW)).isEqualTo(Outlook.Bounds.NONE);
     }
 
+    /** The outlook's choice, as typed evidence: the back-test's origins and its best two scores. */
+    @Test
+    void theChoiceByBacktestCarriesItsScores() {
+        OutlookFinding o = new Analyst().analyse(nights(72, 1000, 0, 8)).outlook();
+        assertThat(o.backtest()).hasSize(4).extracting(OutlookFinding.Score::method)
+                .containsExactlyInAnyOrder(OutlookMethod.ETS, OutlookMethod.THETA, OutlookMethod.COMBINATION,
+                        OutlookMethod.SEASONAL_NAIVE);
+        OutlookFinding.Score best = o.backtest().get(0);
+        OutlookFinding.Score next = o.backtest().get(1);
+        assertThat(o.method()).isEqualTo(best.method());
+        assertThat(o.backtestPeriods()).isEqualTo(24);
+        assertThat(o.chosenBecause()).isEqualTo(new OutlookFinding.Choice(true, 24, best.mase(),
+                Optional.of(next.method()), next.mase()));
+        String ets = "ETS\\([AM],(N|A|Ad),[NAM]\\)";
+        OutlookFinding.Model model = o.model();
+        assertThat(model.method()).isEqualTo(o.method());
+        assertThat(model.naive()).isEqualTo(OutlookMethod.SEASONAL_NAIVE);
+        switch (o.method()) {
+            case ETS, COMBINATION -> assertThat(model.ets()).hasValueSatisfying(e -> assertThat(e).matches(ets));
+            default -> assertThat(model.ets()).isEmpty();
+        }
+    }
+
+    /** Annual data (Nile, R datasets): the benchmark is the plain naive forecast and is named so. */
+    @Test
+    void theSeasonalNaiveForecastOfAnnualDataIsCalledNaive() {
+        Series nile = Series.builder("Nile", Frequency.ANNUAL).unit("10^8 m^3")
+                .append(Period.year(1871), Reference.dataset("Nile.csv")).snapshot();
+        OutlookFinding o = new Analyst().analyse(nile).outlook();
+        assertThat(o.backtest()).extracting(OutlookFinding.Score::method).contains(OutlookMethod.NAIVE)
+                .doesNotContain(OutlookMethod.SEASONAL_NAIVE);
+        assertThat(o.chosenBecause().nextBest()).isNotEqualTo(Optional.of(OutlookMethod.SEASONAL_NAIVE));
+        // measured: the combination wins the back-test (MASE 0.95; ETS 0.97, Theta 0.98, naive 1.09)
+        assertThat(o.method()).isEqualTo(OutlookMethod.COMBINATION);
+        assertThat(o.model().naive()).isEqualTo(OutlookMethod.NAIVE);
+        assertThat(o.model().ets()).hasValueSatisfying(e -> assertThat(e).matches("ETS\\([AM],(N|A|Ad),N\\)"));
+    }
+
+    @Test
+    void aSeriesTooShortForTheBacktestSaysSo() {
+        OutlookFinding o = new Analyst().analyse(nights(30, 1000, 0, 9)).outlook();
+        assertThat(o.backtest()).isEmpty();
+        assertThat(o.method()).isEqualTo(OutlookMethod.ETS);
+        assertThat(o.model().ets()).hasValueSatisfying(e -> assertThat(e).matches("ETS\\([AM],(N|A|Ad),[NAM]\\)"));
+        assertThat(o.chosenBecause().backtested()).isFalse();
+        assertThat(o.caveats()).contains(new OutlookCaveat.NoBacktest());
+    }
+
     @Test
     void aGapInsideTheFittedSpanIsFilledAndSaidSo() {
         Series full = nights(72, 1000, 0, 8);
@@ -85,6 +135,6 @@ class OutlookAnalysisTest {
                 .snapshot();
         Findings f = new Analyst().analyse(gappy);
         assertThat(f.outlook()).isNotNull();
-        assertThat(f.outlook().caveats()).anySatisfy(c -> assertThat(c).contains("1 missing value was filled"));
+        assertThat(f.outlook().caveats()).contains(new OutlookCaveat.GapsFilled(1));
     }
 }

@@ -1,6 +1,6 @@
 package org.annalist.analysis.forecast;
 
-/** The few dense-matrix operations the forecast-variance recursions need, on row-major arrays. */
+/** The few dense-matrix operations the forecast-variance recursions and the records' copies need, on row-major arrays. */
 final class Matrices {
 
     private Matrices() {
@@ -74,6 +74,15 @@ final class Matrices {
             }
         }
         return k;
+    }
+
+    /** A deep copy: every row copied (rows may differ in length). */
+    static double[][] copy(double[][] a) {
+        double[][] c = new double[a.length][];
+        for (int i = 0; i < a.length; i++) {
+            c[i] = a[i].clone();
+        }
+        return c;
     }
 
     /** The columns of M stacked into one column vector. */

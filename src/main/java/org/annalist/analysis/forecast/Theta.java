@@ -1,20 +1,31 @@
 package org.annalist.analysis.forecast;
 
 import java.util.Arrays;
+import java.util.Optional;
 import org.annalist.analysis.decompose.ClassicalDecomposition;
 import org.annalist.analysis.season.Autocorrelation;
 
 /**
- * The Theta method (Assimakopoulos &amp; Nikolopoulos 2000, <i>International Journal of
- * Forecasting</i> 16, 521–530) in the form Hyndman &amp; Billah (2003, <i>IJF</i> 19, 287–290,
- * §3) showed it to be: simple exponential smoothing with a drift of half the slope of the
- * least-squares line, ŷ_{n+h} = ℓ_n + (b/2)((h − 1) + (1 − (1 − α)ⁿ)/α).
+ * The Theta method [1] in the form Hyndman &amp; Billah [2, §3] showed it to be: simple
+ * exponential smoothing with a drift of half the slope of the least-squares line,
+ * ŷ_{n+h} = ℓ_n + (b/2)((h − 1) + (1 − (1 − α)ⁿ)/α).
  *
  * <p>Seasonal data are first divided by classical multiplicative seasonal indices when the lag-m
  * autocorrelation is significant at 90 %, |r_m| &gt; 1.645 √((1 + 2 Σ_{k&lt;m} r_k²)/n), and the
  * forecasts multiplied back — the procedure of the M3 competition entry as common practice. The
- * smoothing is an ETS(A,N,N) fit, whose class-1 variances σ²(1 + (h − 1)α²) give the intervals,
- * scaled by the seasonal index.
+ * smoothing is an ETS(A,N,N) fit, whose class-1 variances σ²(1 + (h − 1)α²) [3, §6.2] give the
+ * intervals, scaled by the seasonal index.
+ *
+ * <h2>References</h2>
+ * <ol>
+ * <li>Assimakopoulos, V. &amp; Nikolopoulos, K. (2000). The theta model: a decomposition approach to
+ * forecasting. <i>International Journal of Forecasting</i> 16(4), 521–530.
+ * DOI 10.1016/S0169-2070(00)00066-2.</li>
+ * <li>Hyndman, R. J. &amp; Billah, B. (2003). Unmasking the Theta method. <i>International Journal of
+ * Forecasting</i> 19(2), 287–290. DOI 10.1016/S0169-2070(01)00143-1.</li>
+ * <li>Hyndman, R. J., Koehler, A. B., Ord, J. K. &amp; Snyder, R. D. (2008). <i>Forecasting with
+ * Exponential Smoothing: The State Space Approach</i>. Springer. DOI 10.1007/978-3-540-71918-2.</li>
+ * </ol>
  */
 public final class Theta {
 
@@ -25,22 +36,31 @@ public final class Theta {
      */
     public record Fit(double[] seasonalIndex, EtsModel.Fit smoothing, double drift, int n) {
 
+        public Fit {
+            seasonalIndex = seasonalIndex.clone();
+        }
+
+        @Override
+        public double[] seasonalIndex() {
+            return seasonalIndex.clone();
+        }
+
         public double[] forecast(int h) {
             double[] level = smoothing.forecast(h);
             double[] f = new double[h];
             for (int i = 0; i < h; i++) {
-                f[i] = (level[i] + driftTerm(i + 1)) * index(i);
+                f[i] = (level[i] + driftTerm(i + 1)) * index(i); // [2] §3
             }
             return f;
         }
 
-        public EtsModel.Prediction predict(int h) {
-            EtsModel.Prediction ses = smoothing.predict(h);
+        public Prediction predict(int h) {
+            double[] sesVariance = smoothing.predict(h).variance();
             double[] variance = new double[h];
             for (int i = 0; i < h; i++) {
-                variance[i] = ses.variance()[i] * index(i) * index(i);
+                variance[i] = sesVariance[i] * index(i) * index(i);
             }
-            return new EtsModel.Prediction(forecast(h), variance);
+            return new Prediction(forecast(h), variance);
         }
 
         /** Sample paths: those of the smoothing, plus the drift, times the seasonal index. */
@@ -54,13 +74,14 @@ public final class Theta {
             return paths;
         }
 
+        /** Whether the method worked on seasonally adjusted values. */
         public boolean deseasonalised() {
             return Arrays.stream(seasonalIndex).anyMatch(v -> v != 1);
         }
 
         private double driftTerm(int h) {
             double alpha = smoothing.parameters().alpha();
-            return drift * ((h - 1) + (1 - Math.pow(1 - alpha, n)) / alpha);
+            return drift * ((h - 1) + (1 - Math.pow(1 - alpha, n)) / alpha); // [2] §3
         }
 
         private double index(int step) {
@@ -68,16 +89,19 @@ public final class Theta {
         }
     }
 
+    /** The standard normal 95 % quantile: |r_m| above it times the standard error is significant at 90 % (two-sided). */
     private static final double SEASONAL_TEST_QUANTILE = 1.645;
+    /** The simple smoothing needs a few values to be fitted at all. */
+    private static final int MIN_VALUES = 4;
 
     private Theta() {
     }
 
-    /** @return null when the simple smoothing cannot be fitted (fewer than four values) */
-    public static Fit fit(double[] y, int period) {
+    /** @return empty when the simple smoothing cannot be fitted (fewer than {@value #MIN_VALUES} values, or no finite likelihood) */
+    public static Optional<Fit> fit(double[] y, int period) {
         int n = y.length;
-        if (n < 4) {
-            return null;
+        if (n < MIN_VALUES) {
+            return Optional.empty();
         }
         double[] index = new double[Math.max(1, period)];
         Arrays.fill(index, 1);
@@ -90,12 +114,11 @@ public final class Theta {
                 adjusted[t] = y[t] / index[t % period];
             }
         }
-        EtsModel.Fit ses = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1)
-                .fit(adjusted);
-        if (ses == null) {
-            return null;
-        }
-        return new Fit(index, ses, StartLine.through(adjusted, n).slope() / 2, n);
+        double[] seasonalIndex = index;
+        double[] values = adjusted;
+        return new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1)
+                .fit(values)
+                .map(ses -> new Fit(seasonalIndex, ses, StartLine.through(values, n).slope() / 2, n)); // [2] §3: b/2
     }
 
     /** Positive data, more than two seasons, and a significant lag-m autocorrelation (as R's thetaf, from memory). */

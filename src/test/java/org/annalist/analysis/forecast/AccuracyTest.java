@@ -17,7 +17,7 @@ class AccuracyTest {
     void seasonalNaiveMaseAndSmapeMatchR(String dataset) {
         AgainstR.HoldOut split = AgainstR.HoldOut.of(dataset);
         Accuracy.Result r = Accuracy.of(split.training(), split.test(),
-                SeasonalNaive.forecast(split.training(), split.period(), split.horizon()), split.period());
+                SeasonalNaive.forecast(split.training(), split.period(), split.horizon()), split.period()).orElseThrow();
         assertThat(r.mase()).isCloseTo(split.rValue("snaive_MASE"), within(1e-9));
         assertThat(r.smape()).isCloseTo(split.rValue("snaive_sMAPE"), within(1e-9));
     }

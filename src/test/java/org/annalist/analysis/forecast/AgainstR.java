@@ -30,7 +30,7 @@ final class AgainstR {
         double rs = 0;
         for (String dataset : HOLD_OUT_DATASETS) {
             HoldOut split = HoldOut.of(dataset);
-            ours += Accuracy.of(split.training(), split.test(), forecaster.apply(split), split.period()).mase();
+            ours += Accuracy.of(split.training(), split.test(), forecaster.apply(split), split.period()).orElseThrow().mase();
             rs += split.rValue("ets_MASE");
         }
         return new double[] {ours / HOLD_OUT_DATASETS.length, rs / HOLD_OUT_DATASETS.length};

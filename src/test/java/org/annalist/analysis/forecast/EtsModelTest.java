@@ -53,7 +53,7 @@ class EtsModelTest {
         EtsModel.Fit fit = fitWithRsParameters(key, dataset, period, false);
         Reference expected = Reference.csv(forecastFile);
         double[] mean = expected.column("mean");
-        EtsModel.Prediction prediction = fit.predict(mean.length);
+        Prediction prediction = fit.predict(mean.length);
         double[][] eighty = prediction.interval(0.80);
         double[][] ninetyFive = prediction.interval(0.95);
         double[] point = fit.forecast(mean.length);
@@ -80,7 +80,7 @@ class EtsModelTest {
     void predictionOfDampedModelMatchesSimulationOfTheModel() throws IOException {
         EtsModel.Fit fit = fitWithRsParameters("AirPassengers_auto", "AirPassengers", 12, true);
         int horizon = 24;
-        EtsModel.Prediction prediction = fit.predict(horizon);
+        Prediction prediction = fit.predict(horizon);
         assertThat(prediction.mean()[0]).isCloseTo(fit.forecast(1)[0], within(1e-9));
 
         EtsModel.Parameters p = fit.parameters();
@@ -130,7 +130,7 @@ class EtsModelTest {
         double rAicc = reference(key).get("AICc").asDouble();
         EtsModel model = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, damped,
                 EtsModel.Season.MULTIPLICATIVE, period);
-        EtsModel.Fit fit = model.fit(Reference.dataset(dataset + ".csv"));
+        EtsModel.Fit fit = model.fit(Reference.dataset(dataset + ".csv")).orElseThrow();
         assertThat(fit.aicc()).as("AICc: ours against R's %s", rAicc).isLessThanOrEqualTo(rAicc + 0.005 * Math.abs(rAicc));
         if (!sameOptimum) {
             assertThat(fit.aicc()).as("a strictly better optimum than R's").isLessThan(rAicc - 1);
@@ -152,8 +152,8 @@ class EtsModelTest {
     void simulatedPathsReproduceTheAnalyticForecastDistribution() throws IOException {
         EtsModel.Fit fit = fitWithRsParameters("AirPassengers_MAM", "AirPassengers", 12, false);
         int horizon = 18;
-        double[][] paths = fit.paths(Outlook.standardNormals(20_000, horizon, 7));
-        EtsModel.Prediction prediction = fit.predict(horizon);
+        double[][] paths = fit.paths(Shocks.standardNormals(20_000, horizon, 7));
+        Prediction prediction = fit.predict(horizon);
         for (int h = 0; h < horizon; h++) {
             double sum = 0;
             double sumSq = 0;
@@ -178,8 +178,8 @@ class EtsModelTest {
             y[t] = 100 + 5 * random.nextGaussian();
         }
         EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1);
-        EtsModel.Fit fit = model.filter(y, new EtsModel.Parameters(0.3, 0, 0, 1, new double[] {100}));
-        EtsModel.Prediction prediction = fit.predict(5);
+        EtsModel.Fit fit = model.filter(y, new EtsModel.Parameters(0.3, 0, 0, 1, new double[] {100})).orElseThrow();
+        Prediction prediction = fit.predict(5);
         for (int h = 1; h <= 5; h++) {
             assertThat(prediction.variance()[h - 1]).isCloseTo(fit.sigma2() * (1 + (h - 1) * 0.09), within(1e-9));
             assertThat(prediction.mean()[h - 1]).isEqualTo(fit.state()[0]);
@@ -195,13 +195,34 @@ class EtsModelTest {
                 for (int trend = 0; trend < 3; trend++) {
                     EtsModel model = new EtsModel(error, trend == 0 ? EtsModel.Trend.NONE : EtsModel.Trend.ADDITIVE,
                             trend == 2, season, season == EtsModel.Season.NONE ? 1 : 12);
-                    double[] initial = model.initialStates(y);
+                    double[] initial = EtsEstimation.initialStates(model, y);
                     EtsModel.Parameters p = new EtsModel.Parameters(0.4, 0.04, 0.1, 0.95, initial);
-                    EtsModel.Fit fit = model.filter(y, p);
-                    assertThat(model.criterion(y, p)).as(model.label()).isCloseTo(fit.lik(), within(1e-9 * Math.abs(fit.lik())));
+                    EtsModel.Fit fit = model.filter(y, p).orElseThrow();
+                    assertThat(EtsFilter.criterion(model, y, p)).as(model.label()).isCloseTo(fit.lik(), within(1e-9 * Math.abs(fit.lik())));
                 }
             }
         }
+    }
+
+    /** A level that makes the one-step forecast infinite: the filter gives no fit, and says so by an empty result. */
+    @Test
+    void filterGivesNoFitWhenAForecastIsNotFinite() {
+        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1);
+        double[] y = {1, 2, 3, 4, 5};
+        assertThat(model.filter(y, new EtsModel.Parameters(0.3, 0, 0, 1, new double[] {Double.POSITIVE_INFINITY})))
+                .isEmpty();
+        assertThat(model.filter(y, new EtsModel.Parameters(0.3, 0, 0, 1, new double[] {3}))).isPresent();
+    }
+
+    /** A constant series has no finite likelihood (Σe² = 0): no fit, neither for ETS nor for Theta. */
+    @Test
+    void fitGivesNoFitWithoutAFiniteLikelihood() {
+        double[] constant = new double[20];
+        Arrays.fill(constant, 5);
+        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1);
+        assertThat(model.fit(constant)).isEmpty();
+        assertThat(Theta.fit(constant, 1)).isEmpty();
+        assertThat(Theta.fit(new double[] {1, 2, 3}, 1)).as("fewer than four values").isEmpty();
     }
 
     private JsonNode reference(String key) throws IOException {
@@ -224,6 +245,6 @@ class EtsModelTest {
                 EtsModel.Season.MULTIPLICATIVE, period);
         return model.filter(Reference.dataset(dataset + ".csv"), new EtsModel.Parameters(
                 par.get("alpha").asDouble(), par.get("beta").asDouble(), par.get("gamma").asDouble(),
-                par.has("phi") ? par.get("phi").asDouble() : 1, initial));
+                par.has("phi") ? par.get("phi").asDouble() : 1, initial)).orElseThrow();
     }
 }

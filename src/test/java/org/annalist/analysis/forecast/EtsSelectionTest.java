@@ -49,7 +49,7 @@ class EtsSelectionTest {
         AgainstR.relative(best.aicc(), 1256.55829416009, 0.005, "AICc");
         Reference r = Reference.csv("ets_UKgas_auto_forecast.csv");
         double[] mean = r.column("mean");
-        EtsModel.Prediction ours = best.predict(mean.length);
+        Prediction ours = best.predict(mean.length);
         double[][] ninetyFive = ours.interval(0.95);
         for (int h = 0; h < mean.length; h++) {
             AgainstR.relative(ours.mean()[h], mean[h], 0.01, "mean " + (h + 1));

@@ -1,0 +1,25 @@
+package org.annalist.findings;
+
+import com.fasterxml.jackson.annotation.JsonValue;
+
+/** A forecasting method of the outlook, by its usual name. */
+public enum OutlookMethod {
+    ETS("ETS"),
+    THETA("Theta"),
+    COMBINATION("combination"),
+    SEASONAL_NAIVE("seasonal naive"),
+    /** The seasonal naive forecast of data without a season: every period as the latest value. */
+    NAIVE("naive");
+
+    private final String code;
+
+    OutlookMethod(String code) {
+        this.code = code;
+    }
+
+    /** The findings JSON's code: the method's usual name. */
+    @JsonValue
+    public String code() {
+        return code;
+    }
+}
