@@ -8,6 +8,7 @@ import org.annalist.brief.SeriesCheck;
 import org.annalist.findings.FindingsJson;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.ReadResult;
+import org.annalist.ingest.SeriesFileReader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -35,7 +36,7 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        ReadResult read = input.read();
+        ReadResult read = new SeriesFileReader(input.readOptions()).read(input.file);
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
             out.print(FindingsJson.write(SeriesCheck.of(read)));
@@ -43,7 +44,7 @@ final class CheckCommand implements Callable<Integer> {
             printText(read, out);
         }
         out.flush();
-        return Main.EXIT_OK;
+        return ExitCodes.DONE;
     }
 
     private static void printText(ReadResult read, PrintWriter out) {
