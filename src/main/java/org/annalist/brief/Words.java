@@ -39,6 +39,7 @@ public record Words<T>(Map<String, T> values, boolean auto) {
     public static final Words<DateOrder> DATE_ORDER = new Words<>(ordered(
             AUTO, DateOrder.AUTO, "day-first", DateOrder.DAY_FIRST, "month-first", DateOrder.MONTH_FIRST), false);
 
+    /** The decimal mark of the numbers; "auto" infers it from them. */
     public static final Words<DecimalMark> DECIMAL_MARK = withAuto(ordered(
             "point", DecimalMark.POINT, "comma", DecimalMark.COMMA));
 
@@ -50,6 +51,7 @@ public record Words<T>(Map<String, T> values, boolean auto) {
     public static final Words<Aggregation.Method> AGGREGATE_BY = new Words<>(ordered(
             "sum", Aggregation.Method.SUM, "mean", Aggregation.Method.MEAN), false);
 
+    /** The brief's paper size. */
     public static final Words<Masthead.Paper> PAPER = new Words<>(ordered(
             "a4", Masthead.Paper.A4, "letter", Masthead.Paper.LETTER), false);
 

@@ -42,30 +42,35 @@ final class Converters {
         }
     }
 
+    /** {@code --form}. */
     static final class Form extends WordsConverter<ModelForm.Form> {
         Form() {
             super(Words.FORM);
         }
     }
 
+    /** {@code --measure}. */
     static final class Measure extends WordsConverter<LatestIndicators.Measure> {
         Measure() {
             super(Words.MEASURE);
         }
     }
 
+    /** {@code --decimal-mark}. */
     static final class Mark extends WordsConverter<DecimalMark> {
         Mark() {
             super(Words.DECIMAL_MARK);
         }
     }
 
+    /** {@code --aggregate}. */
     static final class Aggregate extends WordsConverter<Frequency> {
         Aggregate() {
             super(Words.AGGREGATE);
         }
     }
 
+    /** {@code --paper}. */
     static final class Paper extends WordsConverter<Masthead.Paper> {
         Paper() {
             super(Words.PAPER);
