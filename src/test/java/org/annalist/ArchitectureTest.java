@@ -3,9 +3,11 @@ package org.annalist;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -15,19 +17,21 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 
 /**
- * The pipeline runs one way: series → ingest/analysis → findings → chart/narrative → render →
- * brief → cli. A class may import only from the packages its stage is allowed to use.
+ * The pipeline runs one way (DEVELOPERS.md, "The map"): series → ingest / analysis → findings →
+ * chart / narrative → render → brief → cli. A class may use only the stages its own stage may use,
+ * the analysis methods use one another in one order, and each third-party library stays in the
+ * stage it serves. The checker is tried on planted violations too, so that it cannot pass by
+ * seeing nothing.
  */
 class ArchitectureTest {
 
     private static final Path SOURCES = Path.of("src/main/java/org/annalist");
     private static final Pattern PACKAGE = Pattern.compile("^package org\\.annalist\\.([a-z.]+);", Pattern.MULTILINE);
-    private static final Pattern IMPORT = Pattern.compile("^import (?:static )?org\\.annalist\\.([a-z]+(?:\\.[a-z]+)*)\\.[A-Z]",
-            Pattern.MULTILINE);
-    private static final Pattern QUALIFIED_USE = Pattern.compile("\\borg\\.annalist\\.([a-z]+)(?:\\.[a-z]+)*\\.[A-Z]");
+    private static final Pattern OWN_USE = Pattern.compile("\\borg\\.annalist\\.([a-z]+(?:\\.[a-z]+)*)\\.([A-Z]\\w*)");
+    private static final Pattern IMPORT = Pattern.compile("^import (?:static )?([a-z][\\w.]*)\\.[A-Z]", Pattern.MULTILINE);
 
-    /** Top-level stage → the stages it may use (itself always allowed). From the design brief's package table. */
-    private static final Map<String, Set<String>> ALLOWED = Map.of(
+    /** Stage → the stages it may use (itself always). */
+    static final Map<String, Set<String>> STAGES = Map.of(
             "series", Set.of(),
             "ingest", Set.of("series"),
             "analysis", Set.of("series"),
@@ -35,30 +39,60 @@ class ArchitectureTest {
             "chart", Set.of("findings", "series"),
             "narrative", Set.of("findings", "series"),
             "render", Set.of("chart"),
-            "brief", Set.of("series", "ingest", "analysis", "findings", "chart", "narrative", "render"),
-            "cli", Set.of("series", "ingest", "analysis", "findings", "chart", "narrative", "render", "brief"));
+            "brief", Set.of("series", "ingest", "findings", "chart", "narrative", "render"),
+            // commands run every job through brief; they name the value types the job is made of and
+            // the problems they turn into exit codes, but call no analysis, chart or renderer
+            "cli", Set.of("brief", "series", "ingest", "findings", "narrative"));
+
+    /** Where a stage may use only some classes of another: render draws the chart's figures, nothing else of it. */
+    static final Map<String, Map<String, Set<String>>> ONLY = Map.of(
+            "render", Map.of("chart", Set.of("Figure")));
+
+    /**
+     * The analysis methods, in the order in which they may use each other: each package may use the
+     * ones before it (the shared root first), never one after it, so the methods form no cycle.
+     */
+    static final List<String> ANALYSIS_ORDER = List.of("analysis", "analysis.decompose", "analysis.season",
+            "analysis.cycle", "analysis.trend", "analysis.anomaly", "analysis.calendar", "analysis.indicators",
+            "analysis.breaks", "analysis.forecast");
+
+    /** Third-party library (package prefix) → the stages it belongs to. */
+    static final Map<String, Set<String>> LIBRARIES = new LinkedHashMap<>(Map.of(
+            "org.apache.commons.math3", Set.of("analysis"),
+            "org.apache.commons.csv", Set.of("ingest"),
+            "com.fasterxml.jackson", Set.of("findings", "brief"),
+            "freemarker", Set.of("narrative"),
+            "org.jfree", Set.of("chart", "render"),
+            "com.openhtmltopdf", Set.of("render"),
+            "org.apache.pdfbox", Set.of("render"),
+            "picocli", Set.of("cli"),
+            "me.tongfei", Set.of("cli")));
 
     @Test
-    void noImportPointsBackwardsInThePipeline() throws IOException {
-        List<String> violations = new ArrayList<>();
-        try (Stream<Path> files = Files.walk(SOURCES)) {
-            for (Path file : files.filter(p -> p.toString().endsWith(".java")).toList()) {
-                String source = Files.readString(file);
-                Matcher pkg = PACKAGE.matcher(source);
-                assertThat(pkg.find()).as("package line in %s", file).isTrue();
-                String stage = pkg.group(1).split("\\.")[0];
-                assertThat(ALLOWED).as("a known stage for %s", file).containsKey(stage);
-                for (Matcher m : List.of(IMPORT.matcher(source), QUALIFIED_USE.matcher(source))) {
-                    while (m.find()) {
-                        String used = m.group(1).split("\\.")[0];
-                        if (!used.equals(stage) && !ALLOWED.get(stage).contains(used)) {
-                            violations.add(file + ": " + stage + " uses " + used);
-                        }
-                    }
-                }
-            }
-        }
-        assertThat(violations).isEmpty();
+    void everyUseGoesForwardInThePipeline() {
+        assertThat(violations(mainSources())).isEmpty();
+    }
+
+    @Test
+    void theCheckerFindsAPlantedBackwardsImport() {
+        Map<String, String> planted = Map.of(
+                "findings/Planted.java", "package org.annalist.findings;\nimport org.annalist.narrative.Terms;\n",
+                "cli/Planted.java", "package org.annalist.cli;\nimport org.annalist.analysis.decompose.Stl;\n",
+                "render/Planted.java", "package org.annalist.render;\nimport org.annalist.chart.ChartStyle;\n",
+                "analysis/decompose/Planted.java",
+                "package org.annalist.analysis.decompose;\nimport org.annalist.analysis.forecast.Outlook;\n",
+                "analysis/Planted.java", "package org.annalist.analysis;\nclass P { org.annalist.analysis.trend.SenSlope s; }\n",
+                "narrative/Planted.java", "package org.annalist.narrative;\nimport org.jfree.chart.JFreeChart;\n",
+                "chart/Planted.java", "package org.annalist.chart;\nimport com.fasterxml.jackson.databind.ObjectMapper;\n");
+        List<String> found = violations(planted);
+        assertThat(found).hasSize(planted.size());
+        assertThat(found).anySatisfy(v -> assertThat(v).contains("findings uses narrative"))
+                .anySatisfy(v -> assertThat(v).contains("cli uses analysis"))
+                .anySatisfy(v -> assertThat(v).contains("render uses chart.ChartStyle"))
+                .anySatisfy(v -> assertThat(v).contains("analysis.decompose uses analysis.forecast"))
+                .anySatisfy(v -> assertThat(v).contains("analysis uses analysis.trend"))
+                .anySatisfy(v -> assertThat(v).contains("narrative uses org.jfree"))
+                .anySatisfy(v -> assertThat(v).contains("chart uses com.fasterxml.jackson"));
     }
 
     @Test
@@ -74,5 +108,67 @@ class ArchitectureTest {
             }
         }
         assertThat(violations).isEmpty();
+    }
+
+    /** @param sources file name → its text */
+    static List<String> violations(Map<String, String> sources) {
+        List<String> violations = new ArrayList<>();
+        sources.forEach((file, source) -> {
+            Matcher pkg = PACKAGE.matcher(source);
+            if (!pkg.find()) {
+                violations.add(file + ": no package line");
+                return;
+            }
+            String pack = pkg.group(1);
+            String stage = pack.split("\\.")[0];
+            if (!STAGES.containsKey(stage)) {
+                violations.add(file + ": unknown stage " + stage);
+                return;
+            }
+            Matcher own = OWN_USE.matcher(source);
+            while (own.find()) {
+                String used = own.group(1);
+                String usedStage = used.split("\\.")[0];
+                if (usedStage.equals(stage)) {
+                    if (stage.equals("analysis") && analysisOrderBroken(pack, used)) {
+                        violations.add(file + ": " + pack + " uses " + used + " (" + String.join(" < ", ANALYSIS_ORDER)
+                                + ")");
+                    }
+                } else if (!STAGES.get(stage).contains(usedStage)) {
+                    violations.add(file + ": " + stage + " uses " + usedStage);
+                } else if (ONLY.getOrDefault(stage, Map.of()).containsKey(usedStage)
+                        && !ONLY.get(stage).get(usedStage).contains(own.group(2))) {
+                    violations.add(file + ": " + stage + " uses " + usedStage + "." + own.group(2));
+                }
+            }
+            Matcher imported = IMPORT.matcher(source);
+            while (imported.find()) {
+                String name = imported.group(1);
+                LIBRARIES.forEach((library, stages) -> {
+                    if ((name.equals(library) || name.startsWith(library + ".")) && !stages.contains(stage)) {
+                        violations.add(file + ": " + stage + " uses " + library);
+                    }
+                });
+            }
+        });
+        return violations.stream().distinct().toList();
+    }
+
+    private static boolean analysisOrderBroken(String user, String used) {
+        int from = ANALYSIS_ORDER.indexOf(user);
+        int to = ANALYSIS_ORDER.indexOf(used);
+        return from < 0 || to < 0 || to > from;
+    }
+
+    private static Map<String, String> mainSources() {
+        Map<String, String> sources = new LinkedHashMap<>();
+        try (Stream<Path> files = Files.walk(SOURCES)) {
+            for (Path file : files.filter(p -> p.toString().endsWith(".java")).sorted().toList()) {
+                sources.put(SOURCES.relativize(file).toString(), Files.readString(file));
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return sources;
     }
 }

@@ -41,4 +41,14 @@ public final class GenerationTime {
         }
         return now;
     }
+
+    /**
+     * The time given, else {@code SOURCE_DATE_EPOCH} from this process's environment, else now: for
+     * a brief whose time was not resolved when it was asked for (a spec without {@code generated_at}).
+     *
+     * @throws IllegalArgumentException when {@code SOURCE_DATE_EPOCH} is not a number of seconds
+     */
+    public static Instant orDefault(Optional<Instant> given) {
+        return given.orElseGet(() -> resolve(Optional.empty(), System.getenv(), Instant.now()));
+    }
 }

@@ -4,16 +4,14 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 import org.annalist.chart.Figure;
+import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Decomposition;
 import org.annalist.findings.Findings;
-import org.annalist.findings.FindingsJson;
-import org.annalist.narrative.JsonTerms;
 import org.annalist.render.AtomicFiles;
 import org.annalist.render.SvgCharts;
 import org.annalist.series.Series;
@@ -27,6 +25,7 @@ import org.annalist.series.Series;
  */
 public final class SideOutputs {
 
+    /** What can be written beside a brief, by the names a spec's {@code side_outputs} gives them. */
     public enum Kind { FINDINGS, COMPONENTS, CHARTS }
 
     private static final int CHART_HEIGHT = 265;
@@ -34,11 +33,7 @@ public final class SideOutputs {
     private SideOutputs() {
     }
 
-    static Set<Kind> none() {
-        return EnumSet.noneOf(Kind.class);
-    }
-
-    static void write(BriefPipeline.Brief brief, Series series, Set<Kind> kinds) {
+    static void write(BriefWriter.Brief brief, Series series, Set<Kind> kinds) {
         String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
         Path folder = brief.file().toAbsolutePath().getParent();
         writeData(folder, stem, brief.findings(), series, kinds);
@@ -46,14 +41,15 @@ public final class SideOutputs {
     }
 
     /** For a combined brief: its small multiples, and per series the data files and the overview chart. */
-    static void write(BriefPipeline.MultiBrief brief, List<Series> series, Set<Kind> kinds) {
+    static void write(BriefWriter.CombinedBrief brief, List<Series> series, Set<Kind> kinds) {
         String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
         Path folder = brief.file().toAbsolutePath().getParent();
         writeCharts(folder, stem, List.of(brief.multiples()), kinds);
         for (int i = 0; i < series.size(); i++) {
-            String seriesStem = stem + "-" + BriefSpec.fileSafe(series.get(i).name());
+            String seriesStem = stem + "-" + OutputName.fileSafe(series.get(i).name());
             writeData(folder, seriesStem, brief.findings().get(i), series.get(i), kinds);
-            writeCharts(folder, seriesStem, List.of(new Figure("overview", brief.overviews().get(i).chart())), kinds);
+            writeCharts(folder, seriesStem, List.of(new Figure(FigurePlan.Chart.OVERVIEW, brief.overviews().get(i).chart())),
+                    kinds);
         }
     }
 
@@ -62,7 +58,7 @@ public final class SideOutputs {
         try {
             if (kinds.contains(Kind.FINDINGS)) {
                 AtomicFiles.write(folder.resolve(stem + ".findings.json"),
-                        FindingsJson.write(findings, JsonTerms.ENGLISH).getBytes(StandardCharsets.UTF_8));
+                        Reports.json(findings).getBytes(StandardCharsets.UTF_8));
             }
             if (kinds.contains(Kind.COMPONENTS)) {
                 AtomicFiles.write(folder.resolve(stem + ".components.csv"),

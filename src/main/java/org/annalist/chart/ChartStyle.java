@@ -17,8 +17,7 @@ import org.jfree.chart.text.TextUtils;
  */
 public final class ChartStyle {
 
-    /** Must equal the family the PDF renderer registers, so chart text is embedded as real text. */
-    public static final String FONT_FAMILY = "DejaVu Sans";
+    private static final String FONT_FAMILY = Figure.FONT_FAMILY;
 
     /** Observed values: a dark slate that prints near black. */
     public static final Color INK = new Color(0x26, 0x32, 0x3F);

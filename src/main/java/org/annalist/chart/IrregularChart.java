@@ -4,6 +4,7 @@ import org.annalist.findings.Decomposition;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.series.Series;
+import org.annalist.findings.FigurePlan;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.DateAxis;
@@ -62,6 +63,6 @@ public final class IrregularChart {
                     OverviewChart.midpointMillis(series.period(o.index())), y, y >= 0,
                     OverviewChart.across(series, o.index())));
         }
-        return new Figure("irregular", chart);
+        return new Figure(FigurePlan.Chart.IRREGULAR, chart);
     }
 }

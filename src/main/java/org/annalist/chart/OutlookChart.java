@@ -8,6 +8,7 @@ import java.util.Arrays;
 import org.annalist.findings.OutlookFinding;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
+import org.annalist.findings.FigurePlan;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;
@@ -125,7 +126,7 @@ public final class OutlookChart {
         legend.setPosition(RectangleEdge.TOP);
         legend.setFrame(BlockBorder.NONE);
         legend.setBackgroundPaint(Color.WHITE);
-        return new Figure("outlook", chart);
+        return new Figure(FigurePlan.Chart.OUTLOOK, chart);
     }
 
     private static LegendItem lineItem(String label, Color colour, java.awt.Stroke stroke) {

@@ -11,6 +11,7 @@ import org.annalist.findings.Side;
 import org.annalist.findings.Smoothing;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
+import org.annalist.findings.FigurePlan;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.DateAxis;
@@ -95,7 +96,7 @@ public final class OverviewChart {
         legend.setFrame(BlockBorder.NONE);
         legend.setBackgroundPaint(Color.WHITE);
 
-        return new Figure("overview", chart);
+        return new Figure(FigurePlan.Chart.OVERVIEW, chart);
     }
 
     /** Each break: its 95 % interval shaded, its first period as a dashed line. */

@@ -5,6 +5,7 @@ import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
 import java.util.Locale;
 import org.annalist.findings.SeasonalityFinding;
+import org.annalist.findings.FigurePlan;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.CategoryAxis;
@@ -59,6 +60,6 @@ public final class SeasonalProfileChart {
         bars.setDefaultItemLabelPaint(ChartStyle.INK);
         bars.setDefaultPositiveItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE12, TextAnchor.BOTTOM_CENTER));
         bars.setDefaultNegativeItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE6, TextAnchor.TOP_CENTER));
-        return new Figure("profile", chart);
+        return new Figure(FigurePlan.Chart.PROFILE, chart);
     }
 }

@@ -3,6 +3,7 @@ package org.annalist.chart;
 import java.util.List;
 import org.annalist.findings.Findings;
 import org.annalist.series.Series;
+import org.annalist.findings.FigurePlan;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
@@ -64,6 +65,6 @@ public final class SmallMultiplesChart {
         combined.getDomainAxis().setTickLabelFont(ChartStyle.smallFont());
         JFreeChart chart = new JFreeChart(null, JFreeChart.DEFAULT_TITLE_FONT, combined, false);
         chart.setBackgroundPaint(java.awt.Color.WHITE);
-        return new Figure("multiples", chart);
+        return new Figure(FigurePlan.Chart.MULTIPLES, chart);
     }
 }

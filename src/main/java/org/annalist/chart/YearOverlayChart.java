@@ -6,6 +6,7 @@ import java.awt.geom.Ellipse2D;
 import java.util.Map;
 import java.util.TreeMap;
 import org.annalist.series.Series;
+import org.annalist.findings.FigurePlan;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.SymbolAxis;
@@ -81,6 +82,6 @@ public final class YearOverlayChart {
         LegendTitle legend = chart.getLegend();
         legend.setPosition(RectangleEdge.TOP);
         legend.setFrame(BlockBorder.NONE);
-        return new Figure("years", chart);
+        return new Figure(FigurePlan.Chart.YEARS, chart);
     }
 }

@@ -1,18 +1,16 @@
 package org.annalist.cli;
 
 import java.io.PrintWriter;
-import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.annalist.findings.Analyst;
-import org.annalist.findings.DerivedSeries;
+import org.annalist.brief.BriefPipeline;
+import org.annalist.brief.Job;
+import org.annalist.brief.SelectionProblem;
+import org.annalist.brief.SeriesChoice;
 import org.annalist.findings.Findings;
-import org.annalist.findings.FindingsJson;
-import org.annalist.narrative.AnalystNotes;
-import org.annalist.narrative.JsonTerms;
-import org.annalist.ingest.ReadResult;
-import org.annalist.series.Series;
+import org.annalist.brief.Reports;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -48,44 +46,28 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Mixin
     DebugOption debug;
 
-    /** The series up to {@code --period}, when given. */
-    private Series cut(Series s, ReadResult read) {
-        if (period == null) {
-            return s;
-        }
-        return s.upTo(s.periodLabelled(period).orElseThrow(() -> new UserInputException(read.file() + ": series '"
-                + s.name() + "' has no period " + period + "; expected a period from " + s.start() + " to " + s.end())));
+    /** The options as the pipeline's job: without {@code --series}, every series and every ratio they offer. */
+    Job job() {
+        return new Job(input.input(), new SeriesChoice(series == null ? List.of() : List.of(series),
+                SeriesChoice.WhenUnnamed.EVERY_SERIES_AND_RATIOS, Optional.ofNullable(period), Map.of()),
+                analysis.choices(), Optional.empty());
     }
 
     @Override
     public Integer call() {
-        ReadResult read = input.read();
-        Analyst analyst = analysis.analyst();
-        List<DerivedSeries.Derived> derived = DerivedSeries.of(read.series());
-        List<Findings> findings = new ArrayList<>();
-        Optional<DerivedSeries.Derived> namedDerived = series == null || read.find(series).isPresent() ? Optional.empty()
-                : derived.stream().filter(d -> d.series().name().equalsIgnoreCase(series)).findFirst();
-        if (namedDerived.isPresent()) {
-            DerivedSeries.Derived d = namedDerived.get();
-            findings.add(analyst.analyse(new DerivedSeries.Derived(cut(d.series(), read), d.parts())));
-        } else {
-            List<Series> chosen = series == null ? read.series() : List.of(read.require(series));
-            for (Series s : chosen) {
-                findings.add(analyst.analyse(cut(analysis.prepare(s), read)));
-            }
-            if (series == null) {
-                for (DerivedSeries.Derived d : derived) {
-                    findings.add(analyst.analyse(new DerivedSeries.Derived(cut(d.series(), read), d.parts())));
-                }
-            }
+        List<Findings> findings;
+        try {
+            findings = new BriefPipeline().findings(job());
+        } catch (SelectionProblem problem) {
+            throw SelectionWords.forAnalyze(problem);
         }
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
-            out.print(FindingsJson.write(findings.size() == 1 ? findings.get(0) : findings, JsonTerms.ENGLISH));
+            out.print(Reports.json(findings.size() == 1 ? findings.get(0) : findings));
         } else {
-            out.print(AnalystNotes.all(findings));
+            out.print(Reports.notes(findings));
         }
         out.flush();
-        return Main.EXIT_OK;
+        return ExitCodes.DONE;
     }
 }

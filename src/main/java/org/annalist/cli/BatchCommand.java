@@ -6,7 +6,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.annalist.brief.Batch;
+import org.annalist.brief.BatchPlan;
+import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.BriefSpec;
+import org.annalist.brief.FolderSpec;
+import org.annalist.brief.SpecReader;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
 import me.tongfei.progressbar.ProgressBarStyle;
@@ -20,15 +24,12 @@ import picocli.CommandLine.Spec;
 /**
  * {@code annalist batch SPEC.yaml|FOLDER}: every brief of a spec (or of a folder's CSV files),
  * with a progress bar on an interactive terminal and a plain line per brief otherwise, on a pool sized to the cores; a line per
- * brief as it finishes, then a summary. Exit 0 when all were made, {@value #EXIT_SOME_FAILED} when
- * some failed (the others are written), 2 when the spec itself is wrong.
+ * brief as it finishes, then a summary. Exit 0 when all were made, {@value ExitCodes#SOME_FAILED}
+ * when some failed (the others are written), 2 when the spec itself is wrong.
  */
 @Command(name = "batch", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Make every brief a spec file describes, in parallel; one bad brief does not stop the others.")
 final class BatchCommand implements Callable<Integer> {
-
-    /** Some briefs failed, the rest were made. */
-    static final int EXIT_SOME_FAILED = 3;
 
     @Spec
     CommandSpec spec;
@@ -52,13 +53,13 @@ final class BatchCommand implements Callable<Integer> {
         if (jobs < 1) {
             throw new UserInputException("--jobs: expected 1 or more, got " + jobs);
         }
-        BriefSpec briefs = java.nio.file.Files.isDirectory(specFile) ? BriefSpec.forFolder(specFile)
-                : BriefSpec.read(specFile);
+        BriefSpec briefs = java.nio.file.Files.isDirectory(specFile) ? FolderSpec.of(specFile)
+                : SpecReader.read(specFile);
         if (outFolder != null) {
             briefs = briefs.withOutputFolder(outFolder);
         }
         PrintWriter out = spec.commandLine().getOut();
-        Batch.Plan plan = Batch.plan(briefs);
+        BatchPlan plan = BatchPlan.of(briefs, new BriefPipeline());
         List<Batch.Outcome> outcomes;
         if (System.console() != null) {
             // an interactive terminal: a bar that redraws in place; the summary below names every brief
@@ -83,6 +84,6 @@ final class BatchCommand implements Callable<Integer> {
                     + (o.done() ? o.file().get() : o.failure().orElse("")));
         }
         out.flush();
-        return failed == 0 ? Main.EXIT_OK : EXIT_SOME_FAILED;
+        return failed == 0 ? ExitCodes.DONE : ExitCodes.SOME_FAILED;
     }
 }

@@ -4,9 +4,12 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.annalist.brief.BriefOutput;
 import org.annalist.brief.BriefPipeline;
-import org.annalist.brief.BriefRequest;
+import org.annalist.brief.Job;
 import org.annalist.brief.Logo;
+import org.annalist.brief.SelectionProblem;
+import org.annalist.brief.SeriesChoice;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -53,21 +56,35 @@ final class BriefCommand implements Callable<Integer> {
     @Mixin
     DebugOption debug;
 
-    @Override
-    public Integer call() {
+    /**
+     * The options as the pipeline's job. The options are checked in the order users have always
+     * been told about them: the logo, the time, then the analysis choices.
+     */
+    Job job() {
         Path target = output != null ? output : Path.of(defaultName(input.file, series));
         if (logo != null) {
             Logo.problem(logo).ifPresent(problem -> {
                 throw new UserInputException("--logo: " + problem);
             });
         }
-        BriefRequest request = new BriefRequest(input.file, input.toReadOptions(), Optional.ofNullable(series), target,
-                title, organisation, Optional.ofNullable(templates), briefOptions.generatedAt(), briefOptions.paper(),
-                Optional.ofNullable(briefOptions.period), Optional.ofNullable(logo), Locale.ENGLISH);
-        BriefPipeline.Brief brief = new BriefPipeline(analysis.analyst(), analysis::prepare).make(request);
+        BriefOutput.MastheadChoices masthead = new BriefOutput.MastheadChoices(title, organisation,
+                Optional.ofNullable(logo), briefOptions.paper, Locale.ENGLISH, Optional.ofNullable(templates),
+                Optional.of(briefOptions.generatedAt()));
+        return new Job(input.input(), SeriesChoice.one(Optional.ofNullable(series), Optional.ofNullable(briefOptions.period)),
+                analysis.choices(), Optional.of(BriefOutput.pdf(target, masthead)));
+    }
+
+    @Override
+    public Integer call() {
+        BriefPipeline.Made brief;
+        try {
+            brief = new BriefPipeline().briefs(job()).get(0);
+        } catch (SelectionProblem problem) {
+            throw SelectionWords.forBrief(problem);
+        }
         brief.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
-        spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series() + ")");
-        return Main.EXIT_OK;
+        spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series().get(0).name() + ")");
+        return ExitCodes.DONE;
     }
 
     static String defaultName(Path input, String series) {

@@ -9,10 +9,9 @@ import picocli.CommandLine.Option;
 /** The options of every command that writes briefs. */
 final class BriefOptions {
 
-    enum PaperChoice { a4, letter }
-
-    @Option(names = "--paper", paramLabel = "SIZE", description = "a4 or letter. Default: a4.")
-    PaperChoice paper = PaperChoice.a4;
+    @Option(names = "--paper", paramLabel = "SIZE", converter = Converters.Paper.class,
+            description = "a4 or letter. Default: a4.")
+    Masthead.Paper paper = Masthead.Paper.A4;
 
     @Option(names = "--generated-at", paramLabel = "TIME",
             description = "The time the brief states as made, ISO 8601 (2026-11-05T09:00:00Z). Default: "
@@ -24,10 +23,7 @@ final class BriefOptions {
                     + "Default: the last in the data.")
     String period;
 
-    Masthead.Paper paper() {
-        return paper == PaperChoice.letter ? Masthead.Paper.LETTER : Masthead.Paper.A4;
-    }
-
+    /** The time the briefs state, resolved now: a mistake in it is refused before any work. */
     Instant generatedAt() {
         try {
             return GenerationTime.resolve(Optional.ofNullable(generatedAt), System.getenv(), Instant.now());

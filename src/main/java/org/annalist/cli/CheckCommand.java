@@ -5,10 +5,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.annalist.brief.SeriesCheck;
-import org.annalist.findings.FindingsJson;
-import org.annalist.narrative.JsonTerms;
+import org.annalist.brief.Reports;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.ReadResult;
+import org.annalist.ingest.SeriesFileReader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -36,15 +36,15 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        ReadResult read = input.read();
+        ReadResult read = new SeriesFileReader(input.readOptions()).read(input.file);
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {
-            out.print(FindingsJson.write(SeriesCheck.of(read), JsonTerms.ENGLISH));
+            out.print(Reports.json(SeriesCheck.of(read)));
         } else {
             printText(read, out);
         }
         out.flush();
-        return Main.EXIT_OK;
+        return ExitCodes.DONE;
     }
 
     private static void printText(ReadResult read, PrintWriter out) {

@@ -5,12 +5,19 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.annalist.brief.AnalysisChoices;
 import org.annalist.brief.Batch;
+import org.annalist.brief.BatchPlan;
+import org.annalist.brief.BriefOutput;
 import org.annalist.brief.BriefPipeline;
-import org.annalist.brief.BriefRequest;
-import org.annalist.brief.BriefSpec;
+import org.annalist.brief.Job;
+import org.annalist.brief.SelectionProblem;
+import org.annalist.brief.SeriesChoice;
+import org.annalist.brief.SeriesFiles;
+import org.annalist.brief.SpecReader;
 import org.annalist.ingest.Aggregation;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.series.Frequency;
@@ -72,6 +79,15 @@ final class DemoCommand implements Callable<Integer> {
     @Mixin
     DebugOption debug;
 
+    /** A demo brief as the pipeline's job: the analysis decides everything from the data. */
+    private Job job(DemoBrief demo, Instant now) {
+        BriefOutput.MastheadChoices masthead = new BriefOutput.MastheadChoices(demo.title(), ORGANISATION,
+                Optional.empty(), briefOptions.paper, Locale.ENGLISH, Optional.empty(), Optional.of(now));
+        return new Job(new Job.Input(data.resolve(demo.file()), demo.options()),
+                SeriesChoice.one(Optional.of(demo.series()), demo.period()), AnalysisChoices.fromTheData(),
+                Optional.of(BriefOutput.pdf(out.resolve(demo.output()), masthead)));
+    }
+
     @Override
     public Integer call() {
         if (!Files.isDirectory(data)) {
@@ -79,20 +95,23 @@ final class DemoCommand implements Callable<Integer> {
                     + "repository (run from its top folder, or pass --data DIR)");
         }
         PrintWriter console = spec.commandLine().getOut();
-        BriefPipeline pipeline = new BriefPipeline();
+        // the demo's briefs and its routine spec read the same files: read each once
+        BriefPipeline pipeline = new BriefPipeline(new SeriesFiles());
         Instant now = briefOptions.generatedAt();
         for (DemoBrief demo : BRIEFS) {
-            BriefRequest request = new BriefRequest(data.resolve(demo.file()), demo.options(), Optional.of(demo.series()),
-                    out.resolve(demo.output()), demo.title(), ORGANISATION, Optional.empty(), now, briefOptions.paper(),
-                    demo.period());
-            BriefPipeline.Brief brief = pipeline.make(request);
-            console.println("wrote " + brief.file());
+            try {
+                for (BriefPipeline.Made brief : pipeline.briefs(job(demo, now))) {
+                    console.println("wrote " + brief.file());
+                }
+            } catch (SelectionProblem problem) {
+                throw SelectionWords.forBrief(problem);
+            }
         }
         // the monthly routine: the board's multi-series brief and two market briefs, from a spec
         Path routine = data.resolve(ROUTINE_SPEC);
         if (Files.isRegularFile(routine)) {
-            List<Batch.Outcome> outcomes = Batch.run(BriefSpec.read(routine).withOutputFolder(out),
-                    Runtime.getRuntime().availableProcessors(), o -> { });
+            List<Batch.Outcome> outcomes = Batch.run(BatchPlan.of(SpecReader.read(routine).withOutputFolder(out),
+                    pipeline), Runtime.getRuntime().availableProcessors(), o -> { });
             for (Batch.Outcome o : outcomes) {
                 if (!o.done()) {
                     throw new IllegalStateException("the demo brief " + o.label() + " failed: " + o.failure().orElse(""));
@@ -100,6 +119,6 @@ final class DemoCommand implements Callable<Integer> {
                 console.println("wrote " + Path.of("").toAbsolutePath().relativize(o.file().get()));
             }
         }
-        return Main.EXIT_OK;
+        return ExitCodes.DONE;
     }
 }

@@ -2,21 +2,10 @@ package org.annalist.cli;
 
 import java.io.PrintWriter;
 import java.util.Locale;
-import org.annalist.brief.SpecProblem;
-import org.annalist.ingest.DataProblem;
-import org.annalist.ingest.DataProblemException;
-import org.annalist.narrative.TemplateEngine;
 import picocli.CommandLine;
 
-/**
- * Entry point. Exit codes: 0 done; 2 bad input or usage (a message naming file, line and column,
- * no stack trace); 1 internal error (a short message; the trace with {@code --debug}).
- */
+/** Entry point: runs one command line; {@link ExitCodes} decides what a failure prints and returns. */
 public final class Main {
-
-    public static final int EXIT_OK = 0;
-    public static final int EXIT_INTERNAL = 1;
-    public static final int EXIT_BAD_INPUT = 2;
 
     private Main() {
     }
@@ -40,44 +29,8 @@ public final class Main {
     static CommandLine commandLine() {
         CommandLine cli = new CommandLine(new AnnalistCommand());
         cli.setCaseInsensitiveEnumValuesAllowed(true);
-        cli.setExecutionExceptionHandler(Main::handle);
-        cli.setParameterExceptionHandler((e, args) -> {
-            e.getCommandLine().getErr().println("annalist: " + e.getMessage());
-            e.getCommandLine().getErr().println("Try '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
-            return EXIT_BAD_INPUT;
-        });
+        cli.setExecutionExceptionHandler(ExitCodes::failure);
+        cli.setParameterExceptionHandler(ExitCodes::usage);
         return cli;
-    }
-
-    private static int handle(Exception e, CommandLine cli, CommandLine.ParseResult parsed) {
-        PrintWriter err = cli.getErr();
-        if (e instanceof DataProblemException problems) {
-            for (DataProblem problem : problems.problems()) {
-                err.println(problem);
-            }
-            return EXIT_BAD_INPUT;
-        }
-        if (e instanceof SpecProblem) {
-            err.println(e.getMessage()); // already SPEC:LINE:COLUMN: message, as data problems are written
-            return EXIT_BAD_INPUT;
-        }
-        if (e instanceof UserInputException || e instanceof TemplateEngine.TemplateProblem) {
-            err.println("annalist: " + e.getMessage());
-            return EXIT_BAD_INPUT;
-        }
-        err.println("annalist: internal error: " + e + (debug(parsed) ? "" : " (run with --debug for details)"));
-        if (debug(parsed)) {
-            e.printStackTrace(err);
-        }
-        return EXIT_INTERNAL;
-    }
-
-    private static boolean debug(CommandLine.ParseResult parsed) {
-        for (CommandLine.ParseResult p = parsed; p != null; p = p.subcommand()) {
-            if (p.hasMatchedOption("--debug")) {
-                return true;
-            }
-        }
-        return false;
     }
 }

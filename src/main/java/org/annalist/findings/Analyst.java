@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.annalist.analysis.anomaly.RemainderOutliers;
-import org.annalist.analysis.calendar.Holiday;
+import org.annalist.series.Holiday;
 import org.annalist.analysis.decompose.CentredMovingAverage;
 import org.annalist.analysis.decompose.Irregular;
 import org.annalist.analysis.decompose.ModelForm;
@@ -61,15 +61,15 @@ public final class Analyst {
     }
 
     public Findings analyse(Series series) {
-        return analyse(series, null);
+        return analyseWith(series, null);
     }
 
-    /** A derived ratio series, whose spans take the ratio of its parts' sums. */
-    public Findings analyse(DerivedSeries.Derived derived) {
-        return analyse(derived.series(), derived.parts());
+    /** A ratio series derived from two others, whose spans take the ratio of its parts' sums. */
+    public Findings analyse(Series ratio, RatioParts parts) {
+        return analyseWith(ratio, parts.forIndicators());
     }
 
-    private Findings analyse(Series series, LatestIndicators.Parts parts) {
+    private Findings analyseWith(Series series, LatestIndicators.Parts parts) {
         List<Caveat> notes = new ArrayList<>();
         double[] x = series.values();
         int period = series.frequency().seasonalPeriod();

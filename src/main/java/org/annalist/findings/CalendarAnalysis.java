@@ -6,7 +6,7 @@ import java.util.Optional;
 import org.annalist.analysis.calendar.CalendarEffects;
 import org.annalist.analysis.calendar.CalendarRegressors;
 import org.annalist.analysis.calendar.Easter;
-import org.annalist.analysis.calendar.Holiday;
+import org.annalist.series.Holiday;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;

@@ -13,6 +13,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.annalist.series.Holiday;
 
 /**
  * Reads a file of the user's moving holidays: a header, then one line per day, {@code date,name}
@@ -21,14 +22,10 @@ import java.util.Set;
  */
 public final class HolidayFile {
 
-    /** One holiday: its name and its days. */
-    public record Entry(String name, Set<LocalDate> days) {
-    }
-
     private HolidayFile() {
     }
 
-    public static List<Entry> read(Path file) {
+    public static List<Holiday> read(Path file) {
         String name = file.toString();
         ProblemLog log = new ProblemLog(name);
         List<String> lines;
@@ -60,8 +57,8 @@ public final class HolidayFile {
         if (holidays.isEmpty()) {
             throw new DataProblemException(new DataProblem(name, 0, 0, "no holidays; expected a header and date,name lines"));
         }
-        List<Entry> entries = new ArrayList<>();
-        holidays.forEach((holiday, days) -> entries.add(new Entry(holiday, days)));
+        List<Holiday> entries = new ArrayList<>();
+        holidays.forEach((holiday, days) -> entries.add(new Holiday(holiday, days)));
         return entries;
     }
 }

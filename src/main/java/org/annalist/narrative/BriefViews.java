@@ -3,10 +3,10 @@ package org.annalist.narrative;
 import java.util.ArrayList;
 import java.util.List;
 import org.annalist.findings.BreakFinding;
+import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Findings;
 import org.annalist.findings.RecentPeriod;
 import org.annalist.findings.SeriesFacts;
-import org.annalist.findings.SourceFacts;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
@@ -18,9 +18,11 @@ public final class BriefViews {
     private BriefViews() {
     }
 
-    public static BriefView of(Series series, Findings findings, SourceFacts source, Masthead masthead) {
+    /** @param plan the charts the brief shows */
+    public static BriefView of(Series series, Findings findings, FigurePlan plan, SourceFacts source,
+                               Masthead masthead) {
         Formats f = Formats.forValues(series.values(), masthead.language());
-        SectionViews sections = new SectionViews(series, findings, f);
+        SectionViews sections = new SectionViews(series, findings, plan, f);
         String title = masthead.title().isEmpty() ? series.name() : masthead.title();
         String author = masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation();
         BriefView.Document document = new BriefView.Document(masthead.language().toLanguageTag(), masthead.paper().css(),
@@ -31,8 +33,8 @@ public final class BriefViews {
                 masthead.logoUri().orElse(""));
         BriefView.Lead lead = lead(series, findings, f);
         BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
-                f.count(source.rowsRead()), source.reading(), masthead.software(), f.timestamp(masthead.generatedAt()));
-        List<String> notes = new ArrayList<>(source.notes());
+                f.count(source.rowsRead()), DataNotes.reading(source.reading()), masthead.software(), f.timestamp(masthead.generatedAt()));
+        List<String> notes = DataNotes.notes(source);
         findings.notes().forEach(note -> notes.add(Terms.caveat(note)));
         BriefView.ThisPeriod thisPeriod = sections.thisPeriod();
         return new BriefView(document, header, lead, thisPeriod, sections.keyFigures(lead, thisPeriod), sections.charts(),

@@ -4,10 +4,10 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
+import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Findings;
 import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.PartsCheck;
-import org.annalist.findings.SourceFacts;
 import org.annalist.series.Series;
 
 /** Builds the {@link MultiBriefView} from each series' findings. */
@@ -24,7 +24,8 @@ public final class MultiBriefViews {
         List<BriefView> sections = new ArrayList<>();
         List<Integer> order = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
-            sections.add(BriefViews.of(series.get(i), findings.get(i), source, masthead));
+            sections.add(BriefViews.of(series.get(i), findings.get(i), FigurePlan.of(series.get(i), findings.get(i)),
+                    source, masthead));
             order.add(i);
         }
         Comparator<Integer> byFigure = switch (sortBy) {
@@ -67,7 +68,7 @@ public final class MultiBriefViews {
         BriefView.Document document = new BriefView.Document(masthead.language().toLanguageTag(),
                 masthead.paper().css(), masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation(),
                 "time series, " + header.seriesList());
-        List<String> notes = new ArrayList<>(source.notes());
+        List<String> notes = DataNotes.notes(source);
         BriefView.Provenance provenance = sections.get(0).provenance();
         return new MultiBriefView(document, header, rows, sortBy == SortBy.ORDER,
                 sortBy.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '),

@@ -5,6 +5,7 @@ import java.util.List;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
+import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Findings;
 import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.OutlierFinding;
@@ -29,11 +30,13 @@ final class SectionViews {
 
     private final Series series;
     private final Findings findings;
+    private final FigurePlan plan;
     private final Formats f;
 
-    SectionViews(Series series, Findings findings, Formats f) {
+    SectionViews(Series series, Findings findings, FigurePlan plan, Formats f) {
         this.series = series;
         this.findings = findings;
+        this.plan = plan;
         this.f = f;
     }
 
@@ -129,21 +132,21 @@ final class SectionViews {
     }
 
     BriefView.Charts charts() {
-        boolean subAnnual = series.frequency() == Frequency.MONTHLY || series.frequency() == Frequency.QUARTERLY;
-        boolean seasonal = findings.seasonality().present();
         double[] trend = findings.decomposition().map(Decomposition::trendCycle)
                 .orElse(findings.smoothing() != null ? findings.smoothing().trendCycle() : series.values());
         int first = firstFinite(trend);
         int last = lastFinite(trend);
-        return new BriefView.Charts(new BriefView.ChartView("overview", true),
-                new BriefView.ChartView("profile", seasonal), new BriefView.ChartView("years", subAnnual && seasonal
-                && series.size() >= 2 * series.frequency().seasonalPeriod()),
-                new BriefView.ChartView("irregular", findings.decomposition().isPresent()),
+        return new BriefView.Charts(chart(FigurePlan.Chart.OVERVIEW), chart(FigurePlan.Chart.PROFILE),
+                chart(FigurePlan.Chart.YEARS), chart(FigurePlan.Chart.IRREGULAR),
                 String.valueOf(series.period(first).year()), String.valueOf(series.period(last).year()),
                 f.significant(trend[first]), f.significant(trend[last]), trend[last] > trend[first],
                 BriefViews.dropYears(series, findings.breaks()),
                 findings.smoothing() == null ? "" : Terms.movingAverage(findings.smoothing().method()),
                 findings.smoothing() == null ? 0 : findings.smoothing().window());
+    }
+
+    private BriefView.ChartView chart(FigurePlan.Chart chart) {
+        return new BriefView.ChartView(chart.id(), plan.shows(chart));
     }
 
     BriefView.ThisPeriod thisPeriod() {

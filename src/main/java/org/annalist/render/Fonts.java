@@ -8,7 +8,7 @@ import java.awt.GraphicsEnvironment;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import org.annalist.chart.ChartStyle;
+import org.annalist.chart.Figure;
 
 /**
  * The brief's one font family, DejaVu Sans (Bitstream Vera licence, see {@code fonts/LICENSE-DejaVu.txt}),
@@ -52,7 +52,7 @@ public final class Fonts {
     /** The characters of {@code text} that the brief's font has no glyph for, each once, in order. */
     public static String missingGlyphs(String text) {
         registerWithAwt();
-        Font font = new Font(ChartStyle.FONT_FAMILY, Font.PLAIN, 10);
+        Font font = new Font(Figure.FONT_FAMILY, Font.PLAIN, 10);
         StringBuilder missing = new StringBuilder();
         text.codePoints().filter(cp -> !Character.isWhitespace(cp) && !font.canDisplay(cp)).distinct()
                 .forEach(missing::appendCodePoint);
@@ -61,7 +61,7 @@ public final class Fonts {
 
     static void registerWith(PdfRendererBuilder builder) {
         for (Face face : FACES) {
-            builder.useFont(() -> open(face.resource()), ChartStyle.FONT_FAMILY, face.weight(), face.style(), true);
+            builder.useFont(() -> open(face.resource()), Figure.FONT_FAMILY, face.weight(), face.style(), true);
         }
     }
 

@@ -73,7 +73,7 @@ class BatchCommandTest {
                     output: broken.pdf
                 """);
         Run run = batch(spec);
-        assertThat(run.exitCode()).as(run.err()).isEqualTo(BatchCommand.EXIT_SOME_FAILED);
+        assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCodes.SOME_FAILED);
         assertThat(folder.resolve("brevania.pdf")).exists();
         assertThat(run.out()).contains("1 of 3 briefs made, 2 failed:");
         assertThat(run.out()).contains("FAILED  briefs.yaml:2 Nowhere  no series named 'Nowhere'");
@@ -185,7 +185,7 @@ class BatchCommandTest {
         Files.copy(Path.of("demo-data/quennelmark-arrivals.csv"), folder.resolve("arrivals.csv"));
         Files.writeString(folder.resolve("zz-broken.csv"), "period,value\n2024-01,12\n2024-02,twelve\n");
         Run run = Run.of("batch", folder.toString(), "--jobs", "2");
-        assertThat(run.exitCode()).as(run.err()).isEqualTo(BatchCommand.EXIT_SOME_FAILED);
+        assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCodes.SOME_FAILED);
         assertThat(run.out()).contains("4 of 5 briefs made, 1 failed:", "FAILED  zz-broken.csv");
         try (var briefs = Files.list(folder.resolve("briefs"))) {
             assertThat(briefs.map(p -> p.getFileName().toString()).sorted()).containsExactly(

@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
+import org.annalist.series.Holiday;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -20,8 +21,8 @@ class HolidayFileTest {
     void daysAreGroupedByName() throws IOException {
         Path f = Files.writeString(folder.resolve("h.csv"),
                 "date,name\n2025-06-27,Lantern festival\n2025-06-28,Lantern festival\n2025-10-03;Harvest fair\n");
-        List<HolidayFile.Entry> holidays = HolidayFile.read(f);
-        assertThat(holidays).extracting(HolidayFile.Entry::name).containsExactly("Lantern festival", "Harvest fair");
+        List<Holiday> holidays = HolidayFile.read(f);
+        assertThat(holidays).extracting(Holiday::name).containsExactly("Lantern festival", "Harvest fair");
         assertThat(holidays.get(0).days()).containsExactlyInAnyOrder(LocalDate.of(2025, 6, 27), LocalDate.of(2025, 6, 28));
     }
 

@@ -3,6 +3,7 @@ package org.annalist.analysis.calendar;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Random;
+import org.annalist.series.Holiday;
 import org.annalist.series.Period;
 import org.junit.jupiter.api.Test;
 

@@ -81,18 +81,6 @@ class CalendarTest {
         assertThat(CalendarRegressors.weekendNights(Period.month(2023, 2))).isEqualTo(8);
     }
 
-    @Test
-    void perDayFiguresUseTheAverageMonth() {
-        // 2,800 nights in February 2023 (28 days) and 3,100 in March 2023 (31 days): both 100 a day,
-        // i.e. 3,043.75 per average month of 30.4375 days (365.25 / 12).
-        org.annalist.series.Series s = org.annalist.series.Series.builder("nights", org.annalist.series.Frequency.MONTHLY)
-                .append(Period.month(2023, 2), 2800, 3100).snapshot();
-        org.annalist.series.Series perDay = PeriodLength.perAveragePeriod(s);
-        assertThat(perDay.value(0)).isCloseTo(3043.75, within(1e-9));
-        assertThat(perDay.value(1)).isCloseTo(3043.75, within(1e-9));
-        assertThat(perDay.unit()).isEqualTo("per average month");
-    }
-
     /** The arithmetic weekday count equals counting day by day, for every month and quarter of 1990–2040. */
     @org.junit.jupiter.api.Test
     void weekdayCountsEqualADayByDayCount() {

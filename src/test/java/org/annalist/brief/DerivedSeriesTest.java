@@ -1,4 +1,4 @@
-package org.annalist.findings;
+package org.annalist.brief;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;

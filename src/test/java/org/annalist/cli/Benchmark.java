@@ -9,8 +9,13 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.Random;
 import org.annalist.analysis.breaks.BaiPerron;
+import org.annalist.brief.AnalysisChoices;
+import org.annalist.brief.Batch;
+import org.annalist.brief.BriefOutput;
 import org.annalist.brief.BriefPipeline;
-import org.annalist.brief.BriefRequest;
+import org.annalist.brief.Job;
+import org.annalist.brief.SeriesChoice;
+import org.annalist.brief.SpecReader;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.narrative.Masthead;
 import org.annalist.analysis.breaks.Pelt;
@@ -25,8 +30,10 @@ import org.annalist.series.Series;
 /**
  * Prints the speed figures of the analysis core on seeded synthetic data (STL, the whole Analyst
  * without its outlook, automatic ETS, the outlook, Bai–Perron and PELT), the demo brief, and the
- * batch figures (10,000 series analysed, 200 briefs in one batch):
- * {@code java -cp target/annalist.jar org.annalist.cli.Benchmark}. Warm figures: each measurement
+ * batch figures (10,000 series analysed, 200 briefs in one batch). It lives with the tests, out of
+ * the user's jar; from the top folder, after {@code mvn -q -B -DskipTests package} (which compiles
+ * the tests too): {@code java -cp target/annalist.jar:target/test-classes org.annalist.cli.Benchmark}.
+ * Warm figures: each measurement
  * runs after a warm-up of the same work, single-threaded. The bulk figures are also taken in fresh
  * JVMs with a bounded heap, as a user's run would see them, with the process's peak memory.
  */
@@ -174,7 +181,7 @@ public final class Benchmark {
 
     /** Runs this class in a fresh JVM for one figure; its last line holds seconds, peak RSS and a count. */
     private static String[] inFreshJvm(String... arguments) throws Exception {
-        List<String> command = javaOnThisJar("-cp", CHILD_HEAP);
+        List<String> command = new ArrayList<>(List.of(java(), CHILD_HEAP, "-cp", System.getProperty("java.class.path")));
         command.add(Benchmark.class.getName());
         command.addAll(List.of(arguments));
         Process p = new ProcessBuilder(command).redirectErrorStream(true).start();
@@ -197,8 +204,8 @@ public final class Benchmark {
             count = many.length;
         } else {
             int cores = Runtime.getRuntime().availableProcessors();
-            count = org.annalist.brief.Batch.run(org.annalist.brief.BriefSpec.read(Path.of(args[1])), cores, o -> { })
-                    .stream().filter(org.annalist.brief.Batch.Outcome::done).count();
+            count = Batch.run(SpecReader.read(Path.of(args[1])), cores, o -> { }).stream().filter(Batch.Outcome::done)
+                    .count();
         }
         double seconds = (System.nanoTime() - start) / 1e9;
         System.out.printf(Locale.ROOT, "%.1f %s %d%n", seconds, peakResidentMegabytes(), count);
@@ -248,17 +255,19 @@ public final class Benchmark {
         }
         Path out = Files.createTempDirectory("annalist-bench");
         Path pdf = out.resolve("total.pdf");
-        BriefRequest request = new BriefRequest(data, ReadOptions.defaults(), Optional.of("Total"), pdf,
-                "Guest nights in Quennelmark", "", Optional.empty(), Instant.parse("2026-11-20T08:00:00Z"),
-                Masthead.Paper.A4, Optional.empty());
-        BriefPipeline pipeline = new BriefPipeline();
+        Job job = new Job(new Job.Input(data, ReadOptions.defaults()),
+                SeriesChoice.one(Optional.of("Total"), Optional.empty()), AnalysisChoices.fromTheData(),
+                Optional.of(BriefOutput.pdf(pdf, new BriefOutput.MastheadChoices("Guest nights in Quennelmark", "",
+                        Optional.empty(), Masthead.Paper.A4, Locale.ENGLISH, Optional.empty(),
+                        Optional.of(Instant.parse("2026-11-20T08:00:00Z"))))));
+        // a fresh pipeline each time: a brief as one command makes it, its file read anew
         for (int i = 0; i < 10; i++) {
-            pipeline.make(request);
+            new BriefPipeline().briefs(job);
         }
         int runs = 20;
         long start = System.nanoTime();
         for (int i = 0; i < runs; i++) {
-            pipeline.make(request);
+            new BriefPipeline().briefs(job);
         }
         double warmMs = (System.nanoTime() - start) / 1e6 / runs;
         int pages;
@@ -270,7 +279,7 @@ public final class Benchmark {
         for (String[] flags : new String[][] {{}, {"-XX:TieredStopAtLevel=1"}}) {
             double best = Double.POSITIVE_INFINITY;
             for (int i = 0; i < 3; i++) {
-                List<String> command = javaOnThisJar("-jar", flags);
+                List<String> command = javaOnTheJar(flags);
                 command.addAll(List.of("brief", data.toString(), "--series", "Total", "-o", pdf.toString()));
                 long t0 = System.nanoTime();
                 Process p = new ProcessBuilder(command).redirectErrorStream(true).redirectOutput(ProcessBuilder.Redirect.DISCARD)
@@ -285,13 +294,18 @@ public final class Benchmark {
         }
     }
 
-    /** {@code java FLAGS… -jar|-cp JAR}: this JVM's launcher on the jar this class runs from. */
-    private static List<String> javaOnThisJar(String jarOption, String... flags) throws Exception {
-        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString()));
+    /** {@code java FLAGS… -jar JAR}: this JVM's launcher on the jar the tool runs from, as a user starts it. */
+    private static List<String> javaOnTheJar(String... flags) throws Exception {
+        List<String> command = new ArrayList<>(List.of(java()));
         command.addAll(List.of(flags));
-        command.add(jarOption);
-        command.add(Path.of(Benchmark.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toString());
+        command.add("-jar");
+        command.add(Path.of(Main.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toString());
         return command;
+    }
+
+    /** This JVM's launcher. */
+    private static String java() {
+        return Path.of(System.getProperty("java.home"), "bin", "java").toString();
     }
 
     /** A positive monthly series: trend, multiplicative season, noise, an occasional shock. */

@@ -1,11 +1,12 @@
-package org.annalist.findings;
+package org.annalist.brief;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.regex.Pattern;
-import org.annalist.analysis.indicators.LatestIndicators;
+import org.annalist.findings.RatioParts;
+import org.annalist.narrative.SeriesNames;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 import org.annalist.series.SeriesBuilder;
@@ -13,15 +14,15 @@ import org.annalist.series.ValueFlag;
 
 /**
  * Ratios the tool derives when a file holds their parts: average length of stay = nights /
- * arrivals, and occupancy = nights / bed-places (or bed-nights available) × 100 (research notes
- * A1: Eurostat's definitions). Parts pair up when their names are the same once the words
+ * arrivals, and occupancy = nights / bed-places (or bed-nights available) × 100 (Eurostat's
+ * definitions, from memory). Parts pair up when their names are the same once the words
  * "nights", "arrivals" or "bed-places" are taken out (or their units say what they are):
  * "Domestic nights" and "Domestic arrivals", or "Total" in nights and "Total" in arrivals.
  */
 public final class DerivedSeries {
 
     /** A derived series with the parts its spans are computed from. */
-    public record Derived(Series series, LatestIndicators.Parts parts) {
+    public record Derived(Series series, RatioParts parts) {
     }
 
     private static final Pattern NIGHTS = Pattern.compile("(?i)\\b(guest[- ]?)?nights?\\b");
@@ -39,9 +40,9 @@ public final class DerivedSeries {
             }
             String base = base(nights);
             partner(all, nights, ARRIVALS, base).ifPresent(arrivals -> derived.add(ratio(nights, arrivals, 1,
-                    label(base, "average length of stay"), "nights per arrival")));
+                    SeriesNames.averageLengthOfStay(base), SeriesNames.NIGHTS_PER_ARRIVAL)));
             partner(all, nights, CAPACITY, base).ifPresent(capacity -> derived.add(ratio(nights, capacity, 100,
-                    label(base, "occupancy"), "%")));
+                    SeriesNames.occupancy(base), SeriesNames.PERCENT)));
         }
         return List.copyOf(derived);
     }
@@ -65,7 +66,7 @@ public final class DerivedSeries {
             flags.addAll(denominator.flags(d));
             b.put(p, value, java.util.Set.copyOf(flags));
         }
-        return new Derived(b.snapshot(), new LatestIndicators.Parts(numerator, denominator, scale));
+        return new Derived(b.snapshot(), new RatioParts(numerator, denominator, scale));
     }
 
     private static boolean is(Series s, Pattern kind) {
@@ -79,10 +80,5 @@ public final class DerivedSeries {
             name = p.matcher(name).replaceAll(" ");
         }
         return name.replaceAll("[()\\[\\],;:-]", " ").trim().replaceAll("\\s+", " ").toLowerCase(Locale.ROOT);
-    }
-
-    private static String label(String base, String what) {
-        return base.isEmpty() ? Character.toUpperCase(what.charAt(0)) + what.substring(1)
-                : Character.toUpperCase(base.charAt(0)) + base.substring(1) + " " + what;
     }
 }

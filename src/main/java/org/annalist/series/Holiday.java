@@ -1,9 +1,8 @@
-package org.annalist.analysis.calendar;
+package org.annalist.series;
 
 import java.time.LocalDate;
 import java.util.Objects;
 import java.util.Set;
-import org.annalist.series.Period;
 
 /**
  * A moving holiday of the user's (a festival, a school break): its name and every day it covers,

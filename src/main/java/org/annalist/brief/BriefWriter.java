@@ -1,0 +1,187 @@
+package org.annalist.brief;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.annalist.chart.Captions;
+import org.annalist.chart.Figure;
+import org.annalist.chart.IrregularChart;
+import org.annalist.chart.OutlookChart;
+import org.annalist.chart.OverviewChart;
+import org.annalist.chart.SeasonalProfileChart;
+import org.annalist.chart.SmallMultiplesChart;
+import org.annalist.chart.YearOverlayChart;
+import org.annalist.findings.FigurePlan;
+import org.annalist.findings.Findings;
+import org.annalist.findings.PartsCheck;
+import org.annalist.narrative.DataNotes;
+import org.annalist.narrative.SourceFacts;
+import org.annalist.ingest.DataProblem;
+import org.annalist.ingest.ReadResult;
+import org.annalist.narrative.BriefView;
+import org.annalist.narrative.BriefViews;
+import org.annalist.narrative.ChartWords;
+import org.annalist.narrative.Masthead;
+import org.annalist.narrative.MultiBriefView;
+import org.annalist.narrative.MultiBriefViews;
+import org.annalist.narrative.TemplateEngine;
+import org.annalist.render.AtomicFiles;
+import org.annalist.render.Fonts;
+import org.annalist.render.PdfRenderer;
+import org.annalist.series.Series;
+
+/**
+ * The output step of a brief: findings → charts and narrative → PDF, written atomically, so that a
+ * failure never leaves a half-written file where a good one was. The same inputs give the same
+ * bytes (the time stated and the PDF's document ID are pinned by the caller and the input).
+ */
+final class BriefWriter {
+
+    /**
+     * A single-series brief written: where, of which series, what it found, warnings for the user
+     * (characters the font lacks) and the charts it placed.
+     */
+    record Brief(Path file, String series, Findings findings, List<String> warnings, List<Figure> figures) {
+    }
+
+    /**
+     * A multi-series brief written: where, each series' findings, the parts-and-total check, its
+     * charts (the small multiples, and each series' overview in the order of {@code findings}).
+     */
+    record CombinedBrief(Path file, List<Findings> findings, Optional<PartsCheck> check, Figure multiples,
+                         List<Figure> overviews) {
+    }
+
+    /**
+     * What a brief's page says about itself, the same for both kinds of brief.
+     *
+     * @param title       the title as this brief prints it
+     * @param generatedAt resolved: the time the brief states as made
+     */
+    record Page(Job.Input input, ReadResult read, BriefOutput.MastheadChoices choices, String title,
+                Instant generatedAt, Path output) {
+    }
+
+    private final PdfRenderer renderer = new PdfRenderer();
+
+    /** Writes the brief of one series, as analysed into {@code findings}. */
+    Brief single(Page page, Series series, Findings findings) {
+        Fonts.registerWithAwt();
+        Masthead masthead = masthead(page);
+        SourceFacts source = sourceFacts(page.read());
+        List<String> warnings = new ArrayList<>();
+        String missing = Fonts.missingGlyphs(String.join(" ", page.title(), page.choices().organisation(), series.name(),
+                series.unit(), source.file(), String.join(" ", source.notes())));
+        if (!missing.isEmpty()) {
+            warnings.add(DataNotes.missingGlyphs(missing));
+            source = source.withMissingGlyphs(missing);
+        }
+        FigurePlan plan = FigurePlan.of(series, findings);
+        BriefView view = BriefViews.of(series, findings, plan, source, masthead);
+        String xhtml = new TemplateEngine(page.choices().templates())
+                .render(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
+        List<Figure> figures = figures(series, findings, plan);
+        byte[] pdf = renderer.render(xhtml, baseUri(page), figures, page.generatedAt(),
+                documentId(page.read().sha256(), series.name()));
+        write(page.output(), pdf);
+        return new Brief(page.output(), series.name(), findings, List.copyOf(warnings), figures);
+    }
+
+    /**
+     * Writes the multi-series brief of {@code series}, each analysed into the findings at the same
+     * place; with a total named, the other series are checked against it.
+     */
+    CombinedBrief combined(Page page, List<Series> series, List<Findings> findings, BriefOutput.Combined choices) {
+        Fonts.registerWithAwt();
+        Masthead masthead = masthead(page);
+        Optional<PartsCheck> check = choices.total()
+                .flatMap(name -> series.stream().filter(s -> s.name().equals(name)).findFirst())
+                .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
+        MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read()), masthead, check,
+                choices.sortBy());
+        String xhtml = new TemplateEngine(page.choices().templates())
+                .render(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
+        Figure multiples = SmallMultiplesChart.of(series, findings);
+        List<Figure> overviews = new ArrayList<>();
+        for (int i = 0; i < series.size(); i++) {
+            overviews.add(OverviewChart.of(series.get(i), findings.get(i), captions(series.get(i), findings.get(i)))
+                    .ofSeries(i));
+        }
+        List<Figure> figures = new ArrayList<>(overviews);
+        figures.add(0, multiples);
+        byte[] pdf = renderer.render(xhtml, baseUri(page), figures, page.generatedAt(),
+                documentId(page.read().sha256(), String.join("|", series.stream().map(Series::name).toList())));
+        write(page.output(), pdf);
+        return new CombinedBrief(page.output(), findings, check, multiples, List.copyOf(overviews));
+    }
+
+    /** Relative links in the brief (a user's CSS, the logo) resolve beside the data file. */
+    private static String baseUri(Page page) {
+        return page.input().file().toAbsolutePath().getParent().toUri().toString();
+    }
+
+    private static void write(Path output, byte[] pdf) {
+        try {
+            AtomicFiles.write(output, pdf);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + output, e);
+        }
+    }
+
+    private static Masthead masthead(Page page) {
+        BriefOutput.MastheadChoices c = page.choices();
+        return new Masthead(page.title(), c.organisation(), c.language(), c.paper(), page.generatedAt(),
+                "Annalist " + Version.current(), c.logo().map(p -> p.toAbsolutePath().toUri().toString()));
+    }
+
+    /** The charts the template places; those the view does not draw are left out. */
+    private static List<Figure> figures(Series series, Findings findings, FigurePlan plan) {
+        Captions captions = captions(series, findings);
+        List<Figure> figures = new ArrayList<>();
+        figures.add(OverviewChart.of(series, findings, captions));
+        if (plan.shows(FigurePlan.Chart.PROFILE)) {
+            figures.add(SeasonalProfileChart.of(findings.seasonality(), captions));
+        }
+        if (plan.shows(FigurePlan.Chart.YEARS)) {
+            figures.add(YearOverlayChart.of(series, captions));
+        }
+        if (plan.shows(FigurePlan.Chart.IRREGULAR)) {
+            figures.add(IrregularChart.of(series, findings, captions));
+        }
+        if (plan.shows(FigurePlan.Chart.OUTLOOK)) {
+            figures.add(OutlookChart.of(series, findings.outlook(), captions));
+        }
+        return figures;
+    }
+
+    /** The charts' words, from the narrative. */
+    private static Captions captions(Series series, Findings findings) {
+        return new Captions(ChartWords.observed(), ChartWords.trendCycle(findings), ChartWords.forecast(),
+                ChartWords.forecastMean(), ChartWords.interval(80), ChartWords.interval(95),
+                ChartWords.profileAxis(series, findings), ChartWords.irregularAxis(series, findings),
+                ChartWords.earlierYears(series));
+    }
+
+    /** What the appendix says about the file and how it was read. */
+    static SourceFacts sourceFacts(ReadResult read) {
+        SourceFacts.Reading reading = new SourceFacts.Reading(read.charset(), read.delimiterName(), read.layout(),
+                read.periodFormat(), read.dateOrder().map(o -> o.name().toLowerCase(Locale.ROOT).replace('_', '-')),
+                read.decimalMark().map(m -> m.name().toLowerCase(Locale.ROOT)),
+                read.aggregation().map(a -> a.target().toString()), read.aggregation().map(a -> a.method().label()));
+        return new SourceFacts(Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading,
+                read.warnings().stream().map(DataProblem::toString).toList(), "");
+    }
+
+    /** The same input always gets the same PDF trailer ID, so that equal briefs are equal files. */
+    private static long documentId(String sha256, String seriesName) {
+        byte[] digest = HexFormat.of().parseHex(sha256);
+        return ByteBuffer.wrap(digest).getLong() ^ seriesName.hashCode();
+    }
+}

@@ -1,0 +1,24 @@
+package org.annalist.brief;
+
+import java.util.List;
+import org.annalist.findings.Findings;
+import org.annalist.findings.FindingsJson;
+import org.annalist.narrative.AnalystNotes;
+import org.annalist.narrative.JsonTerms;
+
+/** The findings as text: the findings JSON, and the analyst's notes of {@code analyze}. */
+public final class Reports {
+
+    private Reports() {
+    }
+
+    /** The findings JSON of one series' findings, a list of them, or the series blocks of {@code check}. */
+    public static String json(Object value) {
+        return FindingsJson.write(value, JsonTerms.ENGLISH);
+    }
+
+    /** One line per finding with its evidence, series after series. */
+    public static String notes(List<Findings> findings) {
+        return AnalystNotes.all(findings);
+    }
+}

@@ -1,0 +1,69 @@
+package org.annalist.cli;
+
+import java.io.PrintWriter;
+import org.annalist.brief.SelectionProblem;
+import org.annalist.brief.SpecProblem;
+import org.annalist.ingest.DataProblem;
+import org.annalist.ingest.DataProblemException;
+import org.annalist.narrative.TemplateEngine;
+import picocli.CommandLine;
+
+/**
+ * The exit codes, and the one place that decides which a failure gets and what it prints: a
+ * message, never a stack trace, unless {@code --debug} asks for it on an internal error.
+ */
+final class ExitCodes {
+
+    /** Done. */
+    static final int DONE = 0;
+    /** An internal error: a short message; the stack trace with {@code --debug}. */
+    static final int INTERNAL_ERROR = 1;
+    /** Bad input or usage: the message names the file, line and column where it can. */
+    static final int BAD_INPUT = 2;
+    /** {@code batch}: some briefs failed, the others were made. */
+    static final int SOME_FAILED = 3;
+
+    private ExitCodes() {
+    }
+
+    /** For picocli's parameter errors: an unknown option, a value that is not one of the words, … */
+    static int usage(CommandLine.ParameterException e, String[] args) {
+        e.getCommandLine().getErr().println("annalist: " + e.getMessage());
+        e.getCommandLine().getErr().println("Try '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
+        return BAD_INPUT;
+    }
+
+    /** For what a command throws. */
+    static int failure(Exception e, CommandLine cli, CommandLine.ParseResult parsed) {
+        PrintWriter err = cli.getErr();
+        if (e instanceof DataProblemException problems) {
+            for (DataProblem problem : problems.problems()) {
+                err.println(problem);
+            }
+            return BAD_INPUT;
+        }
+        if (e instanceof SpecProblem) {
+            err.println(e.getMessage()); // already SPEC:LINE:COLUMN: message, as data problems are written
+            return BAD_INPUT;
+        }
+        if (e instanceof UserInputException || e instanceof TemplateEngine.TemplateProblem
+                || e instanceof SelectionProblem) {
+            err.println("annalist: " + e.getMessage());
+            return BAD_INPUT;
+        }
+        err.println("annalist: internal error: " + e + (debug(parsed) ? "" : " (run with --debug for details)"));
+        if (debug(parsed)) {
+            e.printStackTrace(err);
+        }
+        return INTERNAL_ERROR;
+    }
+
+    private static boolean debug(CommandLine.ParseResult parsed) {
+        for (CommandLine.ParseResult p = parsed; p != null; p = p.subcommand()) {
+            if (p.hasMatchedOption("--debug")) {
+                return true;
+            }
+        }
+        return false;
+    }
+}

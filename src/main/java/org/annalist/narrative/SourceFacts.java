@@ -1,0 +1,39 @@
+package org.annalist.narrative;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Where the data came from, as the brief's data appendix states it.
+ *
+ * @param reading       how the file was read
+ * @param notes         the reader's warnings, each with file and line
+ * @param missingGlyphs characters of the brief's own text that its font cannot draw (empty when none)
+ */
+public record SourceFacts(String file, String sha256, int rowsRead, Reading reading, List<String> notes,
+                          String missingGlyphs) {
+
+    public SourceFacts {
+        notes = List.copyOf(notes);
+    }
+
+    /**
+     * How the file was read, in the reader's own terms.
+     *
+     * @param delimiter    {@code comma}, {@code semicolon} or {@code tab}
+     * @param layout       {@code wide}, {@code long}, …
+     * @param periodFormat e.g. {@code YYYY-MM}
+     * @param dateOrder    {@code day-first} or {@code month-first}, for dates such as 03/04/2024
+     * @param decimalMark  {@code point} or {@code comma}, when it had to be decided
+     * @param aggregatedTo the calendar the values were aggregated to, with {@code aggregatedBy} ({@code sum}, {@code mean})
+     */
+    public record Reading(String charset, String delimiter, String layout, String periodFormat,
+                          Optional<String> dateOrder, Optional<String> decimalMark, Optional<String> aggregatedTo,
+                          Optional<String> aggregatedBy) {
+    }
+
+    /** The same facts with the characters the font cannot draw. */
+    public SourceFacts withMissingGlyphs(String characters) {
+        return new SourceFacts(file, sha256, rowsRead, reading, notes, characters);
+    }
+}
