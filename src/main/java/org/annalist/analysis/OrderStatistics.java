@@ -1,17 +1,31 @@
 package org.annalist.analysis;
 
 /**
- * The k-th smallest values of an array without sorting it whole (Hoare's FIND, CACM Algorithm 65,
- * 1961): expected linear time, which matters for the tens of thousands of pairwise slopes of
- * Sen's estimator.
+ * The k-th smallest values of an array without sorting it whole (Hoare's FIND [1]): expected
+ * linear time, which matters for the tens of thousands of pairwise slopes of Sen's estimator.
  *
  * <p>Several ranks are found in one descent: each partition sends every wanted rank to the side
  * that holds it, so the median and the two interval limits of Sen's slope cost little more than
- * the median alone (the partial sorting of Chambers, CACM Algorithm 410, 1971; from memory).
+ * the median alone (the partial sorting of Chambers [2]). The partition avoids a branch on the
+ * data; [3] shows why that pays (its block partition is not the one used here).
+ *
+ * <p>References:
+ * <ol>
+ * <li>C. A. R. Hoare (1961), "Algorithm 65: Find", <i>Communications of the ACM</i> 4(7),
+ *     321–322. doi:10.1145/366622.366647</li>
+ * <li>J. M. Chambers (1971), "Algorithm 410: Partial Sorting", <i>Communications of the ACM</i>
+ *     14 (the whole entry from memory, not verified; no DOI checked).</li>
+ * <li>S. Edelkamp and A. Weiß (2019), "BlockQuicksort: Avoiding Branch Mispredictions in
+ *     Quicksort", <i>ACM Journal of Experimental Algorithmics</i> 24. doi:10.1145/3274660 (first
+ *     presented at ESA 2016, doi:10.4230/LIPIcs.ESA.2016.38)</li>
+ * </ol>
  */
 public final class OrderStatistics {
 
-    /** Below this many values a range is sorted by insertion: cheaper than partitioning it again. */
+    /**
+     * Below this many values a range is sorted by insertion: cheaper than partitioning it again
+     * (our rule; small cut-offs of this size are common practice, the value has no source).
+     */
     private static final int INSERTION_SORT_BELOW = 16;
 
     private OrderStatistics() {
@@ -53,9 +67,8 @@ public final class OrderStatistics {
      * Rearranges a[lo..hi] so that each of ranks[first..last] (all within lo..hi) holds the value of
      * that rank. The partition moves the values below the pivot to the front with a swap whose
      * target advances by the comparison's outcome: a Lomuto partition without a branch on the data
-     * (why that pays: Edelkamp &amp; Weiß 2016, "BlockQuicksort: Avoiding Branch Mispredictions in
-     * Quicksort", ESA; from memory). On pairwise slopes a branch on each comparison is mispredicted
-     * about half the time, which made the partition four times slower here. When no value lies
+     * (why that pays: [3]). On pairwise slopes a branch on each comparison is mispredicted about
+     * half the time, which made the partition four times slower here. When no value lies
      * below the pivot, the values equal to it are moved next, so runs of equal values (slopes of
      * rounded data) still make progress.
      */
@@ -65,6 +78,7 @@ public final class OrderStatistics {
                 insertionSort(a, lo, hi);
                 return;
             }
+            // [1] partition around a pivot; median of first, middle and last (common practice)
             double pivot = medianOfThree(a[lo], a[(lo + hi) >>> 1], a[hi]);
             int right = moveToFront(a, lo, hi, pivot, false);
             if (right == lo) {
@@ -78,6 +92,7 @@ public final class OrderStatistics {
                 }
             }
             // now a[lo..right-1] < a[right..hi] in rank order, and both parts are non-empty
+            // [2] each wanted rank goes to the part that holds it
             int split = first;
             while (split <= last && ranks[split] < right) {
                 split++;
@@ -105,6 +120,7 @@ public final class OrderStatistics {
             double v = a[i];
             a[i] = a[next];
             a[next] = v;
+            // the write position advances by the comparison's outcome: no branch on the data (why: [3])
             next += v < pivot || (andEqual && v == pivot) ? 1 : 0;
         }
         return next;

@@ -2,7 +2,20 @@ package org.annalist.analysis;
 
 import java.util.Arrays;
 
-/** Ranks with ties at their mean rank, and the tie sum Σ(t³ − t) that rank tests correct for. */
+/**
+ * Ranks with ties at their mean rank, and the tie sum Σ(t³ − t) that rank tests correct for.
+ *
+ * <p>Mean ranks for ties and the tie sum are those of the Kruskal–Wallis test [1] (its ties
+ * correction divides H by 1 − Σ(t³ − t)/(N³ − N)); the Mann–Kendall variance has a tie term of
+ * its own, computed in the trend package.
+ *
+ * <p>References:
+ * <ol>
+ * <li>W. H. Kruskal and W. A. Wallis (1952), "Use of Ranks in One-Criterion Variance Analysis",
+ *     <i>Journal of the American Statistical Association</i> 47(260), 583–621.
+ *     doi:10.1080/01621459.1952.10483441</li>
+ * </ol>
+ */
 public final class Ranks {
 
     private Ranks() {
@@ -22,6 +35,7 @@ public final class Ranks {
             while (j + 1 < n && x[order[j + 1]] == x[order[i]]) {
                 j++;
             }
+            // [1] ties share the mean of the 1-based ranks i + 1 … j + 1
             double rank = (i + j) / 2.0 + 1;
             for (int k = i; k <= j; k++) {
                 ranks[order[k]] = rank;
@@ -42,6 +56,7 @@ public final class Ranks {
                 j++;
             }
             double t = j - i + 1;
+            // [1] the group's term t³ − t of the ties correction
             sum += t * t * t - t;
             i = j + 1;
         }

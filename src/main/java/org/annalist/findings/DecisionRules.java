@@ -35,7 +35,11 @@ public final class DecisionRules {
 
     // ---- seasonal pattern -------------------------------------------------------------------
 
-    /** No seasonal claim from fewer than three full years (UN/ESS guidance, see research notes A4). */
+    /**
+     * No seasonal claim from fewer than three full years: "series under three years long cannot be
+     * seasonally adjusted accurately" (the ESS guidelines on seasonal adjustment as the UN Statistics
+     * Division's compilation guide, ch. 29, "Specific issues", states them).
+     */
     public static final int MIN_YEARS_FOR_SEASON = 3;
     /**
      * A seasonal pattern is claimed only when its strength F_S (Wang, Smith &amp; Hyndman 2006) is at
@@ -57,7 +61,7 @@ public final class DecisionRules {
 
     /** A cycle is longer than two years (FPP3 §2.3: cycles last "at least 2 years"). */
     public static final double MIN_CYCLE_YEARS = 2.0;
-    /** At least two complete cycles in the data (rule of thumb, research notes C7). */
+    /** At least two complete cycles in the data (our rule of thumb; no published source). */
     public static final double MIN_CYCLES_IN_DATA = 2.0;
     /** Annual values needed to look for a cycle at all (our rule). */
     public static final int MIN_YEARS_FOR_CYCLE = 12;

@@ -7,7 +7,8 @@ import java.util.Set;
 /**
  * A moving holiday of the user's (a festival, a school break): its name and every day it covers,
  * over all the years. Treated like Easter: the share of a year's holiday days that fall in a
- * period is a calendar regressor.
+ * period is a calendar regressor (our generalisation of the Easter regressor of the analysis'
+ * calendar effects).
  */
 public record Holiday(String name, Set<LocalDate> days) {
 

@@ -7,13 +7,22 @@ import org.annalist.analysis.OrderStatistics;
 
 /**
  * Single periods far from what trend and season predict: the robust score
- * {@code z = (R − median R) / (1.4826 · MAD R)} of the decomposition's remainder (Iglewicz &amp;
- * Hoaglin 1993, <i>How to Detect and Handle Outliers</i>, ASQC, the "modified z-score"; the MAD
- * keeps the outliers themselves from inflating the scale). A period is flagged when |z| reaches the
- * threshold. Outliers are one-offs, so two patterns of flags are left out: three or more flagged
- * periods in a row with the same sign (a shift of level, which the break analysis describes), and
- * four or more flags within any two seasonal cycles (a stretch the decomposition does not follow,
- * such as a seasonal pattern in transition), which {@link #unusualStretches} reports instead.
+ * {@code z = (R − median R) / (1.4826 · MAD R)} of the decomposition's remainder, the "modified
+ * z-score" of [1] (there written 0.6745 (x − x̃)/MAD; 1/1.4826 ≈ 0.6745 ≈ Φ⁻¹(0.75), which makes
+ * 1.4826 · MAD a consistent estimate of σ for normal data). The MAD keeps the outliers themselves from
+ * inflating the scale. A period is flagged when |z| reaches the threshold the caller gives ([1]
+ * recommends 3.5). Outliers are one-offs, so two patterns of flags are left out (our rules): three
+ * or more flagged periods in a row with the same sign (a shift of level, which the break analysis
+ * describes), and four or more flags within any two seasonal cycles (a stretch the decomposition
+ * does not follow, such as a seasonal pattern in transition), which {@link #unusualStretches}
+ * reports instead.
+ *
+ * <p>References:
+ * <ol>
+ * <li>B. Iglewicz and D. C. Hoaglin (1993), <i>How to Detect and Handle Outliers</i>, The ASQC
+ *     Basic References in Quality Control: Statistical Techniques, vol. 16, ASQC Quality Press,
+ *     Milwaukee (no DOI).</li>
+ * </ol>
  */
 public final class RemainderOutliers {
 
@@ -33,7 +42,7 @@ public final class RemainderOutliers {
      * The remainder as outliers are scored on: on logs it already is relative; for an additive
      * series of counts (no negative values, a positive expected level) it is taken relative to the
      * expected value, so that the busy season's larger swings are not read as outliers; otherwise
-     * as it is.
+     * as it is (our rule).
      *
      * @param expected what trend and season predict, on the scale of {@code remainder}
      * @param observed the series' values
@@ -54,7 +63,10 @@ public final class RemainderOutliers {
         return relative;
     }
 
-    /** Robust scores of the remainder; NaN where it is missing. */
+    /**
+     * Robust scores of the remainder ([1]); NaN where it is missing, and NaN everywhere with fewer
+     * than three values (our rule). A MAD of zero gives every score 0 (our rule: no spread, no outlier).
+     */
     public static double[] scores(double[] remainder) {
         double[] present = Arrays.stream(remainder).filter(v -> !Double.isNaN(v)).toArray();
         double[] z = new double[remainder.length];
@@ -67,6 +79,7 @@ public final class RemainderOutliers {
         for (int i = 0; i < present.length; i++) {
             deviations[i] = Math.abs(present[i] - median);
         }
+        // [1] the modified z-score: (R − median) / (MAD / 0.6745), written with 1/0.6745 = 1.4826
         double scale = 1.4826 * OrderStatistics.median(deviations);
         for (int t = 0; t < remainder.length; t++) {
             z[t] = Double.isNaN(remainder[t]) ? Double.NaN

@@ -13,12 +13,17 @@ import org.apache.commons.math3.linear.RealMatrix;
 
 /**
  * Calendar effects estimated on the irregular component (logs for a multiplicative series, so a
- * coefficient is a relative effect): least squares on the Easter share and the number of Friday
- * and Saturday nights, each centred on its mean for that calendar month
- * (so that none of them takes over the seasonal pattern), with Newey–West standard errors that
- * allow for autocorrelation (Newey &amp; West 1987, <i>Econometrica</i> 55, 703–708; Bartlett weights,
- * lag ⌊4 (n/100)^{2/9}⌋ after Newey &amp; West 1994), and two-sided normal p-values; whether an
- * effect counts is the caller's decision.
+ * coefficient is a relative effect): least squares on the Easter share [3] and the number of
+ * Friday and Saturday nights, each centred on its mean for that calendar month over the data's
+ * years (so that none of them takes over the seasonal pattern; our rule), with Newey–West
+ * standard errors that allow for autocorrelation ([1]; Bartlett weights, lag ⌊4 (n/100)^{2/9}⌋
+ * after [2]), scaled by n/(n − k) (the usual degrees-of-freedom adjustment, common practice), and
+ * two-sided normal p-values; whether an effect counts is the caller's decision.
+ *
+ * <p>Note on the lag: in [2], 4 (n/100)^{2/9} is the preliminary lag of the automatic procedure,
+ * from which the bandwidth is then estimated (from memory); here, as is common practice, it is the
+ * lag itself. Weekday regressors for Friday and Saturday only are our rule (nights in tourism); a
+ * regressor that does not vary within the calendar months is dropped (our rule).
  *
  * <p>A user's own moving holidays ({@link Holiday}) enter the same way as Easter: the share of
  * the year's holiday days in the period, centred per calendar month.
@@ -29,6 +34,18 @@ import org.apache.commons.math3.linear.RealMatrix;
  *
  * <p>Monthly and quarterly data only: weekly and daily data carry the weekday in their seasonal
  * pattern, and annual data have no calendar to speak of.
+ *
+ * <p>References:
+ * <ol>
+ * <li>W. K. Newey and K. D. West (1987), "A Simple, Positive Semi-Definite, Heteroskedasticity and
+ *     Autocorrelation Consistent Covariance Matrix", <i>Econometrica</i> 55(3), 703–708.
+ *     doi:10.2307/1913610</li>
+ * <li>W. K. Newey and K. D. West (1994), "Automatic Lag Selection in Covariance Matrix
+ *     Estimation", <i>Review of Economic Studies</i> 61(4), 631–653. doi:10.2307/2297912</li>
+ * <li>W. R. Bell and S. C. Hillmer (1983), "Modeling Time Series With Calendar Variation",
+ *     <i>Journal of the American Statistical Association</i> 78(383), 526–534.
+ *     doi:10.1080/01621459.1983.10478005 (see {@link CalendarRegressors})</li>
+ * </ol>
  */
 public final class CalendarEffects {
 
@@ -63,7 +80,7 @@ public final class CalendarEffects {
         return frequency == Frequency.MONTHLY || frequency == Frequency.QUARTERLY;
     }
 
-    /** The centred regressors of each period, columns in the order of {@link #names}. */
+    /** The centred regressors of each period, columns in the order of {@code names}. */
     static double[][] regressors(Period start, int n, int easterWindow, List<String> names) {
         return regressors(start, n, easterWindow, List.of(), names);
     }
@@ -96,10 +113,12 @@ public final class CalendarEffects {
                 count[t % period]++;
             }
             double ss = 0;
+            // each regressor less its mean for the calendar month (or quarter) over the data's years
             for (int t = 0; t < n; t++) {
                 centred[t][c] = raw[t][c] - sum[t % period] / count[t % period];
                 ss += centred[t][c] * centred[t][c];
             }
+            // a regressor that does not vary within the calendar months carries nothing (our rule)
             if (ss > 1e-12) {
                 keep.add(c);
             }
@@ -153,6 +172,7 @@ public final class CalendarEffects {
             y[r] = irregular[t];
         }
         RealMatrix design = new Array2DRowRealMatrix(x, false);
+        // ordinary least squares: β = (X′X)⁻¹ X′y
         RealMatrix xtxInverse = new LUDecomposition(design.transpose().multiply(design)).getSolver().getInverse();
         double[] beta = xtxInverse.operate(design.transpose().operate(y));
         double[] e = new double[n];
@@ -163,9 +183,12 @@ public final class CalendarEffects {
             }
             e[r] = y[r] - fit;
         }
+        // [2] the lag ⌊4 (n/100)^{2/9}⌋ (see the note on the lag above)
         int lags = (int) Math.floor(4 * Math.pow(n / 100.0, 2.0 / 9.0));
         double[][] s = new double[k][k];
         for (int lag = 0; lag <= lags; lag++) {
+            // [1] Bartlett weight w_j = 1 − j/(L + 1) in
+            // S = Σ_t e_t² x_t x′_t + Σ_{j≥1} w_j Σ_t e_t e_{t−j} (x_t x′_{t−j} + x_{t−j} x′_t)
             double w = lag == 0 ? 1 : 1 - lag / (lags + 1.0);
             for (int r = lag; r < n; r++) {
                 double ee = e[r] * e[r - lag];
@@ -177,11 +200,13 @@ public final class CalendarEffects {
                 }
             }
         }
+        // [1] the sandwich (X′X)⁻¹ S (X′X)⁻¹, times n/(n − k) (the degrees-of-freedom adjustment)
         RealMatrix covariance = xtxInverse.multiply(new Array2DRowRealMatrix(s, false)).multiply(xtxInverse)
                 .scalarMultiply(n / (double) (n - k));
         List<Effect> effects = new ArrayList<>();
         for (int j = 1; j < k; j++) {
             double se = Math.sqrt(Math.max(0, covariance.getEntry(j, j)));
+            // two-sided p from the normal approximation of β/se; p = 1 when se is 0 (our rule)
             double p = se == 0 ? 1 : 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(beta[j] / se));
             effects.add(new Effect(names.get(j - 1), beta[j], se, p));
         }

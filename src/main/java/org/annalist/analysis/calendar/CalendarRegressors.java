@@ -9,13 +9,27 @@ import org.annalist.series.Period;
  * many of each weekday it has, and its length. Tourism counts respond to all three: Easter
  * holidays move between March and April, Friday and Saturday nights fill hotels, and a leap-year
  * February has 3.6 % more days.
+ *
+ * <p>The Easter share is the Easter regressor of [1]: activity changes on the w days before
+ * Easter Sunday, and a period's regressor is the fraction of those days it holds (the form
+ * attributed to [1] from memory). Counting weekdays is plain calendar arithmetic.
+ *
+ * <p>References:
+ * <ol>
+ * <li>W. R. Bell and S. C. Hillmer (1983), "Modeling Time Series With Calendar Variation",
+ *     <i>Journal of the American Statistical Association</i> 78(383), 526–534.
+ *     doi:10.1080/01621459.1983.10478005</li>
+ * <li>The R package rjd3toolkit (the R interface of JDemetra+ 3), documentation of
+ *     {@code set_easter}: the duration of the Easter effect defaults to 8 days in the
+ *     RegARIMA/X-13 specification and to 6 in TRAMO.</li>
+ * </ol>
  */
 public final class CalendarRegressors {
 
     /**
-     * The days before Easter Sunday counted as its holiday: 8, the usual default of the standard
-     * seasonal-adjustment programs' Easter regressor (common practice; from memory). 1 (Holy
-     * Saturday only) and 15 are tested alternatives.
+     * The days before Easter Sunday counted as its holiday: 8, the default duration of the Easter
+     * regressor in the X-13 (RegARIMA) specification as JDemetra+ documents it [2] (TRAMO's is 6).
+     * 1 (Holy Saturday only) and 15 are tested alternatives.
      */
     public static final int DEFAULT_EASTER_WINDOW = 8;
 
@@ -34,7 +48,7 @@ public final class CalendarRegressors {
         long inside = 0;
         for (int year = from.getYear(); year <= to.getYear(); year++) {
             long easter = Easter.sunday(year).toEpochDay();
-            // the window's days easter − window .. easter − 1 that the period covers
+            // [1] the window's days easter − window .. easter − 1 that the period covers
             inside += Math.max(0, Math.min(easter - 1, last) - Math.max(easter - window, first) + 1);
         }
         return inside / (double) window;

@@ -4,20 +4,29 @@ import java.time.LocalDate;
 
 /**
  * Western (Gregorian) Easter Sunday by the "anonymous Gregorian" algorithm of Meeus, Jones and
- * Butcher (J. Meeus, <i>Astronomical Algorithms</i>, 1991, ch. 8; after Butcher's Ecclesiastical
- * Calendar, 1876): integer arithmetic only, valid for every Gregorian year with no exceptions,
- * unlike Gauss's formula, which needs two.
+ * Butcher ([1] ch. 8; after Butcher's <i>Ecclesiastical Calendar</i>, 1876): integer arithmetic
+ * only, valid for every Gregorian year with no exceptions, unlike Gauss's formula, which needs two.
+ *
+ * <p>References:
+ * <ol>
+ * <li>J. Meeus (1991), <i>Astronomical Algorithms</i>, Willmann-Bell, Richmond, ch. 8 "Date of
+ *     Easter" (no DOI; the chapter title from memory).</li>
+ * </ol>
  */
 public final class Easter {
 
     private Easter() {
     }
 
-    /** @throws IllegalArgumentException before 1583, when the Gregorian calendar was not yet in use */
+    /**
+     * @throws IllegalArgumentException before 1583, the first full year of the Gregorian calendar
+     *                                  (introduced in October 1582)
+     */
     public static LocalDate sunday(int year) {
         if (year < 1583) {
             throw new IllegalArgumentException("the Gregorian Easter is defined from 1583, not for " + year);
         }
+        // [1] ch. 8: the anonymous Gregorian algorithm, step by step (a … m, then month and day)
         int a = year % 19;
         int b = year / 100;
         int c = year % 100;

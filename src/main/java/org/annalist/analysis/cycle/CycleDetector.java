@@ -16,18 +16,27 @@ import org.annalist.analysis.season.Periodogram;
  *     divided by the cycles the data must hold (default {@value #DEFAULT_CYCLES_IN_DATA});</li>
  * <li>the highest candidate ordinate is tested against a red-noise background: an AR(1) spectrum
  *     {@code S(f) ∝ (1 − r²)/(1 − 2r cos 2πf + r²)} [1] with r the lag-1 autocorrelation of the
- *     detrended values, scaled to the periodogram's mean; under it each ordinate is
- *     S(f)·χ²₂/2, so the chance that the largest of M candidates reaches I is
- *     {@code 1 − (1 − e^{−I/S})^M} (the maximum over M ordinates, Fisher's idea, from memory);</li>
+ *     detrended values (clipped to ±0.95, our rule), scaled to the periodogram's mean (our rule);
+ *     under it each ordinate is S(f)·χ²₂/2 (the usual large-sample distribution of a periodogram
+ *     ordinate [4]), so the chance that the largest of M candidates reaches I is
+ *     {@code 1 − (1 − e^{−I/S})^M}, the ordinates taken as independent. Testing the largest
+ *     ordinate rather than a chosen one is Fisher's idea [2]; his g divides it by the sum of the
+ *     ordinates under white noise, where this test divides it by the fitted background;</li>
  * <li>the peaks: local maxima at least half a period apart; their gaps give the length, and the
- *     gaps' coefficient of variation how regular the cycle is.</li>
+ *     gaps' coefficient of variation how regular the cycle is (our rules).</li>
  * </ol>
  *
  * <p>References:
  * <ol>
- * <li>D. L. Gilman, F. J. Fuglister and J. M. Mitchell (1963), "On the power spectrum of 'red
- *     noise'", <i>Journal of the Atmospheric Sciences</i> 20, 182–184,
- *     doi:10.1175/1520-0469(1963)020&lt;0182:OTPSON&gt;2.0.CO;2 (DOI from memory).</li>
+ * <li>D. L. Gilman, F. J. Fuglister and J. M. Mitchell (1963), "On the Power Spectrum of 'Red
+ *     Noise'", <i>Journal of the Atmospheric Sciences</i> 20, 182–184.
+ *     doi:10.1175/1520-0469(1963)020&lt;0182:OTPSON&gt;2.0.CO;2</li>
+ * <li>R. A. Fisher (1929), "Tests of Significance in Harmonic Analysis", <i>Proceedings of the
+ *     Royal Society of London, Series A</i> 125(796), 54–59. doi:10.1098/rspa.1929.0151</li>
+ * <li>R. J. Hyndman and G. Athanasopoulos (2021), <i>Forecasting: Principles and Practice</i>,
+ *     3rd ed., OTexts, Melbourne; https://otexts.com/fpp3/ (no DOI).</li>
+ * <li>P. Bloomfield (2000), <i>Fourier Analysis of Time Series: An Introduction</i>, 2nd ed.,
+ *     Wiley, New York. doi:10.1002/0471722235 (DOI from memory)</li>
  * </ol>
  */
 public final class CycleDetector {
@@ -61,9 +70,9 @@ public final class CycleDetector {
 
     /** Yearly values needed to look for a cycle at all (our rule). */
     public static final int DEFAULT_MINIMUM_YEARS = 12;
-    /** A cycle is longer than two years (Hyndman &amp; Athanasopoulos 2021, §2.3: cycles last "at least 2 years"). */
+    /** A cycle is longer than two years ([3] §2.3: cycles last "at least 2 years"). */
     public static final double DEFAULT_SHORTEST_CYCLE_YEARS = 2.0;
-    /** At least two complete cycles in the data (rule of thumb, research notes C7). */
+    /** At least two complete cycles in the data (our rule of thumb; no published source). */
     public static final double DEFAULT_CYCLES_IN_DATA = 2.0;
 
     private final int minimumYears;
@@ -106,6 +115,7 @@ public final class CycleDetector {
         for (double p : power) {
             meanPower += p / power.length;
         }
+        // the lag-1 autocorrelation, clipped to ±0.95 so that the background stays finite (our rule)
         double r = Math.max(-0.95, Math.min(0.95, spectrum.residualLag1()));
         double[] background = new double[power.length];
         double meanBackground = 0;
@@ -123,6 +133,7 @@ public final class CycleDetector {
                 continue;
             }
             candidates++;
+            // I/S with the background scaled to the periodogram's mean (our rule)
             double ratio = power[k] / (background[k] * meanPower / meanBackground);
             if (ratio > bestRatio) {
                 bestRatio = ratio;
@@ -132,6 +143,7 @@ public final class CycleDetector {
         if (best < 0) {
             return unmeasured(Status.NO_CANDIDATE_PERIOD, n);
         }
+        // [4] I/S ~ χ²₂/2 = Exp(1) under red noise; [2] the largest of M: 1 − (1 − e^{−I/S})^M
         double pValue = 1 - Math.pow(1 - Math.exp(-bestRatio), candidates);
         double spectralPeriod = spectrum.period(best);
         List<Integer> peaks = peaks(detrend(yearly), spectralPeriod);

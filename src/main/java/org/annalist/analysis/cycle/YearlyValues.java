@@ -10,7 +10,7 @@ import org.annalist.series.Period;
  * One value per calendar year, what a cycle is looked for in: the annual values themselves, or the
  * means over the calendar years the data cover completely. A partial first or last year is left
  * out (its mean would carry the season of the months it has); an interior year with a missing
- * value is filled by a straight line between its neighbours.
+ * value is filled by a straight line between its neighbours (both our rules).
  *
  * @param years  the calendar year of each value
  * @param values the yearly values, no missing ones
@@ -60,7 +60,7 @@ public record YearlyValues(List<Integer> years, double[] values) {
         return fillInterior(yearly) ? Optional.of(new YearlyValues(years, yearly)) : Optional.empty();
     }
 
-    /** Periods of a complete calendar year (weeks and days vary; the lower count is enough). */
+    /** Periods of a complete calendar year (weeks and days vary; the lower count is enough: our rule). */
     private static int fullYear(Frequency frequency) {
         return switch (frequency) {
             case ANNUAL -> 1;

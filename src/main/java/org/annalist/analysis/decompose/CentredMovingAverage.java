@@ -9,12 +9,19 @@ import org.annalist.series.Frequency;
  * <p>For an odd window {@code m} every value is the plain mean of the {@code m} values centred on
  * it. For an even window it is the "2×m" average: the mean of two adjacent {@code m}-term means,
  * i.e. weights {@code 1/(2m)} on the two outermost of {@code m + 1} values and {@code 1/m} inside
- * (Hyndman &amp; Athanasopoulos, <i>Forecasting: Principles and Practice</i>, 3rd ed., 2021, §3.3,
- * "Moving averages of moving averages"; the same filter as R's {@code decompose}).
+ * ([1] §3.3, "Moving averages of moving averages"; the same filter as R's {@code decompose} [2]).
  *
  * <p>The first and last {@code ⌊m/2⌋} values have no centred window and are {@code NaN}; so is
  * every value whose window contains a missing value, since an average over part of a season would
- * carry that season's pattern into the trend.
+ * carry that season's pattern into the trend (our rule).
+ *
+ * <p>References:
+ * <ol>
+ * <li>R. J. Hyndman and G. Athanasopoulos (2021), <i>Forecasting: Principles and Practice</i>,
+ *     3rd ed., OTexts, Melbourne; https://otexts.com/fpp3/ (no DOI).</li>
+ * <li>R Core Team, {@code decompose} in the {@code stats} package,
+ *     {@code src/library/stats/R/decompose.R}.</li>
+ * </ol>
  */
 public final class CentredMovingAverage {
 
@@ -39,7 +46,8 @@ public final class CentredMovingAverage {
 
     /**
      * The window that spans one seasonal cycle: 12 months, 4 quarters, 52 weeks, 7 days, 5 business
-     * days; for annual data, which have no season, 5 years (common practice for smoothing annual data).
+     * days; for annual data, which have no season, 5 years (common practice for smoothing annual
+     * data, no source).
      */
     public static int windowFor(Frequency frequency) {
         return frequency == Frequency.ANNUAL ? 5 : frequency.seasonalPeriod();
@@ -60,6 +68,7 @@ public final class CentredMovingAverage {
         }
         double[] weights = new double[span];
         Arrays.fill(weights, 1.0 / window);
+        // [1] §3.3: 2×m weights, 1/(2m) at both ends and 1/m inside; plain 1/m for odd m
         if (even) {
             weights[0] = weights[span - 1] = 0.5 / window;
         }

@@ -7,6 +7,9 @@ import java.util.Optional;
  * long-run (least-squares) line that the remainder of the decomposition carries,
  * {@code Var(R) / Var(y − line)} over the periods where the remainder exists. What is not
  * irregular is trend-cycle wander and the seasonal pattern.
+ *
+ * <p>The share is our measure (no published source). It is capped at 1, and at least three
+ * periods with a remainder are asked for (both our rules).
  */
 public final class Irregular {
 

@@ -5,9 +5,22 @@ package org.annalist.analysis.decompose;
  * with tricube neighbourhood weights (times robustness weights when given), evaluated every
  * {@code jump}-th point and linearly interpolated in between.
  *
- * <p>Ports of the reference routines {@code stless} and {@code stlest} of Cleveland et al.
- * (1990), keeping their 1-based positions in the arithmetic so that the results agree to the last
- * bits; arrays here are 0-based.
+ * <p>Ports of the reference routines {@code stless} and {@code stlest} of Cleveland et al. [1],
+ * in the form R runs them [2], keeping their 1-based positions in the arithmetic so that the
+ * results agree to the last bits; arrays here are 0-based. Loess itself, with tricube weights, is
+ * Cleveland's locally weighted regression [3].
+ *
+ * <p>References:
+ * <ol>
+ * <li>R. B. Cleveland, W. S. Cleveland, J. E. McRae and I. Terpenning (1990), "STL: A
+ *     Seasonal-Trend Decomposition Procedure Based on Loess", <i>Journal of Official
+ *     Statistics</i> 6(1), 3–73 (no DOI).</li>
+ * <li>R Core Team, {@code src/library/stats/src/stl.f} (R 4.2), subroutines {@code stless} and
+ *     {@code stlest}.</li>
+ * <li>W. S. Cleveland (1979), "Robust Locally Weighted Regression and Smoothing Scatterplots",
+ *     <i>Journal of the American Statistical Association</i> 74(368), 829–836.
+ *     doi:10.1080/01621459.1979.10481038</li>
+ * </ol>
  */
 final class Loess {
 
@@ -61,6 +74,7 @@ final class Loess {
                 fitAt(y, n, len, degree, i, ys, offset, nleft, nright, work, userw, rw);
             }
         }
+        // [1] stless: between the evaluated points the smooth is interpolated linearly
         if (newnj != 1) {
             for (int i = 1; i <= n - newnj; i += newnj) {
                 double delta = (ys[offset + i + newnj - 1] - ys[offset + i - 1]) / newnj;
@@ -112,6 +126,7 @@ final class Loess {
                 if (r <= h1) {
                     w[j - 1] = 1;
                 } else {
+                    // [3] tricube weight (1 − (r/h)³)³; 1 within 0.001 h and 0 beyond 0.999 h as in [1]
                     double q = r / h;
                     double t = 1 - q * q * q;
                     w[j - 1] = t * t * t;                        // tricube
@@ -128,6 +143,7 @@ final class Loess {
         for (int j = nleft; j <= nright; j++) {
             w[j - 1] /= a;
         }
+        // [1] stlest, degree 1: the weights of the local weighted least-squares line at xs
         if (h > 0 && degree > 0) {
             double mean = 0;
             for (int j = nleft; j <= nright; j++) {

@@ -9,12 +9,13 @@ package org.annalist.analysis.decompose;
  * average and the swing W the standard deviation of the values around it; the elasticity b is the
  * least-squares slope of log W on log L (b = 0 additive, b = 1 multiplicative, [1] §3.2), and the
  * level ratio the largest over the smallest yearly level, which says whether the level varied
- * enough for b to mean something.
+ * enough for b to mean something. [1] §3.2 describes the two forms; measuring the choice by this
+ * slope is our rule, as is leaving out cycles with a missing value or no swing.
  *
  * <p>References:
  * <ol>
  * <li>R. J. Hyndman and G. Athanasopoulos (2021), <i>Forecasting: Principles and Practice</i>,
- *     3rd ed., OTexts.</li>
+ *     3rd ed., OTexts, Melbourne; https://otexts.com/fpp3/ (no DOI).</li>
  * </ol>
  */
 public final class ModelForm {
@@ -94,6 +95,7 @@ public final class ModelForm {
         if (used < MIN_CYCLES) {
             return new Evidence(Status.TOO_SHORT, Double.NaN, Double.NaN, used);
         }
+        // [1] §3.2: a swing of constant size gives b near 0 (additive), one growing with the level b near 1
         return new Evidence(Status.MEASURED, slope(logLevel, logSwing, used), maxLevel / minLevel, used);
     }
 

@@ -7,8 +7,14 @@ package org.annalist.analysis.decompose;
  * (descending) order, for which the routine does not always leave the exact order statistics
  * there. Reproducing R's robust fits to 1e-6 needs the same values, so the routine is kept as it is.
  *
- * <p>Source: R 4.2 {@code src/library/stats/src/stl.f}, subroutine {@code psort} (after Singleton's
- * quickersort, CACM Algorithm 347).
+ * <p>Source: [1], subroutine {@code psort}, after Singleton's quickersort [2].
+ *
+ * <p>References:
+ * <ol>
+ * <li>R Core Team, {@code src/library/stats/src/stl.f} (R 4.2).</li>
+ * <li>R. C. Singleton (1969), "Algorithm 347: An Efficient Algorithm for Sorting with Minimal
+ *     Storage", <i>Communications of the ACM</i> 12(3), 185–187. doi:10.1145/362875.362901</li>
+ * </ol>
  */
 final class PartialSort {
 
@@ -62,6 +68,7 @@ final class PartialSort {
                 }
                 case 173 -> label = j - i > 10 ? 10 : 174;
                 case 10 -> {
+                    // [2] median of a[i], a[ij], a[j] as the pivot, then the two-sided partition
                     k = i;
                     int ij = (i + j) / 2;
                     t = a[ij];
@@ -134,6 +141,7 @@ final class PartialSort {
                         }
                     }
                 }
+                // [1] at most 11 values left: insertion sort, unless the segment starts at position 1
                 case 174 -> {
                     if (i != 1) {
                         i--;

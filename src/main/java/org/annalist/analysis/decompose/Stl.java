@@ -6,28 +6,33 @@ import java.util.Optional;
 /**
  * STL, the seasonal-trend decomposition by loess: {@code y = seasonal + trend + remainder}.
  *
- * <p>A faithful port of the reference Fortran of Cleveland et al. (routines {@code stl},
+ * <p>A faithful port of the reference Fortran of Cleveland et al. [1] (routines {@code stl},
  * {@code stlstp}, {@code stlss}, {@code stlfts}, {@code stless}, {@code stlest}, {@code stlrwt}),
- * as R's {@code stats::stl} runs it: inner loop of cycle-subseries smoothing, low-pass filtering
- * (moving averages of length n_p, n_p, 3, then loess) and trend smoothing; outer loop of bisquare
- * robustness weights with h = 6 × median |R|; loess of degree 0 or 1 with tricube neighbourhood
- * weights, evaluated every {@code jump}-th point and interpolated linearly in between.
+ * as R's {@code stats::stl} runs it [2]: inner loop of cycle-subseries smoothing, low-pass
+ * filtering (moving averages of length n_p, n_p, 3, then loess) and trend smoothing; outer loop of
+ * bisquare robustness weights with h = 6 × median |R|; loess of degree 0 or 1 with tricube
+ * neighbourhood weights, evaluated every {@code jump}-th point and interpolated linearly in between.
  *
- * <p>Missing values ({@code NaN}) are handled as the paper describes: they take weight zero in
- * every loess fit, so the seasonal and trend components are estimated there from their
- * neighbours, while the remainder stays missing. (R's {@code stl} refuses missing values; with none,
- * the two agree.)
+ * <p>Missing values ({@code NaN}) are handled as the paper [1] describes: they take weight zero
+ * in every loess fit, so the seasonal and trend components are estimated there from their
+ * neighbours, while the remainder stays missing. (R's {@code stl} refuses missing values; with
+ * none, the two agree.)
  *
- * <p>Defaults follow R: trend window {@code nextodd(ceil(1.5 n_p / (1 − 1.5 / n_s)))}, low-pass
- * window {@code nextodd(n_p)}, degrees 0 (seasonal), 1 (trend, low-pass), jumps
- * {@code ceil(window / 10)}; robust: 1 inner and 15 outer iterations, else 2 and 0. A periodic
- * seasonal ({@link #periodic()}) smooths with a window of 10n + 1 and degree 0, then replaces each
- * cycle position by its mean, as R does.
+ * <p>Defaults follow R [2]: trend window {@code nextodd(ceil(1.5 n_p / (1 − 1.5 / n_s)))} (the
+ * paper's choice [1]), low-pass window {@code nextodd(n_p)}, degrees 0 (seasonal), 1 (trend,
+ * low-pass), jumps {@code ceil(window / 10)}; robust: 1 inner and 15 outer iterations, else 2 and
+ * 0. A periodic seasonal ({@link #periodic()}) smooths with a window of 10n + 1 and degree 0, then
+ * replaces each cycle position by its mean, as R does. The seasonal window of
+ * {@link #withPeriod} is our choice (see there).
  *
- * <p>References: [1] R. B. Cleveland, W. S. Cleveland, J. E. McRae and I. Terpenning (1990),
- * "STL: A Seasonal-Trend Decomposition Procedure Based on Loess", <i>Journal of Official
- * Statistics</i> 6(1), 3–73. [2] R Core Team, {@code src/library/stats/R/stl.R} and
- * {@code src/library/stats/src/stl.f} (R 4.2).
+ * <p>References:
+ * <ol>
+ * <li>R. B. Cleveland, W. S. Cleveland, J. E. McRae and I. Terpenning (1990), "STL: A
+ *     Seasonal-Trend Decomposition Procedure Based on Loess", <i>Journal of Official
+ *     Statistics</i> 6(1), 3–73 (no DOI).</li>
+ * <li>R Core Team, {@code src/library/stats/R/stl.R} and {@code src/library/stats/src/stl.f}
+ *     (R 4.2).</li>
+ * </ol>
  */
 public final class Stl {
 
@@ -124,7 +129,8 @@ public final class Stl {
 
     /**
      * STL for {@code period} observations per cycle with a seasonal window of 13 (about a decade of
-     * Januaries weighs in each January's value; odd and ≥ 7, as the paper asks), robust.
+     * Januaries weighs in each January's value; odd and ≥ 7, as the paper asks [1]), robust. The
+     * value 13 is our choice: R's {@code stl} has no default seasonal window.
      */
     public static Stl withPeriod(int period) {
         if (period < 2) {
@@ -187,10 +193,13 @@ public final class Stl {
                     + " observations or more for period " + period + ", got " + n);
         }
         boolean periodic = seasonalWindow == null;
+        // [2] stl.R: a periodic seasonal is smoothed with window 10 n + 1 (degree 0)
         int ns = periodic ? 10 * n + 1 : seasonalWindow;
         int sDegree = 0;
+        // [1], [2]: n_t = nextodd(ceil(1.5 n_p / (1 − 1.5 / n_s))), n_l = nextodd(n_p)
         int nt = trendWindow != null ? trendWindow : nextOdd((int) Math.ceil(1.5 * period / (1 - 1.5 / ns)));
         int nl = nextOdd(period);
+        // [2] stl.R: robust 1 inner and 15 outer passes, else 2 and 0
         int ni = inner != null ? inner : robustness == Robustness.ON ? 1 : 2;
         int no = outer != null ? outer : robustness == Robustness.ON ? 15 : 0;
         Parameters p = new Parameters(period, ns, sDegree, nt, 1, nl, 1, jump(ns), jump(nt), jump(nl), ni, no, periodic);
@@ -249,6 +258,7 @@ public final class Stl {
         return x % 2 == 0 ? x + 1 : x;
     }
 
+    /** [2] the jump of a loess window, ceil(window / 10). */
     private static int jump(int window) {
         return (int) Math.ceil(window / 10.0);
     }
@@ -366,6 +376,7 @@ public final class Stl {
         int mid1 = m / 2 + 1;                                               // 1-based, as in [1]
         int mid2 = m - mid1 + 1;
         PartialSort.psort(sorted, m, new int[] {mid1, mid2});
+        // [1] h = 6 × median |R|: 3 × the sum of the two middle values
         double h = 3.0 * (sorted[mid1 - 1] + sorted[mid2 - 1]);
         double c9 = SINGLE_0_999 * h;
         double c1 = SINGLE_0_001 * h;
@@ -378,6 +389,7 @@ public final class Stl {
             if (r <= c1) {
                 rw[i] = 1;
             } else if (r <= c9) {
+                // [1] the bisquare weight B(u) = (1 − u²)²
                 double u = r / h;
                 rw[i] = (1 - u * u) * (1 - u * u);
             } else {

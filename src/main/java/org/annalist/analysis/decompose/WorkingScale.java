@@ -6,7 +6,14 @@ import java.util.Optional;
 /**
  * The scale the analysis works on and the way back: a multiplicative series is decomposed in
  * logarithms (seasonal factors become additive terms), and its components are turned back into the
- * series' units by the exponential; an additive series works on its own values.
+ * series' units by the exponential; an additive series works on its own values. An additive
+ * decomposition of the logs is a multiplicative decomposition of the series ([1] §3.2).
+ *
+ * <p>References:
+ * <ol>
+ * <li>R. J. Hyndman and G. Athanasopoulos (2021), <i>Forecasting: Principles and Practice</i>,
+ *     3rd ed., OTexts, Melbourne; https://otexts.com/fpp3/ (no DOI).</li>
+ * </ol>
  */
 public final class WorkingScale {
 

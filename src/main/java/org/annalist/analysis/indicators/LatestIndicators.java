@@ -14,9 +14,9 @@ import org.annalist.series.ValueFlag;
  * two years earlier; year-to-date and the rolling year against the same spans a year before; the
  * seasonally adjusted change on the previous period; the rank among the same period of every
  * year; records. Flows (nights, arrivals) are summed over spans; levels and rates (occupancy,
- * prices) are averaged, never summed (common practice in official tourism statistics, see
- * research notes A1); ratios (average length of stay, occupancy) take the ratio of the parts'
- * sums. Spans with a missing value are not compared.
+ * prices) are averaged, never summed (common practice in official tourism statistics; no source);
+ * ratios (average length of stay, occupancy) take the ratio of the parts' sums (common practice,
+ * no source). Spans with a missing value are not compared (our rule).
  */
 public final class LatestIndicators {
 
@@ -25,7 +25,8 @@ public final class LatestIndicators {
 
     /**
      * The parts of a ratio series (nights / arrivals, nights / bed-nights available × 100): over a
-     * span the ratio is the ratio of the sums, not the mean of the ratios (research notes A1).
+     * span the ratio is the ratio of the sums, not the mean of the ratios (common practice, no
+     * source: the mean of monthly ratios would weigh a quiet month like a busy one).
      */
     public record Parts(Series numerator, Series denominator, double scale) {
     }

@@ -6,7 +6,7 @@ import org.annalist.series.Series;
 
 /**
  * The change of a value against the same period one year earlier, the headline comparison of
- * monthly visitor statistics (common practice in official tourism releases).
+ * monthly visitor statistics (common practice in official tourism releases; no source).
  */
 public final class YearOnYear {
 
@@ -21,7 +21,8 @@ public final class YearOnYear {
 
     /**
      * Periods back to "the same period last year": 1 year, 4 quarters, 12 months, 52 weeks, 364 days
-     * (52 weeks, so that a Saturday is compared with a Saturday) or 260 business days.
+     * (52 weeks, so that a Saturday is compared with a Saturday) or 260 business days (52 weeks of
+     * five); the choices for weeks and days are our rules.
      */
     public static int lag(Frequency frequency) {
         return switch (frequency) {

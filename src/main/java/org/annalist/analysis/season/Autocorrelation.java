@@ -1,9 +1,17 @@
 package org.annalist.analysis.season;
 
 /**
- * The sample autocorrelation function as R's {@code acf} computes it (Box &amp; Jenkins 1976, eq. 2.1.11):
+ * The sample autocorrelation function as R's {@code acf} computes it [2] ([1] eq. 2.1.11):
  * {@code r_k = Σ_{t=1}^{n−k} (x_t − x̄)(x_{t+k} − x̄) / Σ_{t=1}^{n} (x_t − x̄)²}.
- * Missing values are left out of every sum that would contain them.
+ * Missing values are left out of every sum that would contain them (our rule; the mean and the
+ * denominator use the observed values).
+ *
+ * <p>References:
+ * <ol>
+ * <li>G. E. P. Box and G. M. Jenkins (1976), <i>Time Series Analysis: Forecasting and Control</i>,
+ *     revised ed., Holden-Day, San Francisco.</li>
+ * <li>R Core Team, {@code acf} in the {@code stats} package, {@code src/library/stats/R/acf.R}.</li>
+ * </ol>
  */
 public final class Autocorrelation {
 
@@ -40,6 +48,7 @@ public final class Autocorrelation {
                     sum += product;
                 }
             }
+            // [1] eq. 2.1.11: r_k = c_k / c_0, both sums over the same (implicit 1/n) scale
             r[k] = sum / variance;
         }
         return r;

@@ -10,8 +10,16 @@ import org.apache.commons.math3.special.Gamma;
  * The Kruskal–Wallis rank test that several groups come from one distribution: here, that the
  * detrended values of every season position are alike (no seasonal pattern).
  * {@code H = [12 / (N(N+1)) Σ_g R_g² / n_g − 3(N+1)] / [1 − Σ(t³ − t)/(N³ − N)]}, p from χ² with
- * G − 1 degrees of freedom (Kruskal &amp; Wallis 1952, <i>JASA</i> 47, 583–621, eq. 1.1 and the ties
- * correction eq. 1.2).
+ * G − 1 degrees of freedom, G the groups that hold a value ([1] eq. 1.1 and the ties correction
+ * eq. 1.2). The χ² approximation is used at every sample size (no exact small-sample
+ * distribution).
+ *
+ * <p>References:
+ * <ol>
+ * <li>W. H. Kruskal and W. A. Wallis (1952), "Use of Ranks in One-Criterion Variance Analysis",
+ *     <i>Journal of the American Statistical Association</i> 47(260), 583–621.
+ *     doi:10.1080/01621459.1952.10483441</li>
+ * </ol>
  */
 public final class KruskalWallis {
 
@@ -54,10 +62,13 @@ public final class KruskalWallis {
         if (nonEmpty < 2) {
             throw new IllegalArgumentException("the Kruskal-Wallis test needs at least two groups with values");
         }
+        // [1] eq. 1.1: H = 12/(N(N+1)) Σ R_g²/n_g − 3(N+1)
         double h = 12.0 / (n * (n + 1.0)) * sum - 3.0 * (n + 1);
         double ties = Ranks.tieSum(x);
+        // [1] eq. 1.2: divided by 1 − Σ(t³ − t)/(N³ − N) for ties; all values tied gives H = 0 (our rule)
         double correction = 1 - ties / ((double) n * n * n - n);
         h = correction > 0 ? h / correction : 0;
+        // [1] p from χ² with G − 1 degrees of freedom: Q(k/2, H/2) is its upper tail.
         // The upper tail directly, so that very small p-values do not round to zero.
         double p = h <= 0 ? 1 : Gamma.regularizedGammaQ((nonEmpty - 1) / 2.0, h / 2);
         return new TestResult(TestResult.Method.KRUSKAL_WALLIS, h, Math.max(0, Math.min(1, p)), n);

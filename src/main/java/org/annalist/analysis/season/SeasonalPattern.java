@@ -21,19 +21,21 @@ import org.annalist.series.Period;
  * <li>the profile of the first {@value #PROFILE_YEARS} complete years against the last, for a
  *     pattern that changed;</li>
  * <li>the period confirmed from the data: the autocorrelation of the detrended values at the
- *     seasonal lag (positive, beyond 2/√n and a local peak).</li>
+ *     seasonal lag (positive, beyond 2/√n and a local peak). 2/√n rounds the approximate 95 %
+ *     bound 1.96/√n for the autocorrelations of white noise (common practice; see [3] §2.9);
+ *     asking for a local peak as well is our rule.</li>
  * </ul>
  *
  * <p>References:
  * <ol>
- * <li>X. Wang, K. A. Smith and R. J. Hyndman (2006), "Characteristic-based clustering for time
- *     series data", <i>Data Mining and Knowledge Discovery</i> 13, 335–364,
- *     doi:10.1007/s10618-005-0039-x (DOI from memory).</li>
- * <li>W. H. Kruskal and W. A. Wallis (1952), "Use of ranks in one-criterion variance analysis",
- *     <i>Journal of the American Statistical Association</i> 47, 583–621,
- *     doi:10.1080/01621459.1952.10483441 (DOI from memory).</li>
+ * <li>X. Wang, K. A. Smith and R. J. Hyndman (2006), "Characteristic-Based Clustering for Time
+ *     Series Data", <i>Data Mining and Knowledge Discovery</i> 13(3), 335–364.
+ *     doi:10.1007/s10618-005-0039-x</li>
+ * <li>W. H. Kruskal and W. A. Wallis (1952), "Use of Ranks in One-Criterion Variance Analysis",
+ *     <i>Journal of the American Statistical Association</i> 47(260), 583–621.
+ *     doi:10.1080/01621459.1952.10483441</li>
  * <li>R. J. Hyndman and G. Athanasopoulos (2021), <i>Forecasting: Principles and Practice</i>,
- *     3rd ed., OTexts.</li>
+ *     3rd ed., OTexts, Melbourne; https://otexts.com/fpp3/ (no DOI).</li>
  * </ol>
  */
 public final class SeasonalPattern {
@@ -95,6 +97,7 @@ public final class SeasonalPattern {
             detrended[t] = y[t] - trend[t];
             position[t] = (firstPosition + t) % period;
         }
+        // [2] the detrended values grouped by season position
         TestResult test = KruskalWallis.test(detrended, position, period);
         double strength = strength(seasonal, remainder);   // [1]
 
@@ -141,6 +144,7 @@ public final class SeasonalPattern {
                 varSR += (seasonal[t] + remainder[t] - meanSR) * (seasonal[t] + remainder[t] - meanSR);
             }
         }
+        // [1]; [3] §4.3: F_S = max(0, 1 − Var(R)/Var(S + R)); 0 when S + R does not vary (our rule)
         return varSR == 0 ? 0 : Math.max(0, 1 - varR / varSR);
     }
 
@@ -172,6 +176,7 @@ public final class SeasonalPattern {
     /** The seasonal lag's autocorrelation is positive, beyond 2/√n, and higher than at the lags beside it. */
     private static PeriodCheck checkPeriod(double[] detrended, int period) {
         double[] acf = Autocorrelation.of(detrended, period + 1);
+        // [3] §2.9: the approximate 95 % bound for white noise, 1.96/√n rounded to 2/√n
         double bound = 2 / Math.sqrt(detrended.length);
         boolean confirmed = acf[period] > bound && acf[period] > acf[period - 1] && acf[period] > acf[period + 1];
         return new PeriodCheck(period, acf[period], confirmed);

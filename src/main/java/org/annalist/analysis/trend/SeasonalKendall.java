@@ -5,11 +5,23 @@ import org.annalist.analysis.TestResult;
 import org.apache.commons.math3.distribution.NormalDistribution;
 
 /**
- * The seasonal Kendall test (Hirsch, Slack &amp; Smith 1982, <i>Water Resources Research</i> 18,
- * 107–121): Kendall's S within each season (all Januaries, …) over the years, summed;
- * {@code S′ = Σ_g S_g}, {@code Var(S′) = Σ_g Var(S_g)} with ties corrected within each season,
- * continuity-corrected Z, two-sided p. It removes the seasonal pattern without a model, and
- * treats the seasons as independent (no covariance term).
+ * The seasonal Kendall test [1]: Kendall's S [2] within each season (all Januaries, …) over the
+ * years, summed; {@code S′ = Σ_g S_g}, {@code Var(S′) = Σ_g Var(S_g)} with ties corrected within
+ * each season, continuity-corrected Z, two-sided p. It removes the seasonal pattern without a
+ * model, and treats the seasons as independent: the covariance terms between seasons of [3],
+ * for serially dependent data, are not added. A season with fewer than two observed years adds
+ * nothing.
+ *
+ * <p>References:
+ * <ol>
+ * <li>R. M. Hirsch, J. R. Slack and R. A. Smith (1982), "Techniques of Trend Analysis for Monthly
+ *     Water Quality Data", <i>Water Resources Research</i> 18(1), 107–121.
+ *     doi:10.1029/WR018i001p00107</li>
+ * <li>M. G. Kendall (1975), <i>Rank Correlation Methods</i>, 4th ed., Charles Griffin, London.</li>
+ * <li>R. M. Hirsch and J. R. Slack (1984), "A Nonparametric Trend Test for Seasonal Data With
+ *     Serial Dependence", <i>Water Resources Research</i> 20(6), 727–732.
+ *     doi:10.1029/WR020i006p00727</li>
+ * </ol>
  */
 public final class SeasonalKendall {
 
@@ -39,6 +51,7 @@ public final class SeasonalKendall {
             }
             KendallScore score = KendallScore.of(season);
             if (score.n() >= 2) {
+                // [1] S′ = Σ_g S_g and Var(S′) = Σ_g Var(S_g), seasons independent
                 s += score.s();
                 variance += score.variance();
                 n += score.n();
@@ -47,6 +60,7 @@ public final class SeasonalKendall {
         if (variance <= 0) {
             return Optional.empty();
         }
+        // [1] continuity-corrected Z and its two-sided normal p
         double z = KendallScore.z(s, variance);
         double p = Math.min(1, 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(z)));
         return Optional.of(new Result(new TestResult(TestResult.Method.SEASONAL_KENDALL, z, p, n), s, variance,

@@ -7,18 +7,29 @@ import org.annalist.analysis.OrderStatistics;
 import org.apache.commons.math3.distribution.NormalDistribution;
 
 /**
- * Sen's slope, the median of all pairwise slopes {@code (x_j − x_i)/(t_j − t_i)}, with the
- * rank-based 95 % interval of Gilbert (1987).
+ * Sen's slope, the median of all pairwise slopes {@code (x_j − x_i)/(t_j − t_i)} [1], with the
+ * rank-based 95 % interval of Gilbert [2].
  *
  * <p>Time is the position in the series, so a missing period keeps its place and slopes use the
- * real time between observations (Sen 1968, <i>JASA</i> 63, 1379–1389). The seasonal form uses only
- * pairs of the same season in different years (Hirsch, Slack &amp; Smith 1982, <i>Water Resources
- * Research</i> 18, 107–121).
+ * real time between observations [1]. The seasonal form uses only pairs of the same season in
+ * different years [3].
  *
- * <p>Interval (Gilbert 1987, <i>Statistical Methods for Environmental Pollution Monitoring</i>,
- * §16.5): with N′ slopes sorted and C = z_{0.975}·√Var(S), the limits are the slopes of rank
- * M1 = (N′ − C)/2 and M2 + 1 = (N′ + C)/2 + 1 (ranks from 1). Fractional ranks are interpolated
- * linearly between neighbouring slopes, not rounded.
+ * <p>Interval ([2] §16.5): with N′ slopes sorted and C = z_{0.975}·√Var(S), the limits are the
+ * slopes of rank M1 = (N′ − C)/2 and M2 + 1 = (N′ + C)/2 + 1 (ranks from 1). The level 95 % is
+ * common practice. Ranks outside 1 … N′ are clipped to it, and fractional ranks are interpolated
+ * linearly between neighbouring slopes, not rounded (both our rules).
+ *
+ * <p>References:
+ * <ol>
+ * <li>P. K. Sen (1968), "Estimates of the Regression Coefficient Based on Kendall's Tau",
+ *     <i>Journal of the American Statistical Association</i> 63(324), 1379–1389.
+ *     doi:10.1080/01621459.1968.10480934</li>
+ * <li>R. O. Gilbert (1987), <i>Statistical Methods for Environmental Pollution Monitoring</i>,
+ *     Van Nostrand Reinhold, New York, ch. 16.</li>
+ * <li>R. M. Hirsch, J. R. Slack and R. A. Smith (1982), "Techniques of Trend Analysis for Monthly
+ *     Water Quality Data", <i>Water Resources Research</i> 18(1), 107–121.
+ *     doi:10.1029/WR018i001p00107</li>
+ * </ol>
  */
 public final class SenSlope {
 
@@ -31,7 +42,10 @@ public final class SenSlope {
     public record Result(double perYear, double lower95, double upper95, int pairs, boolean seasonal) {
     }
 
-    /** Pairwise slopes are held in memory; beyond this count the caller should aggregate first. */
+    /**
+     * Pairwise slopes are held in memory; beyond this count the caller should aggregate first (our
+     * rule: 160 MB of slopes).
+     */
     public static final int MAX_PAIRS = 20_000_000;
     private static final double Z_975 = new NormalDistribution(null, 0, 1).inverseCumulativeProbability(0.975);
 
@@ -48,7 +62,7 @@ public final class SenSlope {
         return interval(slopes, periodsPerYear, varianceS, false);
     }
 
-    /** The seasonal Sen slope: within-season pairs only, time in years. */
+    /** The seasonal Sen slope [3]: within-season pairs only, time in years. */
     public static Result seasonal(double[] x, int period, double varianceS) {
         double[] slopes = pairwise(x, period);
         return interval(slopes, period, varianceS, true);
@@ -87,6 +101,7 @@ public final class SenSlope {
 
     private static double medianOf(double[] slopes) {
         int n = slopes.length;
+        // [1] the median of the pairwise slopes
         double[] middle = n % 2 == 1 ? OrderStatistics.select(slopes, n / 2)
                 : OrderStatistics.select(slopes, n / 2 - 1, n / 2);
         return n % 2 == 1 ? middle[0] : (middle[0] + middle[1]) / 2;
@@ -118,6 +133,7 @@ public final class SenSlope {
             if (!Double.isNaN(x[i])) {
                 for (int j = i + stride; j < n; j += stride) {
                     if (!Double.isNaN(x[j])) {
+                        // [1] the pair's slope over the real time between them ([3] with stride = period)
                         slopes[k++] = (x[j] - x[i]) / (j - i);
                     }
                 }
@@ -128,6 +144,7 @@ public final class SenSlope {
 
     private static Result interval(double[] slopes, double periodsPerYear, double varianceS, boolean seasonal) {
         int pairs = slopes.length;
+        // [2] §16.5: C = z_{0.975} √Var(S); limits at ranks M1 = (N′ − C)/2 and M2 + 1 = (N′ + C)/2 + 1
         double c = Z_975 * Math.sqrt(varianceS);
         double lowerRank = clip((pairs - c) / 2, pairs);
         double upperRank = clip((pairs + c) / 2 + 1, pairs);
@@ -145,6 +162,7 @@ public final class SenSlope {
         for (int i = 0; i < wanted.length; i++) {
             at.put(wanted[i], values[i]);
         }
+        // [1] the median of the slopes (the mean of the two middle ones for an even count)
         double median = (at.get((pairs - 1) / 2) + at.get(pairs / 2)) / 2;
         return new Result(median * periodsPerYear, atRank(at, lowerRank, pairs) * periodsPerYear,
                 atRank(at, upperRank, pairs) * periodsPerYear, pairs, seasonal);
@@ -154,7 +172,7 @@ public final class SenSlope {
         return Math.max(1, Math.min(pairs, rank));
     }
 
-    /** The value at 1-based rank {@code r}, interpolated between its neighbours. */
+    /** The value at 1-based rank {@code r}, interpolated linearly between its neighbours (our rule). */
     private static double atRank(Map<Integer, Double> at, double r, int pairs) {
         int below = (int) Math.floor(r);
         if (below >= pairs) {
