@@ -6,9 +6,9 @@ import java.util.Objects;
  * The outcome of a hypothesis test, as a sentence of the brief cites it.
  *
  * <p>Each {@link Method} names the test as it was run; the class that runs it lists the
- * publications behind it ({@link org.annalist.analysis.trend.MannKendall},
- * {@link org.annalist.analysis.trend.SeasonalKendall},
- * {@link org.annalist.analysis.season.KruskalWallis}, {@link org.annalist.analysis.breaks.SupF}).
+ * publications behind it ({@code trend.MannKendall},
+ * {@code trend.SeasonalKendall},
+ * {@code season.KruskalWallis}, {@code breaks.SupF}).
  * {@link #reject} compares the p-value strictly with the level: a p-value equal to {@code alpha}
  * does not reject (our convention).
  *
@@ -28,7 +28,7 @@ public record TestResult(Method method, double statistic, double pValue, int n) 
         /**
          * Mann–Kendall, variance corrected for AR(1) serial correlation of the ranks: the Hamed &amp;
          * Rao (1998) variance formula with ρ(k) = ρ₁^k (our variant; see
-         * {@link org.annalist.analysis.trend.MannKendall}).
+         * {@code trend.MannKendall}).
          */
         MANN_KENDALL_AR1,
         /** The seasonal Kendall test (Hirsch, Slack &amp; Smith 1982). */

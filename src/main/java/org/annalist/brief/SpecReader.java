@@ -61,9 +61,9 @@ public final class SpecReader {
         }
         SpecReader reader = new SpecReader(spec);
         YamlTree.Mapping top = reader.values.mapping(root, "the spec");
-        for (Map.Entry<String, int[]> key : top.keys().entrySet()) {
+        for (Map.Entry<String, YamlTree.Position> key : top.keys().entrySet()) {
             if (!key.getKey().equals("briefs")) {
-                throw new SpecProblem(spec, key.getValue()[0], key.getValue()[1], "unknown key '" + key.getKey()
+                throw new SpecProblem(spec, key.getValue().line(), key.getValue().column(), "unknown key '" + key.getKey()
                         + "'; expected 'briefs'");
             }
         }
@@ -81,9 +81,9 @@ public final class SpecReader {
     }
 
     private Job job(YamlTree.Mapping m) {
-        for (Map.Entry<String, int[]> key : m.keys().entrySet()) {
+        for (Map.Entry<String, YamlTree.Position> key : m.keys().entrySet()) {
             if (!KEYS.contains(key.getKey())) {
-                throw new SpecProblem(spec, key.getValue()[0], key.getValue()[1], "unknown key '" + key.getKey()
+                throw new SpecProblem(spec, key.getValue().line(), key.getValue().column(), "unknown key '" + key.getKey()
                         + "'; expected one of " + String.join(", ", KEYS.stream().sorted().toList()));
             }
         }

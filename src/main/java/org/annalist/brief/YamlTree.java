@@ -29,8 +29,12 @@ final class YamlTree {
     record Scalar(String text, boolean quoted, int line, int column) implements Node {
     }
 
-    /** @param keys where each key stands, for messages about the key itself */
-    record Mapping(Map<String, Node> entries, Map<String, int[]> keys, int line, int column) implements Node {
+    /** @param keys where each key stands, for messages about the key itself, in the spec's order */
+    record Mapping(Map<String, Node> entries, Map<String, Position> keys, int line, int column) implements Node {
+    }
+
+    /** A place in the spec, 1-based. */
+    record Position(int line, int column) {
     }
 
     record Sequence(List<Node> items, int line, int column) implements Node {
@@ -62,7 +66,7 @@ final class YamlTree {
         switch (token) {
             case START_OBJECT -> {
                 Map<String, Node> entries = new LinkedHashMap<>();
-                Map<String, int[]> keys = new LinkedHashMap<>();
+                Map<String, Position> keys = new LinkedHashMap<>();
                 for (JsonToken t = parser.nextToken(); t != JsonToken.END_OBJECT; t = parser.nextToken()) {
                     String key = parser.currentName();
                     JsonLocation keyAt = parser.currentTokenLocation();
@@ -70,7 +74,7 @@ final class YamlTree {
                         throw new SpecProblem(spec, keyAt.getLineNr(), keyAt.getColumnNr(), "'" + key
                                 + "' is given twice");
                     }
-                    keys.put(key, new int[] {keyAt.getLineNr(), keyAt.getColumnNr()});
+                    keys.put(key, new Position(keyAt.getLineNr(), keyAt.getColumnNr()));
                     entries.put(key, node(spec, parser, parser.nextToken()));
                 }
                 return new Mapping(entries, keys, line, column);

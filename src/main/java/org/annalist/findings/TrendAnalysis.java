@@ -1,6 +1,7 @@
 package org.annalist.findings;
 
 import java.util.List;
+import java.util.Optional;
 import org.annalist.analysis.trend.MannKendall;
 import org.annalist.analysis.trend.SeasonalKendall;
 import org.annalist.analysis.trend.SenSlope;
@@ -43,11 +44,10 @@ final class TrendAnalysis {
         // % of the level means nothing for a series that reaches zero or below (a net balance, say)
         boolean positive = java.util.Arrays.stream(observed).filter(v -> !Double.isNaN(v)).allMatch(v -> v > 0);
         double level = positive ? Analyst.meanOf(observed) : 0;
-        TrendFinding.Evidence seasonalKendall = !seasonal ? null
+        Optional<TrendFinding.Evidence> seasonalKendall = !seasonal ? Optional.empty()
                 : SeasonalKendall.test(observed, series.frequency().seasonalPeriod())
                 .map(sk -> new TrendFinding.Evidence(TestName.of(sk.test().method()), sk.test().statistic(),
-                        sk.test().pValue()))
-                .orElse(null);
+                        sk.test().pValue()));
         return new TrendFinding(direction(mk), new TrendFinding.Test(TestName.of(mk.test().method()), seasonal, block),
                 mk.test().statistic(), mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
                 level == 0 ? null : 100 * sen.perYear() / Math.abs(level), seasonalKendall, mk.test().n(),
@@ -55,20 +55,21 @@ final class TrendAnalysis {
     }
 
     /** The same test and slope over the latest regime, when there is one with enough values. */
-    private static TrendFinding.LatestRegime latestRegime(Series series, double[] adjusted, int regimeStart) {
+    private static Optional<TrendFinding.LatestRegime> latestRegime(Series series, double[] adjusted,
+                                                                    int regimeStart) {
         if (regimeStart <= 0) {
-            return null;
+            return Optional.empty();
         }
         double[] regime = java.util.Arrays.copyOfRange(adjusted, regimeStart, adjusted.length);
         long present = java.util.Arrays.stream(regime).filter(v -> !Double.isNaN(v)).count();
         if (present < Math.max(DecisionRules.MIN_VALUES_FOR_TREND, 2 * series.frequency().seasonalPeriod())
                 || regime.length > MAX_VALUES) {
-            return null;
+            return Optional.empty();
         }
         MannKendall.Result mk = MannKendall.test(regime, MannKendall.Correction.AR1_RANKS);
         SenSlope.Result sen = SenSlope.of(regime, series.frequency().periodsPerYear(), mk.varianceUsed());
-        return new TrendFinding.LatestRegime(series.period(regimeStart), direction(mk), sen.perYear(), sen.lower95(),
-                sen.upper95(), mk.test().pValue(), (int) present);
+        return Optional.of(new TrendFinding.LatestRegime(series.period(regimeStart), direction(mk), sen.perYear(), sen.lower95(),
+                sen.upper95(), mk.test().pValue(), (int) present));
     }
 
     /** A direction only where the test rejects "no trend" at {@link DecisionRules#ALPHA}. */

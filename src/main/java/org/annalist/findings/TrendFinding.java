@@ -2,6 +2,7 @@ package org.annalist.findings;
 
 import com.fasterxml.jackson.annotation.JsonIgnore;
 import java.util.List;
+import java.util.Optional;
 import org.annalist.series.Period;
 
 /**
@@ -17,8 +18,9 @@ import org.annalist.series.Period;
  * @param latestRegime     the trend within the latest regime, when there are breaks and it is long enough
  */
 public record TrendFinding(Direction direction, Test test, Double statistic, Double pValue, Double slopePerYear,
-                           List<Double> slopeCi95, Double changePctPerYear, @JsonIgnore Evidence seasonalKendall,
-                           @JsonIgnore int n, @JsonIgnore LatestRegime latestRegime) {
+                           List<Double> slopeCi95, Double changePctPerYear,
+                           @JsonIgnore Optional<Evidence> seasonalKendall,
+                           @JsonIgnore int n, @JsonIgnore Optional<LatestRegime> latestRegime) {
 
     /**
      * The test as run.
@@ -47,6 +49,7 @@ public record TrendFinding(Direction direction, Test test, Double statistic, Dou
     }
 
     static TrendFinding notAssessed() {
-        return new TrendFinding(Direction.NONE, null, null, null, null, null, null, null, 0, null);
+        return new TrendFinding(Direction.NONE, null, null, null, null, null, null, Optional.empty(), 0,
+                Optional.empty());
     }
 }

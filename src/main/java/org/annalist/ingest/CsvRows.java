@@ -20,8 +20,18 @@ final class CsvRows {
      */
     record Row(int line, List<String> cells, int[] sourceColumns) {
 
+        Row {
+            cells = List.copyOf(cells);
+            sourceColumns = sourceColumns == null ? null : sourceColumns.clone();
+        }
+
         Row(int line, List<String> cells) {
             this(line, cells, null);
+        }
+
+        @Override
+        public int[] sourceColumns() {
+            return sourceColumns == null ? null : sourceColumns.clone();
         }
 
         String cell(int column) {

@@ -38,12 +38,10 @@ public final class AnalystNotes {
                         : String.format(Locale.ROOT, " (elasticity of swing to level %.2f over %d years, level ratio %.2f)",
                         form.elasticity(), form.cycles(), form.levelRatio()));
         line(out, "trend", "%s", trend(f.trend()));
-        TrendFinding.LatestRegime latest = f.trend().latestRegime();
-        if (latest != null) {
-            line(out, "since break", "%s since %s: Sen slope %s per year (95%% CI %s to %s), %s",
-                    Terms.direction(latest.direction()), latest.since().label(), num(latest.slopePerYear()),
-                    num(latest.lower95()), num(latest.upper95()), p(latest.pValue()));
-        }
+        f.trend().latestRegime().ifPresent(latest -> line(out, "since break",
+                "%s since %s: Sen slope %s per year (95%% CI %s to %s), %s", Terms.direction(latest.direction()),
+                latest.since().label(), num(latest.slopePerYear()), num(latest.lower95()), num(latest.upper95()),
+                p(latest.pValue())));
         line(out, "seasonality", "%s", seasonality(f.seasonality()));
         line(out, "cycle", "%s", cycle(f.cycle()));
         if (f.breaks().isEmpty()) {
@@ -128,9 +126,8 @@ public final class AnalystNotes {
             return "not assessed: " + Terms.trendNotAssessed();
         }
         String words = Terms.direction(t.direction());
-        String kendall = t.seasonalKendall() == null ? ""
-                : String.format(Locale.ROOT, "; %s z = %.2f, %s", Terms.test(t.seasonalKendall().test()),
-                t.seasonalKendall().statistic(), p(t.seasonalKendall().pValue()));
+        String kendall = t.seasonalKendall().map(k -> String.format(Locale.ROOT, "; %s z = %.2f, %s",
+                Terms.test(k.test()), k.statistic(), p(k.pValue()))).orElse("");
         String ofLevel = t.changePctPerYear() == null ? ""
                 : String.format(Locale.ROOT, ", %+.2f %% of the mean level per year", t.changePctPerYear());
         return String.format(Locale.ROOT, "%s — %s: z = %.2f, %s, n = %d; Sen slope %s per year (95%% CI %s to %s)%s%s",

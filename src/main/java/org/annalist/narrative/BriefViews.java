@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import java.util.ArrayList;
 import java.util.List;
 import org.annalist.findings.BreakFinding;
+import org.annalist.findings.DecisionRules;
 import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Findings;
 import org.annalist.findings.RecentPeriod;
@@ -128,9 +129,9 @@ public final class BriefViews {
         return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
-    /** Breaks that lowered the level by 10 % or more, by year. */
+    /** Breaks that lowered the level by a collapse ({@link DecisionRules#COLLAPSE_PCT}) or more, by year. */
     static List<String> dropYears(Series series, List<BreakFinding> breaks) {
-        return breaks.stream().filter(b -> b.changePct() <= -10).map(b -> String.valueOf(series.period(b.index()).year()))
+        return breaks.stream().filter(b -> b.changePct() <= DecisionRules.COLLAPSE_PCT).map(b -> String.valueOf(series.period(b.index()).year()))
                 .distinct().toList();
     }
 }

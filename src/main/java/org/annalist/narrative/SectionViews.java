@@ -46,16 +46,12 @@ final class SectionViews {
             return new BriefView.TrendView(false, false, false, "", "", "", "", "", "", "", "", "",
                     Terms.trendNotAssessed(), null, null);
         }
-        BriefView.SinceBreak since = null;
-        TrendFinding.LatestRegime r = t.latestRegime();
-        if (r != null) {
-            since = new BriefView.SinceBreak(f.period(r.since()), r.direction() == Direction.INCREASING,
-                    r.direction() == Direction.DECREASING, f.signedSignificant(r.slopePerYear()),
-                    f.significant(r.lower95()), f.significant(r.upper95()), f.pValue(r.pValue()));
-        }
-        String kendall = t.seasonalKendall() == null ? null
-                : Terms.test(t.seasonalKendall().test()) + " z = " + f.fixed(t.seasonalKendall().statistic(), 2) + ", "
-                        + f.pValue(t.seasonalKendall().pValue());
+        BriefView.SinceBreak since = t.latestRegime().map(r -> new BriefView.SinceBreak(f.period(r.since()),
+                r.direction() == Direction.INCREASING, r.direction() == Direction.DECREASING,
+                f.signedSignificant(r.slopePerYear()), f.significant(r.lower95()), f.significant(r.upper95()),
+                f.pValue(r.pValue()))).orElse(null);
+        String kendall = t.seasonalKendall().map(k -> Terms.test(k.test()) + " z = " + f.fixed(k.statistic(), 2) + ", "
+                + f.pValue(k.pValue())).orElse(null);
         return new BriefView.TrendView(true, t.direction() == Direction.INCREASING, t.direction() == Direction.DECREASING,
                 Terms.trendTest(t.test()), f.fixed(t.statistic(), 2), f.pValue(t.pValue()),
                 f.signedSignificant(t.slopePerYear()), f.significant(Math.abs(t.slopePerYear())),

@@ -30,6 +30,33 @@ public final class ClassicalDecomposition {
      */
     public record Result(Type type, int period, double[] trend, double[] figure, double[] seasonal,
                          double[] remainder) {
+
+        public Result {
+            trend = trend.clone();
+            figure = figure.clone();
+            seasonal = seasonal.clone();
+            remainder = remainder.clone();
+        }
+
+        @Override
+        public double[] trend() {
+            return trend.clone();
+        }
+
+        @Override
+        public double[] figure() {
+            return figure.clone();
+        }
+
+        @Override
+        public double[] seasonal() {
+            return seasonal.clone();
+        }
+
+        @Override
+        public double[] remainder() {
+            return remainder.clone();
+        }
     }
 
     private ClassicalDecomposition() {

@@ -27,6 +27,21 @@ public final class Periodogram {
      */
     public record Result(double[] frequency, double[] power, double residualLag1) {
 
+        public Result {
+            frequency = frequency.clone();
+            power = power.clone();
+        }
+
+        @Override
+        public double[] frequency() {
+            return frequency.clone();
+        }
+
+        @Override
+        public double[] power() {
+            return power.clone();
+        }
+
         /** Period (time units per cycle) of ordinate {@code k}, 0-based. */
         public double period(int k) {
             return 1 / frequency[k];
