@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
  * {@code annalist batch SPEC.yaml|FOLDER}: every brief of a spec (or of a folder's CSV files),
  * with a progress bar on an interactive terminal and a plain line per brief otherwise, on a pool sized to the cores; a line per
  * brief as it finishes, then a summary. Exit 0 when all were made, {@value ExitCodes#SOME_FAILED}
- * when some failed (the others are written), 2 when the spec itself is wrong.
+ * when some failed (the others are written), {@value ExitCodes#BAD_INPUT} when the spec itself is wrong.
  */
 @Command(name = "batch", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Make every brief a spec file describes, in parallel; one bad brief does not stop the others.")

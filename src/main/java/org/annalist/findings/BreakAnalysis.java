@@ -11,8 +11,8 @@ import org.annalist.series.Series;
 /**
  * The breaks finding: runs {@link BreakSearch} with the thresholds of {@link DecisionRules} on the
  * seasonally adjusted series (logs when multiplicative) with outliers screened out, and turns its
- * result into {@link BreakFinding}s and {@link Episode}s, with dates as periods, and into the words
- * of the methods appendix.
+ * result into {@link BreakFinding}s and {@link Episode}s with dates as periods, and into the
+ * {@link BreakMethod} the methods appendix describes.
  */
 final class BreakAnalysis {
 

@@ -32,7 +32,7 @@ final class CalendarAnalysis {
             return null;
         }
         List<CalendarFinding.EasterDate> easter = new ArrayList<>();
-        for (int year = Math.max(1583, series.start().year()); year <= series.end().year(); year++) {
+        for (int year = Math.max(Easter.FIRST_YEAR, series.start().year()); year <= series.end().year(); year++) {
             easter.add(new CalendarFinding.EasterDate(year, Easter.sunday(year).toString()));
         }
         Optional<CalendarEffects.Result> fit = workingIrregular == null ? Optional.empty()

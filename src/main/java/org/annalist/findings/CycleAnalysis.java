@@ -13,9 +13,6 @@ import org.annalist.series.Series;
  */
 final class CycleAnalysis {
 
-    /** Peaks that must confirm a periodogram peak (our rule: two gaps at least). */
-    static final int MIN_PEAKS = 3;
-
     private static final CycleDetector DETECTOR = CycleDetector.withDefaults()
             .withMinimumYears(DecisionRules.MIN_YEARS_FOR_CYCLE)
             .withShortestCycleYears(DecisionRules.MIN_CYCLE_YEARS)
@@ -40,7 +37,7 @@ final class CycleAnalysis {
         if (r.pValue() >= DecisionRules.ALPHA) {
             return absent(CycleFinding.Reason.NOT_BEYOND_RED_NOISE, r.years(), r.spectralPeriod(), r.pValue());
         }
-        if (r.peaks().size() < MIN_PEAKS) {
+        if (r.peaks().size() < DecisionRules.MIN_CYCLE_PEAKS) {
             return absent(CycleFinding.Reason.TOO_FEW_PEAKS, r.years(), r.spectralPeriod(), r.pValue());
         }
         // regular when the gaps between the peaks vary little

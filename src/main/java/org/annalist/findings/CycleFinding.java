@@ -30,7 +30,7 @@ public record CycleFinding(boolean present, Double length, String lengthUnit, Li
         NO_CANDIDATE_PERIOD,
         /** The strongest period is no stronger than red noise would give. */
         NOT_BEYOND_RED_NOISE,
-        /** Fewer than {@value CycleAnalysis#MIN_PEAKS} peaks confirm the period. */
+        /** Fewer than {@value DecisionRules#MIN_CYCLE_PEAKS} peaks confirm the period. */
         TOO_FEW_PEAKS
     }
 

@@ -22,6 +22,12 @@ public final class DecisionRules {
      */
     public static final int MIN_VALUES_FOR_TREND = 10;
 
+    /**
+     * The trend within the latest regime is stated when the regime holds at least this many
+     * seasonal cycles (and {@link #MIN_VALUES_FOR_TREND} values) (our rule).
+     */
+    public static final int MIN_REGIME_CYCLES_FOR_TREND = 2;
+
     // ---- additive or multiplicative ----------------------------------------------------------
 
     /**
@@ -71,6 +77,9 @@ public final class DecisionRules {
      */
     public static final double MAX_REGULAR_GAP_CV = 0.25;
 
+    /** A cycle is claimed only when at least this many peaks confirm the periodogram's period (our rule: two gaps). */
+    public static final int MIN_CYCLE_PEAKS = 3;
+
     // ---- irregular fluctuation --------------------------------------------------------------
 
     /** Share of the variation around the long-run trend that is irregular: below 0.2 small (our rule). */
@@ -110,8 +119,27 @@ public final class DecisionRules {
      * more and, through the stretch rule, found fewer.
      */
     public static final double OUTLIER_SCORE = 5.0;
+    /** An outlier differs from what was expected by at least 0.1 % (our rule: below, it is rounding). */
+    public static final double MIN_OUTLIER_DEVIATION_PCT = 0.1;
+    /**
+     * No outlier is reported this many periods before a break's first period, nor at it and the
+     * next one, where a smoother lags behind a jump (our rule).
+     */
+    public static final int OUTLIER_QUIET_BEFORE_BREAK = 2;
+    /** … and this many periods from a break's first period on (our rule). */
+    public static final int OUTLIER_QUIET_FROM_BREAK = 2;
     /** Flagged periods in a same-signed run this long are a shift of level, not one-offs ({@link RemainderOutliers#SHIFT_RUN}). */
     public static final int OUTLIER_SHIFT_RUN = RemainderOutliers.SHIFT_RUN;
     /** This many flags within two seasonal cycles are an unusual stretch ({@link RemainderOutliers#STRETCH_FLAGS}). */
     public static final int OUTLIER_STRETCH_FLAGS = RemainderOutliers.STRETCH_FLAGS;
+
+    // ---- outlook --------------------------------------------------------------------------
+
+    /**
+     * After a break the outlook is fitted on the latest regime alone when it spans at least this
+     * many seasonal cycles (our rule: two, so that the season can be estimated in it) …
+     */
+    public static final int OUTLOOK_REGIME_CYCLES = 2;
+    /** … or, for data without a season, at least this many periods (our rule). */
+    public static final int OUTLOOK_REGIME_NON_SEASONAL = 8;
 }

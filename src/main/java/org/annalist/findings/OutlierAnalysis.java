@@ -13,9 +13,6 @@ import org.annalist.series.Series;
  */
 final class OutlierAnalysis {
 
-    /** An outlier differs from what was expected by at least 0.1 % (our rule: below, it is rounding). */
-    static final double MIN_DEVIATION_PCT = 0.1;
-
     private OutlierAnalysis() {
     }
 
@@ -43,14 +40,15 @@ final class OutlierAnalysis {
                                    boolean log, List<BreakFinding> breaks) {
         List<OutlierFinding> outliers = new ArrayList<>();
         for (RemainderOutliers.Outlier o : candidates) {
-            boolean nearBreak = breaks.stream().anyMatch(b -> o.index() >= b.index() - 2 && o.index() <= b.index() + 1);
+            boolean nearBreak = breaks.stream().anyMatch(b -> o.index() >= b.index() - DecisionRules.OUTLIER_QUIET_BEFORE_BREAK
+                    && o.index() < b.index() + DecisionRules.OUTLIER_QUIET_FROM_BREAK);
             if (nearBreak || Double.isNaN(expectedWorking[o.index()])) {
                 continue;
             }
             double observed = series.value(o.index());
             double expected = log ? Math.exp(expectedWorking[o.index()]) : expectedWorking[o.index()];
             double deviation = expected == 0 ? Double.NaN : 100 * (observed - expected) / Math.abs(expected);
-            if (Math.abs(deviation) < MIN_DEVIATION_PCT) {
+            if (Math.abs(deviation) < DecisionRules.MIN_OUTLIER_DEVIATION_PCT) {
                 continue;   // a tiny remainder scale makes a tiny deviation look large; it is no outlier
             }
             outliers.add(new OutlierFinding(series.period(o.index()), observed, expected, o.score(),

@@ -40,7 +40,8 @@ final class OutlookAnalysis {
         }
         int period = series.frequency().seasonalPeriod();
         int h = horizon.orElse(restOfYear(series.period(last)) + DEFAULT_EXTRA_PERIODS);
-        int minimumRegime = period > 1 ? 2 * period : 8;
+        int minimumRegime = period > 1 ? DecisionRules.OUTLOOK_REGIME_CYCLES * period
+                : DecisionRules.OUTLOOK_REGIME_NON_SEASONAL;
         List<OutlookCaveat> caveats = new ArrayList<>();
         int from = 0;
         if (regimeStart > 0) {

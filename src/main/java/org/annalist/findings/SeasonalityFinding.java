@@ -31,6 +31,16 @@ public record SeasonalityFinding(boolean present, Integer period, Double strengt
     public record ProfilePoint(int position, String label, double index) {
     }
 
+    /** How strong a seasonal pattern is, by {@link DecisionRules#STRONG_SEASONAL_STRENGTH} and {@link DecisionRules#MIN_SEASONAL_STRENGTH}. */
+    public enum Strength {
+        STRONG, MODERATE, WEAK;
+
+        public static Strength of(double strength) {
+            return strength >= DecisionRules.STRONG_SEASONAL_STRENGTH ? STRONG
+                    : strength >= DecisionRules.MIN_SEASONAL_STRENGTH ? MODERATE : WEAK;
+        }
+    }
+
     public boolean multiplicative() {
         return form == Form.MULTIPLICATIVE;
     }

@@ -62,7 +62,8 @@ final class TrendAnalysis {
         }
         double[] regime = java.util.Arrays.copyOfRange(adjusted, regimeStart, adjusted.length);
         long present = java.util.Arrays.stream(regime).filter(v -> !Double.isNaN(v)).count();
-        if (present < Math.max(DecisionRules.MIN_VALUES_FOR_TREND, 2 * series.frequency().seasonalPeriod())
+        if (present < Math.max(DecisionRules.MIN_VALUES_FOR_TREND,
+                DecisionRules.MIN_REGIME_CYCLES_FOR_TREND * series.frequency().seasonalPeriod())
                 || regime.length > MAX_VALUES) {
             return Optional.empty();
         }

@@ -5,8 +5,9 @@ import org.annalist.series.Frequency;
 
 /**
  * Everything the brief template shows, already formatted: numbers as text in the brief's
- * language, flags for the template's choices. The template chooses the sentences; nothing here
- * is a sentence.
+ * language, booleans for the template's choices. The template words the findings' main
+ * statements; the views carry the short phrases that the narrative's Java words (key figures,
+ * ranks, notes, calendar sentences, caveats), so that every word still comes from the narrative.
  */
 public record BriefView(Document document, Header header, Lead lead, ThisPeriod thisPeriod, List<KeyFigure> keyFigures,
                         Charts charts,

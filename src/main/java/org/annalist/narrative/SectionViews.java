@@ -235,16 +235,6 @@ final class SectionViews {
         return best;
     }
 
-    /** The series' period with this label. */
-    private Period period(String label) {
-        for (int i = 0; i < series.size(); i++) {
-            if (series.period(i).label().equals(label)) {
-                return series.period(i);
-            }
-        }
-        throw new IllegalArgumentException("no period " + label + " in " + series.name());
-    }
-
     private static int firstFinite(double[] x) {
         for (int i = 0; i < x.length; i++) {
             if (!Double.isNaN(x[i])) {

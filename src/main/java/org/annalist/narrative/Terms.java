@@ -13,6 +13,7 @@ import org.annalist.findings.Direction;
 import org.annalist.findings.FormChoice;
 import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
+import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.Smoothing;
 import org.annalist.findings.TestName;
 import org.annalist.findings.TrendFinding;
@@ -196,7 +197,10 @@ final class Terms {
 
     /** {@code strong}, {@code moderate} or {@code weak} for a seasonal strength. */
     static String seasonalStrength(double strength) {
-        return strength >= DecisionRules.STRONG_SEASONAL_STRENGTH ? "strong"
-                : strength >= DecisionRules.MIN_SEASONAL_STRENGTH ? "moderate" : "weak";
+        return switch (SeasonalityFinding.Strength.of(strength)) {
+            case STRONG -> "strong";
+            case MODERATE -> "moderate";
+            case WEAK -> "weak";
+        };
     }
 }

@@ -3,7 +3,6 @@ package org.annalist.findings;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.Random;
 import org.annalist.analysis.Reference;

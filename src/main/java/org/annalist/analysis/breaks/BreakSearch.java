@@ -35,8 +35,8 @@ import org.annalist.series.Frequency;
  * </ol>
  *
  * <p>Configuration is immutable: each {@code with…} returns a new search. The defaults are those
- * of the brief (the thresholds are also listed, with their sources, in
- * {@code org.annalist.analysis.DecisionRules}).
+ * of the brief: the findings pass the values of their catalogue of decision rules, which lists
+ * them with their sources, and a test holds the two equal.
  *
  * <p>Edge behaviour: missing values ({@code NaN}) are left out of every fit. Daily and
  * business-daily values are not searched ({@link Method#NOT_SEARCHED_DAILY}): the yearly pattern,

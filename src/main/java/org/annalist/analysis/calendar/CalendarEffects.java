@@ -8,6 +8,7 @@ import org.annalist.series.Holiday;
 import org.annalist.series.Period;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.DecompositionSolver;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
 
@@ -173,7 +174,11 @@ public final class CalendarEffects {
         }
         RealMatrix design = new Array2DRowRealMatrix(x, false);
         // ordinary least squares: β = (X′X)⁻¹ X′y
-        RealMatrix xtxInverse = new LUDecomposition(design.transpose().multiply(design)).getSolver().getInverse();
+        DecompositionSolver solver = new LUDecomposition(design.transpose().multiply(design)).getSolver();
+        if (!solver.isNonSingular()) {
+            return Optional.empty();   // regressors that move together (two holidays on the same days) cannot be told apart
+        }
+        RealMatrix xtxInverse = solver.getInverse();
         double[] beta = xtxInverse.operate(design.transpose().operate(y));
         double[] e = new double[n];
         for (int r = 0; r < n; r++) {

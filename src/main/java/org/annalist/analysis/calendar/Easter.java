@@ -18,12 +18,15 @@ public final class Easter {
     private Easter() {
     }
 
+    /** The first full year of the Gregorian calendar, from which its Easter rule holds. */
+    public static final int FIRST_YEAR = 1583;
+
     /**
      * @throws IllegalArgumentException before 1583, the first full year of the Gregorian calendar
      *                                  (introduced in October 1582)
      */
     public static LocalDate sunday(int year) {
-        if (year < 1583) {
+        if (year < FIRST_YEAR) {
             throw new IllegalArgumentException("the Gregorian Easter is defined from 1583, not for " + year);
         }
         // [1] ch. 8: the anonymous Gregorian algorithm, step by step (a … m, then month and day)

@@ -30,7 +30,7 @@ import java.util.Optional;
  * measure's bounds.
  *
  * <p>The result is evidence, not wording: the method, the model it fitted and the account of the
- * choice are typed values for the findings to put into words.
+ * choice are typed values; the findings type them as statements and the narrative words them.
  *
  * <h2>References</h2>
  * <ol>

@@ -37,7 +37,8 @@ public final class SeasonalKendall {
     /**
      * @param x      the series, first value at season position 0
      * @param period seasons per year
-     * @return empty when no season has two observed years
+     * @return empty when no season has two observed years, or when the seasonal slope would take
+     *         more than {@link SenSlope#MAX_PAIRS} pairs (decades of daily data: aggregate first)
      */
     public static Optional<Result> test(double[] x, int period) {
         long s = 0;
@@ -57,7 +58,7 @@ public final class SeasonalKendall {
                 n += score.n();
             }
         }
-        if (variance <= 0) {
+        if (variance <= 0 || SenSlope.pairs(x, period) > SenSlope.MAX_PAIRS) {
             return Optional.empty();
         }
         // [1] continuity-corrected Z and its two-sided normal p

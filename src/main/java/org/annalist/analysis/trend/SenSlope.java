@@ -107,8 +107,8 @@ public final class SenSlope {
         return n % 2 == 1 ? middle[0] : (middle[0] + middle[1]) / 2;
     }
 
-    /** Slopes per step of pairs {@code (i, j)} that lie a multiple of {@code stride} apart. */
-    private static double[] pairwise(double[] x, int stride) {
+    /** Pairs of observed values {@code (i, j)} that lie a multiple of {@code stride} apart. */
+    public static long pairs(double[] x, int stride) {
         int n = x.length;
         long count = 0;
         for (int i = 0; i < n; i++) {
@@ -120,6 +120,13 @@ public final class SenSlope {
                 }
             }
         }
+        return count;
+    }
+
+    /** Slopes per step of pairs {@code (i, j)} that lie a multiple of {@code stride} apart. */
+    private static double[] pairwise(double[] x, int stride) {
+        int n = x.length;
+        long count = pairs(x, stride);
         if (count > MAX_PAIRS) {
             throw new IllegalArgumentException("Sen's slope over " + count + " pairs exceeds " + MAX_PAIRS
                     + "; aggregate the series first");

@@ -2,7 +2,9 @@ package org.annalist.analysis.calendar;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.time.LocalDate;
 import java.util.Random;
+import java.util.Set;
 import org.annalist.series.Holiday;
 import org.annalist.series.Period;
 import org.junit.jupiter.api.Test;
@@ -80,5 +82,16 @@ class CalendarEffectsTest {
         assertThat(Math.abs(e.coefficient() - 0.06)).isLessThanOrEqualTo(2 * e.standardError());
         assertThat(festival.share(Period.month(2011, 7))).isEqualTo(1.0);
         assertThat(festival.share(Period.month(2012, 7))).isEqualTo(2.0 / 3);   // 30 June, 1 and 2 July 2012
+    }
+
+    @Test
+    void twoHolidaysOnTheSameDaysCannotBeToldApartAndGiveNoEstimate() {
+        Set<LocalDate> days = new java.util.HashSet<>();
+        for (int year = 2010; year <= 2019; year++) {
+            days.add(LocalDate.of(year, 7, 1 + year % 7));
+        }
+        double[] noise = simulated(0, 0, 5);
+        assertThat(CalendarEffects.estimate(noise, Period.month(2010, 1), 8,
+                java.util.List.of(new Holiday("fair", days), new Holiday("market", days)))).isEmpty();
     }
 }

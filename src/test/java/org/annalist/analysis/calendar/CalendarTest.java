@@ -15,7 +15,7 @@ import org.junit.jupiter.api.Test;
 
 class CalendarTest {
 
-    /** G. M. Arts, "Easter Sunday Dates", tables 1990-2049 (dates.gmarts.org), as quoted in research notes C10. */
+    /** G. M. Arts, "Easter Sunday Dates", tables 1990-2049 (http://dates.gmarts.org/eastdate.htm). */
     private static final Map<Integer, String> PUBLISHED = Map.ofEntries(
             Map.entry(1990, "04-15"), Map.entry(1991, "03-31"), Map.entry(1995, "04-16"), Map.entry(2000, "04-23"),
             Map.entry(2002, "03-31"), Map.entry(2005, "03-27"), Map.entry(2008, "03-23"), Map.entry(2009, "04-12"),
@@ -35,7 +35,7 @@ class CalendarTest {
 
     @Test
     void easterExtremes() {
-        // Known extremes (research notes C10): 22 March in 1818 and 2285, 25 April in 1886, 1943 and 2038;
+        // Known extremes (from memory): 22 March in 1818 and 2285, 25 April in 1886, 1943 and 2038;
         // and the worked examples 1961 -> 2 April, 2008 -> 23 March (Meeus).
         assertThat(Easter.sunday(1818)).isEqualTo(LocalDate.of(1818, 3, 22));
         assertThat(Easter.sunday(2285)).isEqualTo(LocalDate.of(2285, 3, 22));

@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 import java.util.Map;
 import org.annalist.analysis.Reference;
 import org.assertj.core.data.Offset;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -68,5 +69,16 @@ class TrendTestsTest {
         // Gilbert (1987) ranks M1 and M2 + 1, interpolated: lower_gilbert and upper_gilbert.
         assertThat(r.lower95() / frequency).isCloseTo(d(ref, "lower_gilbert"), within(1e-9));
         assertThat(r.upper95() / frequency).isCloseTo(d(ref, "upper_gilbert"), within(1e-9));
+    }
+
+    @Test
+    void aSeasonalSlopeOverTooManyPairsIsNotTried() {
+        // 6,400 values one season apart (period 1): 20,476,800 pairs, above SenSlope.MAX_PAIRS
+        double[] x = new double[6400];
+        for (int t = 0; t < x.length; t++) {
+            x[t] = t % 97;
+        }
+        assertThat(SenSlope.pairs(x, 1)).isGreaterThan(SenSlope.MAX_PAIRS);
+        assertThat(SeasonalKendall.test(x, 1)).isEmpty();
     }
 }
