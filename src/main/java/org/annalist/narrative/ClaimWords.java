@@ -69,7 +69,7 @@ final class ClaimWords {
         Optional<Claim> whole = claims.find(Quantity.TREND_WHOLE);
         Claim trend = since.orElse(whole.orElse(null));
         if (trend == null) {
-            return "The underlying level shows no clear trend.";
+            return "No statement on the trend: " + Terms.trendNotAssessed() + ".";
         }
         boolean latest = trend.quantity() == Quantity.TREND_SINCE_BREAK;
         String opening = latest ? "Since " + f.period(trend.from()) + " the level has "
@@ -145,6 +145,18 @@ final class ClaimWords {
                 .map(c -> "; " + (c.quantity() == Quantity.ROLLING_YEAR ? "last " + rollingSpan(c.to().frequency())[0]
                         : "year to date") + " " + signedSize(c)).orElse("");
         return new String[] {signedSize(t), span + "; " + evidence + recent};
+    }
+
+    /** The trend of the first page in a table cell: {@code increasing since Aug 2022}, {@code not stated}. */
+    String trendCell() {
+        Optional<Claim> since = claims.find(Quantity.TREND_SINCE_BREAK);
+        Optional<Claim> trend = since.isPresent() ? since : claims.find(Quantity.TREND_WHOLE);
+        if (trend.isEmpty()) {
+            return "not assessed";
+        }
+        Claim t = trend.get();
+        return (t.said() ? Terms.direction(t.direction()) : "not stated")
+                + (since.isPresent() ? " since " + f.shortPeriod(t.from()) : "");
     }
 
     /** The latest change as the first tile's note: {@code +1.0 % on a year earlier}, calendar-adjusted first when there is one. */
