@@ -88,8 +88,8 @@ final class ClaimWords {
                     .append(')');
         }
         trend.qualification(QualifyReason.LONGER_RUN_DIFFERS).flatMap(q -> whole).ifPresent(w -> s.append(
-                w.direction() == Direction.INCREASING ? ", against the rise over the whole period"
-                        : ", against the fall over the whole period"));
+                w.direction() == Direction.INCREASING ? ", whereas over the whole period it rose"
+                        : ", whereas over the whole period it fell"));
         trend.qualification(QualifyReason.RECENT_CHANGE_OPPOSES).flatMap(q -> claims.find(q.by()))
                 .ifPresent(c -> s.append(", although ").append(recent(c.quantity())));
         return s.append('.').toString();

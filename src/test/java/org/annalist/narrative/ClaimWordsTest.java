@@ -49,7 +49,7 @@ class ClaimWordsTest {
         ClaimWords words = words(claims);
         assertThat(words.stepSentence()).startsWith("From October 2024 the level stepped down by 20.0\u00A0%");
         assertThat(words.trendSentence())
-                .isEqualTo("Since October 2024 the level has shown no clear trend, against the fall over the whole period.");
+                .isEqualTo("Since October 2024 the level has shown no clear trend, whereas over the whole period it fell.");
         assertThat(words.trendTile()[0]).isEqualTo("no clear trend");
         assertThat(words.trendTile()[1]).startsWith("since October 2024");
         assertThat(words.trendSentence()).doesNotContain("1.7");
