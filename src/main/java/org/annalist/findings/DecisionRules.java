@@ -142,4 +142,30 @@ public final class DecisionRules {
     public static final int OUTLOOK_REGIME_CYCLES = 2;
     /** … or, for data without a season, at least this many periods (our rule). */
     public static final int OUTLOOK_REGIME_NON_SEASONAL = 8;
+
+    // ---- claims on the first page -------------------------------------------------------------
+
+    /**
+     * A change of the latest period, the year to date or the rolling year below this, in %, is
+     * "about the same" (our rule: it rounds to 0.0 % as the brief prints it).
+     */
+    public static final double FLAT_CHANGE_PCT = 0.05;
+    /**
+     * An observed change of at least this, in %, is material: it leads the first page when nothing
+     * larger happened, and a trend going the other way over the same span is qualified by it (our rule).
+     */
+    public static final double MATERIAL_CHANGE_PCT = 1.0;
+    /**
+     * When both the year to date and the rolling year went against a trend by at least this, in %,
+     * the trend's direction is not stated on the first page (our rule: a fall of 5 % in a year is
+     * larger than the yearly rise of most tourism series' trends).
+     */
+    public static final double CONTRADICTING_CHANGE_PCT = 5.0;
+    /** A break that began within this many years of the latest period is recent news (our rule). */
+    public static final int RECENT_BREAK_YEARS = 3;
+    /**
+     * A recent break that moved the level by at least this, in %, leads the first page (our rule:
+     * the size of a collapse, {@link #COLLAPSE_PCT}, either way).
+     */
+    public static final double HEADLINE_STEP_PCT = -COLLAPSE_PCT;
 }

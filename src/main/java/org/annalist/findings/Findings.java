@@ -24,7 +24,7 @@ import java.util.Optional;
  * @param breakMethod   how breaks were searched, for the methods appendix
  */
 @JsonPropertyOrder({"schema", "series", "transform", "trend", "seasonality", "cycle", "outliers", "breaks",
-    "irregular", "smoothing", "indicators", "calendar", "outlook"})
+    "irregular", "smoothing", "indicators", "calendar", "outlook", "claims"})
 public record Findings(SeriesFacts series, Transform transform, TrendFinding trend, SeasonalityFinding seasonality,
                        CycleFinding cycle, List<OutlierFinding> outliers, List<BreakFinding> breaks,
                        IrregularFinding irregular,
@@ -46,5 +46,11 @@ public record Findings(SeriesFacts series, Transform transform, TrendFinding tre
     @JsonProperty("schema")
     public String schema() {
         return SCHEMA;
+    }
+
+    /** The first page's statements after the consistency pass, and the headline (the findings JSON's {@code claims}). */
+    @JsonProperty("claims")
+    public Claims claims() {
+        return Claims.of(this);
     }
 }

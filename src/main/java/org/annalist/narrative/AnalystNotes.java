@@ -5,6 +5,8 @@ import java.util.Locale;
 import java.util.stream.Collectors;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CalendarFinding;
+import org.annalist.findings.Claim;
+import org.annalist.findings.Claims;
 import org.annalist.findings.Caveat;
 import org.annalist.findings.Transform;
 import org.annalist.findings.CalendarNote;
@@ -32,6 +34,7 @@ public final class AnalystNotes {
         line(out, "series", "'%s'%s, %s, %s to %s, %d periods, %d missing", s.name(),
                 s.unit() == null ? "" : " (" + s.unit() + ")", s.frequency(), s.start(), s.end(), s.observations(),
                 s.missing());
+        claims(out, f);
         FormChoice form = f.form();
         line(out, "form", "%s%s: %s%s", form.form().code(), f.transform() == Transform.LOG ? " (worked in logs)" : "",
                 Terms.formReason(form.reason()), form.elasticity() == null ? ""
@@ -119,6 +122,27 @@ public final class AnalystNotes {
             line(out, "note", "%s", Terms.caveat(note));
         }
         return out.toString();
+    }
+
+    /**
+     * The headline and every claim of the first page with what the consistency pass decided: the
+     * same claims, in the same words for sizes, as the brief's lead and key figures.
+     */
+    private static void claims(StringBuilder out, Findings f) {
+        Claims claims = f.claims();
+        IndicatorsFinding i = f.indicators();
+        double[] shown = i == null ? new double[0] : i.samePeriodLastYear() == null ? new double[] {i.value()}
+                : new double[] {i.value(), i.samePeriodLastYear().value()};
+        ClaimWords words = new ClaimWords(claims, Formats.forValues(shown, Locale.ENGLISH), f.series().unit());
+        line(out, "headline", "%s", f.recent().isEmpty() ? "none: the series is empty"
+                : words.headline(f.recent().get(f.recent().size() - 1).period()));
+        for (Claim c : claims.statements()) {
+            String decided = c.withheld().map(w -> "; withheld (" + w.reason().code() + ": " + w.by().code() + ")")
+                    .orElse(c.qualifications().isEmpty() ? "" : "; qualified (" + c.qualifications().stream()
+                            .map(q -> q.reason().code() + ": " + q.by().code()).collect(Collectors.joining(", ")) + ")");
+            line(out, "claim", "%s %s to %s: %s, %s%s%s", c.quantity().code(), c.from(), c.to(), c.direction().code(),
+                    words.signedSize(c), c.pValue().map(pv -> ", " + p(pv)).orElse(""), decided);
+        }
     }
 
     private static String trend(TrendFinding t) {

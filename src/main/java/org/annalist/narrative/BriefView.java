@@ -55,9 +55,15 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *
      * @param atPeriod  {@code In October 2026} / {@code On Saturday 31 October 2026}
      * @param up        higher than a year earlier ({@code up} and {@code down} both false: about the same)
+     * @param changePercent the size of the change without its sign, in % or in the series' units (the claim's)
+     * @param step          the sentence on a recent structural step when it is the headline, else empty
+     * @param trendSentence the trend since the latest break (else over the whole period), with its qualifications
+     * @param trendFirst    the trend is the headline and leads the paragraph
+     * @param calendarNote  after the change when it is calendar-adjusted: the change as counted; else empty
      */
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
-                       String changePercent, boolean up, boolean down, boolean provisional) {
+                       String changePercent, boolean up, boolean down, boolean provisional, String step,
+                       String trendSentence, boolean trendFirst, String calendarNote) {
     }
 
     /**

@@ -2,8 +2,12 @@ package org.annalist.narrative;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.annalist.findings.BreakFinding;
+import org.annalist.findings.Claim;
+import org.annalist.findings.Claims;
 import org.annalist.findings.DecisionRules;
+import org.annalist.findings.Direction;
 import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Findings;
 import org.annalist.findings.RecentPeriod;
@@ -47,28 +51,35 @@ public final class BriefViews {
     }
 
     private static BriefView.Lead lead(Series series, Findings findings, Formats f) {
+        Claims claims = findings.claims();
+        ClaimWords words = new ClaimWords(claims, f, series.unit());
+        String step = words.stepSentence();
+        String trend = words.trendSentence();
+        boolean trendFirst = words.trendFirst();
         if (findings.recent().isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", false, false,
-                    false);
+                    false, step, trend, trendFirst, "");
         }
         RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
         boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
                 || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
-        if (last.value() == null || last.changePct() == null) {
+        Optional<Claim> latest = claims.pageLatest();
+        if (last.value() == null || latest.isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                    "", "", false, false, provisional);
+                    "", "", false, false, provisional, step, trend, trendFirst, "");
         }
-        double pct = last.changePct();
-        boolean flat = Math.abs(pct) < 0.05;
-        // Percentages of a value at or below zero mislead: such series are compared in their own units.
-        String change = positive(series) ? f.percent(Math.abs(pct)) : f.value(Math.abs(last.change()))
-                + (series.unit().isEmpty() ? "" : " " + series.unit());
+        // the sign and size are the claim's, which the key figures and the findings JSON carry too
+        Claim change = latest.get();
         String yearEarlier = last.period().frequency() == Frequency.DAILY
                 || last.period().frequency() == Frequency.BUSINESS_DAILY
                 ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
                 : f.period(last.yearEarlierPeriod());
+        String calendar = change.quantity() == Claim.Quantity.LATEST_CALENDAR_ADJUSTED
+                ? claims.find(Claim.Quantity.LATEST_VS_YEAR_EARLIER).map(raw -> " once the calendar's effect is taken out ("
+                        + words.signedSize(raw) + " as counted)").orElse("") : "";
         return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                yearEarlier, change, !flat && pct > 0, !flat && pct < 0, provisional);
+                yearEarlier, words.size(change), change.direction() == Direction.INCREASING,
+                change.direction() == Direction.DECREASING, provisional, step, trend, trendFirst, calendar);
     }
 
     private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {

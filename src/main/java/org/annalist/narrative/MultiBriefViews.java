@@ -50,8 +50,7 @@ public final class MultiBriefViews {
             rows.add(new MultiBriefView.ComparisonRow(series.get(i).name(), series.get(i).unit(),
                     v.lead().value().isEmpty() ? "\u2013" : v.lead().value(),
                     f.signedPercent(yearOnYear(fi)), f.signedPercent(yearToDate(fi)),
-                    v.trend().assessed() ? Terms.direction(fi.trend().direction())
-                            : "not assessed",
+                    new ClaimWords(fi.claims(), f, series.get(i).unit()).trendCell(),
                     v.season().present() ? v.season().peak() : "none claimed",
                     String.valueOf(v.breaks().size()), String.valueOf(v.outliers().size()), nextYear));
         }

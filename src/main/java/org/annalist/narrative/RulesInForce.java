@@ -40,6 +40,12 @@ final class RulesInForce {
                         + " or more within two seasonal cycles an unusual stretch"),
                 new Rule("Irregular fluctuation called small / large", "share below "
                         + Terms.number(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + " % / above "
-                        + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + " %"));
+                        + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + " %"),
+                new Rule("The first page leads with", "a break of " + Terms.number(DecisionRules.HEADLINE_STEP_PCT)
+                        + " % or more within " + DecisionRules.RECENT_BREAK_YEARS + " years; else a latest change of "
+                        + Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + " % or more; else the trend"),
+                new Rule("A trend is qualified / not stated on the first page when the year to date or the rolling year "
+                        + "went the other way by", Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + " % / both by "
+                        + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT) + " %"));
     }
 }

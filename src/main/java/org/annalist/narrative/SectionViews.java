@@ -26,7 +26,7 @@ import org.annalist.series.Series;
 final class SectionViews {
 
     /** Monte Carlo p-values cannot go below 1 / (replications + 1). */
-    private static final double BREAK_P_FLOOR = 0.002;
+    static final double BREAK_P_FLOOR = 0.002;
 
     private final Series series;
     private final Findings findings;
@@ -193,9 +193,9 @@ final class SectionViews {
 
     List<BriefView.KeyFigure> keyFigures(BriefView.Lead lead, BriefView.ThisPeriod period) {
         List<BriefView.KeyFigure> figures = new ArrayList<>();
+        ClaimWords words = new ClaimWords(findings.claims(), f, series.unit());
         figures.add(new BriefView.KeyFigure(lead.period(), lead.value().isEmpty() ? "\u2013" : lead.value(),
-                lead.comparable() ? (lead.down() ? "\u2212" : "+") + lead.changePercent()
-                        + " on a year earlier" : "no comparison with a year earlier"));
+                lead.comparable() ? words.latestNote() : "no comparison with a year earlier"));
         if (period.available() && !period.ytdChange().isEmpty()) {
             figures.add(new BriefView.KeyFigure("Year to date", period.ytdChange(),
                     period.ytdFrom() + " to " + period.ytdTo() + " against a year earlier"));
@@ -205,10 +205,9 @@ final class SectionViews {
                     s.present() ? s.peakIndex() + " against the yearly average; low in " + s.trough()
                             : s.notApplicable() ? "annual data" : "no meaningful seasonal pattern"));
         }
-        BriefView.TrendView t = trend();
-        figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || !t.rising() && !t.falling() ? "no clear trend"
-                : (t.percentPerYear().isEmpty() ? t.slopePerYear() : t.percentPerYear()) + " a year", t.assessed() ? "Sen slope " + t.slopePerYear() + " a year, " + t.pValue()
-                : "too few values"));
+        // the latest regime's slope, named with its span; the whole period's stays in the trend section
+        String[] trend = words.trendTile();
+        figures.add(new BriefView.KeyFigure("Trend", trend[0], trend[1]));
         int breaks = findings.breaks().size();
         int outliers = findings.outliers().size();
         String unusual = breaks == 0 && outliers == 0 ? "none"

@@ -24,8 +24,11 @@ class AnalyzeCommandTest {
         assertThat(run.exitCode()).as(run.err()).isZero();
         JsonNode f = new ObjectMapper().readTree(run.out());
         assertThat(keys(f)).containsExactly("schema", "series", "transform", "trend", "seasonality", "cycle", "outliers",
-                "breaks", "irregular", "smoothing", "indicators", "calendar", "outlook");
+                "breaks", "irregular", "smoothing", "indicators", "calendar", "outlook", "claims");
         assertThat(f.get("schema").asText()).isEqualTo("annalist.findings/1");
+        assertThat(keys(f.get("claims"))).containsExactly("headline", "statements");
+        assertThat(keys(f.get("claims").get("statements").get(0))).containsExactly("quantity", "from", "to", "direction",
+                "size", "unit", "relative_pct", "p_value", "strength", "status", "qualifications", "withheld");
         assertThat(keys(f.get("series"))).containsExactly("name", "unit", "frequency", "start", "end", "observations",
                 "missing");
         assertThat(keys(f.get("trend"))).containsExactly("direction", "test", "statistic", "p_value", "slope_per_year",

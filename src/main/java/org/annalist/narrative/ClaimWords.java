@@ -1,0 +1,190 @@
+package org.annalist.narrative;
+
+import java.util.Optional;
+import org.annalist.findings.Claim;
+import org.annalist.findings.Claim.Quantity;
+import org.annalist.findings.Claim.QualifyReason;
+import org.annalist.findings.Claims;
+import org.annalist.findings.Direction;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+
+/**
+ * The words of the first page's claims ({@link Claims}): the headline's step, the trend sentence
+ * with its qualifications, the key figures' sizes. The brief, the key figures and {@code analyze}'s
+ * notes all word the same claims here, so they cannot disagree. Sizes go through {@link Formats}.
+ */
+final class ClaimWords {
+
+    private final Claims claims;
+    private final Formats f;
+    private final String unit;
+
+    /** @param unit the series' unit, empty when it has none */
+    ClaimWords(Claims claims, Formats f, String unit) {
+        this.claims = claims;
+        this.f = f;
+        this.unit = unit == null ? "" : unit;
+    }
+
+    /** The size of a claim without its sign: {@code 1.8 %}, {@code 0.9 percentage points}, {@code 2,940 nights a year}. */
+    String size(Claim c) {
+        double v = Math.abs(c.size());
+        return switch (c.unit()) {
+            case PERCENT -> f.percent(v);
+            case PERCENT_PER_YEAR -> f.percent(v) + " a year";
+            case UNITS -> f.value(v) + units();
+            case UNITS_PER_YEAR -> f.significant(v) + units() + " a year";
+        };
+    }
+
+    /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a year}. */
+    String signedSize(Claim c) {
+        String sign = c.size() > 0 ? "+" : c.size() < 0 ? "\u2212" : "";
+        return c.directional() ? sign + size(c) : size(c);
+    }
+
+    private String units() {
+        return unit.equals("%") ? " percentage points" : unit.isEmpty() ? "" : " " + unit;
+    }
+
+    /** The sentence on a recent step that leads the page, or empty when the headline is not a step. */
+    String stepSentence() {
+        return claims.headline().filter(c -> c.quantity() == Quantity.BREAK_STEP)
+                .map(c -> "From " + f.period(c.from()) + " the level stepped " + (c.direction() == Direction.INCREASING
+                        ? "up" : "down") + " by " + size(c) + " (a structural break, "
+                        + c.pValue().map(p -> f.pValue(p, SectionViews.BREAK_P_FLOOR)).orElse("") + ").")
+                .orElse("");
+    }
+
+    /** Whether the trend sentence leads the page (the headline is the trend). */
+    boolean trendFirst() {
+        return claims.headline().filter(c -> c.quantity() == Quantity.TREND_SINCE_BREAK
+                || c.quantity() == Quantity.TREND_WHOLE).isPresent();
+    }
+
+    /** The trend sentence of the first page: the latest regime's trend, else the whole period's, with its qualifications. */
+    String trendSentence() {
+        Optional<Claim> since = claims.find(Quantity.TREND_SINCE_BREAK);
+        Optional<Claim> whole = claims.find(Quantity.TREND_WHOLE);
+        Claim trend = since.orElse(whole.orElse(null));
+        if (trend == null) {
+            return "No statement on the trend: " + Terms.trendNotAssessed() + ".";
+        }
+        boolean latest = trend.quantity() == Quantity.TREND_SINCE_BREAK;
+        String opening = latest ? "Since " + f.period(trend.from()) + " the level has "
+                : trend.qualification(QualifyReason.SPANS_BREAKS).isPresent()
+                ? "Across the whole period, which has " + breaks() + ", the underlying trend has " : "The underlying trend has ";
+        if (!trend.said()) {
+            return opening + "no direction that the latest year bears out: the trend test points "
+                    + (trend.direction() == Direction.INCREASING ? "up" : "down") + ", but " + recent(Quantity.YEAR_TO_DATE)
+                    + " and " + recent(Quantity.ROLLING_YEAR) + ".";
+        }
+        StringBuilder s = new StringBuilder(opening);
+        s.append(trend.direction() == Direction.INCREASING ? "been rising" : trend.direction() == Direction.DECREASING
+                ? "been falling" : "shown no clear trend");
+        if (trend.directional()) {
+            s.append(", by about ").append(size(trend)).append(" (").append(trend.pValue().map(f::pValue).orElse(""))
+                    .append(')');
+        }
+        trend.qualification(QualifyReason.LONGER_RUN_DIFFERS).flatMap(q -> whole).ifPresent(w -> s.append(
+                w.direction() == Direction.INCREASING ? ", whereas over the whole period it rose"
+                        : ", whereas over the whole period it fell"));
+        trend.qualification(QualifyReason.RECENT_CHANGE_OPPOSES).flatMap(q -> claims.find(q.by()))
+                .ifPresent(c -> s.append(", although ").append(recent(c.quantity())));
+        return s.append('.').toString();
+    }
+
+    private String breaks() {
+        long n = claims.statements().stream().filter(c -> c.quantity() == Quantity.BREAK_STEP).count();
+        return n == 1 ? "one structural break" : n + " structural breaks";
+    }
+
+    /** "the last twelve months were 1.8 % below the twelve before", from the claim of that quantity. */
+    private String recent(Quantity quantity) {
+        return claims.find(quantity).map(c -> {
+            String side = c.direction() == Direction.INCREASING ? " above " : " below ";
+            Frequency frequency = c.to().frequency();
+            if (quantity == Quantity.ROLLING_YEAR) {
+                String[] span = rollingSpan(frequency);
+                return "the last " + span[0] + " were " + size(c) + side + "the " + span[1] + " before";
+            }
+            return "the year to date (" + f.period(c.from()) + " to " + f.period(c.to()) + ") was " + size(c) + side
+                    + "the same span a year earlier";
+        }).orElse("");
+    }
+
+    private static String[] rollingSpan(Frequency frequency) {
+        return switch (frequency) {
+            case MONTHLY -> new String[] {"twelve months", "twelve"};
+            case QUARTERLY -> new String[] {"four quarters", "four"};
+            case WEEKLY -> new String[] {"52 weeks", "52"};
+            default -> new String[] {"365 days", "365"};
+        };
+    }
+
+    /** The trend tile: its value, and the note that names its span and evidence. */
+    String[] trendTile() {
+        Optional<Claim> since = claims.find(Quantity.TREND_SINCE_BREAK);
+        Optional<Claim> trend = since.isPresent() ? since : claims.find(Quantity.TREND_WHOLE);
+        if (trend.isEmpty()) {
+            return new String[] {"no clear trend", "too few values"};
+        }
+        Claim t = trend.get();
+        String span = t.quantity() == Quantity.TREND_SINCE_BREAK ? "since " + f.period(t.from())
+                : t.qualification(QualifyReason.SPANS_BREAKS).isPresent() ? "whole period, across " + breaks()
+                : "whole period";
+        String evidence = "Sen slope, " + t.pValue().map(f::pValue).orElse("");
+        if (!t.said()) {
+            return new String[] {"not stated", span + "; the latest year went the other way"};
+        }
+        if (!t.directional()) {
+            return new String[] {"no clear trend", span + "; " + t.pValue().map(f::pValue).orElse("")};
+        }
+        String recent = t.qualification(QualifyReason.RECENT_CHANGE_OPPOSES).flatMap(q -> claims.find(q.by()))
+                .map(c -> "; " + (c.quantity() == Quantity.ROLLING_YEAR ? "last " + rollingSpan(c.to().frequency())[0]
+                        : "year to date") + " " + signedSize(c)).orElse("");
+        return new String[] {signedSize(t), span + "; " + evidence + recent};
+    }
+
+    /** The trend of the first page in a table cell: {@code increasing since Aug 2022}, {@code not stated}. */
+    String trendCell() {
+        Optional<Claim> since = claims.find(Quantity.TREND_SINCE_BREAK);
+        Optional<Claim> trend = since.isPresent() ? since : claims.find(Quantity.TREND_WHOLE);
+        if (trend.isEmpty()) {
+            return "not assessed";
+        }
+        Claim t = trend.get();
+        return (t.said() ? Terms.direction(t.direction()) : "not stated")
+                + (since.isPresent() ? " since " + f.shortPeriod(t.from()) : "");
+    }
+
+    /** The latest change as the first tile's note: {@code +1.0 % on a year earlier}, calendar-adjusted first when there is one. */
+    String latestNote() {
+        Optional<Claim> latest = claims.pageLatest();
+        if (latest.isEmpty()) {
+            return "no comparison with a year earlier";
+        }
+        Claim c = latest.get();
+        String note = (c.directional() ? signedSize(c) : "about the same as") + " on a year earlier";
+        if (c.quantity() == Quantity.LATEST_CALENDAR_ADJUSTED) {
+            note += " with the calendar's effect taken out" + claims.find(Quantity.LATEST_VS_YEAR_EARLIER)
+                    .map(raw -> " (" + signedSize(raw) + " as counted)").orElse("");
+        }
+        return note;
+    }
+
+    /** The headline in one plain sentence, for {@code analyze}'s notes. */
+    String headline(Period latestPeriod) {
+        Optional<Claim> h = claims.headline();
+        if (h.isEmpty()) {
+            return "nothing can be said about the latest period";
+        }
+        Claim c = h.get();
+        return switch (c.quantity()) {
+            case BREAK_STEP -> stepSentence();
+            case TREND_SINCE_BREAK, TREND_WHOLE -> trendSentence();
+            default -> f.period(latestPeriod) + ": " + latestNote() + ".";
+        };
+    }
+}
