@@ -40,6 +40,8 @@ final class RulesInForce {
                         + " or more within two seasonal cycles an unusual stretch"),
                 new Rule("Irregular fluctuation called small / large", "share below "
                         + Terms.number(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + " % / above "
-                        + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + " %"));
+                        + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + " %"),
+                new Rule("A series named a rate, share or occupancy, without a unit, is a rate in points when its values stay within",
+                        "0 to " + Terms.number(DecisionRules.RATE_MAX_VALUE)));
     }
 }

@@ -75,6 +75,8 @@ final class Terms {
             case TOO_SHORT -> "too few complete years to tell; the simpler additive form is kept";
             case NOT_SEASONAL -> "annual data have no seasonal swing to judge";
             case FORCED -> "set by the user";
+            case INTERVAL_SCALE -> "the values lie on a scale whose zero is arbitrary (a temperature), so ratios and "
+                    + "logarithms of them mean nothing";
         };
     }
 

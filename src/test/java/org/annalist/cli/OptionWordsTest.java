@@ -21,7 +21,7 @@ class OptionWordsTest {
         String[][] cases = {
             {"--form", "cubic", "expected one of [auto, additive, multiplicative] (case-insensitive) but was 'cubic'"},
             {"--form", " additive", "expected one of [auto, additive, multiplicative] (case-insensitive) but was ' additive'"},
-            {"--measure", "ratio", "expected one of [auto, flow, level] (case-insensitive) but was 'ratio'"},
+            {"--measure", "ratio", "expected one of [auto, flow, level, rate, interval] (case-insensitive) but was 'ratio'"},
             {"--decimal-mark", "dot", "expected one of [auto, point, comma] (case-insensitive) but was 'dot'"},
             {"--aggregate", "fortnight", "expected one of [week, month, quarter, year] (case-insensitive) but was 'fortnight'"},
             {"--date-order", "sideways", "'sideways' is not a date order; expected auto, day-first or month-first"},
