@@ -35,10 +35,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     /**
      * @param unitPerPeriod the unit with its period, e.g. {@code nights a month}; empty without a unit
      * @param logo          the logo's URI; empty without one
+     * @param measure       the sentence saying how the series is treated ("Treated as a rate: …")
+     * @param percentChanges changes are given in % (else in points or units: the tables' % column is left out)
      */
     public record Header(String title, String organisation, String seriesName, String unit, String periodCovered,
                          String latestPeriod, String generatedAt, Calendar calendar, String unitPerPeriod,
-                         String logo) {
+                         String logo, String measure, boolean percentChanges) {
     }
 
     /** The series' frequency, for the template's words; all false: daily or business-daily. */
@@ -55,9 +57,11 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *
      * @param atPeriod  {@code In October 2026} / {@code On Saturday 31 October 2026}
      * @param up        higher than a year earlier ({@code up} and {@code down} both false: about the same)
+     * @param changePercent the change's size as the measure states it: {@code 11.9 %}, {@code 1.2 percentage points}, {@code 0.8 °F}
+     * @param difference the change is a difference (points or units), worded "higher", not "more"
      */
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
-                       String changePercent, boolean up, boolean down, boolean provisional) {
+                       String changePercent, boolean up, boolean down, boolean provisional, boolean difference) {
     }
 
     /**
@@ -104,10 +108,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param rising     the trend is increasing ({@code rising} and {@code falling} both false: no clear trend)
      * @param slopeSize  the slope without its sign, for "by about 2,120 a year"
      * @param sinceBreak the trend within the latest regime, or null
+     * @param percentPerYear the slope as % of the average level; empty where changes are not in % (a rate, a temperature)
+     * @param slopeUnit  what the slope is counted in, with a leading space: the unit, {@code  percentage points}, {@code  °F}
      */
     public record TrendView(boolean assessed, boolean rising, boolean falling, String test, String statistic, String pValue,
                             String slopePerYear, String slopeSize, String lower, String upper, String percentPerYear, String basis,
-                            String reason, SinceBreak sinceBreak, String seasonalKendall) {
+                            String reason, SinceBreak sinceBreak, String seasonalKendall, String slopeUnit) {
     }
 
     /** @param since the first period of the latest regime, in words */

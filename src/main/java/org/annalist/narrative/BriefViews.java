@@ -23,6 +23,7 @@ public final class BriefViews {
     public static BriefView of(Series series, Findings findings, FigurePlan plan, SourceFacts source,
                                Masthead masthead) {
         Formats f = Formats.forValues(series.values(), masthead.language());
+        MeasureWords measure = MeasureWords.of(series, findings, f);
         SectionViews sections = new SectionViews(series, findings, plan, f);
         String title = masthead.title().isEmpty() ? series.name() : masthead.title();
         String author = masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation();
@@ -31,8 +32,8 @@ public final class BriefViews {
         BriefView.Header header = new BriefView.Header(title, masthead.organisation(), series.name(), series.unit(),
                 f.period(series.start()) + " to " + f.period(series.end()), f.period(series.end()),
                 f.timestamp(masthead.generatedAt()), BriefView.Calendar.of(series.frequency()), unitPerPeriod(series),
-                masthead.logoUri().orElse(""));
-        BriefView.Lead lead = lead(series, findings, f);
+                masthead.logoUri().orElse(""), measure.statement(), measure.percent());
+        BriefView.Lead lead = lead(series, findings, f, measure);
         BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
                 f.count(source.rowsRead()), DataNotes.reading(source.reading()), masthead.software(), f.timestamp(masthead.generatedAt()));
         List<String> notes = DataNotes.notes(source);
@@ -42,33 +43,33 @@ public final class BriefViews {
                 sections.trend(),
                 sections.season(), sections.cycle(), sections.outliers(), sections.breaks(), sections.episodes(),
                 sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(),
-                OutlookViews.of(series, findings.outlook(), f), facts(series, findings, f),
+                OutlookViews.of(series, findings.outlook(), f, measure), facts(series, findings, f),
                 notes, AppendixViews.methods(findings, f), AppendixViews.thresholds(), provenance);
     }
 
-    private static BriefView.Lead lead(Series series, Findings findings, Formats f) {
+    private static BriefView.Lead lead(Series series, Findings findings, Formats f, MeasureWords measure) {
+        boolean difference = !measure.percent();
         if (findings.recent().isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", false, false,
-                    false);
+                    false, difference);
         }
         RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
         boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
                 || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
-        if (last.value() == null || last.changePct() == null) {
+        if (last.value() == null || last.change() == null || measure.percent() && last.changePct() == null) {
             return new BriefView.Lead(false, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                    "", "", false, false, provisional);
+                    "", "", false, false, provisional, difference);
         }
-        double pct = last.changePct();
-        boolean flat = Math.abs(pct) < 0.05;
-        // Percentages of a value at or below zero mislead: such series are compared in their own units.
-        String change = positive(series) ? f.percent(Math.abs(pct)) : f.value(Math.abs(last.change()))
-                + (series.unit().isEmpty() ? "" : " " + series.unit());
+        // in %, percentage points or units as the measure has it (MeasureWords)
+        double delta = last.change();
+        boolean flat = measure.rounded(delta, last.changePct());
+        String change = measure.size(delta, last.changePct());
         String yearEarlier = last.period().frequency() == Frequency.DAILY
                 || last.period().frequency() == Frequency.BUSINESS_DAILY
                 ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
                 : f.period(last.yearEarlierPeriod());
         return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                yearEarlier, change, !flat && pct > 0, !flat && pct < 0, provisional);
+                yearEarlier, change, !flat && delta > 0, !flat && delta < 0, provisional, difference);
     }
 
     private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {

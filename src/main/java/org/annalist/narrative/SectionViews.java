@@ -13,7 +13,6 @@ import org.annalist.findings.Decomposition;
 import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Direction;
 import org.annalist.findings.IrregularFinding;
-import org.annalist.findings.Measure;
 import org.annalist.findings.SeasonVerdict;
 import org.annalist.findings.Side;
 import org.annalist.findings.SeasonalityFinding;
@@ -32,19 +31,21 @@ final class SectionViews {
     private final Findings findings;
     private final FigurePlan plan;
     private final Formats f;
+    private final MeasureWords measure;
 
     SectionViews(Series series, Findings findings, FigurePlan plan, Formats f) {
         this.series = series;
         this.findings = findings;
         this.plan = plan;
         this.f = f;
+        this.measure = MeasureWords.of(series, findings, f);
     }
 
     BriefView.TrendView trend() {
         TrendFinding t = findings.trend();
         if (!t.assessed()) {
             return new BriefView.TrendView(false, false, false, "", "", "", "", "", "", "", "", "",
-                    Terms.trendNotAssessed(), null, null);
+                    Terms.trendNotAssessed(), null, null, measure.differenceUnit());
         }
         BriefView.SinceBreak since = t.latestRegime().map(r -> new BriefView.SinceBreak(f.period(r.since()),
                 r.direction() == Direction.INCREASING, r.direction() == Direction.DECREASING,
@@ -57,8 +58,8 @@ final class SectionViews {
                 f.signedSignificant(t.slopePerYear()), f.significant(Math.abs(t.slopePerYear())),
                 f.significant(t.slopeCi95().get(0)),
                 f.significant(t.slopeCi95().get(1)),
-                t.changePctPerYear() == null ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%", Terms.trendBasis(t.test()), null,
-                since, kendall);
+                t.changePctPerYear() == null || !measure.percent() ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%",
+                Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit());
     }
 
     BriefView.SeasonView season() {
@@ -93,7 +94,8 @@ final class SectionViews {
         List<BriefView.OutlierRow> rows = new ArrayList<>();
         for (OutlierFinding o : findings.outliers()) {
             rows.add(new BriefView.OutlierRow(f.period(series.period(o.index())), f.value(o.observed()),
-                    f.value(o.expected()), f.signedPercent(o.deviationPct()), f.fixed(Math.abs(o.score()), 1),
+                    f.value(o.expected()), measure.signedChange(o.observed() - o.expected(), o.deviationPct()),
+                    f.fixed(Math.abs(o.score()), 1),
                     o.direction() == Side.ABOVE));
         }
         return rows;
@@ -104,7 +106,7 @@ final class SectionViews {
         for (BreakFinding b : findings.breaks()) {
             rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
                     f.period(b.ci95().get(1)), f.value(b.levelBefore()), f.value(b.levelAfter()),
-                    f.signedPercent(b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
+                    measure.signedChange(b.levelAfter() - b.levelBefore(), b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
                     f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional()));
         }
         return rows;
@@ -150,7 +152,7 @@ final class SectionViews {
         if (i == null) {
             return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", false, false, "", List.of(), false);
         }
-        boolean level = i.measure() != Measure.FLOW;
+        boolean level = !i.measure().summed();
         IndicatorsFinding.Span ytd = i.yearToDate();
         IndicatorsFinding.Span rolling = i.rollingYear();
         Period period = i.period();
@@ -171,13 +173,9 @@ final class SectionViews {
                         : findings.calendar().notes().stream().map(CalendarSentences::of).toList(), !i.flagged().isEmpty());
     }
 
-    /** A change as a brief states it: % for flows, the measure's own units for levels and rates. */
+    /** A change as a brief states it: in %, percentage points or the series' units, by {@link MeasureWords}. */
     private String change(IndicatorsFinding.Span s, boolean level) {
-        if (level || !BriefViews.positive(series)) {
-            return f.signedValue(s.change()) + (series.unit().equals("%") ? " percentage points"
-                    : series.unit().isEmpty() ? "" : " " + series.unit());
-        }
-        return s.changePct() == null ? "" : f.signedPercent(s.changePct());
+        return measure.percent() && s.changePct() == null ? "" : measure.signedChange(s.change(), s.changePct());
     }
 
     private static String ordinal(int n) {
@@ -207,7 +205,8 @@ final class SectionViews {
         }
         BriefView.TrendView t = trend();
         figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || !t.rising() && !t.falling() ? "no clear trend"
-                : (t.percentPerYear().isEmpty() ? t.slopePerYear() : t.percentPerYear()) + " a year", t.assessed() ? "Sen slope " + t.slopePerYear() + " a year, " + t.pValue()
+                : (t.percentPerYear().isEmpty() ? t.slopePerYear() + t.slopeUnit() : t.percentPerYear()) + " a year",
+                t.assessed() ? "Sen slope " + t.slopePerYear() + t.slopeUnit() + " a year, " + t.pValue()
                 : "too few values"));
         int breaks = findings.breaks().size();
         int outliers = findings.outliers().size();
