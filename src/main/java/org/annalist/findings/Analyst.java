@@ -132,7 +132,11 @@ public final class Analyst {
     private FormChoice chooseForm(double[] x, int period, Measure measured) {
         if (measured == Measure.INTERVAL) {
             // a ratio of two values on a scale with an arbitrary zero means nothing, so logs do neither
-            return FormChoice.intervalScale(ModelForm.measure(x, period));
+            return FormChoice.additiveFor(FormChoice.Reason.INTERVAL_SCALE, ModelForm.measure(x, period));
+        }
+        if (measured == Measure.RATE) {
+            // a rate's seasonal pattern and changes are stated in points; a pattern in % of a % would not be
+            return FormChoice.additiveFor(FormChoice.Reason.RATE_IN_POINTS, ModelForm.measure(x, period));
         }
         if (forcedForm.isPresent()) {
             if (forcedForm.get() == Form.MULTIPLICATIVE) {

@@ -127,11 +127,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *
      * @param strengthWord {@code strong}, {@code moderate} or {@code weak}
      * @param indexUnit {@code %} for multiplicative, the series unit for additive
+     * @param formFromMeasure additive because of the measure (a rate, an interval scale), not because of the swing
      */
     public record SeasonView(boolean present, boolean negligible, boolean tooShort, boolean notApplicable, String period, String strength, String strengthWord, String test,
                              String statistic, String pValue, String peak, String peakIndex, String trough,
                              String troughIndex, String swing, String indexUnit, boolean multiplicative,
-                             boolean changed, String formReason, String years) {
+                             boolean changed, String formReason, String years, boolean formFromMeasure) {
     }
 
     public record CycleView(boolean present, String length, boolean regular, List<String> peaks, String spectralPeriod,

@@ -6,6 +6,7 @@ import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
 import org.annalist.findings.FigurePlan;
+import org.annalist.findings.FormChoice;
 import org.annalist.findings.Findings;
 import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.OutlierFinding;
@@ -70,7 +71,7 @@ final class SectionViews {
         if (verdict == SeasonVerdict.NOT_APPLICABLE || verdict == SeasonVerdict.TOO_SHORT) {
             return new BriefView.SeasonView(false, false, verdict == SeasonVerdict.TOO_SHORT,
                     verdict == SeasonVerdict.NOT_APPLICABLE, s.period() == null ? "" : String.valueOf(s.period()), "", "",
-                    "", "", "", "", "", "", "", "", "", s.multiplicative(), false, formReason, years);
+                    "", "", "", "", "", "", "", "", "", s.multiplicative(), false, formReason, years, formFromMeasure());
         }
         boolean multiplicative = s.multiplicative();
         SeasonalityFinding.ProfilePoint peak = extreme(s, true);
@@ -80,7 +81,13 @@ final class SectionViews {
                 Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), f.seasonName(series.frequency(), peak.position()),
                 index(peak.index(), multiplicative), f.seasonName(series.frequency(), trough.position()), index(trough.index(), multiplicative),
                 multiplicative ? f.fixed(s.swing(), 0) : f.significant(s.swing()),
-                multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years);
+                multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years, formFromMeasure());
+    }
+
+    /** The additive form follows from the measure (a rate, a temperature), not from the swing. */
+    private boolean formFromMeasure() {
+        return findings.form().reason() == FormChoice.Reason.INTERVAL_SCALE
+                || findings.form().reason() == FormChoice.Reason.RATE_IN_POINTS;
     }
 
     BriefView.CycleView cycle() {
@@ -221,7 +228,7 @@ final class SectionViews {
 
     private String index(double value, boolean multiplicative) {
         return multiplicative ? f.signedFixed(value, 0) + "\u00A0%" : f.signedSignificant(value)
-                + (series.unit().isEmpty() ? "" : " " + series.unit());
+                + measure.differenceUnit();
     }
 
     private static SeasonalityFinding.ProfilePoint extreme(SeasonalityFinding s, boolean highest) {
