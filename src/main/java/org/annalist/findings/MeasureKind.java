@@ -44,7 +44,7 @@ public final class MeasureKind {
 
     /** Words of a price: a "rate" that is a price (room rate, exchange rate) is averaged and compared in %. */
     private static final Set<String> PRICE_WORDS = Set.of("price", "prices", "cost", "costs", "fare", "fares",
-            "tariff", "adr", "revpar", "exchange", "room");
+            "tariff", "adr", "revpar", "exchange");
 
     /** Words of a stock or level: averaged over a span, never summed. */
     private static final Set<String> LEVEL_WORDS = Set.of("price", "prices", "average", "avg", "mean", "median",
@@ -73,7 +73,8 @@ public final class MeasureKind {
             return Measure.RATE;
         }
         boolean rateName = anyOf(nameWords, RATE_WORDS) || String.join(" ", nameWords).contains("per cent");
-        if (anyOf(nameWords, PRICE_WORDS)) {
+        if (anyOf(nameWords, PRICE_WORDS) || Collections.indexOfSubList(nameWords, List.of("room", "rate")) >= 0
+                || Collections.indexOfSubList(nameWords, List.of("daily", "rate")) >= 0) {
             return Measure.LEVEL;
         }
         if (rateName && u.isEmpty() && !(max > DecisionRules.RATE_MAX_VALUE)) {
