@@ -27,7 +27,8 @@ class AnalyzeCommandTest {
                 "breaks", "irregular", "smoothing", "indicators", "calendar", "outlook");
         assertThat(f.get("schema").asText()).isEqualTo("annalist.findings/1");
         assertThat(keys(f.get("series"))).containsExactly("name", "unit", "frequency", "start", "end", "observations",
-                "missing");
+                "missing", "measure");
+        assertThat(f.get("series").get("measure").asText()).isEqualTo("flow");
         assertThat(keys(f.get("trend"))).containsExactly("direction", "test", "statistic", "p_value", "slope_per_year",
                 "slope_ci95", "change_pct_per_year");
         assertThat(keys(f.get("seasonality"))).containsExactly("present", "period", "strength", "test", "p_value",

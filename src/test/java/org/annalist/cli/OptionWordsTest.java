@@ -2,6 +2,7 @@ package org.annalist.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import org.junit.jupiter.api.Test;
@@ -46,6 +47,12 @@ class OptionWordsTest {
         assertThat(json.readTree(auto.out()).get("transform").asText()).isEqualTo("log");
         Run level = Run.of("analyze", "--measure", "LEVEL", "--horizon", "0", "--format", "json", AIR);
         assertThat(json.readTree(level.out()).get("indicators").get("measure").asText()).isEqualTo("level");
+        Run interval = Run.of("analyze", "--measure", "Interval", "--horizon", "0", "--format", "json", AIR);
+        JsonNode asInterval = json.readTree(interval.out());
+        assertThat(asInterval.get("indicators").get("measure").asText()).isEqualTo("interval");
+        assertThat(asInterval.get("transform").asText()).isEqualTo("none");   // no logs of an interval scale
+        Run rate = Run.of("analyze", "--measure", "RATE", "--horizon", "0", "--format", "json", AIR);
+        assertThat(json.readTree(rate.out()).get("series").get("measure").asText()).isEqualTo("rate");
         Run quarters = Run.of("analyze", "--aggregate", "Quarter", "--aggregate-by", "mean", "--horizon", "0",
                 "--format", "json", AIR);
         assertThat(json.readTree(quarters.out()).get("series").get("frequency").asText()).isEqualTo("quarterly");
