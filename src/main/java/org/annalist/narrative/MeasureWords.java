@@ -75,6 +75,16 @@ final class MeasureWords {
         };
     }
 
+    /** As {@link #differenceUnit()}, abbreviated for the key figures: {@code  pp} for percentage points (defined in {@link #statement()}). */
+    String shortUnit() {
+        return scale == Scale.POINTS && percentUnit(unit) ? "\u00A0pp" : differenceUnit();
+    }
+
+    /** A signed difference for a key figure: {@code +2.30 pp}, {@code −0.88 °F}. */
+    String signedShort(double change) {
+        return f.signedValue(change) + shortUnit();
+    }
+
     /** A signed change: {@code +4.2 %}, {@code +1.20 percentage points}, {@code −0.8 °F}. */
     String signedChange(double change, Double changePct) {
         return percent() ? f.signedPercent(changePct) : f.signedValue(change) + differenceUnit();
@@ -95,7 +105,7 @@ final class MeasureWords {
     String statement() {
         String changes = switch (scale) {
             case PERCENT -> "changes are given in %";
-            case POINTS -> "changes are given in" + differenceUnit() + ", not in %";
+            case POINTS -> "changes are given in" + differenceUnit() + (percentUnit(unit) ? " (pp)" : "") + ", not in %";
             case UNITS -> unit.isEmpty() ? "changes are given as differences, not in %"
                     : "changes are given in " + unit + ", not in %";
         };

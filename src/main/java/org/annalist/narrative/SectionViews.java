@@ -202,7 +202,9 @@ final class SectionViews {
                 lead.comparable() ? (lead.down() ? "\u2212" : "+") + lead.changePercent()
                         + " on a year earlier" : "no comparison with a year earlier"));
         if (period.available() && !period.ytdChange().isEmpty()) {
-            figures.add(new BriefView.KeyFigure("Year to date", period.ytdChange(),
+            IndicatorsFinding.Span ytd = findings.indicators().yearToDate();
+            figures.add(new BriefView.KeyFigure("Year to date", measure.percent() ? period.ytdChange()
+                    : measure.signedShort(ytd.change()),
                     period.ytdFrom() + " to " + period.ytdTo() + " against a year earlier"));
         } else {
             BriefView.SeasonView s = season();
@@ -212,7 +214,7 @@ final class SectionViews {
         }
         BriefView.TrendView t = trend();
         figures.add(new BriefView.KeyFigure("Trend", !t.assessed() || !t.rising() && !t.falling() ? "no clear trend"
-                : (t.percentPerYear().isEmpty() ? t.slopePerYear() + t.slopeUnit() : t.percentPerYear()) + " a year",
+                : (t.percentPerYear().isEmpty() ? t.slopePerYear() + measure.shortUnit() : t.percentPerYear()) + " a year",
                 t.assessed() ? "Sen slope " + t.slopePerYear() + t.slopeUnit() + " a year, " + t.pValue()
                 : "too few values"));
         int breaks = findings.breaks().size();

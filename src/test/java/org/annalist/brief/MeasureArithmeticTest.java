@@ -150,12 +150,12 @@ class MeasureArithmeticTest {
                 change));
         // the key figure tiles: the latest change, the year to date and the trend, all in points
         assertThat(occupancyText).contains(String.format(Locale.ROOT, "+%.2f percentage points on a year earlier", change));
-        assertThat(occupancyText).containsPattern("YEAR TO DATE|Year to date");
-        assertThat(occupancyText).containsPattern("Year to date \\+\\d\\.\\d\\d percentage points January 2026 to October 2026");
-        assertThat(occupancyText).containsPattern("Trend \\+0\\.\\d+ percentage points a year");
+        // the tiles abbreviate percentage points as pp, which the sentence on the measure defines
+        assertThat(occupancyText).containsPattern("Year to date \\+\\d\\.\\d\\d pp January 2026 to October 2026");
+        assertThat(occupancyText).containsPattern("Trend \\+0\\.\\d+ pp a year Sen slope \\+0\\.\\d+ percentage points a year");
         assertThat(occupancyText).containsPattern("the average was \\d\\d\\.\\d\\d %, \\+\\d\\.\\d\\d percentage points on the same months");
         assertThat(occupancyText).contains("Treated as a rate: spans are averaged, never summed; changes are given in "
-                + "percentage points");
+                + "percentage points (pp)");
         assertThat(occupancyText).doesNotContain("% more", "% less", "% a year", "of its average level");
         assertThat(SIGNED_PERCENT.matcher(occupancyText).results().map(m -> m.group()).toList()).isEmpty();
         // planted slope 0.8 points a year
