@@ -161,13 +161,13 @@ public final class SpecReader {
         Map<String, String> given = values.names(m.entries().get("measure"), "measure");
         Map<String, Measure> measures = new LinkedHashMap<>();
         for (Map.Entry<String, String> e : given.entrySet()) {
-            // written exactly: flow or level, as the README has always listed them
-            if (!e.getValue().equals("flow") && !e.getValue().equals("level")) {
+            // the command line's words, in any case; auto leaves the series to the inference
+            if (!Words.MEASURE.knows(e.getValue())) {
                 YamlTree.Node at = ((YamlTree.Mapping) m.entries().get("measure")).entries().get(e.getKey());
                 throw values.problemAt(at, "measure of '" + e.getKey() + "' is '" + e.getValue()
-                        + "'; expected flow or level");
+                        + "'; expected " + Words.MEASURE.listed());
             }
-            measures.put(e.getKey(), Words.MEASURE.valueOf(e.getValue()).orElseThrow());
+            Words.MEASURE.valueOf(e.getValue()).ifPresent(kind -> measures.put(e.getKey(), kind));
         }
         return measures;
     }

@@ -31,9 +31,12 @@ public record Words<T>(Map<String, T> values, boolean auto) {
     public static final Words<Form> FORM = withAuto(ordered(
             "additive", Form.ADDITIVE, "multiplicative", Form.MULTIPLICATIVE));
 
-    /** Flows are summed over spans, levels averaged; ratios are never declared, only derived. */
+    /**
+     * Flows are summed over spans; levels, rates and interval-scale quantities averaged; rates
+     * change in points, interval-scale quantities in their units; ratios are never declared, only derived.
+     */
     public static final Words<Measure> MEASURE = withAuto(ordered(
-            "flow", Measure.FLOW, "level", Measure.LEVEL));
+            "flow", Measure.FLOW, "level", Measure.LEVEL, "rate", Measure.RATE, "interval", Measure.INTERVAL));
 
     /** How dates such as 03/04/2024 are read; "auto" is a value here, the reader's own inference. */
     public static final Words<DateOrder> DATE_ORDER = new Words<>(ordered(

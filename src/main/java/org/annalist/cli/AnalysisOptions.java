@@ -17,8 +17,10 @@ final class AnalysisOptions {
     Optional<Form> form = Optional.empty();
 
     @Option(names = "--measure", paramLabel = "KIND", converter = Converters.Measure.class,
-            description = "flow (summed over time: nights, arrivals) or level (averaged: occupancy, prices). "
-                    + "Default: auto (level for a unit in % or a name saying rate, occupancy, average, price ...).")
+            description = "auto, flow (summed over time: nights, arrivals, revenue; changes in %%), level (averaged: "
+                    + "capacity, prices, an index; changes in %%), rate (averaged: occupancy, a share in %%; changes in "
+                    + "percentage points) or interval (averaged, zero arbitrary: a temperature; changes in its units, "
+                    + "no %% and no totals). Default: auto (from the unit and the words of the name).")
     Optional<Measure> measure = Optional.empty();
 
     @Option(names = "--holidays", paramLabel = "FILE",

@@ -42,7 +42,7 @@ public final class Analyst {
 
     /**
      * @param forcedForm additive or multiplicative as the user set it, instead of deciding from the data
-     * @param measure    flow or level as the user declared it, instead of reading it from unit and name
+     * @param measure    flow, level, rate or interval as the user declared it, instead of reading it from unit and name
      * @param holidays   the user's moving holidays, estimated beside Easter
      * @param horizon    periods to forecast (0 for no outlook); empty for the rest of the last
      *                   observed year plus {@value OutlookAnalysis#DEFAULT_EXTRA_PERIODS}
@@ -73,7 +73,8 @@ public final class Analyst {
         List<Caveat> notes = new ArrayList<>();
         double[] x = series.values();
         int period = series.frequency().seasonalPeriod();
-        FormChoice form = chooseForm(x, period);
+        Measure measured = parts != null ? Measure.RATIO : measure.orElse(MeasureKind.infer(series));
+        FormChoice form = chooseForm(x, period, measured);
         boolean log = form.multiplicative();
         double[] y = log ? WorkingScale.logs(x) : x;
         Optional<Stl.Result> stl = decompose(y, period, notes);
@@ -107,8 +108,7 @@ public final class Analyst {
         breaks.breaks().stream().filter(BreakFinding::provisional)
                 .forEach(b -> notes.add(new Caveat.ProvisionalBreak(series.period(b.index()))));
 
-        TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), notes);
-        Measure measured = parts != null ? Measure.RATIO : measure.orElse(MeasureKind.infer(series));
+        TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), measured, notes);
         LatestIndicators.Measure kind = measured.forIndicators();
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
                 : LatestIndicators.at(series, series.size() - 1, kind,
@@ -122,14 +122,22 @@ public final class Analyst {
         }).orElse(null);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
-        OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), kind, horizon);
-        return new Findings(SeriesFacts.of(series), log ? Transform.LOG : Transform.NONE, trend,
+        OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), measured, horizon);
+        return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
                 IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendarIrregular, log, latest, holidays),
-                outlook, recent(series), notes, form, decomposition, breaks.episodes(), breaks.method());
+                outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
 
-    private FormChoice chooseForm(double[] x, int period) {
+    private FormChoice chooseForm(double[] x, int period, Measure measured) {
+        if (measured == Measure.INTERVAL) {
+            // a ratio of two values on a scale with an arbitrary zero means nothing, so logs do neither
+            return FormChoice.additiveFor(FormChoice.Reason.INTERVAL_SCALE, ModelForm.measure(x, period));
+        }
+        if (measured == Measure.RATE) {
+            // a rate's seasonal pattern and changes are stated in points; a pattern in % of a % would not be
+            return FormChoice.additiveFor(FormChoice.Reason.RATE_IN_POINTS, ModelForm.measure(x, period));
+        }
         if (forcedForm.isPresent()) {
             if (forcedForm.get() == Form.MULTIPLICATIVE) {
                 for (double v : x) {
@@ -180,7 +188,8 @@ public final class Analyst {
         return new Smoothing(new Smoothing.CentredAverage(result.window()), result.window(), result.trendCycle());
     }
 
-    private static List<RecentPeriod> recent(Series series) {
+    /** The table's rows; the % change only where the measure has one ({@link Measure#relativeChanges()}). */
+    private static List<RecentPeriod> recent(Series series, Measure measured) {
         List<RecentPeriod> recent = new ArrayList<>();
         int lag = YearOnYear.lag(series.frequency());
         for (int i = Math.max(0, series.size() - RECENT_PERIODS); i < series.size(); i++) {
@@ -191,7 +200,8 @@ public final class Analyst {
                     series.period(i).plus(-lag),
                     earlier < 0 || series.isMissing(earlier) ? null : series.value(earlier),
                     change.map(YearOnYear.Change::absolute).orElse(null),
-                    change.map(YearOnYear.Change::percent).filter(p -> !p.isNaN()).orElse(null),
+                    change.map(YearOnYear.Change::percent).filter(p -> !p.isNaN() && measured.relativeChanges())
+                            .orElse(null),
                     series.flags(i), earlier < 0 ? Set.of() : series.flags(earlier)));
         }
         return recent;

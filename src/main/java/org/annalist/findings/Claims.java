@@ -92,9 +92,13 @@ public record Claims(List<Claim> statements, @JsonIgnore Optional<Claim> headlin
         ConsistencyPass.Trends trends = ConsistencyPass.trends(whole, since, !findings.breaks().isEmpty(), claims);
         trends.whole().ifPresent(claims::add);
         trends.since().ifPresent(claims::add);
+        // a step of a rate or a temperature is a difference, as every other change of theirs
+        boolean relative = findings.series().measure() == null || findings.series().measure().relativeChanges();
         for (BreakFinding b : findings.breaks()) {
+            boolean pct = relative && b.levelBefore() > 0;
             claims.add(new Claim(Quantity.BREAK_STEP, b.period(), b.period(), signOf(b.changePct(), Optional.of(b.changePct())),
-                    b.changePct(), SizeUnit.PERCENT, Optional.of(b.changePct()), Optional.of(b.pValue()),
+                    pct ? b.changePct() : b.levelAfter() - b.levelBefore(), pct ? SizeUnit.PERCENT : SizeUnit.UNITS,
+                    Optional.of(b.changePct()), Optional.of(b.pValue()),
                     b.pValue() < DecisionRules.ALPHA ? Strength.SIGNIFICANT : Strength.NOT_SIGNIFICANT, Status.STATED,
                     List.of(), Optional.empty()));
         }
@@ -160,7 +164,7 @@ public record Claims(List<Claim> statements, @JsonIgnore Optional<Claim> headlin
      */
     private static Claim change(Quantity quantity, Period from, Period to, double change, Optional<Double> pct,
                                 Measure measure) {
-        boolean percent = measure == Measure.FLOW && pct.isPresent();
+        boolean percent = measure.relativeChanges() && pct.isPresent();
         boolean material = pct.map(p -> Math.abs(p) >= DecisionRules.MATERIAL_CHANGE_PCT).orElse(change != 0);
         return new Claim(quantity, from, to, signOf(change, pct), percent ? pct.get() : change,
                 percent ? SizeUnit.PERCENT : SizeUnit.UNITS, pct, Optional.empty(),

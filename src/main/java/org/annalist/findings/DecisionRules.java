@@ -28,6 +28,15 @@ public final class DecisionRules {
      */
     public static final int MIN_REGIME_CYCLES_FOR_TREND = 2;
 
+    // ---- measure kinds ------------------------------------------------------------------------
+
+    /**
+     * A series whose name says rate, share or occupancy and that has no unit is taken for a rate
+     * only when no value exceeds this: a share of a whole in per cent cannot exceed 100 (by
+     * definition); a larger "rate" is one per 1,000 or per 100,000, averaged as a level.
+     */
+    public static final double RATE_MAX_VALUE = 100;
+
     // ---- additive or multiplicative ----------------------------------------------------------
 
     /**

@@ -14,7 +14,7 @@ public record FormChoice(Form form, Reason reason, Double elasticity, Double lev
     /** Why the form was chosen. */
     public enum Reason {
         SWING_GROWS_WITH_LEVEL, SWING_INDEPENDENT_OF_LEVEL, LEVEL_TOO_STABLE, NOT_ALL_POSITIVE, TOO_SHORT, NOT_SEASONAL,
-        FORCED
+        FORCED, INTERVAL_SCALE, RATE_IN_POINTS
     }
 
     public boolean multiplicative() {
@@ -23,6 +23,14 @@ public record FormChoice(Form form, Reason reason, Double elasticity, Double lev
 
     static FormChoice forced(Form form) {
         return new FormChoice(form, Reason.FORCED, null, null, 0);
+    }
+
+    /**
+     * Additive whatever the evidence, for a measure whose changes are differences: an interval
+     * scale ({@link Measure#INTERVAL}) or a rate ({@link Measure#RATE}).
+     */
+    static FormChoice additiveFor(Reason reason, ModelForm.Evidence e) {
+        return additive(reason, e);
     }
 
     /**

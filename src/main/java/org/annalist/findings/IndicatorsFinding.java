@@ -31,11 +31,18 @@ public record IndicatorsFinding(Period period, double value, List<String> flagge
         }
     }
 
-    /** @param change in the series' units (percentage points for a rate in %) */
+    /**
+     * @param change    in the series' units (percentage points for a rate in %)
+     * @param changePct null where the measure has no % change (a rate, an interval-scale quantity)
+     */
     public record Comparison(Period period, double value, double change, Double changePct) {
     }
 
-    /** @param total for a level measure the mean over the span */
+    /**
+     * @param total     the sum over the span for a flow; the mean for a level, rate or interval-scale
+     *                  quantity; the ratio of the parts' sums for a ratio
+     * @param changePct null where the measure has no % change (a rate, an interval-scale quantity)
+     */
     public record Span(Period from, Period to, double total, double previousTotal, double change, Double changePct) {
     }
 

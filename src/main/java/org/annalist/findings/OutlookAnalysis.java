@@ -33,7 +33,8 @@ final class OutlookAnalysis {
      * @return null without an outlook
      */
     static OutlookFinding of(Series series, Optional<Decomposition> decomposition, int regimeStart,
-                             LatestIndicators.Measure measure, Optional<Integer> horizon) {
+                             Measure kind, Optional<Integer> horizon) {
+        LatestIndicators.Measure measure = kind.forIndicators();
         int last = lastObserved(series);
         if (last < 0 || horizon.isPresent() && horizon.get() == 0) {
             return null;
@@ -53,7 +54,8 @@ final class OutlookAnalysis {
             }
         }
         double[] y = filled(series, decomposition, from, last, caveats);
-        Optional<Outlook.Result> result = Outlook.of(y, period, h, bounds(series, measure));
+        Optional<Outlook.Result> result = Outlook.of(y, period, h,
+                kind == Measure.INTERVAL ? Outlook.Bounds.NONE : bounds(series, measure));
         if (result.isEmpty()) {
             return null;
         }

@@ -23,9 +23,12 @@ final class TrendAnalysis {
 
     /**
      * @param regimeStart first index of the latest regime after structural breaks (0 when none)
+     * @param measure     the slope is also given as % of the mean level only where changes can be
+     *                    read as % ({@link Measure#relativeChanges()}): a rate's slope is in points,
+     *                    a temperature's in degrees
      */
     static TrendFinding of(Series series, double[] adjusted, boolean seasonal, double[] observed, int regimeStart,
-                           List<Caveat> notes) {
+                           Measure measure, List<Caveat> notes) {
         int present = 0;
         for (double v : adjusted) {
             present += Double.isNaN(v) ? 0 : 1;
@@ -42,7 +45,7 @@ final class TrendAnalysis {
         double periodsPerYear = series.frequency().periodsPerYear() / block;
         SenSlope.Result sen = slopes.estimate(periodsPerYear, mk.varianceUsed());
         // % of the level means nothing for a series that reaches zero or below (a net balance, say)
-        boolean positive = java.util.Arrays.stream(observed).filter(v -> !Double.isNaN(v)).allMatch(v -> v > 0);
+        boolean positive = measure.relativeChanges() && java.util.Arrays.stream(observed).filter(v -> !Double.isNaN(v)).allMatch(v -> v > 0);
         double level = positive ? Analyst.meanOf(observed) : 0;
         Optional<TrendFinding.Evidence> seasonalKendall = !seasonal ? Optional.empty()
                 : SeasonalKendall.test(observed, series.frequency().seasonalPeriod())

@@ -13,7 +13,8 @@ import org.annalist.series.Period;
  *                         {@value DecisionRules#MIN_VALUES_FOR_TREND} values)
  * @param slopePerYear     Sen's slope in series units per year
  * @param slopeCi95        its 95 % interval [lower, upper]
- * @param changePctPerYear the slope as % of the mean level
+ * @param changePctPerYear the slope as % of the mean level; null for a series at or below zero, a
+ *                         rate or an interval-scale quantity
  * @param seasonalKendall  the seasonal Kendall test on the observed values, for seasonal series
  * @param latestRegime     the trend within the latest regime, when there are breaks and it is long enough
  */

@@ -11,6 +11,7 @@ import org.annalist.findings.Caveat;
 import org.annalist.findings.Transform;
 import org.annalist.findings.CalendarNote;
 import org.annalist.findings.IndicatorsFinding;
+import org.annalist.findings.Measure;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.FormChoice;
 import org.annalist.findings.Episode;
@@ -31,9 +32,15 @@ public final class AnalystNotes {
     public static String of(Findings f) {
         StringBuilder out = new StringBuilder();
         SeriesFacts s = f.series();
-        line(out, "series", "'%s'%s, %s, %s to %s, %d periods, %d missing", s.name(),
+        line(out, "series", "'%s'%s, %s, %s to %s, %d periods, %d missing%s", s.name(),
                 s.unit() == null ? "" : " (" + s.unit() + ")", s.frequency(), s.start(), s.end(), s.observations(),
-                s.missing());
+                s.missing(), s.measure() == null ? "" : "; treated as " + s.measure().code() + switch (s.measure()) {
+                    case FLOW -> " (summed over spans)";
+                    case LEVEL -> " (averaged over spans)";
+                    case RATIO -> " (ratio of the parts' sums over spans)";
+                    case RATE -> " (averaged over spans; changes in points, not %)";
+                    case INTERVAL -> " (averaged over spans; zero arbitrary: changes in units, no % and no totals)";
+                });
         claims(out, f);
         FormChoice form = f.form();
         line(out, "form", "%s%s: %s%s", form.form().code(), f.transform() == Transform.LOG ? " (worked in logs)" : "",
@@ -51,8 +58,9 @@ public final class AnalystNotes {
             line(out, "breaks", "none (%s)", Terms.breakMethod(f.breakMethod()));
         }
         for (BreakFinding b : f.breaks()) {
-            line(out, "break", "%s (95%% interval %s to %s): level %s → %s, %+.1f %%; sup-F %.1f, %s%s", b.period(),
-                    b.ci95().get(0), b.ci95().get(1), num(b.levelBefore()), num(b.levelAfter()), b.changePct(),
+            line(out, "break", "%s (95%% interval %s to %s): level %s → %s, %s; sup-F %.1f, %s%s", b.period(),
+                    b.ci95().get(0), b.ci95().get(1), num(b.levelBefore()), num(b.levelAfter()),
+                    change(f, b.levelAfter() - b.levelBefore(), b.changePct()),
                     b.statistic(), p(b.pValue()), b.provisional() ? "; provisional" : "");
         }
         for (Episode e : f.episodes()) {
@@ -67,16 +75,19 @@ public final class AnalystNotes {
             line(out, "outliers", "none");
         }
         for (OutlierFinding o : f.outliers()) {
-            line(out, "outlier", "%s: %s against %s expected (%+.1f %%), score %.1f", o.period(), num(o.observed()),
-                    num(o.expected()), o.deviationPct(), o.score());
+            line(out, "outlier", "%s: %s against %s expected (%s), score %.1f", o.period(), num(o.observed()),
+                    num(o.expected()), change(f, o.observed() - o.expected(), o.deviationPct()), o.score());
         }
         IndicatorsFinding i = f.indicators();
         if (i != null) {
             line(out, "latest", "%s: %s (%s)%s%s%s", i.period(), num(i.value()), i.measure().code(),
                     i.samePeriodLastYear() == null ? "" : String.format(Locale.ROOT, "; a year earlier %s, %s",
-                            num(i.samePeriodLastYear().value()), pct(i.samePeriodLastYear().changePct())),
-                    i.yearToDate() == null ? "" : String.format(Locale.ROOT, "; year to date %s", pct(i.yearToDate().changePct())),
-                    i.rollingYear() == null ? "" : String.format(Locale.ROOT, "; rolling year %s", pct(i.rollingYear().changePct())));
+                            num(i.samePeriodLastYear().value()),
+                            change(f, i.samePeriodLastYear().change(), i.samePeriodLastYear().changePct())),
+                    i.yearToDate() == null ? "" : String.format(Locale.ROOT, "; year to date %s",
+                            change(f, i.yearToDate().change(), i.yearToDate().changePct())),
+                    i.rollingYear() == null ? "" : String.format(Locale.ROOT, "; rolling year %s",
+                            change(f, i.rollingYear().change(), i.rollingYear().changePct())));
             line(out, "latest rank", "%d of %d in the same period of each year%s%s%s", i.rank().position(), i.rank().of(),
                     i.record() == null ? "" : "; record " + i.record().code(),
                     i.seasonallyAdjustedChangePct() == null ? "" : "; seasonally adjusted " + pct(i.seasonallyAdjustedChangePct())
@@ -133,7 +144,8 @@ public final class AnalystNotes {
         IndicatorsFinding i = f.indicators();
         double[] shown = i == null ? new double[0] : i.samePeriodLastYear() == null ? new double[] {i.value()}
                 : new double[] {i.value(), i.samePeriodLastYear().value()};
-        ClaimWords words = new ClaimWords(claims, Formats.forValues(shown, Locale.ENGLISH), f.series().unit());
+        ClaimWords words = new ClaimWords(claims, Formats.forValues(shown, Locale.ENGLISH), f.series().unit(),
+                MeasureWords.measureOf(f));
         line(out, "headline", "%s", f.recent().isEmpty() ? "none: the series is empty"
                 : words.headline(f.recent().get(f.recent().size() - 1).period()));
         for (Claim c : claims.statements()) {
@@ -202,6 +214,23 @@ public final class AnalystNotes {
     /** "p < 0.0001" or "p = 0.0123". */
     static String p(double p) {
         return p < 0.0001 ? "p < 0.0001" : String.format(Locale.ROOT, "p = %.4f", p);
+    }
+
+    /**
+     * A change as the measure has it: in % for flows, levels and ratios; a signed difference in
+     * percentage points (a value in %), points (a rate without a unit) or units (an interval scale).
+     */
+    private static String change(Findings f, double change, Double changePct) {
+        Measure measure = f.series().measure();
+        String unit = f.series().unit() == null ? "" : f.series().unit();
+        boolean points = MeasureWords.percentUnit(unit) || measure == Measure.RATE;
+        if (measure == null || measure.relativeChanges() && !MeasureWords.percentUnit(unit)) {
+            return pct(changePct);
+        }
+        String sized = Math.abs(change) >= 100 ? String.format(Locale.ROOT, "%+.1f", change)
+                : String.format(Locale.ROOT, "%+.3g", change);
+        return sized + (points ? (MeasureWords.percentUnit(unit) ? " percentage points" : " points")
+                : unit.isEmpty() ? "" : " " + unit);
     }
 
     private static String pct(Double v) {

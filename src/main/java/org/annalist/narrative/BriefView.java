@@ -35,10 +35,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     /**
      * @param unitPerPeriod the unit with its period, e.g. {@code nights a month}; empty without a unit
      * @param logo          the logo's URI; empty without one
+     * @param measure       the sentence saying how the series is treated ("Treated as a rate: …")
+     * @param percentChanges changes are given in % (else in points or units: the tables' % column is left out)
      */
     public record Header(String title, String organisation, String seriesName, String unit, String periodCovered,
                          String latestPeriod, String generatedAt, Calendar calendar, String unitPerPeriod,
-                         String logo) {
+                         String logo, String measure, boolean percentChanges) {
     }
 
     /** The series' frequency, for the template's words; all false: daily or business-daily. */
@@ -60,10 +62,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param trendSentence the trend since the latest break (else over the whole period), with its qualifications
      * @param trendFirst    the trend is the headline and leads the paragraph
      * @param calendarNote  after the change when it is calendar-adjusted: the change as counted; else empty
+     * @param difference    the change is a difference (points or units), worded "higher", not "more"
      */
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
                        String changePercent, boolean up, boolean down, boolean provisional, String step,
-                       String trendSentence, boolean trendFirst, String calendarNote) {
+                       String trendSentence, boolean trendFirst, String calendarNote,
+                       boolean difference) {
     }
 
     /**
@@ -110,10 +114,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param rising     the trend is increasing ({@code rising} and {@code falling} both false: no clear trend)
      * @param slopeSize  the slope without its sign, for "by about 2,120 a year"
      * @param sinceBreak the trend within the latest regime, or null
+     * @param percentPerYear the slope as % of the average level; empty where changes are not in % (a rate, a temperature)
+     * @param slopeUnit  what the slope is counted in, with a leading space: the unit, {@code  percentage points}, {@code  °F}
      */
     public record TrendView(boolean assessed, boolean rising, boolean falling, String test, String statistic, String pValue,
                             String slopePerYear, String slopeSize, String lower, String upper, String percentPerYear, String basis,
-                            String reason, SinceBreak sinceBreak, String seasonalKendall) {
+                            String reason, SinceBreak sinceBreak, String seasonalKendall, String slopeUnit) {
     }
 
     /** @param since the first period of the latest regime, in words */
@@ -127,11 +133,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *
      * @param strengthWord {@code strong}, {@code moderate} or {@code weak}
      * @param indexUnit {@code %} for multiplicative, the series unit for additive
+     * @param formFromMeasure additive because of the measure (a rate, an interval scale), not because of the swing
      */
     public record SeasonView(boolean present, boolean negligible, boolean tooShort, boolean notApplicable, String period, String strength, String strengthWord, String test,
                              String statistic, String pValue, String peak, String peakIndex, String trough,
                              String troughIndex, String swing, String indexUnit, boolean multiplicative,
-                             boolean changed, String formReason, String years) {
+                             boolean changed, String formReason, String years, boolean formFromMeasure) {
     }
 
     public record CycleView(boolean present, String length, boolean regular, List<String> peaks, String spectralPeriod,

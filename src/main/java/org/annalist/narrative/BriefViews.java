@@ -27,6 +27,7 @@ public final class BriefViews {
     public static BriefView of(Series series, Findings findings, FigurePlan plan, SourceFacts source,
                                Masthead masthead) {
         Formats f = Formats.forValues(series.values(), masthead.language());
+        MeasureWords measure = MeasureWords.of(series, findings, f);
         SectionViews sections = new SectionViews(series, findings, plan, f);
         String title = masthead.title().isEmpty() ? series.name() : masthead.title();
         String author = masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation();
@@ -35,8 +36,8 @@ public final class BriefViews {
         BriefView.Header header = new BriefView.Header(title, masthead.organisation(), series.name(), series.unit(),
                 f.period(series.start()) + " to " + f.period(series.end()), f.period(series.end()),
                 f.timestamp(masthead.generatedAt()), BriefView.Calendar.of(series.frequency()), unitPerPeriod(series),
-                masthead.logoUri().orElse(""));
-        BriefView.Lead lead = lead(series, findings, f);
+                masthead.logoUri().orElse(""), measure.statement(), measure.percent());
+        BriefView.Lead lead = lead(series, findings, f, measure);
         BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
                 f.count(source.rowsRead()), DataNotes.reading(source.reading()), masthead.software(), f.timestamp(masthead.generatedAt()));
         List<String> notes = DataNotes.notes(source);
@@ -46,19 +47,19 @@ public final class BriefViews {
                 sections.trend(),
                 sections.season(), sections.cycle(), sections.outliers(), sections.breaks(), sections.episodes(),
                 sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(),
-                OutlookViews.of(series, findings.outlook(), f), facts(series, findings, f),
+                OutlookViews.of(series, findings.outlook(), f, measure), facts(series, findings, f),
                 notes, AppendixViews.methods(findings, f), AppendixViews.thresholds(), provenance);
     }
 
-    private static BriefView.Lead lead(Series series, Findings findings, Formats f) {
+    private static BriefView.Lead lead(Series series, Findings findings, Formats f, MeasureWords measure) {
         Claims claims = findings.claims();
-        ClaimWords words = new ClaimWords(claims, f, series.unit());
+        ClaimWords words = new ClaimWords(claims, f, series.unit(), measure.measure());
         String step = words.stepSentence();
         String trend = words.trendSentence();
         boolean trendFirst = words.trendFirst();
         if (findings.recent().isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", false, false,
-                    false, step, trend, trendFirst, "");
+                    false, step, trend, trendFirst, "", false);
         }
         RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
         boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
@@ -66,7 +67,7 @@ public final class BriefViews {
         Optional<Claim> latest = claims.pageLatest();
         if (last.value() == null || latest.isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                    "", "", false, false, provisional, step, trend, trendFirst, "");
+                    "", "", false, false, provisional, step, trend, trendFirst, "", false);
         }
         // the sign and size are the claim's, which the key figures and the findings JSON carry too
         Claim change = latest.get();
@@ -79,7 +80,8 @@ public final class BriefViews {
                         + words.signedSize(raw) + " as counted)").orElse("") : "";
         return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
                 yearEarlier, words.size(change), change.direction() == Direction.INCREASING,
-                change.direction() == Direction.DECREASING, provisional, step, trend, trendFirst, calendar);
+                change.direction() == Direction.DECREASING, provisional, step, trend, trendFirst, calendar,
+                change.unit() != Claim.SizeUnit.PERCENT);
     }
 
     private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {

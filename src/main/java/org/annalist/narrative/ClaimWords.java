@@ -6,6 +6,7 @@ import org.annalist.findings.Claim.Quantity;
 import org.annalist.findings.Claim.QualifyReason;
 import org.annalist.findings.Claims;
 import org.annalist.findings.Direction;
+import org.annalist.findings.Measure;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 
@@ -19,33 +20,52 @@ final class ClaimWords {
     private final Claims claims;
     private final Formats f;
     private final String unit;
+    private final Measure measure;
 
-    /** @param unit the series' unit, empty when it has none */
-    ClaimWords(Claims claims, Formats f, String unit) {
+    /**
+     * @param unit    the series' unit, empty when it has none
+     * @param measure how the series' values combine, which decides what a difference is counted in
+     */
+    ClaimWords(Claims claims, Formats f, String unit, Measure measure) {
         this.claims = claims;
         this.f = f;
         this.unit = unit == null ? "" : unit;
+        this.measure = measure;
     }
 
     /** The size of a claim without its sign: {@code 1.8 %}, {@code 0.9 percentage points}, {@code 2,940 nights a year}. */
     String size(Claim c) {
+        return size(c, units());
+    }
+
+    private String size(Claim c, String units) {
         double v = Math.abs(c.size());
         return switch (c.unit()) {
             case PERCENT -> f.percent(v);
             case PERCENT_PER_YEAR -> f.percent(v) + " a year";
-            case UNITS -> f.value(v) + units();
-            case UNITS_PER_YEAR -> f.significant(v) + units() + " a year";
+            case UNITS -> f.value(v) + units;
+            case UNITS_PER_YEAR -> f.significant(v) + units + " a year";
         };
     }
 
     /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a year}. */
     String signedSize(Claim c) {
+        return signed(c, size(c));
+    }
+
+    /** As {@link #signedSize}, with percentage points abbreviated for the key figures' narrow tiles: {@code +0.9 pp a year}. */
+    String signedShort(Claim c) {
+        String units = units();
+        return signed(c, size(c, units.equals(" percentage points") ? "\u00a0pp" : units));
+    }
+
+    private static String signed(Claim c, String size) {
         String sign = c.size() > 0 ? "+" : c.size() < 0 ? "\u2212" : "";
-        return c.directional() ? sign + size(c) : size(c);
+        return c.directional() ? sign + size : size;
     }
 
     private String units() {
-        return unit.equals("%") ? " percentage points" : unit.isEmpty() ? "" : " " + unit;
+        return MeasureWords.differenceUnit(measure, unit);
     }
 
     /** The sentence on a recent step that leads the page, or empty when the headline is not a step. */
@@ -143,8 +163,8 @@ final class ClaimWords {
         }
         String recent = t.qualification(QualifyReason.RECENT_CHANGE_OPPOSES).flatMap(q -> claims.find(q.by()))
                 .map(c -> "; " + (c.quantity() == Quantity.ROLLING_YEAR ? "last " + rollingSpan(c.to().frequency())[0]
-                        : "year to date") + " " + signedSize(c)).orElse("");
-        return new String[] {signedSize(t), span + "; " + evidence + recent};
+                        : "year to date") + " " + signedShort(c)).orElse("");
+        return new String[] {signedShort(t), span + "; " + evidence + recent};
     }
 
     /** The trend of the first page in a table cell: {@code increasing since Aug 2022}, {@code not stated}. */
@@ -166,10 +186,10 @@ final class ClaimWords {
             return "no comparison with a year earlier";
         }
         Claim c = latest.get();
-        String note = (c.directional() ? signedSize(c) : "about the same as") + " on a year earlier";
+        String note = (c.directional() ? signedShort(c) : "about the same as") + " on a year earlier";
         if (c.quantity() == Quantity.LATEST_CALENDAR_ADJUSTED) {
             note += " with the calendar's effect taken out" + claims.find(Quantity.LATEST_VS_YEAR_EARLIER)
-                    .map(raw -> " (" + signedSize(raw) + " as counted)").orElse("");
+                    .map(raw -> " (" + signedShort(raw) + " as counted)").orElse("");
         }
         return note;
     }

@@ -49,8 +49,8 @@ public final class MultiBriefViews {
             }
             rows.add(new MultiBriefView.ComparisonRow(series.get(i).name(), series.get(i).unit(),
                     v.lead().value().isEmpty() ? "\u2013" : v.lead().value(),
-                    f.signedPercent(yearOnYear(fi)), f.signedPercent(yearToDate(fi)),
-                    new ClaimWords(fi.claims(), f, series.get(i).unit()).trendCell(),
+                    change(series.get(i), fi, f, false), change(series.get(i), fi, f, true),
+                    new ClaimWords(fi.claims(), f, series.get(i).unit(), MeasureWords.measureOf(fi)).trendCell(),
                     v.season().present() ? v.season().peak() : "none claimed",
                     String.valueOf(v.breaks().size()), String.valueOf(v.outliers().size()), nextYear));
         }
@@ -72,6 +72,17 @@ public final class MultiBriefViews {
         return new MultiBriefView(document, header, rows, sortBy == SortBy.ORDER,
                 sortBy.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '),
                 consistency, sections, notes, provenance);
+    }
+
+    /** The latest change on a year earlier, or the year to date's, in %, points or units as the measure has it. */
+    private static String change(Series s, Findings fi, Formats f, boolean toDate) {
+        IndicatorsFinding i = fi.indicators();
+        MeasureWords measure = MeasureWords.of(s, fi, f);
+        if (i == null || (toDate ? i.yearToDate() == null : i.samePeriodLastYear() == null)) {
+            return "\u2013";
+        }
+        return toDate ? measure.signedChange(i.yearToDate().change(), i.yearToDate().changePct())
+                : measure.signedChange(i.samePeriodLastYear().change(), i.samePeriodLastYear().changePct());
     }
 
     private static double orLowest(Double v) {

@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import org.annalist.findings.Measure;
 import org.annalist.findings.OutlookFinding;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
@@ -19,7 +20,8 @@ final class OutlookViews {
     private OutlookViews() {
     }
 
-    static BriefView.OutlookView of(Series series, OutlookFinding o, Formats f) {
+    /** @param measure how next year is compared with the last complete one: in %, points or units */
+    static BriefView.OutlookView of(Series series, OutlookFinding o, Formats f, MeasureWords measure) {
         if (o == null) {
             return BriefView.OutlookView.ABSENT;
         }
@@ -52,7 +54,9 @@ final class OutlookViews {
                 previousYear = String.valueOf(comparedYear);
                 previousValue = f.significant(previous);
                 double pct = 100 * (year.mean() / previous - 1);
-                change = previous <= 0 ? "" : Math.abs(pct) < 0.05 ? "unchanged" : f.signedPercent(pct);
+                double difference = year.mean() - previous;
+                change = measure.percent() && previous <= 0 ? "" : measure.rounded(difference, pct) ? "unchanged"
+                        : measure.signedChange(difference, pct);
             }
         }
         OutlookFinding.Model model = o.model();
@@ -70,7 +74,8 @@ final class OutlookViews {
                 o.horizon() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
                 year == null ? "" : f.significant(year.mean()), year == null ? "" : f.significant(year.lo80()),
                 year == null ? "" : f.significant(year.hi80()), previousYear, previousValue, change,
-                o.typicalErrorPct() == null ? "" : f.fixed(Math.max(o.typicalErrorPct(), 0.1),
+                // a % error of a value on an interval scale depends on where its zero was put
+                o.typicalErrorPct() == null || measure.measure() == Measure.INTERVAL ? "" : f.fixed(Math.max(o.typicalErrorPct(), 0.1),
                         o.typicalErrorPct() < 10 ? 1 : 0) + "\u00A0%",
                 f.count(o.backtestPeriods()), scores, o.caveats().stream().map(c -> Terms.outlookCaveat(c, f)).toList());
     }

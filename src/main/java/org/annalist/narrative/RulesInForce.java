@@ -46,6 +46,8 @@ final class RulesInForce {
                         + Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + " % or more; else the trend"),
                 new Rule("A trend is qualified / not stated on the first page when the year to date or the rolling year "
                         + "went the other way by", Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + " % / both by "
-                        + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT) + " %"));
+                        + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT) + " %"),
+                new Rule("A series named a rate, share or occupancy, without a unit, is a rate in points when its values stay within",
+                        "0 to " + Terms.number(DecisionRules.RATE_MAX_VALUE)));
     }
 }

@@ -6,6 +6,7 @@ import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
 import org.annalist.findings.FigurePlan;
+import org.annalist.findings.FormChoice;
 import org.annalist.findings.Findings;
 import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.OutlierFinding;
@@ -13,7 +14,6 @@ import org.annalist.findings.Decomposition;
 import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Direction;
 import org.annalist.findings.IrregularFinding;
-import org.annalist.findings.Measure;
 import org.annalist.findings.SeasonVerdict;
 import org.annalist.findings.Side;
 import org.annalist.findings.SeasonalityFinding;
@@ -32,19 +32,21 @@ final class SectionViews {
     private final Findings findings;
     private final FigurePlan plan;
     private final Formats f;
+    private final MeasureWords measure;
 
     SectionViews(Series series, Findings findings, FigurePlan plan, Formats f) {
         this.series = series;
         this.findings = findings;
         this.plan = plan;
         this.f = f;
+        this.measure = MeasureWords.of(series, findings, f);
     }
 
     BriefView.TrendView trend() {
         TrendFinding t = findings.trend();
         if (!t.assessed()) {
             return new BriefView.TrendView(false, false, false, "", "", "", "", "", "", "", "", "",
-                    Terms.trendNotAssessed(), null, null);
+                    Terms.trendNotAssessed(), null, null, measure.differenceUnit());
         }
         BriefView.SinceBreak since = t.latestRegime().map(r -> new BriefView.SinceBreak(f.period(r.since()),
                 r.direction() == Direction.INCREASING, r.direction() == Direction.DECREASING,
@@ -57,8 +59,8 @@ final class SectionViews {
                 f.signedSignificant(t.slopePerYear()), f.significant(Math.abs(t.slopePerYear())),
                 f.significant(t.slopeCi95().get(0)),
                 f.significant(t.slopeCi95().get(1)),
-                t.changePctPerYear() == null ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%", Terms.trendBasis(t.test()), null,
-                since, kendall);
+                t.changePctPerYear() == null || !measure.percent() ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%",
+                Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit());
     }
 
     BriefView.SeasonView season() {
@@ -69,7 +71,7 @@ final class SectionViews {
         if (verdict == SeasonVerdict.NOT_APPLICABLE || verdict == SeasonVerdict.TOO_SHORT) {
             return new BriefView.SeasonView(false, false, verdict == SeasonVerdict.TOO_SHORT,
                     verdict == SeasonVerdict.NOT_APPLICABLE, s.period() == null ? "" : String.valueOf(s.period()), "", "",
-                    "", "", "", "", "", "", "", "", "", s.multiplicative(), false, formReason, years);
+                    "", "", "", "", "", "", "", "", "", s.multiplicative(), false, formReason, years, formFromMeasure());
         }
         boolean multiplicative = s.multiplicative();
         SeasonalityFinding.ProfilePoint peak = extreme(s, true);
@@ -79,7 +81,13 @@ final class SectionViews {
                 Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), f.seasonName(series.frequency(), peak.position()),
                 index(peak.index(), multiplicative), f.seasonName(series.frequency(), trough.position()), index(trough.index(), multiplicative),
                 multiplicative ? f.fixed(s.swing(), 0) : f.significant(s.swing()),
-                multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years);
+                multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years, formFromMeasure());
+    }
+
+    /** The additive form follows from the measure (a rate, a temperature), not from the swing. */
+    private boolean formFromMeasure() {
+        return findings.form().reason() == FormChoice.Reason.INTERVAL_SCALE
+                || findings.form().reason() == FormChoice.Reason.RATE_IN_POINTS;
     }
 
     BriefView.CycleView cycle() {
@@ -93,7 +101,8 @@ final class SectionViews {
         List<BriefView.OutlierRow> rows = new ArrayList<>();
         for (OutlierFinding o : findings.outliers()) {
             rows.add(new BriefView.OutlierRow(f.period(series.period(o.index())), f.value(o.observed()),
-                    f.value(o.expected()), f.signedPercent(o.deviationPct()), f.fixed(Math.abs(o.score()), 1),
+                    f.value(o.expected()), measure.signedChange(o.observed() - o.expected(), o.deviationPct()),
+                    f.fixed(Math.abs(o.score()), 1),
                     o.direction() == Side.ABOVE));
         }
         return rows;
@@ -104,7 +113,7 @@ final class SectionViews {
         for (BreakFinding b : findings.breaks()) {
             rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
                     f.period(b.ci95().get(1)), f.value(b.levelBefore()), f.value(b.levelAfter()),
-                    f.signedPercent(b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
+                    measure.signedChange(b.levelAfter() - b.levelBefore(), b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
                     f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional()));
         }
         return rows;
@@ -150,7 +159,7 @@ final class SectionViews {
         if (i == null) {
             return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", false, false, "", List.of(), false);
         }
-        boolean level = i.measure() != Measure.FLOW;
+        boolean level = !i.measure().summed();
         IndicatorsFinding.Span ytd = i.yearToDate();
         IndicatorsFinding.Span rolling = i.rollingYear();
         Period period = i.period();
@@ -171,13 +180,9 @@ final class SectionViews {
                         : findings.calendar().notes().stream().map(CalendarSentences::of).toList(), !i.flagged().isEmpty());
     }
 
-    /** A change as a brief states it: % for flows, the measure's own units for levels and rates. */
+    /** A change as a brief states it: in %, percentage points or the series' units, by {@link MeasureWords}. */
     private String change(IndicatorsFinding.Span s, boolean level) {
-        if (level || !BriefViews.positive(series)) {
-            return f.signedValue(s.change()) + (series.unit().equals("%") ? " percentage points"
-                    : series.unit().isEmpty() ? "" : " " + series.unit());
-        }
-        return s.changePct() == null ? "" : f.signedPercent(s.changePct());
+        return measure.percent() && s.changePct() == null ? "" : measure.signedChange(s.change(), s.changePct());
     }
 
     private static String ordinal(int n) {
@@ -193,11 +198,13 @@ final class SectionViews {
 
     List<BriefView.KeyFigure> keyFigures(BriefView.Lead lead, BriefView.ThisPeriod period) {
         List<BriefView.KeyFigure> figures = new ArrayList<>();
-        ClaimWords words = new ClaimWords(findings.claims(), f, series.unit());
+        ClaimWords words = new ClaimWords(findings.claims(), f, series.unit(), measure.measure());
         figures.add(new BriefView.KeyFigure(lead.period(), lead.value().isEmpty() ? "\u2013" : lead.value(),
                 lead.comparable() ? words.latestNote() : "no comparison with a year earlier"));
         if (period.available() && !period.ytdChange().isEmpty()) {
-            figures.add(new BriefView.KeyFigure("Year to date", period.ytdChange(),
+            IndicatorsFinding.Span ytd = findings.indicators().yearToDate();
+            figures.add(new BriefView.KeyFigure("Year to date", measure.percent() ? period.ytdChange()
+                    : measure.signedShort(ytd.change()),
                     period.ytdFrom() + " to " + period.ytdTo() + " against a year earlier"));
         } else {
             BriefView.SeasonView s = season();
@@ -221,7 +228,7 @@ final class SectionViews {
 
     private String index(double value, boolean multiplicative) {
         return multiplicative ? f.signedFixed(value, 0) + "\u00A0%" : f.signedSignificant(value)
-                + (series.unit().isEmpty() ? "" : " " + series.unit());
+                + measure.differenceUnit();
     }
 
     private static SeasonalityFinding.ProfilePoint extreme(SeasonalityFinding s, boolean highest) {

@@ -75,6 +75,10 @@ final class Terms {
             case TOO_SHORT -> "too few complete years to tell; the simpler additive form is kept";
             case NOT_SEASONAL -> "annual data have no seasonal swing to judge";
             case FORCED -> "set by the user";
+            case INTERVAL_SCALE -> "the values lie on a scale whose zero is arbitrary (a temperature), so ratios and "
+                    + "logarithms of them mean nothing";
+            case RATE_IN_POINTS -> "a rate is compared in points, not in %, so its seasonal pattern is measured in "
+                    + "points too";
         };
     }
 

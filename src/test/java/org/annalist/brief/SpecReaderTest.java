@@ -33,6 +33,17 @@ class SpecReaderTest {
     }
 
     @Test
+    void theSpecTakesTheCommandLinesMeasureWordsInAnyCase() throws IOException {
+        Job job = SpecReader.read(spec("""
+                briefs:
+                  - data: nights.csv
+                    measure: {Total: Flow, Occupancy: RATE, Temperature: interval, Price: Level, Other: auto}
+                """)).briefs().get(0).job();
+        assertThat(job.analysis().measureBySeries()).isEqualTo(Map.of("Total", Measure.FLOW, "Occupancy", Measure.RATE,
+                "Temperature", Measure.INTERVAL, "Price", Measure.LEVEL));
+    }
+
+    @Test
     void theCommandLinesChoicesHaveKeys() throws IOException {
         Job job = SpecReader.read(spec("""
                 briefs:

@@ -30,7 +30,8 @@ class AnalyzeCommandTest {
         assertThat(keys(f.get("claims").get("statements").get(0))).containsExactly("quantity", "from", "to", "direction",
                 "size", "unit", "relative_pct", "p_value", "strength", "status", "qualifications", "withheld");
         assertThat(keys(f.get("series"))).containsExactly("name", "unit", "frequency", "start", "end", "observations",
-                "missing");
+                "missing", "measure");
+        assertThat(f.get("series").get("measure").asText()).isEqualTo("flow");
         assertThat(keys(f.get("trend"))).containsExactly("direction", "test", "statistic", "p_value", "slope_per_year",
                 "slope_ci95", "change_pct_per_year");
         assertThat(keys(f.get("seasonality"))).containsExactly("present", "period", "strength", "test", "p_value",

@@ -2,6 +2,7 @@ package org.annalist.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import org.junit.jupiter.api.Test;
@@ -21,7 +22,7 @@ class OptionWordsTest {
         String[][] cases = {
             {"--form", "cubic", "expected one of [auto, additive, multiplicative] (case-insensitive) but was 'cubic'"},
             {"--form", " additive", "expected one of [auto, additive, multiplicative] (case-insensitive) but was ' additive'"},
-            {"--measure", "ratio", "expected one of [auto, flow, level] (case-insensitive) but was 'ratio'"},
+            {"--measure", "ratio", "expected one of [auto, flow, level, rate, interval] (case-insensitive) but was 'ratio'"},
             {"--decimal-mark", "dot", "expected one of [auto, point, comma] (case-insensitive) but was 'dot'"},
             {"--aggregate", "fortnight", "expected one of [week, month, quarter, year] (case-insensitive) but was 'fortnight'"},
             {"--date-order", "sideways", "'sideways' is not a date order; expected auto, day-first or month-first"},
@@ -46,6 +47,12 @@ class OptionWordsTest {
         assertThat(json.readTree(auto.out()).get("transform").asText()).isEqualTo("log");
         Run level = Run.of("analyze", "--measure", "LEVEL", "--horizon", "0", "--format", "json", AIR);
         assertThat(json.readTree(level.out()).get("indicators").get("measure").asText()).isEqualTo("level");
+        Run interval = Run.of("analyze", "--measure", "Interval", "--horizon", "0", "--format", "json", AIR);
+        JsonNode asInterval = json.readTree(interval.out());
+        assertThat(asInterval.get("indicators").get("measure").asText()).isEqualTo("interval");
+        assertThat(asInterval.get("transform").asText()).isEqualTo("none");   // no logs of an interval scale
+        Run rate = Run.of("analyze", "--measure", "RATE", "--horizon", "0", "--format", "json", AIR);
+        assertThat(json.readTree(rate.out()).get("series").get("measure").asText()).isEqualTo("rate");
         Run quarters = Run.of("analyze", "--aggregate", "Quarter", "--aggregate-by", "mean", "--horizon", "0",
                 "--format", "json", AIR);
         assertThat(json.readTree(quarters.out()).get("series").get("frequency").asText()).isEqualTo("quarterly");

@@ -78,7 +78,7 @@ public final class ClaimsFixture {
     public Findings findings() {
         Period start = end.plus(1L - observations);
         SeriesFacts facts = new SeriesFacts("Total", "nights", Frequency.MONTHLY.label(), start.label(), end.label(),
-                observations, 0);
+                observations, 0, Measure.FLOW);
         IndicatorsFinding indicators = lastYear == null ? null : new IndicatorsFinding(end,
                 lastYear.value() + lastYear.change(), List.of(), Measure.FLOW, lastYear, null, ytd, rolling, null,
                 new IndicatorsFinding.Rank(1, observations / 12), null);

@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Locale;
+import org.annalist.findings.Measure;
 import org.annalist.findings.Claims;
 import org.annalist.findings.ClaimsFixture;
 import org.annalist.findings.Direction;
@@ -15,7 +16,7 @@ class ClaimWordsTest {
     private static final Period END = Period.month(2026, 10);
 
     private static ClaimWords words(Claims claims) {
-        return new ClaimWords(claims, Formats.forValues(new double[] {100_000}, Locale.ENGLISH), "nights");
+        return new ClaimWords(claims, Formats.forValues(new double[] {100_000}, Locale.ENGLISH), "nights", Measure.FLOW);
     }
 
     @Test

@@ -1,0 +1,127 @@
+package org.annalist.narrative;
+
+import java.util.Locale;
+import org.annalist.findings.Findings;
+import org.annalist.findings.Measure;
+import org.annalist.series.Series;
+
+/**
+ * How the brief states a change of the series, by its {@link Measure}: in % where a ratio of two
+ * values means something (flows, levels and ratios above zero), in percentage points for a value in
+ * % (whatever kind the user declared: "% of a %" reads as a change of the rate itself), in points
+ * for a rate without a unit, and in the series' units for an interval-scale quantity such as a
+ * temperature (its zero is arbitrary) and for any series that reaches zero or below (common practice
+ * in official statistics, no source).
+ */
+final class MeasureWords {
+
+    /** What a change is expressed in. */
+    enum Scale { PERCENT, POINTS, UNITS }
+
+    private final Measure measure;
+    private final String unit;
+    private final Scale scale;
+    private final Formats f;
+
+    private MeasureWords(Measure measure, String unit, Scale scale, Formats f) {
+        this.measure = measure;
+        this.unit = unit;
+        this.scale = scale;
+        this.f = f;
+    }
+
+    static MeasureWords of(Series series, Findings findings, Formats f) {
+        Measure measure = measureOf(findings);
+        String unit = series.unit();
+        Scale scale = percentUnit(unit) || measure == Measure.RATE && unit.isEmpty() ? Scale.POINTS
+                : !measure.relativeChanges() || !BriefViews.positive(series) ? Scale.UNITS : Scale.PERCENT;
+        return new MeasureWords(measure, unit, scale, f);
+    }
+
+    /** The measure the analysis used; a flow when the findings do not say (they always do since measures were typed). */
+    static Measure measureOf(Findings findings) {
+        if (findings.series().measure() != null) {
+            return findings.series().measure();
+        }
+        return findings.indicators() != null ? findings.indicators().measure() : Measure.FLOW;
+    }
+
+    static boolean percentUnit(String unit) {
+        String u = unit.trim().toLowerCase(Locale.ROOT);
+        return u.equals("%") || u.equals("percent") || u.equals("per cent") || u.equals("pct");
+    }
+
+    Measure measure() {
+        return measure;
+    }
+
+    Scale scale() {
+        return scale;
+    }
+
+    /** Whether changes are given in %. */
+    boolean percent() {
+        return scale == Scale.PERCENT;
+    }
+
+    /**
+     * What a difference is counted in, with a leading space: {@code  percentage points},
+     * {@code  points}, {@code  °F}; the unit (or nothing) where changes are in %.
+     */
+    String differenceUnit() {
+        return switch (scale) {
+            case POINTS -> percentUnit(unit) ? " percentage points" : " points";
+            case UNITS, PERCENT -> unit.isEmpty() ? "" : " " + unit;
+        };
+    }
+
+    /** As {@link #differenceUnit()}, for a measure and unit alone (a difference is never in %). */
+    static String differenceUnit(Measure measure, String unit) {
+        return percentUnit(unit) ? " percentage points" : measure == Measure.RATE && unit.isEmpty() ? " points"
+                : unit.isEmpty() ? "" : " " + unit;
+    }
+
+    /** As {@link #differenceUnit()}, abbreviated for the key figures: {@code  pp} for percentage points (defined in {@link #statement()}). */
+    String shortUnit() {
+        return scale == Scale.POINTS && percentUnit(unit) ? "\u00A0pp" : differenceUnit();
+    }
+
+    /** A signed difference for a key figure: {@code +2.30 pp}, {@code −0.88 °F}. */
+    String signedShort(double change) {
+        return f.signedValue(change) + shortUnit();
+    }
+
+    /** A signed change: {@code +4.2 %}, {@code +1.20 percentage points}, {@code −0.8 °F}. */
+    String signedChange(double change, Double changePct) {
+        return percent() ? f.signedPercent(changePct) : f.signedValue(change) + differenceUnit();
+    }
+
+    /** A change without its sign, for "… more than": {@code 4.2 %}, {@code 1.20 percentage points}. */
+    String size(double change, Double changePct) {
+        return percent() ? (changePct == null ? "" : f.percent(Math.abs(changePct)))
+                : f.value(Math.abs(change)) + differenceUnit();
+    }
+
+    /** Whether a change rounds to nothing at the precision it is written in. */
+    boolean rounded(double change, Double changePct) {
+        return percent() ? changePct != null && Math.abs(changePct) < 0.05 : !f.value(Math.abs(change)).matches(".*[1-9].*");
+    }
+
+    /** The sentence that says once how the series is treated. */
+    String statement() {
+        String changes = switch (scale) {
+            case PERCENT -> "changes are given in %";
+            case POINTS -> "changes are given in" + differenceUnit() + (percentUnit(unit) ? " (pp)" : "") + ", not in %";
+            case UNITS -> unit.isEmpty() ? "changes are given as differences, not in %"
+                    : "changes are given in " + unit + ", not in %";
+        };
+        return switch (measure) {
+            case FLOW -> "Treated as a flow: spans are summed; " + changes + ".";
+            case LEVEL -> "Treated as a level or stock: spans are averaged, never summed; " + changes + ".";
+            case RATE -> "Treated as a rate: spans are averaged, never summed; " + changes + ".";
+            case INTERVAL -> "Treated as a temperature-like quantity on an interval scale (its zero is arbitrary): "
+                    + "spans are averaged, never summed; " + changes + ".";
+            case RATIO -> "Treated as a ratio of two series: spans take the ratio of their sums; " + changes + ".";
+        };
+    }
+}
