@@ -105,7 +105,7 @@ final class SectionViews {
             rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
                     f.period(b.ci95().get(1)), f.value(b.levelBefore()), f.value(b.levelAfter()),
                     f.signedPercent(b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
-                    f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional()));
+                    f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(), f.percentSize(b.changePct())));
         }
         return rows;
     }
