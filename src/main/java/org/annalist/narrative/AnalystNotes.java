@@ -2,7 +2,6 @@ package org.annalist.narrative;
 
 import java.util.List;
 import java.util.Locale;
-import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CalendarFinding;
@@ -176,19 +175,12 @@ public final class AnalystNotes {
                 .append(System.lineSeparator());
     }
 
-    /** A hyphen-minus that opens a number (not one inside a period label such as 2024-03). */
-    private static final Pattern HYPHEN_MINUS = Pattern.compile("(?<![\\p{L}\\p{N}_\\-])-(?=\\d)");
-    /** A sign before a number that rounds to zero in the places shown: {@code +0.0}, {@code −0}. */
-    private static final Pattern SIGNED_ZERO = Pattern.compile("(?<![\\p{L}\\p{N}.])[+\u2212]0(?:\\.0+)?(?!\\d|\\.\\d)");
-
     /**
-     * The notes in the brief's typography (see {@link Formats}): the true minus sign, and no sign on
-     * a value that rounds to zero. Spaces stay ordinary: the notes are read in a terminal, where
-     * lines do not wrap inside a number.
+     * The notes in the brief's sign convention ({@link Typography#signs}). Spaces stay ordinary: the
+     * notes are read in a terminal, where lines do not wrap inside a number.
      */
     static String typeset(String text) {
-        String minus = HYPHEN_MINUS.matcher(text).replaceAll("\u2212");
-        return SIGNED_ZERO.matcher(minus).replaceAll(m -> m.group().substring(1));
+        return Typography.signs(text);
     }
 
     /** "p < 0.0001" or "p = 0.0123". */

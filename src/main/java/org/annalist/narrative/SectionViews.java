@@ -168,7 +168,7 @@ final class SectionViews {
                 i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) ? ""
                         : f.signedPercent(i.seasonallyAdjustedChangePct()),
                 findings.calendar() == null ? List.of()
-                        : findings.calendar().notes().stream().map(CalendarSentences::of).toList(), !i.flagged().isEmpty());
+                        : findings.calendar().notes().stream().map(CalendarSentences::of).map(Typography::printed).toList(), !i.flagged().isEmpty());
     }
 
     /** A change as a brief states it: % for flows, the measure's own units for levels and rates. */
