@@ -159,7 +159,7 @@ final class Terms {
 
     /** How the breaks were searched, for the methods appendix. */
     static String breakMethod(BreakMethod m) {
-        String checked = "its own sup-F test (AR(1) Monte Carlo null, " + number(100 * DecisionRules.ALPHA) + "\u00A0%)";
+        String checked = "its own sup-F test (AR(1) Monte Carlo null, " + number(100 * DecisionRules.ALPHA) + " %)";
         return switch (m.search()) {
             case NOT_SEARCHED_IN_DAILY_DATA -> "not searched in daily data (the yearly pattern is not removed)";
             case NOT_SEARCHED_TOO_SHORT -> "not searched: fewer than two regimes of " + m.minimumRegime() + " periods";
