@@ -1,9 +1,6 @@
 package org.annalist.chart;
 
 import java.awt.Color;
-import java.text.DecimalFormat;
-import java.text.DecimalFormatSymbols;
-import java.util.Locale;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.FigurePlan;
 import org.jfree.chart.ChartFactory;
@@ -53,8 +50,7 @@ public final class SeasonalProfileChart {
         bars.setSeriesOutlinePaint(0, Color.WHITE);
         bars.setDrawBarOutline(false);
         bars.setDefaultItemLabelGenerator(new StandardCategoryItemLabelGenerator("{2}",
-                new DecimalFormat(multiplicative ? "+#,##0;\u2212#,##0" : "+#,##0.#;\u2212#,##0.#",
-                        DecimalFormatSymbols.getInstance(Locale.ENGLISH))));
+                NumberFormats.signed(multiplicative ? 0 : 1)));
         bars.setDefaultItemLabelsVisible(true);
         bars.setDefaultItemLabelFont(ChartStyle.smallFont());
         bars.setDefaultItemLabelPaint(ChartStyle.INK);

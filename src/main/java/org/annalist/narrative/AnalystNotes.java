@@ -52,7 +52,7 @@ public final class AnalystNotes {
                 "%s since %s: Sen slope %s per year (95%% CI %s to %s), %s", Terms.direction(latest.direction()),
                 latest.since().label(), num(latest.slopePerYear()), num(latest.lower95()), num(latest.upper95()),
                 p(latest.pValue())));
-        line(out, "seasonality", "%s", seasonality(f.seasonality()));
+        line(out, "seasonality", "%s", seasonality(f.seasonality(), MeasureWords.measureOf(f).relativeChanges()));
         line(out, "cycle", "%s", cycle(f.cycle()));
         if (f.breaks().isEmpty()) {
             line(out, "breaks", "none (%s)", Terms.breakMethod(f.breakMethod()));
@@ -171,7 +171,7 @@ public final class AnalystNotes {
                 num(t.slopeCi95().get(1)), ofLevel, kendall);
     }
 
-    private static String seasonality(SeasonalityFinding s) {
+    private static String seasonality(SeasonalityFinding s, boolean relative) {
         if (s.period() == null) {
             return "not applicable (annual data)";
         }
@@ -190,7 +190,8 @@ public final class AnalystNotes {
         };
         String swing = s.multiplicative()
                 ? String.format(Locale.ROOT, "%.1f percentage points", s.swing())
-                : String.format(Locale.ROOT, "%.4g (%.1f %% of the level)", s.swing(), s.swingPctOfLevel());
+                : relative ? String.format(Locale.ROOT, "%.4g (%.1f %% of the level)", s.swing(), s.swingPctOfLevel())
+                : String.format(Locale.ROOT, "%.4g", s.swing());   // a share of an arbitrary zero means nothing
         return String.format(Locale.ROOT, "%s — strength %.2f, %s H = %.1f, %s; swing %s%s; "
                         + "lag-%d autocorrelation %.2f%s; profile: %s", verdict, s.strength(), Terms.test(s.test()), s.statistic(),
                 p(s.pValue()), swing, s.present() && s.changed() ? "; the pattern changed over the years" : "",
@@ -207,8 +208,16 @@ public final class AnalystNotes {
     }
 
     private static void line(StringBuilder out, String label, String format, Object... args) {
-        out.append(String.format(Locale.ROOT, "%-14s", label + ":")).append(String.format(Locale.ROOT, format, args))
+        out.append(String.format(Locale.ROOT, "%-14s", label + ":")).append(typeset(String.format(Locale.ROOT, format, args)))
                 .append(System.lineSeparator());
+    }
+
+    /**
+     * The notes in the brief's sign convention ({@link Typography#signs}). Spaces stay ordinary: the
+     * notes are read in a terminal, where lines do not wrap inside a number.
+     */
+    static String typeset(String text) {
+        return Typography.signs(text);
     }
 
     /** "p < 0.0001" or "p = 0.0123". */

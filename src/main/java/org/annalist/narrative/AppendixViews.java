@@ -40,7 +40,7 @@ final class AppendixViews {
                 + "Fuglister & Mitchell 1963), confirmed by the peaks", "yearly values"
                 + (findings.seasonality().present() ? " (means of the seasonally adjusted series)" : "")));
         rows.add(new BriefView.MethodRow("Structural breaks", "Bai & Perron (1998, 2003); dates' intervals after "
-                + "Bai (1997); PELT: Killick, Fearnhead & Eckley (2012)", Terms.breakMethod(findings.breakMethod())));
+                + "Bai (1997); PELT: Killick, Fearnhead & Eckley (2012)", Typography.printed(Terms.breakMethod(findings.breakMethod()))));
         rows.add(new BriefView.MethodRow("Outliers", "modified z-score of the decomposition remainder (Iglewicz & "
                 + "Hoaglin 1993), robust scale (MAD)", "outliers kept out of the break search; none reported next to a break"));
         rows.add(new BriefView.MethodRow("Irregular fluctuation", "share of the variation around the long-run "

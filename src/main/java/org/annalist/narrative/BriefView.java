@@ -153,8 +153,9 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                              boolean above) {
     }
 
+    /** @param size the change without its sign, for the sentence that gives the direction in a word */
     public record BreakRow(String period, String from, String to, String before, String after, String change,
-                           boolean rise, String statistic, String pValue, boolean provisional) {
+                           boolean rise, String statistic, String pValue, boolean provisional, String size) {
     }
 
     /** @param recovery null while the series is still in the collapsed regime */

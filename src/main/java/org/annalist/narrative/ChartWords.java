@@ -27,7 +27,7 @@ public final class ChartWords {
     }
 
     public static String interval(int percent) {
-        return percent + " % interval";
+        return percent + "\u00A0% interval";
     }
 
     /** The seasonal profile's axis: % for a multiplicative series, else the series' unit. */

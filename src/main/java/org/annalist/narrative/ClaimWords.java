@@ -56,7 +56,7 @@ final class ClaimWords {
     /** As {@link #signedSize}, with percentage points abbreviated for the key figures' narrow tiles: {@code +0.9 pp a year}. */
     String signedShort(Claim c) {
         String units = units();
-        return signed(c, size(c, units.equals(" percentage points") ? "\u00a0pp" : units));
+        return signed(c, size(c, units.equals("\u00A0percentage points") ? "\u00a0pp" : units));
     }
 
     private static String signed(Claim c, String size) {

@@ -16,8 +16,19 @@ import org.annalist.series.Period;
 /**
  * Numbers, periods and times as the brief writes them, in the brief's language; never in the
  * machine's default locale, so that the same data give the same brief everywhere.
+ *
+ * <p>One typographic convention for every number (a proof-reader's rules, common practice, no
+ * source): a negative number carries the true minus sign U+2212, never the hyphen-minus; a value
+ * that rounds to zero in the places shown is written without a sign ({@code 0.0 %}, never
+ * {@code −0.0 %} or {@code ±0.0 %}); a number and its {@code %} are joined by a no-break space, as
+ * are the parts of {@code p = 0.003}. A change is written either signed ({@link #signedPercent},
+ * for tables and after a neutral word: "moved +1.2 %") or as a size after a direction word
+ * ({@link #percentSize}: "down 65.7 %"), never both ("down −65.7 %").
  */
 public final class Formats {
+
+    private static final String MINUS = "\u2212";
+    private static final String NBSP = "\u00A0";
 
     private final Locale locale;
     private final int decimals;
@@ -44,7 +55,7 @@ public final class Formats {
     }
 
     public String value(Double v) {
-        return v == null || v.isNaN() ? "\u2013" : pattern(decimals).format(v);
+        return v == null || v.isNaN() ? "\u2013" : plain(v, decimals);
     }
 
     /** A signed change in the values' own precision: {@code +1,250} or {@code −3.5}. */
@@ -52,7 +63,7 @@ public final class Formats {
         if (v == null || v.isNaN()) {
             return "\u2013";
         }
-        return sign(v) + pattern(decimals).format(Math.abs(v));
+        return signed(v, decimals);
     }
 
     /** A signed percentage with one decimal: {@code +4.2 %}. */
@@ -60,23 +71,23 @@ public final class Formats {
         if (pct == null || pct.isNaN()) {
             return "\u2013";
         }
-        return sign(pct) + pattern(1).format(Math.abs(pct)) + "\u00A0%";
+        return signed(pct, 1) + NBSP + "%";
     }
 
     /** An unsigned percentage with one decimal: {@code 4.2 %}. */
     public String percent(double pct) {
-        return pattern(1).format(pct) + "\u00A0%";
+        return plain(pct, 1) + NBSP + "%";
     }
 
     /** {@code p < 0.001} or {@code p = 0.023}; at or below {@code floor} (a Monte Carlo test's smallest p), {@code p ≤ floor}. */
     public String pValue(double p, double floor) {
         if (p <= floor) {
-            return "p \u2264 " + pattern(3).format(floor);
+            return "p" + NBSP + "\u2264" + NBSP + pattern(3).format(floor);
         }
         if (p < 0.001) {
-            return "p < 0.001";
+            return "p" + NBSP + "<" + NBSP + "0.001";
         }
-        return "p = " + pattern(3).format(p);
+        return "p" + NBSP + "=" + NBSP + pattern(3).format(p);
     }
 
     public String pValue(double p) {
@@ -91,7 +102,7 @@ public final class Formats {
         double magnitude = Math.floor(Math.log10(Math.abs(v)));
         int places = (int) Math.max(0, 2 - magnitude);
         double rounded = Math.round(v / Math.pow(10, magnitude - 2)) * Math.pow(10, magnitude - 2);
-        return (rounded < 0 ? "\u2212" : "") + pattern(places).format(Math.abs(rounded));
+        return (rounded < 0 ? MINUS : "") + pattern(places).format(Math.abs(rounded));
     }
 
     /** As {@link #significant}, with a sign: {@code +2,940}. */
@@ -101,16 +112,16 @@ public final class Formats {
 
     /** A number with {@code places} decimals. */
     public String fixed(double v, int places) {
-        return pattern(places).format(v);
+        return plain(v, places);
     }
 
     /** A signed number with {@code places} decimals: {@code +1.9}. */
     public String signedFixed(double v, int places) {
-        return sign(v) + pattern(places).format(Math.abs(v));
+        return signed(v, places);
     }
 
     public String count(long n) {
-        return pattern(0).format(n);
+        return plain(n, 0);
     }
 
     /** A period in words: {@code October 2026}, {@code Q3 2026}, {@code week 5 of 2024}, {@code 2 March 2024}. */
@@ -162,8 +173,33 @@ public final class Formats {
         return DateTimeFormatter.ofPattern("d MMMM yyyy, HH:mm 'UTC'", locale).format(instant.atZone(ZoneOffset.UTC));
     }
 
-    private String sign(double v) {
-        return v > 0 ? "+" : v < 0 ? "\u2212" : "\u00B1";
+    /**
+     * The size of a change with one decimal and no sign, for use after a word that gives the
+     * direction: {@code down 65.7 %}, {@code 4.2 % more}.
+     */
+    public String percentSize(Double pct) {
+        return pct == null || pct.isNaN() ? "\u2013" : percent(Math.abs(pct));
+    }
+
+    /** The size of a change in the values' own precision, with no sign: {@code 1,250} after "up". */
+    public String valueSize(Double v) {
+        return v == null || v.isNaN() ? "\u2013" : plain(Math.abs(v), decimals);
+    }
+
+    /** {@code v} with {@code places} decimals, a true minus when negative, no sign when it rounds to zero. */
+    private String plain(double v, int places) {
+        String digits = pattern(places).format(Math.abs(v));
+        return v < 0 && !zero(digits) ? MINUS + digits : digits;
+    }
+
+    /** As {@link #plain}, with {@code +} before a positive number; a value that rounds to zero has no sign. */
+    private String signed(double v, int places) {
+        String digits = pattern(places).format(Math.abs(v));
+        return zero(digits) ? digits : (v > 0 ? "+" : MINUS) + digits;
+    }
+
+    private static boolean zero(String digits) {
+        return digits.chars().filter(Character::isDigit).allMatch(c -> c == '0');
     }
 
     private DecimalFormat pattern(int places) {

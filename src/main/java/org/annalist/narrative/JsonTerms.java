@@ -43,6 +43,6 @@ public final class JsonTerms implements JsonWording {
 
     @Override
     public String calendarNote(CalendarNote note) {
-        return CalendarSentences.of(note);
+        return Typography.signs(CalendarSentences.of(note));
     }
 }

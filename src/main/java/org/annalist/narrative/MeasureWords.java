@@ -65,20 +65,20 @@ final class MeasureWords {
     }
 
     /**
-     * What a difference is counted in, with a leading space: {@code  percentage points},
+     * What a difference is counted in, after a no-break space: {@code  percentage points},
      * {@code  points}, {@code  °F}; the unit (or nothing) where changes are in %.
      */
     String differenceUnit() {
         return switch (scale) {
-            case POINTS -> percentUnit(unit) ? " percentage points" : " points";
-            case UNITS, PERCENT -> unit.isEmpty() ? "" : " " + unit;
+            case POINTS -> percentUnit(unit) ? "\u00A0percentage points" : "\u00A0points";
+            case UNITS, PERCENT -> unit.isEmpty() ? "" : "\u00A0" + unit;
         };
     }
 
     /** As {@link #differenceUnit()}, for a measure and unit alone (a difference is never in %). */
     static String differenceUnit(Measure measure, String unit) {
-        return percentUnit(unit) ? " percentage points" : measure == Measure.RATE && unit.isEmpty() ? " points"
-                : unit.isEmpty() ? "" : " " + unit;
+        return percentUnit(unit) ? "\u00A0percentage points" : measure == Measure.RATE && unit.isEmpty() ? "\u00A0points"
+                : unit.isEmpty() ? "" : "\u00A0" + unit;
     }
 
     /** As {@link #differenceUnit()}, abbreviated for the key figures: {@code  pp} for percentage points (defined in {@link #statement()}). */

@@ -31,10 +31,20 @@ public record MultiBriefView(BriefView.Document document, Header header, List<Co
     }
 
     /**
-     * @param checked  a total was declared, so the parts were checked against it
-     * @param periods  the periods where they miss it, in words (the first six, then a count)
+     * @param checked      a total was declared, so the parts were checked against it
+     * @param periods      the periods where they miss it, in words (the first six, then a count)
+     * @param anyChecked   at least one period had the total and every part
+     * @param complete     every period had them all, so nothing was left unchecked
+     * @param checkedCount how many periods were checked, in figures
+     * @param allPresent   the condition of a checked period in words: {@code all four have a value}
+     * @param gaps         each period where the parts miss the total, with the sum against the total and
+     *                     the gap in units and in % (the first six, then a count)
+     * @param offCount     how many periods miss the total, in figures
+     * @param unchecked    the periods that could not be checked and what was missing there, in words
      */
     public record Consistency(boolean checked, boolean consistent, String total, String parts, String periods,
-                              String largestGap, String tolerance) {
+                              String largestGap, String tolerance, boolean anyChecked, boolean complete,
+                              String checkedCount, String allPresent, String gaps, String offCount,
+                              String unchecked) {
     }
 }

@@ -55,10 +55,9 @@ public final class MultiBriefViews {
                     String.valueOf(v.breaks().size()), String.valueOf(v.outliers().size()), nextYear));
         }
         Formats first = Formats.forValues(series.get(0).values(), masthead.language());
-        MultiBriefView.Consistency consistency = check.map(c -> new MultiBriefView.Consistency(true, c.consistent(),
-                c.total(), String.join(", ", c.parts()), BriefViews.listPeriods(c.periods(), first),
-                first.percent(c.largestGapPct()), first.percent(PartsCheck.TOLERANCE_PCT)))
-                .orElse(new MultiBriefView.Consistency(false, true, "", "", "", "", first.percent(PartsCheck.TOLERANCE_PCT)));
+        MultiBriefView.Consistency consistency = check.map(c -> PartsWords.consistency(c, formatsOf(c.total(), series, masthead)))
+                .orElse(new MultiBriefView.Consistency(false, true, "", "", "", "", first.percent(PartsCheck.TOLERANCE_PCT),
+                        false, true, "", "", "", "", ""));
         Series lead = series.get(0);
         String names = String.join(", ", series.stream().map(Series::name).toList());
         MultiBriefView.Header header = new MultiBriefView.Header(masthead.title().isEmpty() ? names : masthead.title(),
@@ -83,6 +82,12 @@ public final class MultiBriefViews {
         }
         return toDate ? measure.signedChange(i.yearToDate().change(), i.yearToDate().changePct())
                 : measure.signedChange(i.samePeriodLastYear().change(), i.samePeriodLastYear().changePct());
+    }
+
+    /** The formats of the total's values, so that the sums of the parts are written in the same precision. */
+    private static Formats formatsOf(String name, List<Series> series, Masthead masthead) {
+        Series total = series.stream().filter(s -> s.name().equals(name)).findFirst().orElse(series.get(0));
+        return Formats.forValues(total.values(), masthead.language());
     }
 
     private static double orLowest(Double v) {

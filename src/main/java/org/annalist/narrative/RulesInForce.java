@@ -22,31 +22,31 @@ final class RulesInForce {
                 new Rule("Seasonal statements need at least", DecisionRules.MIN_YEARS_FOR_SEASON + " full years"),
                 new Rule("A seasonal pattern is claimed when", "Kruskal-Wallis p < " + Terms.number(DecisionRules.ALPHA)
                         + ", strength \u2265 " + Terms.number(DecisionRules.MIN_SEASONAL_STRENGTH) + ", swing \u2265 "
-                        + Terms.number(DecisionRules.MIN_SEASONAL_SWING_PCT) + " % of the level"),
+                        + Terms.number(DecisionRules.MIN_SEASONAL_SWING_PCT) + "\u00A0% of the level"),
                 new Rule("Seasonal strength called strong", "\u2265 " + Terms.number(DecisionRules.STRONG_SEASONAL_STRENGTH)),
                 new Rule("A cycle lasts", "more than " + Terms.number(DecisionRules.MIN_CYCLE_YEARS) + " years, with at least "
                         + Terms.number(DecisionRules.MIN_CYCLES_IN_DATA) + " cycles in the data and "
                         + DecisionRules.MIN_YEARS_FOR_CYCLE + " years of data"),
                 new Rule("A cycle is regular when the gaps between its peaks vary by", "at most "
-                        + Terms.number(100 * DecisionRules.MAX_REGULAR_GAP_CV) + " % (coefficient of variation)"),
+                        + Terms.number(100 * DecisionRules.MAX_REGULAR_GAP_CV) + "\u00A0% (coefficient of variation)"),
                 new Rule("A structural break must move the level by", "at least "
-                        + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + " %"),
+                        + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0%"),
                 new Rule("Shortest regime between breaks", "one seasonal period; "
                         + DecisionRules.MIN_REGIME_YEARS_ANNUAL + " years for annual data"),
                 new Rule("Breaks searched with PELT instead of Bai-Perron above", DecisionRules.PELT_ABOVE + " periods"),
-                new Rule("A collapse", "a break of " + Terms.number(DecisionRules.COLLAPSE_PCT) + " % or more"),
+                new Rule("A collapse", "a break of " + Terms.number(DecisionRules.COLLAPSE_PCT) + "\u00A0% or more"),
                 new Rule("An outlier", "robust score \u2265 " + Terms.number(DecisionRules.OUTLIER_SCORE) + "; runs of "
                         + DecisionRules.OUTLIER_SHIFT_RUN + " or more are shifts; " + DecisionRules.OUTLIER_STRETCH_FLAGS
                         + " or more within two seasonal cycles an unusual stretch"),
                 new Rule("Irregular fluctuation called small / large", "share below "
-                        + Terms.number(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + " % / above "
-                        + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + " %"),
+                        + Terms.number(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + "\u00A0% / above "
+                        + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + "\u00A0%"),
                 new Rule("The first page leads with", "a break of " + Terms.number(DecisionRules.HEADLINE_STEP_PCT)
-                        + " % or more within " + DecisionRules.RECENT_BREAK_YEARS + " years; else a latest change of "
-                        + Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + " % or more; else the trend"),
+                        + "\u00A0% or more within " + DecisionRules.RECENT_BREAK_YEARS + " years; else a latest change of "
+                        + Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + "\u00A0% or more; else the trend"),
                 new Rule("A trend is qualified / not stated on the first page when the year to date or the rolling year "
-                        + "went the other way by", Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + " % / both by "
-                        + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT) + " %"),
+                        + "went the other way by", Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + "\u00A0% / both by "
+                        + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT) + "\u00A0%"),
                 new Rule("A series named a rate, share or occupancy, without a unit, is a rate in points when its values stay within",
                         "0 to " + Terms.number(DecisionRules.RATE_MAX_VALUE)));
     }

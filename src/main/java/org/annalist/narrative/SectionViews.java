@@ -114,7 +114,8 @@ final class SectionViews {
             rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
                     f.period(b.ci95().get(1)), f.value(b.levelBefore()), f.value(b.levelAfter()),
                     measure.signedChange(b.levelAfter() - b.levelBefore(), b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
-                    f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional()));
+                    f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
+                    measure.size(b.levelAfter() - b.levelBefore(), b.changePct())));
         }
         return rows;
     }
@@ -177,7 +178,7 @@ final class SectionViews {
                 i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) ? ""
                         : f.signedPercent(i.seasonallyAdjustedChangePct()),
                 findings.calendar() == null ? List.of()
-                        : findings.calendar().notes().stream().map(CalendarSentences::of).toList(), !i.flagged().isEmpty());
+                        : findings.calendar().notes().stream().map(CalendarSentences::of).map(Typography::printed).toList(), !i.flagged().isEmpty());
     }
 
     /** A change as a brief states it: in %, percentage points or the series' units, by {@link MeasureWords}. */

@@ -177,7 +177,8 @@ final class Terms {
 
     /** A threshold as the appendix writes it: {@code 5}, {@code 0.25}. */
     static String number(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.format(Locale.ROOT, "%s", v);
+        String digits = v == Math.rint(v) ? String.valueOf((long) Math.abs(v)) : String.format(Locale.ROOT, "%s", Math.abs(v));
+        return v < 0 ? "\u2212" + digits : digits;
     }
 
     /** The decomposition as made: {@code STL on logarithms, seasonal window 13, …}. */

@@ -136,7 +136,7 @@ class MeasureArithmeticTest {
         String notes = AnalystNotes.of(nottemFindings);
         assertThat(SIGNED_PERCENT.matcher(notes.lines().filter(l -> l.startsWith("latest") || l.startsWith("outlier"))
                 .reduce("", String::concat)).find()).isFalse();
-        assertThat(notes).contains("a year earlier 39.20, -1.40 \u00B0F").contains("next year:    1940 average");
+        assertThat(notes).contains("a year earlier 39.20, \u22121.40 \u00B0F").doesNotContain("of the level").contains("next year:    1940 average");
     }
 
     @Test

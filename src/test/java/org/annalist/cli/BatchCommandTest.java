@@ -94,7 +94,9 @@ class BatchCommandTest {
             long north = Math.round(1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) + 30 * random.nextGaussian());
             long south = Math.round(400 * (1 + 0.5 * Math.sin(2 * Math.PI * (t - 2) / 12)) + 20 * random.nextGaussian());
             long total = year == 2020 && month == 6 ? Math.round((north + south) * 1.05) : north + south;
-            csv.append(String.format(java.util.Locale.ROOT, "%d-%02d,%d,%d,%d%n", year, month, total, north, south));
+            // March 2021: South not reported, so that month cannot be checked
+            String southCell = year == 2021 && month == 3 ? "" : String.valueOf(south);
+            csv.append(String.format(java.util.Locale.ROOT, "%d-%02d,%d,%d,%s%n", year, month, total, north, southCell));
         }
         Files.writeString(folder.resolve("regions.csv"), csv);
         Path spec = spec("""
@@ -114,8 +116,11 @@ class BatchCommandTest {
         assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
         String text = PdfFacts.of(folder.resolve("regions-2022-12.pdf")).text().replace('\u00A0', ' ')
                 .replaceAll("\\s+", " ");
+        // June 2020: the parts are 1/1.05 of the total, 4.8 % short of it (hand arithmetic); of the 60
+        // months, 59 have all three values and were checked
         assertThat(text).contains("The series side by side", "The parts do not add up.",
-                "North, South miss Total by more than 0.5 % in June 2020");
+                "North, South miss Total by more than 0.5 % in 1 of the 59 periods where all three have a value: June 2020 (parts ",
+                ", \u22124.8 %). Not checked: March 2021 (South missing).");
         Path pdf = folder.resolve("regions-2022-12.pdf");
         assertThat(folder.resolve("regions-2022-12-north.findings.json")).exists();
         assertThat(folder.resolve("regions-2022-12-multiples.svg")).exists();

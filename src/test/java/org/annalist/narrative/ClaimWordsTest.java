@@ -26,7 +26,7 @@ class ClaimWordsTest {
                 .sinceBreak(Period.month(2022, 8), Direction.INCREASING, 2935, 0.0001).findings().claims();
         String[] tile = words(claims).trendTile();
         // 2935 to three significant digits (Formats.significant); not the whole period's +1.9 % a year
-        assertThat(tile[0]).isEqualTo("+2,940 nights a year");
+        assertThat(tile[0]).isEqualTo("+2,940\u00a0nights a year");
         assertThat(tile[1]).startsWith("since August 2022");
     }
 

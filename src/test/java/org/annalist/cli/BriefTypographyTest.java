@@ -1,0 +1,98 @@
+package org.annalist.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The typography a proof-reader would mark, checked on the text of every brief the demo writes
+ * (one-series and combined), as PDFBox extracts it. The conventions are those of
+ * {@code narrative.Formats} (common practice, no source).
+ */
+class BriefTypographyTest {
+
+    @TempDir
+    static Path folder;
+
+    /** Each demo brief's file name and its text, lines kept, no-break spaces kept. */
+    private static final Map<String, String> TEXTS = new LinkedHashMap<>();
+
+    @BeforeAll
+    static void writeTheDemo() throws IOException {
+        Run run = Run.of("demo", "--data", "demo-data", "--out", folder.toString());
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        try (Stream<Path> pdfs = Files.list(folder)) {
+            for (Path pdf : pdfs.filter(p -> p.toString().endsWith(".pdf")).sorted().toList()) {
+                TEXTS.put(pdf.getFileName().toString(), PdfFacts.of(pdf).text());
+            }
+        }
+        assertThat(TEXTS).hasSize(10);
+    }
+
+    /** Every place in any brief where {@code pattern} matches, with its file and a little context. */
+    private static List<String> found(Pattern pattern) {
+        List<String> hits = new ArrayList<>();
+        TEXTS.forEach((file, text) -> {
+            Matcher m = pattern.matcher(text);
+            while (m.find()) {
+                hits.add(file + ": \"" + text.substring(Math.max(0, m.start() - 30), Math.min(text.length(), m.end() + 10))
+                        .replace('\n', '⏎') + "\"");
+            }
+        });
+        return hits;
+    }
+
+    @Test
+    void negativeNumbersCarryTheTrueMinusInTextTablesAndChartAxes() {
+        // a hyphen-minus opening a number; one between digits (2024-03) or after a letter or hyphen
+        // (a file name, a period label, a hash wrapped across lines) is not a minus sign
+        assertThat(found(Pattern.compile("(?<![\\p{L}\\p{N}\\-_])-(?=\\d)"))).isEmpty();
+        // the axes of the seasonal profile do show negative ticks, so the rule is exercised
+        assertThat(TEXTS.get("guest-nights-total.pdf")).contains("\u221220");
+    }
+
+    @Test
+    void noValueThatRoundsToZeroCarriesASign() {
+        assertThat(found(Pattern.compile("(?<![\\p{L}\\p{N}.])[\\u2212+\\u00B1-]0(?:\\.0+)?(?!\\d|\\.\\d)"))).isEmpty();
+    }
+
+    @Test
+    void noSpaceOrLineBreakComesBeforeThePunctuationAfterABracket() {
+        assertThat(found(Pattern.compile("\\)\\s+[.,;]"))).isEmpty();
+        assertThat(found(Pattern.compile("(?m)^[.,;]"))).isEmpty();
+    }
+
+    @Test
+    void aChangeIsGivenByADirectionWordOrBySignButNotByBoth() {
+        assertThat(found(Pattern.compile("\\b(?:up|down|rose|fell|higher|lower)\\s+(?:by\\s+)?[+\\u2212\\-]\\d"))).isEmpty();
+        assertThat(found(Pattern.compile("[+\\u2212]\\d[\\d,.]*\\s?%?\\s(?:more|less|higher|lower)\\b"))).isEmpty();
+        // the breaks of the demo are written with a word and a size
+        assertThat(TEXTS.get("guest-nights-total.pdf").replaceAll("\\s+", " ")).containsPattern("\\b(?:up|down) \\d");
+    }
+
+    @Test
+    void aNumberAndItsPercentSignAreJoinedByANoBreakSpace() {
+        // on one line, or broken at the line's end (the ordinary space stays there); a page number at
+        // a line's end followed by a chart's "% against …" axis title on the next is no such pair
+        assertThat(found(Pattern.compile("\\d[ \\t]+\\n?%"))).isEmpty();
+        assertThat(TEXTS.get("guest-nights-total.pdf")).containsPattern("\\d\\u00A0%");
+    }
+
+    @Test
+    void theSoftwareVersionIsTheBuildsWithoutASnapshotQualifier() {
+        assertThat(found(Pattern.compile("SNAPSHOT"))).isEmpty();
+        assertThat(TEXTS.get("guest-nights-total.pdf")).contains("Annalist ");
+    }
+}
