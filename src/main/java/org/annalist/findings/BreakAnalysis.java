@@ -64,7 +64,7 @@ final class BreakAnalysis {
     /**
      * What a break changed. A break of a level model is a step. Of a level-and-slope model, a step
      * is reported only when the gap at the break reaches {@link DecisionRules#MIN_BREAK_CHANGE_PCT}
-     * and a change of slope only when it carries the lines that far apart by the new regime's end;
+     * and a change of slope only when it carries the lines that far apart within one minimum regime;
      * when both reach it, BIC over the two regimes chooses between parallel lines with a jump and
      * one bent line, and "both" only when separate lines are better by
      * {@link DecisionRules#BREAK_KIND_BIC_MARGIN} (Schwarz 1978; Kass and Raftery 1995, §3.2).

@@ -102,7 +102,7 @@ public final class DecisionRules {
     public static final int PELT_ABOVE = 1500;
     /**
      * A break must move the level by at least 3 % (our rule), by a step at the break or by how far
-     * a change of slope carries the lines apart by the new regime's end: smaller steps are within what calendar
+     * a change of slope carries the lines apart within one minimum regime (a year for sub-annual data): smaller steps are within what calendar
      * effects and survey noise move a monthly tourism series, and a segmented line would otherwise
      * "break" every smooth curve (co2's rise gives ten steps of 0.1–0.3 %).
      */

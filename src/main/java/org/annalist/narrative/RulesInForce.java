@@ -31,7 +31,7 @@ final class RulesInForce {
                         + Terms.number(100 * DecisionRules.MAX_REGULAR_GAP_CV) + " % (coefficient of variation)"),
                 new Rule("A structural break must move the level by", "at least "
                         + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + " %, by a step at the break or by a change"
-                        + " of slope within the new regime"),
+                        + " of slope within the shortest regime"),
                 new Rule("A break is called a step, a change of slope, or both", "each part only when it moves the level "
                         + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + " %; when both do, the simpler by BIC unless"
                         + " two separate lines lower BIC by " + Terms.number(DecisionRules.BREAK_KIND_BIC_MARGIN) + " more"),

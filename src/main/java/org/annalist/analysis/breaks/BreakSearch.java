@@ -21,7 +21,7 @@ import org.annalist.series.Frequency;
  *     correlation makes BIC propose too many breaks [2], so from BIC's number of breaks down, the
  *     first partition is kept in which every break moves the level by at least the
  *     {@link #withMinimumChangePct(double) minimum change} (by a step at the break, or by a change of
- *     slope over the new regime) and passes its own sup-F test [4] over
+ *     slope over one minimum regime) and passes its own sup-F test [4] over
  *     the span of its two regimes; else none.</li>
  * <li>Longer series: PELT [5] for changes in level; then, while some break moves the level by less
  *     than the minimum change or fails its own sup-F test, the weakest of those (smallest change)
@@ -105,7 +105,7 @@ public final class BreakSearch {
      *                      level model)
      * @param slopeAfter    the new line's slope at the break, series' units per period
      * @param divergencePct how far the change of slope carries the new line from the old one's
-     *                      extension by the new regime's end, in % of the level before
+     *                      extension over the minimum regime, in % of the level before
      * @param shape         the step / slope / both fits of the two regimes ({@link BreakShape});
      *                      empty for a level model, whose regimes have no slope
      * @param end           index of the new regime's last period

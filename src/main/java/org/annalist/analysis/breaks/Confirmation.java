@@ -9,7 +9,7 @@ import org.annalist.analysis.TestResult;
 /**
  * Which proposed breaks the data carry: a break holds when it moves the fitted level by at least
  * the minimum change — by the gap between the two lines at the break, or by how far the change of
- * slope carries them apart by the new regime's end — and passes its own sup-F test [4] over the span of its two regimes. Serial
+ * slope carries them apart over the shortest regime a break allows — and passes its own sup-F test [4] over the span of its two regimes. Serial
  * correlation makes BIC propose too many breaks [2]; these checks remove those the data do not
  * carry. Numbers in brackets refer to the references of {@link BreakSearch}.
  */
@@ -95,11 +95,11 @@ final class Confirmation {
         return log ? 100 * (Math.exp(after - before) - 1) : 100 * (after - before) / Math.abs(before);
     }
 
-    /** How far the change of slope carries the lines apart by the new regime's end, in % (0 for levels). */
+    /** How far the change of slope carries the lines apart over the minimum regime, in % (0 for levels). */
     private double divergencePct(int from, int start, int to) {
         double slopeOld = BaiPerron.regimeFit(y, model, from, start - 1, start)[1];
         double slopeNew = BaiPerron.regimeFit(y, model, start, to, start)[1];
-        return new Regimes(y, model, h, log).divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start), start, to);
+        return new Regimes(y, model, h, log).divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start));
     }
 
     private double atBreak(int a, int b, int start) {

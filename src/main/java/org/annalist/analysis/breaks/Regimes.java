@@ -62,7 +62,7 @@ final class Regimes {
         Optional<BreakShape> shape = model == BaiPerron.Model.LEVEL ? Optional.empty()
                 : Optional.of(BreakShape.of(y, from, start, to));
         return new BreakSearch.Break(start, earliest, latest, levelBefore, levelAfter, changePct, local, provisional,
-                slopeBefore, slopeAfter, divergencePct(old[1], fresh[1], before, start, to), shape, to, endLevel);
+                slopeBefore, slopeAfter, divergencePct(old[1], fresh[1], before), shape, to, endLevel);
     }
 
     /** Intercept at the break instant start − ½ and slope per period of the fit over {@code a..b}. */
@@ -76,12 +76,13 @@ final class Regimes {
     }
 
     /**
-     * How far the two slopes carry the lines apart over the new regime ({@code start..to}), in % of
-     * the level before: the old line extended to the new regime's end against the new line's slope
-     * from the same level. 0 for a level model.
+     * How far the change of slope carries the lines apart over the shortest regime a break allows
+     * ({@code h} periods: one seasonal cycle, or the annual minimum), in % of the level at the
+     * break. A fixed horizon, not the regime's own length: a long regime would otherwise make any
+     * gentle curve (co2's acceleration) a material change of slope. 0 for a level model.
      */
-    double divergencePct(double slopeOld, double slopeNew, double levelAtBreak, int start, int to) {
-        double span = (to - start + 0.5) * (slopeNew - slopeOld);
+    double divergencePct(double slopeOld, double slopeNew, double levelAtBreak) {
+        double span = h * (slopeNew - slopeOld);
         return log ? 100 * (Math.exp(span) - 1) : 100 * span / Math.abs(levelAtBreak);
     }
 
