@@ -150,7 +150,6 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param slope         the break is reported as a change of slope ({@code slopeBefore} → {@code slopeAfter}
      *                      in units a year; {@code slopeRise}: the slope went up)
      * @param sloped        the regimes were fitted as lines (else as levels, whose slopes are zero)
-     * @param atBreak       for a change of slope alone: the fitted level at the break
      * @param drifted       the regime before this break is the previous break's and its line moved from
      *                      {@code previousAfter} (at {@code previousPeriod}) to {@code before}
      * @param overall       on the last of two or more breaks: the ratio of fitted levels from just before the
@@ -160,7 +159,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     public record BreakRow(String period, String from, String to, boolean onePeriod, String before, String after,
                            String change, boolean rise, String statistic, String pValue, boolean provisional,
                            boolean step, boolean slope, boolean sloped, String slopeBefore, String slopeAfter,
-                           boolean slopeRise, String atBreak, boolean drifted, String previousAfter,
+                           boolean slopeRise, boolean drifted, String previousAfter,
                            String previousPeriod, String overall, boolean overallRise, String firstBefore,
                            String firstPeriod) {
     }

@@ -117,7 +117,7 @@ final class SectionViews {
                     b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
                     b.kind().step(), b.kind().slope(), sloped, f.signedSignificant(b.slopeBefore()),
                     f.signedSignificant(b.slopeAfter()), b.slopeAfter() > b.slopeBefore(),
-                    f.value((b.levelBefore() + b.levelAfter()) / 2), drifted,
+                    drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
                     previous == null ? "" : f.period(previous.period()),
                     overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),

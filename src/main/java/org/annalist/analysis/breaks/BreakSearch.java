@@ -28,7 +28,7 @@ import org.annalist.series.Frequency;
  *     is removed and the rest are checked again. A smooth yearly wave in long data otherwise reads
  *     as a staircase of level changes.</li>
  * <li>Each break kept gets its sup-F test with the full number of replications, a Bai (1997) [3]
- *     interval for its date, and the fitted levels of its two regimes at the break, in the series'
+ *     interval for its date (for a change of slope without a step of the minimum change, the likelihood-ratio set [6]), and the fitted levels of its two regimes at the break, in the series'
  *     units (back from logs when the values are logs).</li>
  * <li>Episodes: a large step (a break whose step moves the level by the
  *     {@link #withCollapsePct(double) episode threshold} or more, either way) followed by a
@@ -58,6 +58,9 @@ import org.annalist.series.Frequency;
  * <li>R. Killick, P. Fearnhead and I. A. Eckley (2012), "Optimal Detection of Changepoints With a
  *     Linear Computational Cost", <i>Journal of the American Statistical Association</i> 107(500),
  *     1590–1598. doi:10.1080/01621459.2012.737745</li>
+ * <li>D. Siegmund (1988), "Confidence Sets in Change-point Problems", <i>International Statistical
+ *     Review</i> 56(1), 31–48. doi:10.2307/1403360 (DOI from memory): the date of a break between
+ *     fitted lines is given the set of dates the likelihood-ratio test does not reject</li>
  * </ol>
  */
 public final class BreakSearch {
@@ -324,7 +327,7 @@ public final class BreakSearch {
         for (int j = 0; j < starts.length; j++) {
             int from = j == 0 ? 0 : starts[j - 1];
             int to = j + 1 < starts.length ? starts[j + 1] - 1 : n - 1;
-            breaks.add(regimes.describe(from, starts[j], to));
+            breaks.add(regimes.describe(from, starts[j], to, minimumChangePct));
         }
         return new Result(method, Optional.of(model), used, breaks,
                 regimes.episodes(breaks, collapsePct, minimumChangePct));

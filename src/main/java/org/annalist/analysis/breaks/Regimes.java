@@ -33,7 +33,7 @@ final class Regimes {
      * lines there, so the step is the gap between them at one date; a regime between two breaks
      * gives the "after" of the one and the "before" of the next from its one line.
      */
-    BreakSearch.Break describe(int from, int start, int to) {
+    BreakSearch.Break describe(int from, int start, int to, double minimumChangePct) {
         double[] old = atBreak(from, start - 1, start);
         double[] fresh = atBreak(start, to, start);
         double before = old[0];
@@ -54,8 +54,11 @@ final class Regimes {
         // No regime may be shorter than h, so a break found as close to an end of the series as
         // that allows may really lie closer still, where the search could not place it: the
         // interval then reaches that end rather than claim a precision the search did not have.
-        int earliest = from == 0 && start - from <= h ? 1 : start + ci.lower();
-        int latest = to == y.length - 1 && to - start + 1 <= h ? to : start + ci.upper();
+        // a step is dated by Bai's interval [3]; a bend without a step worth reporting by the LR set [6]
+        int[] dated = model == BaiPerron.Model.LEVEL || Math.abs(changePct) >= minimumChangePct
+                ? new int[] {start + ci.lower(), start + ci.upper()} : profileInterval(from, start, to);
+        int earliest = from == 0 && start - from <= h ? 1 : dated[0];
+        int latest = to == y.length - 1 && to - start + 1 <= h ? to : dated[1];
         // Provisional: the new regime runs to the series' end and is too short to date the break,
         // i.e. its 95 % interval reaches the latest period (always so when it is no longer than h).
         boolean provisional = to == y.length - 1 && latest >= to;
@@ -64,6 +67,44 @@ final class Regimes {
         return new BreakSearch.Break(start, earliest, latest, levelBefore, levelAfter, changePct, local, provisional,
                 slopeBefore, slopeAfter, divergencePct(old[1], fresh[1], before), shape, to, endLevel);
     }
+
+    /**
+     * The 95 % confidence set for the date of a break between two fitted lines, by inverting the
+     * likelihood-ratio test [6]: every first period {@code k} of the new regime in {@code from..to}
+     * whose two-line residual sum of squares lies within χ²₁(0.95) σ̂² of the smallest, σ̂² the
+     * residual variance at the smallest; the set's hull around {@code start}. Bai's (1997) interval
+     * [3] assumes a change in level: for a change of slope alone its Δ is about zero and the
+     * interval would span both regimes, however clear the bend. Independent errors are assumed, so
+     * with serial correlation the set is too narrow rather than too wide.
+     */
+    private int[] profileInterval(int from, int start, int to) {
+        SegmentCost cost = new SegmentCost(y, model);
+        int first = from + 3;       // a line needs 3 values on each side to leave a residual
+        int last = to - 2;
+        if (first > start || last < start) {
+            return new int[] {start, start};
+        }
+        double[] rss = new double[last - first + 1];
+        double smallest = Double.POSITIVE_INFINITY;
+        for (int k = first; k <= last; k++) {
+            rss[k - first] = cost.rss(from, k - 1) + cost.rss(k, to);
+            smallest = Math.min(smallest, rss[k - first]);
+        }
+        double sigma2 = smallest / Math.max(1, cost.observed(from, to) - 4);
+        double limit = smallest + CHI2_1_95 * sigma2;   // [6] LR statistic (RSS(k) − RSS_min)/σ̂² ≤ χ²₁(0.95)
+        int lo = start;
+        while (lo - 1 >= first && rss[lo - 1 - first] <= limit) {
+            lo--;
+        }
+        int hi = start;
+        while (hi + 1 <= last && rss[hi + 1 - first] <= limit) {
+            hi++;
+        }
+        return new int[] {lo, hi};
+    }
+
+    /** 95 % point of χ² with one degree of freedom. */
+    private static final double CHI2_1_95 = 3.841458820694124;
 
     /** Intercept at the break instant start − ½ and slope per period of the fit over {@code a..b}. */
     private double[] atBreak(int a, int b, int start) {
