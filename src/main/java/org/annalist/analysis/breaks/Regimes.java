@@ -174,6 +174,9 @@ final class Regimes {
                 asOf = next.end();
                 returned = next.endLevel();
             }
+            if (returnStart.isEmpty() && sign * step.slopeBefore() < 0) {
+                continue;   // the stepped line only carries on the way the old one went: no return
+            }
             double back = -sign * 100 * (returned - extremeLevel) / Math.abs(extremeLevel);
             if (back < minimumChangePct) {
                 continue;   // no real return: a lasting step, which the break itself describes
