@@ -89,7 +89,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param firstLevel trend-cycle level in the first full year, formatted
      * @param lastLevel  in the last full year
      * @param rose       whether it is higher at the end
-     * @param drops      years of collapses (breaks of −10 % or more)
+     * @param drops      years of steps down of 10 % or more (by the fitted lines at the break)
      */
     public record Charts(ChartView overview, ChartView profile, ChartView years, ChartView irregular, String firstYear,
                          String lastYear, String firstLevel, String lastLevel, boolean rose, List<String> drops,

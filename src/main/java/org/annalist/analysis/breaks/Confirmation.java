@@ -95,8 +95,17 @@ final class Confirmation {
         return log ? 100 * (Math.exp(after - before) - 1) : 100 * (after - before) / Math.abs(before);
     }
 
-    /** How far the change of slope carries the lines apart over the minimum regime, in % (0 for levels). */
+    /**
+     * How far the change of slope carries the lines apart over the minimum regime, in % (0 for
+     * levels). A change of slope counts only between two regimes of at least 1.5 minimum regimes
+     * each: the adjusted series bends around a step over about STL's trend window, 1.5 seasonal
+     * periods and a little more (Cleveland et al. 1990, the default n_t ≥ 1.5 n_p / (1 − 1.5/n_s)),
+     * and a line over a regime that short would read that bend as a slope.
+     */
     private double divergencePct(int from, int start, int to) {
+        if (Math.min(start - from, to - start + 1) < Math.ceil(1.5 * h)) {
+            return 0;
+        }
         double slopeOld = BaiPerron.regimeFit(y, model, from, start - 1, start)[1];
         double slopeNew = BaiPerron.regimeFit(y, model, start, to, start)[1];
         return new Regimes(y, model, h, log).divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start));

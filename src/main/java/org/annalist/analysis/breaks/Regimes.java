@@ -186,6 +186,11 @@ final class Regimes {
             episodes.add(new BreakSearch.Episode(step.start(), rise, step.levelBefore(), extreme, extremeLevel,
                     returnStart, asOf, returned, share));
         }
+        // A break is read in one episode only: a step whose return is itself the large step of a
+        // later episode (a rise that a fall undid, the fall then undone in turn) is left to the
+        // later one, which is the event a reader needs; the breaks themselves describe the rest.
+        List<Integer> starts = episodes.stream().map(BreakSearch.Episode::start).toList();
+        episodes.removeIf(e -> e.returnStart().isPresent() && starts.contains(e.returnStart().getAsInt()));
         return episodes;
     }
 }
