@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.annalist.analysis.TestResult;
 import org.annalist.analysis.breaks.BaiPerron;
 import org.annalist.analysis.breaks.BreakSearch;
+import org.annalist.analysis.breaks.BreakShape;
 import org.annalist.series.Series;
 
 /**
@@ -41,20 +42,50 @@ final class BreakAnalysis {
             notes.add(new Caveat.BreaksNotSearchedInDailyData());
         }
         List<BreakFinding> breaks = new ArrayList<>();
+        double perYear = series.frequency().periodsPerYear();
         for (BreakSearch.Break b : found.breaks()) {
             breaks.add(new BreakFinding(series.period(b.start()),
                     List.of(series.period(b.earliest()), series.period(b.latest())),
                     b.levelBefore(), b.levelAfter(), b.changePct(),
                     b.test().map(TestResult::statistic).orElse(Double.NaN),
-                    b.test().map(TestResult::pValue).orElse(1.0), b.provisional(), b.start()));
+                    b.test().map(TestResult::pValue).orElse(1.0), b.provisional(), b.start(), kind(b),
+                    b.slopeBefore() * perYear, b.slopeAfter() * perYear, series.period(b.end()), b.endLevel()));
         }
         List<Episode> episodes = new ArrayList<>();
         for (BreakSearch.Episode e : found.episodes()) {
-            episodes.add(new Episode(series.period(e.start()),
-                    e.recovery().isPresent() ? Optional.of(series.period(e.recovery().getAsInt())) : Optional.empty(),
-                    series.period(e.low()), e.lowLevel(), e.regainedShare()));
+            episodes.add(new Episode(series.period(e.start()), e.rise(), e.before(), series.period(e.extreme()),
+                    e.extremeLevel(),
+                    e.returnStart().isPresent() ? Optional.of(series.period(e.returnStart().getAsInt())) : Optional.empty(),
+                    series.period(e.asOf()), e.returnedLevel(), e.returnedShare()));
         }
         return new Result(List.copyOf(breaks), List.copyOf(episodes), method(found), found.latestRegimeStart());
+    }
+
+    /**
+     * What a break changed. A break of a level model is a step. Of a level-and-slope model, a step
+     * is reported only when the gap at the break reaches {@link DecisionRules#MIN_BREAK_CHANGE_PCT}
+     * and a change of slope only when it carries the lines that far apart within one minimum regime;
+     * when both reach it, BIC over the two regimes chooses between parallel lines with a jump and
+     * one bent line, and "both" only when separate lines are better by
+     * {@link DecisionRules#BREAK_KIND_BIC_MARGIN} (Schwarz 1978; Kass and Raftery 1995, §3.2).
+     */
+    static BreakKind kind(BreakSearch.Break b) {
+        boolean step = Math.abs(b.changePct()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
+        boolean slope = Math.abs(b.divergencePct()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
+        if (b.shape().isEmpty() || !slope) {
+            return BreakKind.LEVEL;
+        }
+        if (!step) {
+            return BreakKind.SLOPE;
+        }
+        BreakShape shape = b.shape().get();
+        if (Double.isNaN(shape.bicStep()) || Double.isNaN(shape.bicSlope()) || Double.isNaN(shape.bicBoth())) {
+            return BreakKind.BOTH;   // no comparison possible: both changes are large enough to report
+        }
+        if (shape.bicBoth() <= Math.min(shape.bicStep(), shape.bicSlope()) - DecisionRules.BREAK_KIND_BIC_MARGIN) {
+            return BreakKind.BOTH;
+        }
+        return shape.bicStep() <= shape.bicSlope() ? BreakKind.LEVEL : BreakKind.SLOPE;
     }
 
     private static BreakMethod method(BreakSearch.Result found) {

@@ -95,6 +95,9 @@ public record Claims(List<Claim> statements, @JsonIgnore Optional<Claim> headlin
         // a step of a rate or a temperature is a difference, as every other change of theirs
         boolean relative = findings.series().measure() == null || findings.series().measure().relativeChanges();
         for (BreakFinding b : findings.breaks()) {
+            if (!b.kind().step()) {
+                continue;   // a bend in the line is no step in level; the trend since the break states it
+            }
             boolean pct = relative && b.levelBefore() > 0;
             claims.add(new Claim(Quantity.BREAK_STEP, b.period(), b.period(), signOf(b.changePct(), Optional.of(b.changePct())),
                     pct ? b.changePct() : b.levelAfter() - b.levelBefore(), pct ? SizeUnit.PERCENT : SizeUnit.UNITS,

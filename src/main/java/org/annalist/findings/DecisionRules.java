@@ -110,13 +110,26 @@ public final class DecisionRules {
      */
     public static final int PELT_ABOVE = 1500;
     /**
-     * A break must move the level by at least 3 % (our rule): smaller steps are within what calendar
+     * A break must move the level by at least 3 % (our rule), by a step at the break or by how far
+     * a change of slope carries the lines apart within one minimum regime (a year for sub-annual data): smaller steps are within what calendar
      * effects and survey noise move a monthly tourism series, and a segmented line would otherwise
      * "break" every smooth curve (co2's rise gives ten steps of 0.1–0.3 %).
      */
     public static final double MIN_BREAK_CHANGE_PCT = 3;
-    /** A collapse: a break that lowers the level by at least this % (our rule). */
+    /**
+     * An episode begins with a step of at least this size either way (our rule; given as the
+     * negative value the search takes), and needs a movement back of at least
+     * {@link #MIN_BREAK_CHANGE_PCT} afterwards.
+     */
     public static final double COLLAPSE_PCT = -10;
+    /**
+     * A break whose step and change of slope both reach {@link #MIN_BREAK_CHANGE_PCT} is described as
+     * the simpler of "a step in level" (parallel lines) and "a change in slope" (one bent line),
+     * whichever has the lower BIC over its two regimes, unless the two separate lines lower BIC by at
+     * least this much more: then both. Kass and Raftery (1995), "Bayes Factors", JASA 90(430), 773–795,
+     * §3.2: a BIC difference below 2 is "not worth more than a bare mention".
+     */
+    public static final double BREAK_KIND_BIC_MARGIN = 2;
 
     // ---- outliers ---------------------------------------------------------------------------
 

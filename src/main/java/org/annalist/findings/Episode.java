@@ -4,14 +4,25 @@ import java.util.Optional;
 import org.annalist.series.Period;
 
 /**
- * A collapse followed by a recovery: two breaks read as one event.
+ * A large step followed by a movement back the other way (the series fell and rose again, or rose
+ * and fell back), read as one event. Nothing here says whether either direction is good.
  *
- * @param start         first period of the collapse
- * @param recovery      first period of the regime after the collapsed one; empty while the series is still in it
- * @param lowPoint      the period where the collapsed regime's fitted level is lowest
- * @param lowValue      that level, seasonally adjusted, in the series' units
- * @param regainedShare how much of the fall the level had regained by then, or by the latest period (1 = all)
+ * @param start         first period after the step
+ * @param rise          the step went up (and the return down); false: it fell and rose again
+ * @param before        fitted level just before the step, seasonally adjusted, in the series' units
+ * @param extreme       the period where the stepped regime's fitted line lay furthest from {@code before}
+ * @param extremeLevel  that level
+ * @param returnStart   first period of the regime that moved back, when a later break did; empty
+ *                      when the stepped regime's own line moved back
+ * @param asOf          the period the return is measured at (end of the regime that moved back)
+ * @param returnedLevel the fitted level there
+ * @param returnedShare how much of the step had been undone by {@code asOf} (1 = all)
  */
-public record Episode(Period start, Optional<Period> recovery, Period lowPoint, double lowValue,
-                      double regainedShare) {
+public record Episode(Period start, boolean rise, double before, Period extreme, double extremeLevel,
+                      Optional<Period> returnStart, Period asOf, double returnedLevel, double returnedShare) {
+
+    /** The step from {@code before} to the furthest level, in %. */
+    public double stepPct() {
+        return 100 * (extremeLevel - before) / Math.abs(before);
+    }
 }

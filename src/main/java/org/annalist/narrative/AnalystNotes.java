@@ -58,15 +58,25 @@ public final class AnalystNotes {
             line(out, "breaks", "none (%s)", Terms.breakMethod(f.breakMethod()));
         }
         for (BreakFinding b : f.breaks()) {
-            line(out, "break", "%s (95%% interval %s to %s): level %s → %s, %s; sup-F %.1f, %s%s", b.period(),
-                    b.ci95().get(0), b.ci95().get(1), num(b.levelBefore()), num(b.levelAfter()),
-                    change(f, b.levelAfter() - b.levelBefore(), b.changePct()),
+            String interval = b.ci95().get(0).equals(b.ci95().get(1)) ? b.ci95().get(0) + " only"
+                    : b.ci95().get(0) + " to " + b.ci95().get(1);
+            line(out, "break", "%s (95%% interval %s): %s; fitted lines at the break %s → %s (%s), slope %s → %s"
+                            + " a year; sup-F %.1f, %s%s", b.period(), interval, Terms.breakKind(b.kind()),
+                    num(b.levelBefore()), num(b.levelAfter()), change(f, b.levelAfter() - b.levelBefore(), b.changePct()),
+                    num(b.slopeBefore()), num(b.slopeAfter()),
                     b.statistic(), p(b.pValue()), b.provisional() ? "; provisional" : "");
         }
+        if (f.breaks().size() > 1) {
+            BreakFinding first = f.breaks().get(0);
+            BreakFinding last = f.breaks().get(f.breaks().size() - 1);
+            line(out, "breaks overall", "fitted level %s just before %s → %s just after %s (%s, ratio of the levels)",
+                    num(first.levelBefore()), first.period(), num(last.levelAfter()), last.period(),
+                    change(f, last.levelAfter() - first.levelBefore(), 100 * (last.levelAfter() / first.levelBefore() - 1)));
+        }
         for (Episode e : f.episodes()) {
-            line(out, "episode", "collapse from %s, low point %s (%s), %.0f %% of the fall regained%s", e.start(),
-                    e.lowPoint(), num(e.lowValue()), 100 * e.regainedShare(),
-                    e.recovery().map(r -> " by " + r).orElse(" by the latest period"));
+            line(out, "episode", "%s %.1f %% from %s (%s → %s by %s), then moved back %s (%.0f %% of the step) by %s",
+                    e.rise() ? "rose" : "fell", Math.abs(e.stepPct()), e.start(), num(e.before()), num(e.extremeLevel()),
+                    e.extreme(), Terms.shareOfTheWay(e.returnedShare()), 100 * e.returnedShare(), e.asOf());
         }
         if (!f.breaks().isEmpty()) {
             line(out, "break method", "%s", Terms.breakMethod(f.breakMethod()));
@@ -152,7 +162,8 @@ public final class AnalystNotes {
             String decided = c.withheld().map(w -> "; withheld (" + w.reason().code() + ": " + w.by().code() + ")")
                     .orElse(c.qualifications().isEmpty() ? "" : "; qualified (" + c.qualifications().stream()
                             .map(q -> q.reason().code() + ": " + q.by().code()).collect(Collectors.joining(", ")) + ")");
-            line(out, "claim", "%s %s to %s: %s, %s%s%s", c.quantity().code(), c.from(), c.to(), c.direction().code(),
+            line(out, "claim", "%s %s: %s, %s%s%s", c.quantity().code(),
+                    c.from().equals(c.to()) ? c.from() : c.from() + " to " + c.to(), c.direction().code(),
                     words.signedSize(c), c.pValue().map(pv -> ", " + p(pv)).orElse(""), decided);
         }
     }

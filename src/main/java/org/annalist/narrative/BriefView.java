@@ -99,7 +99,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param firstLevel trend-cycle level in the first full year, formatted
      * @param lastLevel  in the last full year
      * @param rose       whether it is higher at the end
-     * @param drops      years of collapses (breaks of −10 % or more)
+     * @param drops      years of steps down of 10 % or more (by the fitted lines at the break)
      */
     public record Charts(ChartView overview, ChartView profile, ChartView years, ChartView irregular, String firstYear,
                          String lastYear, String firstLevel, String lastLevel, boolean rose, List<String> drops,
@@ -153,13 +153,43 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                              boolean above) {
     }
 
-    /** @param size the change without its sign, for the sentence that gives the direction in a word */
-    public record BreakRow(String period, String from, String to, String before, String after, String change,
-                           boolean rise, String statistic, String pValue, boolean provisional, String size) {
+    /**
+     * A structural change as fitted: both levels are the two regimes' fitted lines at the break.
+     *
+     * @param onePeriod     the 95 % interval is the break's period alone ({@code from} is then that period)
+     * @param change        size of the step without sign ({@code 23.1 %}, or in units with the unit when
+     *                      the values are not all positive); {@code rise} gives its direction
+     * @param step          the break is reported as a step in level
+     * @param slope         the break is reported as a change of slope ({@code slopeBefore} → {@code slopeAfter}
+     *                      in units a year; {@code slopeRise}: the slope went up)
+     * @param sloped        the regimes were fitted as lines (else as levels, whose slopes are zero)
+     * @param drifted       the regime before this break is the previous break's and its line moved from
+     *                      {@code previousAfter} (at {@code previousPeriod}) to {@code before}
+     * @param overall       on the last of two or more breaks: the ratio of fitted levels from just before the
+     *                      first break ({@code firstBefore}, {@code firstPeriod}) to just after this one,
+     *                      without sign ({@code overallRise} its direction); else empty
+     */
+    public record BreakRow(String period, String from, String to, boolean onePeriod, String before, String after,
+                           String change, boolean rise, String statistic, String pValue, boolean provisional,
+                           boolean step, boolean slope, boolean sloped, String slopeBefore, String slopeAfter,
+                           boolean slopeRise, boolean drifted, String previousAfter,
+                           String previousPeriod, String overall, boolean overallRise, String firstBefore,
+                           String firstPeriod) {
     }
 
-    /** @param recovery null while the series is still in the collapsed regime */
-    public record EpisodeView(String start, String recovery, String lowPoint, String lowValue, String regained) {
+    /**
+     * A large step and a movement back, in neutral words.
+     *
+     * @param fell       the step went down and the return up (else up, then down)
+     * @param size       size of the step without sign (% or units)
+     * @param atOnce     the furthest level was reached at the step ({@code extreme} equals {@code start})
+     * @param share      how far back it moved, in words ({@code about a quarter of the way})
+     * @param sharePct   the same as a percentage of the step
+     * @param latest     the return is measured at the series' latest period
+     */
+    public record EpisodeView(String start, boolean fell, String size, boolean atOnce, String extreme,
+                              String before, String extremeLevel, String returned, String asOf, boolean latest,
+                              String share, String sharePct) {
     }
 
     /**

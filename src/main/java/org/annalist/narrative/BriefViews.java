@@ -142,9 +142,9 @@ public final class BriefViews {
         return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
-    /** Breaks that lowered the level by a collapse ({@link DecisionRules#COLLAPSE_PCT}) or more, by year. */
+    /** Breaks whose step lowered the level by {@link DecisionRules#COLLAPSE_PCT} or more, by year. */
     static List<String> dropYears(Series series, List<BreakFinding> breaks) {
-        return breaks.stream().filter(b -> b.changePct() <= DecisionRules.COLLAPSE_PCT).map(b -> String.valueOf(series.period(b.index()).year()))
+        return breaks.stream().filter(b -> b.kind().step() && b.changePct() <= DecisionRules.COLLAPSE_PCT).map(b -> String.valueOf(series.period(b.index()).year()))
                 .distinct().toList();
     }
 }

@@ -30,11 +30,19 @@ final class RulesInForce {
                 new Rule("A cycle is regular when the gaps between its peaks vary by", "at most "
                         + Terms.number(100 * DecisionRules.MAX_REGULAR_GAP_CV) + "\u00A0% (coefficient of variation)"),
                 new Rule("A structural break must move the level by", "at least "
-                        + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0%"),
+                        + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0%, by a step at the break or by a change"
+                        + " of slope within the shortest regime"),
+                new Rule("A break is called a step, a change of slope, or both", "each part only when it moves the level "
+                        + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0%; when both do, the simpler by BIC unless"
+                        + " two separate lines lower BIC by " + Terms.number(DecisionRules.BREAK_KIND_BIC_MARGIN) + " more"),
+                new Rule("A break is provisional when", "the regime after it runs to the latest period and is too short"
+                        + " to date it: its 95\u00A0% interval reaches the latest period"),
                 new Rule("Shortest regime between breaks", "one seasonal period; "
                         + DecisionRules.MIN_REGIME_YEARS_ANNUAL + " years for annual data"),
                 new Rule("Breaks searched with PELT instead of Bai-Perron above", DecisionRules.PELT_ABOVE + " periods"),
-                new Rule("A collapse", "a break of " + Terms.number(DecisionRules.COLLAPSE_PCT) + "\u00A0% or more"),
+                new Rule("A step and a movement back read as one episode", "a step of "
+                        + Terms.number(Math.abs(DecisionRules.COLLAPSE_PCT)) + "\u00A0% or more either way, then a move back"
+                        + " of at least " + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0%"),
                 new Rule("An outlier", "robust score \u2265 " + Terms.number(DecisionRules.OUTLIER_SCORE) + "; runs of "
                         + DecisionRules.OUTLIER_SHIFT_RUN + " or more are shifts; " + DecisionRules.OUTLIER_STRETCH_FLAGS
                         + " or more within two seasonal cycles an unusual stretch"),

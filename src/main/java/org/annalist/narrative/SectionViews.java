@@ -110,22 +110,48 @@ final class SectionViews {
 
     List<BriefView.BreakRow> breaks() {
         List<BriefView.BreakRow> rows = new ArrayList<>();
-        for (BreakFinding b : findings.breaks()) {
+        List<BreakFinding> all = findings.breaks();
+        boolean sloped = findings.breakMethod().levelAndSlope();
+        for (int j = 0; j < all.size(); j++) {
+            BreakFinding b = all.get(j);
+            BreakFinding previous = j == 0 ? null : all.get(j - 1);
+            // the regime between two breaks is one line: its level moved when its two ends differ visibly
+            boolean drifted = previous != null
+                    && Math.abs(b.levelBefore() - previous.levelAfter()) > 0.0005 * Math.abs(previous.levelAfter());
+            BreakFinding first = all.get(0);
+            boolean overall = j == all.size() - 1 && j > 0;
             rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
-                    f.period(b.ci95().get(1)), f.value(b.levelBefore()), f.value(b.levelAfter()),
-                    measure.signedChange(b.levelAfter() - b.levelBefore(), b.changePct()), b.changePct() > 0, f.fixed(b.statistic(), 1),
-                    f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
-                    measure.size(b.levelAfter() - b.levelBefore(), b.changePct())));
+                    f.period(b.ci95().get(1)), b.ci95().get(0).equals(b.ci95().get(1)),
+                    f.value(b.levelBefore()), f.value(b.levelAfter()), size(b.levelBefore(), b.levelAfter()),
+                    b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
+                    b.kind().step(), b.kind().slope(), sloped, f.signedSignificant(b.slopeBefore()),
+                    f.signedSignificant(b.slopeAfter()), b.slopeAfter() > b.slopeBefore(),
+                    drifted,
+                    previous == null ? "" : f.value(previous.levelAfter()),
+                    previous == null ? "" : f.period(previous.period()),
+                    overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
+                    f.value(first.levelBefore()), f.period(first.period())));
         }
         return rows;
     }
 
+    /**
+     * The size of a move from one fitted level to another, without sign: the ratio of the levels
+     * in % when the values are all positive (so that moves compound, never add), else in units.
+     */
+    /** The size of a move from one fitted level to another, without sign: in %, points or units as the measure has it. */
+    private String size(double from, double to) {
+        return measure.size(to - from, from > 0 ? 100 * (to / from - 1) : null);
+    }
+
     List<BriefView.EpisodeView> episodes() {
         List<BriefView.EpisodeView> views = new ArrayList<>();
+        Period last = series.period(series.size() - 1);
         for (Episode e : findings.episodes()) {
-            views.add(new BriefView.EpisodeView(f.period(e.start()), e.recovery().map(f::period).orElse(null),
-                    f.period(e.lowPoint()), f.value(e.lowValue()),
-                    f.fixed(Math.min(100, 100 * e.regainedShare()), 0) + "\u00A0%"));
+            views.add(new BriefView.EpisodeView(f.period(e.start()), !e.rise(), size(e.before(), e.extremeLevel()),
+                    e.extreme().equals(e.start()), f.period(e.extreme()), f.value(e.before()),
+                    f.value(e.extremeLevel()), f.value(e.returnedLevel()), f.period(e.asOf()), e.asOf().equals(last),
+                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%"));
         }
         return views;
     }

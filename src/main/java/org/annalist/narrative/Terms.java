@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import org.annalist.findings.BreakKind;
 import org.annalist.findings.BreakMethod;
 import org.annalist.findings.Caveat;
 import org.annalist.findings.CycleFinding;
@@ -118,8 +119,33 @@ final class Terms {
                     + "aggregate to weeks or months (--aggregate) to look for them.";
         }
         Caveat.ProvisionalBreak b = (Caveat.ProvisionalBreak) caveat;
-        return "The break in " + b.start().label() + " is provisional: the new regime is still short and the break"
-                + " may not hold.";
+        return "The break in " + b.start().label() + " is provisional: the data since are too few to date it (its"
+                + " 95 % interval reaches the latest period), and it may not hold.";
+    }
+
+    /**
+     * How much of a step has been undone, as a reader would say it: the nearest of a tenth, a
+     * fifth, a quarter, a third, half, two thirds, three quarters, nearly all the way; all the way
+     * from 95 % to 105 %; beyond the level before the step above that.
+     */
+    static String shareOfTheWay(double share) {
+        if (share > 1.05) {
+            return "beyond the level before the step";
+        }
+        if (share >= 0.95) {
+            return "all the way";
+        }
+        double[] at = {0.1, 0.2, 0.25, 1.0 / 3, 0.5, 2.0 / 3, 0.75, 0.9};
+        String[] words = {"about a tenth of the way", "about a fifth of the way", "about a quarter of the way",
+                "about a third of the way", "about half way", "about two thirds of the way",
+                "about three quarters of the way", "nearly all the way"};
+        int best = 0;
+        for (int i = 1; i < at.length; i++) {
+            if (Math.abs(share - at[i]) < Math.abs(share - at[best])) {
+                best = i;
+            }
+        }
+        return words[best];
     }
 
     /** The outlook's model: {@code ETS(M,A,M)}, {@code Theta, seasonally adjusted}, {@code mean of …}. */
@@ -159,6 +185,15 @@ final class Terms {
         int gaps = ((OutlookCaveat.GapsFilled) caveat).count();
         return gaps + (gaps == 1 ? " missing value was" : " missing values were")
                 + " filled with what trend and season predict before forecasting.";
+    }
+
+    /** What a break changed: {@code step in level}, {@code change of slope}, {@code step and change of slope}. */
+    static String breakKind(BreakKind kind) {
+        return switch (kind) {
+            case LEVEL -> "step in level";
+            case SLOPE -> "change of slope";
+            case BOTH -> "step and change of slope";
+        };
     }
 
     /** How the breaks were searched, for the methods appendix. */

@@ -81,7 +81,7 @@ class BreaksAndOutliersTest {
     }
 
     @Test
-    void aCollapseAndRecoveryAreTwoBreaksReadAsOneEpisode() {
+    void aFallAndAReturnAreTwoBreaksReadAsOneEpisode() {
         Findings f = new Analyst().analyse(series(4, 0.02, t -> t >= 100 ? 0.8 : t >= 80 ? 0.4 : 1));
         assertThat(f.breaks()).hasSize(2);
         assertThat(covers(f.breaks().get(0), 80)).isTrue();
@@ -89,9 +89,10 @@ class BreaksAndOutliersTest {
         assertThat(f.episodes()).hasSize(1);
         Episode e = f.episodes().get(0);
         assertThat(e.start()).isEqualTo(f.breaks().get(0).period());
-        assertThat(e.recovery()).contains(f.breaks().get(1).period());
-        // from 40 % of the old level back to 80 %: two thirds of the fall regained, give or take the noise
-        assertThat(e.regainedShare()).isBetween(0.55, 0.8);
+        assertThat(e.rise()).isFalse();
+        assertThat(e.returnStart()).contains(f.breaks().get(1).period());
+        // from 40 % of the old level back to 80 %: two thirds of the fall undone, give or take the noise
+        assertThat(e.returnedShare()).isBetween(0.55, 0.8);
     }
 
     @Test

@@ -71,7 +71,7 @@ public final class ClaimsFixture {
     public ClaimsFixture step(Period at, double pct) {
         int index = (int) (observations - 1 - at.until(end));
         breaks.add(new BreakFinding(at, List.of(at.plus(-1), at.plus(1)), 100_000, 100_000 * (1 + pct / 100), pct, 40,
-                0.002, false, index));
+                0.002, false, index, BreakKind.LEVEL, 0, 0, end, 100_000 * (1 + pct / 100)));
         return this;
     }
 

@@ -20,18 +20,19 @@ import org.annalist.series.Frequency;
  *     and for changes in level and slope, the model and number of breaks with the lower BIC. Serial
  *     correlation makes BIC propose too many breaks [2], so from BIC's number of breaks down, the
  *     first partition is kept in which every break moves the level by at least the
- *     {@link #withMinimumChangePct(double) minimum change} and passes its own sup-F test [4] over
+ *     {@link #withMinimumChangePct(double) minimum change} (by a step at the break, or by a change of
+ *     slope over one minimum regime) and passes its own sup-F test [4] over
  *     the span of its two regimes; else none.</li>
  * <li>Longer series: PELT [5] for changes in level; then, while some break moves the level by less
  *     than the minimum change or fails its own sup-F test, the weakest of those (smallest change)
  *     is removed and the rest are checked again. A smooth yearly wave in long data otherwise reads
  *     as a staircase of level changes.</li>
  * <li>Each break kept gets its sup-F test with the full number of replications, a Bai (1997) [3]
- *     interval for its date, and the fitted levels of its two regimes at the break, in the series'
+ *     interval for its date (for a change of slope without a step of the minimum change, the likelihood-ratio set [6]), and the fitted levels of its two regimes at the break, in the series'
  *     units (back from logs when the values are logs).</li>
- * <li>Episodes: a collapse (a break that changes the level by the
- *     {@link #withCollapsePct(double) collapse threshold} or more downwards) followed by a
- *     recovery.</li>
+ * <li>Episodes: a large step (a break whose step moves the level by the
+ *     {@link #withCollapsePct(double) episode threshold} or more, either way) followed by a
+ *     movement back of at least the minimum change.</li>
  * </ol>
  *
  * <p>Configuration is immutable: each {@code with…} returns a new search. The defaults are those
@@ -57,6 +58,9 @@ import org.annalist.series.Frequency;
  * <li>R. Killick, P. Fearnhead and I. A. Eckley (2012), "Optimal Detection of Changepoints With a
  *     Linear Computational Cost", <i>Journal of the American Statistical Association</i> 107(500),
  *     1590–1598. doi:10.1080/01621459.2012.737745</li>
+ * <li>D. Siegmund (1988), "Confidence Sets in Change-point Problems", <i>International Statistical
+ *     Review</i> 56(1), 31–48. doi:10.2307/1403360 (DOI from memory): the date of a break between
+ *     fitted lines is given the set of dates the likelihood-ratio test does not reject</li>
  * </ol>
  */
 public final class BreakSearch {
@@ -82,46 +86,67 @@ public final class BreakSearch {
     }
 
     /**
-     * One confirmed break.
+     * One confirmed break. Both regimes' fitted lines are read at the break instant, between the
+     * old regime's last period and the new regime's first, so that the levels before and after are
+     * one date's two values and a regime between two breaks gives both of its levels from one line.
      *
      * @param start         index of the first period of the new regime
      * @param earliest      index of the earliest first period the 95 % interval allows [3]; 1 when
      *                      the break lies as close to the series' start as the minimum regime allows
      * @param latest        index of the latest first period the interval allows; the series' last
      *                      index when the break lies as close to the end as the minimum regime allows
-     * @param levelBefore   fitted level of the old regime at its last period, in the series' units
-     * @param levelAfter    fitted level of the new regime at its first period, in the series' units
-     * @param changePct     {@code levelAfter} against {@code levelBefore}, in %
+     * @param levelBefore   the old regime's fitted line at the break, in the series' units
+     * @param levelAfter    the new regime's fitted line at the break, in the series' units
+     * @param changePct     the gap between the two lines at the break: {@code levelAfter} against
+     *                      {@code levelBefore}, in %
      * @param test          the sup-F test over the span of the two regimes ({@link SupF#REPLICATIONS}
      *                      replications); empty only when that span admits no test, which a break
      *                      with a finite change never meets
-     * @param provisional   the new regime runs to the series' end and is still shorter than two
-     *                      minimum regimes: the break may not hold
+     * @param provisional   the new regime runs to the series' end and is too short to date the
+     *                      break: its 95 % interval reaches the latest period
+     * @param slopeBefore   the old line's slope at the break, series' units per period (0 for a
+     *                      level model)
+     * @param slopeAfter    the new line's slope at the break, series' units per period
+     * @param divergencePct how far the change of slope carries the new line from the old one's
+     *                      extension over the minimum regime, in % of the level before
+     * @param shape         the step / slope / both fits of the two regimes ({@link BreakShape});
+     *                      empty for a level model, whose regimes have no slope
+     * @param end           index of the new regime's last period
+     * @param endLevel      the new regime's fitted line at its last period, in the series' units
      */
     public record Break(int start, int earliest, int latest, double levelBefore, double levelAfter, double changePct,
-                        Optional<TestResult> test, boolean provisional) {
+                        Optional<TestResult> test, boolean provisional, double slopeBefore, double slopeAfter,
+                        double divergencePct, Optional<BreakShape> shape, int end, double endLevel) {
 
         public Break {
             Objects.requireNonNull(test, "test");
+            Objects.requireNonNull(shape, "shape");
         }
     }
 
     /**
-     * A collapse followed by a recovery: two breaks (or one break and a rising regime) read as one
-     * event.
+     * A large step followed by a movement back the other way: the series fell and rose again (or
+     * rose and fell back), read as one event.
      *
-     * @param start         index of the first period of the collapse (the start of its break)
-     * @param recovery      index of the first period of the regime after the collapsed one; empty
-     *                      while the series is still in it
-     * @param low           index of the period where the collapsed regime's fitted level is lowest
-     * @param lowLevel      that level, in the series' units
-     * @param regainedShare how much of the fall the level had regained by the recovery, or by the
-     *                      latest period (1 = all, capped at {@value BreakSearch#MAX_REGAINED_SHARE})
+     * @param start         index of the first period after the large step
+     * @param rise          whether the step went up (and the return down)
+     * @param before        the fitted level just before the step, in the series' units
+     * @param extreme       index of the period where the stepped regime's fitted line is furthest
+     *                      from {@code before} (its low after a fall, its high after a rise)
+     * @param extremeLevel  that fitted level, in the series' units
+     * @param returnStart   index of the first period of the regime that moved back; empty when the
+     *                      stepped regime's own line moved back
+     * @param asOf          index of the period at which the return is measured: the end of the
+     *                      regime that moved back
+     * @param returnedLevel the fitted level at {@code asOf}
+     * @param returnedShare how much of the step had been undone by {@code asOf} (1 = all, capped at
+     *                      {@value BreakSearch#MAX_REGAINED_SHARE})
      */
-    public record Episode(int start, OptionalInt recovery, int low, double lowLevel, double regainedShare) {
+    public record Episode(int start, boolean rise, double before, int extreme, double extremeLevel,
+                          OptionalInt returnStart, int asOf, double returnedLevel, double returnedShare) {
 
         public Episode {
-            Objects.requireNonNull(recovery, "recovery");
+            Objects.requireNonNull(returnStart, "returnStart");
         }
     }
 
@@ -134,7 +159,7 @@ public final class BreakSearch {
      * @param minimumRegime the fewest periods a regime could have: for Bai–Perron the chosen model's
      *                      (at least 2 for a level, 3 for a line); when not searched, the one in force
      * @param breaks        confirmed breaks, oldest first
-     * @param episodes      collapses followed by recoveries, oldest first
+     * @param episodes      large steps followed by a movement back, oldest first
      */
     public record Result(Method method, Optional<BaiPerron.Model> model, int minimumRegime, List<Break> breaks,
                          List<Episode> episodes) {
@@ -162,14 +187,14 @@ public final class BreakSearch {
     public static final double DEFAULT_MINIMUM_CHANGE_PCT = 3;
     /** Bai–Perron costs O(n²) per break; above this many values PELT (linear) searches (our rule). */
     public static final int DEFAULT_PELT_ABOVE = 1500;
-    /** A collapse: a break that changes the level by −10 % or less (our rule). */
+    /** An episode begins with a step of 10 % or more either way; given as −10 (our rule). */
     public static final double DEFAULT_COLLAPSE_PCT = -10;
     /**
      * Minimum regime of annual data, in years (our rule; the usual 15 % trimming would forbid
      * breaks in the last 15 % of the data, where a reader most needs to know of one).
      */
     public static final int DEFAULT_ANNUAL_MINIMUM_REGIME = 8;
-    /** The share regained is capped at 1.5: beyond, a recovery says no more about the fall (our rule). */
+    /** The share moved back is capped at 1.5: beyond, the return says no more about the step (our rule). */
     public static final double MAX_REGAINED_SHARE = 1.5;
 
     private static final int BY_FREQUENCY = 0;
@@ -302,7 +327,7 @@ public final class BreakSearch {
         for (int j = 0; j < starts.length; j++) {
             int from = j == 0 ? 0 : starts[j - 1];
             int to = j + 1 < starts.length ? starts[j + 1] - 1 : n - 1;
-            breaks.add(regimes.describe(from, starts[j], to));
+            breaks.add(regimes.describe(from, starts[j], to, minimumChangePct));
         }
         return new Result(method, Optional.of(model), used, breaks,
                 regimes.episodes(breaks, collapsePct, minimumChangePct));

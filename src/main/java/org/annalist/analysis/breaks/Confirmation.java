@@ -8,7 +8,8 @@ import org.annalist.analysis.TestResult;
 
 /**
  * Which proposed breaks the data carry: a break holds when it moves the fitted level by at least
- * the minimum change and passes its own sup-F test [4] over the span of its two regimes. Serial
+ * the minimum change — by the gap between the two lines at the break, or by how far the change of
+ * slope carries them apart over the shortest regime a break allows — and passes its own sup-F test [4] over the span of its two regimes. Serial
  * correlation makes BIC propose too many breaks [2]; these checks remove those the data do not
  * carry. Numbers in brackets refer to the references of {@link BreakSearch}.
  */
@@ -41,8 +42,8 @@ final class Confirmation {
             for (int j = 0; j < starts.length && all; j++) {
                 int from = j == 0 ? 0 : starts[j - 1];
                 int to = j + 1 < starts.length ? starts[j + 1] - 1 : y.length - 1;
-                all = Math.abs(changePct(from, starts[j], to)) >= minimumChangePct
-                        && localVerdict(from, starts[j], to) == SupF.Verdict.REJECTS;
+                all = Math.max(Math.abs(changePct(from, starts[j], to)), Math.abs(divergencePct(from, starts[j], to)))
+                        >= minimumChangePct && localVerdict(from, starts[j], to) == SupF.Verdict.REJECTS;
             }
             if (all) {
                 return starts;
@@ -66,7 +67,8 @@ final class Confirmation {
             for (int j = 0; j < starts.size(); j++) {
                 int from = j == 0 ? 0 : starts.get(j - 1);
                 int to = j + 1 < starts.size() ? starts.get(j + 1) - 1 : y.length - 1;
-                double change = Math.abs(changePct(from, starts.get(j), to));
+                double change = Math.max(Math.abs(changePct(from, starts.get(j), to)),
+                        Math.abs(divergencePct(from, starts.get(j), to)));
                 boolean holds = change >= minimumChangePct
                         && localVerdict(from, starts.get(j), to) == SupF.Verdict.REJECTS;
                 if (!holds && change < weakestChange) {
@@ -83,13 +85,35 @@ final class Confirmation {
     }
 
     /**
-     * Change of the fitted level at the break {@code start} (regimes {@code from..start−1} and
-     * {@code start..to}), in % of the level before; on logs, {@code 100 (e^{after − before} − 1)}.
+     * The gap between the two regimes' fitted lines at the break instant {@code start − ½} (regimes
+     * {@code from..start−1} and {@code start..to}), in % of the level before; on logs,
+     * {@code 100 (e^{after − before} − 1)}.
      */
     private double changePct(int from, int start, int to) {
-        double before = BaiPerron.regimeFit(y, model, from, start - 1, start - 1)[0];
-        double after = BaiPerron.regimeFit(y, model, start, to, start)[0];
+        double before = atBreak(from, start - 1, start);
+        double after = atBreak(start, to, start);
         return log ? 100 * (Math.exp(after - before) - 1) : 100 * (after - before) / Math.abs(before);
+    }
+
+    /**
+     * How far the change of slope carries the lines apart over the minimum regime, in % (0 for
+     * levels). A change of slope counts only between two regimes of at least 1.5 minimum regimes
+     * each: the adjusted series bends around a step over about STL's trend window, 1.5 seasonal
+     * periods and a little more (Cleveland et al. 1990, the default n_t ≥ 1.5 n_p / (1 − 1.5/n_s)),
+     * and a line over a regime that short would read that bend as a slope.
+     */
+    private double divergencePct(int from, int start, int to) {
+        if (Math.min(start - from, to - start + 1) < Math.ceil(1.5 * h)) {
+            return 0;
+        }
+        double slopeOld = BaiPerron.regimeFit(y, model, from, start - 1, start)[1];
+        double slopeNew = BaiPerron.regimeFit(y, model, start, to, start)[1];
+        return new Regimes(y, model, h, log).divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start));
+    }
+
+    private double atBreak(int a, int b, int start) {
+        double[] fit = BaiPerron.regimeFit(y, model, a, b, start);
+        return fit[0] - 0.5 * fit[1];
     }
 
     private SupF.Verdict localVerdict(int from, int start, int to) {

@@ -26,26 +26,105 @@ final class Regimes {
         this.log = log;
     }
 
-    /** The break with the new regime {@code start..to} after the old regime {@code from..start−1}. */
-    BreakSearch.Break describe(int from, int start, int to) {
-        double before = BaiPerron.regimeFit(y, model, from, start - 1, start - 1)[0];
-        double after = BaiPerron.regimeFit(y, model, start, to, start)[0];
+    /**
+     * The break with the new regime {@code start..to} after the old regime {@code from..start−1}.
+     * Both regimes' fitted lines are read at the break instant τ = start − ½ (between the old
+     * regime's last period and the new regime's first): the levels before and after are the two
+     * lines there, so the step is the gap between them at one date; a regime between two breaks
+     * gives the "after" of the one and the "before" of the next from its one line.
+     */
+    BreakSearch.Break describe(int from, int start, int to, double minimumChangePct) {
+        double[] old = atBreak(from, start - 1, start);
+        double[] fresh = atBreak(start, to, start);
+        double before = old[0];
+        double after = fresh[0];
         double sdBefore = residualSd(from, start - 1);
         double sdAfter = residualSd(start, to);
         // [3] Δ, σ₁, σ₂ and the room for the date: back to the old regime's start, on to the new regime's end
         BreakDateInterval.Offsets ci = BreakDateInterval.of(after - before, sdBefore, sdAfter, start - from - 1,
                 to - start);
         Optional<TestResult> local = Confirmation.localTest(y, model, h, from, start, to);
-        double levelBefore = log ? Math.exp(before) : before;
-        double levelAfter = log ? Math.exp(after) : after;
+        double levelBefore = units(before);
+        double levelAfter = units(after);
         double changePct = 100 * (levelAfter - levelBefore) / Math.abs(levelBefore);
-        boolean provisional = to == y.length - 1 && to - start + 1 < 2 * h;   // the latest regime, still short
+        // slopes in the series' units per period at the break: on logs d e^{a+bt}/dt = b e^{a+bt}
+        double slopeBefore = log ? old[1] * levelBefore : old[1];
+        double slopeAfter = log ? fresh[1] * levelAfter : fresh[1];
+        double endLevel = units(after + fresh[1] * (to - start + 0.5));
         // No regime may be shorter than h, so a break found as close to an end of the series as
         // that allows may really lie closer still, where the search could not place it: the
         // interval then reaches that end rather than claim a precision the search did not have.
-        int earliest = from == 0 && start - from <= h ? 1 : start + ci.lower();
-        int latest = to == y.length - 1 && to - start + 1 <= h ? to : start + ci.upper();
-        return new BreakSearch.Break(start, earliest, latest, levelBefore, levelAfter, changePct, local, provisional);
+        // a step is dated by Bai's interval [3]; a bend without a step worth reporting by the LR set [6]
+        int[] dated = model == BaiPerron.Model.LEVEL || Math.abs(changePct) >= minimumChangePct
+                ? new int[] {start + ci.lower(), start + ci.upper()} : profileInterval(from, start, to);
+        int earliest = from == 0 && start - from <= h ? 1 : dated[0];
+        int latest = to == y.length - 1 && to - start + 1 <= h ? to : dated[1];
+        // Provisional: the new regime runs to the series' end and is too short to date the break,
+        // i.e. its 95 % interval reaches the latest period (always so when it is no longer than h).
+        boolean provisional = to == y.length - 1 && latest >= to;
+        Optional<BreakShape> shape = model == BaiPerron.Model.LEVEL ? Optional.empty()
+                : Optional.of(BreakShape.of(y, from, start, to));
+        return new BreakSearch.Break(start, earliest, latest, levelBefore, levelAfter, changePct, local, provisional,
+                slopeBefore, slopeAfter, divergencePct(old[1], fresh[1], before), shape, to, endLevel);
+    }
+
+    /**
+     * The 95 % confidence set for the date of a break between two fitted lines, by inverting the
+     * likelihood-ratio test [6]: every first period {@code k} of the new regime in {@code from..to}
+     * whose two-line residual sum of squares lies within χ²₁(0.95) σ̂² of the smallest, σ̂² the
+     * residual variance at the smallest; the set's hull around {@code start}. Bai's (1997) interval
+     * [3] assumes a change in level: for a change of slope alone its Δ is about zero and the
+     * interval would span both regimes, however clear the bend. Independent errors are assumed, so
+     * with serial correlation the set is too narrow rather than too wide.
+     */
+    private int[] profileInterval(int from, int start, int to) {
+        SegmentCost cost = new SegmentCost(y, model);
+        int first = from + 3;       // a line needs 3 values on each side to leave a residual
+        int last = to - 2;
+        if (first > start || last < start) {
+            return new int[] {start, start};
+        }
+        double[] rss = new double[last - first + 1];
+        double smallest = Double.POSITIVE_INFINITY;
+        for (int k = first; k <= last; k++) {
+            rss[k - first] = cost.rss(from, k - 1) + cost.rss(k, to);
+            smallest = Math.min(smallest, rss[k - first]);
+        }
+        double sigma2 = smallest / Math.max(1, cost.observed(from, to) - 4);
+        double limit = smallest + CHI2_1_95 * sigma2;   // [6] LR statistic (RSS(k) − RSS_min)/σ̂² ≤ χ²₁(0.95)
+        int lo = start;
+        while (lo - 1 >= first && rss[lo - 1 - first] <= limit) {
+            lo--;
+        }
+        int hi = start;
+        while (hi + 1 <= last && rss[hi + 1 - first] <= limit) {
+            hi++;
+        }
+        return new int[] {lo, hi};
+    }
+
+    /** 95 % point of χ² with one degree of freedom. */
+    private static final double CHI2_1_95 = 3.841458820694124;
+
+    /** Intercept at the break instant start − ½ and slope per period of the fit over {@code a..b}. */
+    private double[] atBreak(int a, int b, int start) {
+        double[] fit = BaiPerron.regimeFit(y, model, a, b, start);
+        return new double[] {fit[0] - 0.5 * fit[1], fit[1]};
+    }
+
+    private double units(double value) {
+        return log ? Math.exp(value) : value;
+    }
+
+    /**
+     * How far the change of slope carries the lines apart over the shortest regime a break allows
+     * ({@code h} periods: one seasonal cycle, or the annual minimum), in % of the level at the
+     * break. A fixed horizon, not the regime's own length: a long regime would otherwise make any
+     * gentle curve (co2's acceleration) a material change of slope. 0 for a level model.
+     */
+    double divergencePct(double slopeOld, double slopeNew, double levelAtBreak) {
+        double span = h * (slopeNew - slopeOld);
+        return log ? 100 * (Math.exp(span) - 1) : 100 * span / Math.abs(levelAtBreak);
     }
 
     /** Root mean square of the residuals of the regime fit over {@code from..to}; 0 with fewer than 2 values. */
@@ -64,37 +143,54 @@ final class Regimes {
     }
 
     /**
-     * A collapse (a break with a change of {@code collapsePct} % or less) followed by a recovery:
-     * the next break raises the level again, or the collapsed regime itself rises (a
-     * level-and-slope regime that ends higher than it began). The low point is the lower end of the
-     * collapsed regime's fitted line; the share regained compares the level after the recovery (or
-     * at the latest period) with it. A rise of less than {@code minimumChangePct} % above the low
-     * point is no recovery: the break alone describes a lasting fall.
+     * Large steps followed by a movement back: a break whose step (the gap at the break) is at least
+     * {@code |stepPct|} % either way, after which the fitted level moved back the other way by at
+     * least {@code minimumChangePct} % of the level it had reached — along the stepped regime's own
+     * line, or through the regime after the next break. The furthest point is the end of the
+     * stepped regime's line that lies further from the level before the step; the return is
+     * measured at the end of the regime that moved back (the next regime when it lies further back,
+     * else the stepped regime's end). A gradual decline followed by a step up has no large step to
+     * start from and is no episode; a step that is not undone is described by the break alone.
      */
-    List<BreakSearch.Episode> episodes(List<BreakSearch.Break> breaks, double collapsePct, double minimumChangePct) {
+    List<BreakSearch.Episode> episodes(List<BreakSearch.Break> breaks, double stepPct, double minimumChangePct) {
         List<BreakSearch.Episode> episodes = new ArrayList<>();
+        double threshold = Math.abs(stepPct);
         for (int j = 0; j < breaks.size(); j++) {
-            BreakSearch.Break fall = breaks.get(j);
-            if (fall.changePct() > collapsePct) {
+            BreakSearch.Break step = breaks.get(j);
+            if (Math.abs(step.changePct()) < threshold) {
                 continue;
             }
-            boolean followed = j + 1 < breaks.size();
-            int end = followed ? breaks.get(j + 1).start() - 1 : y.length - 1;
-            double atStart = BaiPerron.regimeFit(y, model, fall.start(), end, fall.start())[0];
-            double atEnd = BaiPerron.regimeFit(y, model, fall.start(), end, end)[0];
-            double recovered = followed ? breaks.get(j + 1).levelAfter() : log ? Math.exp(atEnd) : atEnd;
-            int lowIndex = atEnd < atStart ? end : fall.start();
-            double low = log ? Math.exp(Math.min(atStart, atEnd)) : Math.min(atStart, atEnd);
-            if (recovered <= low * (1 + minimumChangePct / 100)) {
-                continue;   // no recovery to speak of: a lasting fall, which the break itself describes
+            boolean rise = step.changePct() > 0;
+            double sign = rise ? 1 : -1;
+            boolean furtherAtEnd = sign * (step.endLevel() - step.levelAfter()) > 0;
+            int extreme = furtherAtEnd ? step.end() : step.start();
+            double extremeLevel = furtherAtEnd ? step.endLevel() : step.levelAfter();
+            int asOf = step.end();
+            double returned = step.endLevel();
+            OptionalInt returnStart = OptionalInt.empty();
+            if (j + 1 < breaks.size() && sign * (breaks.get(j + 1).endLevel() - returned) < 0) {
+                BreakSearch.Break next = breaks.get(j + 1);
+                returnStart = OptionalInt.of(next.start());
+                asOf = next.end();
+                returned = next.endLevel();
             }
-            double fallSize = fall.levelBefore() - low;
-            double regained = fallSize <= 0 ? 1
-                    : Math.min(BreakSearch.MAX_REGAINED_SHARE, (recovered - low) / fallSize);
-            episodes.add(new BreakSearch.Episode(fall.start(),
-                    followed ? OptionalInt.of(breaks.get(j + 1).start()) : OptionalInt.empty(), lowIndex, low,
-                    regained));
+            if (returnStart.isEmpty() && sign * step.slopeBefore() < 0) {
+                continue;   // the stepped line only carries on the way the old one went: no return
+            }
+            double back = -sign * 100 * (returned - extremeLevel) / Math.abs(extremeLevel);
+            if (back < minimumChangePct) {
+                continue;   // no real return: a lasting step, which the break itself describes
+            }
+            double stepSize = step.levelBefore() - extremeLevel;
+            double share = Math.min(BreakSearch.MAX_REGAINED_SHARE, (returned - extremeLevel) / stepSize);
+            episodes.add(new BreakSearch.Episode(step.start(), rise, step.levelBefore(), extreme, extremeLevel,
+                    returnStart, asOf, returned, share));
         }
+        // A break is read in one episode only: a step whose return is itself the large step of a
+        // later episode (a rise that a fall undid, the fall then undone in turn) is left to the
+        // later one, which is the event a reader needs; the breaks themselves describe the rest.
+        List<Integer> starts = episodes.stream().map(BreakSearch.Episode::start).toList();
+        episodes.removeIf(e -> e.returnStart().isPresent() && starts.contains(e.returnStart().getAsInt()));
         return episodes;
     }
 }

@@ -149,7 +149,7 @@ class BreakSearchTest {
     }
 
     @Test
-    void aCollapseAndAPartialRecoveryAreOneEpisode() {
+    void aFallAndAPartialReturnAreOneEpisode() {
         // 100 → 50 from index 60, → 90 from index 100: 40 of the 50 lost regained
         Random random = new Random(11);
         double[] y = new double[144];
@@ -162,13 +162,16 @@ class BreakSearchTest {
         assertThat(r.episodes()).hasSize(1);
         BreakSearch.Episode e = r.episodes().get(0);
         assertThat(e.start()).isEqualTo(60);
-        assertThat(e.recovery()).hasValue(100);
-        assertThat(e.low()).isEqualTo(60);   // a flat collapsed regime: its first period
+        assertThat(e.rise()).isFalse();
+        assertThat(e.returnStart()).hasValue(100);
+        assertThat(e.asOf()).isEqualTo(143);
+        assertThat(e.extreme()).isEqualTo(60);   // a flat stepped regime: its first period
         double before = mean(y, 0, 59);
         double low = mean(y, 60, 99);
         double after = mean(y, 100, 143);
-        assertThat(e.lowLevel()).isCloseTo(low, within(1e-9));
-        assertThat(e.regainedShare()).isCloseTo((after - low) / (before - low), within(1e-9));
+        assertThat(e.before()).isCloseTo(before, within(1e-9));
+        assertThat(e.extremeLevel()).isCloseTo(low, within(1e-9));
+        assertThat(e.returnedShare()).isCloseTo((after - low) / (before - low), within(1e-9));
         // a fall of 50 % is no collapse when only 60 % or more counts as one
         assertThat(BreakSearch.withDefaults().withCollapsePct(-60).search(y, Frequency.MONTHLY,
                 BreakSearch.Scale.UNITS).episodes()).isEmpty();

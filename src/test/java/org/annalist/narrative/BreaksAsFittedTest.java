@@ -1,0 +1,174 @@
+package org.annalist.narrative;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Random;
+import java.util.function.IntToDoubleFunction;
+import org.annalist.analysis.Reference;
+import org.annalist.findings.Analyst;
+import org.annalist.findings.BreakFinding;
+import org.annalist.findings.BreakKind;
+import org.annalist.findings.Episode;
+import org.annalist.findings.Findings;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Breaks are described as fitted: planted truth (invented series, expected values derived here from
+ * the planted effects) against the findings and the words of {@code analyze}'s notes.
+ */
+class BreaksAsFittedTest {
+
+    private static final Period START = Period.month(2010, 1);
+
+    /** 12 years of monthly values: the given level × a summer-peaking season × 2 % noise. */
+    private static Series series(long seed, IntToDoubleFunction level) {
+        Random random = new Random(seed);
+        double[] x = new double[144];
+        for (int t = 0; t < x.length; t++) {
+            double season = 1 + 0.3 * Math.sin(2 * Math.PI * (t - 3) / 12);
+            x[t] = level.applyAsDouble(t) * season * Math.exp(0.02 * random.nextGaussian());
+        }
+        return Series.builder("synthetic", Frequency.MONTHLY).append(START, x).snapshot();
+    }
+
+    private static Findings analyse(Series s) {
+        return new Analyst().withoutOutlook().analyse(s);
+    }
+
+    @Test
+    void aPureStepUpOrDownIsDescribedAsAStepWithItsSignAndSize() {
+        for (double factor : new double[] {1.3, 0.75}) {
+            Findings f = analyse(series(21, t -> t >= 70 ? 10_000 * factor : 10_000));
+            assertThat(f.breaks()).hasSize(1);
+            BreakFinding b = f.breaks().get(0);
+            assertThat(b.kind()).as("kind of a planted step ×%s", factor).isEqualTo(BreakKind.LEVEL);
+            // planted: +30 % and −25 %; 2 % noise and the adjustment leave a few points of error
+            assertThat(b.changePct()).isCloseTo(100 * (factor - 1), within(4.0));
+            assertThat(b.changePct()).isCloseTo(100 * (b.levelAfter() / b.levelBefore() - 1), within(1e-9));
+            assertThat(AnalystNotes.of(f)).contains("step in level");
+        }
+    }
+
+    @Test
+    void aPureChangeOfSlopeIsDescribedAsAChangeOfSlopeNotAStep() {
+        // flat at 10,000 for six years, then growing 15 % a year from the same level (no jump):
+        // at the break the slope goes from 0 to 10,000 ln 1.15 = 1,398 a year
+        double growth = Math.log(1.15);
+        Findings f = analyse(series(22, t -> t >= 72 ? 10_000 * Math.exp(growth * (t - 71.5) / 12) : 10_000));
+        assertThat(f.breaks()).as(AnalystNotes.of(f)).hasSize(1);
+        BreakFinding b = f.breaks().get(0);
+        assertThat(b.kind()).isEqualTo(BreakKind.SLOPE);
+        assertThat(b.period()).isBetween(START.plus(66), START.plus(78));
+        assertThat(b.slopeAfter() - b.slopeBefore()).isCloseTo(10_000 * growth, within(350.0));
+        assertThat(Math.abs(b.changePct())).isLessThan(3.0);
+        String notes = AnalystNotes.of(f);
+        assertThat(notes).contains("change of slope").doesNotContain("step in level");
+    }
+
+    @Test
+    void twoConsecutiveBreaksShareTheirMiddleLevel() {
+        Findings f = analyse(series(23, t -> t >= 100 ? 12_000 : t >= 50 ? 16_000 : 10_000));
+        assertThat(f.breaks()).as(AnalystNotes.of(f)).hasSizeGreaterThanOrEqualTo(2);
+        for (int j = 1; j < f.breaks().size(); j++) {
+            BreakFinding first = f.breaks().get(j - 1);
+            BreakFinding second = f.breaks().get(j);
+            // one fitted line for the middle regime: the two readings differ by its slope times the
+            // distance apart (a straight line in logs, or in units), and not at all for a level
+            double years = (second.index() - first.index()) / 12.0;
+            double inLogs = Math.log(second.levelBefore() / first.levelAfter()) / years - first.slopeAfter() / first.levelAfter();
+            double inUnits = (second.levelBefore() - first.levelAfter()) / years - first.slopeAfter();
+            assertThat(Math.min(Math.abs(inLogs), Math.abs(inUnits) / first.levelAfter())).isLessThan(1e-6);
+        }
+        // the overall change is the ratio of fitted levels, not the sum of the steps
+        BreakFinding first = f.breaks().get(0);
+        BreakFinding last = f.breaks().get(f.breaks().size() - 1);
+        double overall = 100 * (last.levelAfter() / first.levelBefore() - 1);
+        assertThat(AnalystNotes.of(f)).contains(String.format(java.util.Locale.ROOT, "(%+.1f %%, ratio of the levels)", overall));
+    }
+
+    @Test
+    void aFallAndAPartialReturnIsOneEpisodeInNeutralWordsWithItsShare() {
+        // 10,000 → 6,000 from month 60, → 7,000 from month 100: a quarter of the fall undone
+        Findings f = analyse(series(24, t -> t >= 100 ? 7_000 : t >= 60 ? 6_000 : 10_000));
+        assertThat(f.episodes()).hasSize(1);
+        Episode e = f.episodes().get(0);
+        assertThat(e.rise()).isFalse();
+        assertThat(e.stepPct()).isCloseTo(-40, within(4.0));
+        assertThat(e.returnedShare()).isCloseTo(0.25, within(0.08));
+        assertThat(Terms.shareOfTheWay(e.returnedShare())).isEqualTo("about a quarter of the way");
+        String notes = AnalystNotes.of(f).toLowerCase(java.util.Locale.ROOT);
+        assertThat(notes).contains("fell ").doesNotContain("collapse", "recover", "regain", "crash");
+    }
+
+    @Test
+    void aGradualDeclineThenAStepUpIsNoEpisode() {
+        // falling 8 % a year for eight years, then a 20 % step up
+        Findings f = analyse(series(25, t -> 10_000 * Math.pow(0.92, t / 12.0) * (t >= 96 ? 1.2 : 1)));
+        assertThat(f.breaks()).isNotEmpty();
+        assertThat(f.breaks()).noneMatch(b -> b.kind().step() && b.changePct() <= -10);
+        assertThat(f.episodes()).isEmpty();
+    }
+
+    @Test
+    void aOnePeriodIntervalReadsAsOnePeriod() {
+        // a 50 % step in 2 % noise is dated to its month
+        Findings f = analyse(series(26, t -> t >= 72 ? 15_000 : 10_000));
+        BreakFinding b = f.breaks().get(0);
+        assertThat(b.ci95().get(0)).isEqualTo(b.ci95().get(1));
+        String notes = AnalystNotes.of(f);
+        assertThat(notes).contains("95% interval " + b.period() + " only").doesNotContain(b.period() + " to " + b.period());
+    }
+
+    @Test
+    void aBreakTwoYearsBeforeTheEndIsNotProvisionalOneInTheLastCycleIs() {
+        // the rule stated in the README and the appendix: provisional when the interval reaches the latest period
+        Findings older = analyse(series(27, t -> t >= 144 - 23 ? 13_000 : 10_000));
+        BreakFinding latest = older.breaks().get(older.breaks().size() - 1);
+        assertThat(latest.period()).as(AnalystNotes.of(older)).isBetween(START.plus(144 - 26), START.plus(144 - 20));
+        assertThat(latest.ci95().get(1)).isLessThan(START.plus(143));
+        assertThat(latest.provisional()).isFalse();
+        Findings recent = analyse(series(28, t -> t >= 144 - 10 ? 13_000 : 10_000));
+        assertThat(recent.breaks()).hasSize(1);
+        assertThat(recent.breaks().get(0).provisional()).isTrue();
+        assertThat(recent.breaks().get(0).ci95().get(1)).isEqualTo(START.plus(143));
+    }
+
+    @Test
+    void theProvisionalRuleIsStatedAlikeInTheReadmeAndTheAppendix() throws IOException {
+        String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8).replaceAll("\\s+", " ");
+        assertThat(readme).contains("its 95 % interval reaches the latest period");
+        assertThat(RulesInForce.all()).anySatisfy(r -> assertThat(r.value().replace('\u00A0', ' ')).contains("its 95 % interval reaches the latest period"));
+    }
+
+    @Test
+    void theNileIsStillDatedTo1899AndDescribedAsAStepDown() {
+        // R 4.2.2, strucchange: breakpoints(Nile ~ 1) puts the break after 1898 (nile_breakpoints.json)
+        double[] nile = Reference.dataset("Nile.csv");
+        Series s = Series.builder("Nile", Frequency.ANNUAL).append(Period.year(1871), nile).snapshot();
+        Findings f = analyse(s);
+        assertThat(f.breaks()).hasSize(1);
+        BreakFinding b = f.breaks().get(0);
+        assertThat(b.period()).isEqualTo(Period.year(1899));
+        assertThat(b.kind()).isEqualTo(BreakKind.LEVEL);
+        assertThat(b.changePct()).isNegative();
+        assertThat(AnalystNotes.of(f)).contains("1899", "step in level");
+    }
+
+    @Test
+    void sharesOfTheWayAreWordedByTheNearestFraction() {
+        // common practice (no source): the fractions a reader says aloud
+        assertThat(Terms.shareOfTheWay(0.27)).isEqualTo("about a quarter of the way");
+        assertThat(Terms.shareOfTheWay(0.5)).isEqualTo("about half way");
+        assertThat(Terms.shareOfTheWay(0.7)).isEqualTo("about two thirds of the way");
+        assertThat(Terms.shareOfTheWay(1.0)).isEqualTo("all the way");
+        assertThat(Terms.shareOfTheWay(1.3)).isEqualTo("beyond the level before the step");
+    }
+}
