@@ -142,4 +142,11 @@ public final class DecisionRules {
     public static final int OUTLOOK_REGIME_CYCLES = 2;
     /** … or, for data without a season, at least this many periods (our rule). */
     public static final int OUTLOOK_REGIME_NON_SEASONAL = 8;
+    /**
+     * The outlook calls next year "about the same" as the current one only when the 80 % interval
+     * of the change contains zero and lies within ± this many percent (our rule); otherwise it gives
+     * the change with its interval, so that it never contradicts a trend stated elsewhere with a
+     * bare verb.
+     */
+    public static final double OUTLOOK_SAME_PCT = 2.0;
 }

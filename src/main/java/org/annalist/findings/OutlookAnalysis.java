@@ -22,7 +22,7 @@ import org.annalist.series.Series;
  */
 final class OutlookAnalysis {
 
-    /** Periods beyond the rest of the last observed year, by default. */
+    /** Periods beyond the rest of the last observed year, by default (at least; see {@link #defaultHorizon}). */
     static final int DEFAULT_EXTRA_PERIODS = 12;
 
     private OutlookAnalysis() {
@@ -39,7 +39,7 @@ final class OutlookAnalysis {
             return null;
         }
         int period = series.frequency().seasonalPeriod();
-        int h = horizon.orElse(restOfYear(series.period(last)) + DEFAULT_EXTRA_PERIODS);
+        int h = horizon.orElse(defaultHorizon(series.period(last)));
         int minimumRegime = period > 1 ? DecisionRules.OUTLOOK_REGIME_CYCLES * period
                 : DecisionRules.OUTLOOK_REGIME_NON_SEASONAL;
         List<OutlookCaveat> caveats = new ArrayList<>();
@@ -59,7 +59,7 @@ final class OutlookAnalysis {
         }
         Outlook.Result outlook = result.get();
         if (outlook.backtest().isEmpty()) {
-            caveats.add(new OutlookCaveat.NoBacktest());
+            caveats.add(noBacktest(series, from, y.length, last + 1, period));
         }
         Outlook.Forecast f = outlook.chosen();
         Period lastPeriod = series.period(last);
@@ -90,8 +90,49 @@ final class OutlookAnalysis {
                 .map(s -> new OutlookFinding.Score(method(s.method(), period), s.mase(), s.smape())).toList();
         Double typical = outlook.backtest().isEmpty() ? null
                 : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
+        OutlookYears.Years years = OutlookYears.of(series, last, f, h, measure);
+        boolean tested = !outlook.backtest().isEmpty();
         return new OutlookFinding(method(f.method(), period), model(f.model(), period), h, series.period(from), points,
-                total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats);
+                total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats,
+                years.current(), years.change(), outlook.widened(),
+                tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null);
+    }
+
+    /**
+     * Why there is no back-test: the series is too short, or only the latest regime the outlook is
+     * fitted on is, or the values give no error to scale by.
+     */
+    private static OutlookCaveat.NoBacktest noBacktest(Series series, int from, int fitted, int all, int period) {
+        if (Outlook.backtestPossible(fitted, period)) {
+            return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.NO_SCALE, Optional.empty());
+        }
+        if (from > 0 && Outlook.backtestPossible(all, period)) {
+            return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.REGIME_TOO_SHORT,
+                    Optional.of(series.period(from)));
+        }
+        return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT, Optional.empty());
+    }
+
+    /**
+     * The rest of the last observed year and the whole next year — at least
+     * {@value #DEFAULT_EXTRA_PERIODS} periods beyond the rest of the year (three years of quarters,
+     * a dozen years of annual data); daily data keep those {@value #DEFAULT_EXTRA_PERIODS}.
+     */
+    static int defaultHorizon(Period last) {
+        int rest = restOfYear(last);
+        if (last.frequency().periodsPerYear() > 53) {
+            return rest + DEFAULT_EXTRA_PERIODS;
+        }
+        return rest + Math.max(DEFAULT_EXTRA_PERIODS, periodsIn(last.plus(rest + 1)));
+    }
+
+    /** Periods of the calendar year that begins at {@code first}. */
+    static int periodsIn(Period first) {
+        int k = 0;
+        while (first.plus(k).year() == first.year()) {
+            k++;
+        }
+        return k;
     }
 
     /** The method; the seasonal naive forecast of data without a season ({@code period} ≤ 1) is the naive one. */

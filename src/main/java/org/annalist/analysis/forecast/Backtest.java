@@ -71,6 +71,7 @@ final class Backtest {
         int thetaIndex = Outlook.Method.THETA.ordinal();
         int naiveIndex = Outlook.Method.SEASONAL_NAIVE.ordinal();
         double[] actual = new double[pairs];
+        int[] horizon = new int[pairs];
         double[][] forecasts = new double[methods.length][pairs];
         boolean[] available = new boolean[methods.length];
         Arrays.fill(available, true);
@@ -92,6 +93,7 @@ final class Backtest {
             double[] naive = SeasonalNaive.forecast(before, cycle, h);
             for (int k = 0; k < h; k++) {
                 actual[at + k] = y[o + k];
+                horizon[at + k] = k;
                 forecasts[naiveIndex][at + k] = naive[k];
             }
             if (etsForecast.isPresent()) {
@@ -122,7 +124,7 @@ final class Backtest {
             Accuracy.Result accuracy = Accuracy.scaled(actual, f, scale.getAsDouble());
             boolean withEts = method == Outlook.Method.ETS || method == Outlook.Method.COMBINATION;
             scores.add(new Outlook.Score(method, withEts ? etsModel : Optional.empty(), accuracy.mase(),
-                    accuracy.smape(), medianApe.getAsDouble(), pairs));
+                    accuracy.smape(), medianApe.getAsDouble(), pairs, HorizonErrors.of(actual, f, horizon, cycle)));
         }
         // stable sort: equal MASE keeps the enum order, the tie rule
         scores.sort(Comparator.comparingDouble(Outlook.Score::mase));
