@@ -107,15 +107,36 @@ final class OutlookViews {
         }
         String observed = c.observedPeriods() == 1 ? "in " + f.period(c.observedFrom())
                 : "from " + f.period(c.observedFrom()) + " to " + f.period(c.observedTo());
-        String rest = c.forecastPeriods() == 1 ? "the remaining period" : "the remaining " + c.forecastPeriods()
-                + " periods";
+        Period firstForecast = c.observedTo().plus(1);
+        Period lastForecast = c.observedTo().plus(c.forecastPeriods());
+        String rest = c.forecastPeriods() == 1 ? f.period(firstForecast)
+                : f.period(firstForecast) + " to " + f.period(lastForecast);
         OutlookFinding.Span e = c.estimate();
+        double step = step(e.mean(), e.hi80() - e.lo80());
         String what = c.total() ? "The total for " : "The average for ";
-        String part = c.total() ? f.significant(c.observed()) + unit + " observed " + observed
-                : "an average of " + f.significant(c.observed()) + unit + " observed " + observed;
-        return what + c.year() + " is estimated at " + f.significant(e.mean()) + unit + ": " + part
-                + ", with forecasts for " + rest + " (80\u00A0% interval " + f.significant(e.lo80()) + " to "
-                + f.significant(e.hi80()) + unit + ", from the forecast part alone).";
+        String part = c.total() ? rounded(c.observed(), step, f) + unit + " observed " + observed
+                : "an average of " + rounded(c.observed(), step, f) + unit + " observed " + observed;
+        return what + c.year() + " is estimated at " + rounded(e.mean(), step, f) + unit + ": " + part
+                + ", and forecasts for " + rest + " (80\u00A0% interval " + rounded(e.lo80(), step, f) + " to "
+                + rounded(e.hi80(), step, f) + unit + ", from the forecast part alone).";
+    }
+
+    /**
+     * The rounding step for a value known to within an interval {@code width}: a power of ten at
+     * most a quarter of the width, so that the interval's ends differ in print; never coarser than
+     * three significant digits (common practice, no source).
+     */
+    static double step(double value, double width) {
+        double threeDigits = Math.pow(10, Math.floor(Math.log10(Math.abs(value))) - 2);
+        if (!(width > 0) || value == 0) {
+            return threeDigits;
+        }
+        return Math.min(threeDigits, Math.pow(10, Math.floor(Math.log10(width / 4))));
+    }
+
+    private static String rounded(double v, double step, Formats f) {
+        double r = Math.round(v / step) * step;
+        return step >= 1 ? f.count(Math.round(r)) : f.fixed(r, (int) Math.ceil(-Math.log10(step) - 1e-9));
     }
 
     private static Period lastObserved(Series series) {
