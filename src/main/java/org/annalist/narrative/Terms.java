@@ -131,7 +131,7 @@ final class Terms {
     /** How the outlook's method was chosen. */
     static String choice(OutlookFinding.Choice c) {
         if (!c.backtested()) {
-            return "chosen by AICc among ETS models; the series is too short for a back-test";
+            return "chosen by AICc among ETS models, without a back-test";
         }
         String next = c.nextBest().map(m -> String.format(Locale.ROOT, "; next best %s %.2f", m.code(), c.nextBestMase()))
                 .orElse("");

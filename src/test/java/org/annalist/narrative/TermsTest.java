@@ -27,7 +27,7 @@ class TermsTest {
                 0.6249))).isEqualTo("lowest mean absolute scaled error in a rolling-origin back-test over the last 24"
                 + " periods (0.59; next best combination 0.62)");
         assertThat(Terms.choice(new OutlookFinding.Choice(false, 0, Double.NaN, Optional.empty(), Double.NaN)))
-                .isEqualTo("chosen by AICc among ETS models; the series is too short for a back-test");
+                .isEqualTo("chosen by AICc among ETS models, without a back-test");
     }
 
     @Test
