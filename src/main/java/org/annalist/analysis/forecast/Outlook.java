@@ -190,7 +190,7 @@ public final class Outlook {
             /** The lowest MASE in the rolling-origin back-test. */
             BACKTEST,
             /**
-             * The lowest AICc among ETS models: the series is too short for a back-test, or its
+             * The lowest AICc among ETS models: the values fitted are too few for a back-test, or their
              * values before the first origin give no seasonal naive error to scale by.
              */
             AICC_WITHOUT_BACKTEST
