@@ -95,7 +95,19 @@ final class OutlookAnalysis {
         return new OutlookFinding(method(f.method(), period), model(f.model(), period), h, series.period(from), points,
                 total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats,
                 years.current(), years.change(), outlook.widened(),
-                tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null);
+                tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null,
+                typicalYearError(outlook, period));
+    }
+
+    /** The chosen method's typical error of a year's total in the back-test, in %, or null. */
+    private static Double typicalYearError(Outlook.Result outlook, int period) {
+        if (period < 2) {
+            return null;
+        }
+        return outlook.backtest().stream().filter(s -> s.method() == outlook.chosen().method()).findFirst()
+                .map(s -> s.errors().cycleSums())
+                .filter(c -> c.enough() && !Double.isNaN(c.relativeMedian()))
+                .map(c -> 100 * c.relativeMedian()).orElse(null);
     }
 
     /**

@@ -26,16 +26,19 @@ import org.annalist.series.Period;
  * @param intervalsWidened whether the model's intervals were widened to the back-test's errors
  * @param backtestFrom    the first period the back-test forecast (null without a back-test) …
  * @param backtestTo      … and the last
+ * @param typicalYearErrorPct the median absolute percentage error of the chosen method's sums of
+ *                        one seasonal cycle ahead (a year's total) in the back-test (null without
+ *                        enough of them, or without a season)
  */
 @JsonPropertyOrder({"method", "model", "horizon", "fitted_from", "forecasts", "next_year_total", "next_year_average",
     "backtest", "chosen_because", "typical_error_pct", "current_year", "next_year_change", "intervals_widened",
-    "backtest_from", "backtest_to"})
+    "backtest_from", "backtest_to", "typical_year_error_pct"})
 public record OutlookFinding(OutlookMethod method, Model model, int horizon, Period fittedFrom, List<Point> forecasts,
                              Span nextYearTotal, Span nextYearAverage, List<Score> backtest, Choice chosenBecause,
                              Double typicalErrorPct, @JsonIgnore int nextYear, @JsonIgnore int backtestPeriods,
                              @JsonIgnore List<OutlookCaveat> caveats, CurrentYear currentYear,
                              YearChange nextYearChange, boolean intervalsWidened, Period backtestFrom,
-                             Period backtestTo) {
+                             Period backtestTo, Double typicalYearErrorPct) {
 
     public OutlookFinding {
         forecasts = List.copyOf(forecasts);

@@ -175,16 +175,17 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param backtestRange the periods the back-test forecast, e.g. {@code January 2024 to December 2025}
      * @param widened     the intervals were widened to the back-test's errors
      * @param noBacktest  why the forecasts could not be tested, as a sentence; empty with a back-test
+     * @param typicalYearError the back-test's typical error of a year's total ({@code 1.9 %}); empty without
      */
     public record OutlookView(boolean present, String method, String chosenBecause, String fittedFrom, String horizon,
                               String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean compact,
                               boolean hasYear, boolean total, String nextYear, String yearMean, String yearLow,
                               String yearHigh, String comparison, String currentYear, String typicalError,
-                              String backtestSpan, String backtestRange, boolean widened, String noBacktest,
+                              String typicalYearError, String backtestSpan, String backtestRange, boolean widened, String noBacktest,
                               List<ScoreRow> backtest, List<String> caveats) {
 
         static final OutlookView ABSENT = new OutlookView(false, "", "", "", "", "", "", List.of(), false, false, false,
-                "", "", "", "", "", "", "", "", "", false, "", List.of(), List.of());
+                "", "", "", "", "", "", "", "", "", "", false, "", List.of(), List.of());
 
         public OutlookView {
             rows = List.copyOf(rows);

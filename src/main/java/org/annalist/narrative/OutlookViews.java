@@ -63,6 +63,8 @@ final class OutlookViews {
                 currentYear(o.currentYear(), unit, f),
                 o.typicalErrorPct() == null ? "" : f.fixed(Math.max(o.typicalErrorPct(), 0.1),
                         o.typicalErrorPct() < 10 ? 1 : 0) + "\u00A0%",
+                o.typicalYearErrorPct() == null ? "" : f.fixed(Math.max(o.typicalYearErrorPct(), 0.1),
+                        o.typicalYearErrorPct() < 10 ? 1 : 0) + "\u00A0%",
                 f.count(o.backtestPeriods()), range, o.intervalsWidened(), noBacktest, scores, caveats);
     }
 

@@ -77,8 +77,13 @@ final class Backtest {
         Arrays.fill(available, true);
         available[etsIndex] = ets.isPresent();
         int at = 0;
+        int[] cycleStarts = new int[y.length - firstOrigin];
+        int fullCycles = 0;
         for (int o = firstOrigin; o < y.length; o++) {
             int h = Math.min(cycle, y.length - o);
+            if (h == cycle) {
+                cycleStarts[fullCycles++] = at; // a whole cycle ahead from this origin: its sum is scored too
+            }
             double[] before = Arrays.copyOf(y, o);
             Optional<double[]> etsForecast = Optional.empty();
             if (ets.isPresent()) {
@@ -124,7 +129,8 @@ final class Backtest {
             Accuracy.Result accuracy = Accuracy.scaled(actual, f, scale.getAsDouble());
             boolean withEts = method == Outlook.Method.ETS || method == Outlook.Method.COMBINATION;
             scores.add(new Outlook.Score(method, withEts ? etsModel : Optional.empty(), accuracy.mase(),
-                    accuracy.smape(), medianApe.getAsDouble(), pairs, HorizonErrors.of(actual, f, horizon, cycle)));
+                    accuracy.smape(), medianApe.getAsDouble(), pairs, HorizonErrors.of(actual, f, horizon, cycle,
+                    Arrays.copyOf(cycleStarts, fullCycles))));
         }
         // stable sort: equal MASE keeps the enum order, the tie rule
         scores.sort(Comparator.comparingDouble(Outlook.Score::mase));

@@ -14,6 +14,11 @@ package org.annalist.analysis.forecast;
  * further ahead is not expected to be more accurate: common practice, no source), and beyond the
  * longest horizon tested the last ratio is carried forward, so the model's own growth of uncertainty
  * continues at the widened scale. A model interval never narrows.
+ *
+ * <p>Last, the sum of the first cycle's forecasts (a year's total for monthly data) is checked the
+ * same way against the back-test's errors of such sums ({@link HorizonErrors.CycleSums}): the model's
+ * paths may let the months' errors cancel more than they did on the series' own past; if so, every
+ * step is stretched further by the one factor that makes the sum's interval wide enough.
  */
 final class Widening {
 
@@ -66,7 +71,9 @@ final class Widening {
             factors[j] = own > 0 && wanted > own ? wanted / own : 1;
             carried = factors[j];
         }
+        double extra = cycleSumFactor(mean, lo80, hi80, paths, factors, errors, useRelative, bounds);
         for (int j = 0; j < h; j++) {
+            factors[j] *= extra;
             double c = factors[j];
             if (c == 1) {
                 continue;
@@ -80,5 +87,37 @@ final class Widening {
             }
         }
         return new Widened(new Outlook.Forecast(f.model(), mean, lo80, hi80, lo95, hi95, paths), factors);
+    }
+
+    /**
+     * The further factor, applied to every step, that brings the 80 % interval of the sum of the
+     * first cycle's forecasts (from the paths, already widened step by step) up to the 80 % quantile
+     * of the back-test's errors of such sums — errors that persist from month to month do not
+     * cancel in a year's total; 1 when the sum's interval is wide enough, when the forecast does not
+     * reach a whole cycle, or when fewer than {@value HorizonErrors.CycleSums#ENOUGH} sums were scored.
+     */
+    private static double cycleSumFactor(double[] mean, double[] lo80, double[] hi80, double[][] paths,
+                                         double[] factors, HorizonErrors errors, boolean relative,
+                                         Outlook.Bounds bounds) {
+        int cycle = errors.horizons();
+        HorizonErrors.CycleSums sums = errors.cycleSums();
+        if (cycle < 2 || mean.length < cycle || paths.length == 0 || !sums.enough()) {
+            return 1;
+        }
+        double total = 0;
+        for (int k = 0; k < cycle; k++) {
+            total += mean[k];
+        }
+        double wanted = relative && !Double.isNaN(sums.relative80()) ? sums.relative80() * Math.abs(total)
+                : sums.absolute80();
+        double[] outcomes = new double[paths.length];
+        for (int p = 0; p < paths.length; p++) {
+            for (int k = 0; k < cycle; k++) {
+                outcomes[p] += bounds.clip(mean[k] + factors[k] * (paths[p][k] - mean[k]));
+            }
+        }
+        double[] q = Intervals.quantiles(outcomes, 0.10, 0.90);
+        double own = (q[1] - q[0]) / 2;
+        return own > 0 && wanted > own ? wanted / own : 1;
     }
 }

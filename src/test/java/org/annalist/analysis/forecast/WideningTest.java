@@ -31,7 +31,8 @@ class WideningTest {
                 r.column("hi80"), r.column("lo95"), r.column("hi95"), new double[0][h]);
         double[] planted = new double[12];
         Arrays.fill(planted, 0.075);
-        HorizonErrors errors = new HorizonErrors(new double[12], planted, new int[12]);
+        HorizonErrors errors = new HorizonErrors(new double[12], planted, new int[12],
+                new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
         Widening.Widened w = Widening.apply(f, errors, true, Outlook.Bounds.NON_NEGATIVE);
         assertThat(w.forecast().mean()).containsExactly(mean);
         boolean someWidened = false;
@@ -58,7 +59,7 @@ class WideningTest {
      * On the hold-out training spans of forecast_accuracy_holdout.csv (R datasets): the outlook's
      * forecast keeps the chosen method's own point forecasts, never narrows its intervals, reaches
      * the back-test's 80 % error quantile where it widens, and its year total's interval from the
-     * paths is at least as wide as the unwidened one.
+     * paths is at least as wide as the unwidened one and as the back-test's errors of year totals.
      */
     @ParameterizedTest
     @ValueSource(strings = {"AirPassengers", "co2", "UKgas", "nottem"})
@@ -92,5 +93,11 @@ class WideningTest {
         assertThat(after[0]).isEqualTo(before[0]);
         assertThat(after[2] - after[1]).isGreaterThanOrEqualTo(before[2] - before[1] - 1e-9);
         assertThat(result.widened()).isEqualTo(Arrays.stream(factors).anyMatch(c -> c > 1));
+        // a year's total: its 80 % interval reaches the back-test's errors of such totals
+        HorizonErrors.CycleSums sums = errors.cycleSums();
+        if (sums.enough() && relative) {
+            assertThat((after[2] - after[1]) / 2).as("%s year total", dataset)
+                    .isGreaterThanOrEqualTo(sums.relative80() * after[0] * (1 - 1e-6));
+        }
     }
 }
