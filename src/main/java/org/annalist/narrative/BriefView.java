@@ -176,16 +176,17 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param widened     the intervals were widened to the back-test's errors
      * @param noBacktest  why the forecasts could not be tested, as a sentence; empty with a back-test
      * @param typicalYearError the back-test's typical error of a year's total ({@code 1.9 %}); empty without
+     * @param yearSteadier the year's typical error is smaller than a single period's (errors partly cancelled)
      */
     public record OutlookView(boolean present, String method, String chosenBecause, String fittedFrom, String horizon,
                               String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean compact,
                               boolean hasYear, boolean total, String nextYear, String yearMean, String yearLow,
                               String yearHigh, String comparison, String currentYear, String typicalError,
-                              String typicalYearError, String backtestSpan, String backtestRange, boolean widened, String noBacktest,
+                              String typicalYearError, boolean yearSteadier, String backtestSpan, String backtestRange, boolean widened, String noBacktest,
                               List<ScoreRow> backtest, List<String> caveats) {
 
         static final OutlookView ABSENT = new OutlookView(false, "", "", "", "", "", "", List.of(), false, false, false,
-                "", "", "", "", "", "", "", "", "", "", false, "", List.of(), List.of());
+                "", "", "", "", "", "", "", "", false, "", "", false, "", List.of(), List.of());
 
         public OutlookView {
             rows = List.copyOf(rows);

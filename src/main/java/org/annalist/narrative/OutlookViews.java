@@ -65,6 +65,8 @@ final class OutlookViews {
                         o.typicalErrorPct() < 10 ? 1 : 0) + "\u00A0%",
                 o.typicalYearErrorPct() == null ? "" : f.fixed(Math.max(o.typicalYearErrorPct(), 0.1),
                         o.typicalYearErrorPct() < 10 ? 1 : 0) + "\u00A0%",
+                o.typicalYearErrorPct() != null && o.typicalErrorPct() != null
+                        && o.typicalYearErrorPct() < o.typicalErrorPct(),
                 f.count(o.backtestPeriods()), range, o.intervalsWidened(), noBacktest, scores, caveats);
     }
 
