@@ -96,7 +96,38 @@ final class OutlookAnalysis {
                 total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats,
                 years.current(), years.change(), outlook.widened(),
                 tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null,
-                typicalYearError(outlook, period));
+                typicalYearError(outlook, period), months(lastPeriod, f, h, measure));
+    }
+
+    /** Daily data: every whole calendar month within the horizon, for a table a reader can print. */
+    private static List<OutlookFinding.Month> months(Period last, Outlook.Forecast f, int h,
+                                                     LatestIndicators.Measure measure) {
+        List<OutlookFinding.Month> months = new ArrayList<>();
+        if (last.frequency().periodsPerYear() <= 53) {
+            return months;
+        }
+        boolean total = OutlookYears.summed(measure);
+        int k = 0;
+        while (k < h && last.plus(k + 1).startDate().getMonth() == last.startDate().getMonth()
+                && last.plus(k + 1).year() == last.year()) {
+            k++; // the rest of the current month is printed day by day
+        }
+        while (k < h) {
+            java.time.LocalDate first = last.plus(k + 1).startDate();
+            int end = k;
+            while (end < h && last.plus(end + 1).startDate().getMonth() == first.getMonth()) {
+                end++;
+            }
+            if (end == h && last.plus(end + 1).startDate().getMonth() == first.getMonth()) {
+                break; // the horizon ends inside this month
+            }
+            double[] v = org.annalist.analysis.forecast.YearSums.withLimits(f,
+                    new org.annalist.analysis.forecast.YearSums.Year(0, k, end, total ? 1 : end - k));
+            months.add(new OutlookFinding.Month(Period.month(first.getYear(), first.getMonthValue()), total, v[0], v[2],
+                    v[3], v[1], v[4]));
+            k = end;
+        }
+        return months;
     }
 
     /** The chosen method's typical error of a year's total in the back-test, in %, or null. */

@@ -29,21 +29,24 @@ import org.annalist.series.Period;
  * @param typicalYearErrorPct the median absolute percentage error of the chosen method's sums of
  *                        one seasonal cycle ahead (a year's total) in the back-test (null without
  *                        enough of them, or without a season)
+ * @param months          for daily data, the whole calendar months forecast, each as its total (a
+ *                        flow) or mean with intervals from the paths, for the printed table (empty otherwise)
  */
 @JsonPropertyOrder({"method", "model", "horizon", "fitted_from", "forecasts", "next_year_total", "next_year_average",
     "backtest", "chosen_because", "typical_error_pct", "current_year", "next_year_change", "intervals_widened",
-    "backtest_from", "backtest_to", "typical_year_error_pct"})
+    "backtest_from", "backtest_to", "typical_year_error_pct", "months"})
 public record OutlookFinding(OutlookMethod method, Model model, int horizon, Period fittedFrom, List<Point> forecasts,
                              Span nextYearTotal, Span nextYearAverage, List<Score> backtest, Choice chosenBecause,
                              Double typicalErrorPct, @JsonIgnore int nextYear, @JsonIgnore int backtestPeriods,
                              @JsonIgnore List<OutlookCaveat> caveats, CurrentYear currentYear,
                              YearChange nextYearChange, boolean intervalsWidened, Period backtestFrom,
-                             Period backtestTo, Double typicalYearErrorPct) {
+                             Period backtestTo, Double typicalYearErrorPct, List<Month> months) {
 
     public OutlookFinding {
         forecasts = List.copyOf(forecasts);
         backtest = List.copyOf(backtest);
         caveats = List.copyOf(caveats);
+        months = List.copyOf(months);
     }
 
     /**
@@ -100,6 +103,10 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
      */
     public record YearChange(int year, int againstYear, Double pct, Double pctLo80, Double pctHi80,
                              double difference, double differenceLo80, double differenceHi80, boolean aboutTheSame) {
+    }
+
+    /** A whole calendar month of daily forecasts: its total (a flow) or mean, with 80 and 95 % intervals. */
+    public record Month(Period month, boolean total, double mean, double lo80, double hi80, double lo95, double hi95) {
     }
 
     /** A candidate's back-test errors: MASE (below 1 beats the seasonal naive forecast) and sMAPE in %. */

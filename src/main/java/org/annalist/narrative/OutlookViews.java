@@ -26,8 +26,23 @@ final class OutlookViews {
         }
         Period last = lastObserved(series);
         List<BriefView.ForecastRow> rows = new ArrayList<>();
+        int month = 0;
         for (OutlookFinding.Point p : o.forecasts()) {
-            rows.add(new BriefView.ForecastRow(f.shortPeriod(last.plus(p.index() + 1)), f.significant(p.mean()),
+            Period at = last.plus(p.index() + 1);
+            if (month < o.months().size() && within(at, o.months().get(month).month())) {
+                OutlookFinding.Month m = o.months().get(month);
+                if (at.startDate().equals(firstDayIn(m.month(), last, o.forecasts()))) {
+                    // daily data: a whole month forecast is one row, its total or daily mean
+                    rows.add(new BriefView.ForecastRow(f.shortPeriod(m.month()) + (m.total() ? ", total"
+                            : ", daily mean"), f.significant(m.mean()), f.significant(m.lo80()) + " to "
+                            + f.significant(m.hi80()), f.significant(m.lo95()) + " to " + f.significant(m.hi95())));
+                }
+                if (!within(last.plus(p.index() + 2), m.month())) {
+                    month++;
+                }
+                continue;
+            }
+            rows.add(new BriefView.ForecastRow(f.shortPeriod(at), f.significant(p.mean()),
                     f.significant(p.lo80()) + " to " + f.significant(p.hi80()),
                     f.significant(p.lo95()) + " to " + f.significant(p.hi95())));
         }
@@ -141,6 +156,23 @@ final class OutlookViews {
     private static String rounded(double v, double step, Formats f) {
         double r = Math.round(v / step) * step;
         return step >= 1 ? f.count(Math.round(r)) : f.fixed(r, (int) Math.ceil(-Math.log10(step) - 1e-9));
+    }
+
+    /** Whether a (daily) period falls in a calendar month. */
+    private static boolean within(Period day, Period month) {
+        return day.startDate().getYear() == month.startDate().getYear()
+                && day.startDate().getMonth() == month.startDate().getMonth();
+    }
+
+    /** The first forecast day in {@code month}. */
+    private static java.time.LocalDate firstDayIn(Period month, Period last, List<OutlookFinding.Point> points) {
+        for (OutlookFinding.Point p : points) {
+            Period at = last.plus(p.index() + 1);
+            if (within(at, month)) {
+                return at.startDate();
+            }
+        }
+        return month.startDate();
     }
 
     private static Period lastObserved(Series series) {

@@ -48,6 +48,17 @@ public final class YearSums {
         return new Estimate(outcome(f.mean(), year), q[0], q[1]);
     }
 
+    /** The span's value with its 95 % and 80 % limits: {mean, lo95, lo80, hi80, hi95}. */
+    public static double[] withLimits(Outlook.Forecast f, Year span) {
+        double[][] paths = f.paths();
+        double[] outcomes = new double[paths.length];
+        for (int p = 0; p < paths.length; p++) {
+            outcomes[p] = outcome(paths[p], span);
+        }
+        double[] q = Intervals.quantiles(outcomes, 0.025, 0.10, 0.90, 0.975);
+        return new double[] {outcome(f.mean(), span), q[0], q[1], q[2], q[3]};
+    }
+
     /** The change from {@code base} to {@code next}, path by path (both years from the same path). */
     public static Change change(Outlook.Forecast f, Year base, Year next) {
         double[][] paths = f.paths();
