@@ -118,6 +118,32 @@ class OutlookOnPaperTest {
                 java.util.Optional.of(o.fittedFrom())));
     }
 
+    /**
+     * Daily visitors (invented) to 30 June 2025: the printed table cannot hold 196 days, so each
+     * whole month forecast is one row; a month's total is the sum of its days' forecasts.
+     */
+    @Test
+    void dailyForecastsArePrintedAsWholeMonths() {
+        Random random = new Random(41);
+        java.time.LocalDate start = java.time.LocalDate.of(2024, 4, 1);
+        int n = (int) java.time.temporal.ChronoUnit.DAYS.between(start, java.time.LocalDate.of(2025, 7, 1));
+        double[] x = new double[n];
+        for (int t = 0; t < n; t++) {
+            java.time.LocalDate d = start.plusDays(t);
+            x[t] = Math.round(100 + (d.getDayOfWeek().getValue() >= 6 ? 25 : 0) + 5 * random.nextGaussian());
+        }
+        Series s = Series.builder("visitors", Frequency.DAILY).unit("visitors").append(Period.day(start), x).snapshot();
+        OutlookFinding o = new Analyst().analyse(s).outlook();
+        assertThat(o.months()).extracting(OutlookFinding.Month::month).startsWith(Period.month(2025, 7))
+                .contains(Period.month(2025, 12));
+        OutlookFinding.Month july = o.months().get(0);
+        double days = o.forecasts().subList(0, 31).stream().mapToDouble(OutlookFinding.Point::mean).sum();
+        assertThat(july.total()).isTrue();
+        assertThat(july.mean()).isCloseTo(days, within(1e-6 * days));
+        assertThat(july.lo80()).isLessThan(july.mean());
+        assertThat(july.hi80()).isGreaterThan(july.mean());
+    }
+
     /** Values less noisy for most of the series and noisier in the back-test span: the intervals are widened. */
     @Test
     void intervalsNarrowerThanTheBacktestErrorsAreWidenedAndFlagged() {
