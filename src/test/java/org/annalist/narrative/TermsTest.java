@@ -47,6 +47,18 @@ class TermsTest {
                 .isEqualTo("1 missing value was filled with what trend and season predict before forecasting.");
     }
 
+    /** A 14-year series whose latest regime is short is not called too short itself (issue 14, item 6). */
+    @Test
+    void noBacktestSaysWhetherTheSeriesOrOnlyTheLatestRegimeIsShort() {
+        Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+        String regime = Terms.outlookCaveat(new OutlookCaveat.NoBacktest(
+                OutlookCaveat.NoBacktest.Reason.REGIME_TOO_SHORT, Optional.of(Period.month(2022, 8))), f);
+        assertThat(regime).startsWith("The forecasts use only the values since the structural change in August 2022")
+                .doesNotContain("The series is too short");
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT,
+                Optional.empty()), f)).startsWith("The series is too short to test the forecasts");
+    }
+
     @Test
     void theBreakSearchIsDescribedWithItsSettings() {
         assertThat(Terms.breakMethod(new BreakMethod(BreakMethod.Search.PELT, false, 52))).isEqualTo("PELT, changes in"
