@@ -190,4 +190,12 @@ public final class DecisionRules {
      * the size of a collapse, {@link #COLLAPSE_PCT}, either way).
      */
     public static final double HEADLINE_STEP_PCT = -COLLAPSE_PCT;
+
+    /**
+     * The outlook calls next year "about the same" as the current one only when the 80 % interval
+     * of the change contains zero and lies within ± this many percent (our rule); otherwise it gives
+     * the change with its interval, so that it never contradicts a trend stated elsewhere with a
+     * bare verb.
+     */
+    public static final double OUTLOOK_SAME_PCT = 2.0;
 }

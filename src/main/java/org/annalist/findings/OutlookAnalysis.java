@@ -22,7 +22,7 @@ import org.annalist.series.Series;
  */
 final class OutlookAnalysis {
 
-    /** Periods beyond the rest of the last observed year, by default. */
+    /** Periods beyond the rest of the last observed year, by default (at least; see {@link #defaultHorizon}). */
     static final int DEFAULT_EXTRA_PERIODS = 12;
 
     private OutlookAnalysis() {
@@ -40,7 +40,7 @@ final class OutlookAnalysis {
             return null;
         }
         int period = series.frequency().seasonalPeriod();
-        int h = horizon.orElse(restOfYear(series.period(last)) + DEFAULT_EXTRA_PERIODS);
+        int h = horizon.orElse(defaultHorizon(series.period(last)));
         int minimumRegime = period > 1 ? DecisionRules.OUTLOOK_REGIME_CYCLES * period
                 : DecisionRules.OUTLOOK_REGIME_NON_SEASONAL;
         List<OutlookCaveat> caveats = new ArrayList<>();
@@ -61,7 +61,7 @@ final class OutlookAnalysis {
         }
         Outlook.Result outlook = result.get();
         if (outlook.backtest().isEmpty()) {
-            caveats.add(new OutlookCaveat.NoBacktest());
+            caveats.add(noBacktest(series, from, y.length, last + 1, period));
         }
         Outlook.Forecast f = outlook.chosen();
         Period lastPeriod = series.period(last);
@@ -92,8 +92,92 @@ final class OutlookAnalysis {
                 .map(s -> new OutlookFinding.Score(method(s.method(), period), s.mase(), s.smape())).toList();
         Double typical = outlook.backtest().isEmpty() ? null
                 : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
+        OutlookYears.Years years = OutlookYears.of(series, last, f, h, kind);
+        boolean tested = !outlook.backtest().isEmpty();
         return new OutlookFinding(method(f.method(), period), model(f.model(), period), h, series.period(from), points,
-                total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats);
+                total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats,
+                years.current(), years.change(), outlook.widened(),
+                tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null,
+                typicalYearError(outlook, period), months(lastPeriod, f, h, measure));
+    }
+
+    /** Daily data: every whole calendar month within the horizon, for a table a reader can print. */
+    private static List<OutlookFinding.Month> months(Period last, Outlook.Forecast f, int h,
+                                                     LatestIndicators.Measure measure) {
+        List<OutlookFinding.Month> months = new ArrayList<>();
+        if (last.frequency().periodsPerYear() <= 53) {
+            return months;
+        }
+        boolean total = OutlookYears.summed(measure);
+        int k = 0;
+        while (k < h && last.plus(k + 1).startDate().getMonth() == last.startDate().getMonth()
+                && last.plus(k + 1).year() == last.year()) {
+            k++; // the rest of the current month is printed day by day
+        }
+        while (k < h) {
+            java.time.LocalDate first = last.plus(k + 1).startDate();
+            int end = k;
+            while (end < h && last.plus(end + 1).startDate().getMonth() == first.getMonth()) {
+                end++;
+            }
+            if (end == h && last.plus(end + 1).startDate().getMonth() == first.getMonth()) {
+                break; // the horizon ends inside this month
+            }
+            double[] v = org.annalist.analysis.forecast.YearSums.withLimits(f,
+                    new org.annalist.analysis.forecast.YearSums.Year(0, k, end, total ? 1 : end - k));
+            months.add(new OutlookFinding.Month(Period.month(first.getYear(), first.getMonthValue()), total, v[0], v[2],
+                    v[3], v[1], v[4]));
+            k = end;
+        }
+        return months;
+    }
+
+    /** The chosen method's typical error of a year's total in the back-test, in %, or null. */
+    private static Double typicalYearError(Outlook.Result outlook, int period) {
+        if (period < 2) {
+            return null;
+        }
+        return outlook.backtest().stream().filter(s -> s.method() == outlook.chosen().method()).findFirst()
+                .map(s -> s.errors().cycleSums())
+                .filter(c -> c.enough() && !Double.isNaN(c.relativeMedian()))
+                .map(c -> 100 * c.relativeMedian()).orElse(null);
+    }
+
+    /**
+     * Why there is no back-test: the series is too short, or only the latest regime the outlook is
+     * fitted on is, or the values give no error to scale by.
+     */
+    private static OutlookCaveat.NoBacktest noBacktest(Series series, int from, int fitted, int all, int period) {
+        if (Outlook.backtestPossible(fitted, period)) {
+            return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.NO_SCALE, Optional.empty());
+        }
+        if (from > 0 && Outlook.backtestPossible(all, period)) {
+            return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.REGIME_TOO_SHORT,
+                    Optional.of(series.period(from)));
+        }
+        return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT, Optional.empty());
+    }
+
+    /**
+     * The rest of the last observed year and the whole next year — at least
+     * {@value #DEFAULT_EXTRA_PERIODS} periods beyond the rest of the year (three years of quarters,
+     * a dozen years of annual data); daily data keep those {@value #DEFAULT_EXTRA_PERIODS}.
+     */
+    static int defaultHorizon(Period last) {
+        int rest = restOfYear(last);
+        if (last.frequency().periodsPerYear() > 53) {
+            return rest + DEFAULT_EXTRA_PERIODS;
+        }
+        return rest + Math.max(DEFAULT_EXTRA_PERIODS, periodsIn(last.plus(rest + 1)));
+    }
+
+    /** Periods of the calendar year that begins at {@code first}. */
+    static int periodsIn(Period first) {
+        int k = 0;
+        while (first.plus(k).year() == first.year()) {
+            k++;
+        }
+        return k;
     }
 
     /** The method; the seasonal naive forecast of data without a season ({@code period} ≤ 1) is the naive one. */

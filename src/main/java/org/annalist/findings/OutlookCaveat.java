@@ -13,8 +13,23 @@ public sealed interface OutlookCaveat {
     record BreakTooRecent(Period start) implements OutlookCaveat {
     }
 
-    /** Too short to test the forecasts on the series' own past. */
-    record NoBacktest() implements OutlookCaveat {
+    /**
+     * The forecasts could not be tested on the series' own past.
+     *
+     * @param since the start of the latest regime, when the outlook is fitted on it alone and it is
+     *              that regime, not the series, that is too short (empty otherwise)
+     */
+    record NoBacktest(Reason reason, java.util.Optional<Period> since) implements OutlookCaveat {
+
+        /** Why. */
+        public enum Reason {
+            /** The whole series is too short. */
+            SERIES_TOO_SHORT,
+            /** The series is long enough, but the latest regime the outlook is fitted on is not. */
+            REGIME_TOO_SHORT,
+            /** Long enough, but the values before the back-test give no seasonal naive error to scale by. */
+            NO_SCALE
+        }
     }
 
     /** Missing values were filled with what trend and season predict before forecasting. */

@@ -20,18 +20,33 @@ import org.annalist.series.Period;
  *                        (null without a back-test)
  * @param nextYear        the calendar year the totals cover
  * @param caveats         what limits the outlook, for the brief
+ * @param currentYear     the last observed calendar year as observed plus forecast (null when its
+ *                        observed part has a gap or begins before the series)
+ * @param nextYearChange  the next year against {@code currentYear} (null when either is missing)
+ * @param intervalsWidened whether the model's intervals were widened to the back-test's errors
+ * @param backtestFrom    the first period the back-test forecast (null without a back-test) …
+ * @param backtestTo      … and the last
+ * @param typicalYearErrorPct the median absolute percentage error of the chosen method's sums of
+ *                        one seasonal cycle ahead (a year's total) in the back-test (null without
+ *                        enough of them, or without a season)
+ * @param months          for daily data, the whole calendar months forecast, each as its total (a
+ *                        flow) or mean with intervals from the paths, for the printed table (empty otherwise)
  */
 @JsonPropertyOrder({"method", "model", "horizon", "fitted_from", "forecasts", "next_year_total", "next_year_average",
-    "backtest", "chosen_because", "typical_error_pct"})
+    "backtest", "chosen_because", "typical_error_pct", "current_year", "next_year_change", "intervals_widened",
+    "backtest_from", "backtest_to", "typical_year_error_pct", "months"})
 public record OutlookFinding(OutlookMethod method, Model model, int horizon, Period fittedFrom, List<Point> forecasts,
                              Span nextYearTotal, Span nextYearAverage, List<Score> backtest, Choice chosenBecause,
                              Double typicalErrorPct, @JsonIgnore int nextYear, @JsonIgnore int backtestPeriods,
-                             @JsonIgnore List<OutlookCaveat> caveats) {
+                             @JsonIgnore List<OutlookCaveat> caveats, CurrentYear currentYear,
+                             YearChange nextYearChange, boolean intervalsWidened, Period backtestFrom,
+                             Period backtestTo, Double typicalYearErrorPct, List<Month> months) {
 
     public OutlookFinding {
         forecasts = List.copyOf(forecasts);
         backtest = List.copyOf(backtest);
         caveats = List.copyOf(caveats);
+        months = List.copyOf(months);
     }
 
     /**
@@ -61,6 +76,37 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
 
     /** A sum or mean over several periods with its 80 % interval. */
     public record Span(double mean, double lo80, double hi80) {
+    }
+
+    /**
+     * A calendar year whose first periods are observed and the rest forecast.
+     *
+     * @param total           summed (a flow) rather than averaged (a level or rate)
+     * @param observed        the observed periods' sum (a flow) or mean (otherwise)
+     * @param estimate        the year's total or mean: observed plus forecast, with an 80 % interval
+     *                        from the forecast part alone (equal to the point when the year is observed in full)
+     * @param forecastPeriods periods of the year still forecast (0: the year is observed in full)
+     */
+    public record CurrentYear(int year, boolean total, Period observedFrom, Period observedTo, int observedPeriods,
+                              double observed, int forecastPeriods, Span estimate) {
+    }
+
+    /**
+     * The next calendar year against the current one's estimate, with 80 % intervals from the same
+     * sample paths (both years' forecast parts move together).
+     *
+     * @param pct          the change in % (null when the measure has no meaningful ratio or a
+     *                     year is not positive)
+     * @param difference   the change in the measure's unit
+     * @param aboutTheSame the 80 % interval of the change contains zero and is narrow
+     *                     ({@link DecisionRules#OUTLOOK_SAME_PCT})
+     */
+    public record YearChange(int year, int againstYear, Double pct, Double pctLo80, Double pctHi80,
+                             double difference, double differenceLo80, double differenceHi80, boolean aboutTheSame) {
+    }
+
+    /** A whole calendar month of daily forecasts: its total (a flow) or mean, with 80 and 95 % intervals. */
+    public record Month(Period month, boolean total, double mean, double lo80, double hi80, double lo95, double hi95) {
     }
 
     /** A candidate's back-test errors: MASE (below 1 beats the seasonal naive forecast) and sMAPE in %. */

@@ -131,6 +131,24 @@ public final class AnalystNotes {
                 line(out, "next year", "%d average %s (80%% %s to %s)", o.nextYear(), num(o.nextYearAverage().mean()),
                         num(o.nextYearAverage().lo80()), num(o.nextYearAverage().hi80()));
             }
+            OutlookFinding.CurrentYear c = o.currentYear();
+            if (c != null) {
+                line(out, "current year", "%d %s %s (80%% %s to %s): %d periods observed (%s), %d forecast", c.year(),
+                        c.total() ? "total" : "average", num(c.estimate().mean()), num(c.estimate().lo80()),
+                        num(c.estimate().hi80()), c.observedPeriods(), num(c.observed()), c.forecastPeriods());
+            }
+            OutlookFinding.YearChange change = o.nextYearChange();
+            if (change != null) {
+                line(out, "next year change", change.pct() == null ? "%d on %d: %s (80%% %s to %s)"
+                                : "%d on %d: %s %% (80%% %s to %s)", change.year(), change.againstYear(),
+                        change.pct() == null ? num(change.difference()) : num(change.pct()),
+                        change.pct() == null ? num(change.differenceLo80()) : num(change.pctLo80()),
+                        change.pct() == null ? num(change.differenceHi80()) : num(change.pctHi80()));
+            }
+            if (o.backtestFrom() != null) {
+                line(out, "back-test span", "%s to %s%s", o.backtestFrom(), o.backtestTo(),
+                        o.intervalsWidened() ? "; intervals widened to its errors" : "");
+            }
             for (OutlookFinding.Score score : o.backtest()) {
                 line(out, "back-test", "%s: MASE %.2f, sMAPE %.1f %%", score.method().code(), score.mase(),
                         score.smape());

@@ -53,7 +53,10 @@ final class AppendixViews {
                     + "rolling-origin back-test (Tashman 2000) by MASE (Hyndman & Koehler 2006)",
                     Terms.forecastModel(o.model()) + ", fitted from " + o.fittedFrom() + ", " + o.horizon()
                     + " periods ahead; " + Terms.choice(o.chosenBecause())
-                    + "; intervals analytic or from 2,000 simulated paths"));
+                    + "; intervals analytic or from 2,000 simulated paths"
+                    + (o.intervalsWidened() ? ", widened where narrower than the back-test's errors at the same"
+                    + " horizon (empirical intervals, Williams & Goodman 1971)" : "")
+                    + "; year totals and their intervals from the simulated paths"));
         }
         return rows;
     }

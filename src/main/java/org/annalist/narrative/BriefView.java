@@ -211,14 +211,26 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param typicalError  the back-test's median absolute percentage error, e.g. {@code 4.4 %}; empty without a back-test
      * @param backtestSpan  the periods the back-test's origins covered
      */
+    /**
+     * @param compact     the table is long (more than a year of rows): set it in the compact style
+     * @param comparison  the clause setting next year against the current year's estimate, e.g.
+     *                    {@code , +1.5 % on the estimate for 2026 (…)}; empty without one
+     * @param currentYear the sentence on the current year as observed plus forecast; empty without one
+     * @param backtestRange the periods the back-test forecast, e.g. {@code January 2024 to December 2025}
+     * @param widened     the intervals were widened to the back-test's errors
+     * @param noBacktest  why the forecasts could not be tested, as a sentence; empty with a back-test
+     * @param typicalYearError the back-test's typical error of a year's total ({@code 1.9 %}); empty without
+     * @param yearSteadier the year's typical error is smaller than a single period's (errors partly cancelled)
+     */
     public record OutlookView(boolean present, String method, String chosenBecause, String fittedFrom, String horizon,
-                              String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean more,
+                              String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean compact,
                               boolean hasYear, boolean total, String nextYear, String yearMean, String yearLow,
-                              String yearHigh, String previousYear, String previousValue, String yearChange,
-                              String typicalError, String backtestSpan, List<ScoreRow> backtest, List<String> caveats) {
+                              String yearHigh, String comparison, String currentYear, String typicalError,
+                              String typicalYearError, boolean yearSteadier, String backtestSpan, String backtestRange, boolean widened, String noBacktest,
+                              List<ScoreRow> backtest, List<String> caveats) {
 
         static final OutlookView ABSENT = new OutlookView(false, "", "", "", "", "", "", List.of(), false, false, false,
-                "", "", "", "", "", "", "", "", "", List.of(), List.of());
+                "", "", "", "", "", "", "", "", false, "", "", false, "", List.of(), List.of());
 
         public OutlookView {
             rows = List.copyOf(rows);

@@ -1,20 +1,21 @@
 package org.annalist.narrative;
 
-import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import org.annalist.findings.Measure;
+import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 
 /**
- * The outlook page's view: the next periods rounded to three significant digits (forecasts are not
- * known to five), the next year against the last complete one, and the back-test in words.
+ * The outlook page's view: every forecast period rounded to three significant digits (forecasts are
+ * not known to five), the current year as observed plus forecast, the next year against it, and the
+ * back-test in words. Nothing refers to a file: a reader of the printed brief has only the page.
  */
 final class OutlookViews {
 
-    /** Rows of the forecast table: a year of months; more belong in the findings JSON. */
+    /** Rows of the forecast table in the ordinary style; a longer table is set compact. */
     static final int TABLE_ROWS = 12;
 
     private OutlookViews() {
@@ -27,8 +28,23 @@ final class OutlookViews {
         }
         Period last = lastObserved(series);
         List<BriefView.ForecastRow> rows = new ArrayList<>();
-        for (OutlookFinding.Point p : o.forecasts().subList(0, Math.min(TABLE_ROWS, o.forecasts().size()))) {
-            rows.add(new BriefView.ForecastRow(f.shortPeriod(last.plus(p.index() + 1)), f.significant(p.mean()),
+        int month = 0;
+        for (OutlookFinding.Point p : o.forecasts()) {
+            Period at = last.plus(p.index() + 1);
+            if (month < o.months().size() && within(at, o.months().get(month).month())) {
+                OutlookFinding.Month m = o.months().get(month);
+                if (at.startDate().equals(firstDayIn(m.month(), last, o.forecasts()))) {
+                    // daily data: a whole month forecast is one row, its total or daily mean
+                    rows.add(new BriefView.ForecastRow(f.shortPeriod(m.month()) + (m.total() ? ", total"
+                            : ", daily mean"), f.significant(m.mean()), f.significant(m.lo80()) + " to "
+                            + f.significant(m.hi80()), f.significant(m.lo95()) + " to " + f.significant(m.hi95())));
+                }
+                if (!within(last.plus(p.index() + 2), m.month())) {
+                    month++;
+                }
+                continue;
+            }
+            rows.add(new BriefView.ForecastRow(f.shortPeriod(at), f.significant(p.mean()),
                     f.significant(p.lo80()) + " to " + f.significant(p.hi80()),
                     f.significant(p.lo95()) + " to " + f.significant(p.hi95())));
         }
@@ -39,26 +55,7 @@ final class OutlookViews {
         }
         OutlookFinding.Span year = o.nextYearTotal() != null ? o.nextYearTotal() : o.nextYearAverage();
         boolean total = o.nextYearTotal() != null;
-        String previousYear = "";
-        String previousValue = "";
-        String change = "";
-        if (year != null) {
-            // the latest calendar year observed in full: the current one is usually still running
-            int comparedYear = o.nextYear() - 1;
-            Double previous = completeYear(series, comparedYear, total);
-            if (previous == null) {
-                comparedYear--;
-                previous = completeYear(series, comparedYear, total);
-            }
-            if (previous != null) {
-                previousYear = String.valueOf(comparedYear);
-                previousValue = f.significant(previous);
-                double pct = 100 * (year.mean() / previous - 1);
-                double difference = year.mean() - previous;
-                change = measure.percent() && previous <= 0 ? "" : measure.rounded(difference, pct) ? "unchanged"
-                        : measure.signedChange(difference, pct);
-            }
-        }
+        String unit = series.unit().isBlank() ? "" : "\u00A0" + series.unit();
         OutlookFinding.Model model = o.model();
         String methodName = switch (o.method()) {
             case ETS -> "exponential smoothing, " + model.ets().orElseThrow();
@@ -69,34 +66,116 @@ final class OutlookViews {
             case THETA -> model.seasonallyAdjusted() ? "the Theta method, on seasonally adjusted values"
                     : "the Theta method";
         };
+        String noBacktest = o.caveats().stream().filter(c -> c instanceof OutlookCaveat.NoBacktest)
+                .map(c -> Terms.outlookCaveat(c, f)).findFirst().orElse("");
+        List<String> caveats = o.caveats().stream().filter(c -> !(c instanceof OutlookCaveat.NoBacktest))
+                .map(c -> Terms.outlookCaveat(c, f)).toList();
+        String range = o.backtestFrom() == null ? "" : f.period(o.backtestFrom()) + " to " + f.period(o.backtestTo());
         return new BriefView.OutlookView(true, methodName, Terms.choice(o.chosenBecause()), f.period(o.fittedFrom()),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
-                o.horizon() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
+                rows.size() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
                 year == null ? "" : f.significant(year.mean()), year == null ? "" : f.significant(year.lo80()),
-                year == null ? "" : f.significant(year.hi80()), previousYear, previousValue, change,
+                year == null ? "" : f.significant(year.hi80()),
+                year == null ? "" : comparison(o.nextYearChange(), o.currentYear(), series, f),
+                currentYear(o.currentYear(), unit, f),
                 // a % error of a value on an interval scale depends on where its zero was put
                 o.typicalErrorPct() == null || measure.measure() == Measure.INTERVAL ? "" : f.fixed(Math.max(o.typicalErrorPct(), 0.1),
                         o.typicalErrorPct() < 10 ? 1 : 0) + "\u00A0%",
-                f.count(o.backtestPeriods()), scores, o.caveats().stream().map(c -> Terms.outlookCaveat(c, f)).toList());
+                o.typicalYearErrorPct() == null ? "" : f.fixed(Math.max(o.typicalYearErrorPct(), 0.1),
+                        o.typicalYearErrorPct() < 10 ? 1 : 0) + "\u00A0%",
+                o.typicalYearErrorPct() != null && o.typicalErrorPct() != null
+                        && o.typicalYearErrorPct() < o.typicalErrorPct(),
+                f.count(o.backtestPeriods()), range, o.intervalsWidened(), noBacktest, scores, caveats);
     }
 
-    /** The sum (flow) or mean (level) of a calendar year with every period observed, or null. */
-    private static Double completeYear(Series series, int year, boolean sum) {
-        Period p = Period.containing(series.frequency(), LocalDate.of(year, 1, 1));
-        if (p.year() != year) {
-            p = p.plus(1); // an ISO week holding 1 January may belong to the year before
+    /**
+     * The clause after next year's value: its change on the current year's estimate with the
+     * change's own 80 % interval — "about the same" only under {@link
+     * org.annalist.findings.DecisionRules#OUTLOOK_SAME_PCT}, never a bare verb that could contradict
+     * a trend stated on page 1.
+     */
+    static String comparison(OutlookFinding.YearChange c, OutlookFinding.CurrentYear current, Series series,
+                             Formats f) {
+        if (c == null || current == null) {
+            return "";
         }
-        double total = 0;
-        int count = 0;
-        for (; p.year() == year; p = p.plus(1)) {
-            int i = series.indexOf(p);
-            if (i < 0 || series.isMissing(i)) {
-                return null;
+        String against = current.forecastPeriods() > 0 ? "the estimate for " + c.againstYear()
+                : String.valueOf(c.againstYear());
+        String change;
+        String low;
+        String high;
+        if (c.pct() != null) {
+            change = f.signedPercent(c.pct());
+            low = f.signedPercent(c.pctLo80());
+            high = f.signedPercent(c.pctHi80());
+        } else {
+            String points = series.unit().contains("%") ? "\u00A0percentage points"
+                    : series.unit().isBlank() ? "" : "\u00A0" + series.unit();
+            change = f.signedSignificant(c.difference()) + points;
+            low = f.signedSignificant(c.differenceLo80());
+            high = f.signedSignificant(c.differenceHi80()) + points;
+        }
+        if (c.aboutTheSame()) {
+            return ", about the same as " + against + " (" + change + "; 80\u00A0% interval of the change " + low
+                    + " to " + high + ")";
+        }
+        return ", " + change + " on " + against + " (80\u00A0% interval of the change " + low + " to " + high + ")";
+    }
+
+    /** The current year as observed plus forecast, in a sentence; empty when it is observed in full or unknown. */
+    static String currentYear(OutlookFinding.CurrentYear c, String unit, Formats f) {
+        if (c == null || c.forecastPeriods() == 0) {
+            return "";
+        }
+        String observed = c.observedPeriods() == 1 ? "in " + f.period(c.observedFrom())
+                : "from " + f.period(c.observedFrom()) + " to " + f.period(c.observedTo());
+        Period firstForecast = c.observedTo().plus(1);
+        Period lastForecast = c.observedTo().plus(c.forecastPeriods());
+        String rest = c.forecastPeriods() == 1 ? f.period(firstForecast)
+                : f.period(firstForecast) + " to " + f.period(lastForecast);
+        OutlookFinding.Span e = c.estimate();
+        double step = step(e.mean(), e.hi80() - e.lo80());
+        String what = c.total() ? "The total for " : "The average for ";
+        String part = c.total() ? rounded(c.observed(), step, f) + unit + " observed " + observed
+                : "an average of " + rounded(c.observed(), step, f) + unit + " observed " + observed;
+        return what + c.year() + " is estimated at " + rounded(e.mean(), step, f) + unit + ": " + part
+                + ", and forecasts for " + rest + " (80\u00A0% interval " + rounded(e.lo80(), step, f) + " to "
+                + rounded(e.hi80(), step, f) + unit + ", from the forecast part alone).";
+    }
+
+    /**
+     * The rounding step for a value known to within an interval {@code width}: a power of ten at
+     * most a quarter of the width, so that the interval's ends differ in print; never coarser than
+     * three significant digits (common practice, no source).
+     */
+    static double step(double value, double width) {
+        double threeDigits = Math.pow(10, Math.floor(Math.log10(Math.abs(value))) - 2);
+        if (!(width > 0) || value == 0) {
+            return threeDigits;
+        }
+        return Math.min(threeDigits, Math.pow(10, Math.floor(Math.log10(width / 4))));
+    }
+
+    private static String rounded(double v, double step, Formats f) {
+        double r = Math.round(v / step) * step;
+        return step >= 1 ? f.count(Math.round(r)) : f.fixed(r, (int) Math.ceil(-Math.log10(step) - 1e-9));
+    }
+
+    /** Whether a (daily) period falls in a calendar month. */
+    private static boolean within(Period day, Period month) {
+        return day.startDate().getYear() == month.startDate().getYear()
+                && day.startDate().getMonth() == month.startDate().getMonth();
+    }
+
+    /** The first forecast day in {@code month}. */
+    private static java.time.LocalDate firstDayIn(Period month, Period last, List<OutlookFinding.Point> points) {
+        for (OutlookFinding.Point p : points) {
+            Period at = last.plus(p.index() + 1);
+            if (within(at, month)) {
+                return at.startDate();
             }
-            total += series.value(i);
-            count++;
         }
-        return count == 0 ? null : sum ? total : total / count;
+        return month.startDate();
     }
 
     private static Period lastObserved(Series series) {

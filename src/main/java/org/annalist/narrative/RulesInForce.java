@@ -46,6 +46,8 @@ final class RulesInForce {
                 new Rule("An outlier", "robust score \u2265 " + Terms.number(DecisionRules.OUTLIER_SCORE) + "; runs of "
                         + DecisionRules.OUTLIER_SHIFT_RUN + " or more are shifts; " + DecisionRules.OUTLIER_STRETCH_FLAGS
                         + " or more within two seasonal cycles an unusual stretch"),
+                new Rule("Next year called about the same as this year when", "the 80\u00A0% interval of the change"
+                        + " contains zero and lies within \u00B1" + Terms.number(DecisionRules.OUTLOOK_SAME_PCT) + "\u00A0%"),
                 new Rule("Irregular fluctuation called small / large", "share below "
                         + Terms.number(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + "\u00A0% / above "
                         + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + "\u00A0%"),

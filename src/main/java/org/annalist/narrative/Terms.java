@@ -161,7 +161,7 @@ final class Terms {
     /** How the outlook's method was chosen. */
     static String choice(OutlookFinding.Choice c) {
         if (!c.backtested()) {
-            return "chosen by AICc among ETS models; the series is too short for a back-test";
+            return "chosen by AICc among ETS models, without a back-test";
         }
         String next = c.nextBest().map(m -> String.format(Locale.ROOT, "; next best %s %.2f", m.code(), c.nextBestMase()))
                 .orElse("");
@@ -179,8 +179,16 @@ final class Terms {
             return "The latest structural change, in " + f.period(b.start()) + ", is too recent to fit the outlook on the"
                     + " new level alone: it uses all values, so it may lag behind the new level.";
         }
-        if (caveat instanceof OutlookCaveat.NoBacktest) {
-            return "The series is too short to test the forecasts on its own past, so their accuracy is unknown.";
+        if (caveat instanceof OutlookCaveat.NoBacktest n) {
+            return switch (n.reason()) {
+                case SERIES_TOO_SHORT ->
+                        "The series is too short to test the forecasts on its own past, so their accuracy is unknown.";
+                case REGIME_TOO_SHORT -> "The forecasts use only the values since the structural change in "
+                        + n.since().map(f::period).orElseThrow() + ", too few to test them on; so their accuracy on"
+                        + " this series is unknown, although the series as a whole is long.";
+                case NO_SCALE -> "The forecasts could not be scored on the series' own past (the values before the"
+                        + " test span give no error to compare with), so their accuracy is unknown.";
+            };
         }
         int gaps = ((OutlookCaveat.GapsFilled) caveat).count();
         return gaps + (gaps == 1 ? " missing value was" : " missing values were")

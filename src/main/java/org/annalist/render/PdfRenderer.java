@@ -71,6 +71,7 @@ public final class PdfRenderer {
         builder.usePdfUaAccessibility(true);
         builder.useColorProfile(ICC_Profile.getInstance(ColorSpace.CS_sRGB).getData());
         builder.useObjectDrawerFactory(drawers);
+        builder.useUnicodeLineBreaker(new NumberKeepingLineBreaker());
         Fonts.registerWith(builder);
         ByteArrayOutputStream pdf = new ByteArrayOutputStream(256 * 1024);
         builder.toStream(OutputStream.nullOutputStream());

@@ -59,7 +59,13 @@ class AnalyzeCommandTest {
         assertThat(c.get("easter").get(0).get("date").asText()).isEqualTo("1949-04-17");   // Easter 1949 (Meeus)
         JsonNode o = f.get("outlook");
         assertThat(keys(o)).containsExactly("method", "model", "horizon", "fitted_from", "forecasts", "next_year_total",
-                "next_year_average", "backtest", "chosen_because", "typical_error_pct");
+                "next_year_average", "backtest", "chosen_because", "typical_error_pct", "current_year",
+                "next_year_change", "intervals_widened", "backtest_from", "backtest_to", "typical_year_error_pct", "months");
+        // 1960 is observed in full: it is its own estimate, and 1961 is set against it
+        assertThat(o.get("current_year").get("year").asInt()).isEqualTo(1960);
+        assertThat(o.get("current_year").get("forecast_periods").asInt()).isZero();
+        assertThat(o.get("next_year_change").get("against_year").asInt()).isEqualTo(1960);
+        assertThat(o.get("backtest_to").asText()).isEqualTo("1960-12");
         // the data end in December 1960: the rest of that year is empty, so 12 periods ahead, all of 1961
         assertThat(o.get("horizon").asInt()).isEqualTo(12);
         // fitted on the latest regime: it spans more than two years after the last break

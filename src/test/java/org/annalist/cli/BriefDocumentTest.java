@@ -79,8 +79,18 @@ class BriefDocumentTest {
         OutlookFinding o = totalFindings.outlook();
         assertThat(text).contains("Outlook", "If the pattern of the past continues, the total for " + o.nextYear());
         assertThat(text).contains(String.format(java.util.Locale.ROOT,
-                "In back-tests on this series, forecasts up to one year ahead were typically within \u00B1%.1f %%",
-                o.typicalErrorPct()));
+                "forecasts up to one year ahead were typically within \u00B1%.1f %%", o.typicalErrorPct()));
+        // the back-test names its span; the current year is observed plus forecast; every forecast
+        // period is printed and no file the printed reader lacks is named
+        assertThat(text).contains("In back-tests on this series (forecasts of each period from ");
+        if (o.currentYear() != null && o.currentYear().forecastPeriods() > 0) {
+            assertThat(text).contains("The total for " + o.currentYear().year() + " is estimated at ");
+        }
+        assertThat(text).contains(o.intervalsWidened() ? "widened to match the errors of forecasts" : "Outlook");
+        assertThat(text).doesNotContain("findings file");
+        for (OutlookFinding.Point p : o.forecasts()) {
+            assertThat(text).contains(roundedToThree(p.mean()));
+        }
         assertThat(text).contains(roundedToThree(o.forecasts().get(0).mean()));
         assertThat(text).contains("Forecasts are estimates, not promises");
         assertThat(text).contains(o.method() == OutlookMethod.ETS ? "exponential smoothing" : o.method().code());

@@ -122,7 +122,8 @@ class OutlookAnalysisTest {
         assertThat(o.method()).isEqualTo(OutlookMethod.ETS);
         assertThat(o.model().ets()).hasValueSatisfying(e -> assertThat(e).matches("ETS\\([AM],(N|A|Ad),[NAM]\\)"));
         assertThat(o.chosenBecause().backtested()).isFalse();
-        assertThat(o.caveats()).contains(new OutlookCaveat.NoBacktest());
+        assertThat(o.caveats()).contains(new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT,
+                Optional.empty()));
     }
 
     @Test

@@ -27,7 +27,7 @@ class TermsTest {
                 0.6249))).isEqualTo("lowest mean absolute scaled error in a rolling-origin back-test over the last 24"
                 + " periods (0.59; next best combination 0.62)");
         assertThat(Terms.choice(new OutlookFinding.Choice(false, 0, Double.NaN, Optional.empty(), Double.NaN)))
-                .isEqualTo("chosen by AICc among ETS models; the series is too short for a back-test");
+                .isEqualTo("chosen by AICc among ETS models, without a back-test");
     }
 
     @Test
@@ -45,6 +45,18 @@ class TermsTest {
                 .isEqualTo("The outlook is fitted on the values since the structural change in August 2022 only.");
         assertThat(Terms.outlookCaveat(new OutlookCaveat.GapsFilled(1), f))
                 .isEqualTo("1 missing value was filled with what trend and season predict before forecasting.");
+    }
+
+    /** A 14-year series whose latest regime is short is not called too short itself (issue 14, item 6). */
+    @Test
+    void noBacktestSaysWhetherTheSeriesOrOnlyTheLatestRegimeIsShort() {
+        Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+        String regime = Terms.outlookCaveat(new OutlookCaveat.NoBacktest(
+                OutlookCaveat.NoBacktest.Reason.REGIME_TOO_SHORT, Optional.of(Period.month(2022, 8))), f);
+        assertThat(regime).startsWith("The forecasts use only the values since the structural change in August 2022")
+                .doesNotContain("The series is too short");
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT,
+                Optional.empty()), f)).startsWith("The series is too short to test the forecasts");
     }
 
     @Test

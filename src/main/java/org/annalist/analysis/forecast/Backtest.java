@@ -71,13 +71,19 @@ final class Backtest {
         int thetaIndex = Outlook.Method.THETA.ordinal();
         int naiveIndex = Outlook.Method.SEASONAL_NAIVE.ordinal();
         double[] actual = new double[pairs];
+        int[] horizon = new int[pairs];
         double[][] forecasts = new double[methods.length][pairs];
         boolean[] available = new boolean[methods.length];
         Arrays.fill(available, true);
         available[etsIndex] = ets.isPresent();
         int at = 0;
+        int[] cycleStarts = new int[y.length - firstOrigin];
+        int fullCycles = 0;
         for (int o = firstOrigin; o < y.length; o++) {
             int h = Math.min(cycle, y.length - o);
+            if (h == cycle) {
+                cycleStarts[fullCycles++] = at; // a whole cycle ahead from this origin: its sum is scored too
+            }
             double[] before = Arrays.copyOf(y, o);
             Optional<double[]> etsForecast = Optional.empty();
             if (ets.isPresent()) {
@@ -92,6 +98,7 @@ final class Backtest {
             double[] naive = SeasonalNaive.forecast(before, cycle, h);
             for (int k = 0; k < h; k++) {
                 actual[at + k] = y[o + k];
+                horizon[at + k] = k;
                 forecasts[naiveIndex][at + k] = naive[k];
             }
             if (etsForecast.isPresent()) {
@@ -122,7 +129,8 @@ final class Backtest {
             Accuracy.Result accuracy = Accuracy.scaled(actual, f, scale.getAsDouble());
             boolean withEts = method == Outlook.Method.ETS || method == Outlook.Method.COMBINATION;
             scores.add(new Outlook.Score(method, withEts ? etsModel : Optional.empty(), accuracy.mase(),
-                    accuracy.smape(), medianApe.getAsDouble(), pairs));
+                    accuracy.smape(), medianApe.getAsDouble(), pairs, HorizonErrors.of(actual, f, horizon, cycle,
+                    Arrays.copyOf(cycleStarts, fullCycles))));
         }
         // stable sort: equal MASE keeps the enum order, the tie rule
         scores.sort(Comparator.comparingDouble(Outlook.Score::mase));

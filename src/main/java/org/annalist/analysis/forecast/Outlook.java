@@ -1,5 +1,6 @@
 package org.annalist.analysis.forecast;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 
@@ -26,8 +27,9 @@ import java.util.Optional;
  * ({@link Shocks}); the combination's paths are the members' paths averaged under common shocks
  * (every member's path driven by the same standard normal draws), so its intervals keep the
  * members' correlation instead of the false comfort of averaging independent errors. Sums over
- * several periods (the next year's total) come from the paths. Everything is clipped to the
- * measure's bounds.
+ * several periods (the next year's total) come from the paths ({@link YearSums}). Where the chosen
+ * model's intervals are narrower than the errors its method made in the back-test, they and the
+ * paths are widened to those errors ({@link Widening}). Everything is clipped to the measure's bounds.
  *
  * <p>The result is evidence, not wording: the method, the model it fitted and the account of the
  * choice are typed values; the findings type them as statements and the narrative words them.
@@ -166,9 +168,11 @@ public final class Outlook {
      * @param ets                        the ETS model the back-test kept (for ETS and the
      *                                   combination; chosen by AICc at the first origin), empty otherwise
      * @param medianAbsolutePercentError the median of 100 |y − f| / |y| over all its back-test forecasts
+     * @param errors                     its back-test errors by horizon, for the empirical widening of
+     *                                   the intervals ({@link Widening})
      */
     public record Score(Method method, Optional<EtsModel> ets, double mase, double smape,
-                        double medianAbsolutePercentError, int forecasts) {
+                        double medianAbsolutePercentError, int forecasts, HorizonErrors errors) {
     }
 
     /**
@@ -186,7 +190,7 @@ public final class Outlook {
             /** The lowest MASE in the rolling-origin back-test. */
             BACKTEST,
             /**
-             * The lowest AICc among ETS models: the series is too short for a back-test, or its
+             * The lowest AICc among ETS models: the values fitted are too few for a back-test, or their
              * values before the first origin give no seasonal naive error to scale by.
              */
             AICC_WITHOUT_BACKTEST
@@ -196,11 +200,30 @@ public final class Outlook {
     /**
      * @param backtest every candidate's score, best first (empty when the series is too short)
      * @param origins  back-test origins used; {@code cycle} the longest horizon scored
+     * @param widening per step, the factor by which the chosen model's intervals were widened to the
+     *                 back-test's errors ({@link Widening}; 1 where they were wide enough, all 1
+     *                 without a back-test)
      */
-    public record Result(Forecast chosen, List<Score> backtest, int origins, int cycle) {
+    public record Result(Forecast chosen, List<Score> backtest, int origins, int cycle, double[] widening) {
 
         public Result {
             backtest = List.copyOf(backtest);
+            widening = widening.clone();
+        }
+
+        @Override
+        public double[] widening() {
+            return widening.clone();
+        }
+
+        /** Whether any step's intervals were widened to the back-test's errors. */
+        public boolean widened() {
+            for (double w : widening) {
+                if (w > 1) {
+                    return true;
+                }
+            }
+            return false;
         }
 
         /** The account of the choice, from the back-test's scores. */
@@ -236,6 +259,28 @@ public final class Outlook {
         if (chosen.isEmpty() && method != Method.ETS && method != Method.SEASONAL_NAIVE) {
             chosen = CandidateForecasts.forecast(Method.SEASONAL_NAIVE, y, period, horizon, bounds);
         }
-        return chosen.map(f -> new Result(f, scores, scores.isEmpty() ? 0 : origins, cycle));
+        if (chosen.isEmpty()) {
+            return Optional.empty();
+        }
+        Forecast forecast = chosen.get();
+        double[] widening = new double[horizon];
+        Arrays.fill(widening, 1);
+        Method chosenMethod = forecast.method();
+        Optional<Score> own = scores.stream().filter(s -> s.method() == chosenMethod).findFirst();
+        if (own.isPresent()) {
+            boolean positive = bounds.lower() >= 0 && Arrays.stream(y).allMatch(v -> v > 0);
+            Widening.Widened w = Widening.apply(forecast, own.get().errors(), positive, bounds);
+            forecast = w.forecast();
+            widening = w.factors();
+        }
+        return Optional.of(new Result(forecast, scores, scores.isEmpty() ? 0 : origins, cycle, widening));
+    }
+
+    /**
+     * Whether {@code n} values of a series with this seasonal period are enough for the back-test
+     * (its origins and the training span before them), whatever their values.
+     */
+    public static boolean backtestPossible(int n, int period) {
+        return n >= MIN_VALUES && Backtest.isLongEnough(Backtest.origins(n, period), period);
     }
 }

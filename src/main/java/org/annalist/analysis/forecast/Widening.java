@@ -1,0 +1,123 @@
+package org.annalist.analysis.forecast;
+
+/**
+ * Intervals no narrower than the back-test supports: where the chosen model's 80 % interval at a
+ * step ahead is narrower than the 80 % quantile of the errors its method made at that horizon in
+ * the back-test ({@link HorizonErrors}, the empirical prediction intervals of Williams &amp; Goodman
+ * 1971; Hyndman &amp; Athanasopoulos 2021, §5.5 — both from memory), the step's interval and sample
+ * paths are stretched about the point forecast by the ratio of the two half-widths. The 95 %
+ * interval is stretched by the same ratio, and so are the paths, so that sums over several periods
+ * (a year's total) stay consistent with the monthly intervals.
+ *
+ * <p>Relative errors |y − f| / f are used for a positive series (errors grow with the level),
+ * absolute ones otherwise. The empirical quantiles are made non-decreasing in the horizon (a forecast
+ * further ahead is not expected to be more accurate: common practice, no source), and beyond the
+ * longest horizon tested the last ratio is carried forward, so the model's own growth of uncertainty
+ * continues at the widened scale. A model interval never narrows.
+ *
+ * <p>Last, the sum of the first cycle's forecasts (a year's total for monthly data) is checked the
+ * same way against the back-test's errors of such sums ({@link HorizonErrors.CycleSums}): the model's
+ * paths may let the months' errors cancel more than they did on the series' own past; if so, every
+ * step is stretched further by the one factor that makes the sum's interval wide enough.
+ */
+final class Widening {
+
+    /** The forecast with its intervals widened, and the factor applied at each step (1: unchanged). */
+    record Widened(Outlook.Forecast forecast, double[] factors) {
+
+        Widened {
+            factors = factors.clone();
+        }
+
+        @Override
+        public double[] factors() {
+            return factors.clone();
+        }
+    }
+
+    private Widening() {
+    }
+
+    /** @param relative whether the series is positive, so that relative errors apply */
+    static Widened apply(Outlook.Forecast f, HorizonErrors errors, boolean relative, Outlook.Bounds bounds) {
+        double[] mean = f.mean();
+        double[] lo80 = f.lo80();
+        double[] hi80 = f.hi80();
+        double[] lo95 = f.lo95();
+        double[] hi95 = f.hi95();
+        double[][] paths = f.paths();
+        int h = mean.length;
+        double[] empirical = relative ? errors.relative80() : errors.absolute80();
+        boolean useRelative = relative;
+        for (double e : empirical) {
+            useRelative &= !Double.isNaN(e);
+        }
+        if (relative && !useRelative) {
+            empirical = errors.absolute80();
+        }
+        for (int k = 1; k < empirical.length; k++) {
+            empirical[k] = Math.max(empirical[k], empirical[k - 1]);
+        }
+        double[] factors = new double[h];
+        double carried = 1;
+        for (int j = 0; j < h; j++) {
+            if (j >= empirical.length) {
+                factors[j] = carried;
+                continue;
+            }
+            double wanted = useRelative ? empirical[j] * Math.abs(mean[j]) : empirical[j];
+            boolean clippedBelow = lo80[j] <= bounds.lower();
+            double own = clippedBelow ? hi80[j] - mean[j] : (hi80[j] - lo80[j]) / 2;
+            factors[j] = own > 0 && wanted > own ? wanted / own : 1;
+            carried = factors[j];
+        }
+        double extra = cycleSumFactor(mean, lo80, hi80, paths, factors, errors, useRelative, bounds);
+        for (int j = 0; j < h; j++) {
+            factors[j] *= extra;
+            double c = factors[j];
+            if (c == 1) {
+                continue;
+            }
+            lo80[j] = bounds.clip(mean[j] - c * (mean[j] - lo80[j]));
+            hi80[j] = bounds.clip(mean[j] + c * (hi80[j] - mean[j]));
+            lo95[j] = bounds.clip(mean[j] - c * (mean[j] - lo95[j]));
+            hi95[j] = bounds.clip(mean[j] + c * (hi95[j] - mean[j]));
+            for (double[] path : paths) {
+                path[j] = bounds.clip(mean[j] + c * (path[j] - mean[j]));
+            }
+        }
+        return new Widened(new Outlook.Forecast(f.model(), mean, lo80, hi80, lo95, hi95, paths), factors);
+    }
+
+    /**
+     * The further factor, applied to every step, that brings the 80 % interval of the sum of the
+     * first cycle's forecasts (from the paths, already widened step by step) up to the 80 % quantile
+     * of the back-test's errors of such sums — errors that persist from month to month do not
+     * cancel in a year's total; 1 when the sum's interval is wide enough, when the forecast does not
+     * reach a whole cycle, or when fewer than {@value HorizonErrors.CycleSums#ENOUGH} sums were scored.
+     */
+    private static double cycleSumFactor(double[] mean, double[] lo80, double[] hi80, double[][] paths,
+                                         double[] factors, HorizonErrors errors, boolean relative,
+                                         Outlook.Bounds bounds) {
+        int cycle = errors.horizons();
+        HorizonErrors.CycleSums sums = errors.cycleSums();
+        if (cycle < 2 || mean.length < cycle || paths.length == 0 || !sums.enough()) {
+            return 1;
+        }
+        double total = 0;
+        for (int k = 0; k < cycle; k++) {
+            total += mean[k];
+        }
+        double wanted = relative && !Double.isNaN(sums.relative80()) ? sums.relative80() * Math.abs(total)
+                : sums.absolute80();
+        double[] outcomes = new double[paths.length];
+        for (int p = 0; p < paths.length; p++) {
+            for (int k = 0; k < cycle; k++) {
+                outcomes[p] += bounds.clip(mean[k] + factors[k] * (paths[p][k] - mean[k]));
+            }
+        }
+        double[] q = Intervals.quantiles(outcomes, 0.10, 0.90);
+        double own = (q[1] - q[0]) / 2;
+        return own > 0 && wanted > own ? wanted / own : 1;
+    }
+}

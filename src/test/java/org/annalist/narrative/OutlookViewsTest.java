@@ -1,0 +1,95 @@
+package org.annalist.narrative;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Random;
+import org.annalist.findings.Analyst;
+import org.annalist.findings.Findings;
+import org.annalist.findings.OutlookFinding;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+import org.junit.jupiter.api.Test;
+
+/** The outlook page in words and rows, as a reader of the printed brief sees it (invented series). */
+class OutlookViewsTest {
+
+    /** 70 months from January 2012: data to October 2017. */
+    private static Series cutInOctober() {
+        Random random = new Random(21);
+        double[] x = new double[70];
+        for (int t = 0; t < x.length; t++) {
+            x[t] = Math.round(1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) * (1 + 0.03 * random.nextGaussian()));
+        }
+        return Series.builder("nights", Frequency.MONTHLY).unit("nights").append(Period.month(2012, 1), x).snapshot();
+    }
+
+    @Test
+    void theTableListsEveryPeriodToDecemberOfNextYear() {
+        Series s = cutInOctober();
+        Findings findings = new Analyst().analyse(s);
+        Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
+        BriefView.OutlookView v = OutlookViews.of(s, findings.outlook(), f, MeasureWords.of(s, findings, f));
+        assertThat(v.rows()).hasSize(14);
+        assertThat(v.rows().get(0).period()).isEqualTo("Nov 2017");
+        assertThat(v.rows().get(13).period()).isEqualTo("Dec 2018");
+        assertThat(v.compact()).isTrue();
+    }
+
+    /** Next year against the current year's estimate, with the change's interval; the current year in a sentence. */
+    @Test
+    void nextYearIsSetAgainstTheCurrentYearsEstimateWithItsInterval() {
+        Series s = cutInOctober();
+        Findings findings = new Analyst().analyse(s);
+        Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
+        BriefView.OutlookView v = OutlookViews.of(s, findings.outlook(), f, MeasureWords.of(s, findings, f));
+        assertThat(v.comparison()).contains("the estimate for 2017 (", "80\u00A0% interval of the change ");
+        assertThat(v.comparison()).doesNotContain("2016", "unchanged");
+        assertThat(v.currentYear()).startsWith("The total for 2017 is estimated at ")
+                .contains("observed from January 2017 to October 2017", "forecasts for November 2017 to December 2017");
+    }
+
+    /**
+     * "About the same" only under the rule (DecisionRules.OUTLOOK_SAME_PCT); otherwise the signed
+     * change with its interval, never a bare verb (invented numbers).
+     */
+    @Test
+    void aSmallChangeWithAWideIntervalIsGivenAsANumberNotAVerb() {
+        Series s = cutInOctober();
+        Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
+        OutlookFinding.CurrentYear current = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
+                Period.month(2026, 10), 10, 1_000_000, 2, new OutlookFinding.Span(1_200_000, 1_190_000, 1_210_000));
+        OutlookFinding.YearChange wide = new OutlookFinding.YearChange(2027, 2026, 0.02, -3.1, 4.4, 240, -37_000, 53_000,
+                false);
+        assertThat(OutlookViews.comparison(wide, current, s, f))
+                .isEqualTo(", 0.0\u00A0% on the estimate for 2026 (80\u00A0% interval of the change \u22123.1\u00A0% to"
+                        + " +4.4\u00A0%)");
+        OutlookFinding.YearChange narrow = new OutlookFinding.YearChange(2027, 2026, 0.4, -1.2, 1.9, 4_800, -14_000,
+                23_000, true);
+        assertThat(OutlookViews.comparison(narrow, current, s, f)).startsWith(", about the same as the estimate for 2026 (+0.4");
+    }
+
+    /** The current year's total is printed to the digit at which its interval shows (invented numbers). */
+    @Test
+    void theCurrentYearIsPrintedPreciselyEnoughForItsIntervalToShow() {
+        Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+        OutlookFinding.CurrentYear c = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
+                Period.month(2026, 10), 10, 1_347_512, 2, new OutlookFinding.Span(1_553_421, 1_546_870, 1_560_240));
+        assertThat(OutlookViews.currentYear(c, "\u00A0nights", f)).contains("1,553,000\u00A0nights",
+                "1,547,000 to 1,560,000\u00A0nights", "1,348,000\u00A0nights observed");
+    }
+
+    /** A printed reader has no findings file: the outlook page refers to none. */
+    @Test
+    void theOutlookPageRefersToNoFile() throws IOException {
+        for (String template : new String[] {"brief.ftlx", "multi.ftlx"}) {
+            String text = Files.readString(Path.of("report-templates", template), StandardCharsets.UTF_8);
+            assertThat(text).as(template).doesNotContain("findings file");
+        }
+    }
+}
