@@ -18,8 +18,10 @@ import org.annalist.series.Series;
 /**
  * Runs the analysis on a series and turns the results into findings. The order is the order of
  * dependence: additive or multiplicative → STL decomposition (on logs when multiplicative) →
- * seasonal pattern → outlier candidates on the remainder → structural breaks on the seasonally
- * adjusted values with those screened out → outliers a break does not explain → trend on the
+ * seasonal pattern → calendar effects on the remainder (robust; the significant ones are taken out
+ * of the remainder and the adjusted values) → outlier candidates on that remainder → structural
+ * breaks on the seasonally and calendar adjusted values with those screened out → outliers a break
+ * does not explain → trend on the
  * seasonally adjusted values (and within the latest regime) → cycle on yearly means → irregular
  * share → smoothing → outlook (on the latest regime when it is long enough).
  */
@@ -92,18 +94,34 @@ public final class Analyst {
         for (int t = 0; t < y.length; t++) {
             remainder[t] = y[t] - expected[t];
         }
-        double[] scored = RemainderOutliers.scaled(remainder, expected, x, log);
+        // calendar first: Easter, holidays and weekdays estimated robustly on the remainder, and the
+        // significant ones taken out before one-offs and breaks are looked for
+        CalendarAnalysis.Fit calendar = CalendarAnalysis.fit(series, stl.isPresent() ? remainder : null, holidays);
+        double[] expectedWithCalendar = new double[y.length];
+        double[] calendarFree = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            expectedWithCalendar[t] = expected[t] + calendar.part(t);
+            calendarFree[t] = y[t] - expectedWithCalendar[t];
+        }
+        double[] scored = RemainderOutliers.scaled(calendarFree, expectedWithCalendar, x, log);
         List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(scored, period);
         notes.addAll(OutlierAnalysis.stretchNotes(series, scored, period));
         List<RemainderOutliers.Outlier> screenedOut = OutlierAnalysis.screened(scored);
         double[] screened = workingAdjusted.clone();
-        double[] withoutOneOff = seasonal ? stl.orElseThrow().trend() : expected;
-        for (RemainderOutliers.Outlier o : screenedOut) {
-            // the value the period would have had without its one-off deviation
-            screened[o.index()] = withoutOneOff[o.index()];
+        for (int t = 0; t < y.length; t++) {
+            screened[t] -= calendar.part(t);
+        }
+        // a one-off's value in the break search: the mean of its nearest unscreened neighbours, which
+        // (unlike the smoothed trend, which lags behind a jump or a kink) does not blur a step nearby
+        Set<Integer> out = new java.util.HashSet<>();
+        screenedOut.forEach(o -> out.add(o.index()));
+        double[] beforeScreening = screened.clone();
+        for (int i : out) {
+            screened[i] = neighbours(beforeScreening, out, i);
         }
         BreakAnalysis.Result breaks = BreakAnalysis.of(series, screened, log, notes);
-        List<OutlierFinding> outliers = OutlierAnalysis.of(series, candidates, expected, log, breaks.breaks());
+        List<OutlierFinding> outliers = OutlierAnalysis.of(series, candidates, expectedWithCalendar, log, breaks.breaks(),
+                calendar);
         breaks.breaks().stream().filter(BreakFinding::provisional)
                 .forEach(b -> notes.add(new Caveat.ProvisionalBreak(series.period(b.index()))));
 
@@ -113,19 +131,12 @@ public final class Analyst {
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
                 : LatestIndicators.at(series, series.size() - 1, kind,
                 decomposition.map(Decomposition::adjusted).orElse(null), parts);
-        double[] calendarIrregular = stl.map(fit -> {
-            double[] irregular = fit.remainder();
-            for (RemainderOutliers.Outlier o : screenedOut) {
-                irregular[o.index()] = Double.NaN;   // one-offs would pull the calendar estimates
-            }
-            return irregular;
-        }).orElse(null);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), kind, horizon);
         return new Findings(SeriesFacts.of(series), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendarIrregular, log, latest, holidays),
+                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendar, log, latest, holidays),
                 outlook, recent(series), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
 
@@ -195,6 +206,21 @@ public final class Analyst {
                     series.flags(i), earlier < 0 ? Set.of() : series.flags(earlier)));
         }
         return recent;
+    }
+
+    /** The mean of the nearest values on either side of {@code i} that are present and not in {@code out}. */
+    private static double neighbours(double[] v, Set<Integer> out, int i) {
+        int a = i - 1;
+        while (a >= 0 && (out.contains(a) || Double.isNaN(v[a]))) {
+            a--;
+        }
+        int b = i + 1;
+        while (b < v.length && (out.contains(b) || Double.isNaN(v[b]))) {
+            b++;
+        }
+        double left = a >= 0 ? v[a] : Double.NaN;
+        double right = b < v.length ? v[b] : Double.NaN;
+        return Double.isNaN(left) ? right : Double.isNaN(right) ? left : (left + right) / 2;
     }
 
     static double meanOf(double[] x) {

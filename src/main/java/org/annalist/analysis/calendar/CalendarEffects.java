@@ -139,6 +139,16 @@ public final class CalendarEffects {
             return 0;
         }
 
+        /** The named effect's centred regressor at position {@code t} (NaN for an effect not estimated). */
+        public double regressor(String name, int t) {
+            for (int j = 0; j < effects.size(); j++) {
+                if (effects.get(j).name().equals(name)) {
+                    return regressors[t][j];
+                }
+            }
+            return Double.NaN;
+        }
+
         private static double[][] copy(double[][] x) {
             double[][] c = new double[x.length][];
             for (int i = 0; i < x.length; i++) {
