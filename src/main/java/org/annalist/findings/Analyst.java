@@ -104,20 +104,18 @@ public final class Analyst {
             calendarFree[t] = y[t] - expectedWithCalendar[t];
         }
         double[] scored = RemainderOutliers.scaled(calendarFree, expectedWithCalendar, x, log);
-        List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(scored, period);
-        notes.addAll(OutlierAnalysis.stretchNotes(series, scored, period));
-        List<RemainderOutliers.Outlier> screenedOut = OutlierAnalysis.screened(scored);
+        double spread = OutlierAnalysis.spreadRatio(scored, RemainderOutliers.scaled(remainder, expected, x, log));
+        List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(scored, period, spread);
+        notes.addAll(OutlierAnalysis.stretchNotes(series, scored, period, spread));
+        List<RemainderOutliers.Outlier> screenedOut = OutlierAnalysis.screened(scored, spread);
         double[] screened = workingAdjusted.clone();
         for (int t = 0; t < y.length; t++) {
             screened[t] -= calendar.part(t);
         }
-        // a one-off's value in the break search: the mean of its nearest unscreened neighbours, which
-        // (unlike the smoothed trend, which lags behind a jump or a kink) does not blur a step nearby
-        Set<Integer> out = new java.util.HashSet<>();
-        screenedOut.forEach(o -> out.add(o.index()));
-        double[] beforeScreening = screened.clone();
-        for (int i : out) {
-            screened[i] = neighbours(beforeScreening, out, i);
+        double[] withoutOneOff = seasonal ? stl.orElseThrow().trend() : expected;
+        for (RemainderOutliers.Outlier o : screenedOut) {
+            // the value the period would have had without its one-off deviation
+            screened[o.index()] = withoutOneOff[o.index()];
         }
         BreakAnalysis.Result breaks = BreakAnalysis.of(series, screened, log, notes);
         List<OutlierFinding> outliers = OutlierAnalysis.of(series, candidates, expectedWithCalendar, log, breaks.breaks(),
@@ -206,21 +204,6 @@ public final class Analyst {
                     series.flags(i), earlier < 0 ? Set.of() : series.flags(earlier)));
         }
         return recent;
-    }
-
-    /** The mean of the nearest values on either side of {@code i} that are present and not in {@code out}. */
-    private static double neighbours(double[] v, Set<Integer> out, int i) {
-        int a = i - 1;
-        while (a >= 0 && (out.contains(a) || Double.isNaN(v[a]))) {
-            a--;
-        }
-        int b = i + 1;
-        while (b < v.length && (out.contains(b) || Double.isNaN(v[b]))) {
-            b++;
-        }
-        double left = a >= 0 ? v[a] : Double.NaN;
-        double right = b < v.length ? v[b] : Double.NaN;
-        return Double.isNaN(left) ? right : Double.isNaN(right) ? left : (left + right) / 2;
     }
 
     static double meanOf(double[] x) {

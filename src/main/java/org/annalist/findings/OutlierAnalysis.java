@@ -2,6 +2,7 @@ package org.annalist.findings;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.annalist.analysis.OrderStatistics;
 import org.annalist.analysis.anomaly.RemainderOutliers;
 import org.annalist.series.Series;
 
@@ -19,44 +20,45 @@ final class OutlierAnalysis {
     }
 
     /** Candidates before the break search. */
-    static List<RemainderOutliers.Outlier> candidates(double[] remainder, int period) {
-        return RemainderOutliers.find(remainder, DecisionRules.OUTLIER_SCORE, period);
+    static List<RemainderOutliers.Outlier> candidates(double[] remainder, int period, double spreadRatio) {
+        return RemainderOutliers.find(remainder, DecisionRules.OUTLIER_SCORE * spreadRatio, period).stream()
+                .map(o -> new RemainderOutliers.Outlier(o.index(), o.score() / spreadRatio)).toList();
+    }
+
+    /** Values kept out of the break search: the candidates and the values of unusual stretches. */
+    static List<RemainderOutliers.Outlier> screened(double[] remainder, double spreadRatio) {
+        return RemainderOutliers.flagged(remainder, DecisionRules.OUTLIER_SCORE * spreadRatio);
     }
 
     /**
-     * Values kept out of the break search: the candidates and the values of unusual stretches, but
-     * not those just before a shift (a run of {@link DecisionRules#OUTLIER_SHIFT_RUN} or more
-     * same-signed flags): there the smoother lags behind the jump, the flags are the jump's own, and
-     * putting another value in their place would blur the very step the search looks for (the
-     * window of {@link DecisionRules#OUTLIER_QUIET_BEFORE_BREAK}; our rule).
+     * How much wider the remainder's spread (MAD) is with the calendar left in than without it, at
+     * least 1. Robust scores of the calendar-free remainder are divided by it, so that they are on
+     * the scale at which {@link DecisionRules#OUTLIER_SCORE} was set (the injection study scored
+     * remainders with the calendar in them): taking the calendar out can then explain a flag away,
+     * but cannot make new ones by narrowing the scale (our rule).
      */
-    static List<RemainderOutliers.Outlier> screened(double[] remainder) {
-        double[] z = RemainderOutliers.scores(remainder);
-        List<Integer> shiftStarts = new ArrayList<>();
-        int t = 0;
-        while (t < z.length) {
-            int end = t;
-            while (flag(z, t) && end + 1 < z.length && flag(z, end + 1) && Math.signum(z[end + 1]) == Math.signum(z[t])) {
-                end++;
-            }
-            if (end - t + 1 >= DecisionRules.OUTLIER_SHIFT_RUN) {
-                shiftStarts.add(t);
-            }
-            t = end + 1;
-        }
-        return RemainderOutliers.flagged(remainder, DecisionRules.OUTLIER_SCORE).stream()
-                .filter(o -> shiftStarts.stream().noneMatch(s -> o.index() < s
-                        && o.index() >= s - DecisionRules.OUTLIER_QUIET_BEFORE_BREAK))
-                .toList();
+    static double spreadRatio(double[] calendarFree, double[] withCalendar) {
+        double free = mad(calendarFree);
+        double with = mad(withCalendar);
+        return free > 0 && with > free ? with / free : 1;
     }
 
-    private static boolean flag(double[] z, int t) {
-        return !Double.isNaN(z[t]) && Math.abs(z[t]) >= DecisionRules.OUTLIER_SCORE;
+    private static double mad(double[] x) {
+        double[] present = java.util.Arrays.stream(x).filter(v -> !Double.isNaN(v)).toArray();
+        if (present.length < 3) {
+            return Double.NaN;
+        }
+        double median = OrderStatistics.median(present);
+        double[] d = new double[present.length];
+        for (int i = 0; i < d.length; i++) {
+            d[i] = Math.abs(present[i] - median);
+        }
+        return OrderStatistics.median(d);
     }
 
     /** Stretches with many unusual values, which are not reported as outliers. */
-    static List<Caveat> stretchNotes(Series series, double[] remainder, int period) {
-        return RemainderOutliers.unusualStretches(remainder, DecisionRules.OUTLIER_SCORE, period).stream()
+    static List<Caveat> stretchNotes(Series series, double[] remainder, int period, double spreadRatio) {
+        return RemainderOutliers.unusualStretches(remainder, DecisionRules.OUTLIER_SCORE * spreadRatio, period).stream()
                 .<Caveat>map(s -> new Caveat.UnusualStretch(series.period(s.from()), series.period(s.to())))
                 .toList();
     }
