@@ -94,8 +94,12 @@ final class CalendarSentences {
         String change = percent ? PCT.signedPercent(c.changePct()) : units.signedValue(c.change()) + unit;
         String moved = c.calendarPct() >= 0 ? "added about " + PCT.percent(c.calendarPct()) + " to"
                 : "took about " + PCT.percent(-c.calendarPct()) + " off";
-        return String.format(Locale.ROOT, "%s, %s %s %s%s; allowing for it, %s was about %s on a year earlier rather than %s.",
-                by, cause, moved, name(c.period()), evidence, name(c.period()), adjustedChange, change);
+        // a change that rounds to zero is said in words, never as "−0.0 %"
+        boolean level = percent ? Math.abs(c.adjustedChangePct()) < 0.05
+                : units.signedValue(c.adjustedChange()).equals(units.signedValue(0.0));
+        return String.format(Locale.ROOT, "%s, %s %s %s%s; allowing for it, %s was about %s rather than %s.",
+                by, cause, moved, name(c.period()), evidence, name(c.period()),
+                level ? "level with a year earlier" : adjustedChange + " on a year earlier", change);
     }
 
     /** The subject of the sentence for one effect that moved the latest period. */

@@ -51,7 +51,7 @@ class AnalyzeCommandTest {
         assertThat(keys(i.get("year_to_date"))).contains("from", "to", "total", "previous_total", "change_pct");
         assertThat(keys(i.get("rank"))).containsExactly("position", "of");
         JsonNode c = f.get("calendar");
-        assertThat(keys(c)).containsExactly("easter", "effects", "notes");
+        assertThat(keys(c)).containsExactly("easter", "effects", "notes", "weekdays", "screened_out", "latest_change");
         assertThat(c.get("easter").get(0).get("date").asText()).isEqualTo("1949-04-17");   // Easter 1949 (Meeus)
         JsonNode o = f.get("outlook");
         assertThat(keys(o)).containsExactly("method", "model", "horizon", "fitted_from", "forecasts", "next_year_total",
@@ -129,7 +129,13 @@ class AnalyzeCommandTest {
         assertThat(easter.get("kept").asBoolean()).isTrue();
         String notes = f.get("calendar").get("notes").toString();
         assertThat(notes).contains("Easter Sunday was on 20 April 2025, a year earlier on 31 March 2024",
-                "accounts for about", "March and April together");
+                "allowing for it, April 2025 was about", "March and April together");
+        // the change with the later Easter allowed for, typed beside the raw change
+        JsonNode latest = f.get("calendar").get("latest_change");
+        assertThat(latest.get("change_pct").asDouble()).isCloseTo(100 * (106788.0 / 99228 - 1),
+                org.assertj.core.api.Assertions.within(1e-9));   // demo data: April 2025 against April 2024
+        assertThat(latest.get("adjusted_change_pct").asDouble()).isLessThan(latest.get("change_pct").asDouble());
+        assertThat(latest.get("effects").get(0).get("name").asText()).isEqualTo("easter");
     }
 
     @Test
