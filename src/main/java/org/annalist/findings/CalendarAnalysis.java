@@ -39,6 +39,11 @@ final class CalendarAnalysis {
             this.kept = result.map(r -> r.effects().stream().filter(CalendarAnalysis::counts).toList()).orElse(List.of());
         }
 
+        /** Whether any effect counts. */
+        boolean any() {
+            return !kept.isEmpty();
+        }
+
         /** What the significant effects put into position {@code t}, on the working scale (0 without any). */
         double part(int t) {
             double sum = 0;
