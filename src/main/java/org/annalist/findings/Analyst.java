@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.annalist.analysis.anomaly.RemainderOutliers;
+import org.annalist.series.Frequency;
 import org.annalist.series.Holiday;
 import org.annalist.analysis.decompose.CentredMovingAverage;
 import org.annalist.analysis.decompose.Irregular;
@@ -98,10 +99,12 @@ public final class Analyst {
         // significant ones taken out before one-offs and breaks are looked for
         CalendarAnalysis.Fit calendar = CalendarAnalysis.fit(series, stl.isPresent() ? remainder : null, holidays);
         double[] seasonalExpected = expected;
-        if (stl.isPresent() && calendar.any()) {
+        if (stl.isPresent() && calendar.any() && series.frequency() == Frequency.MONTHLY) {
             // one backfitting step (Buja, Hastie & Tibshirani 1989, doi:10.1214/aos/1176347115): STL's
             // seasonal soaks up part of a moving holiday, so the series is decomposed again with the
-            // calendar taken out, and the effects are estimated again on what that decomposition leaves
+            // calendar taken out, and the effects are estimated again on what that decomposition leaves.
+            // Monthly data only (our rule): on quarterly data, with four values a year, the second
+            // robust fit followed injected one-offs and made more false flags (OutlierInjectionTest, UKgas)
             double[] withoutCalendar = new double[y.length];
             for (int t = 0; t < y.length; t++) {
                 withoutCalendar[t] = y[t] - calendar.part(t);
