@@ -98,19 +98,19 @@ public final class Analyst {
         // calendar first: Easter, holidays and weekdays estimated robustly on the remainder, and the
         // significant ones taken out before one-offs and breaks are looked for
         CalendarAnalysis.Fit calendar = CalendarAnalysis.fit(series, stl.isPresent() ? remainder : null, holidays);
-        double[] seasonalExpected = expected;
         if (stl.isPresent() && calendar.any() && series.frequency() == Frequency.MONTHLY) {
             // one backfitting step (Buja, Hastie & Tibshirani 1989, doi:10.1214/aos/1176347115): STL's
             // seasonal soaks up part of a moving holiday, so the series is decomposed again with the
-            // calendar taken out, and the effects are estimated again on what that decomposition leaves.
+            // calendar taken out, and the effects are estimated again on what that decomposition leaves
+            // (the outliers' expected values stay the published decomposition's plus these effects).
             // Monthly data only (our rule): on quarterly data, with four values a year, the second
             // robust fit followed injected one-offs and made more false flags (OutlierInjectionTest, UKgas)
             double[] withoutCalendar = new double[y.length];
             for (int t = 0; t < y.length; t++) {
                 withoutCalendar[t] = y[t] - calendar.part(t);
             }
-            seasonalExpected = WorkingScale.expected(y, Optional.of(Stl.withPeriod(period).with(Stl.Robustness.ON)
-                    .fit(withoutCalendar)), CentredMovingAverage.windowFor(series.frequency()));
+            double[] seasonalExpected = WorkingScale.expected(y, Optional.of(Stl.withPeriod(period)
+                    .with(Stl.Robustness.ON).fit(withoutCalendar)), CentredMovingAverage.windowFor(series.frequency()));
             double[] again = new double[y.length];
             for (int t = 0; t < y.length; t++) {
                 again[t] = y[t] - seasonalExpected[t];
@@ -120,7 +120,7 @@ public final class Analyst {
         double[] expectedWithCalendar = new double[y.length];
         double[] calendarFree = new double[y.length];
         for (int t = 0; t < y.length; t++) {
-            expectedWithCalendar[t] = seasonalExpected[t] + calendar.part(t);
+            expectedWithCalendar[t] = expected[t] + calendar.part(t);
             calendarFree[t] = y[t] - expectedWithCalendar[t];
         }
         double[] scored = RemainderOutliers.scaled(calendarFree, expectedWithCalendar, x, log);
