@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.annalist.analysis.anomaly.RemainderOutliers;
-import org.annalist.series.Frequency;
 import org.annalist.series.Holiday;
 import org.annalist.analysis.decompose.CentredMovingAverage;
 import org.annalist.analysis.decompose.Irregular;
@@ -97,26 +96,7 @@ public final class Analyst {
         }
         // calendar first: Easter, holidays and weekdays estimated robustly on the remainder, and the
         // significant ones taken out before one-offs and breaks are looked for
-        CalendarAnalysis.Fit calendar = CalendarAnalysis.fit(series, stl.isPresent() ? remainder : null, holidays);
-        if (stl.isPresent() && calendar.any() && series.frequency() == Frequency.MONTHLY) {
-            // one backfitting step (Buja, Hastie & Tibshirani 1989, doi:10.1214/aos/1176347115): STL's
-            // seasonal soaks up part of a moving holiday, so the series is decomposed again with the
-            // calendar taken out, and the effects are estimated again on what that decomposition leaves
-            // (the outliers' expected values stay the published decomposition's plus these effects).
-            // Monthly data only (our rule): on quarterly data, with four values a year, the second
-            // robust fit followed injected one-offs and made more false flags (OutlierInjectionTest, UKgas)
-            double[] withoutCalendar = new double[y.length];
-            for (int t = 0; t < y.length; t++) {
-                withoutCalendar[t] = y[t] - calendar.part(t);
-            }
-            double[] seasonalExpected = WorkingScale.expected(y, Optional.of(Stl.withPeriod(period)
-                    .with(Stl.Robustness.ON).fit(withoutCalendar)), CentredMovingAverage.windowFor(series.frequency()));
-            double[] again = new double[y.length];
-            for (int t = 0; t < y.length; t++) {
-                again[t] = y[t] - seasonalExpected[t];
-            }
-            calendar = CalendarAnalysis.fit(series, again, holidays);
-        }
+        CalendarAnalysis.Fit calendar = CalendarAnalysis.fit(series, y, stl, remainder, holidays);
         double[] expectedWithCalendar = new double[y.length];
         double[] calendarFree = new double[y.length];
         for (int t = 0; t < y.length; t++) {

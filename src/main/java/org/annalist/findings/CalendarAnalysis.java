@@ -7,6 +7,7 @@ import java.util.Optional;
 import org.annalist.analysis.calendar.CalendarEffects;
 import org.annalist.analysis.calendar.CalendarRegressors;
 import org.annalist.analysis.calendar.Easter;
+import org.annalist.analysis.decompose.Stl;
 import org.annalist.series.Holiday;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Frequency;
@@ -80,6 +81,37 @@ final class CalendarAnalysis {
         }
         return new Fit(CalendarEffects.robust(workingRemainder, series.start(), CalendarRegressors.DEFAULT_EASTER_WINDOW,
                 holidays, kind.weekdays(), DecisionRules.CALENDAR_SCREEN_SCORE), kind, holidays);
+    }
+
+    /**
+     * The effects estimated on the decomposition's remainder and, for monthly data with an effect
+     * that counts, once more after one backfitting step ([Buja, Hastie &amp; Tibshirani 1989],
+     * doi:10.1214/aos/1176347115): STL's seasonal soaks up part of a moving holiday, so the series is
+     * decomposed again with the calendar taken out, and the effects are estimated again on what that
+     * decomposition leaves. Monthly data only (our rule): on quarterly data, with four values a year,
+     * the second robust fit followed injected one-offs and made more false flags
+     * (OutlierInjectionTest, UKgas).
+     *
+     * @param y                the series on the working scale
+     * @param workingRemainder y less the decomposition's trend and seasonal
+     */
+    static Fit fit(Series series, double[] y, Optional<Stl.Result> stl, double[] workingRemainder, List<Holiday> holidays) {
+        Fit first = fit(series, stl.isPresent() ? workingRemainder : null, holidays);
+        if (stl.isEmpty() || !first.any() || series.frequency() != Frequency.MONTHLY) {
+            return first;
+        }
+        double[] withoutCalendar = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            withoutCalendar[t] = y[t] - first.part(t);
+        }
+        Stl.Result again = Stl.withPeriod(series.frequency().seasonalPeriod()).with(Stl.Robustness.ON).fit(withoutCalendar);
+        double[] trend = again.trend();
+        double[] seasonal = again.seasonal();
+        double[] left = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            left[t] = y[t] - trend[t] - seasonal[t];
+        }
+        return fit(series, left, holidays);
     }
 
     /**
