@@ -18,8 +18,10 @@ import org.annalist.series.Series;
 /**
  * Runs the analysis on a series and turns the results into findings. The order is the order of
  * dependence: additive or multiplicative → STL decomposition (on logs when multiplicative) →
- * seasonal pattern → outlier candidates on the remainder → structural breaks on the seasonally
- * adjusted values with those screened out → outliers a break does not explain → trend on the
+ * seasonal pattern → calendar effects on the remainder (robust; the significant ones are taken out
+ * of the remainder and the adjusted values) → outlier candidates on that remainder → structural
+ * breaks on the seasonally and calendar adjusted values with those screened out → outliers a break
+ * does not explain → trend on the
  * seasonally adjusted values (and within the latest regime) → cycle on yearly means → irregular
  * share → smoothing → outlook (on the latest regime when it is long enough).
  */
@@ -93,18 +95,32 @@ public final class Analyst {
         for (int t = 0; t < y.length; t++) {
             remainder[t] = y[t] - expected[t];
         }
-        double[] scored = RemainderOutliers.scaled(remainder, expected, x, log);
-        List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(scored, period);
-        notes.addAll(OutlierAnalysis.stretchNotes(series, scored, period));
-        List<RemainderOutliers.Outlier> screenedOut = OutlierAnalysis.screened(scored);
+        // calendar first: Easter, holidays and weekdays estimated robustly on the remainder, and the
+        // significant ones taken out before one-offs and breaks are looked for
+        CalendarAnalysis.Fit calendar = CalendarAnalysis.fit(series, y, stl, remainder, holidays);
+        double[] expectedWithCalendar = new double[y.length];
+        double[] calendarFree = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            expectedWithCalendar[t] = expected[t] + calendar.part(t);
+            calendarFree[t] = y[t] - expectedWithCalendar[t];
+        }
+        double[] scored = RemainderOutliers.scaled(calendarFree, expectedWithCalendar, x, log);
+        double spread = OutlierAnalysis.spreadRatio(scored, RemainderOutliers.scaled(remainder, expected, x, log));
+        List<RemainderOutliers.Outlier> candidates = OutlierAnalysis.candidates(scored, period, spread);
+        notes.addAll(OutlierAnalysis.stretchNotes(series, scored, period, spread));
+        List<RemainderOutliers.Outlier> screenedOut = OutlierAnalysis.screened(scored, spread);
         double[] screened = workingAdjusted.clone();
+        for (int t = 0; t < y.length; t++) {
+            screened[t] -= calendar.part(t);
+        }
         double[] withoutOneOff = seasonal ? stl.orElseThrow().trend() : expected;
         for (RemainderOutliers.Outlier o : screenedOut) {
             // the value the period would have had without its one-off deviation
             screened[o.index()] = withoutOneOff[o.index()];
         }
         BreakAnalysis.Result breaks = BreakAnalysis.of(series, screened, log, notes);
-        List<OutlierFinding> outliers = OutlierAnalysis.of(series, candidates, expected, log, breaks.breaks());
+        List<OutlierFinding> outliers = OutlierAnalysis.of(series, candidates, expectedWithCalendar, log, breaks.breaks(),
+                calendar);
         breaks.breaks().stream().filter(BreakFinding::provisional)
                 .forEach(b -> notes.add(new Caveat.ProvisionalBreak(series.period(b.index()))));
 
@@ -113,19 +129,12 @@ public final class Analyst {
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
                 : LatestIndicators.at(series, series.size() - 1, kind,
                 decomposition.map(Decomposition::adjusted).orElse(null), parts);
-        double[] calendarIrregular = stl.map(fit -> {
-            double[] irregular = fit.remainder();
-            for (RemainderOutliers.Outlier o : screenedOut) {
-                irregular[o.index()] = Double.NaN;   // one-offs would pull the calendar estimates
-            }
-            return irregular;
-        }).orElse(null);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), measured, horizon);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendarIrregular, log, latest, holidays),
+                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendar, log, latest, holidays),
                 outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
 

@@ -1,11 +1,13 @@
 package org.annalist.findings;
 
+import java.time.MonthDay;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.annalist.analysis.calendar.CalendarEffects;
 import org.annalist.analysis.calendar.CalendarRegressors;
 import org.annalist.analysis.calendar.Easter;
+import org.annalist.analysis.decompose.Stl;
 import org.annalist.series.Holiday;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Frequency;
@@ -15,18 +17,107 @@ import org.annalist.series.Series;
 /**
  * The calendar finding: Easter dates, the estimated calendar effects (kept when significant at
  * {@link DecisionRules#ALPHA}), and how the calendar of the latest period differs from a year
- * earlier and how much of the year-on-year change that explains.
+ * earlier and how much of the year-on-year change that explains. The effects are estimated first
+ * ({@link #fit}), robustly, so that the outlier and break search run on the remainder with the
+ * significant effects taken out.
  */
 final class CalendarAnalysis {
 
     private CalendarAnalysis() {
     }
 
+    /** The calendar effects estimated on the decomposition's remainder, and which of them count. */
+    static final class Fit {
+        private final Optional<CalendarEffects.Result> result;
+        private final WeekdayKind weekdays;
+        private final List<CalendarEffects.Effect> kept;
+        private final List<Holiday> holidays;
+
+        private Fit(Optional<CalendarEffects.Result> result, WeekdayKind weekdays, List<Holiday> holidays) {
+            this.result = result;
+            this.weekdays = weekdays;
+            this.holidays = List.copyOf(holidays);
+            this.kept = result.map(r -> r.effects().stream().filter(CalendarAnalysis::counts).toList()).orElse(List.of());
+        }
+
+        /** Whether any effect counts. */
+        boolean any() {
+            return !kept.isEmpty();
+        }
+
+        /** What the significant effects put into position {@code t}, on the working scale (0 without any). */
+        double part(int t) {
+            double sum = 0;
+            for (CalendarEffects.Effect e : kept) {
+                sum += result.orElseThrow().part(e.name(), t);
+            }
+            return sum;
+        }
+
+        /** The significant effect that puts the most into position {@code t}. */
+        Optional<CalendarEffects.Effect> largest(int t) {
+            CalendarEffects.Effect best = null;
+            for (CalendarEffects.Effect e : kept) {
+                if (best == null || Math.abs(result.orElseThrow().part(e.name(), t))
+                        > Math.abs(result.orElseThrow().part(best.name(), t))) {
+                    best = e;
+                }
+            }
+            return Optional.ofNullable(best);
+        }
+    }
+
     /**
-     * @param workingIrregular the decomposition remainder on the working scale (null without a decomposition)
-     * @param indicators       the latest period's indicators (null when it has no value)
+     * The effects estimated robustly ({@link CalendarEffects#robust}, screen at
+     * {@link DecisionRules#CALENDAR_SCREEN_SCORE}); none for data other than monthly or quarterly
+     * or without a decomposition.
+     *
+     * @param workingRemainder the decomposition's remainder on the working scale (null without one)
      */
-    static CalendarFinding of(Series series, double[] workingIrregular, boolean log, LatestIndicators.Result indicators,
+    static Fit fit(Series series, double[] workingRemainder, List<Holiday> holidays) {
+        WeekdayKind kind = WeekdayKind.of(series);
+        if (!CalendarEffects.applies(series.frequency()) || workingRemainder == null) {
+            return new Fit(Optional.empty(), kind, holidays);
+        }
+        return new Fit(CalendarEffects.robust(workingRemainder, series.start(), CalendarRegressors.DEFAULT_EASTER_WINDOW,
+                holidays, kind.weekdays(), DecisionRules.CALENDAR_SCREEN_SCORE), kind, holidays);
+    }
+
+    /**
+     * The effects estimated on the decomposition's remainder and, for monthly data with an effect
+     * that counts, once more after one backfitting step ([Buja, Hastie &amp; Tibshirani 1989],
+     * doi:10.1214/aos/1176347115): STL's seasonal soaks up part of a moving holiday, so the series is
+     * decomposed again with the calendar taken out, and the effects are estimated again on what that
+     * decomposition leaves. Monthly data only (our rule): on quarterly data, with four values a year,
+     * the second robust fit followed injected one-offs and made more false flags
+     * (OutlierInjectionTest, UKgas).
+     *
+     * @param y                the series on the working scale
+     * @param workingRemainder y less the decomposition's trend and seasonal
+     */
+    static Fit fit(Series series, double[] y, Optional<Stl.Result> stl, double[] workingRemainder, List<Holiday> holidays) {
+        Fit first = fit(series, stl.isPresent() ? workingRemainder : null, holidays);
+        if (stl.isEmpty() || !first.any() || series.frequency() != Frequency.MONTHLY) {
+            return first;
+        }
+        double[] withoutCalendar = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            withoutCalendar[t] = y[t] - first.part(t);
+        }
+        Stl.Result again = Stl.withPeriod(series.frequency().seasonalPeriod()).with(Stl.Robustness.ON).fit(withoutCalendar);
+        double[] trend = again.trend();
+        double[] seasonal = again.seasonal();
+        double[] left = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            left[t] = y[t] - trend[t] - seasonal[t];
+        }
+        return fit(series, left, holidays);
+    }
+
+    /**
+     * @param indicators the latest period's indicators (null when it has no value)
+     */
+    static CalendarFinding of(Series series, Fit fit, boolean log, LatestIndicators.Result indicators,
                               List<Holiday> holidays) {
         if (!CalendarEffects.applies(series.frequency())) {
             return null;
@@ -35,16 +126,16 @@ final class CalendarAnalysis {
         for (int year = Math.max(Easter.FIRST_YEAR, series.start().year()); year <= series.end().year(); year++) {
             easter.add(new CalendarFinding.EasterDate(year, Easter.sunday(year).toString()));
         }
-        Optional<CalendarEffects.Result> fit = workingIrregular == null ? Optional.empty()
-                : CalendarEffects.estimate(workingIrregular, series.start(), CalendarRegressors.DEFAULT_EASTER_WINDOW,
-                holidays);
         double level = Analyst.meanOf(series.values());
-        List<CalendarFinding.Effect> effects = fit.map(r -> r.effects().stream().map(e -> new CalendarFinding.Effect(
+        List<CalendarFinding.Effect> effects = fit.result.map(r -> r.effects().stream().map(e -> new CalendarFinding.Effect(
                 e.name(), e.coefficient(), effectPct(e.coefficient(), 1, log, level), e.pValue(), counts(e))).toList())
                 .orElse(List.of());
+        CalendarFinding.AdjustedChange latest = indicators == null || indicators.lastYear().isEmpty() ? null
+                : adjusted(series, indicators, fit, log);
         List<CalendarNote> notes = indicators == null || indicators.lastYear().isEmpty() ? List.of()
-                : notes(series, indicators, fit, log, holidays);
-        return new CalendarFinding(easter, effects, notes);
+                : notes(series, indicators, fit, log, holidays, latest);
+        List<Period> screened = fit.result.map(r -> r.screened().stream().map(series::period).toList()).orElse(List.of());
+        return new CalendarFinding(easter, effects, notes, fit.weekdays, screened, latest);
     }
 
     /** An effect counts when it is significant at {@link DecisionRules#ALPHA}. */
@@ -52,12 +143,12 @@ final class CalendarAnalysis {
         return e.pValue() < DecisionRules.ALPHA;
     }
 
-    private static Optional<CalendarEffects.Effect> kept(Optional<CalendarEffects.Result> fit, String name) {
-        return fit.flatMap(f -> f.effect(name)).filter(CalendarAnalysis::counts);
+    private static Optional<CalendarEffects.Effect> kept(Fit fit, String name) {
+        return fit.kept.stream().filter(e -> e.name().equals(name)).findFirst();
     }
 
-    private static List<CalendarNote> notes(Series series, LatestIndicators.Result r,
-                                            Optional<CalendarEffects.Result> fit, boolean log, List<Holiday> holidays) {
+    private static List<CalendarNote> notes(Series series, LatestIndicators.Result r, Fit fit, boolean log,
+                                            List<Holiday> holidays, CalendarFinding.AdjustedChange latest) {
         List<CalendarNote> notes = new ArrayList<>();
         Period now = r.period();
         LatestIndicators.Comparison lastYear = r.lastYear().orElseThrow();
@@ -82,18 +173,131 @@ final class CalendarAnalysis {
                                 lastYear.value()))));
             }
         }
-        int nightsNow = CalendarRegressors.weekendNights(now);
-        int nightsBefore = CalendarRegressors.weekendNights(before);
-        if (series.frequency() == Frequency.MONTHLY && nightsNow != nightsBefore) {
-            notes.add(new CalendarNote.WeekendNights(now, before, nightsNow, nightsBefore,
-                    kept(fit, CalendarEffects.WEEKEND).map(e -> effectPct(e.coefficient(), nightsNow - nightsBefore, log,
-                            lastYear.value()))));
+        if (series.frequency() == Frequency.MONTHLY) {
+            weekdayNote(fit, now, before, log, lastYear.value()).ifPresent(notes::add);
         }
         if (r.longerFebruary() != 0) {
             notes.add(new CalendarNote.LeapFebruary(now, before,
                     100 * (now.lengthInDays() / (double) before.lengthInDays() - 1)));
         }
+        if (latest != null) {
+            Optional<Boolean> later = latest.effects().stream().anyMatch(p -> p.name().equals(CalendarEffects.EASTER))
+                    ? Optional.of(MonthDay.from(Easter.sunday(now.year())).isAfter(MonthDay.from(Easter.sunday(before.year()))))
+                    : Optional.empty();
+            notes.add(new CalendarNote.CalendarAdjusted(latest, later, fit.weekdays, series.unit()));
+        }
         return notes;
+    }
+
+    /**
+     * The weekday count of the latest month against a year earlier, fitted to the series
+     * ({@link WeekdayKind}): Friday and Saturday nights for overnight stays, Saturdays and Sundays
+     * for day visits, and for other series Saturdays and Sundays only when their effect counts.
+     */
+    private static Optional<CalendarNote> weekdayNote(Fit fit, Period now, Period before, boolean log, double value) {
+        if (fit.weekdays == WeekdayKind.NIGHTS) {
+            int nightsNow = CalendarRegressors.weekendNights(now);
+            int nightsBefore = CalendarRegressors.weekendNights(before);
+            return nightsNow == nightsBefore ? Optional.empty()
+                    : Optional.of(new CalendarNote.WeekendNights(now, before, nightsNow, nightsBefore,
+                    kept(fit, CalendarEffects.WEEKEND).map(e -> effectPct(e.coefficient(), nightsNow - nightsBefore, log,
+                            value))));
+        }
+        int daysNow = CalendarRegressors.weekendDays(now);
+        int daysBefore = CalendarRegressors.weekendDays(before);
+        Optional<Double> effect = kept(fit, CalendarEffects.WEEKEND_DAYS)
+                .map(e -> effectPct(e.coefficient(), daysNow - daysBefore, log, value));
+        if (daysNow == daysBefore || (fit.weekdays == WeekdayKind.OTHER && effect.isEmpty())) {
+            return Optional.empty();
+        }
+        return Optional.of(new CalendarNote.WeekendDays(now, before, daysNow, daysBefore, fit.weekdays, effect));
+    }
+
+    /**
+     * The latest period's change with the significant effects taken out of both values (each value
+     * less what those effects put into it: divided by exp(part) on logs), when an effect that counts
+     * differed between the two periods; otherwise null.
+     */
+    private static CalendarFinding.AdjustedChange adjusted(Series series, LatestIndicators.Result r, Fit fit, boolean log) {
+        LatestIndicators.Comparison lastYear = r.lastYear().orElseThrow();
+        int now = series.indexOf(r.period());
+        int before = series.indexOf(lastYear.period());
+        if (fit.kept.isEmpty() || now < 0 || before < 0) {
+            return null;
+        }
+        double partNow = fit.part(now);
+        double partBefore = fit.part(before);
+        double moved = partNow - partBefore;
+        double valueNow = r.value();
+        double valueBefore = lastYear.value();
+        double adjustedNow = log ? valueNow * Math.exp(-partNow) : valueNow - partNow;
+        double adjustedBefore = log ? valueBefore * Math.exp(-partBefore) : valueBefore - partBefore;
+        // the value the latest period would have had with a year earlier's calendar
+        double base = log ? valueNow * Math.exp(-moved) : valueNow - moved;
+        List<CalendarFinding.Part> parts = new ArrayList<>();
+        for (CalendarEffects.Effect e : fit.kept) {
+            double d = fit.result.orElseThrow().part(e.name(), now) - fit.result.orElseThrow().part(e.name(), before);
+            if (Math.abs(d) > 1e-12) {
+                parts.add(new CalendarFinding.Part(e.name(), shiftPct(d, log, base), e.pValue()));
+            }
+        }
+        if (parts.isEmpty()) {
+            return null;
+        }
+        Double changePct = Numbers.orNull(lastYear.changePct());
+        Double adjustedPct = changePct == null || adjustedBefore <= 0 ? null : 100 * (adjustedNow / adjustedBefore - 1);
+        Double share = changePct == null || adjustedPct == null || Math.abs(changePct) < 0.05 ? null
+                : (changePct - adjustedPct) / changePct;
+        return new CalendarFinding.AdjustedChange(r.period(), lastYear.period(), lastYear.change(), changePct,
+                adjustedNow - adjustedBefore, adjustedPct, shiftPct(moved, log, base), share, parts);
+    }
+
+    /** A shift on the working scale as a % of {@code base}: exp(d) − 1 on logs, d / base otherwise. */
+    private static double shiftPct(double d, boolean log, double base) {
+        return log ? 100 * (Math.exp(d) - 1) : base == 0 ? Double.NaN : 100 * d / base;
+    }
+
+    /**
+     * The significant calendar effect an outlier's expected value allows for, when the effects that
+     * count moved that value by at least {@link DecisionRules#CALENDAR_NAMED_PCT}.
+     *
+     * @param expectedWithout trend and season at {@code t} on the working scale, without the calendar
+     */
+    static Optional<OutlierFinding.CalendarAllowance> allowance(Series series, Fit fit, int t, boolean log,
+                                                              double expectedWithout) {
+        Optional<CalendarEffects.Effect> largest = fit.largest(t);
+        if (largest.isEmpty()) {
+            return Optional.empty();
+        }
+        double base = log ? Math.exp(expectedWithout) : expectedWithout;
+        double total = shiftPct(fit.part(t), log, base);
+        if (Double.isNaN(total) || Math.abs(total) < DecisionRules.CALENDAR_NAMED_PCT) {
+            return Optional.empty();
+        }
+        CalendarEffects.Result r = fit.result.orElseThrow();
+        String name = largest.get().name();
+        Period p = series.period(t);
+        double centred = r.regressor(name, t);
+        double raw = raw(name, p, fit.holidays);
+        boolean easter = name.equals(CalendarEffects.EASTER);
+        int window = CalendarRegressors.DEFAULT_EASTER_WINDOW;
+        return Optional.of(new OutlierFinding.CalendarAllowance(name, shiftPct(r.part(name, t), log, base), total,
+                easter ? raw * window : raw, easter ? (raw - centred) * window : raw - centred,
+                easter ? Easter.sunday(p.year()).toString() : null, easter ? window : null));
+    }
+
+    /** The regressor before centring: Easter's share of days, the weekday count, a holiday's share. */
+    private static double raw(String name, Period p, List<Holiday> holidays) {
+        if (name.equals(CalendarEffects.EASTER)) {
+            return CalendarRegressors.easterShare(p, CalendarRegressors.DEFAULT_EASTER_WINDOW);
+        }
+        if (name.equals(CalendarEffects.WEEKEND)) {
+            return CalendarRegressors.weekendNights(p);
+        }
+        if (name.equals(CalendarEffects.WEEKEND_DAYS)) {
+            return CalendarRegressors.weekendDays(p);
+        }
+        return holidays.stream().filter(h -> h.name().equals(name)).findFirst().map(h -> h.share(p)).orElse(Double.NaN);
     }
 
     /** March and April (or the first two quarters) together, when Easter moved between them. */

@@ -35,9 +35,32 @@ public sealed interface CalendarNote {
                         Optional<Double> explainedPct) implements CalendarNote {
     }
 
-    /** A month had more or fewer Friday and Saturday nights than a year earlier. */
+    /** A month had more or fewer Friday and Saturday nights than a year earlier (a series of overnight stays). */
     record WeekendNights(Period now, Period before, int nightsNow, int nightsBefore, Optional<Double> effectPct)
             implements CalendarNote {
+    }
+
+    /**
+     * A month had more or fewer Saturdays and Sundays than a year earlier: noted for day visits, and
+     * for other series only when the estimated weekday effect is significant.
+     *
+     * @param weekdays  the kind of series the count was noted for
+     * @param effectPct what the difference put into the latest period, in %, when the effect counts
+     */
+    record WeekendDays(Period now, Period before, int daysNow, int daysBefore, WeekdayKind weekdays,
+                       Optional<Double> effectPct) implements CalendarNote {
+    }
+
+    /**
+     * The change on a year earlier with the significant calendar effects allowed for.
+     *
+     * @param easterLater whether Easter fell later in the year than a year earlier (empty when it
+     *                    is not among the effects that differed)
+     * @param weekdays    which days the weekday effect counts
+     * @param unit        the series' unit, for a change that cannot be given in %
+     */
+    record CalendarAdjusted(CalendarFinding.AdjustedChange change, Optional<Boolean> easterLater,
+                            WeekdayKind weekdays, String unit) implements CalendarNote {
     }
 
     /** A February compared with one of another length. */

@@ -155,6 +155,21 @@ public final class DecisionRules {
     /** This many flags within two seasonal cycles are an unusual stretch ({@link RemainderOutliers#STRETCH_FLAGS}). */
     public static final int OUTLIER_STRETCH_FLAGS = RemainderOutliers.STRETCH_FLAGS;
 
+    // ---- calendar effects -------------------------------------------------------------------
+
+    /**
+     * Before the calendar effects are estimated, remainders whose residual from a robust (Huber)
+     * fit has a modified z-score of at least 3.5 are set aside, so that a one-off cannot pull the
+     * estimate: the cut Iglewicz &amp; Hoaglin (1993) recommend for labelling potential outliers.
+     */
+    public static final double CALENDAR_SCREEN_SCORE = 3.5;
+    /**
+     * An outlier's row names the calendar when the significant calendar effects moved its expected
+     * value by at least 1 % (our rule: smaller effects are within a month's noise and would only
+     * clutter the table).
+     */
+    public static final double CALENDAR_NAMED_PCT = 1.0;
+
     // ---- outlook --------------------------------------------------------------------------
 
     /**

@@ -51,6 +51,10 @@ public record Findings(SeriesFacts series, Transform transform, TrendFinding tre
     /** The first page's statements after the consistency pass, and the headline (the findings JSON's {@code claims}). */
     @JsonProperty("claims")
     public Claims claims() {
-        return Claims.of(this);
+        // the calendar-adjusted change leads where a significant Easter or weekday effect moved the latest period
+        Optional<Claims.AdjustedChange> adjusted = Optional.ofNullable(calendar())
+                .map(CalendarFinding::latestChange)
+                .map(a -> new Claims.AdjustedChange(a.adjustedChange(), Optional.ofNullable(a.adjustedChangePct())));
+        return Claims.of(this, adjusted);
     }
 }

@@ -85,8 +85,9 @@ public final class AnalystNotes {
             line(out, "outliers", "none");
         }
         for (OutlierFinding o : f.outliers()) {
-            line(out, "outlier", "%s: %s against %s expected (%s), score %.1f", o.period(), num(o.observed()),
-                    num(o.expected()), change(f, o.observed() - o.expected(), o.deviationPct()), o.score());
+            line(out, "outlier", "%s: %s against %s expected (%s), score %.1f%s", o.period(), num(o.observed()),
+                    num(o.expected()), change(f, o.observed() - o.expected(), o.deviationPct()), o.score(),
+                    o.calendar() == null ? "" : "; " + CalendarSentences.outlier(o.period(), o.calendar()));
         }
         IndicatorsFinding i = f.indicators();
         if (i != null) {

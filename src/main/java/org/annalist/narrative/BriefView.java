@@ -149,8 +149,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
         }
     }
 
+    /**
+     * @param calendar        what the expected value allows for of the calendar, a sentence; empty when nothing worth naming
+     * @param calendarAllowed the expected values include significant calendar effects
+     */
     public record OutlierRow(String period, String observed, String expected, String deviation, String score,
-                             boolean above) {
+                             boolean above, String calendar, boolean calendarAllowed) {
     }
 
     /**

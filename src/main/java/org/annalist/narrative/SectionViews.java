@@ -9,6 +9,7 @@ import org.annalist.findings.FigurePlan;
 import org.annalist.findings.FormChoice;
 import org.annalist.findings.Findings;
 import org.annalist.findings.IndicatorsFinding;
+import org.annalist.findings.CalendarFinding;
 import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.Decomposition;
 import org.annalist.findings.DecisionRules;
@@ -99,11 +100,14 @@ final class SectionViews {
 
     List<BriefView.OutlierRow> outliers() {
         List<BriefView.OutlierRow> rows = new ArrayList<>();
+        boolean calendarAllowed = findings.calendar() != null
+                && findings.calendar().effects().stream().anyMatch(CalendarFinding.Effect::kept);
         for (OutlierFinding o : findings.outliers()) {
             rows.add(new BriefView.OutlierRow(f.period(series.period(o.index())), f.value(o.observed()),
                     f.value(o.expected()), measure.signedChange(o.observed() - o.expected(), o.deviationPct()),
                     f.fixed(Math.abs(o.score()), 1),
-                    o.direction() == Side.ABOVE));
+                    o.direction() == Side.ABOVE, o.calendar() == null ? ""
+                    : CalendarSentences.outlier(series.period(o.index()), o.calendar()), calendarAllowed));
         }
         return rows;
     }

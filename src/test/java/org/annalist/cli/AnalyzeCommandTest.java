@@ -55,7 +55,7 @@ class AnalyzeCommandTest {
         assertThat(keys(i.get("year_to_date"))).contains("from", "to", "total", "previous_total", "change_pct");
         assertThat(keys(i.get("rank"))).containsExactly("position", "of");
         JsonNode c = f.get("calendar");
-        assertThat(keys(c)).containsExactly("easter", "effects", "notes");
+        assertThat(keys(c)).containsExactly("easter", "effects", "notes", "weekdays", "screened_out", "latest_change");
         assertThat(c.get("easter").get(0).get("date").asText()).isEqualTo("1949-04-17");   // Easter 1949 (Meeus)
         JsonNode o = f.get("outlook");
         assertThat(keys(o)).containsExactly("method", "model", "horizon", "fitted_from", "forecasts", "next_year_total",
@@ -79,7 +79,9 @@ class AnalyzeCommandTest {
         assertThat(o.get("next_year_average").isNull()).isTrue();
         // 36 months since the 1958 break: two years before the first origin leave 12 origins to back-test
         assertThat(o.get("backtest").size()).isEqualTo(4);
-        assertThat(o.get("chosen_because").asText()).contains("back-test over the last 12 periods");
+        // without a break the back-test runs over the last two seasonal cycles
+        assertThat(o.get("chosen_because").asText()).contains(breaks.isEmpty() ? "back-test over the last 24 periods"
+                : "back-test over the last 12 periods");
 
         Run demo = Run.of("analyze", "--format", "json", "--series", "Total", "demo-data/quennelmark-guest-nights.csv");
         JsonNode backtest = new ObjectMapper().readTree(demo.out()).get("outlook").get("backtest");
@@ -139,7 +141,13 @@ class AnalyzeCommandTest {
         assertThat(easter.get("kept").asBoolean()).isTrue();
         String notes = f.get("calendar").get("notes").toString();
         assertThat(notes).contains("Easter Sunday was on 20 April 2025, a year earlier on 31 March 2024",
-                "accounts for about", "March and April together");
+                "allowing for it, April 2025 was about", "March and April together");
+        // the change with the later Easter allowed for, typed beside the raw change
+        JsonNode latest = f.get("calendar").get("latest_change");
+        assertThat(latest.get("change_pct").asDouble()).isCloseTo(100 * (106788.0 / 99228 - 1),
+                org.assertj.core.api.Assertions.within(1e-9));   // demo data: April 2025 against April 2024
+        assertThat(latest.get("adjusted_change_pct").asDouble()).isLessThan(latest.get("change_pct").asDouble());
+        assertThat(latest.get("effects").get(0).get("name").asText()).isEqualTo("easter");
     }
 
     @Test

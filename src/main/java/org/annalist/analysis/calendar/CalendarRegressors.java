@@ -68,4 +68,9 @@ public final class CalendarRegressors {
     public static int weekendNights(Period period) {
         return count(period, DayOfWeek.FRIDAY) + count(period, DayOfWeek.SATURDAY);
     }
+
+    /** Saturdays plus Sundays: the days of the weekend. */
+    public static int weekendDays(Period period) {
+        return count(period, DayOfWeek.SATURDAY) + count(period, DayOfWeek.SUNDAY);
+    }
 }

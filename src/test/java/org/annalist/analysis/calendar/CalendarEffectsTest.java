@@ -94,4 +94,22 @@ class CalendarEffectsTest {
         assertThat(CalendarEffects.estimate(noise, Period.month(2010, 1), 8,
                 java.util.List.of(new Holiday("fair", days), new Holiday("market", days)))).isEmpty();
     }
+
+    @Test
+    void aOneOffInAnEasterMonthDoesNotPullTheRobustEstimate() {
+        // invented: +5 % Easter effect, and a −40 % one-off in March 2011 (Easter on 24 April, so
+        // March holds none of its days and its centred Easter regressor is far from zero)
+        double[] y = simulated(0.05, 0, 21);
+        int march2011 = 14;
+        y[march2011] += Math.log(0.6);
+        CalendarEffects.Result plain = CalendarEffects.estimate(y, Period.month(2010, 1), 8).orElseThrow();
+        CalendarEffects.Result robust = CalendarEffects.robust(y, Period.month(2010, 1), 8, java.util.List.of(),
+                CalendarEffects.Weekdays.FRIDAY_SATURDAY_NIGHTS, 3.5).orElseThrow();
+        CalendarEffects.Effect easter = robust.effect(CalendarEffects.EASTER).orElseThrow();
+        assertThat(robust.screened()).contains(march2011);
+        // within three standard errors (a 99.7 % band: one seed, so a wide band; common practice)
+        assertThat(Math.abs(easter.coefficient() - 0.05)).isLessThanOrEqualTo(3 * easter.standardError());
+        assertThat(Math.abs(easter.coefficient() - 0.05))
+                .isLessThan(Math.abs(plain.effect(CalendarEffects.EASTER).orElseThrow().coefficient() - 0.05));
+    }
 }
