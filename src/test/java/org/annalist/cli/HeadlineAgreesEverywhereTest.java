@@ -82,7 +82,7 @@ class HeadlineAgreesEverywhereTest {
                 // the whole period's trend is not the first page's
                 assertThat(text).doesNotContain("The underlying trend has been");
             } else {
-                assertThat(text).contains("the underlying trend has been " + verb);
+                assertThat(text).containsIgnoringCase("the underlying trend has been " + verb);
             }
             assertThat(text).contains(sign(trend) + slope);
         }
