@@ -54,12 +54,20 @@ class PrintedBriefAuditTest {
         int code = Main.run(args.toArray(String[]::new), new PrintWriter(new StringWriter()), new PrintWriter(err));
         assertThat(code).as(file + ": " + err).isZero();
         try (PDDocument document = Loader.loadPDF(pdf.toFile())) {
-            pages.put(file, new PDFTextStripper().getText(document).replaceAll("[ \\t\\r\\n]+", " "));
+            PDFTextStripper stripper = new PDFTextStripper();
+            stripper.setSortByPosition(true);
+            pages.put(file, stripper.getText(document).replaceAll("[ \\t\\r\\n]+", " "));
         }
     }
 
+    /**
+     * The marks that survive text extraction: a PDF's text comes back with line breaks where the
+     * layout wrapped and no-break spaces as plain ones, so spacing is checked on the brief's words
+     * before layout ({@link StatementAuditTest}).
+     */
     @ParameterizedTest
-    @EnumSource(ProofMarks.class)
+    @EnumSource(value = ProofMarks.class, names = {"DIRECTION_AND_SIGN", "NEGATIVE_ZERO", "HYPHEN_AS_MINUS",
+            "DEVELOPMENT_VERSION"})
     void noProofMarksOnThePrintedPages(ProofMarks mark) {
         List<String> found = new ArrayList<>();
         pages.forEach((file, text) -> {
