@@ -97,7 +97,8 @@ public final class Analyst {
         }
         // calendar first: Easter, holidays and weekdays estimated robustly on the remainder, and the
         // significant ones taken out before one-offs and breaks are looked for
-        CalendarAnalysis.Fit calendar = CalendarAnalysis.fit(series, y, stl, remainder, holidays);
+        CalendarAnalysis.Fit calendar = measured == Measure.INTERVAL ? CalendarAnalysis.none(series, holidays)
+                : CalendarAnalysis.fit(series, y, stl, remainder, holidays);
         double[] expectedWithCalendar = new double[y.length];
         double[] calendarFree = new double[y.length];
         for (int t = 0; t < y.length; t++) {
@@ -134,7 +135,7 @@ public final class Analyst {
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), measured, horizon);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendar, log, latest, holidays),
+                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
                 outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
 

@@ -74,6 +74,11 @@ final class CalendarAnalysis {
      *
      * @param workingRemainder the decomposition's remainder on the working scale (null without one)
      */
+    /** No effects: a temperature's monthly mean counts no days, so Easter and weekdays put nothing into it. */
+    static Fit none(Series series, List<Holiday> holidays) {
+        return new Fit(Optional.empty(), WeekdayKind.of(series), holidays);
+    }
+
     static Fit fit(Series series, double[] workingRemainder, List<Holiday> holidays) {
         WeekdayKind kind = WeekdayKind.of(series);
         if (!CalendarEffects.applies(series.frequency()) || workingRemainder == null) {
@@ -118,7 +123,7 @@ final class CalendarAnalysis {
      * @param indicators the latest period's indicators (null when it has no value)
      */
     static CalendarFinding of(Series series, Fit fit, boolean log, LatestIndicators.Result indicators,
-                              List<Holiday> holidays) {
+                              List<Holiday> holidays, Measure measure) {
         if (!CalendarEffects.applies(series.frequency())) {
             return null;
         }
@@ -131,7 +136,7 @@ final class CalendarAnalysis {
                 e.name(), e.coefficient(), effectPct(e.coefficient(), 1, log, level), e.pValue(), counts(e))).toList())
                 .orElse(List.of());
         CalendarFinding.AdjustedChange latest = indicators == null || indicators.lastYear().isEmpty() ? null
-                : adjusted(series, indicators, fit, log);
+                : adjusted(series, indicators, fit, log, measure.relativeChanges());
         List<CalendarNote> notes = indicators == null || indicators.lastYear().isEmpty() ? List.of()
                 : notes(series, indicators, fit, log, holidays, latest);
         List<Period> screened = fit.result.map(r -> r.screened().stream().map(series::period).toList()).orElse(List.of());
@@ -218,7 +223,8 @@ final class CalendarAnalysis {
      * less what those effects put into it: divided by exp(part) on logs), when an effect that counts
      * differed between the two periods; otherwise null.
      */
-    private static CalendarFinding.AdjustedChange adjusted(Series series, LatestIndicators.Result r, Fit fit, boolean log) {
+    private static CalendarFinding.AdjustedChange adjusted(Series series, LatestIndicators.Result r, Fit fit, boolean log,
+                                                          boolean relative) {
         LatestIndicators.Comparison lastYear = r.lastYear().orElseThrow();
         int now = series.indexOf(r.period());
         int before = series.indexOf(lastYear.period());
@@ -244,7 +250,8 @@ final class CalendarAnalysis {
         if (parts.isEmpty()) {
             return null;
         }
-        Double changePct = Numbers.orNull(lastYear.changePct());
+        // a rate changes in points and a temperature in degrees: their changes are differences, never %
+        Double changePct = relative ? Numbers.orNull(lastYear.changePct()) : null;
         Double adjustedPct = changePct == null || adjustedBefore <= 0 ? null : 100 * (adjustedNow / adjustedBefore - 1);
         Double share = changePct == null || adjustedPct == null || Math.abs(changePct) < 0.05 ? null
                 : (changePct - adjustedPct) / changePct;

@@ -15,7 +15,7 @@ import java.util.List;
  */
 public record SeasonalityFinding(boolean present, Integer period, Double strength, TestName test, Double pValue,
                                  Form form, Position peak, Position trough, @JsonIgnore SeasonVerdict verdict,
-                                 @JsonIgnore Double statistic, @JsonIgnore List<ProfilePoint> profile,
+                                 @JsonIgnore Double statistic, List<ProfilePoint> profile,
                                  @JsonIgnore Double swing, @JsonIgnore Double swingPctOfLevel,
                                  @JsonIgnore boolean changed, @JsonIgnore Double largestShift,
                                  @JsonIgnore Boolean periodConfirmed, @JsonIgnore Double autocorrelationAtPeriod) {

@@ -92,8 +92,9 @@ final class CalendarSentences {
         String unit = a.unit() == null || a.unit().isEmpty() ? "" : a.unit().equals("%") ? " percentage points" : " " + a.unit();
         String adjustedChange = percent ? PCT.signedPercent(c.adjustedChangePct()) : units.signedValue(c.adjustedChange()) + unit;
         String change = percent ? PCT.signedPercent(c.changePct()) : units.signedValue(c.change()) + unit;
-        String moved = c.calendarPct() >= 0 ? "added about " + PCT.percent(c.calendarPct()) + " to"
-                : "took about " + PCT.percent(-c.calendarPct()) + " off";
+        String size = percent ? PCT.percent(Math.abs(c.calendarPct()))
+                : units.value(Math.abs(c.change() - c.adjustedChange())) + unit;
+        String moved = c.calendarPct() >= 0 ? "added about " + size + " to" : "took about " + size + " off";
         // a change that rounds to zero is said in words, never as "−0.0 %"
         boolean level = percent ? Math.abs(c.adjustedChangePct()) < 0.05
                 : units.signedValue(c.adjustedChange()).equals(units.signedValue(0.0));

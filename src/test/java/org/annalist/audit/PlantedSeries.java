@@ -150,9 +150,14 @@ final class PlantedSeries {
         double effect = 0.08 + 0.06 * r.nextDouble();   // the Easter nights' share of a month's level
         double[] x = monthly(years * 12, t -> 70_000 * (1 + 0.02 * t / 12.0), 0.3, 0.01, r);
         for (int y = 0; y < years; y++) {
-            // the holiday's nights fall around Easter eve: Easter on 1 April puts them in March
-            int month = easterSunday(year0 + y).minusDays(1).getMonthValue();
-            x[y * 12 + month - 1] *= 1 + effect;
+            // the holiday's nights spread evenly over the eight days before Easter Sunday (the usual
+            // Easter regressor, Bell & Hillmer 1983; the window is from memory), so an early Easter
+            // puts some or all of them in March
+            LocalDate easter = easterSunday(year0 + y);
+            for (int d = 1; d <= 8; d++) {
+                int month = easter.minusDays(d).getMonthValue();
+                x[y * 12 + month - 1] *= 1 + effect / 8;
+            }
         }
         return planted(seed, Scenario.EASTER, "Guest nights", "nights", year0, x);
     }

@@ -35,7 +35,7 @@ class AnalyzeCommandTest {
         assertThat(keys(f.get("trend"))).containsExactly("direction", "test", "statistic", "p_value", "slope_per_year",
                 "slope_ci95", "change_pct_per_year");
         assertThat(keys(f.get("seasonality"))).containsExactly("present", "period", "strength", "test", "p_value",
-                "form", "peak", "trough");
+                "form", "peak", "trough", "profile");   // profile added by issue 14: the indices page 1 quotes
         assertThat(keys(f.get("seasonality").get("peak"))).containsExactly("position", "label");
         assertThat(keys(f.get("cycle"))).containsExactly("present", "length", "length_unit", "peaks", "gaps", "regular");
         assertThat(keys(f.get("irregular"))).containsExactly("share", "label");
