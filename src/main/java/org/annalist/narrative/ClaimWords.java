@@ -102,7 +102,7 @@ final class ClaimWords {
         }
         StringBuilder s = new StringBuilder(opening);
         s.append(trend.direction() == Direction.INCREASING ? "been rising" : trend.direction() == Direction.DECREASING
-                ? "been falling" : "shown no clear trend");
+                ? "been falling" : "shown no clear direction");
         if (trend.directional()) {
             s.append(", by about ").append(size(trend)).append(" (").append(trend.pValue().map(f::pValue).orElse(""))
                     .append(')');

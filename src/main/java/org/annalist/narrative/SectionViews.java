@@ -17,6 +17,7 @@ import org.annalist.findings.Direction;
 import org.annalist.findings.IrregularFinding;
 import org.annalist.findings.SeasonVerdict;
 import org.annalist.findings.Side;
+import org.annalist.findings.Transform;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.TrendFinding;
 import org.annalist.series.Frequency;
@@ -128,8 +129,8 @@ final class SectionViews {
                     f.period(b.ci95().get(1)), b.ci95().get(0).equals(b.ci95().get(1)),
                     f.value(b.levelBefore()), f.value(b.levelAfter()), size(b.levelBefore(), b.levelAfter()),
                     b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
-                    b.kind().step(), b.kind().slope(), sloped, f.signedSignificant(b.slopeBefore()),
-                    f.signedSignificant(b.slopeAfter()), b.slopeAfter() > b.slopeBefore(),
+                    b.kind().step(), b.kind().slope(), sloped, slope(b.slopeBefore(), b.levelBefore()),
+                    slope(b.slopeAfter(), b.levelAfter()), b.slopeAfter() > b.slopeBefore(),
                     drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
                     previous == null ? "" : f.period(previous.period()),
@@ -137,6 +138,18 @@ final class SectionViews {
                     f.value(first.levelBefore()), f.period(first.period())));
         }
         return rows;
+    }
+
+    /**
+     * A regime's slope at a break, with its unit: for a series worked in logs, the line is a curve
+     * whose growth rate is what stays the same along it, so the slope is given as % a year
+     * (exp(log slope) − 1, the log slope being the slope over the level); else in units a year.
+     */
+    private String slope(double perYear, double level) {
+        if (findings.transform() == Transform.LOG && level > 0) {
+            return f.signedPercent(100 * Math.expm1(perYear / level));
+        }
+        return f.signedSignificant(perYear) + measure.differenceUnit();
     }
 
     /**
@@ -250,7 +263,7 @@ final class SectionViews {
         int outliers = findings.outliers().size();
         String unusual = breaks == 0 && outliers == 0 ? "none"
                 : (breaks == 0 ? "no" : String.valueOf(breaks)) + " " + (breaks == 1 ? "break" : "breaks") + ", "
-                        + (outliers == 0 ? "no" : String.valueOf(outliers)) + " " + (outliers == 1 ? "one-off" : "one-offs");
+                        + (outliers == 0 ? "no" : String.valueOf(outliers)) + " " + (outliers == 1 ? "one\u2011off" : "one\u2011offs");   // a non-breaking hyphen: a narrow tile must not split the word
         figures.add(new BriefView.KeyFigure("Unusual periods", unusual,
                 breaks == 0 ? "no structural change found" : "latest break " + f.period(series.period(
                 findings.breaks().get(breaks - 1).index()))));

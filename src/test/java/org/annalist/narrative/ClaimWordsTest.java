@@ -50,7 +50,7 @@ class ClaimWordsTest {
         ClaimWords words = words(claims);
         assertThat(words.stepSentence()).startsWith("From October 2024 the level stepped down by 20.0\u00A0%");
         assertThat(words.trendSentence())
-                .isEqualTo("Since October 2024 the level has shown no clear trend, whereas over the whole period it fell.");
+                .isEqualTo("Since October 2024 the level has shown no clear direction, whereas over the whole period it fell.");
         assertThat(words.trendTile()[0]).isEqualTo("no clear trend");
         assertThat(words.trendTile()[1]).startsWith("since October 2024");
         assertThat(words.trendSentence()).doesNotContain("1.7");

@@ -27,4 +27,9 @@ class NumberKeepingLineBreakerTest {
                 .containsExactly("interval), ", "+0.7\u00A0% ", "on ", "the ", "estimate ", "and ", "\u22120.7\u00A0% ",
                         "or ", "1,620,000 ", "x");
     }
+
+    @Test
+    void anOpeningBracketStaysWithTheWordAfterIt() {
+        assertThat(pieces("a year (p\u00A0<\u00A00.001) and")).doesNotContain("(").allSatisfy(p -> assertThat(p).doesNotEndWith("("));
+    }
 }
