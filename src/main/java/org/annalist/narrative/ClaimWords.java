@@ -42,7 +42,8 @@ final class ClaimWords {
         double v = Math.abs(c.size());
         return switch (c.unit()) {
             case PERCENT -> f.percent(v);
-            case PERCENT_PER_YEAR -> f.percent(v) + " a year";
+            // a straight line's slope over the average level: not a compound growth rate, so said as what it is
+            case PERCENT_PER_YEAR -> f.percent(v) + " of the average level a year";
             case UNITS -> f.value(v) + units;
             case UNITS_PER_YEAR -> f.significant(v) + units + " a year";
         };
@@ -56,6 +57,9 @@ final class ClaimWords {
     /** As {@link #signedSize}, with percentage points abbreviated for the key figures' narrow tiles: {@code +0.9 pp a year}. */
     String signedShort(Claim c) {
         String units = units();
+        if (c.unit() == Claim.SizeUnit.PERCENT_PER_YEAR) {
+            return signed(c, f.percent(Math.abs(c.size())) + " a\u00A0year");   // the tile's note says "of the average level"
+        }
         return signed(c, size(c, units.equals("\u00A0percentage points") ? "\u00a0pp" : units));
     }
 
@@ -154,7 +158,8 @@ final class ClaimWords {
         String span = t.quantity() == Quantity.TREND_SINCE_BREAK ? "since " + f.period(t.from())
                 : t.qualification(QualifyReason.SPANS_BREAKS).isPresent() ? "whole period, across " + breaks()
                 : "whole period";
-        String evidence = "Sen slope, " + t.pValue().map(f::pValue).orElse("");
+        String evidence = (t.unit() == Claim.SizeUnit.PERCENT_PER_YEAR ? "of the average level; " : "") + "Sen slope, "
+                + t.pValue().map(f::pValue).orElse("");
         if (!t.said()) {
             return new String[] {"not stated", span + "; the latest year went the other way"};
         }

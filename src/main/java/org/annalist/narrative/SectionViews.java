@@ -86,10 +86,10 @@ final class SectionViews {
                 multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years, formFromMeasure());
     }
 
-    /** The additive form follows from the measure (a rate, a temperature), not from the swing. */
+    /** The additive form follows from something other than a swing seen not to grow (the measure, a level too stable to tell). */
     private boolean formFromMeasure() {
-        return findings.form().reason() == FormChoice.Reason.INTERVAL_SCALE
-                || findings.form().reason() == FormChoice.Reason.RATE_IN_POINTS;
+        // only a swing seen not to grow with the level says "keeps its size"; every other reason is given as it is
+        return findings.form().reason() != FormChoice.Reason.SWING_INDEPENDENT_OF_LEVEL;
     }
 
     BriefView.CycleView cycle() {
@@ -218,10 +218,19 @@ final class SectionViews {
                 ytd == null ? "" : change(ytd, level), ytd == null ? "" : f.value(ytd.total()),
                 rolling == null ? "" : change(rolling, level), rolling == null ? "" : f.value(rolling.total()), rank,
                 i.record() == IndicatorsFinding.Extreme.HIGH, i.record() == IndicatorsFinding.Extreme.LOW,
-                i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) ? ""
+                i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) || oneOffAtTheEnd() ? ""
                         : f.signedPercent(i.seasonallyAdjustedChangePct()),
                 findings.calendar() == null ? List.of()
                         : findings.calendar().notes().stream().map(CalendarSentences::of).map(Typography::printed).toList(), !i.flagged().isEmpty());
+    }
+
+    /**
+     * Whether the latest period or the one before it is a one-off: the seasonally adjusted change
+     * between them would then measure the one-off, not the level, so it is not stated.
+     */
+    private boolean oneOffAtTheEnd() {
+        Period last = series.end();
+        return findings.outliers().stream().anyMatch(o -> o.period().equals(last) || o.period().equals(last.plus(-1)));
     }
 
     /** A change as a brief states it: in %, percentage points or the series' units, by {@link MeasureWords}. */
