@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.Random;
+import org.annalist.analysis.calendar.Easter;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
@@ -153,7 +154,7 @@ final class PlantedSeries {
             // the holiday's nights spread evenly over the eight days before Easter Sunday (the usual
             // Easter regressor, Bell & Hillmer 1983; the window is from memory), so an early Easter
             // puts some or all of them in March
-            LocalDate easter = easterSunday(year0 + y);
+            LocalDate easter = Easter.sunday(year0 + y);   // its dates are checked in CalendarTest
             for (int d = 1; d <= 8; d++) {
                 int month = easter.minusDays(d).getMonthValue();
                 x[y * 12 + month - 1] *= 1 + effect / 8;
@@ -276,24 +277,5 @@ final class PlantedSeries {
             p = p.plus(1);
         }
         return builder.snapshot();
-    }
-
-    /** Easter Sunday in the Gregorian calendar (the anonymous algorithm, Meeus 1991, ch. 8; from memory). */
-    static LocalDate easterSunday(int year) {
-        int a = year % 19;
-        int b = year / 100;
-        int c = year % 100;
-        int d = b / 4;
-        int e = b % 4;
-        int f = (b + 8) / 25;
-        int g = (b - f + 1) / 3;
-        int h = (19 * a + b - d - g + 15) % 30;
-        int i = c / 4;
-        int k = c % 4;
-        int l = (32 + 2 * e + 2 * i - h - k) % 7;
-        int m = (a + 11 * h + 22 * l) / 451;
-        int month = (h + l - 7 * m + 114) / 31;
-        int day = (h + l - 7 * m + 114) % 31 + 1;
-        return LocalDate.of(year, month, day);
     }
 }
