@@ -1,5 +1,6 @@
 package org.annalist.findings;
 
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -7,6 +8,7 @@ import java.util.Locale;
 import java.util.Optional;
 import org.annalist.analysis.forecast.EtsModel;
 import org.annalist.analysis.forecast.Outlook;
+import org.annalist.analysis.forecast.YearSums;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
@@ -82,7 +84,7 @@ final class OutlookAnalysis {
         if (span != null) {
             double[] sum = f.sumOver(span[0], span[1]);
             int count = span[1] - span[0];
-            if (measure == LatestIndicators.Measure.FLOW) {
+            if (kind.summed()) {
                 total = new OutlookFinding.Span(sum[0], sum[1], sum[2]);
             } else {
                 average = new OutlookFinding.Span(sum[0] / count, sum[1] / count, sum[2] / count);
@@ -98,24 +100,23 @@ final class OutlookAnalysis {
                 total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats,
                 years.current(), years.change(), outlook.widened(),
                 tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null,
-                typicalYearError(outlook, period), months(lastPeriod, f, h, measure));
+                typicalYearError(outlook, period), months(lastPeriod, f, h, kind));
     }
 
     /** Daily data: every whole calendar month within the horizon, for a table a reader can print. */
-    private static List<OutlookFinding.Month> months(Period last, Outlook.Forecast f, int h,
-                                                     LatestIndicators.Measure measure) {
+    private static List<OutlookFinding.Month> months(Period last, Outlook.Forecast f, int h, Measure kind) {
         List<OutlookFinding.Month> months = new ArrayList<>();
         if (last.frequency().periodsPerYear() <= 53) {
             return months;
         }
-        boolean total = OutlookYears.summed(measure);
+        boolean total = kind.summed();
         int k = 0;
         while (k < h && last.plus(k + 1).startDate().getMonth() == last.startDate().getMonth()
                 && last.plus(k + 1).year() == last.year()) {
             k++; // the rest of the current month is printed day by day
         }
         while (k < h) {
-            java.time.LocalDate first = last.plus(k + 1).startDate();
+            LocalDate first = last.plus(k + 1).startDate();
             int end = k;
             while (end < h && last.plus(end + 1).startDate().getMonth() == first.getMonth()) {
                 end++;
@@ -123,8 +124,8 @@ final class OutlookAnalysis {
             if (end == h && last.plus(end + 1).startDate().getMonth() == first.getMonth()) {
                 break; // the horizon ends inside this month
             }
-            double[] v = org.annalist.analysis.forecast.YearSums.withLimits(f,
-                    new org.annalist.analysis.forecast.YearSums.Year(0, k, end, total ? 1 : end - k));
+            double[] v = YearSums.withLimits(f,
+                    new YearSums.Year(0, k, end, total ? 1 : end - k));
             months.add(new OutlookFinding.Month(Period.month(first.getYear(), first.getMonthValue()), total, v[0], v[2],
                     v[3], v[1], v[4]));
             k = end;

@@ -2,7 +2,6 @@ package org.annalist.findings;
 
 import org.annalist.analysis.forecast.Outlook;
 import org.annalist.analysis.forecast.YearSums;
-import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 
@@ -65,11 +64,6 @@ final class OutlookYears {
         return new Years(currentYear, new OutlookFinding.YearChange(year + 1, year,
                 withPct ? 100 * pct.mean() : null, withPct ? 100 * pct.lo80() : null,
                 withPct ? 100 * pct.hi80() : null, d.mean(), d.lo80(), d.hi80(), same));
-    }
-
-    /** A year of a flow is its total; of anything else, its mean. */
-    static boolean summed(LatestIndicators.Measure measure) {
-        return measure == LatestIndicators.Measure.FLOW;
     }
 
 }

@@ -165,19 +165,17 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *                      the values are not all positive); {@code rise} gives its direction
      * @param step          the break is reported as a step in level
      * @param slope         the break is reported as a change of slope ({@code slopeBefore} → {@code slopeAfter}
-     *                      in units a year; {@code slopeRise}: the slope went up)
-     * @param sloped        the regimes were fitted as lines (else as levels, whose slopes are zero)
+     *                      a year, each with its unit)
      * @param drifted       the regime before this break is the previous break's and its line moved from
-     *                      {@code previousAfter} (at {@code previousPeriod}) to {@code before}
+     *                      {@code previousAfter} to {@code before}
      * @param overall       on the last of two or more breaks: the ratio of fitted levels from just before the
      *                      first break ({@code firstBefore}, {@code firstPeriod}) to just after this one,
      *                      without sign ({@code overallRise} its direction); else empty
      */
     public record BreakRow(String period, String from, String to, boolean onePeriod, String before, String after,
                            String change, boolean rise, String statistic, String pValue, boolean provisional,
-                           boolean step, boolean slope, boolean sloped, String slopeBefore, String slopeAfter,
-                           boolean slopeRise, boolean drifted, String previousAfter,
-                           String previousPeriod, String overall, boolean overallRise, String firstBefore,
+                           boolean step, boolean slope, String slopeBefore, String slopeAfter, boolean drifted,
+                           String previousAfter, String overall, boolean overallRise, String firstBefore,
                            String firstPeriod) {
     }
 

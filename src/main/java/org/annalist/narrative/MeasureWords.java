@@ -55,10 +55,6 @@ final class MeasureWords {
         return measure;
     }
 
-    Scale scale() {
-        return scale;
-    }
-
     /** Whether changes are given in %. */
     boolean percent() {
         return scale == Scale.PERCENT;
@@ -100,11 +96,6 @@ final class MeasureWords {
     String size(double change, Double changePct) {
         return percent() ? (changePct == null ? "" : f.percent(Math.abs(changePct)))
                 : f.value(Math.abs(change)) + differenceUnit();
-    }
-
-    /** Whether a change rounds to nothing at the precision it is written in. */
-    boolean rounded(double change, Double changePct) {
-        return percent() ? changePct != null && Math.abs(changePct) < 0.05 : !f.value(Math.abs(change)).matches(".*[1-9].*");
     }
 
     /** The sentence that says once how the series is treated. */

@@ -116,7 +116,6 @@ final class SectionViews {
     List<BriefView.BreakRow> breaks() {
         List<BriefView.BreakRow> rows = new ArrayList<>();
         List<BreakFinding> all = findings.breaks();
-        boolean sloped = findings.breakMethod().levelAndSlope();
         for (int j = 0; j < all.size(); j++) {
             BreakFinding b = all.get(j);
             BreakFinding previous = j == 0 ? null : all.get(j - 1);
@@ -129,11 +128,9 @@ final class SectionViews {
                     f.period(b.ci95().get(1)), b.ci95().get(0).equals(b.ci95().get(1)),
                     f.value(b.levelBefore()), f.value(b.levelAfter()), size(b.levelBefore(), b.levelAfter()),
                     b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
-                    b.kind().step(), b.kind().slope(), sloped, slope(b.slopeBefore(), b.levelBefore()),
-                    slope(b.slopeAfter(), b.levelAfter()), b.slopeAfter() > b.slopeBefore(),
-                    drifted,
+                    b.kind().step(), b.kind().slope(), slope(b.slopeBefore(), b.levelBefore()),
+                    slope(b.slopeAfter(), b.levelAfter()), drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
-                    previous == null ? "" : f.period(previous.period()),
                     overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
                     f.value(first.levelBefore()), f.period(first.period())));
         }
@@ -152,10 +149,6 @@ final class SectionViews {
         return f.signedSignificant(perYear) + measure.differenceUnit();
     }
 
-    /**
-     * The size of a move from one fitted level to another, without sign: the ratio of the levels
-     * in % when the values are all positive (so that moves compound, never add), else in units.
-     */
     /** The size of a move from one fitted level to another, without sign: in %, points or units as the measure has it. */
     private String size(double from, double to) {
         return measure.size(to - from, from > 0 ? 100 * (to / from - 1) : null);
@@ -215,8 +208,8 @@ final class SectionViews {
         }
         return new BriefView.ThisPeriod(true, level,
                 ytd == null ? "" : f.period(ytd.from()), ytd == null ? "" : f.period(ytd.to()),
-                ytd == null ? "" : change(ytd, level), ytd == null ? "" : f.value(ytd.total()),
-                rolling == null ? "" : change(rolling, level), rolling == null ? "" : f.value(rolling.total()), rank,
+                ytd == null ? "" : change(ytd), ytd == null ? "" : f.value(ytd.total()),
+                rolling == null ? "" : change(rolling), rolling == null ? "" : f.value(rolling.total()), rank,
                 i.record() == IndicatorsFinding.Extreme.HIGH, i.record() == IndicatorsFinding.Extreme.LOW,
                 i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) || oneOffAtTheEnd() ? ""
                         : f.signedPercent(i.seasonallyAdjustedChangePct()),
@@ -234,7 +227,7 @@ final class SectionViews {
     }
 
     /** A change as a brief states it: in %, percentage points or the series' units, by {@link MeasureWords}. */
-    private String change(IndicatorsFinding.Span s, boolean level) {
+    private String change(IndicatorsFinding.Span s) {
         return measure.percent() && s.changePct() == null ? "" : measure.signedChange(s.change(), s.changePct());
     }
 

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import org.junit.jupiter.api.Test;
 
 /** The appendix prints the version the build wrote into the manifest, never Maven's SNAPSHOT qualifier. */
+// Invented version strings; the expected output is the rule stated in DEVELOPERS.md (a -SNAPSHOT is a development build).
 class VersionTest {
 
     @Test

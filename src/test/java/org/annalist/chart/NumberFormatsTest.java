@@ -4,7 +4,11 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import org.junit.jupiter.api.Test;
 
-/** Axis ticks and bar labels in the text's typography (see narrative.Formats): true minus, no signed zero. */
+/**
+ * Axis ticks and bar labels in the text's typography (see narrative.Formats): true minus, no signed zero.
+ * Expected strings: the number as written by hand under that convention (U+2212 for minus, comma
+ * thousands, half-up at the printed decimals; common typesetting practice, no source).
+ */
 class NumberFormatsTest {
 
     @Test

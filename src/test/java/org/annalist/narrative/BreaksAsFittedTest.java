@@ -67,7 +67,7 @@ class BreaksAsFittedTest {
         BreakFinding b = f.breaks().get(0);
         assertThat(b.kind()).isEqualTo(BreakKind.SLOPE);
         assertThat(b.period()).isBetween(START.plus(66), START.plus(78));
-        assertThat(b.slopeAfter() - b.slopeBefore()).isCloseTo(10_000 * growth, within(350.0));
+        assertThat(b.slopeAfter() - b.slopeBefore()).isCloseTo(10_000 * growth, within(350.0));   // our tolerance: about 3 % of the planted slope change
         assertThat(Math.abs(b.changePct())).isLessThan(3.0);
         String notes = AnalystNotes.of(f);
         assertThat(notes).contains("change of slope").doesNotContain("step in level");
@@ -101,8 +101,8 @@ class BreaksAsFittedTest {
         assertThat(f.episodes()).hasSize(1);
         Episode e = f.episodes().get(0);
         assertThat(e.rise()).isFalse();
-        assertThat(e.stepPct()).isCloseTo(-40, within(4.0));
-        assertThat(e.returnedShare()).isCloseTo(0.25, within(0.08));
+        assertThat(e.stepPct()).isCloseTo(-40, within(4.0));   // planted −40 %, our tolerance
+        assertThat(e.returnedShare()).isCloseTo(0.25, within(0.08));   // our tolerance for the planted quarter, with noise
         assertThat(Terms.shareOfTheWay(e.returnedShare())).isEqualTo("about a quarter of the way");
         String notes = AnalystNotes.of(f).toLowerCase(java.util.Locale.ROOT);
         assertThat(notes).contains("fell ").doesNotContain("collapse", "recover", "regain", "crash");

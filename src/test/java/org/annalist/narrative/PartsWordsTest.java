@@ -19,6 +19,7 @@ class PartsWordsTest {
 
     private static final Formats F = Formats.forValues(new double[] {1000}, Locale.ENGLISH);
 
+    /** Invented months: 500 + 300 + 200 = 1,000 where all are present; March and April have parts missing (planted). */
     @Test
     void theUncheckedPeriodsAreNamedWithWhatWasMissing() {
         double n = Double.NaN;

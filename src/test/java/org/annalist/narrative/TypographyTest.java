@@ -8,6 +8,8 @@ import org.junit.jupiter.api.Test;
  * Sentences built with {@code String.format} (the calendar notes, the plain-text notes of
  * {@code analyze}) follow the brief's sign convention (see {@link Formats}).
  */
+// Inputs are invented sentences in the notes' form; the expected strings are the same sentences set by
+// hand under the project's convention (true minus, no signed zero, a no-break space before %).
 class TypographyTest {
 
     @Test

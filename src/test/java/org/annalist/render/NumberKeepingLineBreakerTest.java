@@ -6,6 +6,8 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
+// The expected pieces are the line-break opportunities UAX #14 gives the invented sentence (break after
+// a space, none inside a number or after "("), worked out by hand.
 class NumberKeepingLineBreakerTest {
 
     private static List<String> pieces(String text) {
