@@ -38,17 +38,27 @@ final class NumberCells {
     }
 
     static boolean isMissingMarker(String cell) {
+        if (plainDigits(cell) >= 0) {
+            return false;
+        }
         return MISSING_MARKERS.contains(cell.toLowerCase(Locale.ROOT)) || missingWithFlags(cell).isPresent();
     }
 
     /** True when the cell has the shape of a number, whatever its decimal mark. */
     static boolean looksNumeric(String cell) {
+        if (plainDigits(cell) >= 0) {
+            return true;
+        }
         Matcher m = NUMBER.matcher(cell);
         return m.matches() && knownFlags(m).isPresent();
     }
 
     /** The decimal mark that the digits of {@code cell} prove, if any. */
     static Evidence evidence(String cell) {
+        int point = plainDigits(cell);
+        if (point == 0) {
+            return Evidence.NONE;
+        }
         Matcher m = NUMBER.matcher(cell);
         if (!m.matches()) {
             return Evidence.NONE;
@@ -84,6 +94,10 @@ final class NumberCells {
      * @return the value, or empty with {@code why} filled when the cell is no number in that convention
      */
     static Optional<Cell> parse(String cell, DecimalMark mark, StringBuilder why) {
+        int point = plainDigits(cell);
+        if (point == 0 || (point == 1 && mark == DecimalMark.POINT)) {
+            return Optional.of(new Cell(Double.parseDouble(cell), Set.of(), false));   // the common case, read directly
+        }
         if (MISSING_MARKERS.contains(cell.toLowerCase(Locale.ROOT))) {
             return Optional.of(new Cell(Double.NaN, Set.of(), false));
         }
@@ -113,6 +127,30 @@ final class NumberCells {
             value = -value;
         }
         return Optional.of(new Cell(value, flags.get(), !m.group(3).isEmpty()));
+    }
+
+    /**
+     * For the commonest cells, a shortcut past the patterns: 0 for an optional minus and digits only
+     * ({@code -1234}), 1 for digits with one point between digits ({@code 12.5}), -1 for anything else.
+     */
+    private static int plainDigits(String cell) {
+        int length = cell.length();
+        int start = length > 1 && cell.charAt(0) == '-' ? 1 : 0;
+        if (length == start || length > 15) {
+            return -1;
+        }
+        int points = 0;
+        for (int i = start; i < length; i++) {
+            char c = cell.charAt(i);
+            if (c == '.') {
+                if (points++ > 0 || i == start || i == length - 1) {
+                    return -1;
+                }
+            } else if (c < '0' || c > '9') {
+                return -1;
+            }
+        }
+        return points;
     }
 
     /** Plain digits with '.' as decimal point, or null when the grouping is not in threes. */

@@ -40,14 +40,15 @@ final class PeriodColumn {
     }
 
     static Resolved resolve(List<Cell> cells, DateOrder requestedOrder, ProblemLog log) {
-        List<PeriodCells.Parsed> parsed = new ArrayList<>(cells.size());
-        for (Cell cell : cells) {
+        CompactLists.ParsedList parsed = new CompactLists.ParsedList(cells.size());
+        for (int i = 0; i < cells.size(); i++) {
+            Cell cell = cells.get(i);
             Optional<PeriodCells.Parsed> p = PeriodCells.parse(cell.text());
             if (p.isEmpty()) {
                 log.error(cell.line(), cell.column(), PeriodCells.describeFailure(cell.text())
                         + "; expected a date or period such as 2024-03, 2024-Q1 or 2024-03-01");
             }
-            parsed.add(p.orElse(null));
+            parsed.set(i, p.orElse(null));
         }
         String format = parsed.stream().filter(p -> p != null).map(PeriodCells.Parsed::format).distinct()
                 .collect(Collectors.joining(", "));
@@ -57,13 +58,18 @@ final class PeriodColumn {
         }
         boolean dated = parsed.stream().anyMatch(p -> p != null && !(p instanceof PeriodCells.Fixed));
         if (!dated) {
-            List<Period> periods = parsed.stream().map(p -> p == null ? null : ((PeriodCells.Fixed) p).period()).toList();
-            Frequency frequency = periods.stream().filter(p -> p != null).findFirst().orElseThrow().frequency();
+            PeriodCells.Fixed firstFixed = (PeriodCells.Fixed) parsed.stream().filter(p -> p != null).findFirst().orElseThrow();
+            Frequency frequency = firstFixed.period().frequency();
+            CompactLists.PeriodList periods = new CompactLists.PeriodList(frequency, cells.size());
+            for (int i = 0; i < cells.size(); i++) {
+                PeriodCells.Parsed p = parsed.get(i);
+                periods.set(i, p == null ? null : ((PeriodCells.Fixed) p).period());
+            }
             return new Resolved(periods, frequency, format, null);
         }
         DateOrder order = parsed.stream().anyMatch(p -> p instanceof PeriodCells.AmbiguousDay)
                 ? settleOrder(cells, parsed, requestedOrder, log) : null;
-        List<LocalDate> dates = new ArrayList<>(cells.size());
+        CompactLists.DateList dates = new CompactLists.DateList(cells.size());
         for (int i = 0; i < cells.size(); i++) {
             PeriodCells.Parsed p = parsed.get(i);
             Optional<LocalDate> date = p == null ? Optional.empty()
@@ -72,12 +78,16 @@ final class PeriodColumn {
                 log.error(cells.get(i).line(), cells.get(i).column(), "'" + cells.get(i).text()
                         + "' is not a date when read " + describe(order) + "; expected the same day/month order in every row");
             }
-            dates.add(date.orElse(null));
+            dates.set(i, date.orElse(null));
         }
-        TreeSet<LocalDate> distinct = dates.stream().filter(d -> d != null).collect(Collectors.toCollection(TreeSet::new));
-        Frequency frequency = frequencyOfDates(distinct).orElseThrow(() -> log.fatal(cells.get(0).line(), cells.get(0).column(),
-                spacingMessage(distinct)));
-        List<Period> periods = dates.stream().map(d -> d == null ? null : Period.containing(frequency, d)).toList();
+        long[] distinct = dates.distinctSorted();
+        Frequency frequency = frequencyOfDays(distinct).orElseThrow(() -> log.fatal(cells.get(0).line(), cells.get(0).column(),
+                spacingMessage(distinct.length)));
+        CompactLists.PeriodList periods = new CompactLists.PeriodList(frequency, cells.size());
+        for (int i = 0; i < cells.size(); i++) {
+            LocalDate d = dates.get(i);
+            periods.set(i, d == null ? null : Period.containing(frequency, d));
+        }
         String settledFormat = order == null ? format
                 : format.replace("NN/NN", order == DateOrder.MONTH_FIRST ? "MM/DD" : "DD/MM")
                         .replace("NN-NN", order == DateOrder.MONTH_FIRST ? "MM-DD" : "DD-MM");
@@ -90,17 +100,17 @@ final class PeriodColumn {
      * calendar business-daily.
      */
     static Optional<Frequency> frequencyOfDates(TreeSet<LocalDate> dates) {
-        if (dates.size() < 2) {
+        return frequencyOfDays(dates.stream().mapToLong(LocalDate::toEpochDay).toArray());
+    }
+
+    /** As {@link #frequencyOfDates}, for distinct epoch days in increasing order. */
+    private static Optional<Frequency> frequencyOfDays(long[] days) {
+        if (days.length < 2) {
             return Optional.empty();
         }
-        long[] gaps = new long[dates.size() - 1];
-        LocalDate previous = null;
-        int g = 0;
-        for (LocalDate d : dates) {
-            if (previous != null) {
-                gaps[g++] = d.toEpochDay() - previous.toEpochDay();
-            }
-            previous = d;
+        long[] gaps = new long[days.length - 1];
+        for (int g = 0; g < gaps.length; g++) {
+            gaps[g] = days[g + 1] - days[g];
         }
         Arrays.sort(gaps);
         long median = gaps[gaps.length / 2];
@@ -113,9 +123,9 @@ final class PeriodColumn {
         } else if (median == 7) {
             return Optional.of(Frequency.WEEKLY);
         } else if (median <= 3) {
-            boolean weekendSeen = dates.stream().anyMatch(d -> d.getDayOfWeek() == DayOfWeek.SATURDAY
-                    || d.getDayOfWeek() == DayOfWeek.SUNDAY);
-            long spanDays = dates.last().toEpochDay() - dates.first().toEpochDay() + 1;
+            boolean weekendSeen = Arrays.stream(days).mapToObj(LocalDate::ofEpochDay).anyMatch(d -> d.getDayOfWeek()
+                    == DayOfWeek.SATURDAY || d.getDayOfWeek() == DayOfWeek.SUNDAY);
+            long spanDays = days[days.length - 1] - days[0] + 1;
             return Optional.of(!weekendSeen && spanDays >= 14 ? Frequency.BUSINESS_DAILY : Frequency.DAILY);
         }
         return Optional.empty();
@@ -123,29 +133,34 @@ final class PeriodColumn {
 
     /** Reports the rows whose frequency differs from most rows' and sets them aside (null). */
     private static void dropMixedKinds(List<Cell> cells, List<PeriodCells.Parsed> parsed, ProblemLog log) {
-        Map<String, List<Integer>> byKind = new java.util.LinkedHashMap<>();
-        for (int i = 0; i < parsed.size(); i++) {
-            PeriodCells.Parsed p = parsed.get(i);
+        Map<String, Integer> byKind = new java.util.LinkedHashMap<>();
+        for (PeriodCells.Parsed p : parsed) {
             if (p != null) {
-                String kind = p instanceof PeriodCells.Fixed f ? f.period().frequency().label() : "dated";
-                byKind.computeIfAbsent(kind, k -> new ArrayList<>()).add(i);
+                byKind.merge(kindOf(p), 1, Integer::sum);
             }
         }
         if (byKind.size() <= 1) {
             return;
         }
-        String majority = byKind.entrySet().stream().max(Map.Entry.comparingByValue((a, b) -> a.size() - b.size()))
-                .orElseThrow().getKey();
-        byKind.forEach((kind, rows) -> {
-            if (!kind.equals(majority)) {
-                for (int i : rows) {
+        String majority = byKind.entrySet().stream().max(Map.Entry.comparingByValue()).orElseThrow().getKey();
+        for (String kind : byKind.keySet()) {
+            if (kind.equals(majority)) {
+                continue;
+            }
+            for (int i = 0; i < parsed.size(); i++) {
+                PeriodCells.Parsed p = parsed.get(i);
+                if (p != null && kindOf(p).equals(kind)) {
                     parsed.set(i, null);
                     log.error(cells.get(i).line(), cells.get(i).column(), "mixed frequencies: '" + cells.get(i).text()
                             + "' is " + article(kind) + " period while most rows are " + majority
                             + "; expected one frequency per file");
                 }
             }
-        });
+        }
+    }
+
+    private static String kindOf(PeriodCells.Parsed p) {
+        return p instanceof PeriodCells.Fixed f ? f.period().frequency().label() : "dated";
     }
 
     private static DateOrder settleOrder(List<Cell> cells, List<PeriodCells.Parsed> parsed, DateOrder requested,
@@ -192,21 +207,26 @@ final class PeriodColumn {
 
     /** True when reading the dates in {@code order} gives a calendar without large holes. */
     private static boolean regular(List<PeriodCells.Parsed> parsed, DateOrder order) {
-        TreeSet<LocalDate> dates = new TreeSet<>();
+        long[] days = new long[parsed.size()];
+        int n = 0;
         for (PeriodCells.Parsed p : parsed) {
             if (p == null) {
                 continue;
             }
-            dates.add(p instanceof PeriodCells.AmbiguousDay a ? a.as(order).orElseThrow() : ((PeriodCells.Day) p).date());
+            days[n++] = (p instanceof PeriodCells.AmbiguousDay a ? a.as(order).orElseThrow() : ((PeriodCells.Day) p).date())
+                    .toEpochDay();
         }
-        Optional<Frequency> frequency = frequencyOfDates(dates);
+        long[] distinct = CompactLists.distinctSorted(Arrays.copyOf(days, n));
+        Optional<Frequency> frequency = frequencyOfDays(distinct);
         if (frequency.isEmpty()) {
             return false;
         }
-        Period first = Period.containing(frequency.get(), dates.first());
-        Period last = Period.containing(frequency.get(), dates.last());
-        long distinctPeriods = dates.stream().map(d -> Period.containing(frequency.get(), d)).distinct().count();
-        return distinctPeriods == dates.size() && distinctPeriods >= REGULAR_COVERAGE * (first.until(last) + 1);
+        Period first = Period.containing(frequency.get(), LocalDate.ofEpochDay(distinct[0]));
+        Period last = Period.containing(frequency.get(), LocalDate.ofEpochDay(distinct[distinct.length - 1]));
+        long[] periods = Arrays.stream(distinct).map(d -> Period.containing(frequency.get(), LocalDate.ofEpochDay(d)).index())
+                .toArray();
+        long distinctPeriods = CompactLists.distinctSorted(periods).length;
+        return distinctPeriods == distinct.length && distinctPeriods >= REGULAR_COVERAGE * (first.until(last) + 1);
     }
 
     private static String describe(DateOrder order) {
@@ -217,8 +237,8 @@ final class PeriodColumn {
         return kind.startsWith("a") ? "an " + kind : "a " + kind;
     }
 
-    private static String spacingMessage(TreeSet<LocalDate> dates) {
-        if (dates.size() < 2) {
+    private static String spacingMessage(int distinctDates) {
+        if (distinctDates < 2) {
             return "only one distinct date; expected at least two dates to tell the frequency";
         }
         return "the dates are unevenly spaced; expected daily, weekly, monthly, quarterly or annual dates";

@@ -1,13 +1,12 @@
 package org.annalist.ingest;
 
-import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.EnumSet;
+import java.util.HashMap;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -17,9 +16,9 @@ import java.util.Set;
 import org.annalist.ingest.CsvRows.Row;
 import org.annalist.ingest.TableShape.Column;
 import org.annalist.ingest.TableShape.Role;
+import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
-import org.annalist.series.SeriesBuilder;
 import org.annalist.series.ValueFlag;
 
 /**
@@ -43,24 +42,34 @@ public final class SeriesFileReader {
      * @throws DataProblemException when the file cannot be read or holds no usable series
      */
     public ReadResult read(Path file) {
-        String name = file.toString();
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (NoSuchFileException e) {
-            throw new DataProblemException(new DataProblem(name, 0, 0, "no such file; expected a CSV file"));
-        } catch (IOException e) {
-            throw new DataProblemException(new DataProblem(name, 0, 0, "cannot be read (" + e.getMessage() + ")"));
-        }
-        return read(name, bytes);
+        ProblemLog log = new ProblemLog(file.toString());
+        // The file's bytes are referred to only while they are split into rows, and then let go.
+        return read(log, rows(log, InputFiles.read(file, options.maxInputBytes(), "a CSV file")));
     }
 
     /** Reads {@code bytes} as the contents of a file called {@code fileName} (used in messages). */
     public ReadResult read(String fileName, byte[] bytes) {
         ProblemLog log = new ProblemLog(fileName);
+        return read(log, rows(log, bytes));
+    }
+
+    /** The rows of a file and the facts of its text. */
+    private record Text(String sha256, String charsetName, char delimiter, List<Row> rows) {
+    }
+
+    private static Text rows(ProblemLog log, byte[] bytes) {
+        String sha256 = sha256(bytes);
         TextDecoding.Decoded text = TextDecoding.decode(bytes, log);
-        char delimiter = CsvRows.detectDelimiter(text.text());
-        List<Row> rows = Transposed.unfold(CsvRows.parse(text.text(), delimiter, log), log);
+        char delimiter = CsvRows.detectDelimiter(text.reader());
+        List<Row> rows = Transposed.unfold(CsvRows.parse(text.reader(), delimiter, log,
+                CsvRows.Expected.of(bytes, text.offset(), delimiter)), log);
+        return new Text(sha256, text.charsetName(), delimiter, rows);
+    }
+
+    private ReadResult read(ProblemLog log, Text text) {
+        String fileName = log.file();
+        char delimiter = text.delimiter();
+        List<Row> rows = text.rows();
         TableShape.Shape shape = TableShape.locate(rows, log);
         Column periodColumn = shape.periodColumn();
         List<Column> valueColumns = shape.with(Role.VALUE);
@@ -69,9 +78,19 @@ public final class SeriesFileReader {
                     + "of values beside the " + (periodColumn.name().isEmpty() ? "period" : "'" + periodColumn.name() + "'")
                     + " column");
         }
-        List<PeriodColumn.Cell> periodCells = shape.body().stream()
-                .map(r -> new PeriodColumn.Cell(r.line(), r.column(periodColumn.index()), r.cell(periodColumn.index())))
-                .toList();
+        List<Row> body = shape.body();
+        List<PeriodColumn.Cell> periodCells = new AbstractList<>() {
+            @Override
+            public PeriodColumn.Cell get(int index) {
+                Row r = body.get(index);
+                return new PeriodColumn.Cell(r.line(), r.column(periodColumn.index()), r.cell(periodColumn.index()));
+            }
+
+            @Override
+            public int size() {
+                return body.size();
+            }
+        };
         PeriodColumn.Resolved periods = PeriodColumn.resolve(periodCells, options.dateOrder(), log);
         Optional<DecimalMark> mark = decimalMark(shape, valueColumns, log);
 
@@ -96,8 +115,13 @@ public final class SeriesFileReader {
                 Period cellPeriod = grid.isPresent() ? grid.get().period(period.year(), column.index()) : period;
                 String seriesName = grid.isPresent() ? (key.isEmpty() ? fallbackName : key)
                         : seriesName(key, column, valueColumns.size(), fallbackName);
-                Collector collector = collectors.computeIfAbsent(seriesName, n -> new Collector(n,
-                        unitOf(column, unitColumn.map(u -> row.cell(u.index())), !keys.isEmpty())));
+                Collector collector = collectors.computeIfAbsent(seriesName, n -> {
+                    Collector c = new Collector(n, unitOf(column, unitColumn.map(u -> row.cell(u.index())), !keys.isEmpty()));
+                    if (keys.isEmpty() && grid.isEmpty() && periods.periods() instanceof CompactLists.PeriodList all) {
+                        all.range().ifPresent(range -> c.reserve(range[0], range[1]));   // a column per series: one span
+                    }
+                    return c;
+                });
                 if (!collector.claim(cellPeriod, row.line(), row.column(column.index()), log)) {
                     continue;
                 }
@@ -128,7 +152,7 @@ public final class SeriesFileReader {
             series = series.stream().map(s -> Aggregator.aggregate(s, to, log)).toList();
         }
         log.throwIfErrors();
-        return new ReadResult(fileName, sha256(bytes), text.charset(), delimiter, shape.body().size(),
+        return new ReadResult(fileName, text.sha256(), text.charsetName(), delimiter, shape.body().size(),
                 keys.isEmpty() ? "wide" : "long", periods.format(), Optional.ofNullable(periods.dateOrder()), mark,
                 options.aggregation(), series, log.warnings());
     }
@@ -236,12 +260,23 @@ public final class SeriesFileReader {
         }
     }
 
-    /** The values of one series as they are met in the file, checked for repeated periods. */
+    /**
+     * The values of one series as they are met in the file, checked for repeated periods: kept in
+     * arrays indexed by period from the earliest seen, so that memory follows the values kept.
+     */
     private static final class Collector {
         private final String name;
         private final String unit;
-        private final Map<Period, Integer> lineOf = new LinkedHashMap<>();
-        private SeriesBuilder builder;
+        private final List<Set<ValueFlag>> flagSets = new ArrayList<>(List.of(Set.of()));
+        private final Map<Set<ValueFlag>, Integer> flagSetIds = new HashMap<>(Map.of(Set.of(), 0));
+        private Frequency frequency;
+        private long base;             // the period index of slot 0
+        private int[] lines = new int[0];    // the line that claimed a period (0: none)
+        private double[] values = new double[0];
+        private int[] flagIds = new int[0];
+        private boolean[] stored = new boolean[0];
+        private long lowest = Long.MAX_VALUE;
+        private long highest = Long.MIN_VALUE;
         private Period previous;
         private int firstOutOfOrderLine;
         private boolean percent;
@@ -252,14 +287,22 @@ public final class SeriesFileReader {
             this.unit = unit;
         }
 
+        /** Makes room for the periods from {@code low} to {@code high} at once. */
+        void reserve(Period low, Period high) {
+            slot(low);
+            slot(high);
+        }
+
         /** Records that {@code line} holds {@code period}; false (and an error) when an earlier line did. */
         boolean claim(Period period, int line, int column, ProblemLog log) {
-            Integer earlier = lineOf.putIfAbsent(period, line);
-            if (earlier != null) {
+            int slot = slot(period);
+            int earlier = lines[slot];
+            if (earlier != 0) {
                 log.error(line, column, "period " + period + " appears again for series '" + name + "' (first on line "
                         + earlier + "); expected one row per period");
                 return false;
             }
+            lines[slot] = Math.max(line, 1);
             return true;
         }
 
@@ -270,10 +313,59 @@ public final class SeriesFileReader {
             previous = period;
             percent |= cell.percent();
             anyValue |= !Double.isNaN(cell.value());
-            if (builder == null) {
-                builder = Series.builder(name, period.frequency());
+            int slot = slot(period);
+            values[slot] = cell.value();
+            flagIds[slot] = flagSetIds.computeIfAbsent(flags, f -> {
+                flagSets.add(f);
+                return flagSets.size() - 1;
+            });
+            stored[slot] = true;
+            lowest = Math.min(lowest, period.index());
+            highest = Math.max(highest, period.index());
+        }
+
+        /** The slot of {@code period}, growing the arrays (towards earlier or later periods) to hold it. */
+        private int slot(Period period) {
+            if (frequency == null) {
+                frequency = period.frequency();
+                base = period.index();
             }
-            builder.put(period, cell.value(), flags);
+            long offset = period.index() - base;
+            if (offset < 0 || offset >= lines.length) {
+                long from = Math.min(base, period.index());
+                long to = Math.max(base + lines.length, period.index() + 1);
+                long capacity = Math.max(to - from, Math.min(2L * lines.length, Integer.MAX_VALUE - 16));
+                long newBase = offset < 0 ? to - capacity : from;
+                if (capacity > Integer.MAX_VALUE - 16) {
+                    throw new IllegalStateException("a series cannot span more than " + (Integer.MAX_VALUE - 16) + " periods");
+                }
+                int shift = (int) (base - newBase);
+                lines = grow(lines, (int) capacity, shift);
+                flagIds = grow(flagIds, (int) capacity, shift);
+                values = grow(values, (int) capacity, shift);
+                stored = grow(stored, (int) capacity, shift);
+                base = newBase;
+                offset = period.index() - base;
+            }
+            return (int) offset;
+        }
+
+        private static int[] grow(int[] old, int capacity, int shift) {
+            int[] grown = new int[capacity];
+            System.arraycopy(old, 0, grown, shift, old.length);
+            return grown;
+        }
+
+        private static double[] grow(double[] old, int capacity, int shift) {
+            double[] grown = new double[capacity];
+            System.arraycopy(old, 0, grown, shift, old.length);
+            return grown;
+        }
+
+        private static boolean[] grow(boolean[] old, int capacity, int shift) {
+            boolean[] grown = new boolean[capacity];
+            System.arraycopy(old, 0, grown, shift, old.length);
+            return grown;
         }
 
         Optional<Series> snapshot(ProblemLog log) {
@@ -284,8 +376,15 @@ public final class SeriesFileReader {
             if (firstOutOfOrderLine > 0) {
                 log.warn(firstOutOfOrderLine, 0, "rows of series '" + name + "' are not in time order; sorted them");
             }
+            int first = (int) (lowest - base);
+            int size = (int) (highest - lowest + 1);
+            double[] span = new double[size];
+            for (int i = 0; i < size; i++) {
+                span[i] = stored[first + i] ? values[first + i] : Double.NaN;
+            }
             // Empty cells before the first or after the last value (months not yet published) are not part of the span.
-            return Optional.of(builder.unit(unit.isEmpty() && percent ? "%" : unit).snapshot().trimmed());
+            return Optional.of(Series.of(name, unit.isEmpty() && percent ? "%" : unit, new Period(frequency, lowest), span,
+                    i -> flagSets.get(flagIds[first + i])).trimmed());
         }
     }
 }

@@ -1,7 +1,10 @@
 package org.annalist.ingest;
 
+import java.util.AbstractList;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -37,21 +40,58 @@ final class TableShape {
     private static final Pattern FLAG_HEADER = Pattern.compile("(?i)flags?|obs_flag|obs_status|status|note|footnote");
     private static final Pattern UNIT_IN_HEADER = Pattern.compile("(.*?)\\s*[(\\[]([^()\\[\\]]+)[)\\]]\\s*");
 
+    /**
+     * The layout (the period column, and what each other column holds) is settled on this many rows
+     * from the top; a column with nothing but missing markers there is looked at further down.
+     */
+    static final int LAYOUT_SAMPLE = 5000;
+
     private TableShape() {
     }
 
+    /** The rows that are not blank, as a view (a big file's rows are not copied). */
+    private static List<Row> nonBlank(List<Row> all) {
+        int[] kept = new int[Math.max(16, all.size())];
+        int count = 0;
+        for (int r = 0; r < all.size(); r++) {
+            if (!all.get(r).isBlank()) {
+                kept[count++] = r;
+            }
+        }
+        int size = count;
+        return new AbstractList<>() {
+            @Override
+            public Row get(int index) {
+                Objects.checkIndex(index, size);
+                return all.get(kept[index]);
+            }
+
+            @Override
+            public int size() {
+                return size;
+            }
+        };
+    }
+
     static Shape locate(List<Row> allRows, ProblemLog log) {
-        List<Row> rows = allRows.stream().filter(r -> !r.isBlank()).toList();
+        List<Row> rows = nonBlank(allRows);
         if (rows.isEmpty()) {
             throw log.fatal(0, 0, "the file is empty; expected a header row and rows of dates or periods with values");
         }
-        int width = rows.stream().mapToInt(TableShape::effectiveWidth).max().orElse(0);
-        int periodColumn = findPeriodColumn(rows, width, log);
+        int width = 0;
+        for (Row row : rows) {
+            width = Math.max(width, effectiveWidth(row));
+        }
+        int periodColumn = findPeriodColumn(rows.subList(0, Math.min(rows.size(), LAYOUT_SAMPLE)), width, log);
         int firstData = -1;
         int lastData = -1;
-        for (int r = 0; r < rows.size(); r++) {
+        for (int r = 0; r < rows.size() && firstData < 0; r++) {
             if (PeriodCells.parse(rows.get(r).cell(periodColumn)).isPresent()) {
-                firstData = firstData < 0 ? r : firstData;
+                firstData = r;
+            }
+        }
+        for (int r = rows.size() - 1; r >= 0 && lastData < 0; r--) {
+            if (PeriodCells.parse(rows.get(r).cell(periodColumn)).isPresent()) {
                 lastData = r;
             }
         }
@@ -72,7 +112,7 @@ final class TableShape {
         if (header.isPresent() && effectiveWidth(header.get()) > width) {
             width = effectiveWidth(header.get());
         }
-        return new Shape(header, List.copyOf(body), classify(header, body, width, periodColumn));
+        return new Shape(header, Collections.unmodifiableList(body), classify(header, body, width, periodColumn));
     }
 
     private static int findPeriodColumn(List<Row> rows, int width, ProblemLog log) {
@@ -114,8 +154,8 @@ final class TableShape {
             }
             int numeric = 0;
             int text = 0;
-            for (Row row : body) {
-                String cell = row.cell(c);
+            for (int r = 0; r < body.size() && (r < LAYOUT_SAMPLE || numeric + text == 0); r++) {
+                String cell = body.get(r).cell(c);
                 if (NumberCells.isMissingMarker(cell)) {
                     continue;
                 }

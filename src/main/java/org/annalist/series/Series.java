@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import java.util.function.IntFunction;
 
 /**
  * An immutable, regularly spaced time series: consecutive periods from {@link #start()}, one value
@@ -37,6 +38,18 @@ public final class Series {
         }
         this.values = values;
         this.flagBits = flagBits;
+    }
+
+    /**
+     * Consecutive values from {@code start} (missing as {@code NaN}), with the flags of each: what a
+     * reader that collects many values in arrays builds at once. The values are copied.
+     */
+    public static Series of(String name, String unit, Period start, double[] values, IntFunction<Set<ValueFlag>> flagsAt) {
+        int[] bits = new int[values.length];
+        for (int i = 0; i < bits.length; i++) {
+            bits[i] = ValueFlag.toBits(flagsAt.apply(i));
+        }
+        return new Series(name, unit, start, values.clone(), bits);
     }
 
     public static SeriesBuilder builder(String name, Frequency frequency) {
