@@ -29,7 +29,7 @@ public final class BriefPipeline {
      * @param file     the PDF
      * @param series   the series it is about, as analysed
      * @param findings what the analysis found, one per series
-     * @param warnings for the user (characters the brief's font lacks)
+     * @param warnings for the user: what was read ({@link ReadingWarnings}), characters the brief's font lacks
      */
     public record Made(Path file, List<Series> series, List<Findings> findings, List<String> warnings) {
         public Made {
@@ -63,13 +63,36 @@ public final class BriefPipeline {
      * @throws SelectionProblem     when the series cannot be selected as asked
      */
     public List<Findings> findings(Job job) {
+        return analysed(job).findings();
+    }
+
+    /**
+     * The findings of every series the job selects, with the warnings about what was read
+     * ({@link ReadingWarnings}).
+     *
+     * @param findings one per series, in order
+     * @param warnings the reader's warnings and those about the series, for the user
+     */
+    public record Analysed(List<Findings> findings, List<String> warnings) {
+        public Analysed {
+            findings = List.copyOf(findings);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /** As {@link #findings}, with the warnings ({@code analyze}). */
+    public Analysed analysed(Job job) {
         List<Holiday> holidays = holidays(job);
         SeriesFiles.ReadFile file = files.read(job.input());
         List<Findings> findings = new ArrayList<>();
+        List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));
         for (SeriesSelection.Wanted wanted : SeriesSelection.wanted(job.series(), file)) {
-            findings.add(analyse(job, SeriesSelection.select(job, file, wanted, true), holidays));
+            SeriesSelection.Selected selected = SeriesSelection.select(job, file, wanted, true);
+            Findings found = analyse(job, selected, holidays);
+            findings.add(found);
+            warnings.addAll(ReadingWarnings.ofSeries(selected.series(), found, job.analysis().holidays(), holidays));
         }
-        return findings;
+        return new Analysed(findings, warnings);
     }
 
     /**
@@ -124,16 +147,24 @@ public final class BriefPipeline {
         for (SeriesSelection.Selected s : selected) {
             findings.add(analyse(job, s, holidays));
         }
+        List<String> seriesWarnings = new ArrayList<>();
+        for (int i = 0; i < series.size(); i++) {
+            seriesWarnings.addAll(ReadingWarnings.ofSeries(series.get(i), findings.get(i), job.analysis().holidays(),
+                    holidays));
+        }
+        List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));
+        warnings.addAll(seriesWarnings);
         BriefWriter.Page page = new BriefWriter.Page(job.input(), file.read(), out.masthead(),
-                out.titleFor(job.series(), series.get(0)), generatedAt, output);
+                out.titleFor(job.series(), series.get(0)), generatedAt, output, seriesWarnings);
         if (out.combined().isPresent()) {
             BriefWriter.CombinedBrief combined = writer.combined(page, series, findings, out.combined().get());
             SideOutputs.write(combined, series, out.sideOutputs());
-            return new Made(combined.file(), series, findings, List.of());
+            return new Made(combined.file(), series, findings, warnings);
         }
         BriefWriter.Brief brief = writer.single(page, series.get(0), findings.get(0));
         SideOutputs.write(brief, series.get(0), out.sideOutputs());
-        return new Made(brief.file(), series, findings, brief.warnings());
+        warnings.addAll(brief.warnings());
+        return new Made(brief.file(), series, findings, warnings);
     }
 
     /** The analysis step: a derived ratio is analysed with its parts, whose sums its spans compare. */

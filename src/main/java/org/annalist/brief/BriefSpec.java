@@ -38,6 +38,7 @@ import java.util.Set;
  *     decimal_mark: comma                       # auto, point or comma (--decimal-mark)
  *     aggregate: month                          # week, month, quarter or year (--aggregate)
  *     aggregate_by: mean                        # sum or mean; needs aggregate (--aggregate-by)
+ *     max_input_mb: 1024                        # refuse a bigger data file (--max-input-mb; default 512)
  * </pre>
  *
  * Paths resolve against the spec's folder and may not leave its folder tree unless written as

@@ -64,9 +64,13 @@ final class BriefWriter {
      *
      * @param title       the title as this brief prints it
      * @param generatedAt resolved: the time the brief states as made
+     * @param notes       warnings about the series beside the reader's own (negative counts, holiday dates outside the data)
      */
     record Page(Job.Input input, ReadResult read, BriefOutput.MastheadChoices choices, String title,
-                Instant generatedAt, Path output) {
+                Instant generatedAt, Path output, List<String> notes) {
+        Page {
+            notes = List.copyOf(notes);
+        }
     }
 
     private final PdfRenderer renderer = new PdfRenderer();
@@ -75,7 +79,7 @@ final class BriefWriter {
     Brief single(Page page, Series series, Findings findings) {
         Fonts.registerWithAwt();
         Masthead masthead = masthead(page);
-        SourceFacts source = sourceFacts(page.read());
+        SourceFacts source = sourceFacts(page.read(), page.notes());
         List<String> warnings = new ArrayList<>();
         String missing = Fonts.missingGlyphs(String.join(" ", page.title(), page.choices().organisation(), series.name(),
                 series.unit(), source.file(), String.join(" ", source.notes())));
@@ -104,7 +108,7 @@ final class BriefWriter {
         Optional<PartsCheck> check = choices.total()
                 .flatMap(name -> series.stream().filter(s -> s.name().equals(name)).findFirst())
                 .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
-        MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read()), masthead, check,
+        MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read(), page.notes()), masthead, check,
                 choices.sortBy());
         String xhtml = new TemplateEngine(page.choices().templates())
                 .render(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
@@ -170,13 +174,13 @@ final class BriefWriter {
     }
 
     /** What the appendix says about the file and how it was read. */
-    static SourceFacts sourceFacts(ReadResult read) {
+    static SourceFacts sourceFacts(ReadResult read, List<String> notes) {
         SourceFacts.Reading reading = new SourceFacts.Reading(read.charset(), read.delimiterName(), read.layout(),
                 read.periodFormat(), read.dateOrder().map(o -> o.name().toLowerCase(Locale.ROOT).replace('_', '-')),
                 read.decimalMark().map(m -> m.name().toLowerCase(Locale.ROOT)),
                 read.aggregation().map(a -> a.target().toString()), read.aggregation().map(a -> a.method().label()));
         return new SourceFacts(Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading,
-                read.warnings().stream().map(DataProblem::toString).toList(), "");
+                java.util.stream.Stream.concat(read.warnings().stream().map(DataProblem::toString), notes.stream()).toList(), "");
     }
 
     /** The same input always gets the same PDF trailer ID, so that equal briefs are equal files. */

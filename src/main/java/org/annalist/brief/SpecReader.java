@@ -1,6 +1,8 @@
 package org.annalist.brief;
 
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
+import java.io.InputStreamReader;
 import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -19,7 +21,9 @@ import org.annalist.findings.Form;
 import org.annalist.findings.Measure;
 import org.annalist.findings.Analyst;
 import org.annalist.ingest.Aggregation;
+import org.annalist.ingest.DataProblemException;
 import org.annalist.ingest.DecimalMark;
+import org.annalist.ingest.InputFiles;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.narrative.Masthead;
 import org.annalist.narrative.MultiBriefViews;
@@ -36,7 +40,14 @@ public final class SpecReader {
     private static final Set<String> KEYS = Set.of("title", "organisation", "data", "series", "measure", "unit",
             "period", "paper", "language", "templates", "output", "generated_at", "horizon", "side_outputs", "combined",
             "total", "sort_by", "logo", "form", "per_day", "holidays", "date_order", "decimal_mark", "aggregate",
-            "aggregate_by");
+            "aggregate_by", "max_input_mb");
+
+    /** A Java array holds at most 2 GB, and so does the reader. */
+    static final long MAX_LIMIT_MEGABYTES = 2047;
+    /** The most briefs one spec may ask for: a monthly run of every series of a region, with room to spare. */
+    public static final int MAX_BRIEFS = 1000;
+    /** The largest spec file read: thousands of entries fit in a small fraction of it. */
+    static final long MAX_SPEC_BYTES = 4L * 1024 * 1024;
 
     private final Path spec;
     private final Path folder;
@@ -50,11 +61,22 @@ public final class SpecReader {
 
     /** @throws SpecProblem for the first mistake, at its line and column */
     public static BriefSpec read(Path spec) {
-        if (!Files.isRegularFile(spec)) {
+        if (!Files.exists(spec)) {
             throw new SpecProblem(spec, 1, 1, "no such file; expected a brief spec in YAML");
         }
+        byte[] bytes;
+        try {
+            bytes = InputFiles.read(spec, MAX_SPEC_BYTES, "a brief spec in YAML");
+        } catch (DataProblemException e) {
+            throw new SpecProblem(spec, 1, 1, e.problems().get(0).message());
+        }
+        try {
+            StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(bytes));
+        } catch (java.nio.charset.CharacterCodingException e) {
+            throw new SpecProblem(spec, 1, 1, "is not UTF-8 text; expected a spec saved as UTF-8");
+        }
         YamlTree.Node root;
-        try (Reader reader = Files.newBufferedReader(spec, StandardCharsets.UTF_8)) {
+        try (Reader reader = new InputStreamReader(new ByteArrayInputStream(bytes), StandardCharsets.UTF_8)) {
             root = YamlTree.read(spec, reader);
         } catch (IOException e) {
             throw new SpecProblem(spec, 1, 1, "cannot be read: " + e.getMessage());
@@ -71,6 +93,11 @@ public final class SpecReader {
         if (!(list instanceof YamlTree.Sequence briefs) || briefs.items().isEmpty()) {
             YamlTree.Node at = list == null ? top : list;
             throw new SpecProblem(spec, at.line(), at.column(), "expected 'briefs' with a list of one or more briefs");
+        }
+        if (briefs.items().size() > MAX_BRIEFS) {
+            YamlTree.Node over = briefs.items().get(MAX_BRIEFS);
+            throw new SpecProblem(spec, over.line(), over.column(), "the spec lists " + briefs.items().size()
+                    + " briefs; expected at most " + MAX_BRIEFS + " (split it into several specs)");
         }
         List<BriefSpec.Entry> entries = new ArrayList<>();
         for (YamlTree.Node item : briefs.items()) {
@@ -231,6 +258,20 @@ public final class SpecReader {
         }
         if (aggregate.isPresent()) {
             options = options.withAggregation(new Aggregation(aggregate.get(), by.orElse(Aggregation.Method.SUM)));
+        }
+        Optional<String> limit = values.optionalText(m, "max_input_mb");
+        if (limit.isPresent()) {
+            long megabytes;
+            try {
+                megabytes = Long.parseLong(limit.get());
+            } catch (NumberFormatException e) {
+                megabytes = -1;
+            }
+            if (megabytes < 1 || megabytes > MAX_LIMIT_MEGABYTES) {
+                throw values.problemAt(m.entries().get("max_input_mb"), "max_input_mb '" + limit.get()
+                        + "'; expected a whole number of megabytes from 1 to " + MAX_LIMIT_MEGABYTES);
+            }
+            options = options.withMaxInputBytes(InputFiles.megabytesToBytes(megabytes));
         }
         return options;
     }

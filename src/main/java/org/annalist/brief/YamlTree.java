@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.file.Path;
@@ -63,6 +64,7 @@ final class YamlTree {
         JsonLocation at = parser.currentTokenLocation();
         int line = at.getLineNr();
         int column = at.getColumnNr();
+        refuseAlias(spec, parser);
         switch (token) {
             case START_OBJECT -> {
                 Map<String, Node> entries = new LinkedHashMap<>();
@@ -70,6 +72,7 @@ final class YamlTree {
                 for (JsonToken t = parser.nextToken(); t != JsonToken.END_OBJECT; t = parser.nextToken()) {
                     String key = parser.currentName();
                     JsonLocation keyAt = parser.currentTokenLocation();
+                    refuseAlias(spec, parser);
                     if (entries.containsKey(key)) {
                         throw new SpecProblem(spec, keyAt.getLineNr(), keyAt.getColumnNr(), "'" + key
                                 + "' is given twice");
@@ -92,6 +95,18 @@ final class YamlTree {
             default -> {
                 return new Scalar(parser.getText(), token == JsonToken.VALUE_STRING, line, column);
             }
+        }
+    }
+
+    /**
+     * An alias ({@code *name}) would otherwise read as the text {@code name}, not as the anchored value;
+     * a spec is short enough to write each value where it is meant (and aliases can multiply a small file).
+     */
+    private static void refuseAlias(Path spec, JsonParser parser) throws IOException {
+        if (parser instanceof YAMLParser yaml && yaml.isCurrentAlias()) {
+            JsonLocation at = parser.currentTokenLocation();
+            throw new SpecProblem(spec, Math.max(1, at.getLineNr()), Math.max(1, at.getColumnNr()), "'*" + parser.getText()
+                    + "' is a YAML alias; aliases and anchors are not supported, expected the value itself");
         }
     }
 

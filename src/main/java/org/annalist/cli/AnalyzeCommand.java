@@ -57,7 +57,9 @@ final class AnalyzeCommand implements Callable<Integer> {
     public Integer call() {
         List<Findings> findings;
         try {
-            findings = new BriefPipeline().findings(job());
+            BriefPipeline.Analysed analysed = new BriefPipeline().analysed(job());
+            findings = analysed.findings();
+            analysed.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
         } catch (SelectionProblem problem) {
             throw SelectionWords.forAnalyze(problem);
         }

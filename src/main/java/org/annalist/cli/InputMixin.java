@@ -6,6 +6,7 @@ import org.annalist.brief.Job;
 import org.annalist.ingest.Aggregation;
 import org.annalist.ingest.DateOrder;
 import org.annalist.ingest.DecimalMark;
+import org.annalist.ingest.InputFiles;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.series.Frequency;
 import picocli.CommandLine.Option;
@@ -13,6 +14,9 @@ import picocli.CommandLine.Parameters;
 
 /** The data file and the options for reading it, shared by every command that reads one. */
 final class InputMixin {
+
+    /** A Java array holds at most 2 GB, and so does the reader. */
+    static final long MAX_LIMIT_MEGABYTES = 2047;
 
     @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated).")
     Path file;
@@ -33,6 +37,10 @@ final class InputMixin {
             description = "How --aggregate combines values: sum (flows such as nights) or mean (rates, prices). Default: sum.")
     Aggregation.Method aggregateBy = Aggregation.Method.SUM;
 
+    @Option(names = "--max-input-mb", paramLabel = "MB",
+            description = "Refuse data files larger than this many megabytes. Default: 512.")
+    Long maxInputMegabytes;
+
     /** The file and its reading options, as the pipeline takes them. */
     Job.Input input() {
         return new Job.Input(file, readOptions());
@@ -45,6 +53,13 @@ final class InputMixin {
         }
         if (aggregate.isPresent()) {
             options = options.withAggregation(new Aggregation(aggregate.get(), aggregateBy));
+        }
+        if (maxInputMegabytes != null) {
+            if (maxInputMegabytes < 1 || maxInputMegabytes > MAX_LIMIT_MEGABYTES) {
+                throw new UserInputException("--max-input-mb " + maxInputMegabytes + ": expected a whole number of "
+                        + "megabytes from 1 to " + MAX_LIMIT_MEGABYTES);
+            }
+            options = options.withMaxInputBytes(InputFiles.megabytesToBytes(maxInputMegabytes));
         }
         return options;
     }

@@ -1,9 +1,5 @@
 package org.annalist.ingest;
 
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.time.DateTimeException;
 import java.time.LocalDate;
@@ -18,7 +14,8 @@ import org.annalist.series.Holiday;
 /**
  * Reads a file of the user's moving holidays: a header, then one line per day, {@code date,name}
  * (ISO dates, comma or semicolon separated); a holiday of several days has several lines with the
- * same name. Problems are reported as {@code FILE:LINE[:COLUMN]} like data problems.
+ * same name. Problems are reported as {@code FILE:LINE[:COLUMN]} like data problems. The text is
+ * decoded as a data file's is ({@link TextDecoding}), so a Latin-1 file from a spreadsheet reads too.
  */
 public final class HolidayFile {
 
@@ -28,14 +25,9 @@ public final class HolidayFile {
     public static List<Holiday> read(Path file) {
         String name = file.toString();
         ProblemLog log = new ProblemLog(name);
-        List<String> lines;
-        try {
-            lines = Files.readAllLines(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new DataProblemException(new DataProblem(name, 0, 0, "no such file; expected a holiday file of date,name lines"));
-        } catch (IOException e) {
-            throw new DataProblemException(new DataProblem(name, 0, 0, "cannot be read (" + e.getMessage() + ")"));
-        }
+        byte[] bytes = InputFiles.read(file, InputFiles.DEFAULT_MAX_BYTES, "a holiday file of date,name lines");
+        // Decoded as a data file is: a byte-order mark honoured, UTF-8, else Windows-1252 (a spreadsheet's Latin-1).
+        List<String> lines = List.of(TextDecoding.text(bytes, log).split("\r\n|\n|\r", -1));
         Map<String, Set<LocalDate>> holidays = new LinkedHashMap<>();
         for (int i = 1; i < lines.size(); i++) {
             String line = lines.get(i).replace("\uFEFF", "").trim();

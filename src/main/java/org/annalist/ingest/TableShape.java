@@ -109,10 +109,48 @@ final class TableShape {
             log.warn(note.line(), 0, "line set aside as a note below the data: '" + preview(note) + "'");
         }
         List<Row> body = rows.subList(firstData, lastData + 1);
+        checkWidths(header, body, log);
         if (header.isPresent() && effectiveWidth(header.get()) > width) {
             width = effectiveWidth(header.get());
         }
         return new Shape(header, Collections.unmodifiableList(body), classify(header, body, width, periodColumn));
+    }
+
+    /**
+     * A data row with more fields than the header is refused (a value with an unquoted comma, such as
+     * {@code 1,234}, splits in two and would shift every cell after it); a row with fewer fields reads
+     * the fields missing at its end as missing values, said in one warning naming the lines. Without a
+     * header, the first data row sets the width.
+     */
+    private static void checkWidths(Optional<Row> header, List<Row> body, ProblemLog log) {
+        int expected = header.map(TableShape::effectiveWidth).orElse(body.get(0).cells().size());
+        String against = header.isPresent() ? "the header has " : "the first data row has ";
+        List<Integer> shortLines = new ArrayList<>();
+        int shortCount = 0;
+        int firstShortFields = 0;
+        for (Row row : body) {
+            int fields = row.cells().size();
+            if (fields > expected && effectiveWidth(row) > expected) {
+                log.error(row.line(), row.column(expected), "this row has " + effectiveWidth(row) + " fields but " + against
+                        + expected + "; expected at most " + expected + " (quote a cell that holds the delimiter, "
+                        + "such as \"1,234\")");
+            } else if (fields < expected) {
+                if (shortCount == 0) {
+                    firstShortFields = fields;
+                }
+                if (shortLines.size() < 5) {
+                    shortLines.add(row.line());
+                }
+                shortCount++;
+            }
+        }
+        if (shortCount > 0) {
+            String lines = shortLines.stream().map(String::valueOf).collect(java.util.stream.Collectors.joining(", "));
+            String more = shortCount > shortLines.size() ? " and " + (shortCount - shortLines.size()) + " more lines" : "";
+            log.warn(shortLines.get(0), 0, (shortCount == 1 ? "this row has " + firstShortFields + " fields but "
+                    : "rows with fewer fields than expected (lines " + lines + more + "): ") + against + expected
+                    + "; the missing fields were read as missing values");
+        }
     }
 
     private static int findPeriodColumn(List<Row> rows, int width, ProblemLog log) {
