@@ -94,7 +94,7 @@ final class BriefWriter {
         List<Figure> figures = figures(series, findings, plan);
         byte[] pdf = renderer.render(xhtml, baseUri(page), figures, page.generatedAt(),
                 documentId(page.read().sha256(), series.name()));
-        write(page.output(), pdf);
+        write(page, pdf);
         return new Brief(page.output(), series.name(), findings, List.copyOf(warnings), figures);
     }
 
@@ -122,7 +122,7 @@ final class BriefWriter {
         figures.add(0, multiples);
         byte[] pdf = renderer.render(xhtml, baseUri(page), figures, page.generatedAt(),
                 documentId(page.read().sha256(), String.join("|", series.stream().map(Series::name).toList())));
-        write(page.output(), pdf);
+        write(page, pdf);
         return new CombinedBrief(page.output(), findings, check, multiples, List.copyOf(overviews));
     }
 
@@ -131,12 +131,10 @@ final class BriefWriter {
         return page.input().file().toAbsolutePath().getParent().toUri().toString();
     }
 
-    private static void write(Path output, byte[] pdf) {
-        try {
-            AtomicFiles.write(output, pdf);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + output, e);
-        }
+    private static void write(Page page, byte[] pdf) {
+        List<Path> inputs = new ArrayList<>(List.of(page.input().file()));
+        page.choices().logo().ifPresent(inputs::add);
+        OutputFiles.write(page.output(), pdf, inputs);
     }
 
     private static Masthead masthead(Page page) {

@@ -44,7 +44,8 @@ public sealed interface OutputName permits OutputName.AsGiven, OutputName.Patter
 
         @Override
         public Path resolve(String seriesName, String period) {
-            return Path.of(pattern.replace("{series}", fileSafe(seriesName)).replace("{period}", period));
+            // a long series name may not make a name the file system refuses
+            return OutputFiles.fitted(Path.of(pattern.replace("{series}", fileSafe(seriesName)).replace("{period}", period)));
         }
 
         @Override

@@ -55,30 +55,22 @@ public final class SideOutputs {
 
     private static void writeData(Path folder, String stem, Findings findings, Series series,
                                   Set<Kind> kinds) {
-        try {
-            if (kinds.contains(Kind.FINDINGS)) {
-                AtomicFiles.write(folder.resolve(stem + ".findings.json"),
-                        Reports.json(findings).getBytes(StandardCharsets.UTF_8));
-            }
-            if (kinds.contains(Kind.COMPONENTS)) {
-                AtomicFiles.write(folder.resolve(stem + ".components.csv"),
-                        components(series, findings.decomposition()).getBytes(StandardCharsets.UTF_8));
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the side outputs " + stem, e);
+        if (kinds.contains(Kind.FINDINGS)) {
+            OutputFiles.write(folder.resolve(stem + ".findings.json"),
+                    Reports.json(findings).getBytes(StandardCharsets.UTF_8), List.of());
+        }
+        if (kinds.contains(Kind.COMPONENTS)) {
+            OutputFiles.write(folder.resolve(stem + ".components.csv"),
+                    components(series, findings.decomposition()).getBytes(StandardCharsets.UTF_8), List.of());
         }
     }
 
     private static void writeCharts(Path folder, String stem, List<Figure> figures, Set<Kind> kinds) {
-        try {
-            if (kinds.contains(Kind.CHARTS)) {
-                for (Figure figure : figures) {
-                    AtomicFiles.write(folder.resolve(stem + "-" + figure.id() + ".svg"),
-                            SvgCharts.svg(figure, CHART_HEIGHT));
-                }
+        if (kinds.contains(Kind.CHARTS)) {
+            for (Figure figure : figures) {
+                OutputFiles.write(folder.resolve(stem + "-" + figure.id() + ".svg"),
+                        SvgCharts.svg(figure, CHART_HEIGHT), List.of());
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the charts of " + stem, e);
         }
     }
 

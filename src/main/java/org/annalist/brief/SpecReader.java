@@ -55,7 +55,7 @@ public final class SpecReader {
 
     private SpecReader(Path spec) {
         this.spec = spec;
-        this.folder = spec.toAbsolutePath().getParent();
+        this.folder = spec.toAbsolutePath().normalize().getParent();
         this.values = new SpecValues(spec, folder);
     }
 

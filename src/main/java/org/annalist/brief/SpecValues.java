@@ -1,6 +1,7 @@
 package org.annalist.brief;
 
 import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -66,7 +67,13 @@ final class SpecValues {
      */
     Path path(YamlTree.Node node, String key) {
         String text = text(node, key);
-        Path given = Path.of(text);
+        Path given;
+        try {
+            given = Path.of(text);
+        } catch (InvalidPathException e) {
+            throw new SpecProblem(spec, node.line(), node.column(), key + " '" + text.replace("\0", "\\0")
+                    + "' is not a path (" + e.getReason() + "); expected a file name");
+        }
         if (given.isAbsolute()) {
             return given.normalize();
         }
@@ -74,6 +81,13 @@ final class SpecValues {
         if (!resolved.startsWith(folder)) {
             throw new SpecProblem(spec, node.line(), node.column(), key + " '" + text + "' leaves the spec's folder; "
                     + "write an absolute path to use a file elsewhere");
+        }
+        // Where the path really leads: a symbolic link inside the folder may point anywhere.
+        Optional<Path> real = OutputFiles.realOrNearest(resolved);
+        Optional<Path> realFolder = OutputFiles.realOrNearest(folder);
+        if (real.isEmpty() || realFolder.isEmpty() || !real.get().startsWith(realFolder.get())) {
+            throw new SpecProblem(spec, node.line(), node.column(), key + " '" + text + "' leads out of the spec's "
+                    + "folder through a symbolic link; write an absolute path to use a file elsewhere");
         }
         return resolved;
     }

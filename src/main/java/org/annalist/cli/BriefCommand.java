@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.annalist.brief.OutputFiles;
 import org.annalist.brief.BriefOutput;
 import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.Job;
@@ -89,7 +90,7 @@ final class BriefCommand implements Callable<Integer> {
 
     static String defaultName(Path input, String series) {
         String base = input.getFileName().toString().replaceFirst("\\.[^.]+$", "");
-        return slug(series == null ? base : base + "-" + series) + ".pdf";
+        return OutputFiles.fitted(slug(series == null ? base : base + "-" + series) + ".pdf");
     }
 
     /** A file-name-safe form: lower case, letters and digits, single dashes. */
