@@ -123,16 +123,19 @@ final class TableShape {
      * header, the first data row sets the width.
      */
     private static void checkWidths(Optional<Row> header, List<Row> body, ProblemLog log) {
-        int expected = header.map(TableShape::effectiveWidth).orElse(body.get(0).cells().size());
+        // A trailing delimiter of the header declares a column (filled further down, or padding), one of a row does not.
+        Row reference = header.orElse(body.get(0));
+        int widest = reference.cells().size();
+        int expected = effectiveWidth(reference);
         String against = header.isPresent() ? "the header has " : "the first data row has ";
         List<Integer> shortLines = new ArrayList<>();
         int shortCount = 0;
         int firstShortFields = 0;
         for (Row row : body) {
             int fields = row.cells().size();
-            if (fields > expected && effectiveWidth(row) > expected) {
-                log.error(row.line(), row.column(expected), "this row has " + effectiveWidth(row) + " fields but " + against
-                        + expected + "; expected at most " + expected + " (quote a cell that holds the delimiter, "
+            if (fields > widest && effectiveWidth(row) > widest) {
+                log.error(row.line(), row.column(widest), "this row has " + effectiveWidth(row) + " fields but " + against
+                        + widest + "; expected at most " + widest + " (quote a cell that holds the delimiter, "
                         + "such as \"1,234\")");
             } else if (fields < expected) {
                 if (shortCount == 0) {
