@@ -1,7 +1,5 @@
 package org.annalist.brief;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -32,7 +30,6 @@ import org.annalist.narrative.Masthead;
 import org.annalist.narrative.MultiBriefView;
 import org.annalist.narrative.MultiBriefViews;
 import org.annalist.narrative.TemplateEngine;
-import org.annalist.render.AtomicFiles;
 import org.annalist.render.Fonts;
 import org.annalist.render.PdfRenderer;
 import org.annalist.series.Series;

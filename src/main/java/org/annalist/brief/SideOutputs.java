@@ -1,7 +1,5 @@
 package org.annalist.brief;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
@@ -12,7 +10,6 @@ import org.annalist.chart.Figure;
 import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Decomposition;
 import org.annalist.findings.Findings;
-import org.annalist.render.AtomicFiles;
 import org.annalist.render.SvgCharts;
 import org.annalist.series.Series;
 

@@ -9,11 +9,14 @@ final class ProblemLog {
 
     /** Beyond this many errors the rest of a hopeless file adds nothing but noise. */
     private static final int MAX_ERRORS = 50;
+    /** Beyond this many warnings (a file with thousands of note lines) the rest are counted, not kept. */
+    private static final int MAX_WARNINGS = 100;
 
     private final String file;
     private final List<DataProblem> errors = new ArrayList<>();
     private final List<DataProblem> warnings = new ArrayList<>();
     private int suppressedErrors;
+    private int suppressedWarnings;
 
     ProblemLog(String file) {
         this.file = file;
@@ -32,7 +35,11 @@ final class ProblemLog {
     }
 
     void warn(int line, int column, String message) {
-        warnings.add(new DataProblem(file, line, column, message));
+        if (warnings.size() < MAX_WARNINGS) {
+            warnings.add(new DataProblem(file, line, column, message));
+        } else {
+            suppressedWarnings++;
+        }
     }
 
     boolean hasErrors() {
@@ -60,6 +67,11 @@ final class ProblemLog {
     }
 
     List<DataProblem> warnings() {
-        return List.copyOf(warnings);
+        if (suppressedWarnings == 0) {
+            return List.copyOf(warnings);
+        }
+        List<DataProblem> all = new ArrayList<>(warnings);
+        all.add(new DataProblem(file, 0, 0, suppressedWarnings + " more warnings of the same kinds not shown"));
+        return List.copyOf(all);
     }
 }

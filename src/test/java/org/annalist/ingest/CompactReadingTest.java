@@ -73,4 +73,15 @@ class CompactReadingTest {
         assertThat(NumberCells.evidence("12.5")).isEqualTo(NumberCells.Evidence.POINT);
         assertThat(NumberCells.evidence("1234")).isEqualTo(NumberCells.Evidence.NONE);
     }
+
+    @Test
+    void thousandsOfNoteLinesAreAHundredWarningsAndACount() {
+        StringBuilder text = new StringBuilder("month,v\n2024-01,1\n2024-02,2\n");
+        for (int i = 0; i < 5000; i++) {
+            text.append("note ").append(i).append('\n');
+        }
+        ReadResult read = Files.read("in.csv", text.toString());
+        assertThat(read.warnings()).hasSize(101);
+        assertThat(read.warnings().get(100).message()).isEqualTo("4900 more warnings of the same kinds not shown");
+    }
 }
