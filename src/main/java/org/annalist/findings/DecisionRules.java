@@ -173,12 +173,12 @@ public final class DecisionRules {
     // ---- outlook --------------------------------------------------------------------------
 
     /**
-     * After a break the outlook is fitted on the latest regime alone when it spans at least this
-     * many seasonal cycles (our rule: two, so that the season can be estimated in it) …
+     * A single forecasting method replaces the combination — and the latest regime after a break
+     * replaces all values — only when its mean absolute error in the back-test is at least this
+     * many % lower (and, for a method, lower in both halves of the back-test): our rule, since
+     * picking the lowest score of a short back-test is itself a source of error.
      */
-    public static final int OUTLOOK_REGIME_CYCLES = 2;
-    /** … or, for data without a season, at least this many periods (our rule). */
-    public static final int OUTLOOK_REGIME_NON_SEASONAL = 8;
+    public static final int OUTLOOK_CLEAR_ADVANTAGE_PCT = 10;
 
     // ---- claims on the first page -------------------------------------------------------------
 

@@ -24,4 +24,10 @@ class DecisionRulesTest {
         assertThat(CycleDetector.DEFAULT_SHORTEST_CYCLE_YEARS).isEqualTo(DecisionRules.MIN_CYCLE_YEARS);
         assertThat(CycleDetector.DEFAULT_CYCLES_IN_DATA).isEqualTo(DecisionRules.MIN_CYCLES_IN_DATA);
     }
+
+    @Test
+    void theOutlooksMarginIsTheDecisionRule() {
+        assertThat(org.annalist.analysis.forecast.Outlook.CLEAR_ADVANTAGE_PCT)
+                .isEqualTo(DecisionRules.OUTLOOK_CLEAR_ADVANTAGE_PCT);
+    }
 }
