@@ -1,0 +1,417 @@
+package org.annalist.analysis.forecast;
+
+/**
+ * The exact Gaussian likelihood of an ARIMA model by the Kalman filter on its state-space form, as
+ * R's {@code arima} computes it [1, 2]: the state is the r = max(p, q + 1) ARMA states of Harvey's
+ * form followed by the d + mD last values the differencing needs; the ARMA block starts from its
+ * stationary covariance Q₀, computed by Gardner, Harvey &amp; Phillips' algorithm [1, §3], the
+ * differencing block from a diffuse prior of variance κ = 10⁶. Innovations whose variance exceeds
+ * 10⁴ (those absorbed by the diffuse prior) are left out of the likelihood, as in R. Everything is
+ * in units of the innovation variance σ², which the likelihood concentrates out:
+ * −2 log L = n log(2π σ̂²) + n + Σ log Fₜ with σ̂² = Σ vₜ²/Fₜ / n [2, eq. 3.2].
+ *
+ * <h2>References</h2>
+ * <ol>
+ * <li>Gardner, G., Harvey, A. C. &amp; Phillips, G. D. A. (1980). Algorithm AS 154: An algorithm for
+ * exact maximum likelihood estimation of autoregressive-moving average models by means of Kalman
+ * filtering. <i>Applied Statistics</i> 29(3), 311–322. DOI 10.2307/2346910.</li>
+ * <li>Durbin, J. &amp; Koopman, S. J. (2012). <i>Time Series Analysis by State Space Methods</i>,
+ * 2nd ed. Oxford University Press. DOI 10.1093/acprof:oso/9780199641178.001.0001.</li>
+ * <li>R Core Team, {@code src/library/stats/src/arima.c} ({@code getQ0}, {@code ARIMA_Like},
+ * {@code KalmanFore}) and {@code makeARIMA} (R 4.2).</li>
+ * </ol>
+ */
+final class ArimaKalman {
+
+    /** R's {@code kappa}: the prior variance of the differencing states. */
+    static final double KAPPA = 1e6;
+    /** R's bound above which a one-step variance counts as diffuse and leaves the likelihood out. */
+    private static final double DIFFUSE_GAIN = 1e4;
+
+    /** Sum of squared standardised innovations, sum of log variances, and how many entered. */
+    record Likelihood(double ssq, double sumLog, int used) {
+    }
+
+    private final double[] phi;
+    private final double[] theta;
+    private final double[] delta;
+    private final int p;
+    private final int q;
+    private final int r;
+    private final int d;
+    private final int rd;
+    /** The filtered state and covariance (row-major rd × rd), updated by {@link #run}. */
+    final double[] a;
+    final double[] pm;
+    private final double[] anew;
+    private final double[] pnew;
+    private final double[] mm;
+    private final double[] gainVector;
+
+    /** @param delta the differencing polynomial's coefficients, as R's {@code Delta} */
+    ArimaKalman(double[] phi, double[] theta, double[] delta) {
+        this.phi = phi;
+        this.theta = theta;
+        this.delta = delta;
+        p = phi.length;
+        q = theta.length;
+        r = Math.max(p, q + 1);
+        d = delta.length;
+        rd = r + d;
+        a = new double[rd];
+        pm = new double[rd * rd];
+        anew = new double[rd];
+        pnew = new double[rd * rd];
+        mm = new double[rd * rd];
+        gainVector = new double[rd];
+    }
+
+    /**
+     * Runs the filter over {@code y} from R's initial state (zero mean, Q₀ and κ), leaving the final
+     * filtered state in {@link #a} and {@link #pm}.
+     *
+     * @param residuals where to write the standardised innovations vₜ/√Fₜ, or null
+     */
+    Likelihood run(double[] y, double[] residuals) {
+        java.util.Arrays.fill(a, 0);
+        java.util.Arrays.fill(pnew, 0);
+        double[] q0 = stationaryCovariance(phi, theta);
+        for (int i = 0; i < r; i++) {
+            System.arraycopy(q0, i * r, pnew, i * rd, r);
+        }
+        for (int i = r; i < rd; i++) {
+            pnew[i * rd + i] = KAPPA;
+        }
+        double ssq = 0;
+        double sumLog = 0;
+        int used = 0;
+        for (int l = 0; l < y.length; l++) {
+            predictState();
+            if (l > 0) {
+                predictCovariance();
+            }
+            double resid = y[l] - anew[0];
+            for (int i = 0; i < d; i++) {
+                resid -= delta[i] * anew[r + i];
+            }
+            // M = P Zᵀ and F = Z P Zᵀ with Z = (1, 0 … 0, Δ)
+            for (int i = 0; i < rd; i++) {
+                double tmp = pnew[i * rd];
+                for (int k = 0; k < d; k++) {
+                    tmp += pnew[i * rd + r + k] * delta[k];
+                }
+                gainVector[i] = tmp;
+            }
+            double gain = gainVector[0];
+            for (int k = 0; k < d; k++) {
+                gain += delta[k] * gainVector[r + k];
+            }
+            if (gain < DIFFUSE_GAIN) {
+                used++;
+                ssq += resid * resid / gain;
+                sumLog += Math.log(gain);
+            }
+            if (residuals != null) {
+                residuals[l] = resid / Math.sqrt(gain);
+            }
+            for (int i = 0; i < rd; i++) {
+                a[i] = anew[i] + gainVector[i] * resid / gain;
+            }
+            for (int i = 0; i < rd; i++) {
+                for (int j = 0; j < rd; j++) {
+                    pm[i * rd + j] = pnew[i * rd + j] - gainVector[i] * gainVector[j] / gain;
+                }
+            }
+        }
+        return new Likelihood(ssq, sumLog, used);
+    }
+
+    /**
+     * Forecast means (of the differenced-and-integrated series, before any regression term) and
+     * variances in units of σ², 1 … h steps after the last filtered state, as R's {@code KalmanFore};
+     * does not change the filtered state.
+     */
+    double[][] forecast(int h) {
+        double[] keepA = a.clone();
+        double[] keepP = pm.clone();
+        double[] mean = new double[h];
+        double[] variance = new double[h];
+        for (int l = 0; l < h; l++) {
+            predictState();
+            predictCovariance();
+            System.arraycopy(anew, 0, a, 0, rd);
+            System.arraycopy(pnew, 0, pm, 0, rd * rd);
+            double fc = a[0];
+            for (int k = 0; k < d; k++) {
+                fc += delta[k] * a[r + k];
+            }
+            mean[l] = fc;
+            double v = pm[0];
+            for (int k = 0; k < d; k++) {
+                v += 2 * delta[k] * pm[r + k];
+            }
+            for (int i = 0; i < d; i++) {
+                for (int j = 0; j < d; j++) {
+                    v += delta[i] * delta[j] * pm[(r + i) * rd + r + j];
+                }
+            }
+            variance[l] = v;
+        }
+        System.arraycopy(keepA, 0, a, 0, rd);
+        System.arraycopy(keepP, 0, pm, 0, rd * rd);
+        return new double[][] {mean, variance};
+    }
+
+    /**
+     * One step of the state on from the filtered state {@code a}, without noise, written into
+     * {@code out}: the transition T of [3] {@code makeARIMA}.
+     */
+    void transition(double[] from, double[] out) {
+        for (int i = 0; i < r; i++) {
+            double tmp = i < r - 1 ? from[i + 1] : 0;
+            if (i < p) {
+                tmp += phi[i] * from[0];
+            }
+            out[i] = tmp;
+        }
+        if (d > 0) {
+            for (int i = r + 1; i < rd; i++) {
+                out[i] = from[i - 1];
+            }
+            double tmp = from[0];
+            for (int i = 0; i < d; i++) {
+                tmp += delta[i] * from[r + i];
+            }
+            out[r] = tmp;
+        }
+    }
+
+    /** The observation Z α: the ARMA state's first element plus Δ times the differencing states. */
+    double observe(double[] state) {
+        double v = state[0];
+        for (int k = 0; k < d; k++) {
+            v += delta[k] * state[r + k];
+        }
+        return v;
+    }
+
+    /** The noise loading R = (1, θ₁ … θ_{r−1}, 0 … 0) at state element i. */
+    double loading(int i) {
+        if (i == 0) {
+            return 1;
+        }
+        return i - 1 < q ? theta[i - 1] : 0;
+    }
+
+    int stateSize() {
+        return rd;
+    }
+
+    private void predictState() {
+        transition(a, anew);
+    }
+
+    /** P⁻ = T P Tᵀ + R Rᵀ, as [3] {@code ARIMA_Like} writes it (mm = T P first). */
+    private void predictCovariance() {
+        for (int i = 0; i < r; i++) {
+            for (int j = 0; j < rd; j++) {
+                double tmp = 0;
+                if (i < p) {
+                    tmp += phi[i] * pm[j];
+                }
+                if (i < r - 1) {
+                    tmp += pm[(i + 1) * rd + j];
+                }
+                mm[i * rd + j] = tmp;
+            }
+        }
+        if (d > 0) {
+            for (int j = 0; j < rd; j++) {
+                double tmp = pm[j];
+                for (int k = 0; k < d; k++) {
+                    tmp += delta[k] * pm[(r + k) * rd + j];
+                }
+                mm[r * rd + j] = tmp;
+            }
+            for (int i = 1; i < d; i++) {
+                System.arraycopy(pm, (r + i - 1) * rd, mm, (r + i) * rd, rd);
+            }
+        }
+        // Pnew = mm Tᵀ: column i of Pnew is T applied to row … of mm
+        for (int i = 0; i < r; i++) {
+            for (int j = 0; j < rd; j++) {
+                double tmp = 0;
+                if (i < p) {
+                    tmp += phi[i] * mm[j * rd];
+                }
+                if (i < r - 1) {
+                    tmp += mm[j * rd + i + 1];
+                }
+                pnew[j * rd + i] = tmp;
+            }
+        }
+        if (d > 0) {
+            for (int j = 0; j < rd; j++) {
+                double tmp = mm[j * rd];
+                for (int k = 0; k < d; k++) {
+                    tmp += delta[k] * mm[j * rd + r + k];
+                }
+                pnew[j * rd + r] = tmp;
+            }
+            for (int i = 1; i < d; i++) {
+                for (int j = 0; j < rd; j++) {
+                    pnew[j * rd + r + i] = mm[j * rd + r + i - 1];
+                }
+            }
+        }
+        for (int i = 0; i <= q; i++) {
+            double vi = i == 0 ? 1 : theta[i - 1];
+            for (int j = 0; j <= q; j++) {
+                pnew[i * rd + j] += vi * (j == 0 ? 1 : theta[j - 1]);
+            }
+        }
+    }
+
+    /**
+     * Q₀, the stationary covariance of the ARMA block (r × r, row-major), by [1]'s algorithm as
+     * [3] {@code getQ0} codes it: the equations vec(Q₀) = vec(T Q₀ Tᵀ) + vec(V) are solved by
+     * Givens rotations for p &gt; 0, by back-substitution for a pure moving average.
+     */
+    static double[] stationaryCovariance(double[] phi, double[] theta) {
+        int p = phi.length;
+        int q = theta.length;
+        int r = Math.max(p, q + 1);
+        int np = r * (r + 1) / 2;
+        int nrbar = np * (np - 1) / 2;
+        double[] v = new double[np];
+        for (int ind = 0, j = 0; j < r; j++) {
+            double vj = j == 0 ? 1 : j - 1 < q ? theta[j - 1] : 0;
+            for (int i = j; i < r; i++) {
+                double vi = i == 0 ? 1 : i - 1 < q ? theta[i - 1] : 0;
+                v[ind++] = vi * vj;
+            }
+        }
+        double[] res = new double[r * r];
+        if (r == 1) {
+            res[0] = p == 0 ? 1 : 1 / (1 - phi[0] * phi[0]);
+            return res;
+        }
+        double[] pp = new double[Math.max(np, r * r)];
+        if (p > 0) {
+            double[] rbar = new double[nrbar];
+            double[] thetab = new double[np];
+            double[] xnext = new double[np];
+            double[] xrow = new double[np];
+            int ind = 0;
+            int ind1 = -1;
+            int npr = np - r;
+            int npr1 = npr + 1;
+            int indj = npr;
+            int ind2 = npr - 1;
+            for (int j = 0; j < r; j++) {
+                double phij = j < p ? phi[j] : 0;
+                xnext[indj++] = 0;
+                int indi = npr1 + j;
+                for (int i = j; i < r; i++) {
+                    double ynext = v[ind++];
+                    double phii = i < p ? phi[i] : 0;
+                    if (j != r - 1) {
+                        xnext[indj] = -phii;
+                        if (i != r - 1) {
+                            xnext[indi] -= phij;
+                            xnext[++ind1] = -1;
+                        }
+                    }
+                    xnext[npr] = -phii * phij;
+                    if (++ind2 >= np) {
+                        ind2 = 0;
+                    }
+                    xnext[ind2] += 1;
+                    include(np, xnext, xrow, ynext, pp, rbar, thetab);
+                    xnext[ind2] = 0;
+                    if (i != r - 1) {
+                        xnext[indi++] = 0;
+                        xnext[ind1] = 0;
+                    }
+                }
+            }
+            int ithisr = nrbar - 1;
+            int im = np - 1;
+            for (int i = 0; i < np; i++) {
+                double bi = thetab[im];
+                for (int jm = np - 1, j = 0; j < i; j++) {
+                    bi -= rbar[ithisr--] * pp[jm--];
+                }
+                pp[im--] = bi;
+            }
+            // re-order
+            ind = npr;
+            for (int i = 0; i < r; i++) {
+                xnext[i] = pp[ind++];
+            }
+            ind = np - 1;
+            ind1 = npr - 1;
+            for (int i = 0; i < npr; i++) {
+                pp[ind--] = pp[ind1--];
+            }
+            for (int i = 0; i < r; i++) {
+                pp[i] = xnext[i];
+            }
+        } else {
+            int indn = np;
+            int ind = np;
+            for (int i = 0; i < r; i++) {
+                for (int j = 0; j <= i; j++) {
+                    --ind;
+                    pp[ind] = v[ind];
+                    if (j != 0) {
+                        pp[ind] += pp[--indn];
+                    }
+                }
+            }
+        }
+        // unpack the packed upper triangle to a full matrix (R's column-major P[i + r j])
+        System.arraycopy(pp, 0, res, 0, np);
+        for (int i = r - 1, ind = np; i > 0; i--) {
+            for (int j = r - 1; j >= i; j--) {
+                res[r * i + j] = res[--ind];
+            }
+        }
+        for (int i = 0; i < r - 1; i++) {
+            for (int j = i + 1; j < r; j++) {
+                res[i + r * j] = res[j + r * i];
+            }
+        }
+        return res; // symmetric, so row- and column-major agree
+    }
+
+    /** [1] {@code inclu2}: adds one row to the Givens-rotated system. */
+    private static void include(int np, double[] xnext, double[] xrow, double ynext, double[] d, double[] rbar,
+                                double[] thetab) {
+        System.arraycopy(xnext, 0, xrow, 0, np);
+        for (int ithisr = 0, i = 0; i < np; i++) {
+            if (xrow[i] != 0.0) {
+                double xi = xrow[i];
+                double di = d[i];
+                double dpi = di + xi * xi;
+                d[i] = dpi;
+                double cbar = di / dpi;
+                double sbar = xi / dpi;
+                for (int k = i + 1; k < np; k++) {
+                    double xk = xrow[k];
+                    double rbthis = rbar[ithisr];
+                    xrow[k] = xk - xi * rbthis;
+                    rbar[ithisr++] = cbar * rbthis + sbar * xk;
+                }
+                double xk = ynext;
+                ynext = xk - xi * thetab[i];
+                thetab[i] = cbar * thetab[i] + sbar * xk;
+                if (di == 0.0) {
+                    return;
+                }
+            } else {
+                ithisr = ithisr + np - i - 1;
+            }
+        }
+    }
+}
