@@ -197,6 +197,23 @@ public final class Arima {
     }
 
     /**
+     * The model with given coefficients (ar, ma, sar, sma, then mean or drift, as R orders them),
+     * without estimation: its likelihood by {@code method}, σ², criteria and forecasts, as R's
+     * {@code Arima(fixed = …)} would give them (checks against R at R's own estimates).
+     *
+     * @return empty when the number of coefficients does not match the order or a value is not finite
+     */
+    public static Optional<Fit> withCoefficients(double[] y, ArimaOrder order, Method method, double[] coefficients) {
+        for (double v : y) {
+            if (!Double.isFinite(v)) {
+                return Optional.empty();
+            }
+        }
+        return new ArimaEstimation(y, order).at(coefficients.clone(), method)
+                .map(e -> new Fit(order, method, e, y.length));
+    }
+
+    /**
      * Fits {@code order} to {@code y} by {@code method}.
      *
      * @return empty where R's {@code Arima} stops with an error: too few values, a CSS start that is

@@ -40,6 +40,13 @@ final class ArimaEstimation {
      */
     record Estimate(double[] coef, double[] phi, double[] theta, double sigma2, double logLik, double value,
                     double[] residuals, ArimaKalman kalman, boolean varianceValid, int nUsed) {
+
+        Estimate {
+            coef = coef.clone();
+            phi = phi.clone();
+            theta = theta.clone();
+            residuals = residuals.clone();
+        }
     }
 
     private final double[] y;
@@ -159,6 +166,34 @@ final class ArimaEstimation {
         double sigma2 = like.ssq() / nUsed;
         return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals, kalman,
                 valid, nUsed));
+    }
+
+    /**
+     * The model with the given coefficients (R's order, AR untransformed), no search: the
+     * likelihood of {@code method} (CSS or exact), residuals and final state as a fit would give them.
+     */
+    Optional<Estimate> at(double[] coef, Arima.Method method) {
+        int n = y.length;
+        int nUsed = n - delta.length;
+        if (coef.length != npar || nUsed <= 0) {
+            return Optional.empty();
+        }
+        double[][] pt = ArimaPolynomials.expand(coef, order, false);
+        removeRegression(coef);
+        ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
+        double[] residuals = new double[n];
+        ArimaKalman.Likelihood like = kalman.run(adjusted, method == Arima.Method.CSS ? null : residuals);
+        if (method == Arima.Method.CSS) {
+            int m = order.period();
+            int ncond = order.d() + order.seasonalD() * m + order.p() + m * order.seasonalP();
+            double sigma2 = css(adjusted, pt[0], pt[1], ncond, residuals);
+            double value = 0.5 * Math.log(sigma2);
+            return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals,
+                    kalman, true, nUsed));
+        }
+        double value = 0.5 * (Math.log(like.ssq() / like.used()) + like.sumLog() / like.used());
+        return Optional.of(new Estimate(coef, pt[0], pt[1], like.ssq() / nUsed, logLik(value, nUsed), value,
+                residuals, kalman, true, nUsed));
     }
 
     /** R: −0.5 (2 n.used · value + n.used + n.used log 2π). */
