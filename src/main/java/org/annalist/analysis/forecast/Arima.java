@@ -42,6 +42,7 @@ public final class Arima {
         private final double aicc;
         private final double bic;
         private final int n;
+        private Boolean valid;
 
         private Fit(ArimaOrder order, Method method, ArimaEstimation.Estimate estimate, int n) {
             this.order = order;
@@ -115,9 +116,12 @@ public final class Arima {
             return n - order.d() - order.seasonalD() * order.period();
         }
 
-        /** Whether the forecast package's checks pass (see {@link AutoArima}). */
+        /** Whether the forecast package's checks pass (see {@link AutoArima}); computed once, on demand. */
         boolean variancesValid() {
-            return estimate.varianceValid();
+            if (valid == null) {
+                valid = estimate.varianceValid().getAsBoolean();
+            }
+            return valid;
         }
 
         /** The smallest modulus of the expanded AR and MA polynomials' roots (infinity without any). */

@@ -36,10 +36,11 @@ final class ArimaEstimation {
      * @param sigma2        R's {@code arima} σ̂²: the ML ssq / n.used, or the CSS mean square
      * @param value         the minimised objective, R's {@code res$value}
      * @param varianceValid whether every diagonal element of the estimates' covariance is non-negative
-     *                      (the forecast package refuses the model otherwise)
+     *                      (the forecast package refuses the model otherwise); computed on demand, since
+     *                      its numerical Hessian costs as much as the search
      */
     record Estimate(double[] coef, double[] phi, double[] theta, double sigma2, double logLik, double value,
-                    double[] residuals, ArimaKalman kalman, boolean varianceValid, int nUsed) {
+                    double[] residuals, ArimaKalman kalman, java.util.function.BooleanSupplier varianceValid, int nUsed) {
 
         Estimate {
             coef = coef.clone();
@@ -103,7 +104,9 @@ final class ArimaEstimation {
                 return Optional.empty();
             }
             double[] coef = found.get().par();
-            boolean valid = npar == 0 || css.hessian(coef).map(h -> varianceValid(h, nUsed, null)).orElse(false);
+            double[] at = coef.clone();
+            java.util.function.BooleanSupplier valid = () -> npar == 0
+                    || css.hessian(at).map(h -> varianceValid(h, nUsed, null)).orElse(false);
             double[][] pt = ArimaPolynomials.expand(coef, order, false);
             removeRegression(coef);
             ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
@@ -146,15 +149,15 @@ final class ArimaEstimation {
         }
         double[] coef = found.get().par();
         double value = found.get().value();
-        boolean valid = true;
+        java.util.function.BooleanSupplier valid = () -> true;
         if (transform) {
             double[] before = coef.clone();
             invertMa(coef);
             if (!java.util.Arrays.equals(before, coef)) { // R refits with maxit = 0 at the inverted MA
                 value = mlObjective(coef, true);
             }
-            double[] raw = coef;
-            valid = ml.hessian(coef).map(h -> varianceValid(h, nUsed, gradTransform(raw))).orElse(false);
+            double[] raw = coef.clone();
+            valid = () -> ml.hessian(raw).map(h -> varianceValid(h, nUsed, gradTransform(raw))).orElse(false);
             ArimaPolynomials.partrans(order.p(), coef, 0, coef, 0);
             ArimaPolynomials.partrans(order.seasonalP(), coef, order.p() + order.q(), coef, order.p() + order.q());
         }
@@ -189,11 +192,11 @@ final class ArimaEstimation {
             double sigma2 = css(adjusted, pt[0], pt[1], ncond, residuals);
             double value = 0.5 * Math.log(sigma2);
             return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals,
-                    kalman, true, nUsed));
+                    kalman, () -> true, nUsed));
         }
         double value = 0.5 * (Math.log(like.ssq() / like.used()) + like.sumLog() / like.used());
         return Optional.of(new Estimate(coef, pt[0], pt[1], like.ssq() / nUsed, logLik(value, nUsed), value,
-                residuals, kalman, true, nUsed));
+                residuals, kalman, () -> true, nUsed));
     }
 
     /** R: −0.5 (2 n.used · value + n.used + n.used log 2π). */

@@ -47,6 +47,8 @@ final class ArimaKalman {
     private final double[] pnew;
     private final double[] mm;
     private final double[] gainVector;
+    /** The lags k (0-based) with Δ_k ≠ 0: (1 − B)(1 − B¹²) has 3 of 13, so the sums skip the zeros. */
+    private final int[] lags;
 
     /** @param delta the differencing polynomial's coefficients, as R's {@code Delta} */
     ArimaKalman(double[] phi, double[] theta, double[] delta) {
@@ -64,6 +66,7 @@ final class ArimaKalman {
         pnew = new double[rd * rd];
         mm = new double[rd * rd];
         gainVector = new double[rd];
+        lags = java.util.stream.IntStream.range(0, d).filter(k -> delta[k] != 0).toArray();
     }
 
     /**
@@ -91,19 +94,19 @@ final class ArimaKalman {
                 predictCovariance();
             }
             double resid = y[l] - anew[0];
-            for (int i = 0; i < d; i++) {
+            for (int i : lags) {
                 resid -= delta[i] * anew[r + i];
             }
             // M = P Zᵀ and F = Z P Zᵀ with Z = (1, 0 … 0, Δ)
             for (int i = 0; i < rd; i++) {
                 double tmp = pnew[i * rd];
-                for (int k = 0; k < d; k++) {
+                for (int k : lags) {
                     tmp += pnew[i * rd + r + k] * delta[k];
                 }
                 gainVector[i] = tmp;
             }
             double gain = gainVector[0];
-            for (int k = 0; k < d; k++) {
+            for (int k : lags) {
                 gain += delta[k] * gainVector[r + k];
             }
             if (gain < DIFFUSE_GAIN) {
@@ -141,10 +144,7 @@ final class ArimaKalman {
             predictCovariance();
             System.arraycopy(anew, 0, a, 0, rd);
             System.arraycopy(pnew, 0, pm, 0, rd * rd);
-            double fc = a[0];
-            for (int k = 0; k < d; k++) {
-                fc += delta[k] * a[r + k];
-            }
+            double fc = observe(a);
             mean[l] = fc;
             double v = pm[0];
             for (int k = 0; k < d; k++) {
@@ -178,18 +178,14 @@ final class ArimaKalman {
             for (int i = r + 1; i < rd; i++) {
                 out[i] = from[i - 1];
             }
-            double tmp = from[0];
-            for (int i = 0; i < d; i++) {
-                tmp += delta[i] * from[r + i];
-            }
-            out[r] = tmp;
+            out[r] = observe(from);
         }
     }
 
     /** The observation Z α: the ARMA state's first element plus Δ times the differencing states. */
     double observe(double[] state) {
         double v = state[0];
-        for (int k = 0; k < d; k++) {
+        for (int k : lags) {
             v += delta[k] * state[r + k];
         }
         return v;
@@ -228,7 +224,7 @@ final class ArimaKalman {
         if (d > 0) {
             for (int j = 0; j < rd; j++) {
                 double tmp = pm[j];
-                for (int k = 0; k < d; k++) {
+                for (int k : lags) {
                     tmp += delta[k] * pm[(r + k) * rd + j];
                 }
                 mm[r * rd + j] = tmp;
@@ -253,7 +249,7 @@ final class ArimaKalman {
         if (d > 0) {
             for (int j = 0; j < rd; j++) {
                 double tmp = mm[j * rd];
-                for (int k = 0; k < d; k++) {
+                for (int k : lags) {
                     tmp += delta[k] * mm[j * rd + r + k];
                 }
                 pnew[j * rd + r] = tmp;

@@ -150,8 +150,8 @@ public final class AutoArima {
         int sp = Math.min(startSP, maxSP);
         int sq = Math.min(startSQ, maxSQ);
         ArimaOrder base = new ArimaOrder(0, d, 0, 0, seasonalD, 0, m, constant);
-        Tried best = tryModel(base.withArma(p, q, sp, sq, constant));
-        Tried t = tryModel(base.withArma(0, 0, 0, 0, constant));
+        Tried best = tryModel(base.withArma(p, q, sp, sq, constant), Double.POSITIVE_INFINITY);
+        Tried t = tryModel(base.withArma(0, 0, 0, 0, constant), best.ic());
         if (t.ic() < best.ic()) {
             best = t;
             p = q = sp = sq = 0;
@@ -159,7 +159,7 @@ public final class AutoArima {
         if (maxP > 0 || maxSP > 0) {
             int np = maxP > 0 ? 1 : 0;
             int nsp = m > 1 && maxSP > 0 ? 1 : 0;
-            t = tryModel(base.withArma(np, 0, nsp, 0, constant));
+            t = tryModel(base.withArma(np, 0, nsp, 0, constant), best.ic());
             if (t.ic() < best.ic()) {
                 best = t;
                 p = np;
@@ -170,7 +170,7 @@ public final class AutoArima {
         if (maxQ > 0 || maxSQ > 0) {
             int nq = maxQ > 0 ? 1 : 0;
             int nsq = m > 1 && maxSQ > 0 ? 1 : 0;
-            t = tryModel(base.withArma(0, nq, 0, nsq, constant));
+            t = tryModel(base.withArma(0, nq, 0, nsq, constant), best.ic());
             if (t.ic() < best.ic()) {
                 best = t;
                 p = sp = 0;
@@ -179,7 +179,7 @@ public final class AutoArima {
             }
         }
         if (constant) {
-            t = tryModel(base.withArma(0, 0, 0, 0, false));
+            t = tryModel(base.withArma(0, 0, 0, 0, false), best.ic());
             if (t.ic() < best.ic()) {
                 best = t;
                 p = q = sp = sq = 0;
@@ -212,7 +212,7 @@ public final class AutoArima {
                     moved = true;
                     break;
                 }
-                t = tryModel(candidate);
+                t = tryModel(candidate, best.ic());
                 if (t.ic() < best.ic()) {
                     best = t;
                     p = np;
@@ -233,7 +233,7 @@ public final class AutoArima {
                         results.add(new Tried(switched, Double.NaN, null));
                         continue;
                     }
-                    t = tryModel(switched);
+                    t = tryModel(switched, best.ic());
                     if (t.ic() < best.ic()) {
                         best = t;
                         constant = !constant;
@@ -247,7 +247,7 @@ public final class AutoArima {
             ordered.sort(Comparator.comparingDouble(Tried::ic));
             best = new Tried(best.order(), Double.POSITIVE_INFINITY, null);
             for (Tried r : ordered) {
-                Tried refit = evaluate(r.order(), false);
+                Tried refit = evaluate(r.order(), false, Double.POSITIVE_INFINITY);
                 if (refit.ic() < Double.POSITIVE_INFINITY) {
                     best = refit;
                     break;
@@ -266,14 +266,14 @@ public final class AutoArima {
         return false;
     }
 
-    private Tried tryModel(ArimaOrder order) {
-        Tried t = evaluate(order, approximation);
+    private Tried tryModel(ArimaOrder order, double bestIc) {
+        Tried t = evaluate(order, approximation, bestIc);
         results.add(t);
         return t;
     }
 
     /** [2] {@code myarima}: the fit and its criterion, infinite when it fails or is refused. */
-    private Tried evaluate(ArimaOrder order, boolean css) {
+    private Tried evaluate(ArimaOrder order, boolean css, double bestIc) {
         Optional<Arima.Fit> found = Arima.fit(y, order, css ? Arima.Method.CSS : Arima.Method.CSS_ML);
         if (found.isEmpty()) {
             return new Tried(order, Double.POSITIVE_INFINITY, null);
@@ -283,7 +283,12 @@ public final class AutoArima {
         int nStar = fit.effectiveLength();
         double aic = css ? offset + nStar * Math.log(fit.rawSigma2()) + 2 * k : fit.aic();
         double ic = n <= 3 ? aic : aic + 2.0 * k * (k + 1) / (nStar - k - 1);
-        if (Double.isNaN(ic) || fit.smallestRoot() < ROOT_MARGIN || !fit.variancesValid()) {
+        if (Double.isNaN(ic) || fit.smallestRoot() < ROOT_MARGIN) {
+            ic = Double.POSITIVE_INFINITY;
+        }
+        // the variance check only matters where the model would be chosen (it cannot make a worse one
+        // better) or where the criterion orders the ML refits: checked there, as R checks every model
+        if ((ic < bestIc || css) && !fit.variancesValid()) {
             ic = Double.POSITIVE_INFINITY;
         }
         return new Tried(order, ic, fit);
