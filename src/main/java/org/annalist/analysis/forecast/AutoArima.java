@@ -75,6 +75,15 @@ public final class AutoArima {
      * constant series or constant differences, or every model refused
      */
     public static Optional<Arima.Fit> fit(double[] y, int period) {
+        return fit(y, period, y.length > APPROXIMATION_LENGTH || period > APPROXIMATION_PERIOD);
+    }
+
+    /**
+     * As {@link #fit(double[], int)} with R's {@code approximation} argument set: {@code true}
+     * searches by CSS and refits by exact ML (about ten times faster on a seasonal series of 144
+     * values), {@code false} searches by exact ML.
+     */
+    public static Optional<Arima.Fit> fit(double[] y, int period, boolean approximation) {
         int n = y.length;
         if (n < 4 || period < 1) {
             return Optional.empty();
@@ -118,7 +127,6 @@ public final class AutoArima {
                 maxQ = Math.min(maxQ, m - 1);
             }
         }
-        boolean approximation = n > APPROXIMATION_LENGTH || m > APPROXIMATION_PERIOD;
         double offset = 0;
         if (approximation) {
             ArimaOrder nullOrder = new ArimaOrder(0, d, 0, 0, seasonalD, 0, m, d + seasonalD == 0);

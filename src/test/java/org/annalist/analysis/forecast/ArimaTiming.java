@@ -21,16 +21,18 @@ public final class ArimaTiming {
         Object[][] cases = {
             {"AirPassengers", ArimaTest.series("AirPassengers"), 12},
             {"nottem (240 monthly)", ArimaTest.series("nottem"), 12},
-            {"UKgas, last 40 quarters", Arrays.copyOfRange(ukgas, ukgas.length - 40, ukgas.length), 4}};
+            {"UKgas, last 40 quarters", Arrays.copyOfRange(ukgas, ukgas.length - 40, ukgas.length), 4},
+            {"AirPassengers, CSS search", ArimaTest.series("AirPassengers"), -12}};
         int runs = args.length > 0 ? Integer.parseInt(args[0]) : 5;
         for (Object[] c : cases) {
             double[] y = (double[]) c[1];
-            int m = (Integer) c[2];
+            int m = Math.abs((Integer) c[2]);
+            boolean forceCss = (Integer) c[2] < 0;
             double[] ms = new double[runs];
             String label = "";
             for (int r = 0; r < runs; r++) {
                 long start = THREADS.getCurrentThreadCpuTime();
-                label = AutoArima.fit(y, m).map(Arima.Fit::label).orElse("none");
+                label = (forceCss ? AutoArima.fit(y, m, true) : AutoArima.fit(y, m)).map(Arima.Fit::label).orElse("none");
                 ms[r] = (THREADS.getCurrentThreadCpuTime() - start) / 1e6;
             }
             Arrays.sort(ms);
