@@ -99,7 +99,7 @@ final class OutlookViews {
     static String why(OutlookFinding o, Formats f, String range) {
         String tested = "Each method was tested by forecasting each of the last " + f.count(o.backtestPeriods())
                 + " periods (" + range + ") from the data before it, as if made at the time";
-        String margin = Terms.number(org.annalist.findings.DecisionRules.OUTLOOK_CLEAR_ADVANTAGE_PCT) + "\u00A0%";
+        String margin = Terms.number(org.annalist.findings.DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT) + "\u00A0%";
         String averages = "Averages of several methods have forecast more accurately, on average, than any one"
                 + " method chosen in advance in large forecasting competitions";
         return switch (o.chosenBecause().basis()) {

@@ -35,7 +35,7 @@ import org.annalist.series.SeriesBuilder;
  * <p>Usage, from the top folder after {@code mvn -q -B -DskipTests package}:
  * {@code java -cp target/annalist.jar:target/test-classes org.annalist.cli.M3Benchmark
  * ../shared/reference-data/forecasting [--r dev/m3] [--only monthly] [--every K] [--threads N]}.
- * {@code --every K} takes every K-th series (a quick look while developing); the figures of record
+ * {@code --variant none} prints only the published and R's figures. {@code --every K} takes every K-th series (a quick look while developing); the figures of record
  * are over all series.
  */
 public final class M3Benchmark {
@@ -135,7 +135,9 @@ public final class M3Benchmark {
         Map<String, Tally> tallies = new LinkedHashMap<>();
         List<String> names = variants.isEmpty() ? List.of("ANNALIST") : variants;
         for (String name : names) {
-            tallies.put(name, forecastAll(chosen, f, name, threads));
+            if (!name.equals("none")) {
+                tallies.put(name, forecastAll(chosen, f, name, threads));
+            }
         }
         Map<String, Map<String, Forecast>> published = readForecasts(folder.resolve("m3-" + frequency
                 + "-published-forecasts.csv"), byId);

@@ -26,8 +26,10 @@ class DecisionRulesTest {
     }
 
     @Test
-    void theOutlooksMarginIsTheDecisionRule() {
-        assertThat(org.annalist.analysis.forecast.Outlook.CLEAR_ADVANTAGE_PCT)
-                .isEqualTo(DecisionRules.OUTLOOK_CLEAR_ADVANTAGE_PCT);
+    void theOutlooksMarginsAreTheDecisionRules() {
+        assertThat(org.annalist.analysis.forecast.Outlook.METHOD_ADVANTAGE_PCT)
+                .isEqualTo(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT);
+        assertThat(org.annalist.analysis.forecast.Outlook.REGIME_ADVANTAGE_PCT)
+                .isEqualTo(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT);
     }
 }

@@ -52,7 +52,7 @@ final class CandidateForecasts {
             case ETS -> EtsSelection.select(y, period).map(EtsSelection.Choice::best).map(fit -> new Fitted(
                     Outlook.Model.single(Outlook.Method.ETS, Optional.of(fit.model().label()), false), fit.forecast(horizon),
                     fit.hasAnalyticIntervals() ? Optional.of(fit.predict(horizon)) : Optional.empty(), fit.paths(shocks)));
-            case ARIMA -> AutoArima.fit(y, period).map(fit -> new Fitted(
+            case ARIMA -> AutoArima.fitConditional(y, period).map(fit -> new Fitted(
                     Outlook.Model.single(Outlook.Method.ARIMA, Optional.of(fit.label()), false), fit.forecast(horizon),
                     Optional.of(fit.predict(horizon)), fit.paths(shocks)));
             case THETA -> Theta.fit(y, period).map(theta -> new Fitted(

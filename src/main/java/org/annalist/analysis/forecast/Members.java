@@ -35,8 +35,8 @@ final class Members {
                 EtsModel.Fit best = choice.best();
                 return (before, h) -> best.model().filter(before, best.parameters()).map(fit -> fit.forecast(h));
             });
-            case ARIMA -> AutoArima.fit(training, period)
-                    .map(fit -> (before, h) -> fit.updated(before).map(f -> f.forecast(h)));
+            case ARIMA -> AutoArima.fitConditional(training, period).map(fit -> (before, h) -> Arima.withCoefficients(
+                    before, fit.order(), fit.method(), fit.coefficients()).map(f -> f.forecast(h)));
             case THETA -> Theta.fit(training, period).map(theta -> (before, h) -> theta.updated(before).map(f -> f.forecast(h)));
             case SEASONAL_NAIVE -> training.length < cycle ? Optional.empty()
                     : Optional.of((before, h) -> Optional.of(SeasonalNaive.forecast(before, cycle, h)));

@@ -19,7 +19,27 @@ public final class OutlookLab {
             case "comb" -> CandidateForecasts.forecast(Outlook.Method.COMBINATION, y, period, h, bounds,
                     Backtest.COMBINABLE);
             case "outlook" -> Outlook.of(y, period, h, bounds).map(Outlook.Result::chosen);
-            default -> throw new IllegalArgumentException(variant);
+            default -> {
+                if (!variant.startsWith("margin")) {
+                    throw new IllegalArgumentException(variant);
+                }
+                double margin = Double.parseDouble(variant.substring(6)) / 100;
+                int cycle = Math.max(1, period);
+                int origins = Backtest.origins(y.length, period);
+                Optional<Backtest.Run> run = Backtest.isLongEnough(origins, period)
+                        ? Backtest.run(y, period, y.length - origins, cycle, Math.max(cycle, Math.min(h, origins)))
+                        : Optional.empty();
+                Outlook.Method method = Outlook.Method.COMBINATION;
+                if (run.isPresent()) {
+                    Outlook.Score comb = run.get().score(Outlook.Method.COMBINATION);
+                    Outlook.Score best = run.get().scores().get(1);
+                    if (best.mae() <= (1 - margin) * comb.mae() && best.maseEarlier() < comb.maseEarlier()
+                            && best.maseLater() < comb.maseLater()) {
+                        method = best.method();
+                    }
+                }
+                yield CandidateForecasts.forecast(method, y, period, h, bounds, Backtest.COMBINABLE);
+            }
         };
         return f.map(x -> new double[][] {x.mean(), x.lo80(), x.hi80(), x.lo95(), x.hi95()});
     }

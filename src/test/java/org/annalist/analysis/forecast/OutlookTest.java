@@ -3,6 +3,7 @@ package org.annalist.analysis.forecast;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -20,8 +21,9 @@ class OutlookTest {
         double[] mase = AgainstR.meanHoldOutMase(split -> {
             Outlook.Result outlook = Outlook.of(split.training(), split.period(), split.horizon(),
                     Outlook.Bounds.NON_NEGATIVE).orElseThrow();
-            assertThat(outlook.backtest()).hasSize(4);
-            assertThat(outlook.backtest().get(0).method()).isEqualTo(outlook.chosen().method());
+            assertThat(outlook.backtest()).extracting(Outlook.Score::method).startsWith(Outlook.Method.COMBINATION)
+                    .contains(Outlook.Method.ETS, Outlook.Method.ARIMA, Outlook.Method.THETA);
+            assertThat(outlook.chosenScore()).isPresent();
             return outlook.chosen().mean();
         });
         assertThat(mase[0]).isLessThanOrEqualTo(mase[1]);
@@ -200,26 +202,26 @@ class OutlookTest {
         Outlook.Result outlook = Outlook.of(y, 12, 12, Outlook.Bounds.NON_NEGATIVE, 66).orElseThrow();
         assertThat(outlook.span().basis()).isEqualTo(Outlook.Span.Basis.ALL_VALUES_NOT_BEATEN);
         assertThat(outlook.span().from()).isZero();
-        assertThat(outlook.span().regimeMae()).isGreaterThan(0.9 * outlook.span().allMae());
+        assertThat(outlook.span().regimeMae()).isGreaterThan(0.75 * outlook.span().allMae());
     }
 
     /**
-     * A break after which the seasonal pattern turned over (summer peak became a winter peak,
-     * planted, five years before the end): the history before it misleads every method, so the
-     * forecasts fitted on the latest regime alone did clearly better and are used.
+     * The span rule on planted back-test errors (the combination's, as no single method is clearly
+     * better): the latest regime replaces all values only when its error is at least 25 % lower —
+     * 8 against 10 is not enough, 7.5 against 10 is the margin exactly.
      */
     @Test
-    void aBreakThatTurnedTheSeasonOverFitsTheLatestRegime() {
-        Random random = new Random(22);
-        double[] y = new double[144];
-        for (int t = 0; t < y.length; t++) {
-            double season = t < 84 ? Math.sin(2 * Math.PI * t / 12) : -Math.sin(2 * Math.PI * t / 12);
-            y[t] = 1000 * (1 + 0.3 * season) * (1 + 0.03 * random.nextGaussian());
-        }
-        Outlook.Result outlook = Outlook.of(y, 12, 12, Outlook.Bounds.NON_NEGATIVE, 84).orElseThrow();
-        assertThat(outlook.span().basis()).isEqualTo(Outlook.Span.Basis.REGIME_CLEARLY_BETTER);
-        assertThat(outlook.span().from()).isEqualTo(84);
-        assertThat(outlook.span().regimeMae()).isLessThanOrEqualTo(0.9 * outlook.span().allMae());
+    void theLatestRegimeReplacesAllValuesOnlyWhenClearlyBetter() {
+        Backtest.Run all = new Backtest.Run(List.of(score(Outlook.Method.COMBINATION, 10, 10, 10),
+                score(Outlook.Method.ETS, 10.5, 10, 11)), Backtest.COMBINABLE, 24, 10);
+        Backtest.Run close = new Backtest.Run(List.of(score(Outlook.Method.COMBINATION, 8, 8, 8),
+                score(Outlook.Method.ETS, 8.5, 8, 9)), Backtest.COMBINABLE, 24, 10);
+        Backtest.Run clear = new Backtest.Run(List.of(score(Outlook.Method.COMBINATION, 7.5, 7, 8),
+                score(Outlook.Method.ETS, 8.5, 8, 9)), Backtest.COMBINABLE, 24, 10);
+        assertThat(Outlook.weigh(96, all, close)).isEqualTo(new Outlook.Span(0, Outlook.Span.Basis.ALL_VALUES_NOT_BEATEN,
+                10, 8));
+        assertThat(Outlook.weigh(96, all, clear)).isEqualTo(new Outlook.Span(96,
+                Outlook.Span.Basis.REGIME_CLEARLY_BETTER, 10, 7.5));
     }
 
     /** A break too close to the end for a back-test of its own: all values, and the span says why. */
@@ -232,5 +234,32 @@ class OutlookTest {
         Outlook.Result outlook = Outlook.of(y, 12, 12, Outlook.Bounds.NON_NEGATIVE, 130).orElseThrow();
         assertThat(outlook.span().basis()).isEqualTo(Outlook.Span.Basis.REGIME_TOO_SHORT);
         assertThat(outlook.span().from()).isZero();
+    }
+
+    private static Outlook.Score score(Outlook.Method method, double mae, double earlier, double later) {
+        HorizonErrors none = new HorizonErrors(new double[1], new double[1], new int[1],
+                new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
+        return new Outlook.Score(method, mae / 10, 5, mae, earlier / 10, later / 10, 5, 24, none);
+    }
+
+    /**
+     * The choice rule on planted back-test scores (MASE scale 10): a single method replaces the
+     * combination only when its error is at least 50 % lower over all origins and lower in both
+     * halves; 6 against 10 is not clear, and 4 against 10 made of one good half is not steady.
+     */
+    @Test
+    void aSingleMethodReplacesTheCombinationOnlyWhenClearlyAndSteadilyBetter() {
+        Outlook.Score combination = score(Outlook.Method.COMBINATION, 10, 10, 10);
+        Outlook.Score clear = score(Outlook.Method.THETA, 4, 4.5, 3.5);
+        Outlook.Score unsteady = score(Outlook.Method.THETA, 4, 0.5, 11);
+        Outlook.Score close = score(Outlook.Method.THETA, 6, 5, 7);
+        for (Outlook.Score single : List.of(clear, unsteady, close)) {
+            Backtest.Run run = new Backtest.Run(List.of(combination, single), Backtest.COMBINABLE, 24, 10);
+            Outlook.Choice choice = Outlook.choose(run);
+            assertThat(choice.basis()).as("best single %s", single).isEqualTo(single == clear
+                    ? Outlook.Choice.Basis.SINGLE_CLEARLY_BETTER : Outlook.Choice.Basis.COMBINATION_NOT_BEATEN);
+            assertThat(choice.combination()).contains(combination);
+            assertThat(choice.bestSingle()).contains(single);
+        }
     }
 }
