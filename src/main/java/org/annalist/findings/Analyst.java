@@ -132,7 +132,8 @@ public final class Analyst {
                 decomposition.map(Decomposition::adjusted).orElse(null), parts);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
-        OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), measured, horizon);
+        OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), breaks.episodes(), measured,
+                horizon);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
                 IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),

@@ -6,7 +6,6 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import org.annalist.analysis.forecast.EtsModel;
 import org.annalist.analysis.forecast.Outlook;
 import org.annalist.analysis.forecast.YearSums;
 import org.annalist.analysis.indicators.LatestIndicators;
@@ -14,13 +13,10 @@ import org.annalist.series.Period;
 import org.annalist.series.Series;
 
 /**
- * The outlook of a series ({@link Outlook}) as a finding: which values it is fitted on, how far it
- * looks, the bounds the measure keeps, the periods of its forecasts and the next year's total.
- *
- * <p>After a structural break the methods are fitted on the latest regime when it spans at least
- * two seasonal cycles (eight periods for non-seasonal data) — the old level would otherwise pull the
- * forecasts; a shorter regime leaves all values in and the brief says the break may make the outlook
- * err. Missing values inside the fitted span are filled with what trend and season predict there.
+ * The outlook of a series ({@link Outlook}) as a finding: how far it looks, the bounds the measure
+ * keeps, the periods of its forecasts and the next year's total, and, after a structural break,
+ * whether the history before it was kept (the outlook decides that on its back-test). Missing
+ * values are filled with what trend and season predict there.
  */
 final class OutlookAnalysis {
 
@@ -34,8 +30,12 @@ final class OutlookAnalysis {
      * @param horizon the user's number of periods ahead (0: no outlook), or empty for the default
      * @return null without an outlook
      */
+    /**
+     * @param episodes the falls and rises that moved back: each one that ended before the latest
+     *                 values is bridged before forecasting ({@link #bridged})
+     */
     static OutlookFinding of(Series series, Optional<Decomposition> decomposition, int regimeStart,
-                             Measure kind, Optional<Integer> horizon) {
+                             List<Episode> episodes, Measure kind, Optional<Integer> horizon) {
         LatestIndicators.Measure measure = kind.forIndicators();
         int last = lastObserved(series);
         if (last < 0 || horizon.isPresent() && horizon.get() == 0) {
@@ -43,27 +43,19 @@ final class OutlookAnalysis {
         }
         int period = series.frequency().seasonalPeriod();
         int h = horizon.orElse(defaultHorizon(series.period(last)));
-        int minimumRegime = period > 1 ? DecisionRules.OUTLOOK_REGIME_CYCLES * period
-                : DecisionRules.OUTLOOK_REGIME_NON_SEASONAL;
         List<OutlookCaveat> caveats = new ArrayList<>();
-        int from = 0;
-        if (regimeStart > 0) {
-            if (last + 1 - regimeStart >= minimumRegime) {
-                from = regimeStart;
-                caveats.add(new OutlookCaveat.FittedSinceBreak(series.period(regimeStart)));
-            } else {
-                caveats.add(new OutlookCaveat.BreakTooRecent(series.period(regimeStart)));
-            }
-        }
-        double[] y = filled(series, decomposition, from, last, caveats);
+        double[] y = bridged(series, filled(series, decomposition, last, caveats), decomposition, episodes, caveats);
         Optional<Outlook.Result> result = Outlook.of(y, period, h,
-                kind == Measure.INTERVAL ? Outlook.Bounds.NONE : bounds(series, measure));
+                kind == Measure.INTERVAL ? Outlook.Bounds.NONE : bounds(series, measure), Math.max(0, regimeStart));
         if (result.isEmpty()) {
             return null;
         }
         Outlook.Result outlook = result.get();
+        int from = outlook.span().from();
+        history(series, regimeStart, outlook.span()).ifPresent(caveats::add);
         if (outlook.backtest().isEmpty()) {
-            caveats.add(noBacktest(series, from, y.length, last + 1, period));
+            caveats.add(new OutlookCaveat.NoBacktest(Outlook.backtestPossible(y.length, period)
+                    ? OutlookCaveat.NoBacktest.Reason.NO_SCALE : OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT));
         }
         Outlook.Forecast f = outlook.chosen();
         Period lastPeriod = series.period(last);
@@ -92,8 +84,7 @@ final class OutlookAnalysis {
         }
         List<OutlookFinding.Score> scores = outlook.backtest().stream()
                 .map(s -> new OutlookFinding.Score(method(s.method(), period), s.mase(), s.smape())).toList();
-        Double typical = outlook.backtest().isEmpty() ? null
-                : Numbers.orNull(outlook.backtest().get(0).medianAbsolutePercentError());
+        Double typical = outlook.chosenScore().map(s -> Numbers.orNull(s.medianAbsolutePercentError())).orElse(null);
         OutlookYears.Years years = OutlookYears.of(series, last, f, h, kind);
         boolean tested = !outlook.backtest().isEmpty();
         return new OutlookFinding(method(f.method(), period), model(f.model(), period), h, series.period(from), points,
@@ -138,25 +129,22 @@ final class OutlookAnalysis {
         if (period < 2) {
             return null;
         }
-        return outlook.backtest().stream().filter(s -> s.method() == outlook.chosen().method()).findFirst()
-                .map(s -> s.errors().cycleSums())
+        return outlook.chosenScore().map(s -> s.errors().cycleSums())
                 .filter(c -> c.enough() && !Double.isNaN(c.relativeMedian()))
                 .map(c -> 100 * c.relativeMedian()).orElse(null);
     }
 
-    /**
-     * Why there is no back-test: the series is too short, or only the latest regime the outlook is
-     * fitted on is, or the values give no error to scale by.
-     */
-    private static OutlookCaveat.NoBacktest noBacktest(Series series, int from, int fitted, int all, int period) {
-        if (Outlook.backtestPossible(fitted, period)) {
-            return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.NO_SCALE, Optional.empty());
+    /** What the outlook did with the history before a structural break, or empty without one. */
+    private static Optional<OutlookCaveat> history(Series series, int regimeStart, Outlook.Span span) {
+        if (regimeStart <= 0) {
+            return Optional.empty();
         }
-        if (from > 0 && Outlook.backtestPossible(all, period)) {
-            return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.REGIME_TOO_SHORT,
-                    Optional.of(series.period(from)));
-        }
-        return new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT, Optional.empty());
+        Period start = series.period(regimeStart);
+        return Optional.of(switch (span.basis()) {
+            case REGIME_CLEARLY_BETTER -> new OutlookCaveat.FittedSinceBreak(start, span.allMae(), span.regimeMae());
+            case ALL_VALUES_NOT_BEATEN -> new OutlookCaveat.HistoryKept(start, span.allMae(), span.regimeMae());
+            case REGIME_TOO_SHORT, NO_BREAK -> new OutlookCaveat.BreakTooRecent(start);
+        });
     }
 
     /**
@@ -184,23 +172,31 @@ final class OutlookAnalysis {
     /** The method; the seasonal naive forecast of data without a season ({@code period} ≤ 1) is the naive one. */
     private static OutlookMethod method(Outlook.Method method, int period) {
         return switch (method) {
-            case ETS -> OutlookMethod.ETS;
-            case THETA -> OutlookMethod.THETA;
             case COMBINATION -> OutlookMethod.COMBINATION;
+            case ETS -> OutlookMethod.ETS;
+            case ARIMA -> OutlookMethod.ARIMA;
+            case THETA -> OutlookMethod.THETA;
             case SEASONAL_NAIVE -> period <= 1 ? OutlookMethod.NAIVE : OutlookMethod.SEASONAL_NAIVE;
+            case NAIVE_WITH_DRIFT -> OutlookMethod.NAIVE_WITH_DRIFT;
         };
     }
 
     private static OutlookFinding.Model model(Outlook.Model model, int period) {
-        return new OutlookFinding.Model(method(model.method(), period), model.ets().map(EtsModel::label),
-                model.seasonallyAdjusted(), method(Outlook.Method.SEASONAL_NAIVE, period));
+        return new OutlookFinding.Model(method(model.method(), period), model.label(), model.seasonallyAdjusted(),
+                model.members().stream().map(m -> model(m, period)).toList());
     }
 
     private static OutlookFinding.Choice choice(Outlook.Choice choice, int period) {
-        return new OutlookFinding.Choice(choice.basis() != Outlook.Choice.Basis.AICC_WITHOUT_BACKTEST, choice.origins(),
-                choice.best().map(Outlook.Score::mase).orElse(Double.NaN),
-                choice.nextBest().map(s -> method(s.method(), period)),
-                choice.nextBest().map(Outlook.Score::mase).orElse(Double.NaN));
+        OutlookFinding.Choice.Basis basis = switch (choice.basis()) {
+            case COMBINATION_NOT_BEATEN -> OutlookFinding.Choice.Basis.COMBINATION_NOT_BEATEN;
+            case SINGLE_CLEARLY_BETTER -> OutlookFinding.Choice.Basis.SINGLE_CLEARLY_BETTER;
+            case COMBINATION_WITHOUT_BACKTEST -> OutlookFinding.Choice.Basis.COMBINATION_WITHOUT_BACKTEST;
+            case SHORT_SERIES -> OutlookFinding.Choice.Basis.SHORT_SERIES;
+        };
+        return new OutlookFinding.Choice(basis, choice.origins(),
+                choice.combination().map(Outlook.Score::mase).orElse(Double.NaN),
+                choice.bestSingle().map(s -> method(s.method(), period)),
+                choice.bestSingle().map(Outlook.Score::mase).orElse(Double.NaN));
     }
 
     /** Percent rates stay within 0–100, values that were never negative stay at or above zero. */
@@ -246,11 +242,53 @@ final class OutlookAnalysis {
     }
 
     /**
+     * Temporary shocks taken out before forecasting (an intervention for a known episode, rather
+     * than cutting the history at it): the values of every episode that moved back before the
+     * series' latest values — from its step to the break that moved back, or to the end of the
+     * stepped regime when its own line moved back — are replaced by a straight line between the
+     * seasonally adjusted level of the cycle before it and of the cycle after it, with the season put
+     * back. The forecasts then neither expect the shock to recur nor lose the years before it; what
+     * remains after the return is kept as it was.
+     */
+    private static double[] bridged(Series series, double[] y, Optional<Decomposition> d, List<Episode> episodes,
+                                    List<OutlookCaveat> caveats) {
+        int cycle = Math.max(1, series.frequency().seasonalPeriod());
+        double[] seasonal = d.map(Decomposition::seasonal).orElse(null);
+        boolean multiplicative = d.map(Decomposition::multiplicative).orElse(false);
+        double[] out = y.clone();
+        for (Episode e : episodes) {
+            int from = series.indexOf(e.start());
+            // to the break that moved back, or, when the stepped regime's own line moved back, to its end
+            int to = e.returnStart().map(series::indexOf).orElse(series.indexOf(e.asOf()) + 1);
+            if (from < 1 || to <= from || to >= y.length) {
+                continue;
+            }
+            double before = meanAdjusted(y, seasonal, multiplicative, Math.max(0, from - cycle), from);
+            double after = meanAdjusted(y, seasonal, multiplicative, to, Math.min(y.length, to + cycle));
+            for (int t = from; t < to; t++) {
+                double level = before + (after - before) * (t - from + 1) / (double) (to - from + 1);
+                out[t] = seasonal == null ? level : multiplicative ? level * seasonal[t] : level + seasonal[t];
+            }
+            caveats.add(new OutlookCaveat.ShockBridged(e.start(), series.period(to - 1), e.rise()));
+        }
+        return out;
+    }
+
+    /** The mean of the values from {@code from} to {@code to} − 1 with the season taken out. */
+    private static double meanAdjusted(double[] y, double[] seasonal, boolean multiplicative, int from, int to) {
+        double sum = 0;
+        for (int t = from; t < to; t++) {
+            sum += seasonal == null ? y[t] : multiplicative ? y[t] / seasonal[t] : y[t] - seasonal[t];
+        }
+        return sum / (to - from);
+    }
+
+    /**
      * The values from {@code from} to {@code last}, gaps filled with trend-cycle and season there
      * (or, without a decomposition, by straight lines between their neighbours).
      */
-    private static double[] filled(Series series, Optional<Decomposition> d, int from, int last,
-                                   List<OutlookCaveat> caveats) {
+    private static double[] filled(Series series, Optional<Decomposition> d, int last, List<OutlookCaveat> caveats) {
+        int from = 0;
         double[] trendCycle = d.map(Decomposition::trendCycle).orElse(null);
         double[] seasonal = d.map(Decomposition::seasonal).orElse(null);
         boolean multiplicative = d.map(Decomposition::multiplicative).orElse(false);

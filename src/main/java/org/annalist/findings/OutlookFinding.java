@@ -7,8 +7,8 @@ import java.util.Optional;
 import org.annalist.series.Period;
 
 /**
- * The findings JSON {@code outlook} block: forecasts with 80 and 95 % intervals from the method the
- * back-test chose.
+ * The findings JSON {@code outlook} block: forecasts with 80 and 95 % intervals from the combination
+ * of methods, or from the single method the back-test showed clearly better.
  *
  * @param model           the method's model, e.g. ETS(M,A,M)
  * @param fittedFrom      the first period the method was fitted on (the latest regime's start after a break)
@@ -52,21 +52,45 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
     /**
      * A method's model.
      *
-     * @param ets                the ETS model in the usual notation, e.g. {@code ETS(M,A,M)}, for ETS
-     *                           and the combination (empty otherwise)
+     * @param label              the fitted model in its usual notation, {@code ETS(M,A,M)} or
+     *                           {@code ARIMA(0,1,1)(0,1,1)[12]}, for ETS and ARIMA (empty otherwise)
      * @param seasonallyAdjusted Theta worked on seasonally adjusted values
-     * @param naive              the naive method for this series: seasonal naive, or naive for data
-     *                           without a season (a member of the combination)
+     * @param members            the combination's members (empty for a single method)
      */
-    public record Model(OutlookMethod method, Optional<String> ets, boolean seasonallyAdjusted, OutlookMethod naive) {
+    public record Model(OutlookMethod method, Optional<String> label, boolean seasonallyAdjusted, List<Model> members) {
+
+        public Model {
+            members = List.copyOf(members);
+        }
     }
 
     /**
-     * How the method was chosen: by the lowest MASE in the back-test over {@code origins} periods,
-     * or, without a back-test, by AICc among ETS models.
+     * How the method was chosen.
+     *
+     * @param origins         back-test origins (0 without a back-test)
+     * @param combinationMase the combination's back-test MASE (NaN without a back-test)
+     * @param bestSingle      the single method with the lowest back-test MASE (empty without a back-test)
+     * @param bestSingleMase  its MASE (NaN without a back-test)
      */
-    public record Choice(boolean backtested, int origins, double bestMase, Optional<OutlookMethod> nextBest,
-                         double nextBestMase) {
+    public record Choice(Basis basis, int origins, double combinationMase, Optional<OutlookMethod> bestSingle,
+                         double bestSingleMase) {
+
+        /** What decided. */
+        public enum Basis {
+            /** No single method was clearly and steadily better than the combination in the back-test. */
+            COMBINATION_NOT_BEATEN,
+            /** A single method was clearly and steadily better in the back-test. */
+            SINGLE_CLEARLY_BETTER,
+            /** No back-test was possible: the combination by default. */
+            COMBINATION_WITHOUT_BACKTEST,
+            /** Too few values for the usual methods. */
+            SHORT_SERIES
+        }
+
+        /** Whether the choice rests on a back-test. */
+        public boolean backtested() {
+            return basis == Basis.COMBINATION_NOT_BEATEN || basis == Basis.SINGLE_CLEARLY_BETTER;
+        }
     }
 
     /** @param index 0-based position after the series' last observation */

@@ -5,11 +5,14 @@ import com.fasterxml.jackson.annotation.JsonValue;
 /** A forecasting method of the outlook, by its usual name. */
 public enum OutlookMethod {
     ETS("ETS"),
+    ARIMA("ARIMA"),
     THETA("Theta"),
     COMBINATION("combination"),
     SEASONAL_NAIVE("seasonal naive"),
     /** The seasonal naive forecast of data without a season: every period as the latest value. */
-    NAIVE("naive");
+    NAIVE("naive"),
+    /** The naive forecast plus the average change per period, for series too short for the other methods. */
+    NAIVE_WITH_DRIFT("naive with drift");
 
     private final String code;
 

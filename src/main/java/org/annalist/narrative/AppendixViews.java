@@ -47,15 +47,17 @@ final class AppendixViews {
                 + "straight line carried by the remainder", ""));
         if (findings.outlook() != null) {
             OutlookFinding o = findings.outlook();
-            rows.add(new BriefView.MethodRow("Outlook", "exponential smoothing state-space models chosen by AICc "
-                    + "(Hyndman, Koehler, Snyder & Grose 2002; Hyndman et al. 2008), Theta (Assimakopoulos & "
-                    + "Nikolopoulos 2000), seasonal naive and their equal-weight combination, compared in a "
-                    + "rolling-origin back-test (Tashman 2000) by MASE (Hyndman & Koehler 2006)",
+            rows.add(new BriefView.MethodRow("Outlook", "equal-weight combination (Makridakis & Hibon 2000; "
+                    + "Makridakis, Spiliotis & Assimakopoulos 2020) of exponential smoothing state-space models chosen "
+                    + "by AICc (Hyndman, Koehler, Snyder & Grose 2002; Hyndman et al. 2008), automatic ARIMA by the "
+                    + "stepwise search of Hyndman & Khandakar (2008) and Theta (Assimakopoulos & Nikolopoulos 2000), "
+                    + "checked against each method alone and the seasonal naive rule in a rolling-origin back-test "
+                    + "(Tashman 2000) by MASE (Hyndman & Koehler 2006)",
                     Terms.forecastModel(o.model()) + ", fitted from " + o.fittedFrom() + ", " + o.horizon()
                     + " periods ahead; " + Terms.choice(o.chosenBecause())
                     + "; intervals analytic or from 2,000 simulated paths"
-                    + (o.intervalsWidened() ? ", widened where narrower than the back-test's errors at the same"
-                    + " horizon (empirical intervals, Williams & Goodman 1971)" : "")
+                    + (o.intervalsWidened() ? ", widened where narrower than the back-test's errors (empirical"
+                    + " intervals, Williams & Goodman 1971)" : "")
                     + "; year totals and their intervals from the simulated paths"));
         }
         return rows;

@@ -49,29 +49,20 @@ final class OutlookViews {
                     f.significant(p.lo95()) + " to " + f.significant(p.hi95())));
         }
         List<BriefView.ScoreRow> scores = new ArrayList<>();
-        for (int i = 0; i < o.backtest().size(); i++) {
-            OutlookFinding.Score s = o.backtest().get(i);
-            scores.add(new BriefView.ScoreRow(s.method().code(), f.fixed(s.mase(), 2), f.fixed(s.smape(), 1), i == 0));
+        for (OutlookFinding.Score s : o.backtest()) {
+            scores.add(new BriefView.ScoreRow(s.method().code(), f.fixed(s.mase(), 2), f.fixed(s.smape(), 1),
+                    s.method() == o.method()));
         }
         OutlookFinding.Span year = o.nextYearTotal() != null ? o.nextYearTotal() : o.nextYearAverage();
         boolean total = o.nextYearTotal() != null;
         String unit = series.unit().isBlank() ? "" : "\u00A0" + series.unit();
-        OutlookFinding.Model model = o.model();
-        String methodName = switch (o.method()) {
-            case ETS -> "exponential smoothing, " + model.ets().orElseThrow();
-            case COMBINATION -> "the average of three methods (" + model.ets().orElseThrow() + ", Theta and "
-                    + model.naive().code() + ")";
-            case SEASONAL_NAIVE -> "the seasonal naive rule (each period as the same period a year before)";
-            case NAIVE -> "the naive rule (every period as the latest value)";
-            case THETA -> model.seasonallyAdjusted() ? "the Theta method, on seasonally adjusted values"
-                    : "the Theta method";
-        };
+        String methodName = methodInWords(o.model());
         String noBacktest = o.caveats().stream().filter(c -> c instanceof OutlookCaveat.NoBacktest)
                 .map(c -> Terms.outlookCaveat(c, f)).findFirst().orElse("");
         List<String> caveats = o.caveats().stream().filter(c -> !(c instanceof OutlookCaveat.NoBacktest))
                 .map(c -> Terms.outlookCaveat(c, f)).toList();
         String range = o.backtestFrom() == null ? "" : f.period(o.backtestFrom()) + " to " + f.period(o.backtestTo());
-        return new BriefView.OutlookView(true, methodName, Terms.choice(o.chosenBecause()), f.period(o.fittedFrom()),
+        return new BriefView.OutlookView(true, methodName, why(o, f, range), f.period(o.fittedFrom()),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
                 rows.size() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
                 year == null ? "" : f.significant(year.mean()), year == null ? "" : f.significant(year.lo80()),
@@ -86,6 +77,42 @@ final class OutlookViews {
                 o.typicalYearErrorPct() != null && o.typicalErrorPct() != null
                         && o.typicalYearErrorPct() < o.typicalErrorPct(),
                 f.count(o.backtestPeriods()), range, o.intervalsWidened(), noBacktest, scores, caveats);
+    }
+
+    /** The method as a reader of the outlook page can follow it, with the models in their usual notation. */
+    static String methodInWords(OutlookFinding.Model model) {
+        return switch (model.method()) {
+            case COMBINATION -> "the average of " + (model.members().size() == 3 ? "three" : "two") + " methods: "
+                    + Terms.listed(model.members().stream().map(OutlookViews::methodInWords).toList());
+            case ETS -> "exponential smoothing (" + model.label().orElseThrow() + ")";
+            case ARIMA -> "an ARIMA model (" + model.label().orElseThrow() + ")";
+            case THETA -> model.seasonallyAdjusted() ? "the Theta method, on seasonally adjusted values"
+                    : "the Theta method";
+            case SEASONAL_NAIVE -> "the seasonal naive rule (each period as the same period a year before)";
+            case NAIVE -> "the naive rule (every period as the latest value)";
+            case NAIVE_WITH_DRIFT -> "the naive rule with drift (the latest value plus the average change per"
+                    + " period so far)";
+        };
+    }
+
+    /** Why this method: the reason the combination is the default, and what the back-test showed. */
+    static String why(OutlookFinding o, Formats f, String range) {
+        String tested = "Each method was tested by forecasting each of the last " + f.count(o.backtestPeriods())
+                + " periods (" + range + ") from the data before it, as if made at the time";
+        String margin = Terms.number(org.annalist.findings.DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT) + "\u00A0%";
+        String averages = "Averages of several methods have forecast more accurately, on average, than any one"
+                + " method chosen in advance in large forecasting competitions";
+        return switch (o.chosenBecause().basis()) {
+            case COMBINATION_NOT_BEATEN -> averages + ". " + tested + "; no single method did clearly better than the"
+                    + " average (by " + margin + " or more, in both the earlier and the later half of the test), so the"
+                    + " average is used.";
+            case SINGLE_CLEARLY_BETTER -> tested + "; this one missed by at least " + margin + " less than the average of"
+                    + " the methods, in both the earlier and the later half of the test, so it is used instead of the"
+                    + " average.";
+            case COMBINATION_WITHOUT_BACKTEST -> averages + "; this series is too short to test them on its own past.";
+            case SHORT_SERIES -> "The series is too short for the usual methods, so the forecast only carries its"
+                    + " latest values forward; its intervals are wide because so few values show how much it varies.";
+        };
     }
 
     /**

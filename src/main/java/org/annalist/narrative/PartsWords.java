@@ -30,7 +30,7 @@ final class PartsWords {
         List<String> runs = new ArrayList<>();
         for (PartsCheck.Unchecked u : c.unchecked().subList(0, Math.min(LISTED, c.unchecked().size()))) {
             String span = u.from().equals(u.to()) ? f.period(u.from()) : f.period(u.from()) + " to " + f.period(u.to());
-            runs.add(span + " (" + names(u.missing()) + " missing)");
+            runs.add(span + " (" + Terms.listed(u.missing()) + " missing)");
         }
         String uncheckedWords = String.join(", ", runs)
                 + (c.unchecked().size() > LISTED ? " and " + (c.unchecked().size() - LISTED) + " more spans" : "");
@@ -43,11 +43,4 @@ final class PartsWords {
                 gapWords, f.count(c.periods().size()), uncheckedWords);
     }
 
-    /** {@code Brevania}, {@code Total and Brevania}, {@code Domestic, Brevania and Long-haul}. */
-    private static String names(List<String> names) {
-        if (names.size() == 1) {
-            return names.get(0);
-        }
-        return String.join(", ", names.subList(0, names.size() - 1)) + " and " + names.get(names.size() - 1);
-    }
 }

@@ -14,6 +14,7 @@ import org.annalist.findings.Direction;
 import org.annalist.findings.FormChoice;
 import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
+import org.annalist.findings.OutlookMethod;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.Smoothing;
 import org.annalist.findings.TestName;
@@ -148,32 +149,55 @@ final class Terms {
         return words[best];
     }
 
+    /** {@code Brevania}, {@code Total and Brevania}, {@code Domestic, Brevania and Long-haul}. */
+    static String listed(List<String> names) {
+        if (names.size() == 1) {
+            return names.get(0);
+        }
+        return String.join(", ", names.subList(0, names.size() - 1)) + " and " + names.get(names.size() - 1);
+    }
+
     /** The outlook's model: {@code ETS(M,A,M)}, {@code Theta, seasonally adjusted}, {@code mean of …}. */
     static String forecastModel(OutlookFinding.Model m) {
         return switch (m.method()) {
-            case ETS -> m.ets().orElseThrow();
+            case ETS, ARIMA -> m.label().orElseThrow();
             case THETA -> m.seasonallyAdjusted() ? "Theta, seasonally adjusted" : "Theta";
-            case SEASONAL_NAIVE, NAIVE -> m.method().code();
-            case COMBINATION -> "mean of " + m.ets().orElseThrow() + ", Theta and " + m.naive().code();
+            case SEASONAL_NAIVE, NAIVE, NAIVE_WITH_DRIFT -> m.method().code();
+            case COMBINATION -> "mean of " + listed(m.members().stream().map(Terms::forecastModel).toList());
         };
     }
 
-    /** How the outlook's method was chosen. */
+    /** How the outlook's method was chosen, in one clause with its figures. */
     static String choice(OutlookFinding.Choice c) {
-        if (!c.backtested()) {
-            return "chosen by AICc among ETS models, without a back-test";
-        }
-        String next = c.nextBest().map(m -> String.format(Locale.ROOT, "; next best %s %.2f", m.code(), c.nextBestMase()))
-                .orElse("");
-        return String.format(Locale.ROOT,
-                "lowest mean absolute scaled error in a rolling-origin back-test over the last %d periods (%.2f%s)",
-                c.origins(), c.bestMase(), next);
+        String scores = c.backtested() ? String.format(Locale.ROOT, " (MASE: combination %.2f, best single method %s %.2f)",
+                c.combinationMase(), c.bestSingle().map(OutlookMethod::code).orElse(""), c.bestSingleMase()) : "";
+        return switch (c.basis()) {
+            case COMBINATION_NOT_BEATEN -> String.format(Locale.ROOT, "the combination by default: no single method was"
+                    + " clearly and steadily better in a rolling-origin back-test over the last %d periods", c.origins())
+                    + scores;
+            case SINGLE_CLEARLY_BETTER -> String.format(Locale.ROOT, "clearly and steadily more accurate than the"
+                    + " combination in a rolling-origin back-test over the last %d periods", c.origins()) + scores;
+            case COMBINATION_WITHOUT_BACKTEST -> "the combination by default, without a back-test";
+            case SHORT_SERIES -> "too few values for the other methods, without a back-test";
+        };
     }
 
     /** What limits the outlook, with its periods in words. */
     static String outlookCaveat(OutlookCaveat caveat, Formats f) {
         if (caveat instanceof OutlookCaveat.FittedSinceBreak b) {
-            return "The outlook is fitted on the values since the structural change in " + f.period(b.start()) + " only.";
+            return "The outlook is fitted on the values since the structural change in " + f.period(b.start())
+                    + " only: so fitted, its forecasts of the last periods missed by less than when fitted on all"
+                    + " values.";
+        }
+        if (caveat instanceof OutlookCaveat.HistoryKept b) {
+            return "The outlook is fitted on all values, the years before the structural change in "
+                    + f.period(b.start()) + " included: fitted on the values since then alone, its forecasts of the"
+                    + " last periods did not miss by clearly less.";
+        }
+        if (caveat instanceof OutlookCaveat.ShockBridged b) {
+            return "The " + (b.rise() ? "rise" : "fall") + " from " + f.period(b.from()) + " to " + f.period(b.to())
+                    + ", later reversed, was replaced by a line between the levels before and after it, with the usual"
+                    + " seasonal pattern, before forecasting: the forecasts do not expect it to recur.";
         }
         if (caveat instanceof OutlookCaveat.BreakTooRecent b) {
             return "The latest structural change, in " + f.period(b.start()) + ", is too recent to fit the outlook on the"
@@ -183,9 +207,6 @@ final class Terms {
             return switch (n.reason()) {
                 case SERIES_TOO_SHORT ->
                         "The series is too short to test the forecasts on its own past, so their accuracy is unknown.";
-                case REGIME_TOO_SHORT -> "The forecasts use only the values since the structural change in "
-                        + n.since().map(f::period).orElseThrow() + ", too few to test them on; so their accuracy on"
-                        + " this series is unknown, although the series as a whole is long.";
                 case NO_SCALE -> "The forecasts could not be scored on the series' own past (the values before the"
                         + " test span give no error to compare with), so their accuracy is unknown.";
             };

@@ -24,4 +24,12 @@ class DecisionRulesTest {
         assertThat(CycleDetector.DEFAULT_SHORTEST_CYCLE_YEARS).isEqualTo(DecisionRules.MIN_CYCLE_YEARS);
         assertThat(CycleDetector.DEFAULT_CYCLES_IN_DATA).isEqualTo(DecisionRules.MIN_CYCLES_IN_DATA);
     }
+
+    @Test
+    void theOutlooksMarginsAreTheDecisionRules() {
+        assertThat(org.annalist.analysis.forecast.Outlook.METHOD_ADVANTAGE_PCT)
+                .isEqualTo(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT);
+        assertThat(org.annalist.analysis.forecast.Outlook.REGIME_ADVANTAGE_PCT)
+                .isEqualTo(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT);
+    }
 }

@@ -2,6 +2,7 @@ package org.annalist.narrative;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.annalist.findings.BreakMethod;
@@ -23,40 +24,48 @@ class TermsTest {
 
     @Test
     void theOutlooksChoiceIsWordedFromItsScores() {
-        assertThat(Terms.choice(new OutlookFinding.Choice(true, 24, 0.5912, Optional.of(OutlookMethod.COMBINATION),
-                0.6249))).isEqualTo("lowest mean absolute scaled error in a rolling-origin back-test over the last 24"
-                + " periods (0.59; next best combination 0.62)");
-        assertThat(Terms.choice(new OutlookFinding.Choice(false, 0, Double.NaN, Optional.empty(), Double.NaN)))
-                .isEqualTo("chosen by AICc among ETS models, without a back-test");
+        assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.COMBINATION_NOT_BEATEN, 24, 0.5912,
+                Optional.of(OutlookMethod.ETS), 0.6249))).isEqualTo("the combination by default: no single method was"
+                + " clearly and steadily better in a rolling-origin back-test over the last 24 periods (MASE:"
+                + " combination 0.59, best single method ETS 0.62)");
+        assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.SINGLE_CLEARLY_BETTER, 8, 0.9,
+                Optional.of(OutlookMethod.THETA), 0.7))).isEqualTo("clearly and steadily more accurate than the"
+                + " combination in a rolling-origin back-test over the last 8 periods (MASE: combination 0.90, best"
+                + " single method Theta 0.70)");
+        assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.COMBINATION_WITHOUT_BACKTEST, 0,
+                Double.NaN, Optional.empty(), Double.NaN))).isEqualTo("the combination by default, without a back-test");
     }
 
     @Test
-    void theCombinationNamesItsMembersAndANonSeasonalSeriesGetsTheNaiveOne() {
-        assertThat(Terms.forecastModel(new OutlookFinding.Model(OutlookMethod.COMBINATION, Optional.of("ETS(A,N,N)"),
-                false, OutlookMethod.NAIVE))).isEqualTo("mean of ETS(A,N,N), Theta and naive");
-        assertThat(Terms.forecastModel(new OutlookFinding.Model(OutlookMethod.THETA, Optional.empty(), true,
-                OutlookMethod.SEASONAL_NAIVE))).isEqualTo("Theta, seasonally adjusted");
+    void theCombinationNamesItsMembers() {
+        OutlookFinding.Model ets = new OutlookFinding.Model(OutlookMethod.ETS, Optional.of("ETS(A,N,N)"), false, List.of());
+        OutlookFinding.Model arima = new OutlookFinding.Model(OutlookMethod.ARIMA, Optional.of("ARIMA(0,1,1)"), false,
+                List.of());
+        OutlookFinding.Model theta = new OutlookFinding.Model(OutlookMethod.THETA, Optional.empty(), true, List.of());
+        assertThat(Terms.forecastModel(new OutlookFinding.Model(OutlookMethod.COMBINATION, Optional.empty(), false,
+                List.of(ets, arima, theta)))).isEqualTo("mean of ETS(A,N,N), ARIMA(0,1,1) and Theta, seasonally adjusted");
+        assertThat(Terms.forecastModel(theta)).isEqualTo("Theta, seasonally adjusted");
     }
 
     @Test
     void aBreakInTheOutlooksCaveatIsDatedInWords() {
         Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
-        assertThat(Terms.outlookCaveat(new OutlookCaveat.FittedSinceBreak(Period.month(2022, 8)), f))
-                .isEqualTo("The outlook is fitted on the values since the structural change in August 2022 only.");
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.FittedSinceBreak(Period.month(2022, 8), 10, 8), f))
+                .isEqualTo("The outlook is fitted on the values since the structural change in August 2022 only: so"
+                        + " fitted, its forecasts of the last periods missed by less than when fitted on all values.");
         assertThat(Terms.outlookCaveat(new OutlookCaveat.GapsFilled(1), f))
                 .isEqualTo("1 missing value was filled with what trend and season predict before forecasting.");
     }
 
-    /** A 14-year series whose latest regime is short is not called too short itself (issue 14, item 6). */
+    /** After a break the outlook keeps the history unless the regime alone did clearly better: the caveat says which. */
     @Test
-    void noBacktestSaysWhetherTheSeriesOrOnlyTheLatestRegimeIsShort() {
+    void theHistoryKeptAfterABreakIsSaidWithItsReason() {
         Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
-        String regime = Terms.outlookCaveat(new OutlookCaveat.NoBacktest(
-                OutlookCaveat.NoBacktest.Reason.REGIME_TOO_SHORT, Optional.of(Period.month(2022, 8))), f);
-        assertThat(regime).startsWith("The forecasts use only the values since the structural change in August 2022")
-                .doesNotContain("The series is too short");
-        assertThat(Terms.outlookCaveat(new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT,
-                Optional.empty()), f)).startsWith("The series is too short to test the forecasts");
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.HistoryKept(Period.month(2022, 8), 10, 9.5), f))
+                .startsWith("The outlook is fitted on all values, the years before the structural change in August 2022"
+                        + " included");
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.NoBacktest(OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT), f))
+                .startsWith("The series is too short to test the forecasts");
     }
 
     @Test

@@ -10,12 +10,14 @@ import org.annalist.analysis.OrderStatistics;
 
 /**
  * The outlook's rolling-origin back-test [1]: from every origin in the last two seasonal cycles
- * (eight periods for non-seasonal data) each candidate method forecasts up to one cycle ahead from
- * the values before the origin; the forecasts are scored by MASE, scaled by the in-sample seasonal
- * naive error before the first origin [2], by sMAPE and by the median absolute percentage error.
- * The ETS model is chosen by AICc at the first origin and its parameters are kept for the later
- * origins (updating, not re-estimating [1, §2.2]); Theta is refitted at every origin; the
- * combination is the mean of the three others.
+ * (eight periods for non-seasonal data) each method forecasts ahead from the values before the
+ * origin; the forecasts up to one cycle ahead are scored by MASE, scaled by the in-sample seasonal naive error
+ * before the first origin [2], by sMAPE and by the median absolute percentage error, over all
+ * origins and over the earlier and the later half of them apart (a method that is better only in
+ * one half is not reliably better). The single methods are prepared once, before the first origin
+ * ({@link Members}); the combination is the mean of those of ETS, ARIMA and Theta that forecast from
+ * every origin. Forecasts further ahead than a cycle, as far as the outlook looks and the origins
+ * allow, are kept for the check of the intervals' coverage ({@link Widening}) only.
  *
  * <h2>References</h2>
  * <ol>
@@ -29,6 +31,31 @@ final class Backtest {
 
     /** Origins for non-seasonal data, where two cycles would be only two periods. */
     static final int NON_SEASONAL_ORIGINS = 8;
+    /** The single methods, in the order that breaks ties among them. */
+    private static final Outlook.Method[] SINGLE = {Outlook.Method.ETS, Outlook.Method.ARIMA, Outlook.Method.THETA,
+            Outlook.Method.SEASONAL_NAIVE};
+    /** The members the combination may average: the seasonal naive forecast is a yardstick, not a member. */
+    static final List<Outlook.Method> COMBINABLE = List.of(Outlook.Method.ETS, Outlook.Method.ARIMA, Outlook.Method.THETA);
+
+    /**
+     * A back-test's outcome.
+     *
+     * @param scores   every method's score, the combination first, then the single methods best first
+     * @param combined the members of the combination, in the order of {@link #COMBINABLE}
+     * @param origins  origins scored
+     * @param naiveMae the in-sample seasonal naive error the MASE is scaled by
+     */
+    record Run(List<Outlook.Score> scores, List<Outlook.Method> combined, int origins, double naiveMae) {
+
+        Run {
+            scores = List.copyOf(scores);
+            combined = List.copyOf(combined);
+        }
+
+        Outlook.Score score(Outlook.Method method) {
+            return scores.stream().filter(s -> s.method() == method).findFirst().orElseThrow();
+        }
+    }
 
     private Backtest() {
     }
@@ -49,92 +76,130 @@ final class Backtest {
     }
 
     /**
-     * Every candidate's score, best first (a stable sort: equal MASE keeps the order of
-     * {@link Outlook.Method}, the tie rule); methods that cannot be fitted at some origin are left out.
-     *
      * @return empty when the back-test cannot rank the methods: the values before the first origin
-     *         give no seasonal naive error to scale by, or a forecast is not a number
+     *         give no seasonal naive error to scale by, fewer than two members of the combination
+     *         forecast from every origin, or a forecast is not a number
      */
-    static Optional<List<Outlook.Score>> scores(double[] y, int period, int firstOrigin, int cycle) {
+    /** @param reach the most steps ahead forecast from an origin (at least {@code cycle}) */
+    static Optional<Run> run(double[] y, int period, int firstOrigin, int cycle, int reach) {
         double[] training = Arrays.copyOf(y, firstOrigin);
         OptionalDouble scale = Accuracy.naiveScale(training, cycle);
         if (scale.isEmpty()) {
             return Optional.empty();
         }
-        Optional<EtsSelection.Choice> ets = EtsSelection.select(training, period);
+        int origins = y.length - firstOrigin;
         int pairs = 0;
         for (int o = firstOrigin; o < y.length; o++) {
-            pairs += Math.min(cycle, y.length - o);
+            pairs += Math.min(reach, y.length - o);
         }
-        Outlook.Method[] methods = Outlook.Method.values();
-        int etsIndex = Outlook.Method.ETS.ordinal();
-        int thetaIndex = Outlook.Method.THETA.ordinal();
-        int naiveIndex = Outlook.Method.SEASONAL_NAIVE.ordinal();
         double[] actual = new double[pairs];
         int[] horizon = new int[pairs];
-        double[][] forecasts = new double[methods.length][pairs];
-        boolean[] available = new boolean[methods.length];
-        Arrays.fill(available, true);
-        available[etsIndex] = ets.isPresent();
+        int[] origin = new int[pairs];
+        double[][] forecasts = new double[SINGLE.length][pairs];
+        boolean[] available = new boolean[SINGLE.length];
+        List<Members.Updating> prepared = new ArrayList<>();
+        for (int m = 0; m < SINGLE.length; m++) {
+            Optional<Members.Updating> member = Members.prepare(SINGLE[m], training, period);
+            available[m] = member.isPresent();
+            prepared.add(member.orElse(null));
+        }
+        List<Integer> cycleStarts = new ArrayList<>();
         int at = 0;
-        int[] cycleStarts = new int[y.length - firstOrigin];
-        int fullCycles = 0;
         for (int o = firstOrigin; o < y.length; o++) {
-            int h = Math.min(cycle, y.length - o);
-            if (h == cycle) {
-                cycleStarts[fullCycles++] = at; // a whole cycle ahead from this origin: its sum is scored too
+            int h = Math.min(reach, y.length - o);
+            if (h >= cycle) {
+                cycleStarts.add(at); // a whole cycle ahead from this origin: its sum is scored too
             }
             double[] before = Arrays.copyOf(y, o);
-            Optional<double[]> etsForecast = Optional.empty();
-            if (ets.isPresent()) {
-                EtsModel.Fit best = ets.get().best();
-                // [1] §2.2: the parameters are updated with the new values, not re-estimated
-                Optional<EtsModel.Fit> updated = best.model().filter(before, best.parameters());
-                available[etsIndex] &= updated.isPresent();
-                etsForecast = updated.map(fit -> fit.forecast(h));
+            for (int m = 0; m < SINGLE.length; m++) {
+                if (!available[m]) {
+                    continue;
+                }
+                Optional<double[]> f = prepared.get(m).from(before, h).filter(Members::finite);
+                available[m] = f.isPresent();
+                if (f.isPresent()) {
+                    System.arraycopy(f.get(), 0, forecasts[m], at, h);
+                }
             }
-            Optional<double[]> thetaForecast = Theta.fit(before, period).map(theta -> theta.forecast(h));
-            available[thetaIndex] &= thetaForecast.isPresent();
-            double[] naive = SeasonalNaive.forecast(before, cycle, h);
             for (int k = 0; k < h; k++) {
                 actual[at + k] = y[o + k];
                 horizon[at + k] = k;
-                forecasts[naiveIndex][at + k] = naive[k];
-            }
-            if (etsForecast.isPresent()) {
-                System.arraycopy(etsForecast.get(), 0, forecasts[etsIndex], at, h);
-            }
-            if (thetaForecast.isPresent()) {
-                System.arraycopy(thetaForecast.get(), 0, forecasts[thetaIndex], at, h);
+                origin[at + k] = o - firstOrigin;
             }
             at += h;
         }
-        int combinationIndex = Outlook.Method.COMBINATION.ordinal();
-        available[combinationIndex] = available[etsIndex] && available[thetaIndex];
-        for (int i = 0; i < pairs; i++) {
-            forecasts[combinationIndex][i] = (forecasts[etsIndex][i] + forecasts[thetaIndex][i]
-                    + forecasts[naiveIndex][i]) / 3;
-        }
-        Optional<EtsModel> etsModel = ets.map(c -> c.best().model());
-        List<Outlook.Score> scores = new ArrayList<>();
-        for (Outlook.Method method : methods) {
-            if (!available[method.ordinal()]) {
-                continue;
+        List<Outlook.Method> combined = new ArrayList<>();
+        for (Outlook.Method m : COMBINABLE) {
+            if (available[indexOf(m)]) {
+                combined.add(m);
             }
-            double[] f = forecasts[method.ordinal()];
-            OptionalDouble medianApe = medianAbsolutePercentError(actual, f);
+        }
+        if (combined.size() < 2) {
+            return Optional.empty();
+        }
+        double[][] memberForecasts = combined.stream().map(m -> forecasts[indexOf(m)]).toArray(double[][]::new);
+        double[] combination = Members.mean(memberForecasts);
+        int[] starts = cycleStarts.stream().mapToInt(Integer::intValue).toArray();
+        Scoring scoring = new Scoring(actual, horizon, origin, origins, cycle, starts, scale.getAsDouble());
+        List<Outlook.Score> singles = new ArrayList<>();
+        for (int m = 0; m < SINGLE.length; m++) {
+            if (available[m]) {
+                Optional<Outlook.Score> s = scoring.score(SINGLE[m], forecasts[m]);
+                if (s.isEmpty()) {
+                    return Optional.empty();
+                }
+                singles.add(s.get());
+            }
+        }
+        singles.sort(Comparator.comparingDouble(Outlook.Score::mase)); // stable: ties keep SINGLE's order
+        Optional<Outlook.Score> comb = scoring.score(Outlook.Method.COMBINATION, combination);
+        if (comb.isEmpty()) {
+            return Optional.empty();
+        }
+        List<Outlook.Score> scores = new ArrayList<>();
+        scores.add(comb.get());
+        scores.addAll(singles);
+        return Optional.of(new Run(scores, combined, origins, scale.getAsDouble()));
+    }
+
+    private static int indexOf(Outlook.Method method) {
+        return Arrays.asList(SINGLE).indexOf(method);
+    }
+
+    /** The scores of one back-test's forecasts against its actual values: those up to a cycle ahead. */
+    private record Scoring(double[] actual, int[] horizon, int[] origin, int origins, int cycle, int[] cycleStarts,
+                           double scale) {
+
+        /** @return empty when a percentage error is not a number: the forecasts have no rank */
+        Optional<Outlook.Score> score(Outlook.Method method, double[] f) {
+            int within = 0;
+            for (int k : horizon) {
+                within += k < cycle ? 1 : 0;
+            }
+            double[] a = new double[within];
+            double[] g = new double[within];
+            double[] halves = new double[2];
+            int[] counts = new int[2];
+            int j = 0;
+            for (int i = 0; i < actual.length; i++) {
+                if (horizon[i] >= cycle) {
+                    continue;
+                }
+                a[j] = actual[i];
+                g[j++] = f[i];
+                int half = 2 * origin[i] < origins ? 0 : 1;
+                halves[half] += Math.abs(actual[i] - f[i]);
+                counts[half]++;
+            }
+            OptionalDouble medianApe = medianAbsolutePercentError(a, g);
             if (medianApe.isEmpty()) {
                 return Optional.empty();
             }
-            Accuracy.Result accuracy = Accuracy.scaled(actual, f, scale.getAsDouble());
-            boolean withEts = method == Outlook.Method.ETS || method == Outlook.Method.COMBINATION;
-            scores.add(new Outlook.Score(method, withEts ? etsModel : Optional.empty(), accuracy.mase(),
-                    accuracy.smape(), medianApe.getAsDouble(), pairs, HorizonErrors.of(actual, f, horizon, cycle,
-                    Arrays.copyOf(cycleStarts, fullCycles))));
+            Accuracy.Result accuracy = Accuracy.scaled(a, g, scale);
+            return Optional.of(new Outlook.Score(method, accuracy.mase(), accuracy.smape(), accuracy.mase() * scale,
+                    halves[0] / counts[0] / scale, halves[1] / counts[1] / scale, medianApe.getAsDouble(),
+                    within, HorizonErrors.of(actual, f, horizon, cycle, cycleStarts)));
         }
-        // stable sort: equal MASE keeps the enum order, the tie rule
-        scores.sort(Comparator.comparingDouble(Outlook.Score::mase));
-        return Optional.of(List.copyOf(scores));
     }
 
     /**

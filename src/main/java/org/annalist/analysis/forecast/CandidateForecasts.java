@@ -1,12 +1,15 @@
 package org.annalist.analysis.forecast;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 
 /**
- * The outlook's candidate methods fitted on all values, each as a forecast with intervals and
- * sample paths: the best ETS model by AICc ({@link EtsSelection}; closed-form intervals for classes
- * 1 and 3 [1, ch. 6], simulated ones otherwise), Theta ({@link Theta}), the seasonal naive forecast
- * ({@link SeasonalNaive}) and the equal-weight combination of the three, whose paths are the
+ * The outlook's methods fitted on all the values they are given, each as a forecast with intervals
+ * and sample paths: the best ETS model by AICc ({@link EtsSelection}; closed-form intervals for
+ * classes 1 and 3 [1, ch. 6], simulated ones otherwise), the automatic ARIMA model
+ * ({@link AutoArima}), Theta ({@link Theta}), the seasonal naive forecast ({@link SeasonalNaive})
+ * and the equal-weight combination of the members the back-test scored, whose paths are the
  * members' paths averaged under common shocks ({@link Shocks}).
  *
  * <h2>References</h2>
@@ -20,54 +23,72 @@ final class CandidateForecasts {
     private CandidateForecasts() {
     }
 
-    /** @return empty when the method cannot be fitted to {@code y} */
+    /**
+     * @param members the methods the combination averages (those the back-test scored)
+     * @return empty when the method cannot be fitted to {@code y}
+     */
     static Optional<Outlook.Forecast> forecast(Outlook.Method method, double[] y, int period, int horizon,
-                                               Outlook.Bounds bounds) {
+                                               Outlook.Bounds bounds, List<Outlook.Method> members) {
         double[][] shocks = Shocks.forHorizon(horizon);
+        if (method == Outlook.Method.COMBINATION) {
+            return combination(y, period, horizon, shocks, bounds, members);
+        }
+        return single(method, y, period, horizon, shocks).map(m -> m.forecast(bounds));
+    }
+
+    /** A single method's fit: its model, its point forecasts, closed-form variances where it has them, and its paths. */
+    private record Fitted(Outlook.Model model, double[] mean, Optional<Prediction> prediction, double[][] paths) {
+
+        Outlook.Forecast forecast(Outlook.Bounds bounds) {
+            return prediction.map(p -> Intervals.fromPrediction(model, p, paths, bounds))
+                    .orElseGet(() -> Intervals.fromPaths(model, mean, paths, bounds));
+        }
+    }
+
+    private static Optional<Fitted> single(Outlook.Method method, double[] y, int period, int horizon,
+                                           double[][] shocks) {
         int cycle = Math.max(1, period);
         return switch (method) {
-            case ETS -> EtsSelection.select(y, period).map(c -> ets(c.best(), horizon, shocks, bounds));
-            case THETA -> Theta.fit(y, period).map(theta -> Intervals.fromPrediction(
-                    Outlook.Model.theta(theta.deseasonalised()), theta.predict(horizon), theta.paths(shocks), bounds));
-            case SEASONAL_NAIVE -> y.length <= cycle ? Optional.empty() : Optional.of(Intervals.fromPrediction(
-                    Outlook.Model.seasonalNaive(), SeasonalNaive.predict(y, cycle, horizon),
-                    SeasonalNaive.paths(y, cycle, shocks), bounds));
-            case COMBINATION -> combination(y, period, horizon, shocks, bounds);
+            case ETS -> EtsSelection.select(y, period).map(EtsSelection.Choice::best).map(fit -> new Fitted(
+                    Outlook.Model.single(Outlook.Method.ETS, Optional.of(fit.model().label()), false), fit.forecast(horizon),
+                    fit.hasAnalyticIntervals() ? Optional.of(fit.predict(horizon)) : Optional.empty(), fit.paths(shocks)));
+            case ARIMA -> AutoArima.fitConditional(y, period).map(fit -> new Fitted(
+                    Outlook.Model.single(Outlook.Method.ARIMA, Optional.of(fit.label()), false), fit.forecast(horizon),
+                    Optional.of(fit.predict(horizon)), fit.paths(shocks)));
+            case THETA -> Theta.fit(y, period).map(theta -> new Fitted(
+                    Outlook.Model.single(Outlook.Method.THETA, Optional.empty(), theta.deseasonalised()),
+                    theta.forecast(horizon), Optional.of(theta.predict(horizon)), theta.paths(shocks)));
+            case SEASONAL_NAIVE -> y.length <= cycle ? Optional.empty() : Optional.of(new Fitted(
+                    Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, Optional.empty(), false),
+                    SeasonalNaive.forecast(y, cycle, horizon), Optional.of(SeasonalNaive.predict(y, cycle, horizon)),
+                    SeasonalNaive.paths(y, cycle, shocks)));
+            case COMBINATION, NAIVE_WITH_DRIFT -> throw new IllegalArgumentException("not a single method: " + method);
         };
     }
 
-    private static Outlook.Forecast ets(EtsModel.Fit fit, int horizon, double[][] shocks, Outlook.Bounds bounds) {
-        double[][] paths = fit.paths(shocks);
-        Outlook.Model model = Outlook.Model.ets(fit.model());
-        if (fit.hasAnalyticIntervals()) {
-            return Intervals.fromPrediction(model, fit.predict(horizon), paths, bounds);
-        }
-        return Intervals.fromPaths(model, fit.forecast(horizon), paths, bounds);
-    }
-
-    /** The mean of the ETS, Theta and seasonal naive forecasts, and of their paths under the same shocks. */
+    /**
+     * The mean of the members' forecasts, and of their paths under the same shocks; a member that
+     * cannot be fitted to all values is left out, as long as two remain.
+     */
     private static Optional<Outlook.Forecast> combination(double[] y, int period, int horizon, double[][] shocks,
-                                                          Outlook.Bounds bounds) {
-        Optional<EtsSelection.Choice> ets = EtsSelection.select(y, period);
-        Optional<Theta.Fit> thetaFit = Theta.fit(y, period);
-        int cycle = Math.max(1, period);
-        if (ets.isEmpty() || thetaFit.isEmpty() || y.length <= cycle) {
+                                                          Outlook.Bounds bounds, List<Outlook.Method> members) {
+        List<Fitted> fitted = new ArrayList<>();
+        for (Outlook.Method m : members) {
+            single(m, y, period, horizon, shocks).filter(f -> Members.finite(f.mean())).ifPresent(fitted::add);
+        }
+        if (fitted.size() < 2) {
             return Optional.empty();
         }
-        EtsModel.Fit best = ets.get().best();
-        Theta.Fit theta = thetaFit.get();
-        double[][][] members = {best.paths(shocks), theta.paths(shocks), SeasonalNaive.paths(y, cycle, shocks)};
-        double[][] means = {best.forecast(horizon), theta.forecast(horizon), SeasonalNaive.forecast(y, cycle, horizon)};
-        double[] mean = new double[horizon];
+        double[] mean = Members.mean(fitted.stream().map(Fitted::mean).toArray(double[][]::new));
         double[][] paths = new double[shocks.length][horizon];
-        for (int k = 0; k < horizon; k++) {
-            for (int m = 0; m < members.length; m++) {
-                mean[k] += means[m][k] / members.length;
-                for (int p = 0; p < shocks.length; p++) {
-                    paths[p][k] += members[m][p][k] / members.length;
+        for (Fitted f : fitted) {
+            for (int p = 0; p < shocks.length; p++) {
+                for (int k = 0; k < horizon; k++) {
+                    paths[p][k] += f.paths()[p][k] / fitted.size();
                 }
             }
         }
-        return Optional.of(Intervals.fromPaths(Outlook.Model.combination(best.model()), mean, paths, bounds));
+        Outlook.Model model = Outlook.Model.combination(fitted.stream().map(Fitted::model).toList());
+        return Optional.of(Intervals.fromPaths(model, mean, paths, bounds));
     }
 }

@@ -23,8 +23,53 @@ import java.util.Arrays;
  * @param counts     back-test forecasts per horizon
  * @param cycleSums  the errors of whole cycles ahead (a year's total for monthly data) from the
  *                   origins that had a whole cycle after them
+ * @param pairs      every back-test forecast with its absolute error and horizon, for the pooled
+ *                   check of each interval's coverage ({@link Widening})
  */
-public record HorizonErrors(double[] absolute80, double[] relative80, int[] counts, CycleSums cycleSums) {
+public record HorizonErrors(double[] absolute80, double[] relative80, int[] counts, CycleSums cycleSums,
+                            Pairs pairs) {
+
+    /**
+     * The back-test's forecasts one by one.
+     *
+     * @param absolute |y − f| of each
+     * @param forecast f of each
+     * @param horizon  its 0-based step ahead
+     */
+    public record Pairs(double[] absolute, double[] forecast, int[] horizon) {
+
+        static final Pairs NONE = new Pairs(new double[0], new double[0], new int[0]);
+
+        public Pairs {
+            absolute = absolute.clone();
+            forecast = forecast.clone();
+            horizon = horizon.clone();
+        }
+
+        @Override
+        public double[] absolute() {
+            return absolute.clone();
+        }
+
+        @Override
+        public double[] forecast() {
+            return forecast.clone();
+        }
+
+        @Override
+        public int[] horizon() {
+            return horizon.clone();
+        }
+
+        public int size() {
+            return absolute.length;
+        }
+    }
+
+    /** Errors without their pairs (the pooled coverage check is then skipped). */
+    public HorizonErrors(double[] absolute80, double[] relative80, int[] counts, CycleSums cycleSums) {
+        this(absolute80, relative80, counts, cycleSums, Pairs.NONE);
+    }
 
     /**
      * The errors of the sum of the forecasts one to {@code cycle} steps ahead against the sum of the
@@ -102,7 +147,12 @@ public record HorizonErrors(double[] absolute80, double[] relative80, int[] coun
             absolute[k] = n == 0 ? Double.NaN : Intervals.quantiles(Arrays.copyOf(abs, n), COVERAGE)[0];
             relative[k] = n == 0 || !positive ? Double.NaN : Intervals.quantiles(Arrays.copyOf(rel, n), COVERAGE)[0];
         }
-        return new HorizonErrors(absolute, relative, counts, cycleSums(actual, forecast, cycle, cycleStarts));
+        double[] errors = new double[actual.length];
+        for (int i = 0; i < actual.length; i++) {
+            errors[i] = Math.abs(actual[i] - forecast[i]);
+        }
+        return new HorizonErrors(absolute, relative, counts, cycleSums(actual, forecast, cycle, cycleStarts),
+                new Pairs(errors, forecast, horizon));
     }
 
     /** @param starts the first pair of each origin with a whole cycle ahead */

@@ -47,7 +47,7 @@ final class Intervals {
         return clipped(model, mean, lo80, hi80, lo95, hi95, paths, bounds);
     }
 
-    private static Outlook.Forecast clipped(Outlook.Model model, double[] mean, double[] lo80, double[] hi80,
+    static Outlook.Forecast clipped(Outlook.Model model, double[] mean, double[] lo80, double[] hi80,
                                             double[] lo95, double[] hi95, double[][] paths, Outlook.Bounds bounds) {
         double[][] clippedPaths = new double[paths.length][];
         for (int p = 0; p < paths.length; p++) {

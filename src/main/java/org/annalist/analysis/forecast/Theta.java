@@ -74,6 +74,22 @@ public final class Theta {
             return paths;
         }
 
+        /**
+         * The same fit run over {@code y}, a longer stretch of the same series: the smoothing
+         * parameter, the initial level and the seasonal indices kept, the level filtered through the
+         * new values and the drift's line refitted to them (updating, not re-estimating).
+         *
+         * @return empty when a one-step forecast turns non-finite
+         */
+        public Optional<Fit> updated(double[] y) {
+            double[] adjusted = new double[y.length];
+            for (int t = 0; t < y.length; t++) {
+                adjusted[t] = y[t] / seasonalIndex[t % seasonalIndex.length];
+            }
+            return smoothing.model().filter(adjusted, smoothing.parameters())
+                    .map(ses -> new Fit(seasonalIndex, ses, StartLine.through(adjusted, y.length).slope() / 2, y.length));
+        }
+
         /** Whether the method worked on seasonally adjusted values. */
         public boolean deseasonalised() {
             return Arrays.stream(seasonalIndex).anyMatch(v -> v != 1);

@@ -3,6 +3,7 @@ package org.annalist.analysis.forecast;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -20,8 +21,9 @@ class OutlookTest {
         double[] mase = AgainstR.meanHoldOutMase(split -> {
             Outlook.Result outlook = Outlook.of(split.training(), split.period(), split.horizon(),
                     Outlook.Bounds.NON_NEGATIVE).orElseThrow();
-            assertThat(outlook.backtest()).hasSize(4);
-            assertThat(outlook.backtest().get(0).method()).isEqualTo(outlook.chosen().method());
+            assertThat(outlook.backtest()).extracting(Outlook.Score::method).startsWith(Outlook.Method.COMBINATION)
+                    .contains(Outlook.Method.ETS, Outlook.Method.ARIMA, Outlook.Method.THETA);
+            assertThat(outlook.chosenScore()).isPresent();
             return outlook.chosen().mean();
         });
         assertThat(mase[0]).isLessThanOrEqualTo(mase[1]);
@@ -61,23 +63,24 @@ class OutlookTest {
     }
 
     /**
-     * Annual data have no season: the benchmark is the plain naive forecast, the seasonal naive
+     * Annual data have no season: the yardstick is the plain naive forecast, the seasonal naive
      * forecast of a one-period cycle (Nile, R datasets); the findings name it naive
-     * (OutlookAnalysisTest). The account of the choice is the back-test's first two scores.
+     * (OutlookAnalysisTest). The back-test scores the combination first, then the single methods.
      */
     @Test
     void nonSeasonalDataAreBackTestedAgainstThePlainNaiveForecast() {
         double[] nile = org.annalist.analysis.Reference.dataset("Nile.csv");
         Outlook.Result outlook = Outlook.of(nile, 1, 5, Outlook.Bounds.NON_NEGATIVE).orElseThrow();
-        assertThat(outlook.backtest()).hasSize(4);
-        assertThat(outlook.backtest()).extracting(Outlook.Score::method).contains(Outlook.Method.SEASONAL_NAIVE);
+        assertThat(outlook.backtest()).extracting(Outlook.Score::method).startsWith(Outlook.Method.COMBINATION)
+                .contains(Outlook.Method.SEASONAL_NAIVE, Outlook.Method.ETS, Outlook.Method.THETA);
         assertThat(outlook.cycle()).isEqualTo(1);
         assertThat(outlook.origins()).isEqualTo(8);
         Outlook.Choice choice = outlook.choice();
-        assertThat(choice.basis()).isEqualTo(Outlook.Choice.Basis.BACKTEST);
+        assertThat(choice.basis()).isIn(Outlook.Choice.Basis.COMBINATION_NOT_BEATEN,
+                Outlook.Choice.Basis.SINGLE_CLEARLY_BETTER);
         assertThat(choice.origins()).isEqualTo(8);
-        assertThat(choice.best()).contains(outlook.backtest().get(0));
-        assertThat(choice.nextBest()).contains(outlook.backtest().get(1));
+        assertThat(choice.combination()).contains(outlook.backtest().get(0));
+        assertThat(choice.bestSingle()).contains(outlook.backtest().get(1));
         // the naive forecast of a one-period cycle repeats the last value
         double[] last = new double[5];
         java.util.Arrays.fill(last, nile[nile.length - 1]);
@@ -85,25 +88,26 @@ class OutlookTest {
     }
 
     @Test
-    void aSeriesTooShortForTheBacktestGetsEtsByAiccAndSaysSo() {
+    void aSeriesTooShortForTheBacktestGetsTheCombinationAndSaysSo() {
         double[] y = new double[30];
         for (int t = 0; t < y.length; t++) {
             y[t] = 100 + 20 * Math.sin(2 * Math.PI * t / 12) + t;
         }
         Outlook.Result outlook = Outlook.of(y, 12, 12, Outlook.Bounds.NON_NEGATIVE).orElseThrow();
         assertThat(outlook.backtest()).isEmpty();
-        assertThat(outlook.chosen().method()).isEqualTo(Outlook.Method.ETS);
-        assertThat(outlook.chosen().model().ets()).isPresent();
+        assertThat(outlook.chosen().method()).isEqualTo(Outlook.Method.COMBINATION);
+        assertThat(outlook.chosen().model().members()).extracting(Outlook.Model::method).contains(Outlook.Method.ETS,
+                Outlook.Method.THETA);
         Outlook.Choice choice = outlook.choice();
-        assertThat(choice.basis()).isEqualTo(Outlook.Choice.Basis.AICC_WITHOUT_BACKTEST);
+        assertThat(choice.basis()).isEqualTo(Outlook.Choice.Basis.COMBINATION_WITHOUT_BACKTEST);
         assertThat(choice.origins()).isZero();
-        assertThat(choice.best()).isEmpty();
-        assertThat(choice.nextBest()).isEmpty();
+        assertThat(choice.combination()).isEmpty();
+        assertThat(choice.bestSingle()).isEmpty();
     }
 
     /**
      * Values that repeat exactly one cycle back before the first origin give the MASE nothing to
-     * scale by: the back-test cannot rank the methods, so ETS is chosen by AICc, as for a short series.
+     * scale by: the back-test cannot rank the methods, so the combination stands, as for a short series.
      */
     @Test
     void noSeasonalNaiveErrorBeforeTheFirstOriginMeansNoBacktest() {
@@ -115,14 +119,34 @@ class OutlookTest {
         Outlook.Result outlook = Outlook.of(y, 1, 4, Outlook.Bounds.NON_NEGATIVE).orElseThrow();
         assertThat(outlook.backtest()).isEmpty();
         assertThat(outlook.origins()).isZero();
-        assertThat(outlook.chosen().method()).isEqualTo(Outlook.Method.ETS);
-        assertThat(outlook.choice().basis()).isEqualTo(Outlook.Choice.Basis.AICC_WITHOUT_BACKTEST);
+        assertThat(outlook.chosen().method()).isEqualTo(Outlook.Method.COMBINATION);
+        assertThat(outlook.choice().basis()).isEqualTo(Outlook.Choice.Basis.COMBINATION_WITHOUT_BACKTEST);
     }
 
-    /** Fewer than eight values, or no horizon: no outlook. */
+    /**
+     * Seven yearly values are too few for the usual methods but get the naive forecast with drift:
+     * the last value plus the mean change, c = (y_n − y_1)/(n − 1), here (19 − 7)/6 = 2, and a
+     * standard deviation σ√(h(1 + h/(n − 1))) (Hyndman &amp; Athanasopoulos 2021, FPP3 §5.5 Table 5.2,
+     * from memory) with Student's t on n − 2 = 5 degrees of freedom: t(0.975, 5) = 2.5706 (standard
+     * tables). The differences 2, 1, 3, 2, 3, 1 have σ² = Σ(d − 2)²/5 = 4/5.
+     */
+    @Test
+    void sevenYearlyValuesGetTheNaiveForecastWithDriftAndWideIntervals() {
+        double[] y = {7, 9, 10, 13, 15, 18, 19};
+        Outlook.Result outlook = Outlook.of(y, 1, 3, Outlook.Bounds.NON_NEGATIVE).orElseThrow();
+        assertThat(outlook.chosen().method()).isEqualTo(Outlook.Method.NAIVE_WITH_DRIFT);
+        assertThat(outlook.choice().basis()).isEqualTo(Outlook.Choice.Basis.SHORT_SERIES);
+        assertThat(outlook.chosen().mean()).containsExactly(new double[] {21, 23, 25}, within(1e-12));
+        double sd1 = Math.sqrt(0.8 * (1 + 1 / 6.0));
+        assertThat(outlook.chosen().hi95()[0]).isCloseTo(21 + 2.5706 * sd1, within(1e-3));
+        double sd3 = Math.sqrt(0.8 * 3 * (1 + 3 / 6.0));
+        assertThat(outlook.chosen().lo95()[2]).isCloseTo(25 - 2.5706 * sd3, within(1e-3));
+    }
+
+    /** Fewer than three values (two differences), or no horizon: no outlook. */
     @Test
     void tooFewValuesOrNoHorizonGiveNoOutlook() {
-        assertThat(Outlook.of(new double[] {1, 2, 3, 4, 5, 6, 7}, 1, 3, Outlook.Bounds.NONE)).isEmpty();
+        assertThat(Outlook.of(new double[] {1, 2}, 1, 3, Outlook.Bounds.NONE)).isEmpty();
         assertThat(Outlook.of(new double[] {1, 2, 3, 4, 5, 6, 7, 8, 9}, 1, 0, Outlook.Bounds.NONE)).isEmpty();
     }
 
@@ -161,5 +185,81 @@ class OutlookTest {
         assertThat(p.variance()).containsExactly(new double[] {sigma2, sigma2, sigma2, 2 * sigma2, 2 * sigma2,
             2 * sigma2, 3 * sigma2}, within(1e-12));
         assertThat(p.mean()).containsExactly(11, 23, 30, 11, 23, 30, 11);
+    }
+
+    /**
+     * A break given where nothing changed (planted: one level and season throughout): fitted on the
+     * values after it alone, the forecasts did not do clearly better in the back-test, so all values
+     * are kept, with the two errors as evidence.
+     */
+    @Test
+    void aBreakThatChangedNothingKeepsTheHistory() {
+        Random random = new Random(21);
+        double[] y = new double[144];
+        for (int t = 0; t < y.length; t++) {
+            y[t] = 1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) * (1 + 0.03 * random.nextGaussian());
+        }
+        Outlook.Result outlook = Outlook.of(y, 12, 12, Outlook.Bounds.NON_NEGATIVE, 66).orElseThrow();
+        assertThat(outlook.span().basis()).isEqualTo(Outlook.Span.Basis.ALL_VALUES_NOT_BEATEN);
+        assertThat(outlook.span().from()).isZero();
+        assertThat(outlook.span().regimeMae()).isGreaterThan(0.75 * outlook.span().allMae());
+    }
+
+    /**
+     * The span rule on planted back-test errors (the combination's, as no single method is clearly
+     * better): the latest regime replaces all values only when its error is at least 25 % lower —
+     * 8 against 10 is not enough, 7.5 against 10 is the margin exactly.
+     */
+    @Test
+    void theLatestRegimeReplacesAllValuesOnlyWhenClearlyBetter() {
+        Backtest.Run all = new Backtest.Run(List.of(score(Outlook.Method.COMBINATION, 10, 10, 10),
+                score(Outlook.Method.ETS, 10.5, 10, 11)), Backtest.COMBINABLE, 24, 10);
+        Backtest.Run close = new Backtest.Run(List.of(score(Outlook.Method.COMBINATION, 8, 8, 8),
+                score(Outlook.Method.ETS, 8.5, 8, 9)), Backtest.COMBINABLE, 24, 10);
+        Backtest.Run clear = new Backtest.Run(List.of(score(Outlook.Method.COMBINATION, 7.5, 7, 8),
+                score(Outlook.Method.ETS, 8.5, 8, 9)), Backtest.COMBINABLE, 24, 10);
+        assertThat(Outlook.weigh(96, all, close)).isEqualTo(new Outlook.Span(0, Outlook.Span.Basis.ALL_VALUES_NOT_BEATEN,
+                10, 8));
+        assertThat(Outlook.weigh(96, all, clear)).isEqualTo(new Outlook.Span(96,
+                Outlook.Span.Basis.REGIME_CLEARLY_BETTER, 10, 7.5));
+    }
+
+    /** A break too close to the end for a back-test of its own: all values, and the span says why. */
+    @Test
+    void aBreakTooCloseToTheEndKeepsTheHistory() {
+        double[] y = new double[144];
+        for (int t = 0; t < y.length; t++) {
+            y[t] = (t < 130 ? 1000 : 700) * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) + (t % 5);
+        }
+        Outlook.Result outlook = Outlook.of(y, 12, 12, Outlook.Bounds.NON_NEGATIVE, 130).orElseThrow();
+        assertThat(outlook.span().basis()).isEqualTo(Outlook.Span.Basis.REGIME_TOO_SHORT);
+        assertThat(outlook.span().from()).isZero();
+    }
+
+    private static Outlook.Score score(Outlook.Method method, double mae, double earlier, double later) {
+        HorizonErrors none = new HorizonErrors(new double[1], new double[1], new int[1],
+                new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
+        return new Outlook.Score(method, mae / 10, 5, mae, earlier / 10, later / 10, 5, 24, none);
+    }
+
+    /**
+     * The choice rule on planted back-test scores (MASE scale 10): a single method replaces the
+     * combination only when its error is at least 50 % lower over all origins and lower in both
+     * halves; 6 against 10 is not clear, and 4 against 10 made of one good half is not steady.
+     */
+    @Test
+    void aSingleMethodReplacesTheCombinationOnlyWhenClearlyAndSteadilyBetter() {
+        Outlook.Score combination = score(Outlook.Method.COMBINATION, 10, 10, 10);
+        Outlook.Score clear = score(Outlook.Method.THETA, 4, 4.5, 3.5);
+        Outlook.Score unsteady = score(Outlook.Method.THETA, 4, 0.5, 11);
+        Outlook.Score close = score(Outlook.Method.THETA, 6, 5, 7);
+        for (Outlook.Score single : List.of(clear, unsteady, close)) {
+            Backtest.Run run = new Backtest.Run(List.of(combination, single), Backtest.COMBINABLE, 24, 10);
+            Outlook.Choice choice = Outlook.choose(run);
+            assertThat(choice.basis()).as("best single %s", single).isEqualTo(single == clear
+                    ? Outlook.Choice.Basis.SINGLE_CLEARLY_BETTER : Outlook.Choice.Basis.COMBINATION_NOT_BEATEN);
+            assertThat(choice.combination()).contains(combination);
+            assertThat(choice.bestSingle()).contains(single);
+        }
     }
 }

@@ -87,7 +87,7 @@ class RecordsCopyTheirArraysTest {
     void forecastsKeepTheirArraysAndPathsDeeply() {
         double[] mean = {1, 2};
         double[][] paths = {{1, 2}, {3, 4}};
-        Outlook.Forecast forecast = new Outlook.Forecast(new Outlook.Model(Outlook.Method.SEASONAL_NAIVE,
+        Outlook.Forecast forecast = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE,
                 Optional.empty(), false), mean, new double[] {0, 1}, new double[] {2, 3}, new double[] {-1, 0},
                 new double[] {3, 4}, paths);
         mean[0] = 9;

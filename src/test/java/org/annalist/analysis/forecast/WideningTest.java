@@ -27,7 +27,7 @@ class WideningTest {
         Reference r = Reference.csv("ets_AirPassengers_MAM_forecast.csv");
         double[] mean = r.column("mean");
         int h = mean.length;
-        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.seasonalNaive(), mean, r.column("lo80"),
+        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(), false), mean, r.column("lo80"),
                 r.column("hi80"), r.column("lo95"), r.column("hi95"), new double[0][h]);
         double[] planted = new double[12];
         Arrays.fill(planted, 0.075);
@@ -70,7 +70,7 @@ class WideningTest {
         Outlook.Result result = Outlook.of(split.training(), split.period(), h, bounds).orElseThrow();
         Outlook.Forecast widened = result.chosen();
         Outlook.Forecast own = CandidateForecasts.forecast(widened.method(), split.training(), split.period(), h,
-                bounds).orElseThrow();
+                bounds, widened.model().members().stream().map(Outlook.Model::method).toList()).orElseThrow();
         assertThat(widened.mean()).containsExactly(own.mean());
         double[] factors = result.widening();
         for (int k = 0; k < h; k++) {

@@ -1,0 +1,32 @@
+# R's automatic forecasts of the M3 competition series, as a yardstick for Annalist's outlook.
+#
+# Usage (from this folder, R >= 4.2 with the forecast package, Debian r-cran-forecast 8.20):
+#   Rscript r-automatic-forecasts.R /path/to/reference-data/forecasting yearly|quarterly|monthly out.csv
+# Reads m3-<freq>-train.csv and m3-<freq>-test.csv (the layout of make-m3.R) and writes, for every
+# series, the point forecasts and the 80 % and 95 % limits of forecast::ets(), forecast::auto.arima()
+# and forecast::thetaf() with their default settings, h = the number of held-out values.
+# Nothing is read or written besides the two input files and the named output.
+args <- commandArgs(trailingOnly = TRUE)
+suppressMessages(library(forecast))
+folder <- args[1]; freq <- args[2]; out <- args[3]
+m <- c(yearly = 1, quarterly = 4, monthly = 12)[[freq]]
+train <- read.csv(file.path(folder, paste0("m3-", freq, "-train.csv")), stringsAsFactors = FALSE)
+test <- read.csv(file.path(folder, paste0("m3-", freq, "-test.csv")), stringsAsFactors = FALSE)
+rows <- list()
+for (id in unique(train$series)) {
+  y <- ts(train$value[train$series == id], frequency = m)
+  h <- sum(test$series == id)
+  fits <- list(
+    ETS = function() forecast(ets(y), h = h, level = c(80, 95)),
+    ARIMA = function() forecast(auto.arima(y), h = h, level = c(80, 95)),
+    THETA = function() thetaf(y, h = h, level = c(80, 95)))
+  for (method in names(fits)) {
+    f <- tryCatch(fits[[method]](), error = function(e) NULL)
+    if (is.null(f)) next
+    rows[[length(rows) + 1]] <- data.frame(method = method, series = id, h = seq_len(h),
+      forecast = as.numeric(f$mean), lo80 = as.numeric(f$lower[, 1]), hi80 = as.numeric(f$upper[, 1]),
+      lo95 = as.numeric(f$lower[, 2]), hi95 = as.numeric(f$upper[, 2]))
+  }
+}
+write.csv(do.call(rbind, rows), out, row.names = FALSE, quote = FALSE)
+cat("R", R.version$major, R.version$minor, "forecast", as.character(packageVersion("forecast")), "\n")

@@ -1,0 +1,381 @@
+package org.annalist.analysis.forecast;
+
+import java.util.Optional;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.LUDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.SingularValueDecomposition;
+
+/**
+ * Estimation of a seasonal ARIMA model with fixed orders, step for step as R's {@code arima} [1]
+ * (the function {@code Arima} of the forecast package [2] calls it): conditional sum of squares
+ * (CSS, the first d + mD + p + mP values conditioned on, later innovations from zero MA residuals),
+ * exact Gaussian maximum likelihood by the Kalman filter ({@link ArimaKalman}), or CSS to start ML
+ * (R's default "CSS-ML"). The search is R's BFGS ({@link ArimaOptimiser}); for ML the AR parts are
+ * searched as partial autocorrelations, so the estimate is stationary by construction, and a
+ * non-invertible MA estimate is replaced by its invertible twin ({@link ArimaPolynomials}). A CSS start
+ * that is not stationary is refused, as R refuses it. A mean or drift enters as a regression term
+ * started from least squares on the differenced series.
+ *
+ * <h2>References</h2>
+ * <ol>
+ * <li>R Core Team, {@code src/library/stats/R/arima.R} (R 4.2).</li>
+ * <li>Hyndman, R. J. &amp; Khandakar, Y. (2008). Automatic time series forecasting: the forecast
+ * package for R. <i>Journal of Statistical Software</i> 27(3), 1–22. DOI 10.18637/jss.v027.i03.</li>
+ * </ol>
+ */
+final class ArimaEstimation {
+
+    /** R's finite-difference step of {@code ARIMA_Gradtrans}. */
+    private static final double GRADTRANS_STEP = 1e-3;
+    /** R's {@code solve} refuses a matrix whose reciprocal condition number is below the machine epsilon. */
+    private static final double SINGULAR = Math.ulp(1.0);
+
+    /**
+     * @param coef          ar, ma, sar, sma, then the mean or drift coefficient
+     * @param sigma2        R's {@code arima} σ̂²: the ML ssq / n.used, or the CSS mean square
+     * @param value         the minimised objective, R's {@code res$value}
+     * @param varianceValid whether every diagonal element of the estimates' covariance is non-negative
+     *                      (the forecast package refuses the model otherwise); computed on demand, since
+     *                      its numerical Hessian costs as much as the search
+     */
+    record Estimate(double[] coef, double[] phi, double[] theta, double sigma2, double logLik, double value,
+                    double[] residuals, ArimaKalman kalman, java.util.function.BooleanSupplier varianceValid, int nUsed) {
+
+        Estimate {
+            coef = coef.clone();
+            phi = phi.clone();
+            theta = theta.clone();
+            residuals = residuals.clone();
+        }
+    }
+
+    private final double[] y;
+    private final ArimaOrder order;
+    private final double[] delta;
+    private final double[] xreg;
+    private final int narma;
+    private final int npar;
+    private final double[] adjusted;
+
+    ArimaEstimation(double[] y, ArimaOrder order) {
+        this.y = y;
+        this.order = order;
+        delta = ArimaPolynomials.differencing(order.d(), order.seasonalD(), order.period());
+        narma = order.armaCount();
+        int n = y.length;
+        if (order.hasMean()) {
+            xreg = new double[n];
+            java.util.Arrays.fill(xreg, 1);
+        } else if (order.hasDrift()) {
+            xreg = new double[n];
+            for (int t = 0; t < n; t++) {
+                xreg[t] = t + 1;
+            }
+        } else {
+            xreg = null;
+        }
+        npar = narma + (xreg == null ? 0 : 1);
+        adjusted = new double[n];
+    }
+
+    /** @return empty where R's {@code arima} stops with an error */
+    Optional<Estimate> estimate(Arima.Method method) {
+        int n = y.length;
+        int nUsed = n - delta.length;
+        if (nUsed <= 0) {
+            return Optional.empty();
+        }
+        double[] init = new double[npar];
+        double[] parscale = new double[npar];
+        java.util.Arrays.fill(parscale, 1);
+        if (xreg != null && !regressionStart(init, parscale)) {
+            return Optional.empty();
+        }
+        int m = order.period();
+        int ncond = order.d() + order.seasonalD() * m + order.p() + m * order.seasonalP();
+        if (ncond >= n && method != Arima.Method.ML) {
+            return Optional.empty();
+        }
+        if (method == Arima.Method.CSS) {
+            ArimaOptimiser css = new ArimaOptimiser(par -> cssObjective(par, ncond), parscale);
+            Optional<ArimaOptimiser.Result> found = css.minimise(init, ArimaOptimiser.MAX_ITERATIONS);
+            if (found.isEmpty()) {
+                return Optional.empty();
+            }
+            double[] coef = found.get().par();
+            double[] at = coef.clone();
+            java.util.function.BooleanSupplier valid = () -> npar == 0
+                    || css.hessian(at).map(h -> varianceValid(h, nUsed, null)).orElse(false);
+            double[][] pt = ArimaPolynomials.expand(coef, order, false);
+            removeRegression(coef);
+            ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
+            kalman.run(adjusted, null);
+            double[] residuals = new double[n];
+            double sigma2 = css(adjusted, pt[0], pt[1], ncond, residuals);
+            double value = found.get().value();
+            return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals,
+                    kalman, valid, nUsed));
+        }
+        if (method == Arima.Method.CSS_ML) {
+            Optional<ArimaOptimiser.Result> found = new ArimaOptimiser(par -> cssObjective(par, ncond), parscale)
+                    .minimise(init, ArimaOptimiser.MAX_ITERATIONS);
+            if (found.isEmpty()) {
+                return Optional.empty();
+            }
+            if (found.get().converged()) {
+                init = found.get().par();
+            }
+            if (!ArimaPolynomials.isStationary(init, 0, order.p())
+                    || !ArimaPolynomials.isStationary(init, order.p() + order.q(), order.seasonalP())) {
+                return Optional.empty(); // R: "non-stationary AR part from CSS"
+            }
+        }
+        boolean transform = npar > 0;
+        if (transform) {
+            ArimaPolynomials.invpartrans(order.p(), init, 0, init, 0);
+            ArimaPolynomials.invpartrans(order.seasonalP(), init, order.p() + order.q(), init, order.p() + order.q());
+            invertMa(init);
+            for (double v : init) {
+                if (!Double.isFinite(v)) {
+                    return Optional.empty();
+                }
+            }
+        }
+        ArimaOptimiser ml = new ArimaOptimiser(par -> mlObjective(par, transform), parscale);
+        Optional<ArimaOptimiser.Result> found = ml.minimise(init, ArimaOptimiser.MAX_ITERATIONS);
+        if (found.isEmpty()) {
+            return Optional.empty();
+        }
+        double[] coef = found.get().par();
+        double value = found.get().value();
+        java.util.function.BooleanSupplier valid = () -> true;
+        if (transform) {
+            double[] before = coef.clone();
+            invertMa(coef);
+            if (!java.util.Arrays.equals(before, coef)) { // R refits with maxit = 0 at the inverted MA
+                value = mlObjective(coef, true);
+            }
+            double[] raw = coef.clone();
+            valid = () -> ml.hessian(raw).map(h -> varianceValid(h, nUsed, gradTransform(raw))).orElse(false);
+            ArimaPolynomials.partrans(order.p(), coef, 0, coef, 0);
+            ArimaPolynomials.partrans(order.seasonalP(), coef, order.p() + order.q(), coef, order.p() + order.q());
+        }
+        double[][] pt = ArimaPolynomials.expand(coef, order, false);
+        removeRegression(coef);
+        ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
+        double[] residuals = new double[n];
+        ArimaKalman.Likelihood like = kalman.run(adjusted, residuals);
+        double sigma2 = like.ssq() / nUsed;
+        return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals, kalman,
+                valid, nUsed));
+    }
+
+    /**
+     * The model with the given coefficients (R's order, AR untransformed), no search: the
+     * likelihood of {@code method} (CSS or exact), residuals and final state as a fit would give them.
+     */
+    Optional<Estimate> at(double[] coef, Arima.Method method) {
+        int n = y.length;
+        int nUsed = n - delta.length;
+        if (coef.length != npar || nUsed <= 0) {
+            return Optional.empty();
+        }
+        double[][] pt = ArimaPolynomials.expand(coef, order, false);
+        removeRegression(coef);
+        ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
+        double[] residuals = new double[n];
+        ArimaKalman.Likelihood like = kalman.run(adjusted, method == Arima.Method.CSS ? null : residuals);
+        if (method == Arima.Method.CSS) {
+            int m = order.period();
+            int ncond = order.d() + order.seasonalD() * m + order.p() + m * order.seasonalP();
+            double sigma2 = css(adjusted, pt[0], pt[1], ncond, residuals);
+            double value = 0.5 * Math.log(sigma2);
+            return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals,
+                    kalman, () -> true, nUsed));
+        }
+        double value = 0.5 * (Math.log(like.ssq() / like.used()) + like.sumLog() / like.used());
+        return Optional.of(new Estimate(coef, pt[0], pt[1], like.ssq() / nUsed, logLik(value, nUsed), value,
+                residuals, kalman, () -> true, nUsed));
+    }
+
+    /** R: −0.5 (2 n.used · value + n.used + n.used log 2π). */
+    private static double logLik(double value, int nUsed) {
+        return -0.5 * (2 * nUsed * value + nUsed + nUsed * Math.log(2 * Math.PI));
+    }
+
+    /**
+     * R's start for the regression coefficient: least squares of the differenced series on the
+     * differenced regressor, with parscale ten standard errors.
+     */
+    private boolean regressionStart(double[] init, double[] parscale) {
+        double[] dx = difference(y);
+        double[] dr = difference(xreg);
+        if (dx.length <= 1) {
+            return false;
+        }
+        double sxy = 0;
+        double sxx = 0;
+        for (int i = 0; i < dx.length; i++) {
+            sxy += dx[i] * dr[i];
+            sxx += dr[i] * dr[i];
+        }
+        if (!(sxx > 0)) {
+            return false;
+        }
+        double beta = sxy / sxx;
+        double rss = 0;
+        for (int i = 0; i < dx.length; i++) {
+            double e = dx[i] - beta * dr[i];
+            rss += e * e;
+        }
+        double se = Math.sqrt(rss / (dx.length - 1) / sxx);
+        init[narma] = beta;
+        parscale[narma] = se > 0 ? 10 * se : 1;
+        return true;
+    }
+
+    private double[] difference(double[] v) {
+        double[] w = v.clone();
+        int len = w.length;
+        for (int k = 0; k < order.d(); k++) {
+            for (int t = 0; t < len - 1; t++) {
+                w[t] = w[t + 1] - w[t];
+            }
+            len--;
+        }
+        int m = order.period();
+        for (int k = 0; k < order.seasonalD(); k++) {
+            for (int t = 0; t < len - m; t++) {
+                w[t] = w[t + m] - w[t];
+            }
+            len -= m;
+        }
+        return java.util.Arrays.copyOf(w, Math.max(len, 0));
+    }
+
+    /** The series minus the regression term, into {@link #adjusted}. */
+    private void removeRegression(double[] par) {
+        if (xreg == null) {
+            System.arraycopy(y, 0, adjusted, 0, y.length);
+            return;
+        }
+        double beta = par[narma];
+        for (int t = 0; t < y.length; t++) {
+            adjusted[t] = y[t] - beta * xreg[t];
+        }
+    }
+
+    private double cssObjective(double[] par, int ncond) {
+        double[][] pt = ArimaPolynomials.expand(par, order, false);
+        removeRegression(par);
+        return 0.5 * Math.log(css(adjusted, pt[0], pt[1], ncond, null));
+    }
+
+    private double mlObjective(double[] par, boolean transform) {
+        double[][] pt = ArimaPolynomials.expand(par, order, transform);
+        removeRegression(par);
+        ArimaKalman.Likelihood like = new ArimaKalman(pt[0], pt[1], delta).run(adjusted, null);
+        double s2 = like.ssq() / like.used();
+        return 0.5 * (Math.log(s2) + like.sumLog() / like.used());
+    }
+
+    /**
+     * [1] {@code ARIMA_CSS}: the mean square of the innovations of the differenced series from
+     * {@code ncond} on, earlier innovations taken as zero.
+     */
+    private double css(double[] x, double[] phi, double[] theta, int ncond, double[] residuals) {
+        int n = x.length;
+        double[] w = x.clone();
+        for (int i = 0; i < order.d(); i++) {
+            for (int l = n - 1; l > 0; l--) {
+                w[l] -= w[l - 1];
+            }
+        }
+        int ns = order.period();
+        for (int i = 0; i < order.seasonalD(); i++) {
+            for (int l = n - 1; l >= ns; l--) {
+                w[l] -= w[l - ns];
+            }
+        }
+        double[] resid = residuals != null ? residuals : new double[n];
+        double ssq = 0;
+        int nu = 0;
+        int p = phi.length;
+        int q = theta.length;
+        for (int l = ncond; l < n; l++) {
+            double tmp = w[l];
+            for (int j = 0; j < p; j++) {
+                tmp -= phi[j] * w[l - j - 1];
+            }
+            int jmax = Math.min(l - ncond, q);
+            for (int j = 0; j < jmax; j++) {
+                tmp -= theta[j] * resid[l - j - 1];
+            }
+            resid[l] = tmp;
+            if (!Double.isNaN(tmp)) {
+                nu++;
+                ssq += tmp * tmp;
+            }
+        }
+        return ssq / nu;
+    }
+
+    private void invertMa(double[] par) {
+        ArimaPolynomials.invertMovingAverage(par, order.p(), order.q());
+        ArimaPolynomials.invertMovingAverage(par, order.p() + order.q() + order.seasonalP(), order.seasonalQ());
+    }
+
+    /** [1] {@code ARIMA_Gradtrans}: the Jacobian of the AR transformation by forward differences. */
+    private double[][] gradTransform(double[] raw) {
+        double[][] a = new double[npar][npar];
+        for (int i = 0; i < npar; i++) {
+            a[i][i] = 1;
+        }
+        jacobianBlock(raw, 0, order.p(), a);
+        jacobianBlock(raw, order.p() + order.q(), order.seasonalP(), a);
+        return a;
+    }
+
+    private static void jacobianBlock(double[] raw, int from, int length, double[][] a) {
+        if (length == 0) {
+            return;
+        }
+        double[] w1 = new double[length];
+        double[] w2 = new double[length];
+        double[] w3 = new double[length];
+        System.arraycopy(raw, from, w1, 0, length);
+        ArimaPolynomials.partrans(length, w1, 0, w2, 0);
+        for (int i = 0; i < length; i++) {
+            w1[i] += GRADTRANS_STEP;
+            ArimaPolynomials.partrans(length, w1, 0, w3, 0);
+            for (int j = 0; j < length; j++) {
+                a[from + i][from + j] = (w3[j] - w2[j]) / GRADTRANS_STEP;
+            }
+            w1[i] -= GRADTRANS_STEP;
+        }
+    }
+
+    /**
+     * Whether diag(Aᵀ (n H)⁻¹ A) ≥ 0, the forecast package's {@code checkarima} (it rejects a model whose
+     * standard errors are NaN); a singular Hessian fails as R's {@code solve} does.
+     */
+    private static boolean varianceValid(double[][] hessian, int nUsed, double[][] a) {
+        int k = hessian.length;
+        RealMatrix h = new Array2DRowRealMatrix(hessian).scalarMultiply(nUsed);
+        double[] singular = new SingularValueDecomposition(h).getSingularValues();
+        if (!(singular[k - 1] >= SINGULAR * singular[0])) {
+            return false; // R's solve: "system is computationally singular"
+        }
+        LUDecomposition lu = new LUDecomposition(h, 0);
+        RealMatrix inverse = lu.getSolver().getInverse();
+        RealMatrix variance = a == null ? inverse
+                : new Array2DRowRealMatrix(a).transpose().multiply(inverse).multiply(new Array2DRowRealMatrix(a));
+        for (int i = 0; i < k; i++) {
+            if (!(variance.getEntry(i, i) >= 0)) {
+                return false;
+            }
+        }
+        return true;
+    }
+}
