@@ -34,6 +34,12 @@ final class NumberCells {
                     + "]*[0-9])?[.,]?)(?: ?" + CURRENCY + ")?(%?)[ ]*([A-Za-z]{0,3})");
     private static final Pattern MISSING_WITH_FLAGS = Pattern.compile("(.*?)[ ]*([A-Za-z]{1,3})");
 
+    /**
+     * The largest size of value read (10^100): the methods square values and sum the squares, and
+     * from about 10^150 on that overflows double precision into infinities and NaN statistics.
+     */
+    static final double MAX_MAGNITUDE = 1e100;
+
     private NumberCells() {
     }
 
@@ -109,6 +115,10 @@ final class NumberCells {
             return Optional.empty();
         }
         double value = Double.parseDouble(digits);
+        if (!(Math.abs(value) <= MAX_MAGNITUDE)) {
+            why.append("'").append(cell).append("' is beyond ±1e100, the largest size of value the methods can square and sum");
+            return Optional.empty();
+        }
         if (!m.group(1).isEmpty() && m.group(1).charAt(0) != '+') {
             value = -value;
         }
