@@ -116,8 +116,9 @@ public final class TemplateEngine {
         worker.start();
         if (!finished(worker, limits.time().toMillis())) {
             stop(worker);
+            long millis = limits.time().toMillis();
             throw new TemplateProblem(out.where(templateName) + ": the template did not finish within "
-                    + limits.time().toSeconds() + " s (an endless <#list> or a loop that never ends?)");
+                    + (millis % 1000 == 0 ? millis / 1000 + " s" : millis + " ms") + " (an endless <#list> or a loop that never ends?)");
         }
         Throwable e = failure.get();
         if (e == null) {
@@ -127,8 +128,10 @@ public final class TemplateEngine {
             throw new TemplateProblem(templateName, t);
         }
         if (e instanceof TracingWriter.OutputLimit) {
+            int chars = limits.outputChars();
             throw new TemplateProblem(out.where(templateName) + ": the template wrote more than "
-                    + limits.outputChars() / (1024 * 1024) + " MB of XHTML (an endless <#list>?)");
+                    + (chars % (1024 * 1024) == 0 ? chars / (1024 * 1024) + " MB" : chars + " characters")
+                    + " of XHTML (an endless <#list>?)");
         }
         if (e instanceof StackOverflowError) {
             throw new TemplateProblem(out.where(templateName) + ": the template nested too deeply "
