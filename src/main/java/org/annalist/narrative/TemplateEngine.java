@@ -12,7 +12,9 @@ import freemarker.template.DefaultObjectWrapperBuilder;
 import freemarker.template.Template;
 import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
+import java.io.File;
 import java.io.IOException;
+import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -100,6 +102,8 @@ public final class TemplateEngine {
             throw new TemplateProblem(Optional.ofNullable(e.getTemplateName()).orElse(templateName) + ":"
                     + e.getLineNumber() + ":" + e.getColumnNumber() + ": "
                     + e.getEditorMessage().lines().findFirst().orElse("not a template"));
+        } catch (TooLargeTemplate e) {
+            throw new TemplateProblem(e.getMessage());
         } catch (IOException e) {
             throw new UncheckedIOException("template " + templateName + " cannot be read", e);
         }
@@ -190,9 +194,50 @@ public final class TemplateEngine {
             return bundled;
         }
         try {
-            return new MultiTemplateLoader(new TemplateLoader[] {new FileTemplateLoader(userTemplates.get().toFile()), bundled});
+            return new MultiTemplateLoader(new TemplateLoader[] {
+                new BoundedLoader(new FileTemplateLoader(userTemplates.get().toFile())), bundled});
         } catch (IOException e) {
             throw new UncheckedIOException("template folder " + userTemplates.get() + " cannot be read", e);
+        }
+    }
+
+    /** A user's template file is read whole; beyond this it is refused before it is read (a brief's template has 30 kB). */
+    static final long MAX_TEMPLATE_BYTES = 4L * 1024 * 1024;
+
+    /** Thrown by {@link BoundedLoader} for a template file over the limit. */
+    private static final class TooLargeTemplate extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        TooLargeTemplate(String message) {
+            super(message);
+        }
+    }
+
+    /** The user's folder, refusing a template file over {@link #MAX_TEMPLATE_BYTES}. */
+    private record BoundedLoader(TemplateLoader inner) implements TemplateLoader {
+        @Override
+        public Object findTemplateSource(String name) throws IOException {
+            Object source = inner.findTemplateSource(name);
+            if (source instanceof File file && file.length() > MAX_TEMPLATE_BYTES) {
+                throw new TooLargeTemplate(name + ": the template file has " + file.length() + " bytes, over the limit of "
+                        + MAX_TEMPLATE_BYTES / (1024 * 1024) + " MB");
+            }
+            return source;
+        }
+
+        @Override
+        public long getLastModified(Object source) {
+            return inner.getLastModified(source);
+        }
+
+        @Override
+        public Reader getReader(Object source, String encoding) throws IOException {
+            return inner.getReader(source, encoding);
+        }
+
+        @Override
+        public void closeTemplateSource(Object source) throws IOException {
+            inner.closeTemplateSource(source);
         }
     }
 

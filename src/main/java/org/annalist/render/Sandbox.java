@@ -138,9 +138,9 @@ public final class Sandbox {
         }
         boolean inside = namedFiles.contains(real) || folder.map(real::startsWith).orElse(false);
         if (!inside) {
-            String outside = folder.map(f -> "its template folder " + f).orElse("any template folder");
             return Optional.of(new TemplateMistakeException(0, 0, lastAsked, "it uses " + path + (real.equals(path) ? "" : " (which leads to " + real + ")")
-                    + ", outside " + outside + ", and a brief uses only files inside its template folder and the logo named", null));
+                    + ", outside " + folder.map(f -> "its template folder " + f).orElse("any template folder")
+                    + ", and a brief uses only files inside its template folder and the logo named", null));
         }
         try {
             if (!Files.isRegularFile(real) || Files.size(real) > Images.MAX_BYTES) {

@@ -68,6 +68,15 @@ class TemplateLimitsTest {
     }
 
     @Test
+    void aTemplateFileOverItsLimitIsRefusedBeforeItIsRead() throws IOException {
+        TemplateEngine engine = engine("<p>" + "x".repeat((int) TemplateEngine.MAX_TEMPLATE_BYTES) + "</p>",
+                TemplateEngine.Limits.DEFAULT);
+        assertThatThrownBy(() -> engine.render("brief.ftlx", VIEW, Locale.ENGLISH))
+                .isInstanceOf(TemplateEngine.TemplateProblem.class)
+                .hasMessageStartingWith("brief.ftlx: the template file has 4194311 bytes, over the limit of 4 MB");
+    }
+
+    @Test
     void aSyntaxErrorIsAProblemWithItsLine() throws IOException {
         TemplateEngine engine = engine("<p>\n<#if brief.title>\n</p>", TemplateEngine.Limits.DEFAULT);
         assertThatThrownBy(() -> engine.render("brief.ftlx", VIEW, Locale.ENGLISH))
