@@ -13,12 +13,14 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
+import java.time.Duration;
 import java.time.Instant;
 import java.util.Calendar;
 import java.util.GregorianCalendar;
 import java.util.List;
 import java.util.Map;
 import java.util.TimeZone;
+import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
 import java.util.logging.Level;
 import java.util.logging.Logger;
@@ -44,6 +46,22 @@ public final class PdfRenderer {
     public static final String CHART_MIME_TYPE = "application/x-jfreechart";
 
     /**
+     * How long one brief's layout may take: a one-series brief takes 0.3 s warm and 3 s cold; 500
+     * pages of text take about a minute on this project's 2-core machine.
+     */
+    public static final Duration LAYOUT_LIMIT = Duration.ofSeconds(120);
+
+    private final Duration layoutLimit;
+
+    public PdfRenderer() {
+        this(LAYOUT_LIMIT);
+    }
+
+    PdfRenderer(Duration layoutLimit) {
+        this.layoutLimit = layoutLimit;
+    }
+
+    /**
      * PDFBox reports through java.util.logging that it substitutes fonts for the standard 14 that
      * openhtmltopdf preloads (none of which reaches the brief); JUL holds loggers weakly, so the
      * quieted logger is kept here.
@@ -61,9 +79,63 @@ public final class PdfRenderer {
      * @param createdAt  the document's creation date (pinned so that the same input gives the same file)
      * @param documentId PDF trailer ID seed (pinned for the same reason)
      * @throws TemplateMistakeException when the XHTML is not well-formed, uses what the sandbox
-     *                                  refuses or places a chart not drawn
+     *                                  refuses, places a chart not drawn or takes longer to lay out
+     *                                  than {@link #LAYOUT_LIMIT}
      */
     public byte[] render(String xhtml, Sandbox sandbox, List<Figure> figures, Instant createdAt, long documentId) {
+        AtomicReference<byte[]> pdf = new AtomicReference<>();
+        AtomicReference<Throwable> failure = new AtomicReference<>();
+        Thread worker = new Thread(() -> {
+            try {
+                pdf.set(renderHere(xhtml, sandbox, figures, createdAt, documentId));
+            } catch (Throwable e) {   // every way out is reported on the caller's thread below
+                failure.set(e);
+            }
+        }, "pdf layout");
+        worker.setDaemon(true);
+        worker.start();
+        try {
+            worker.join(layoutLimit.toMillis());
+            if (worker.isAlive()) {
+                stop(worker);
+                long millis = layoutLimit.toMillis();
+                throw new TemplateMistakeException(0, 0, "", "the PDF layout did not finish within " + (millis % 1000 == 0
+                        ? millis / 1000 + " s" : millis + " ms") + " (" + xhtml.length() + " characters of XHTML, where a one-series brief has about 100,000)", null);
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            stop(worker);
+            throw new IllegalStateException("interrupted while the PDF was laid out", e);
+        }
+        Throwable e = failure.get();
+        if (e instanceof RuntimeException r) {
+            throw r;
+        }
+        if (e instanceof Error error) {
+            throw error;
+        }
+        if (e != null) {
+            throw new IllegalStateException(e);
+        }
+        return pdf.get();
+    }
+
+    /**
+     * Ends a layout past its time: openhtmltopdf checks for no interruption, so the thread is
+     * stopped where the JVM still allows it (its state is its own and is dropped); from Java 20 on
+     * the daemon thread is left to end with the process.
+     */
+    @SuppressWarnings({"deprecation", "removal"})
+    private static void stop(Thread worker) {
+        worker.interrupt();
+        try {
+            worker.stop();
+        } catch (UnsupportedOperationException e) {
+            // Java 20 and later
+        }
+    }
+
+    private byte[] renderHere(String xhtml, Sandbox sandbox, List<Figure> figures, Instant createdAt, long documentId) {
         Fonts.registerWithAwt();
         Map<String, Figure> byId = figures.stream().collect(Collectors.toMap(Figure::id, Function.identity()));
         DefaultObjectDrawerFactory drawers = new DefaultObjectDrawerFactory();

@@ -29,10 +29,10 @@ class ExtremeValuesPropertyTest {
     @Test
     void noSeriesGivesNaNOrInfinityOrAnExitOtherThanZeroOrTwo() throws IOException {
         Random random = new Random(SEED);
-        for (int c = 0; c < 30; c++) {
+        for (int c = 0; c < 24; c++) {
             double scale = SCALES[c < SCALES.length ? c : random.nextInt(SCALES.length)];
             String shape = SHAPES[c % SHAPES.length];
-            int months = 36 + random.nextInt(37);
+            int months = 36 + random.nextInt(25);
             StringBuilder csv = new StringBuilder("month,value\n");
             for (int i = 0; i < months; i++) {
                 // exact decimal digits: 1.3 × 1e308 is written out in full, beyond what a double holds
