@@ -36,9 +36,12 @@ final class NumberCells {
 
     /**
      * The largest size of value read (10^100): the methods square values and sum the squares, and
-     * from about 10^150 on that overflows double precision into infinities and NaN statistics.
+     * from about 10^150 on that overflows double precision into infinities and NaN statistics
+     * (a value of 10^-200 underflows the same way, to zeros and NaN).
      */
     static final double MAX_MAGNITUDE = 1e100;
+    /** The smallest size of value other than zero read (10^-100): below it the squares underflow to zero. */
+    static final double MIN_MAGNITUDE = 1e-100;
 
     private NumberCells() {
     }
@@ -117,6 +120,10 @@ final class NumberCells {
         double value = Double.parseDouble(digits);
         if (!(Math.abs(value) <= MAX_MAGNITUDE)) {
             why.append("'").append(cell).append("' is beyond ±1e100, the largest size of value the methods can square and sum");
+            return Optional.empty();
+        }
+        if (value != 0 && Math.abs(value) < MIN_MAGNITUDE) {
+            why.append("'").append(cell).append("' is nearer zero than ±1e-100 without being zero, smaller than the methods can square and sum");
             return Optional.empty();
         }
         if (!m.group(1).isEmpty() && m.group(1).charAt(0) != '+') {

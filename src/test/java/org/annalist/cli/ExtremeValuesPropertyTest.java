@@ -13,14 +13,14 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Property: whatever the size of the values (tiny, huge, constant, with zeros, alternating in sign,
- * one spike), {@code analyze --format json} ends with exit 0 or 2 and never prints NaN or Infinity;
- * values beyond the readers' limit of ±1e100 are refused with the file and line. Invented series,
- * seeded.
+ * one spike), {@code analyze --format json} (and the notes, once per size) ends with exit 0 or 2 and
+ * never prints NaN or Infinity; values beyond the readers' limits of ±1e100 and, other than zero,
+ * nearer zero than ±1e-100 are refused with the file and line. Invented series, seeded.
  */
 class ExtremeValuesPropertyTest {
 
     private static final long SEED = 20261203L;
-    private static final double[] SCALES = {1e-300, 1e-100, 1e-10, 1, 1e10, 1e50, 1e99, 1.5e100, 1e200, 1e308};
+    private static final double[] SCALES = {1e-300, 1e-120, 2e-100, 1e-10, 1, 1e10, 1e50, 1e99, 1.5e100, 1e200, 1e308};
     private static final String[] SHAPES = {"seasonal", "constant", "zeros", "alternating", "spike", "all-zero"};
 
     @TempDir
@@ -47,9 +47,18 @@ class ExtremeValuesPropertyTest {
             assertThat(run.exitCode()).as(label + ": " + run.err()).isIn(0, 2);
             assertThat(run.out() + run.err()).as(label).doesNotContain("NaN").doesNotContain("Infinity")
                     .doesNotContain("Exception");
-            boolean beyond = scale > 1e100 && !shape.equals("all-zero");
-            if (beyond) {
+            if (c < SCALES.length) {
+                // the analyst's notes too, for each size once
+                Run text = Run.of("analyze", file.toString());
+                assertThat(text.exitCode()).as(label + ": " + text.err()).isEqualTo(run.exitCode());
+                assertThat(text.out() + text.err()).as(label).doesNotContain("NaN").doesNotContain("Infinity")
+                        .doesNotContain("\u221E").doesNotContain("Exception");
+            }
+            boolean allZero = shape.equals("all-zero");
+            if (scale > 1e100 && !allZero) {
                 assertThat(run.err()).as(label).contains("case" + c + ".csv:").contains("is beyond ±1e100");
+            } else if (scale < 1e-100 && !allZero) {
+                assertThat(run.err()).as(label).contains("case" + c + ".csv:").contains("nearer zero than ±1e-100");
             } else if (run.exitCode() == 2) {
                 assertThat(run.err()).as(label).contains("case" + c + ".csv");
             }
