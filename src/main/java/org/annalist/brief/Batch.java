@@ -85,8 +85,16 @@ public final class Batch {
             return new Outcome(brief.label(), Optional.empty(), Optional.of(BatchPlan.reasons(ex)));
         } catch (RuntimeException ex) {
             // isolate the failure: the other briefs go on; the summary names what went wrong
-            return new Outcome(brief.label(), Optional.empty(), Optional.of(ex.getMessage() == null
-                    ? ex.getClass().getSimpleName() : ex.getMessage()));
+            return new Outcome(brief.label(), Optional.empty(), Optional.of(oneLine(ex.getMessage() == null
+                    ? ex.getClass().getSimpleName() : ex.getMessage())));
+        } catch (Error ex) {
+            // this brief's own failure (its stack and heap are released as it unwinds): recorded as
+            // such, and the batch carries on to its summary
+            return new Outcome(brief.label(), Optional.empty(), Optional.of("internal error: " + oneLine(ex.toString())));
         }
+    }
+
+    private static String oneLine(String message) {
+        return message.replaceAll("\\s*\\R\\s*", " ");
     }
 }

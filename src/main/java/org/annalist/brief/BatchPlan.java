@@ -57,7 +57,16 @@ public record BatchPlan(BriefPipeline pipeline, List<Planned> briefs) {
     public static BatchPlan of(BriefSpec spec, BriefPipeline pipeline) {
         Planner planner = new Planner(spec.file().getFileName().toString(), pipeline);
         for (BriefSpec.Entry entry : spec.briefs()) {
-            planner.plan(entry);
+            try {
+                planner.plan(entry);
+            } catch (RuntimeException | Error e) {
+                // one entry's failure of any kind (a file that cannot be read, an internal error)
+                // is that entry's: the batch plans and makes the others and reports it in its summary
+                String label = entry.line() > 0 ? planner.specName + ":" + entry.line()
+                        : entry.job().input().file().getFileName().toString();
+                planner.planned.add(Planned.failed(label, entry.job(), e.getMessage() == null || e instanceof Error
+                        ? "internal error: " + e : e.getMessage().replaceAll("\\s*\\R\\s*", " ")));
+            }
         }
         return new BatchPlan(pipeline, planner.planned);
     }

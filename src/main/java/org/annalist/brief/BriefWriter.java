@@ -29,9 +29,12 @@ import org.annalist.narrative.ChartWords;
 import org.annalist.narrative.Masthead;
 import org.annalist.narrative.MultiBriefView;
 import org.annalist.narrative.MultiBriefViews;
+import org.annalist.narrative.RenderedTemplate;
 import org.annalist.narrative.TemplateEngine;
 import org.annalist.render.Fonts;
 import org.annalist.render.PdfRenderer;
+import org.annalist.render.Sandbox;
+import org.annalist.render.TemplateMistakeException;
 import org.annalist.series.Series;
 
 /**
@@ -86,11 +89,10 @@ final class BriefWriter {
         }
         FigurePlan plan = FigurePlan.of(series, findings);
         BriefView view = BriefViews.of(series, findings, plan, source, masthead);
-        String xhtml = new TemplateEngine(page.choices().templates())
-                .render(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
+        RenderedTemplate xhtml = new TemplateEngine(page.choices().templates())
+                .renderTraced(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
         List<Figure> figures = figures(series, findings, plan);
-        byte[] pdf = renderer.render(xhtml, baseUri(page), figures, page.generatedAt(),
-                documentId(page.read().sha256(), series.name()));
+        byte[] pdf = render(xhtml, page, figures, documentId(page.read().sha256(), series.name()));
         write(page, pdf);
         return new Brief(page.output(), series.name(), findings, List.copyOf(warnings), figures);
     }
@@ -107,8 +109,8 @@ final class BriefWriter {
                 .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
         MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read(), page.notes()), masthead, check,
                 choices.sortBy());
-        String xhtml = new TemplateEngine(page.choices().templates())
-                .render(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
+        RenderedTemplate xhtml = new TemplateEngine(page.choices().templates())
+                .renderTraced(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
         Figure multiples = SmallMultiplesChart.of(series, findings);
         List<Figure> overviews = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
@@ -117,15 +119,26 @@ final class BriefWriter {
         }
         List<Figure> figures = new ArrayList<>(overviews);
         figures.add(0, multiples);
-        byte[] pdf = renderer.render(xhtml, baseUri(page), figures, page.generatedAt(),
+        byte[] pdf = render(xhtml, page, figures,
                 documentId(page.read().sha256(), String.join("|", series.stream().map(Series::name).toList())));
         write(page, pdf);
         return new CombinedBrief(page.output(), findings, check, multiples, List.copyOf(overviews));
     }
 
-    /** Relative links in the brief (a user's CSS, the logo) resolve beside the data file. */
-    private static String baseUri(Page page) {
-        return page.input().file().toAbsolutePath().getParent().toUri().toString();
+    /**
+     * The PDF of a template's XHTML. The layout engine may read only the template folder's files and
+     * the logo (relative links resolve in the template folder, or beside the data file, where
+     * nothing may be read); what it refuses, and XHTML it cannot parse, is the template's problem,
+     * named by the template's line.
+     */
+    private byte[] render(RenderedTemplate xhtml, Page page, List<Figure> figures, long documentId) {
+        Sandbox sandbox = Sandbox.of(page.choices().templates(), page.choices().logo().stream().toList(),
+                page.input().file().toAbsolutePath().getParent());
+        try {
+            return renderer.render(xhtml.xhtml(), sandbox, figures, page.generatedAt(), documentId);
+        } catch (TemplateMistakeException mistake) {
+            throw xhtml.problem(mistake.line(), mistake.column(), mistake.evidence(), mistake.getMessage());
+        }
     }
 
     private static void write(Page page, byte[] pdf) {

@@ -61,6 +61,9 @@ public final class DerivedSeries {
             int d = denominator.indexOf(p);
             double value = numerator.isMissing(a) || denominator.isMissing(d) || denominator.value(d) == 0 ? Double.NaN
                     : scale * numerator.value(a) / denominator.value(d);
+            if (!(Math.abs(value) <= 1e100)) {
+                value = Double.NaN;   // a ratio by a near-zero denominator, missing as one by zero is (the readers' limit, README)
+            }
             java.util.EnumSet<ValueFlag> flags = java.util.EnumSet.noneOf(ValueFlag.class);
             flags.addAll(numerator.flags(a));
             flags.addAll(denominator.flags(d));

@@ -34,8 +34,10 @@ final class ExitCodes {
     }
 
     /** For what a command throws. */
-    static int failure(Exception e, CommandLine cli, CommandLine.ParseResult parsed) {
+    static int failure(Exception exception, CommandLine cli, CommandLine.ParseResult parsed) {
         PrintWriter err = cli.getErr();
+        Throwable e = exception instanceof CommandLine.ExecutionException wrapped && wrapped.getCause() instanceof Error
+                ? wrapped.getCause() : exception;
         if (e instanceof DataProblemException problems) {
             for (DataProblem problem : problems.problems()) {
                 err.println(problem);
@@ -51,11 +53,28 @@ final class ExitCodes {
             err.println("annalist: " + e.getMessage());
             return BAD_INPUT;
         }
-        err.println("annalist: internal error: " + e + (debug(parsed) ? "" : " (run with --debug for details)"));
-        if (debug(parsed)) {
+        return escaped(e, err, debug(parsed));
+    }
+
+    /**
+     * An internal error, whatever it is (an {@link Error} too): one line, exit 1; the stack trace
+     * only with {@code --debug}.
+     */
+    static int escaped(Throwable e, PrintWriter err, boolean debug) {
+        err.println("annalist: internal error: " + describe(e) + (debug ? "" : " (run with --debug for details)"));
+        if (debug) {
             e.printStackTrace(err);
         }
+        err.flush();
         return INTERNAL_ERROR;
+    }
+
+    /** What went wrong, on one line; an Error says what it means for the user. */
+    static String describe(Throwable e) {
+        String what = e instanceof OutOfMemoryError ? "out of memory (" + e + "); a larger heap (java -Xmx…) may help"
+                : e instanceof StackOverflowError ? "the computation nested too deeply (" + e + ")"
+                : String.valueOf(e);
+        return what.replaceAll("\\s*\\R\\s*", " ");
     }
 
     private static boolean debug(CommandLine.ParseResult parsed) {

@@ -1,6 +1,8 @@
 package org.annalist.cli;
 
 import java.io.PrintWriter;
+import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 import picocli.CommandLine;
 
@@ -23,13 +25,30 @@ public final class Main {
         CommandLine cli = commandLine();
         cli.setOut(out);
         cli.setErr(err);
-        return cli.execute(args);
+        try {
+            return cli.execute(args);
+        } catch (Throwable e) {
+            // the last boundary: whatever escaped the handlers (an Error thrown while reporting an
+            // Error, say) is still one line and exit 1, never a stack trace
+            return ExitCodes.escaped(e, err, Arrays.asList(args).contains("--debug"));
+        }
     }
 
     static CommandLine commandLine() {
         CommandLine cli = new CommandLine(new AnnalistCommand());
         cli.setCaseInsensitiveEnumValuesAllowed(true);
         cli.setExecutionExceptionHandler(ExitCodes::failure);
+        // picocli hands only Exceptions to the handler; an Error (StackOverflowError,
+        // OutOfMemoryError) from a command is wrapped so that it takes the same way out
+        CommandLine.IExecutionStrategy runLast = new CommandLine.RunLast();
+        cli.setExecutionStrategy(parsed -> {
+            try {
+                return runLast.execute(parsed);
+            } catch (Error e) {
+                List<CommandLine> commands = parsed.asCommandLineList();
+                throw new CommandLine.ExecutionException(commands.get(commands.size() - 1), "error", e);
+            }
+        });
         cli.setParameterExceptionHandler(ExitCodes::usage);
         return cli;
     }

@@ -34,6 +34,15 @@ final class NumberCells {
                     + "]*[0-9])?[.,]?)(?: ?" + CURRENCY + ")?(%?)[ ]*([A-Za-z]{0,3})");
     private static final Pattern MISSING_WITH_FLAGS = Pattern.compile("(.*?)[ ]*([A-Za-z]{1,3})");
 
+    /**
+     * The largest size of value read (10^100): the methods square values and sum the squares, and
+     * from about 10^150 on that overflows double precision into infinities and NaN statistics
+     * (a value of 10^-200 underflows the same way, to zeros and NaN).
+     */
+    static final double MAX_MAGNITUDE = 1e100;
+    /** The smallest size of value other than zero read (10^-100): below it the squares underflow to zero. */
+    static final double MIN_MAGNITUDE = 1e-100;
+
     private NumberCells() {
     }
 
@@ -96,7 +105,10 @@ final class NumberCells {
     static Optional<Cell> parse(String cell, DecimalMark mark, StringBuilder why) {
         int point = plainDigits(cell);
         if (point == 0 || (point == 1 && mark == DecimalMark.POINT)) {
-            return Optional.of(new Cell(Double.parseDouble(cell), Set.of(), false));   // the common case, read directly
+            double value = Double.parseDouble(cell);   // the common case, read directly
+            if (Math.abs(value) <= MAX_MAGNITUDE && (value == 0 || Math.abs(value) >= MIN_MAGNITUDE)) {
+                return Optional.of(new Cell(value, Set.of(), false));
+            }
         }
         if (MISSING_MARKERS.contains(cell.toLowerCase(Locale.ROOT))) {
             return Optional.of(new Cell(Double.NaN, Set.of(), false));
@@ -123,6 +135,14 @@ final class NumberCells {
             return Optional.empty();
         }
         double value = Double.parseDouble(digits);
+        if (!(Math.abs(value) <= MAX_MAGNITUDE)) {
+            why.append("'").append(cell).append("' is beyond ±1e100, the largest size of value the methods can square and sum");
+            return Optional.empty();
+        }
+        if (value != 0 && Math.abs(value) < MIN_MAGNITUDE) {
+            why.append("'").append(cell).append("' is nearer zero than ±1e-100 without being zero, smaller than the methods can square and sum");
+            return Optional.empty();
+        }
         if (!m.group(1).isEmpty() && m.group(1).charAt(0) != '+') {
             value = -value;
         }

@@ -238,8 +238,17 @@ public final class AnalystNotes {
     }
 
     private static void line(StringBuilder out, String label, String format, Object... args) {
-        out.append(String.format(Locale.ROOT, "%-14s", label + ":")).append(typeset(String.format(Locale.ROOT, format, args)))
-                .append(System.lineSeparator());
+        out.append(String.format(Locale.ROOT, "%-14s", label + ":"))
+                .append(notComputed(typeset(String.format(Locale.ROOT, format, args)))).append(System.lineSeparator());
+    }
+
+    /** How Java formats a number that could not be computed (NaN, ±Infinity), where a number stands. */
+    private static final java.util.regex.Pattern NOT_A_NUMBER =
+            java.util.regex.Pattern.compile("(?<=^|[ (=])[+\u2212-]?(?:NaN|Infinity)(?=$|[ ),;%\u00A0])");
+
+    /** A number that could not be computed reads "n/a" (the JSON has null), never NaN or Infinity. */
+    private static String notComputed(String text) {
+        return NOT_A_NUMBER.matcher(text).replaceAll("n/a");
     }
 
     /**

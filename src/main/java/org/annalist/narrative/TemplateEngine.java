@@ -4,18 +4,27 @@ import freemarker.cache.ClassTemplateLoader;
 import freemarker.cache.FileTemplateLoader;
 import freemarker.cache.MultiTemplateLoader;
 import freemarker.cache.TemplateLoader;
+import freemarker.core.ParseException;
 import freemarker.core.TemplateClassResolver;
+import freemarker.core._CoreAPI;
 import freemarker.template.Configuration;
 import freemarker.template.DefaultObjectWrapperBuilder;
+import freemarker.template.Template;
 import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
+import java.io.File;
 import java.io.IOException;
-import java.io.StringWriter;
+import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
+import java.time.Duration;
+import java.util.Collections;
+import java.util.IdentityHashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
+import java.util.concurrent.atomic.AtomicReference;
 
 /**
  * Fills the brief templates ({@code report-templates/}, bundled in the jar; a user's folder of the
@@ -24,17 +33,41 @@ import java.util.Optional;
  * <p>Sandboxed: templates cannot create Java objects ({@code ?new}) or reach the Java API
  * ({@code ?api}), so a template handed over by a client cannot run code. Output is XHTML with
  * automatic escaping ({@code .ftlx}), so names such as {@code B&B nights} stay well-formed.
+ *
+ * <p>Bounded: a template runs on its own thread with a time limit ({@link Limits#time()}, 10 s by
+ * default; loops check for the end of their time), writes at most {@link Limits#outputChars()}
+ * characters (8 MB), and a macro or function that calls itself without end is stopped by its
+ * stack. Each of these is a {@link TemplateProblem} with the template's name and, where it is
+ * known, its line, never a raw error.
  */
 public final class TemplateEngine {
 
     public static final String BRIEF_TEMPLATE = "brief.ftlx";
     public static final String MULTI_TEMPLATE = "multi.ftlx";
 
+    /**
+     * @param time        how long a template may run (a brief takes milliseconds)
+     * @param outputChars how much XHTML it may write (a brief writes about 100 kB; a combined brief of
+     *                    50 series about 2 MB)
+     */
+    public record Limits(Duration time, int outputChars) {
+        public static final Limits DEFAULT = new Limits(Duration.ofSeconds(10), 8 * 1024 * 1024);
+    }
+
+    /** The thread's stack: room for the bundled templates many times over, small enough that endless recursion ends fast. */
+    private static final long STACK_BYTES = 4L << 20;
+
     private final Configuration configuration;
+    private final Limits limits;
 
     /** @param userTemplates a folder whose templates replace the bundled ones of the same name */
     public TemplateEngine(Optional<Path> userTemplates) {
-        configuration = new Configuration(Configuration.VERSION_2_3_35);
+        this(userTemplates, Limits.DEFAULT);
+    }
+
+    public TemplateEngine(Optional<Path> userTemplates, Limits limits) {
+        this.limits = limits;
+        configuration = new InterruptibleConfiguration();
         configuration.setTemplateLoader(loader(userTemplates));
         configuration.setDefaultEncoding("UTF-8");
         configuration.setLocale(Locale.ENGLISH);
@@ -54,14 +87,104 @@ public final class TemplateEngine {
      *                 localized lookup): how a translated narrative is added
      */
     public String render(String templateName, Object view, Locale language) {
+        return renderTraced(templateName, view, language).xhtml();
+    }
+
+    /**
+     * As {@link #render}, keeping where each part of the output came from, so that a later
+     * complaint about the XHTML (not well-formed, a file it may not use) names the template's line.
+     */
+    public RenderedTemplate renderTraced(String templateName, Object view, Locale language) {
+        Template template;
         try {
-            StringWriter out = new StringWriter();
-            configuration.getTemplate(templateName, language).process(Map.of("brief", view), out);
-            return out.toString();
+            template = configuration.getTemplate(templateName, language);
+        } catch (ParseException e) {
+            throw new TemplateProblem(Optional.ofNullable(e.getTemplateName()).orElse(templateName) + ":"
+                    + e.getLineNumber() + ":" + e.getColumnNumber() + ": "
+                    + e.getEditorMessage().lines().findFirst().orElse("not a template"));
+        } catch (TooLargeTemplate e) {
+            throw new TemplateProblem(e.getMessage());
         } catch (IOException e) {
             throw new UncheckedIOException("template " + templateName + " cannot be read", e);
-        } catch (TemplateException e) {
-            throw new TemplateProblem(templateName, e);
+        }
+        TracingWriter out = new TracingWriter(limits.outputChars());
+        AtomicReference<Throwable> failure = new AtomicReference<>();
+        Thread worker = new Thread(null, () -> {
+            try {
+                template.process(Map.of("brief", view), out);
+            } catch (Throwable e) {   // every way out is reported by the caller's thread below
+                failure.set(e);
+            }
+        }, "template " + templateName, STACK_BYTES);
+        worker.setDaemon(true);
+        worker.start();
+        if (!finished(worker, limits.time().toMillis())) {
+            stop(worker);
+            long millis = limits.time().toMillis();
+            throw new TemplateProblem(out.where(templateName) + ": the template did not finish within "
+                    + (millis % 1000 == 0 ? millis / 1000 + " s" : millis + " ms") + " (an endless <#list> or a loop that never ends?)");
+        }
+        Throwable e = failure.get();
+        if (e == null) {
+            return new RenderedTemplate(templateName, out.toString(), out.trace());
+        }
+        if (e instanceof TemplateException t) {
+            throw new TemplateProblem(templateName, t);
+        }
+        if (e instanceof TracingWriter.OutputLimit) {
+            int chars = limits.outputChars();
+            throw new TemplateProblem(out.where(templateName) + ": the template wrote more than "
+                    + (chars % (1024 * 1024) == 0 ? chars / (1024 * 1024) + " MB" : chars + " characters")
+                    + " of XHTML (an endless <#list>?)");
+        }
+        if (e instanceof StackOverflowError) {
+            throw new TemplateProblem(out.where(templateName) + ": the template nested too deeply "
+                    + "(a macro or function that calls itself without end?)");
+        }
+        if (e instanceof OutOfMemoryError) {
+            throw new TemplateProblem(out.where(templateName) + ": the template needed more memory than there is "
+                    + "(a very large sequence or string?)");
+        }
+        if (e instanceof IOException io) {
+            throw new UncheckedIOException("template " + templateName + " cannot be read", io);
+        }
+        if (e instanceof RuntimeException r) {
+            throw r;
+        }
+        if (e instanceof Error error) {
+            throw error;
+        }
+        throw new IllegalStateException(e);
+    }
+
+    private static boolean finished(Thread worker, long millis) {
+        try {
+            worker.join(millis);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            worker.interrupt();
+            throw new IllegalStateException("interrupted while the template ran", e);
+        }
+        return !worker.isAlive();
+    }
+
+    /**
+     * Ends a template past its time: loops see the interruption at their next turn; a single
+     * built-in that runs on (a huge {@code ?join}) is stopped, where the JVM still allows it, so
+     * that it does not go on using a core in a batch. The thread is a daemon either way.
+     */
+    @SuppressWarnings({"deprecation", "removal"})
+    private static void stop(Thread worker) {
+        worker.interrupt();
+        try {
+            worker.join(1000);
+            if (worker.isAlive()) {
+                worker.stop();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (UnsupportedOperationException e) {
+            // Java 20 and later: the daemon thread is left to end with the process
         }
     }
 
@@ -71,9 +194,77 @@ public final class TemplateEngine {
             return bundled;
         }
         try {
-            return new MultiTemplateLoader(new TemplateLoader[] {new FileTemplateLoader(userTemplates.get().toFile()), bundled});
+            return new MultiTemplateLoader(new TemplateLoader[] {
+                new BoundedLoader(new FileTemplateLoader(userTemplates.get().toFile())), bundled});
         } catch (IOException e) {
             throw new UncheckedIOException("template folder " + userTemplates.get() + " cannot be read", e);
+        }
+    }
+
+    /** A user's template file is read whole; beyond this it is refused before it is read (a brief's template has 30 kB). */
+    static final long MAX_TEMPLATE_BYTES = 4L * 1024 * 1024;
+
+    /** Thrown by {@link BoundedLoader} for a template file over the limit. */
+    private static final class TooLargeTemplate extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        TooLargeTemplate(String message) {
+            super(message);
+        }
+    }
+
+    /** The user's folder, refusing a template file over {@link #MAX_TEMPLATE_BYTES}. */
+    private record BoundedLoader(TemplateLoader inner) implements TemplateLoader {
+        @Override
+        public Object findTemplateSource(String name) throws IOException {
+            Object source = inner.findTemplateSource(name);
+            if (source instanceof File file && file.length() > MAX_TEMPLATE_BYTES) {
+                throw new TooLargeTemplate(name + ": the template file has " + file.length() + " bytes, over the limit of "
+                        + MAX_TEMPLATE_BYTES / (1024 * 1024) + " MB");
+            }
+            return source;
+        }
+
+        @Override
+        public long getLastModified(Object source) {
+            return inner.getLastModified(source);
+        }
+
+        @Override
+        public Reader getReader(Object source, String encoding) throws IOException {
+            return inner.getReader(source, encoding);
+        }
+
+        @Override
+        public void closeTemplateSource(Object source) throws IOException {
+            inner.closeTemplateSource(source);
+        }
+    }
+
+    /**
+     * Every template it hands out (included and imported ones too) checks at each turn of a loop
+     * whether its thread was interrupted, which is how the time limit ends an endless
+     * {@code <#list 1..>} that writes nothing.
+     */
+    private static final class InterruptibleConfiguration extends Configuration {
+        private final Set<Template> checked = Collections.newSetFromMap(new IdentityHashMap<>());
+
+        InterruptibleConfiguration() {
+            super(Configuration.VERSION_2_3_35);
+        }
+
+        @Override
+        public Template getTemplate(String name, Locale locale, Object customLookupCondition, String encoding,
+                                    boolean parseAsFTL, boolean ignoreMissing) throws IOException {
+            Template template = super.getTemplate(name, locale, customLookupCondition, encoding, parseAsFTL, ignoreMissing);
+            if (template != null) {
+                synchronized (checked) {
+                    if (checked.add(template)) {
+                        _CoreAPI.addThreadInterruptedChecks(template);
+                    }
+                }
+            }
+            return template;
         }
     }
 
@@ -84,6 +275,11 @@ public final class TemplateEngine {
         TemplateProblem(String template, TemplateException cause) {
             super(template + ":" + cause.getLineNumber() + ":" + cause.getColumnNumber() + ": "
                     + cause.getMessageWithoutStackTop().lines().findFirst().orElse("template error"), cause);
+        }
+
+        /** @param message already {@code TEMPLATE:LINE: what} (or {@code TEMPLATE: what} where no line is known) */
+        TemplateProblem(String message) {
+            super(message);
         }
     }
 }

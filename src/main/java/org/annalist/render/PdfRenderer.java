@@ -5,16 +5,22 @@ import com.openhtmltopdf.pdfboxout.PdfBoxRenderer;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
 import com.openhtmltopdf.render.DefaultObjectDrawerFactory;
 import com.openhtmltopdf.util.XRLog;
+import com.openhtmltopdf.util.XRRuntimeException;
+import javax.xml.transform.SourceLocator;
+import javax.xml.transform.TransformerException;
+import org.xml.sax.SAXParseException;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
+import java.time.Duration;
 import java.time.Instant;
 import java.util.Calendar;
 import java.util.GregorianCalendar;
 import java.util.List;
 import java.util.Map;
 import java.util.TimeZone;
+import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
 import java.util.logging.Level;
 import java.util.logging.Logger;
@@ -40,6 +46,22 @@ public final class PdfRenderer {
     public static final String CHART_MIME_TYPE = "application/x-jfreechart";
 
     /**
+     * How long one brief's layout may take: a one-series brief takes 0.3 s warm and 3 s cold; 500
+     * pages of text take about a minute on this project's 2-core machine.
+     */
+    public static final Duration LAYOUT_LIMIT = Duration.ofSeconds(120);
+
+    private final Duration layoutLimit;
+
+    public PdfRenderer() {
+        this(LAYOUT_LIMIT);
+    }
+
+    PdfRenderer(Duration layoutLimit) {
+        this.layoutLimit = layoutLimit;
+    }
+
+    /**
      * PDFBox reports through java.util.logging that it substitutes fonts for the standard 14 that
      * openhtmltopdf preloads (none of which reaches the brief); JUL holds loggers weakly, so the
      * quieted logger is kept here.
@@ -52,19 +74,77 @@ public final class PdfRenderer {
     }
 
     /**
-     * @param baseUri    where relative links in the XHTML (CSS, logo) resolve
+     * @param sandbox    what the XHTML may use besides itself (files of the template folder, the
+     *                   logo) and where its relative links resolve
      * @param createdAt  the document's creation date (pinned so that the same input gives the same file)
      * @param documentId PDF trailer ID seed (pinned for the same reason)
+     * @throws TemplateMistakeException when the XHTML is not well-formed, uses what the sandbox
+     *                                  refuses, places a chart not drawn or takes longer to lay out
+     *                                  than {@link #LAYOUT_LIMIT}
      */
-    public byte[] render(String xhtml, String baseUri, List<Figure> figures, Instant createdAt, long documentId) {
+    public byte[] render(String xhtml, Sandbox sandbox, List<Figure> figures, Instant createdAt, long documentId) {
+        AtomicReference<byte[]> pdf = new AtomicReference<>();
+        AtomicReference<Throwable> failure = new AtomicReference<>();
+        Thread worker = new Thread(() -> {
+            try {
+                pdf.set(renderHere(xhtml, sandbox, figures, createdAt, documentId));
+            } catch (Throwable e) {   // every way out is reported on the caller's thread below
+                failure.set(e);
+            }
+        }, "pdf layout");
+        worker.setDaemon(true);
+        worker.start();
+        try {
+            worker.join(layoutLimit.toMillis());
+            if (worker.isAlive()) {
+                stop(worker);
+                long millis = layoutLimit.toMillis();
+                throw new TemplateMistakeException(0, 0, "", "the PDF layout did not finish within " + (millis % 1000 == 0
+                        ? millis / 1000 + " s" : millis + " ms") + " (" + xhtml.length() + " characters of XHTML, where a one-series brief has about 100,000)", null);
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            stop(worker);
+            throw new IllegalStateException("interrupted while the PDF was laid out", e);
+        }
+        Throwable e = failure.get();
+        if (e instanceof RuntimeException r) {
+            throw r;
+        }
+        if (e instanceof Error error) {
+            throw error;
+        }
+        if (e != null) {
+            throw new IllegalStateException(e);
+        }
+        return pdf.get();
+    }
+
+    /**
+     * Ends a layout past its time: openhtmltopdf checks for no interruption, so the thread is
+     * stopped where the JVM still allows it (its state is its own and is dropped); from Java 20 on
+     * the daemon thread is left to end with the process.
+     */
+    @SuppressWarnings({"deprecation", "removal"})
+    private static void stop(Thread worker) {
+        worker.interrupt();
+        try {
+            worker.stop();
+        } catch (UnsupportedOperationException e) {
+            // Java 20 and later
+        }
+    }
+
+    private byte[] renderHere(String xhtml, Sandbox sandbox, List<Figure> figures, Instant createdAt, long documentId) {
         Fonts.registerWithAwt();
         Map<String, Figure> byId = figures.stream().collect(Collectors.toMap(Figure::id, Function.identity()));
         DefaultObjectDrawerFactory drawers = new DefaultObjectDrawerFactory();
-        drawers.registerDrawer(CHART_MIME_TYPE, chartDrawer(byId));
+        drawers.registerDrawer(CHART_MIME_TYPE, chartDrawer(byId, sandbox));
 
         PdfRendererBuilder builder = new PdfRendererBuilder();
         builder.useFastMode();
-        builder.withHtmlContent(xhtml, baseUri);
+        builder.withHtmlContent(xhtml, sandbox.baseUri());
+        sandbox.applyTo(builder);
         // PDF/A-2u for archiving, PDF/UA-1 for screen readers (tagged, alternative texts); the sRGB
         // OutputIntent PDF/A requires is the JDK's own profile.
         builder.usePdfAConformance(PdfRendererBuilder.PdfAConformance.PDFA_2_U);
@@ -75,8 +155,9 @@ public final class PdfRenderer {
         Fonts.registerWith(builder);
         ByteArrayOutputStream pdf = new ByteArrayOutputStream(256 * 1024);
         builder.toStream(OutputStream.nullOutputStream());
-        try (PdfBoxRenderer renderer = builder.buildPdfRenderer()) {
+        try (PdfBoxRenderer renderer = parsed(builder)) {
             renderer.createPDFWithoutClosing();
+            sandbox.throwIfRefused();
             try (PDDocument document = renderer.getPdfDocument()) {
                 Calendar created = new GregorianCalendar(TimeZone.getTimeZone("UTC"));
                 created.setTimeInMillis(createdAt.toEpochMilli());
@@ -89,6 +170,49 @@ public final class PdfRenderer {
             throw new UncheckedIOException("the PDF could not be laid out", e);
         }
         return pdf.toByteArray();
+    }
+
+    /**
+     * The renderer with the XHTML parsed; XHTML that is not well-formed is the template's mistake,
+     * with the parser's line and column in the XHTML.
+     */
+    private static PdfBoxRenderer parsed(PdfRendererBuilder builder) {
+        try {
+            return builder.buildPdfRenderer();
+        } catch (XRRuntimeException e) {
+            for (Throwable cause = e; cause != null; cause = cause.getCause()) {
+                SourceLocator at = cause instanceof SAXParseException sax ? new SaxLocator(sax)
+                        : cause instanceof TransformerException t ? t.getLocator() : null;
+                if (at != null && at.getLineNumber() > 0) {
+                    String reason = cause.getMessage() == null ? "" : cause.getMessage().replaceFirst("^[^:]*Exception[^:]*: ", "");
+                    throw new TemplateMistakeException(at.getLineNumber(), at.getColumnNumber(), "",
+                            "the XHTML it writes is not well-formed: " + reason, e);
+                }
+            }
+            throw e;
+        }
+    }
+
+    private record SaxLocator(SAXParseException e) implements SourceLocator {
+        @Override
+        public String getPublicId() {
+            return e.getPublicId();
+        }
+
+        @Override
+        public String getSystemId() {
+            return e.getSystemId();
+        }
+
+        @Override
+        public int getLineNumber() {
+            return e.getLineNumber();
+        }
+
+        @Override
+        public int getColumnNumber() {
+            return e.getColumnNumber();
+        }
     }
 
     /**
@@ -111,12 +235,13 @@ public final class PdfRenderer {
         metadata.importXMPMetadata(patched.getBytes(StandardCharsets.UTF_8));
     }
 
-    private static FSObjectDrawer chartDrawer(Map<String, Figure> figures) {
+    private static FSObjectDrawer chartDrawer(Map<String, Figure> figures, Sandbox sandbox) {
         return (element, x, y, width, height, outputDevice, context, dotsPerPixel) -> {
             Figure figure = figures.get(element.getAttribute("data-chart"));
             if (figure == null) {
-                throw new IllegalStateException("the template places chart '" + element.getAttribute("data-chart")
-                        + "', which this brief has not drawn");
+                sandbox.record(new TemplateMistakeException(0, 0, "data-chart=\"" + element.getAttribute("data-chart") + "\"",
+                        "it places chart '" + element.getAttribute("data-chart") + "', which this brief has not drawn", null));
+                return null;
             }
             // openhtmltopdf hands over the box in dots; the chart is drawn in CSS pixels.
             float widthPx = (float) (width / dotsPerPixel);
