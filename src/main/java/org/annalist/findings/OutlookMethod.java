@@ -11,8 +11,11 @@ public enum OutlookMethod {
     SEASONAL_NAIVE("seasonal naive"),
     /** The seasonal naive forecast of data without a season: every period as the latest value. */
     NAIVE("naive"),
-    /** The naive forecast plus the average change per period, for series too short for the other methods. */
-    NAIVE_WITH_DRIFT("naive with drift");
+    /**
+     * The naive forecast plus the average change per period, for series too short for the other
+     * methods (its code is a short name, as R's {@code rwf(drift = TRUE)} is; the narrative words it).
+     */
+    NAIVE_WITH_DRIFT("naive+drift");
 
     private final String code;
 

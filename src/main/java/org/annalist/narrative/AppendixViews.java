@@ -47,7 +47,10 @@ final class AppendixViews {
                 + "straight line carried by the remainder", ""));
         if (findings.outlook() != null) {
             OutlookFinding o = findings.outlook();
-            rows.add(new BriefView.MethodRow("Outlook", "equal-weight combination (Makridakis & Hibon 2000; "
+            boolean shortSeries = o.chosenBecause().basis() == OutlookFinding.Choice.Basis.SHORT_SERIES;
+            rows.add(new BriefView.MethodRow("Outlook", shortSeries ? "the naive forecast with drift, or the seasonal"
+                    + " naive one, with Student-t intervals (Hyndman & Athanasopoulos 2021, §5.2 and §5.5), for a"
+                    + " series too short for the usual methods" : "equal-weight combination (Makridakis & Hibon 2000; "
                     + "Makridakis, Spiliotis & Assimakopoulos 2020) of exponential smoothing state-space models chosen "
                     + "by AICc (Hyndman, Koehler, Snyder & Grose 2002; Hyndman et al. 2008), automatic ARIMA by the "
                     + "stepwise search of Hyndman & Khandakar (2008) and Theta (Assimakopoulos & Nikolopoulos 2000), "

@@ -5,6 +5,7 @@ import java.util.List;
 import org.annalist.findings.Measure;
 import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
+import org.annalist.findings.OutlookMethod;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 
@@ -50,7 +51,8 @@ final class OutlookViews {
         }
         List<BriefView.ScoreRow> scores = new ArrayList<>();
         for (OutlookFinding.Score s : o.backtest()) {
-            scores.add(new BriefView.ScoreRow(s.method().code(), f.fixed(s.mase(), 2), f.fixed(s.smape(), 1),
+            String name = s.method() == OutlookMethod.COMBINATION ? "average of the methods" : s.method().code();
+            scores.add(new BriefView.ScoreRow(name, f.fixed(s.mase(), 2), f.fixed(s.smape(), 1),
                     s.method() == o.method()));
         }
         OutlookFinding.Span year = o.nextYearTotal() != null ? o.nextYearTotal() : o.nextYearAverage();
@@ -86,7 +88,7 @@ final class OutlookViews {
                     + Terms.listed(model.members().stream().map(OutlookViews::methodInWords).toList());
             case ETS -> "exponential smoothing (" + model.label().orElseThrow() + ")";
             case ARIMA -> "an ARIMA model (" + model.label().orElseThrow() + ")";
-            case THETA -> model.seasonallyAdjusted() ? "the Theta method, on seasonally adjusted values"
+            case THETA -> model.seasonallyAdjusted() ? "the Theta method (on seasonally adjusted values)"
                     : "the Theta method";
             case SEASONAL_NAIVE -> "the seasonal naive rule (each period as the same period a year before)";
             case NAIVE -> "the naive rule (every period as the latest value)";

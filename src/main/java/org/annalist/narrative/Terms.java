@@ -162,7 +162,8 @@ final class Terms {
         return switch (m.method()) {
             case ETS, ARIMA -> m.label().orElseThrow();
             case THETA -> m.seasonallyAdjusted() ? "Theta, seasonally adjusted" : "Theta";
-            case SEASONAL_NAIVE, NAIVE, NAIVE_WITH_DRIFT -> m.method().code();
+            case SEASONAL_NAIVE, NAIVE -> m.method().code();
+            case NAIVE_WITH_DRIFT -> "naive with drift";
             case COMBINATION -> "mean of " + listed(m.members().stream().map(Terms::forecastModel).toList());
         };
     }

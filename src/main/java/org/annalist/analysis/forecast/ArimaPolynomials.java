@@ -1,5 +1,8 @@
 package org.annalist.analysis.forecast;
 
+import java.util.Optional;
+import org.apache.commons.math3.exception.MaxCountExceededException;
+
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
 
@@ -146,7 +149,16 @@ final class ArimaPolynomials {
         if (k == 0) {
             return Double.POSITIVE_INFINITY;
         }
-        double[][] eig = inverseRoots(c, sign, k);
+        for (int i = 0; i < k; i++) {
+            if (!Double.isFinite(c[i])) {
+                return 0; // no roots to speak of: refused as if on the unit circle
+            }
+        }
+        Optional<double[][]> roots = inverseRoots(c, sign, k);
+        if (roots.isEmpty()) {
+            return 0;
+        }
+        double[][] eig = roots.get();
         double largest = 0;
         for (int i = 0; i < k; i++) {
             largest = Math.max(largest, Math.hypot(eig[0][i], eig[1][i]));
@@ -154,10 +166,14 @@ final class ArimaPolynomials {
         return 1 / largest;
     }
 
-    /** Eigenvalues (real, imaginary parts) of the companion matrix of 1 + s Σ c_i z^i: the inverse roots. */
-    private static double[][] inverseRoots(double[] c, double sign, int k) {
+    /**
+     * Eigenvalues (real, imaginary parts) of the companion matrix of 1 + s Σ c_i z^i: the inverse
+     * roots; empty when the eigenvalue iteration does not converge (seen on M3 series with
+     * near-cancelling coefficients), and the model is then refused as one with a root on the circle.
+     */
+    private static Optional<double[][]> inverseRoots(double[] c, double sign, int k) {
         if (k == 1) {
-            return new double[][] {{-sign * c[0]}, {0}};
+            return Optional.of(new double[][] {{-sign * c[0]}, {0}});
         }
         double[][] companion = new double[k][k];
         for (int i = 0; i < k; i++) {
@@ -166,8 +182,12 @@ final class ArimaPolynomials {
         for (int i = 1; i < k; i++) {
             companion[i][i - 1] = 1;
         }
-        EigenDecomposition e = new EigenDecomposition(new Array2DRowRealMatrix(companion, false));
-        return new double[][] {e.getRealEigenvalues(), e.getImagEigenvalues()};
+        try {
+            EigenDecomposition e = new EigenDecomposition(new Array2DRowRealMatrix(companion, false));
+            return Optional.of(new double[][] {e.getRealEigenvalues(), e.getImagEigenvalues()});
+        } catch (MaxCountExceededException notConverged) {
+            return Optional.empty(); // commons-math's Schur iteration gives up rather than answer
+        }
     }
 
     /** [1] {@code arCheck}: all roots of 1 − φ₁z − … outside the unit circle. */
@@ -191,7 +211,11 @@ final class ArimaPolynomials {
         }
         double[] c = new double[q0];
         System.arraycopy(coef, from, c, 0, q0);
-        double[][] eig = inverseRoots(c, 1, q0);
+        Optional<double[][]> roots = inverseRoots(c, 1, q0);
+        if (roots.isEmpty()) {
+            return; // no roots to reflect: the coefficients stay, and the root check refuses the model
+        }
+        double[][] eig = roots.get();
         boolean any = false;
         for (int i = 0; i < q0; i++) {
             any |= Math.hypot(eig[0][i], eig[1][i]) > 1; // root inside the unit circle
