@@ -101,19 +101,29 @@ final class OutlookViews {
     static String why(OutlookFinding o, Formats f, String range) {
         String tested = "Each method was tested by forecasting each of the last " + f.count(o.backtestPeriods())
                 + " periods (" + range + ") from the data before it, as if made at the time";
-        String margin = Terms.number(org.annalist.findings.DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT) + "\u00A0%";
+        String asMuch = asMuch(org.annalist.findings.DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT);
         String averages = "Averages of several methods have forecast more accurately, on average, than any one"
                 + " method chosen in advance in large forecasting competitions";
         return switch (o.chosenBecause().basis()) {
             case COMBINATION_NOT_BEATEN -> averages + ". " + tested + "; no single method did clearly better than the"
-                    + " average (by " + margin + " or more, in both the earlier and the later half of the test), so the"
-                    + " average is used.";
-            case SINGLE_CLEARLY_BETTER -> tested + "; this one missed by at least " + margin + " less than the average of"
-                    + " the methods, in both the earlier and the later half of the test, so it is used instead of the"
+                    + " average (missing by " + asMuch + " or less, in both the earlier and the later half of the"
+                    + " test), so the average is used.";
+            case SINGLE_CLEARLY_BETTER -> tested + "; this one missed by " + asMuch + " as the average of the methods"
+                    + " or less, in both the earlier and the later half of the test, so it is used instead of the"
                     + " average.";
             case COMBINATION_WITHOUT_BACKTEST -> averages + "; this series is too short to test them on its own past.";
             case SHORT_SERIES -> "The series is too short for the usual methods, so the forecast only carries its"
                     + " latest values forward; its intervals are wide because so few values show how much it varies.";
+        };
+    }
+
+    /** How much a method that is better by {@code marginPct} % misses, in words: {@code half as much}. */
+    static String asMuch(int marginPct) {
+        return switch (marginPct) {
+            case 50 -> "half as much";
+            case 25 -> "three quarters as much";
+            case 75 -> "a quarter as much";
+            default -> (100 - marginPct) + " hundredths as much";
         };
     }
 

@@ -59,4 +59,21 @@ final class AgainstR {
             return Double.parseDouble(rResults.get(column));
         }
     }
+
+    /** The datasets of forecast_accuracy_holdout8.csv: the four above and four more of R's. */
+    static final String[] EIGHT = {"AirPassengers", "co2", "UKgas", "nottem", "USAccDeaths", "ldeaths",
+        "JohnsonJohnson", "austres"};
+
+    /**
+     * A dataset of forecast_accuracy_holdout8.csv split as that file splits it (the last two seasons
+     * held out), with its row of R's results.
+     */
+    static HoldOut ofEight(String dataset) {
+        Map<String, String> row = Reference.csv("forecast_accuracy_holdout8.csv").row(dataset);
+        int train = Integer.parseInt(row.get("n_train"));
+        int h = Integer.parseInt(row.get("h"));
+        double[] x = Reference.dataset(row.get("file"));
+        return new HoldOut(Integer.parseInt(row.get("frequency")), Arrays.copyOf(x, train),
+                Arrays.copyOfRange(x, train, train + h), row);
+    }
 }

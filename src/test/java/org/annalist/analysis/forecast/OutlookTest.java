@@ -29,6 +29,34 @@ class OutlookTest {
         assertThat(mase[0]).isLessThanOrEqualTo(mase[1]);
     }
 
+    /**
+     * Eight public series with the last two seasons held out (forecast_accuracy_holdout8.csv, made by
+     * make-holdout8.R with R 4.2.2 and forecast 8.20). The goal is a mean MASE at most R's automatic
+     * ets() (1.084) and the mean of R's ets, auto.arima and thetaf (1.090); measured: 1.147, behind on
+     * USAccDeaths (0.702: the back-test, with two years before it, picks the seasonal naive rule; R
+     * 0.431) and JohnsonJohnson (2.217 against 1.856). This pins that the outlook stays within 10 % of
+     * R's ets while that gap is open.
+     */
+    @Test
+    void onEightPublicSeriesTheOutlookStaysWithinTenPercentOfRsEts() {
+        double ours = 0;
+        double ets = 0;
+        double mean3 = 0;
+        StringBuilder each = new StringBuilder();
+        for (String dataset : AgainstR.EIGHT) {
+            AgainstR.HoldOut split = AgainstR.ofEight(dataset);
+            double[] f = Outlook.of(split.training(), split.period(), split.horizon(), Outlook.Bounds.NON_NEGATIVE)
+                    .orElseThrow().chosen().mean();
+            double mase = Accuracy.of(split.training(), split.test(), f, split.period()).orElseThrow().mase();
+            each.append(String.format(java.util.Locale.ROOT, "%s %.3f (R ets %.3f); ", dataset, mase,
+                    split.rValue("ets_MASE")));
+            ours += mase / AgainstR.EIGHT.length;
+            ets += split.rValue("ets_MASE") / AgainstR.EIGHT.length;
+            mean3 += split.rValue("mean3_MASE") / AgainstR.EIGHT.length;
+        }
+        assertThat(ours).as("%s; R's mean of three %.3f", each, mean3).isLessThanOrEqualTo(1.10 * ets);
+    }
+
     @Test
     void intervalsAreNestedAroundTheMeanAndWidenWithTheHorizon() {
         AgainstR.HoldOut split = AgainstR.HoldOut.of("nottem");
