@@ -46,11 +46,11 @@ final class RulesInForce {
                 new Rule("An outlier", "robust score \u2265 " + Terms.number(DecisionRules.OUTLIER_SCORE) + "; runs of "
                         + DecisionRules.OUTLIER_SHIFT_RUN + " or more are shifts; " + DecisionRules.OUTLIER_STRETCH_FLAGS
                         + " or more within two seasonal cycles an unusual stretch"),
-                new Rule("The outlook uses one method instead of the average of three when", "its back-test error is at"
-                        + " least " + Terms.number(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT) + "\u00A0% lower, and lower in"
-                        + " both halves of the back-test"),
-                new Rule("The outlook uses only the values since the latest break when", "its back-test error so"
-                        + " fitted is at least " + Terms.number(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT) + "\u00A0% lower"),
+                new Rule("The outlook uses one method, not the average of three / only the values since the latest"
+                        + " break, when", "its back-test error is at least " + Terms.number(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT)
+                        + "\u00A0% lower, in both halves of the test / at least "
+                        + Terms.number(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT)
+                        + "\u00A0% lower"),
                 new Rule("Next year called about the same as this year when", "the 80\u00A0% interval of the change"
                         + " contains zero and lies within \u00B1" + Terms.number(DecisionRules.OUTLOOK_SAME_PCT) + "\u00A0%"),
                 new Rule("Irregular fluctuation called small / large", "share below "
