@@ -36,6 +36,18 @@ final class Backtest {
             Outlook.Method.SEASONAL_NAIVE};
     /** The members the combination may average: the seasonal naive forecast is a yardstick, not a member. */
     static final List<Outlook.Method> COMBINABLE = List.of(Outlook.Method.ETS, Outlook.Method.ARIMA, Outlook.Method.THETA);
+    /**
+     * The longest seasonal period ARIMA is fitted for: weekly data (52) make seasonal ARIMA states
+     * of a hundred elements and more, which the outlook cannot afford (and the literature does
+     * not recommend seasonal ARIMA for such periods: Hyndman &amp; Athanasopoulos 2021, §12.1, from
+     * memory); there the combination is ETS and Theta.
+     */
+    static final int MAX_ARIMA_PERIOD = 12;
+
+    /** The members the combination may average for data with this seasonal period. */
+    static List<Outlook.Method> combinable(int period) {
+        return period <= MAX_ARIMA_PERIOD ? COMBINABLE : List.of(Outlook.Method.ETS, Outlook.Method.THETA);
+    }
 
     /**
      * A back-test's outcome.
@@ -99,7 +111,8 @@ final class Backtest {
         boolean[] available = new boolean[SINGLE.length];
         List<Members.Updating> prepared = new ArrayList<>();
         for (int m = 0; m < SINGLE.length; m++) {
-            Optional<Members.Updating> member = Members.prepare(SINGLE[m], training, period);
+            Optional<Members.Updating> member = SINGLE[m] == Outlook.Method.ARIMA && period > MAX_ARIMA_PERIOD
+                    ? Optional.empty() : Members.prepare(SINGLE[m], training, period);
             available[m] = member.isPresent();
             prepared.add(member.orElse(null));
         }
@@ -129,7 +142,7 @@ final class Backtest {
             at += h;
         }
         List<Outlook.Method> combined = new ArrayList<>();
-        for (Outlook.Method m : COMBINABLE) {
+        for (Outlook.Method m : combinable(period)) {
             if (available[indexOf(m)]) {
                 combined.add(m);
             }

@@ -323,7 +323,7 @@ public final class Outlook {
                 Optional.empty(), Optional.empty()));
         Method method = choice.basis() == Choice.Basis.SINGLE_CLEARLY_BETTER ? choice.bestSingle().orElseThrow().method()
                 : Method.COMBINATION;
-        List<Method> members = run.map(Backtest.Run::combined).orElse(Backtest.COMBINABLE);
+        List<Method> members = run.map(Backtest.Run::combined).orElse(Backtest.combinable(period));
         Optional<Forecast> forecast = CandidateForecasts.forecast(method, fitted, period, horizon, bounds, members);
         if (forecast.isEmpty() && method != Method.COMBINATION) {
             forecast = CandidateForecasts.forecast(Method.COMBINATION, fitted, period, horizon, bounds, members);
