@@ -58,13 +58,23 @@ public record ArimaOrder(int p, int d, int q, int seasonalP, int seasonalD, int 
         return p + q + seasonalP + seasonalQ;
     }
 
-    /** ARIMA(p,d,q), followed by (P,D,Q)[m] when the model has a seasonal part, as R prints it. */
+    /**
+     * ARIMA(p,d,q), followed by (P,D,Q)[m] when the model has a seasonal part, and by its constant —
+     * {@code with drift}, {@code with non-zero mean}, {@code with zero mean} (undifferenced, no
+     * constant) — as forecast's {@code arima.string} prints it (from memory).
+     */
     public String label() {
         String base = String.format(Locale.ROOT, "ARIMA(%d,%d,%d)", p, d, q);
         if (period > 1 && seasonalP + seasonalD + seasonalQ > 0) {
             base += String.format(Locale.ROOT, "(%d,%d,%d)[%d]", seasonalP, seasonalD, seasonalQ, period);
         }
-        return base;
+        if (hasDrift()) {
+            return base + " with drift";
+        }
+        if (hasMean()) {
+            return base + " with non-zero mean";
+        }
+        return differences() == 0 ? base + " with zero mean" : base;
     }
 
     ArimaOrder withArma(int newP, int newQ, int newSeasonalP, int newSeasonalQ, boolean newConstant) {
