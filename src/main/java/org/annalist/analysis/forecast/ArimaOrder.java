@@ -59,9 +59,9 @@ public record ArimaOrder(int p, int d, int q, int seasonalP, int seasonalD, int 
     }
 
     /**
-     * ARIMA(p,d,q), followed by (P,D,Q)[m] when the model has a seasonal part, and by its constant —
-     * {@code with drift}, {@code with non-zero mean}, {@code with zero mean} (undifferenced, no
-     * constant) — as forecast's {@code arima.string} prints it (from memory).
+     * ARIMA(p,d,q), followed by (P,D,Q)[m] when the model has a seasonal part, and by its constant,
+     * {@code with drift} or {@code with mean}, as forecast's {@code arima.string} names them (it says
+     * "non-zero mean"; from memory).
      */
     public String label() {
         String base = String.format(Locale.ROOT, "ARIMA(%d,%d,%d)", p, d, q);
@@ -71,10 +71,7 @@ public record ArimaOrder(int p, int d, int q, int seasonalP, int seasonalD, int 
         if (hasDrift()) {
             return base + " with drift";
         }
-        if (hasMean()) {
-            return base + " with non-zero mean";
-        }
-        return differences() == 0 ? base + " with zero mean" : base;
+        return hasMean() ? base + " with mean" : base;
     }
 
     ArimaOrder withArma(int newP, int newQ, int newSeasonalP, int newSeasonalQ, boolean newConstant) {

@@ -44,9 +44,9 @@ class ArimaEdgeCasesTest {
         double[][] zero = fit.paths(new double[][] {new double[5]});
         assertThat(zero[0]).as("a path without shocks is the point forecast")
                 .containsExactly(fit.forecast(5), org.assertj.core.api.Assertions.within(1e-9));
-        assertThat(fit.label()).isEqualTo("ARIMA(1,0,1) with non-zero mean");
+        assertThat(fit.label()).isEqualTo("ARIMA(1,0,1) with mean");
         assertThat(ArimaOrder.of(0, 1, 1, true).label()).isEqualTo("ARIMA(0,1,1) with drift");
-        assertThat(ArimaOrder.of(1, 0, 0, false).label()).isEqualTo("ARIMA(1,0,0) with zero mean");
+        assertThat(ArimaOrder.of(1, 0, 0, false).label()).isEqualTo("ARIMA(1,0,0)");
         assertThat(new ArimaOrder(0, 1, 1, 0, 1, 1, 12, false).label()).isEqualTo("ARIMA(0,1,1)(0,1,1)[12]");
     }
 }
