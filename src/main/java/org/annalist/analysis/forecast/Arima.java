@@ -179,6 +179,32 @@ public final class Arima {
             return out;
         }
 
+        /**
+         * Point forecasts from every origin o = {@code firstOrigin} … n − 1 of {@code y}, 1 … min({@code reach},
+         * n − o) ahead, with this fit's coefficients kept: what {@link #withCoefficients} on the values
+         * before each origin would forecast, from one filter run over {@code y}.
+         *
+         * @return empty when a value is not finite
+         */
+        Optional<double[][]> forecastsFromOrigins(double[] y, int firstOrigin, int reach) {
+            double[] adjusted = new double[y.length];
+            for (int t = 0; t < y.length; t++) {
+                if (!Double.isFinite(y[t])) {
+                    return Optional.empty();
+                }
+                adjusted[t] = y[t] - regression(t + 1);
+            }
+            double[] delta = ArimaPolynomials.differencing(order.d(), order.seasonalD(), order.period());
+            double[][] means = new ArimaKalman(estimate.phi(), estimate.theta(), delta)
+                    .meansFromOrigins(adjusted, firstOrigin, reach);
+            for (int o = 0; o < means.length; o++) {
+                for (int k = 0; k < means[o].length; k++) {
+                    means[o][k] += regression(firstOrigin + o + k + 1);
+                }
+            }
+            return Optional.of(means);
+        }
+
         /** The mean, or the drift times t (1-based), or zero. */
         private double regression(int t) {
             double[] coef = estimate.coef();

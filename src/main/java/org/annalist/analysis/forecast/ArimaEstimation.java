@@ -1,6 +1,7 @@
 package org.annalist.analysis.forecast;
 
 import java.util.Optional;
+import java.util.function.Supplier;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
@@ -38,9 +39,13 @@ final class ArimaEstimation {
      * @param varianceValid whether every diagonal element of the estimates' covariance is non-negative
      *                      (the forecast package refuses the model otherwise); computed on demand, since
      *                      its numerical Hessian costs as much as the search
+     * @param filtered      the Kalman filter run over the values, whose final state the forecasts
+     *                      start from; run on demand for a CSS fit, whose likelihood does not need it
+     *                      (a model search fits dozens of models and forecasts from one)
      */
     record Estimate(double[] coef, double[] phi, double[] theta, double sigma2, double logLik, double value,
-                    double[] residuals, ArimaKalman kalman, java.util.function.BooleanSupplier varianceValid, int nUsed) {
+                    double[] residuals, Supplier<ArimaKalman> filtered, java.util.function.BooleanSupplier varianceValid,
+                    int nUsed) {
 
         Estimate {
             coef = coef.clone();
@@ -48,6 +53,28 @@ final class ArimaEstimation {
             theta = theta.clone();
             residuals = residuals.clone();
         }
+
+        ArimaKalman kalman() {
+            return filtered.get();
+        }
+    }
+
+    /** The filter over {@code values} with the model's polynomials, run once, when first asked for. */
+    private Supplier<ArimaKalman> filteredOnDemand(double[] phi, double[] theta, double[] values) {
+        double[] kept = values.clone();
+        ArimaKalman[] memo = new ArimaKalman[1];
+        return () -> {
+            if (memo[0] == null) {
+                ArimaKalman kalman = new ArimaKalman(phi, theta, delta);
+                kalman.run(kept, null);
+                memo[0] = kalman;
+            }
+            return memo[0];
+        };
+    }
+
+    private static Supplier<ArimaKalman> ready(ArimaKalman kalman) {
+        return () -> kalman;
     }
 
     private final double[] y;
@@ -109,13 +136,11 @@ final class ArimaEstimation {
                     || css.hessian(at).map(h -> varianceValid(h, nUsed, null)).orElse(false);
             double[][] pt = ArimaPolynomials.expand(coef, order, false);
             removeRegression(coef);
-            ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
-            kalman.run(adjusted, null);
             double[] residuals = new double[n];
             double sigma2 = css(adjusted, pt[0], pt[1], ncond, residuals);
             double value = found.get().value();
             return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals,
-                    kalman, valid, nUsed));
+                    filteredOnDemand(pt[0], pt[1], adjusted), valid, nUsed));
         }
         if (method == Arima.Method.CSS_ML) {
             Optional<ArimaOptimiser.Result> found = new ArimaOptimiser(par -> cssObjective(par, ncond), parscale)
@@ -167,8 +192,8 @@ final class ArimaEstimation {
         double[] residuals = new double[n];
         ArimaKalman.Likelihood like = kalman.run(adjusted, residuals);
         double sigma2 = like.ssq() / nUsed;
-        return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals, kalman,
-                valid, nUsed));
+        return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals,
+                ready(kalman), valid, nUsed));
     }
 
     /**
@@ -183,20 +208,20 @@ final class ArimaEstimation {
         }
         double[][] pt = ArimaPolynomials.expand(coef, order, false);
         removeRegression(coef);
-        ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
         double[] residuals = new double[n];
-        ArimaKalman.Likelihood like = kalman.run(adjusted, method == Arima.Method.CSS ? null : residuals);
         if (method == Arima.Method.CSS) {
             int m = order.period();
             int ncond = order.d() + order.seasonalD() * m + order.p() + m * order.seasonalP();
             double sigma2 = css(adjusted, pt[0], pt[1], ncond, residuals);
             double value = 0.5 * Math.log(sigma2);
             return Optional.of(new Estimate(coef, pt[0], pt[1], sigma2, logLik(value, nUsed), value, residuals,
-                    kalman, () -> true, nUsed));
+                    filteredOnDemand(pt[0], pt[1], adjusted), () -> true, nUsed));
         }
+        ArimaKalman kalman = new ArimaKalman(pt[0], pt[1], delta);
+        ArimaKalman.Likelihood like = kalman.run(adjusted, residuals);
         double value = 0.5 * (Math.log(like.ssq() / like.used()) + like.sumLog() / like.used());
         return Optional.of(new Estimate(coef, pt[0], pt[1], like.ssq() / nUsed, logLik(value, nUsed), value,
-                residuals, kalman, () -> true, nUsed));
+                residuals, ready(kalman), () -> true, nUsed));
     }
 
     /** R: −0.5 (2 n.used · value + n.used + n.used log 2π). */
@@ -301,15 +326,19 @@ final class ArimaEstimation {
         double[] resid = residuals != null ? residuals : new double[n];
         double ssq = 0;
         int nu = 0;
-        int p = phi.length;
-        int q = theta.length;
+        // the expanded seasonal polynomials are mostly zeros: (1 − φB)(1 − ΦB¹²) has 2 of its 13 lags
+        int[] arLags = nonZero(phi);
+        int[] maLags = nonZero(theta);
         for (int l = ncond; l < n; l++) {
             double tmp = w[l];
-            for (int j = 0; j < p; j++) {
+            for (int j : arLags) {
                 tmp -= phi[j] * w[l - j - 1];
             }
-            int jmax = Math.min(l - ncond, q);
-            for (int j = 0; j < jmax; j++) {
+            int jmax = l - ncond;
+            for (int j : maLags) {
+                if (j >= jmax) {
+                    break;
+                }
                 tmp -= theta[j] * resid[l - j - 1];
             }
             resid[l] = tmp;
@@ -319,6 +348,18 @@ final class ArimaEstimation {
             }
         }
         return ssq / nu;
+    }
+
+    /** The indices of the coefficients that are not zero, in increasing order. */
+    private static int[] nonZero(double[] coefficients) {
+        int count = 0;
+        int[] lags = new int[coefficients.length];
+        for (int j = 0; j < coefficients.length; j++) {
+            if (coefficients[j] != 0) {
+                lags[count++] = j;
+            }
+        }
+        return java.util.Arrays.copyOf(lags, count);
     }
 
     private void invertMa(double[] par) {

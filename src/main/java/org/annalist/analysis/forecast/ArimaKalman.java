@@ -28,6 +28,8 @@ final class ArimaKalman {
     static final double KAPPA = 1e6;
     /** R's bound above which a one-step variance counts as diffuse and leaves the likelihood out. */
     private static final double DIFFUSE_GAIN = 1e4;
+    /** The relative change of the predicted covariance below which it counts as steady (our choice). */
+    static final double STEADY_TOLERANCE = 1e-12;
 
     /** Sum of squared standardised innovations, sum of log variances, and how many entered. */
     record Likelihood(double ssq, double sumLog, int used) {
@@ -47,6 +49,8 @@ final class ArimaKalman {
     private final double[] anew;
     private final double[] pnew;
     private final double[] mm;
+    /** The previous step's P⁻, for the test of convergence. */
+    private final double[] previous;
     private final double[] gainVector;
     /** The lags k (0-based) with Δ_k ≠ 0: (1 − B)(1 − B¹²) has 3 of 13, so the sums skip the zeros. */
     private final int[] lags;
@@ -66,6 +70,7 @@ final class ArimaKalman {
         anew = new double[rd];
         pnew = new double[rd * rd];
         mm = new double[rd * rd];
+        previous = new double[rd * rd];
         gainVector = new double[rd];
         lags = java.util.stream.IntStream.range(0, d).filter(k -> delta[k] != 0).toArray();
     }
@@ -77,6 +82,36 @@ final class ArimaKalman {
      * @param residuals where to write the standardised innovations vₜ/√Fₜ, or null
      */
     Likelihood run(double[] y, double[] residuals) {
+        return run(y, residuals, y.length, null);
+    }
+
+    /**
+     * Point forecasts (before any regression term) from every origin o = {@code firstOrigin} … n − 1,
+     * 1 … min({@code reach}, n − o) steps ahead, each from the state filtered through the values
+     * before o: what a run over those values followed by {@link #forecast} would give, from one run.
+     */
+    double[][] meansFromOrigins(double[] y, int firstOrigin, int reach) {
+        double[][] means = new double[y.length - firstOrigin][];
+        double[] state = new double[rd];
+        double[] next = new double[rd];
+        run(y, null, firstOrigin, origin -> {
+            double[] m = new double[Math.min(reach, y.length - origin)];
+            System.arraycopy(a, 0, state, 0, rd);
+            for (int k = 0; k < m.length; k++) {
+                transition(state, next);
+                System.arraycopy(next, 0, state, 0, rd);
+                m[k] = observe(state);
+            }
+            means[origin - firstOrigin] = m;
+        });
+        return means;
+    }
+
+    /**
+     * @param firstStop from this step on, {@code beforeStep} is told each step's index before the
+     *                  step's value enters, while {@link #a} holds the state filtered through the earlier values
+     */
+    private Likelihood run(double[] y, double[] residuals, int firstStop, java.util.function.IntConsumer beforeStep) {
         java.util.Arrays.fill(a, 0);
         java.util.Arrays.fill(pnew, 0);
         double[] q0 = GardnerCovariance.of(phi, theta);
@@ -89,10 +124,16 @@ final class ArimaKalman {
         double ssq = 0;
         double sumLog = 0;
         int used = 0;
+        boolean steady = false;
         for (int l = 0; l < y.length; l++) {
+            if (l >= firstStop) {
+                beforeStep.accept(l);
+            }
             predictState();
-            if (l > 0) {
+            if (l > 0 && !steady) {
                 predictCovariance();
+                boolean unchanged = converged();
+                steady = unchanged && l > rd;
             }
             double resid = y[l] - anew[0];
             for (int i : lags) {
@@ -121,13 +162,34 @@ final class ArimaKalman {
             for (int i = 0; i < rd; i++) {
                 a[i] = anew[i] + gainVector[i] * resid / gain;
             }
-            for (int i = 0; i < rd; i++) {
-                for (int j = 0; j < rd; j++) {
-                    pm[i * rd + j] = pnew[i * rd + j] - gainVector[i] * gainVector[j] / gain;
+            if (!steady) {
+                for (int i = 0; i < rd; i++) {
+                    for (int j = 0; j < rd; j++) {
+                        pm[i * rd + j] = pnew[i * rd + j] - gainVector[i] * gainVector[j] / gain;
+                    }
                 }
             }
         }
         return new Likelihood(ssq, sumLog, used);
+    }
+
+    /**
+     * Whether the predicted covariance has stopped changing: then P⁻, the gain and F stay as they
+     * are for every later step, and the filter updates the state alone ([2, §4.3.4]: for a
+     * time-invariant model the covariance converges to the steady-state solution of the Riccati
+     * equation; R's {@code ARIMA_Like} keeps recomputing it). The test compares P⁻ with the previous
+     * step's, kept in {@code previous}, to a relative {@value #STEADY_TOLERANCE}, far below what
+     * changes the likelihood's printed digits.
+     */
+    private boolean converged() {
+        double change = 0;
+        double size = 0;
+        for (int i = 0; i < pnew.length; i++) {
+            change = Math.max(change, Math.abs(pnew[i] - previous[i]));
+            size = Math.max(size, Math.abs(pnew[i]));
+        }
+        System.arraycopy(pnew, 0, previous, 0, pnew.length);
+        return change <= STEADY_TOLERANCE * size;
     }
 
     /**

@@ -91,9 +91,11 @@ final class Backtest {
      * @return empty when the back-test cannot rank the methods: the values before the first origin
      *         give no seasonal naive error to scale by, fewer than two members of the combination
      *         forecast from every origin, or a forecast is not a number
+     * @param forms the members' models searched on the whole span, whose forms the back-test re-estimates
+     * @param reach the most steps ahead forecast from an origin (at least {@code cycle})
      */
-    /** @param reach the most steps ahead forecast from an origin (at least {@code cycle}) */
-    static Optional<Run> run(double[] y, int period, int firstOrigin, int cycle, int reach) {
+    static Optional<Run> run(double[] y, CandidateForecasts.Searched forms, int firstOrigin, int cycle, int reach) {
+        int period = forms.period();
         double[] training = Arrays.copyOf(y, firstOrigin);
         OptionalDouble scale = Accuracy.naiveScale(training, cycle);
         if (scale.isEmpty()) {
@@ -112,9 +114,17 @@ final class Backtest {
         List<Members.Updating> prepared = new ArrayList<>();
         for (int m = 0; m < SINGLE.length; m++) {
             Optional<Members.Updating> member = SINGLE[m] == Outlook.Method.ARIMA && period > MAX_ARIMA_PERIOD
-                    ? Optional.empty() : Members.prepare(SINGLE[m], training, period);
+                    ? Optional.empty() : Members.prepare(SINGLE[m], training, forms);
             available[m] = member.isPresent();
             prepared.add(member.orElse(null));
+        }
+        double[][][] fromOrigins = new double[SINGLE.length][][];
+        for (int m = 0; m < SINGLE.length; m++) {
+            if (available[m]) {
+                Optional<double[][]> f = prepared.get(m).fromOrigins(y, firstOrigin, reach);
+                available[m] = f.isPresent();
+                fromOrigins[m] = f.orElse(null);
+            }
         }
         List<Integer> cycleStarts = new ArrayList<>();
         int at = 0;
@@ -123,15 +133,9 @@ final class Backtest {
             if (h >= cycle) {
                 cycleStarts.add(at); // a whole cycle ahead from this origin: its sum is scored too
             }
-            double[] before = Arrays.copyOf(y, o);
             for (int m = 0; m < SINGLE.length; m++) {
-                if (!available[m]) {
-                    continue;
-                }
-                Optional<double[]> f = prepared.get(m).from(before, h).filter(Members::finite);
-                available[m] = f.isPresent();
-                if (f.isPresent()) {
-                    System.arraycopy(f.get(), 0, forecasts[m], at, h);
+                if (available[m]) {
+                    System.arraycopy(fromOrigins[m][o - firstOrigin], 0, forecasts[m], at, h);
                 }
             }
             for (int k = 0; k < h; k++) {

@@ -24,16 +24,47 @@ final class CandidateForecasts {
     }
 
     /**
-     * @param members the methods the combination averages (those the back-test scored)
-     * @return empty when the method cannot be fitted to {@code y}
+     * The members' models chosen on one span of values — ETS by AICc, ARIMA by the stepwise search
+     * (for seasonal periods up to {@value Backtest#MAX_ARIMA_PERIOD}), Theta — each searched once: the
+     * outlook forecasts from these fits, and its back-test re-estimates their forms on the values
+     * before its first origin ({@link Members}).
      */
+    record Searched(double[] y, int period, Optional<EtsModel.Fit> ets, Optional<Arima.Fit> arima,
+                    Optional<Theta.Fit> theta) {
+
+        Searched {
+            y = y.clone();
+        }
+
+        @Override
+        public double[] y() {
+            return y.clone();
+        }
+
+        static Searched on(double[] y, int period) {
+            return new Searched(y, period, EtsSelection.select(y, period).map(EtsSelection.Choice::best),
+                    period <= Backtest.MAX_ARIMA_PERIOD ? AutoArima.fitConditional(y, period) : Optional.empty(),
+                    Theta.fit(y, period));
+        }
+    }
+
+    /** {@link #forecast(Outlook.Method, Searched, int, Outlook.Bounds, List)} with the models searched on {@code y}. */
     static Optional<Outlook.Forecast> forecast(Outlook.Method method, double[] y, int period, int horizon,
+                                               Outlook.Bounds bounds, List<Outlook.Method> members) {
+        return forecast(method, Searched.on(y, period), horizon, bounds, members);
+    }
+
+    /**
+     * @param members the methods the combination averages (those the back-test scored)
+     * @return empty when the method cannot be fitted to the searched values
+     */
+    static Optional<Outlook.Forecast> forecast(Outlook.Method method, Searched searched, int horizon,
                                                Outlook.Bounds bounds, List<Outlook.Method> members) {
         double[][] shocks = Shocks.forHorizon(horizon);
         if (method == Outlook.Method.COMBINATION) {
-            return combination(y, period, horizon, shocks, bounds, members);
+            return combination(searched, horizon, shocks, bounds, members);
         }
-        return single(method, y, period, horizon, shocks).map(m -> m.forecast(bounds));
+        return single(method, searched, horizon, shocks).map(m -> m.forecast(bounds));
     }
 
     /** A single method's fit: its model, its point forecasts, closed-form variances where it has them, and its paths. */
@@ -45,17 +76,17 @@ final class CandidateForecasts {
         }
     }
 
-    private static Optional<Fitted> single(Outlook.Method method, double[] y, int period, int horizon,
-                                           double[][] shocks) {
-        int cycle = Math.max(1, period);
+    private static Optional<Fitted> single(Outlook.Method method, Searched searched, int horizon, double[][] shocks) {
+        int cycle = Math.max(1, searched.period());
+        double[] y = searched.y();
         return switch (method) {
-            case ETS -> EtsSelection.select(y, period).map(EtsSelection.Choice::best).map(fit -> new Fitted(
+            case ETS -> searched.ets().map(fit -> new Fitted(
                     Outlook.Model.single(Outlook.Method.ETS, Optional.of(fit.model().label()), false), fit.forecast(horizon),
                     fit.hasAnalyticIntervals() ? Optional.of(fit.predict(horizon)) : Optional.empty(), fit.paths(shocks)));
-            case ARIMA -> AutoArima.fitConditional(y, period).map(fit -> new Fitted(
+            case ARIMA -> searched.arima().map(fit -> new Fitted(
                     Outlook.Model.single(Outlook.Method.ARIMA, Optional.of(fit.label()), false), fit.forecast(horizon),
                     Optional.of(fit.predict(horizon)), fit.paths(shocks)));
-            case THETA -> Theta.fit(y, period).map(theta -> new Fitted(
+            case THETA -> searched.theta().map(theta -> new Fitted(
                     Outlook.Model.single(Outlook.Method.THETA, Optional.empty(), theta.deseasonalised()),
                     theta.forecast(horizon), Optional.of(theta.predict(horizon)), theta.paths(shocks)));
             case SEASONAL_NAIVE -> y.length <= cycle ? Optional.empty() : Optional.of(new Fitted(
@@ -70,11 +101,11 @@ final class CandidateForecasts {
      * The mean of the members' forecasts, and of their paths under the same shocks; a member that
      * cannot be fitted to all values is left out, as long as two remain.
      */
-    private static Optional<Outlook.Forecast> combination(double[] y, int period, int horizon, double[][] shocks,
+    private static Optional<Outlook.Forecast> combination(Searched searched, int horizon, double[][] shocks,
                                                           Outlook.Bounds bounds, List<Outlook.Method> members) {
         List<Fitted> fitted = new ArrayList<>();
         for (Outlook.Method m : members) {
-            single(m, y, period, horizon, shocks).filter(f -> Members.finite(f.mean())).ifPresent(fitted::add);
+            single(m, searched, horizon, shocks).filter(f -> Members.finite(f.mean())).ifPresent(fitted::add);
         }
         if (fitted.size() < 2) {
             return Optional.empty();

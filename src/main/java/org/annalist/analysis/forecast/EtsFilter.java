@@ -75,6 +75,45 @@ final class EtsFilter {
                 state, n));
     }
 
+    /**
+     * Point forecasts from every origin o = {@code firstOrigin} … n − 1 of {@code y}, 1 … min({@code reach},
+     * n − o) ahead, with the parameters {@code p} kept: what {@link #filter} on the values before each
+     * origin followed by {@link #forecastFrom} would give, from one pass.
+     *
+     * @return empty when a one-step forecast turns non-finite, as {@link #filter} would at some origin
+     */
+    static Optional<double[][]> forecastsFromOrigins(EtsModel model, double[] y, EtsModel.Parameters p,
+                                                     int firstOrigin, int reach) {
+        int m = model.seasonSlots();
+        double[] initial = p.initial();
+        double[] state = new double[2 + m];
+        state[0] = initial[0];
+        state[1] = model.trend() != EtsModel.Trend.NONE ? initial[1] : 0;
+        if (model.season() != EtsModel.Season.NONE) {
+            System.arraycopy(initial, model.firstSeasonIndex(), state, 2, m);
+        }
+        double phi = model.damped() ? p.phi() : 1;
+        double[] lb = new double[2];
+        double[] s = new double[m];
+        double[][] forecasts = new double[y.length - firstOrigin][];
+        for (int t = 0; t < y.length; t++) {
+            if (t >= firstOrigin) {
+                forecasts[t - firstOrigin] = forecastFrom(model, state, phi, Math.min(reach, y.length - t));
+            }
+            System.arraycopy(state, 2, s, 0, m);
+            if (!Double.isFinite(point(model, state[0], state[1], s, phi, 1))) {
+                return Optional.empty();
+            }
+            lb[0] = state[0];
+            lb[1] = state[1];
+            advance(model, lb, s, phi, p, y[t]);
+            state[0] = lb[0];
+            state[1] = lb[1];
+            System.arraycopy(s, 0, state, 2, m);
+        }
+        return Optional.of(forecasts);
+    }
+
     /** The criterion of {@link #filter} alone, for {@code p}. */
     static double criterion(EtsModel model, double[] y, EtsModel.Parameters p) {
         return criterion(model, y, p.alpha(), p.beta(), p.gamma(), p.phi(), p.initial());

@@ -303,20 +303,22 @@ public final class Outlook {
         }
         int origins = Backtest.origins(y.length, period);
         int reach = Math.max(cycle, Math.min(horizon, origins));
+        CandidateForecasts.Searched onAll = CandidateForecasts.Searched.on(y, period);
         Optional<Backtest.Run> all = Backtest.isLongEnough(origins, period)
-                ? Backtest.run(y, period, y.length - origins, cycle, reach) : Optional.empty();
+                ? Backtest.run(y, onAll, y.length - origins, cycle, reach) : Optional.empty();
         Span span = Span.ALL;
         Optional<Backtest.Run> run = all;
-        double[] fitted = y;
+        CandidateForecasts.Searched fitted = onAll;
         if (regimeStart > 0 && regimeStart < y.length) {
             double[] regime = Arrays.copyOfRange(y, regimeStart, y.length);
+            // the regime is back-tested with the forms found on all values, so the two spans differ in their values only
             Optional<Backtest.Run> own = all.isPresent() && Backtest.origins(regime.length, period) >= origins
-                    ? Backtest.run(regime, period, regime.length - origins, cycle, reach) : Optional.empty();
+                    ? Backtest.run(regime, onAll, regime.length - origins, cycle, reach) : Optional.empty();
             span = own.map(o -> weigh(regimeStart, all.get(), o))
                     .orElse(new Span(0, Span.Basis.REGIME_TOO_SHORT, Double.NaN, Double.NaN));
             if (span.basis() == Span.Basis.REGIME_CLEARLY_BETTER) {
                 run = own;
-                fitted = regime;
+                fitted = CandidateForecasts.Searched.on(regime, period);
             }
         }
         Choice choice = run.map(Outlook::choose).orElse(new Choice(Choice.Basis.COMBINATION_WITHOUT_BACKTEST, 0,
@@ -324,12 +326,12 @@ public final class Outlook {
         Method method = choice.basis() == Choice.Basis.SINGLE_CLEARLY_BETTER ? choice.bestSingle().orElseThrow().method()
                 : Method.COMBINATION;
         List<Method> members = run.map(Backtest.Run::combined).orElse(Backtest.combinable(period));
-        Optional<Forecast> forecast = CandidateForecasts.forecast(method, fitted, period, horizon, bounds, members);
+        Optional<Forecast> forecast = CandidateForecasts.forecast(method, fitted, horizon, bounds, members);
         if (forecast.isEmpty() && method != Method.COMBINATION) {
-            forecast = CandidateForecasts.forecast(Method.COMBINATION, fitted, period, horizon, bounds, members);
+            forecast = CandidateForecasts.forecast(Method.COMBINATION, fitted, horizon, bounds, members);
         }
         if (forecast.isEmpty()) {
-            forecast = CandidateForecasts.forecast(Method.SEASONAL_NAIVE, fitted, period, horizon, bounds, members);
+            forecast = CandidateForecasts.forecast(Method.SEASONAL_NAIVE, fitted, horizon, bounds, members);
         }
         if (forecast.isEmpty()) {
             return Optional.empty();
@@ -340,7 +342,7 @@ public final class Outlook {
         double[] widening = ones(horizon);
         Optional<Score> own = scores.stream().filter(s -> s.method() == chosen).findFirst();
         if (own.isPresent()) {
-            boolean positive = bounds.lower() >= 0 && Arrays.stream(fitted).allMatch(v -> v > 0);
+            boolean positive = bounds.lower() >= 0 && Arrays.stream(fitted.y()).allMatch(v -> v > 0);
             Widening.Widened w = Widening.apply(f, own.get().errors(), positive, bounds);
             f = w.forecast();
             widening = w.factors();

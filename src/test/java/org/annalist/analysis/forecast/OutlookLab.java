@@ -26,8 +26,9 @@ public final class OutlookLab {
                 double margin = Double.parseDouble(variant.substring(6)) / 100;
                 int cycle = Math.max(1, period);
                 int origins = Backtest.origins(y.length, period);
+                CandidateForecasts.Searched searched = CandidateForecasts.Searched.on(y, period);
                 Optional<Backtest.Run> run = Backtest.isLongEnough(origins, period)
-                        ? Backtest.run(y, period, y.length - origins, cycle, Math.max(cycle, Math.min(h, origins)))
+                        ? Backtest.run(y, searched, y.length - origins, cycle, Math.max(cycle, Math.min(h, origins)))
                         : Optional.empty();
                 Outlook.Method method = Outlook.Method.COMBINATION;
                 if (run.isPresent()) {
@@ -38,7 +39,7 @@ public final class OutlookLab {
                         method = best.method();
                     }
                 }
-                yield CandidateForecasts.forecast(method, y, period, h, bounds, Backtest.COMBINABLE);
+                yield CandidateForecasts.forecast(method, searched, h, bounds, Backtest.COMBINABLE);
             }
         };
         return f.map(x -> new double[][] {x.mean(), x.lo80(), x.hi80(), x.lo95(), x.hi95()});
