@@ -47,11 +47,8 @@ final class BoundedQuasiNewton {
      * @param start          strictly inside the box
      * @param relativeChange stop when an iteration improves the value by less than this, relative
      * @param maxIterations  upper bound on BFGS iterations
-     * @param firstStepLimit the largest move of any variable, on the logistic scale, while no
-     *                       curvature is known yet; a likelihood with several basins is explored
-     *                       from the same start by different limits
      */
-    Minimum minimise(double[] start, double relativeChange, int maxIterations, double firstStepLimit) {
+    Minimum minimise(double[] start, double relativeChange, int maxIterations) {
         int n = start.length;
         double[] u = new double[n];
         for (int i = 0; i < n; i++) {
@@ -65,7 +62,6 @@ final class BoundedQuasiNewton {
         for (int iteration = 0; iteration < maxIterations; iteration++) {
             double[] direction = new double[n];
             double slope = 0;
-            boolean unscaled = iteration == 0;
             for (int i = 0; i < n; i++) {
                 for (int j = 0; j < n; j++) {
                     direction[i] -= inverseHessian[i][j] * gradient[j];
@@ -74,7 +70,6 @@ final class BoundedQuasiNewton {
             }
             if (slope >= 0) { // the curvature estimate lost positive definiteness: restart on the gradient
                 inverseHessian = identity(n);
-                unscaled = true;
                 slope = 0;
                 for (int i = 0; i < n; i++) {
                     direction[i] = -gradient[i];
@@ -84,13 +79,7 @@ final class BoundedQuasiNewton {
                     break;
                 }
             }
-            // while the curvature estimate is the identity, a step may move no variable by more than
-            // firstStepLimit on the logistic scale (unlimited when infinite)
-            double largest = 0;
-            for (double d : direction) {
-                largest = Math.max(largest, Math.abs(d));
-            }
-            double step = unscaled ? Math.min(1, firstStepLimit / largest) : 1;
+            double step = 1;
             double[] trial = new double[n];
             double trialValue = Double.NaN;
             boolean accepted = false;
