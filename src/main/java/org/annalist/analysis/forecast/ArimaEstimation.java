@@ -84,6 +84,8 @@ final class ArimaEstimation {
     private final int narma;
     private final int npar;
     private final double[] adjusted;
+    /** Without a regression term, the differenced values the conditional sum of squares works on. */
+    private double[] differencedOnce;
 
     ArimaEstimation(double[] y, ArimaOrder order) {
         this.y = y;
@@ -311,17 +313,14 @@ final class ArimaEstimation {
      */
     private double css(double[] x, double[] phi, double[] theta, int ncond, double[] residuals) {
         int n = x.length;
-        double[] w = x.clone();
-        for (int i = 0; i < order.d(); i++) {
-            for (int l = n - 1; l > 0; l--) {
-                w[l] -= w[l - 1];
+        double[] w;
+        if (xreg == null) { // the values do not depend on the coefficients: difference them once
+            if (differencedOnce == null) {
+                differencedOnce = differenced(x);
             }
-        }
-        int ns = order.period();
-        for (int i = 0; i < order.seasonalD(); i++) {
-            for (int l = n - 1; l >= ns; l--) {
-                w[l] -= w[l - ns];
-            }
+            w = differencedOnce;
+        } else {
+            w = differenced(x);
         }
         double[] resid = residuals != null ? residuals : new double[n];
         double ssq = 0;
@@ -348,6 +347,24 @@ final class ArimaEstimation {
             }
         }
         return ssq / nu;
+    }
+
+    /** {@code x} differenced d times at lag 1 and D times at the seasonal lag, in place of a copy. */
+    private double[] differenced(double[] x) {
+        int n = x.length;
+        double[] w = x.clone();
+        for (int i = 0; i < order.d(); i++) {
+            for (int l = n - 1; l > 0; l--) {
+                w[l] -= w[l - 1];
+            }
+        }
+        int ns = order.period();
+        for (int i = 0; i < order.seasonalD(); i++) {
+            for (int l = n - 1; l >= ns; l--) {
+                w[l] -= w[l - ns];
+            }
+        }
+        return w;
     }
 
     /** The indices of the coefficients that are not zero, in increasing order. */

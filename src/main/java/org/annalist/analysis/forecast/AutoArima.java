@@ -309,12 +309,10 @@ public final class AutoArima {
         int nStar = fit.effectiveLength();
         double aic = css ? offset + nStar * Math.log(fit.rawSigma2()) + 2 * k : fit.aic();
         double ic = n <= 3 ? aic : aic + 2.0 * k * (k + 1) / (nStar - k - 1);
-        if (Double.isNaN(ic) || fit.smallestRoot() < ROOT_MARGIN) {
-            ic = Double.POSITIVE_INFINITY;
-        }
-        // the variance check only matters where the model would be chosen (it cannot make a worse one
-        // better) or where the criterion orders the ML refits: checked there, as R checks every model
-        if ((ic < bestIc || css) && !fit.variancesValid()) {
+        // the root and variance checks only matter where the model would be chosen (they cannot make a
+        // worse one better) or where the criterion orders the ML refits: checked there, as R checks every model
+        boolean matters = ic < bestIc || css && refit;
+        if (Double.isNaN(ic) || matters && (fit.smallestRoot() < ROOT_MARGIN || !fit.variancesValid())) {
             ic = Double.POSITIVE_INFINITY;
         }
         return new Tried(order, ic, fit);
