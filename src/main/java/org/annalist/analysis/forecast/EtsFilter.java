@@ -144,6 +144,7 @@ final class EtsFilter {
         double betaStar = beta / alpha;
         double sumE2 = 0;
         double sumLogF = 0;
+        double productF = 1; // Σ log|ŷ| as the log of a running product, taken before it can overflow
         for (double v : y) {
             int oldestSlot = head == 0 ? m - 1 : head - 1;
             double phib = trend == EtsModel.Trend.NONE ? 0 : phi * b;
@@ -157,7 +158,16 @@ final class EtsFilter {
             double e = error == EtsModel.Error.ADDITIVE ? v - f : (v - f) / f;
             sumE2 += e * e;
             if (error == EtsModel.Error.MULTIPLICATIVE) {
-                sumLogF += Math.log(Math.abs(f));
+                double size = Math.abs(f);
+                if (size > 1e100 || size < 1e-100) {
+                    sumLogF += Math.log(size);
+                } else {
+                    productF *= size;
+                    if (productF > 1e150 || productF < 1e-150) {
+                        sumLogF += Math.log(productF);
+                        productF = 1;
+                    }
+                }
             }
             // [2] Table 2.3: the state equations, written with the observed value as R's update() does [3]
             double pp = season == EtsModel.Season.NONE ? v : season == EtsModel.Season.ADDITIVE ? v - oldest : v / oldest;
@@ -172,6 +182,7 @@ final class EtsFilter {
             }
             l = newL;
         }
+        sumLogF += Math.log(productF);
         return y.length * Math.log(sumE2) + 2 * sumLogF; // [2] §5.2: n log(Σe²) + 2 Σ log|ŷ|
     }
 

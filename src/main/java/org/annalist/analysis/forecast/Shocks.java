@@ -17,9 +17,25 @@ final class Shocks {
     private Shocks() {
     }
 
-    /** {@value #PATHS} paths × h steps of the outlook's draws. */
+    /** The horizons whose draws are kept once made: the outlook's usual ones, a few hundred kilobytes each. */
+    private static final int KEPT_HORIZONS = 60;
+    private static final java.util.concurrent.atomic.AtomicReferenceArray<double[][]> KEPT =
+            new java.util.concurrent.atomic.AtomicReferenceArray<>(KEPT_HORIZONS + 1);
+
+    /**
+     * {@value #PATHS} paths × h steps of the outlook's draws, made once per horizon up to
+     * {@value #KEPT_HORIZONS} and shared: the caller must only read them.
+     */
     static double[][] forHorizon(int h) {
-        return standardNormals(PATHS, h, SEED);
+        if (h > KEPT_HORIZONS) {
+            return standardNormals(PATHS, h, SEED);
+        }
+        double[][] kept = KEPT.get(h);
+        if (kept == null) {
+            kept = standardNormals(PATHS, h, SEED);
+            KEPT.compareAndSet(h, null, kept);
+        }
+        return kept;
     }
 
     /** Standard normal draws, row by row, from {@code seed}. */
