@@ -46,8 +46,12 @@ final class EtsEstimation {
     private static final double STATE_RANGE = 10;
     /** The smallest seasonal factor the start divides by when it adjusts the first seasons: a guard against a factor near zero. */
     private static final double ADJUSTMENT_FLOOR = 1e-2;
-    /** The search stops when an iteration improves the criterion by less than this, relative. */
-    private static final double RELATIVE_CHANGE = 1e-10;
+    /**
+     * The search stops when an iteration improves the criterion by less than this, relative: about
+     * R's {@code optim} default, √ε ≈ 1.5·10⁻⁸, which the forecast package's {@code ets} keeps
+     * (from memory).
+     */
+    private static final double RELATIVE_CHANGE = 1e-8;
     /** The most quasi-Newton iterations per search. */
     private static final int MAX_ITERATIONS = 500;
     private EtsEstimation() {
