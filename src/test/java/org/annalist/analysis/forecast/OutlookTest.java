@@ -32,13 +32,14 @@ class OutlookTest {
     /**
      * Eight public series with the last two seasons held out (forecast_accuracy_holdout8.csv, made by
      * make-holdout8.R with R 4.2.2 and forecast 8.20). The goal is a mean MASE at most R's automatic
-     * ets() (1.084) and the mean of R's ets, auto.arima and thetaf (1.090); measured: 1.147, behind on
-     * USAccDeaths (0.702: the back-test, with two years before it, picks the seasonal naive rule; R
-     * 0.431) and JohnsonJohnson (2.217 against 1.856). This pins that the outlook stays within 10 % of
-     * R's ets while that gap is open.
+     * ets() (1.084 over the eight rows); the mean of the eight rows' MASE of the mean of R's ets,
+     * auto.arima and thetaf is 1.214. Measured in December 2026: 1.128, ahead of that mean of three,
+     * behind ets on USAccDeaths (0.609 against 0.431, two years of training values) and JohnsonJohnson
+     * (2.217 against 1.856). This pins that the outlook stays within 5 % of R's ets and below the mean
+     * of three while that gap is open.
      */
     @Test
-    void onEightPublicSeriesTheOutlookStaysWithinTenPercentOfRsEts() {
+    void onEightPublicSeriesTheOutlookStaysWithinFivePercentOfRsEtsAndBelowTheMeanOfThree() {
         double ours = 0;
         double ets = 0;
         double mean3 = 0;
@@ -54,7 +55,8 @@ class OutlookTest {
             ets += split.rValue("ets_MASE") / AgainstR.EIGHT.length;
             mean3 += split.rValue("mean3_MASE") / AgainstR.EIGHT.length;
         }
-        assertThat(ours).as("%s; R's mean of three %.3f", each, mean3).isLessThanOrEqualTo(1.10 * ets);
+        assertThat(ours).as("%s; R's mean of three %.3f", each, mean3).isLessThanOrEqualTo(1.05 * ets)
+                .isLessThan(mean3);
     }
 
     @Test
