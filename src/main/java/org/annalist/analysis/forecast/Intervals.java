@@ -78,4 +78,19 @@ final class Intervals {
         }
         return q;
     }
+
+    /**
+     * The quantile a future error stays below with probability at least {@code level}, from
+     * {@code x}, errors of the same kind: the ⌈(n + 1)·level⌉-th smallest of the n values, the split
+     * conformal prediction quantile (Lei, G'Sell, Rinaldo, Tibshirani &amp; Wasserman 2018,
+     * Distribution-free predictive inference for regression, <i>J. Amer. Statist. Assoc.</i>
+     * 113(523), 1094–1111, §2.2, from memory), the largest when that rank exceeds n. The plain sample
+     * quantile of a few errors is, on average, exceeded by a new one more often than 1 − level.
+     */
+    static double predictive(double[] x, double level) {
+        double[] sorted = x.clone();
+        Arrays.sort(sorted);
+        int rank = (int) Math.ceil((sorted.length + 1) * level);
+        return sorted[Math.min(sorted.length, rank) - 1];
+    }
 }

@@ -135,7 +135,7 @@ final class Widening {
         if (n < POOLED_PAIRS) {
             return 1;
         }
-        double q = Intervals.quantiles(Arrays.copyOf(ratios, n), level)[0];
+        double q = Intervals.predictive(Arrays.copyOf(ratios, n), level);
         return Double.isFinite(q) && q > 1 ? q : 1;
     }
 

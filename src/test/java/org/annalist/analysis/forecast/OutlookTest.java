@@ -205,6 +205,18 @@ class OutlookTest {
         assertThat(Intervals.quantiles(x, 0.1, 0.5, 0.975)).containsExactly(new double[] {1.9, 5.5, 9.775}, within(1e-12));
     }
 
+    /**
+     * The split conformal quantile (Lei et al. 2018, §2.2): of n = 10 values the ⌈11·0.8⌉ = 9th smallest
+     * for 80 %, and the largest for 95 %, where ⌈11·0.95⌉ = 11 exceeds n (arithmetic of the definition).
+     */
+    @Test
+    void predictiveQuantilesTakeTheConformalRank() {
+        double[] x = {10, 9, 8, 7, 6, 5, 4, 3, 2, 1};
+        assertThat(Intervals.predictive(x, 0.80)).isEqualTo(9);
+        assertThat(Intervals.predictive(x, 0.95)).isEqualTo(10);
+        assertThat(Intervals.predictive(new double[] {3, 1, 2, 4}, 0.5)).isEqualTo(3); // ⌈5·0.5⌉ = 3rd
+    }
+
     /** Seasonal random walk: variance σ²(⌊(h − 1)/m⌋ + 1) (Hyndman &amp; Athanasopoulos 2021, Table 5.2). */
     @Test
     void seasonalNaiveVarianceStepsUpEachCycle() {
