@@ -142,7 +142,7 @@ public final class Analyst {
                 horizon);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
+                IndicatorsFindings.of(latest, measured, series), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
                 outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
 
