@@ -160,10 +160,18 @@ class HostileInputPropertyTest {
             }
             case TEMPLATE -> {
                 Path templates = Files.createDirectories(in.resolve("templates"));
+                Files.copy(Path.of("src/main/resources/org/annalist/render/fonts/DejaVuSans.ttf"), in.resolve("outside.ttf"));
                 for (String name : List.of("brief.ftlx", "brief.css", "multi.ftlx")) {
                     Files.copy(Path.of("report-templates", name), templates.resolve(name));
                 }
-                if (random.nextInt(4) == 0) {
+                int which = random.nextInt(8);
+                if (which == 0) {
+                    // a template that is a link leading out of its folder, or nowhere
+                    Path ftlx = templates.resolve("brief.ftlx");
+                    Files.delete(ftlx);
+                    Files.createSymbolicLink(ftlx, random.nextBoolean() ? in.resolve("outside.csv") : in.resolve("gone.ftlx"));
+                    applied.add("brief.ftlx a link out of the folder");
+                } else if (which <= 2) {
                     Path css = templates.resolve("brief.css");
                     Files.writeString(css, HostileMutations.css(Files.readString(css), random, applied));
                 } else {

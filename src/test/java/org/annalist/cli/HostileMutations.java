@@ -279,10 +279,12 @@ final class HostileMutations {
         return text.toString();
     }
 
-    /** One edit of the bundled style sheet: a URL outside the folder, or a broken rule. */
+    /** One edit of the bundled style sheet: a URL outside the folder (a font there is {@code ../outside.ttf}), or a broken rule. */
     static String css(String good, Random random, List<String> applied) {
         String edit = new String[] {"@import url(\"file:///etc/passwd\");\n", "body { background: url(\"http://127.0.0.1:9/b.png\") }\n",
-            "@font-face { font-family: x; src: url(\"/dev/zero\") }\n", "body { color: \n", "}}}{{{\n"}[random.nextInt(5)];
+            "@font-face { font-family: x; src: url(\"/dev/zero\") }\nbody { font-family: x }\n",
+            "@font-face { font-family: x; src: url(\"../outside.ttf\") }\nbody, p, td { font-family: x !important }\n",
+            "body { color: \n", "}}}{{{\n"}[random.nextInt(6)];
         applied.add("css: " + printable(edit.strip()));
         return edit + good;
     }
