@@ -303,8 +303,17 @@ public final class TemplateEngine {
 
         TemplateProblem(String template, TemplateException cause) {
             super(template + ":" + cause.getLineNumber() + ":" + cause.getColumnNumber() + ": "
-                    + cause.getMessageWithoutStackTop().lines().findFirst().orElse("template error")
-                    + refused(cause).map(r -> " " + r.getMessage()).orElse(""), cause);
+                    + refused(cause).filter(r -> !firstLine(cause).contains(r.getMessage()))
+                    .map(r -> firstLine(cause) + " " + r.getMessage()).orElse(firstLine(cause)), cause);
+        }
+
+        /** The message's first line, and the second where the first only leads up to it ("… failed (…):"). */
+        private static String firstLine(TemplateException cause) {
+            java.util.List<String> lines = cause.getMessageWithoutStackTop().lines().filter(l -> !l.isBlank()).limit(2).toList();
+            if (lines.isEmpty()) {
+                return "template error";
+            }
+            return lines.get(0).endsWith(":") && lines.size() > 1 ? lines.get(0) + " " + lines.get(1).strip() : lines.get(0);
         }
 
         /** The refusal of a file the template includes, which FreeMarker reports only as its cause. */
