@@ -192,7 +192,21 @@ class HostileInputPropertyTest {
                 .filter(p -> p.getType() == MemoryType.HEAP && !p.getName().contains("Eden")).toList();
         System.gc();
         heapPools.forEach(MemoryPoolMXBean::resetPeakUsage);
+        if (Boolean.getBoolean("annalist.hostile.keep")) {
+            // for a failure's replay: the case's files stay where they can be looked at
+            Path kept = Path.of(System.getProperty("java.io.tmpdir"), "annalist-hostile-" + seed);
+            try (Stream<Path> walk = Files.walk(dir)) {
+                for (Path p : walk.filter(Files::isRegularFile).toList()) {
+                    Path copy = kept.resolve(dir.relativize(p).toString());
+                    Files.createDirectories(copy.getParent());
+                    Files.copy(p, copy, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+                }
+            }
+            System.out.println("case files kept in " + kept + "; command: " + String.join(" ", args));
+        }
+        long started = System.nanoTime();
         Run run = Run.of(args.toArray(String[]::new));
+        long millis = (System.nanoTime() - started) / 1_000_000;
         long heap = heapPools.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
         Map<Path, String> after = tree(dir);
 
@@ -200,7 +214,8 @@ class HostileInputPropertyTest {
                 + " " + applied + ", command " + String.join(" ", args).replace(dir.toString(), "CASE") + "\nerr: "
                 + run.err() + "\nout: " + tail(run.out());
         if (Boolean.getBoolean("annalist.hostile.verbose")) {
-            System.out.println("case " + c + " " + kind + " exit " + run.exitCode() + " heap " + (heap >> 20) + " MB " + applied + " " + run.err().lines().findFirst().orElse(""));
+            System.out.println("case " + c + " " + kind + " exit " + run.exitCode() + " heap " + (heap >> 20) + " MB " + millis + " ms "
+                    + applied + " " + run.err().lines().findFirst().orElse(""));
         }
         assertThat(run.exitCode()).as(label).isIn(kind == Kind.BATCH ? List.of(0, 2, 3) : List.of(0, 2));
         assertThat(run.out() + run.err()).as(label).doesNotContain("\tat ").doesNotContainPattern(CLASS_NAME);
