@@ -369,46 +369,6 @@ public final class SeriesFileReader {
             return grown;
         }
 
-        /**
-         * A value cut off from the others by more missing periods than the series has values, and by
-         * more than ten years, is an error at its line: a mistyped year (2417 for 2017) would
-         * otherwise make a series of centuries, nearly all missing, whose latest period is the typo.
-         * The values on the side with fewer of them are the stray ones. Our rule (no source).
-         */
-        private void refuseStrayPeriods(ProblemLog log) {
-            int first = (int) (lowest - base);
-            int last = (int) (highest - base);
-            int count = 0;
-            int previous = -1;
-            int widest = 0;
-            int before = -1;
-            int after = -1;
-            for (int i = first; i <= last; i++) {
-                if (stored[i]) {
-                    if (previous >= 0 && i - previous - 1 > widest) {
-                        widest = i - previous - 1;
-                        before = previous;
-                        after = i;
-                    }
-                    previous = i;
-                    count++;
-                }
-            }
-            if (widest <= count || widest <= 10 * frequency.periodsPerYear()) {
-                return;
-            }
-            int valuesBefore = 0;
-            for (int i = first; i <= before; i++) {
-                valuesBefore += stored[i] ? 1 : 0;
-            }
-            boolean strayBefore = valuesBefore <= count - valuesBefore;
-            int stray = strayBefore ? before : after;
-            int near = strayBefore ? after : before;
-            log.error(lines[stray], 0, "period " + new Period(frequency, base + stray).label() + " of series '" + name
-                    + "' is " + widest + " missing periods away from its other values (next: " + new Period(frequency, base + near).label()
-                    + "), more than the " + count + " values the series holds; expected periods near the others (a mistyped year?)");
-        }
-
         Optional<Series> snapshot(ProblemLog log) {
             if (!anyValue) {
                 log.warn(0, 0, "series '" + name + "' has no values and was left out");
@@ -417,7 +377,7 @@ public final class SeriesFileReader {
             if (firstOutOfOrderLine > 0) {
                 log.warn(firstOutOfOrderLine, 0, "rows of series '" + name + "' are not in time order; sorted them");
             }
-            refuseStrayPeriods(log);
+            StrayPeriods.refuse(name, frequency, base, (int) (lowest - base), (int) (highest - base), stored, lines, log);
             int first = (int) (lowest - base);
             int size = (int) (highest - lowest + 1);
             double[] span = new double[size];

@@ -30,7 +30,8 @@ import org.junit.jupiter.api.io.TempDir;
  * files edited by {@link HostileMutations} (lines deleted, doubled, swapped; bytes flipped; delimiters,
  * quotes, NULs, huge numbers, byte order marks, mixed line ends; empty files, binary junk; specs with
  * unknown keys, wrong types, paths leading out of their folder, aliases, huge lists; templates with
- * unclosed directives, unknown variables, endless lists, images and includes outside their folder) —
+ * unclosed directives, unknown variables, endless lists, images, fonts and includes outside their
+ * folder, a template that is a link leading out) —
  * the real command line, run in-process through {@link Main#run}:
  * <ul>
  * <li>ends with exit 0 or 2 ({@code batch} also 3, when some of its briefs fail), never 1;</li>
@@ -49,8 +50,9 @@ import org.junit.jupiter.api.io.TempDir;
  * properties, passed on by Maven):
  * {@code mvn -B -o test -Dtest=HostileInputPropertyTest -Dannalist.hostile.seed=7 -Dannalist.hostile.cases=500};
  * {@code -Dannalist.hostile.verbose=true} prints each case's edits, exit code, heap and first error
- * line. Case {@code c} of seed {@code S} is case 0 of seed {@code S + c}, so a failure (its message
- * gives the seed) is replayed alone.
+ * line and time; {@code -Dannalist.hostile.keep=true} copies each case's files to
+ * {@code java.io.tmpdir/annalist-hostile-SEED}. Case {@code c} of seed {@code S} is case 0 of seed
+ * {@code S + c}, so a failure (its message gives the seed) is replayed alone.
  */
 class HostileInputPropertyTest {
 
@@ -60,8 +62,9 @@ class HostileInputPropertyTest {
      * The heap a case may hold: the sum of the peaks, over the case, of the heap's pools other than
      * the young generation's eden (so what outlived a young collection, and every large array, which
      * the collector places in the old pool directly), after a full collection before the case. A
-     * brief of these files holds under 200 MB (the most seen: 183 MB, a template writing 8 MB of XHTML); an input read into memory without limit, as
-     * {@code /dev/zero} once was, holds gigabytes. The bound is from the runs of this test (no source).
+     * brief of these files holds under 200 MB (the most seen: 192 MB, a template writing 8 MB of
+     * XHTML); an input read into memory without limit, as {@code /dev/zero} once was, holds
+     * gigabytes. The bound is from the runs of this test (no source).
      */
     static final long HEAP_BOUND_BYTES = 512L << 20;
 
