@@ -47,14 +47,30 @@ public final class OutputFiles {
      * @param inputs the files the run reads, which an output may not replace
      */
     static void write(Path target, byte[] bytes, List<Path> inputs) {
+        write(target, bytes, inputs, AtomicFiles.Sink.DIRECT);
+    }
+
+    /** As {@link #write(Path, byte[], List)}, the bytes written through {@code sink} (a full disk, in tests). */
+    static void write(Path target, byte[] bytes, List<Path> inputs, AtomicFiles.Sink sink) {
         refuseInput(target, inputs);
         if (Files.isDirectory(target)) {
             throw problem(target, "is a folder; expected the name of a file to write");
         }
+        if (Files.exists(target) && !Files.isRegularFile(target)) {
+            // a device or a named pipe: the file moved into place would replace it (/dev/null, say)
+            throw problem(target, "is not a regular file (a device or a named pipe); expected the name of a file to write");
+        }
         Path folder = target.toAbsolutePath().getParent();
+        Path existing = folder;
+        while (existing != null && !Files.exists(existing, LinkOption.NOFOLLOW_LINKS)) {
+            existing = existing.getParent();
+        }
+        if (existing != null && !Files.isDirectory(existing)) {
+            throw problem(target, "cannot be written (" + existing + " is a file, not a folder)");
+        }
         removeStaleTemporaries(folder);
         try {
-            AtomicFiles.write(target, bytes);
+            AtomicFiles.write(target, bytes, sink);
         } catch (IOException e) {
             throw problem(target, "cannot be written (" + reason(e) + ")");
         }

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.annalist.analysis.anomaly.RemainderOutliers;
+import org.annalist.analysis.calendar.CalendarEffects;
+import org.annalist.analysis.calendar.Easter;
 import org.annalist.series.Holiday;
 import org.annalist.analysis.decompose.CentredMovingAverage;
 import org.annalist.analysis.decompose.Irregular;
@@ -99,6 +101,10 @@ public final class Analyst {
         // significant ones taken out before one-offs and breaks are looked for
         CalendarAnalysis.Fit calendar = measured == Measure.INTERVAL ? CalendarAnalysis.none(series, holidays)
                 : CalendarAnalysis.fit(series, y, stl, remainder, holidays);
+        if (measured != Measure.INTERVAL && CalendarEffects.applies(series.frequency())
+                && CalendarAnalysis.beforeGregorian(series)) {
+            notes.add(new Caveat.CalendarBeforeGregorian(Easter.FIRST_YEAR));
+        }
         double[] expectedWithCalendar = new double[y.length];
         double[] calendarFree = new double[y.length];
         for (int t = 0; t < y.length; t++) {
@@ -136,7 +142,7 @@ public final class Analyst {
                 horizon);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest, measured), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
+                IndicatorsFindings.of(latest, measured, series), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
                 outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
 

@@ -81,7 +81,7 @@ final class CalendarAnalysis {
 
     static Fit fit(Series series, double[] workingRemainder, List<Holiday> holidays) {
         WeekdayKind kind = WeekdayKind.of(series);
-        if (!CalendarEffects.applies(series.frequency()) || workingRemainder == null) {
+        if (!CalendarEffects.applies(series.frequency()) || workingRemainder == null || beforeGregorian(series)) {
             return new Fit(Optional.empty(), kind, holidays);
         }
         return new Fit(CalendarEffects.robust(workingRemainder, series.start(), CalendarRegressors.DEFAULT_EASTER_WINDOW,
@@ -124,7 +124,7 @@ final class CalendarAnalysis {
      */
     static CalendarFinding of(Series series, Fit fit, boolean log, LatestIndicators.Result indicators,
                               List<Holiday> holidays, Measure measure) {
-        if (!CalendarEffects.applies(series.frequency())) {
+        if (!CalendarEffects.applies(series.frequency()) || beforeGregorian(series)) {
             return null;
         }
         List<CalendarFinding.EasterDate> easter = new ArrayList<>();
@@ -141,6 +141,16 @@ final class CalendarAnalysis {
                 : notes(series, indicators, fit, log, holidays, latest);
         List<Period> screened = fit.result.map(r -> r.screened().stream().map(series::period).toList()).orElse(List.of());
         return new CalendarFinding(easter, effects, notes, fit.weekdays, screened, latest);
+    }
+
+    /**
+     * Whether the series starts before {@link Easter#FIRST_YEAR}, the first full year of the Gregorian
+     * calendar (introduced in October 1582): dates before it were kept in the Julian calendar, whose
+     * Easter and weekdays differ, and nothing in a file says which calendar its dates are in, so the
+     * calendar's effects are not estimated for such a series ({@link Caveat.CalendarBeforeGregorian}).
+     */
+    static boolean beforeGregorian(Series series) {
+        return series.start().year() < Easter.FIRST_YEAR;
     }
 
     /** An effect counts when it is significant at {@link DecisionRules#ALPHA}. */

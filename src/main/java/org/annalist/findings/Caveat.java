@@ -25,6 +25,13 @@ public sealed interface Caveat {
     record BreaksNotSearchedInDailyData() implements Caveat {
     }
 
+    /**
+     * The series has periods before {@code firstYear}, the first full year of the Gregorian calendar:
+     * its dates may be Julian ones, so Easter, weekday and holiday effects are not estimated.
+     */
+    record CalendarBeforeGregorian(int firstYear) implements Caveat {
+    }
+
     /** The latest regime is still short: the break that started it may not hold. */
     record ProvisionalBreak(Period start) implements Caveat {
     }

@@ -9,15 +9,38 @@ import org.annalist.series.Period;
  * The findings JSON {@code indicators} block: the latest period against earlier ones.
  *
  * @param flagged  the publisher's flags on any value these figures use
- * @param rank     among the same period of every year up to this one; 1 = highest
- * @param record   whether the value is the series' highest or lowest so far; null when neither
+ * @param rank        among the same period of every year up to this one; 1 = highest
+ * @param record      whether the value is the series' highest or lowest so far, beyond every earlier
+ *                    value; null when neither (and when an earlier value equals it: see {@code equalRecord})
+ * @param equalRecord the value equals the series' highest or lowest so far, which an earlier period
+ *                    also had: a tie, never called "the highest"; null when there is none
  */
 public record IndicatorsFinding(Period period, double value, List<String> flagged, Measure measure,
                                 Comparison samePeriodLastYear, Comparison samePeriodTwoYearsAgo, Span yearToDate,
-                                Span rollingYear, Double seasonallyAdjustedChangePct, Rank rank, Extreme record) {
+                                Span rollingYear, Double seasonallyAdjustedChangePct, Rank rank, Extreme record,
+                                EqualRecord equalRecord) {
 
     public IndicatorsFinding {
         flagged = List.copyOf(flagged);
+    }
+
+    /** Without a tie for the record. */
+    public IndicatorsFinding(Period period, double value, List<String> flagged, Measure measure,
+                             Comparison samePeriodLastYear, Comparison samePeriodTwoYearsAgo, Span yearToDate,
+                             Span rollingYear, Double seasonallyAdjustedChangePct, Rank rank, Extreme record) {
+        this(period, value, flagged, measure, samePeriodLastYear, samePeriodTwoYearsAgo, yearToDate, rollingYear,
+                seasonallyAdjustedChangePct, rank, record, null);
+    }
+
+    /**
+     * The latest value ties with the highest (or lowest) of the series so far.
+     *
+     * @param with the earlier periods that had the same value, in time order
+     */
+    public record EqualRecord(Extreme extreme, List<Period> with) {
+        public EqualRecord {
+            with = List.copyOf(with);
+        }
     }
 
     /** The highest or the lowest value of the whole series so far. */
@@ -46,6 +69,24 @@ public record IndicatorsFinding(Period period, double value, List<String> flagge
     public record Span(Period from, Period to, double total, double previousTotal, double change, Double changePct) {
     }
 
-    public record Rank(int position, int of) {
+    /**
+     * @param position 1 + the number of same periods with a higher value (so tied values share a position)
+     * @param tiedWith the earlier same periods with exactly the latest value, in time order: the rank is
+     *                 shared with them ("equal highest")
+     */
+    public record Rank(int position, int of, List<Period> tiedWith) {
+        public Rank {
+            tiedWith = List.copyOf(tiedWith);
+        }
+
+        /** Without ties. */
+        public Rank(int position, int of) {
+            this(position, of, List.of());
+        }
+
+        /** Whether no same period ranks below this one. */
+        public boolean lowest() {
+            return position + tiedWith.size() == of;
+        }
     }
 }

@@ -144,6 +144,7 @@ public final class SeriesFileReader {
         for (Collector collector : collectors.values()) {
             collector.snapshot(log).ifPresent(series::add);
         }
+        log.throwIfErrors();
         if (series.isEmpty()) {
             throw log.fatal(0, 0, "every value is missing; expected at least one number");
         }
@@ -376,6 +377,7 @@ public final class SeriesFileReader {
             if (firstOutOfOrderLine > 0) {
                 log.warn(firstOutOfOrderLine, 0, "rows of series '" + name + "' are not in time order; sorted them");
             }
+            StrayPeriods.refuse(name, frequency, base, (int) (lowest - base), (int) (highest - base), stored, lines, log);
             int first = (int) (lowest - base);
             int size = (int) (highest - lowest + 1);
             double[] span = new double[size];

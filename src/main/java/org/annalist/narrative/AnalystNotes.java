@@ -99,8 +99,11 @@ public final class AnalystNotes {
                             change(f, i.yearToDate().change(), i.yearToDate().changePct())),
                     i.rollingYear() == null ? "" : String.format(Locale.ROOT, "; rolling year %s",
                             change(f, i.rollingYear().change(), i.rollingYear().changePct())));
-            line(out, "latest rank", "%d of %d in the same period of each year%s%s%s", i.rank().position(), i.rank().of(),
+            line(out, "latest rank", "%d of %d in the same period of each year%s%s%s%s", i.rank().position(), i.rank().of(),
+                    i.rank().tiedWith().isEmpty() ? "" : " (equal with " + labels(i.rank().tiedWith()) + ")",
                     i.record() == null ? "" : "; record " + i.record().code(),
+                    i.equalRecord() == null ? "" : "; equal record " + i.equalRecord().extreme().code() + " with "
+                            + labels(i.equalRecord().with()),
                     i.seasonallyAdjustedChangePct() == null ? "" : "; seasonally adjusted " + pct(i.seasonallyAdjustedChangePct())
                             + " on the period before", i.flagged().isEmpty() ? "" : "; flagged " + String.join(", ", i.flagged()));
         }
@@ -292,4 +295,10 @@ public final class AnalystNotes {
     public static String all(List<Findings> findings) {
         return findings.stream().map(AnalystNotes::of).collect(Collectors.joining(System.lineSeparator()));
     }
+
+    /** Period labels, comma-separated: {@code 2019-10, 2022-10}. */
+    private static String labels(List<Period> periods) {
+        return periods.stream().map(Period::label).collect(Collectors.joining(", "));
+    }
+
 }

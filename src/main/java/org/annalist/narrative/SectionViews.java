@@ -202,9 +202,18 @@ final class SectionViews {
         Period period = i.period();
         String rank = "";
         if (i.rank().of() >= 3 && series.frequency() != Frequency.ANNUAL) {
-            String position = i.rank().position() == 1 ? "the highest" : i.rank().position() == i.rank().of() ? "the lowest"
-                    : "the " + ordinal(i.rank().position()) + " highest";
-            rank = position + " " + seasonName(period) + " of the " + i.rank().of() + " in the data";
+            // a value another year's same period equals shares its rank, and is said to: "the equal highest"
+            IndicatorsFinding.Rank r = i.rank();
+            String the = r.tiedWith().isEmpty() ? "the " : "the equal ";
+            String position = r.position() == 1 ? the + "highest" : r.lowest() ? the + "lowest"
+                    : the + ordinal(r.position()) + " highest";
+            rank = position + " " + seasonName(period) + " of the " + r.of() + " in the data"
+                    + (r.tiedWith().isEmpty() ? "" : ", with " + periods(r.tiedWith()));
+            IndicatorsFinding.EqualRecord tie = i.equalRecord();
+            if (tie != null) {
+                rank += ", and equal to the " + (tie.extreme() == IndicatorsFinding.Extreme.HIGH ? "highest" : "lowest")
+                        + " value of the whole series, that of " + periods(tie.with());
+            }
         }
         return new BriefView.ThisPeriod(true, level,
                 ytd == null ? "" : f.period(ytd.from()), ytd == null ? "" : f.period(ytd.to()),
@@ -229,6 +238,13 @@ final class SectionViews {
     /** A change as a brief states it: in %, percentage points or the series' units, by {@link MeasureWords}. */
     private String change(IndicatorsFinding.Span s) {
         return measure.percent() && s.changePct() == null ? "" : measure.signedChange(s.change(), s.changePct());
+    }
+
+    /** Periods in words, listed: {@code October 2019 and October 2022}; beyond three, the first two and how many more. */
+    private String periods(List<Period> periods) {
+        List<String> words = periods.stream().map(f::period).toList();
+        return words.size() <= 3 ? Terms.listed(words)
+                : String.join(", ", words.subList(0, 2)) + " and " + (words.size() - 2) + " more";
     }
 
     private static String ordinal(int n) {

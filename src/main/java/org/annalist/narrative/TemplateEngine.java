@@ -102,7 +102,7 @@ public final class TemplateEngine {
             throw new TemplateProblem(Optional.ofNullable(e.getTemplateName()).orElse(templateName) + ":"
                     + e.getLineNumber() + ":" + e.getColumnNumber() + ": "
                     + e.getEditorMessage().lines().findFirst().orElse("not a template"));
-        } catch (TooLargeTemplate e) {
+        } catch (RefusedTemplateFile e) {
             throw new TemplateProblem(e.getMessage());
         } catch (IOException e) {
             throw new UncheckedIOException("template " + templateName + " cannot be read", e);
@@ -195,7 +195,7 @@ public final class TemplateEngine {
         }
         try {
             return new MultiTemplateLoader(new TemplateLoader[] {
-                new BoundedLoader(new FileTemplateLoader(userTemplates.get().toFile())), bundled});
+                new BoundedLoader(userTemplates.get(), new FileTemplateLoader(userTemplates.get().toFile())), bundled});
         } catch (IOException e) {
             throw new UncheckedIOException("template folder " + userTemplates.get() + " cannot be read", e);
         }
@@ -204,25 +204,54 @@ public final class TemplateEngine {
     /** A user's template file is read whole; beyond this it is refused before it is read (a brief's template has 30 kB). */
     static final long MAX_TEMPLATE_BYTES = 4L * 1024 * 1024;
 
-    /** Thrown by {@link BoundedLoader} for a template file over the limit. */
-    private static final class TooLargeTemplate extends IOException {
+    /** Thrown by {@link BoundedLoader} for a template file it refuses, with the message to show. */
+    private static final class RefusedTemplateFile extends IOException {
         private static final long serialVersionUID = 1L;
 
-        TooLargeTemplate(String message) {
+        RefusedTemplateFile(String message) {
             super(message);
         }
     }
 
-    /** The user's folder, refusing a template file over {@link #MAX_TEMPLATE_BYTES}. */
-    private record BoundedLoader(TemplateLoader inner) implements TemplateLoader {
+    /**
+     * The user's folder, refusing a template file over {@link #MAX_TEMPLATE_BYTES}, and a name in it
+     * that is there but is no template the folder holds: a symbolic link leading out of the folder
+     * (by real path) or nowhere, a folder, a device or a pipe. Such a file is the user's mistake, to
+     * be named, never passed over for the bundled template of the same name.
+     */
+    private record BoundedLoader(Path folder, TemplateLoader inner) implements TemplateLoader {
         @Override
         public Object findTemplateSource(String name) throws IOException {
+            refuseIfNotInside(name);
             Object source = inner.findTemplateSource(name);
             if (source instanceof File file && file.length() > MAX_TEMPLATE_BYTES) {
-                throw new TooLargeTemplate(name + ": the template file has " + file.length() + " bytes, over the limit of "
+                throw new RefusedTemplateFile(name + ": the template file has " + file.length() + " bytes, over the limit of "
                         + MAX_TEMPLATE_BYTES / (1024 * 1024) + " MB");
             }
             return source;
+        }
+
+        private void refuseIfNotInside(String name) throws RefusedTemplateFile {
+            Path file = folder.resolve(name).normalize();
+            if (!java.nio.file.Files.exists(file, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+                return;   // not there: the bundled template of that name is used
+            }
+            Path real;
+            Path realFolder;
+            try {
+                realFolder = folder.toRealPath();
+                real = file.toRealPath();
+            } catch (IOException leadsNowhere) {
+                throw new RefusedTemplateFile(name + ": " + file + " is a symbolic link that leads nowhere; expected a "
+                        + "template file in the template folder " + folder);
+            }
+            if (!real.startsWith(realFolder)) {
+                throw new RefusedTemplateFile(name + ": " + file + " leads to " + real + ", outside the template folder "
+                        + realFolder + "; a template folder's templates must be inside it");
+            }
+            if (!java.nio.file.Files.isRegularFile(real)) {
+                throw new RefusedTemplateFile(name + ": " + file + " is not a regular file; expected a template file");
+            }
         }
 
         @Override
@@ -274,7 +303,27 @@ public final class TemplateEngine {
 
         TemplateProblem(String template, TemplateException cause) {
             super(template + ":" + cause.getLineNumber() + ":" + cause.getColumnNumber() + ": "
-                    + cause.getMessageWithoutStackTop().lines().findFirst().orElse("template error"), cause);
+                    + refused(cause).filter(r -> !firstLine(cause).contains(r.getMessage()))
+                    .map(r -> firstLine(cause) + " " + r.getMessage()).orElse(firstLine(cause)), cause);
+        }
+
+        /** The message's first line, and the second where the first only leads up to it ("… failed (…):"). */
+        private static String firstLine(TemplateException cause) {
+            java.util.List<String> lines = cause.getMessageWithoutStackTop().lines().filter(l -> !l.isBlank()).limit(2).toList();
+            if (lines.isEmpty()) {
+                return "template error";
+            }
+            return lines.get(0).endsWith(":") && lines.size() > 1 ? lines.get(0) + " " + lines.get(1).strip() : lines.get(0);
+        }
+
+        /** The refusal of a file the template includes, which FreeMarker reports only as its cause. */
+        private static Optional<RefusedTemplateFile> refused(Throwable e) {
+            for (Throwable c = e; c != null; c = c.getCause()) {
+                if (c instanceof RefusedTemplateFile r) {
+                    return Optional.of(r);
+                }
+            }
+            return Optional.empty();
         }
 
         /** @param message already {@code TEMPLATE:LINE: what} (or {@code TEMPLATE: what} where no line is known) */

@@ -119,6 +119,11 @@ final class Terms {
             return "Structural changes are not searched in daily data, whose yearly pattern is not yet taken out; "
                     + "aggregate to weeks or months (--aggregate) to look for them.";
         }
+        if (caveat instanceof Caveat.CalendarBeforeGregorian g) {
+            return "No calendar effects are estimated (Easter, weekdays, holidays): the series starts before "
+                    + g.firstYear() + ", the first full year of the Gregorian calendar, and its dates may be in the"
+                    + " Julian calendar, whose Easter and weekdays differ.";
+        }
         Caveat.ProvisionalBreak b = (Caveat.ProvisionalBreak) caveat;
         return "The break in " + b.start().label() + " is provisional: the data since are too few to date it (its"
                 + " 95 % interval reaches the latest period), and it may not hold.";

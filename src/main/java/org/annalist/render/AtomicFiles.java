@@ -2,6 +2,7 @@ package org.annalist.render;
 
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
@@ -24,13 +25,32 @@ public final class AtomicFiles {
     private AtomicFiles() {
     }
 
+    /** The longest file name (in bytes) of the common file systems (ext4, APFS, NTFS in UTF-16 units). */
+    static final int MAX_NAME_BYTES = 255;
+
+    /**
+     * How the bytes reach the temporary file: {@link #DIRECT} but in tests, which stand in for a disk
+     * that fills up half way through.
+     */
+    @FunctionalInterface
+    public interface Sink {
+        Sink DIRECT = OutputStream::write;
+
+        void write(OutputStream out, byte[] bytes) throws IOException;
+    }
+
     public static void write(Path target, byte[] bytes) throws IOException {
+        write(target, bytes, Sink.DIRECT);
+    }
+
+    /** As {@link #write(Path, byte[])}, the bytes written through {@code sink}. */
+    public static void write(Path target, byte[] bytes, Sink sink) throws IOException {
         Path absolute = target.toAbsolutePath();
         Path folder = absolute.getParent();
         Files.createDirectories(folder);
         Path temporary = null;
         try {
-            temporary = createAndWrite(folder, absolute.getFileName().toString(), bytes);
+            temporary = createAndWrite(folder, absolute.getFileName().toString(), bytes, sink);
             keepPermissionsOf(absolute, temporary);
             try {
                 Files.move(temporary, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
@@ -45,10 +65,9 @@ public final class AtomicFiles {
     }
 
     /** A new hidden file beside the target, created as an ordinary file is (not owner-only as createTempFile makes it). */
-    private static Path createAndWrite(Path folder, String name, byte[] bytes) throws IOException {
+    private static Path createAndWrite(Path folder, String name, byte[] bytes, Sink sink) throws IOException {
         for (int attempt = 0; ; attempt++) {
-            Path candidate = folder.resolve("." + name + "." + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36)
-                    + ".tmp");
+            Path candidate = folder.resolve(temporaryName(name, Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36)));
             OutputStream out;
             try {
                 out = Files.newOutputStream(candidate, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
@@ -59,13 +78,40 @@ public final class AtomicFiles {
                 continue;
             }
             try (out) {
-                out.write(bytes);
+                sink.write(out, bytes);
             } catch (IOException e) {
                 Files.deleteIfExists(candidate);
                 throw e;
             }
             return candidate;
         }
+    }
+
+    /**
+     * {@code .NAME.RANDOM.tmp}, within {@link #MAX_NAME_BYTES}: a target name that itself fits may be
+     * too long once the dot and suffix are added, so the end of its stem is left out then (its
+     * extension is kept, by which a later run knows the file as one of this tool's).
+     */
+    public static String temporaryName(String name, String random) {
+        String suffix = "." + random + ".tmp";
+        int budget = MAX_NAME_BYTES - 1 - suffix.length();
+        if (name.getBytes(StandardCharsets.UTF_8).length <= budget) {
+            return "." + name + suffix;
+        }
+        int dot = name.lastIndexOf('.');
+        String extension = dot > 0 && name.length() - dot <= 16 ? name.substring(dot) : "";
+        int left = budget - extension.getBytes(StandardCharsets.UTF_8).length;
+        StringBuilder stem = new StringBuilder();
+        for (int i = 0; i < name.length() - extension.length(); ) {
+            int cp = name.codePointAt(i);
+            left -= new String(Character.toChars(cp)).getBytes(StandardCharsets.UTF_8).length;
+            if (left < 0) {
+                break;
+            }
+            stem.appendCodePoint(cp);
+            i += Character.charCount(cp);
+        }
+        return "." + stem + extension + suffix;
     }
 
     private static void keepPermissionsOf(Path existing, Path replacement) throws IOException {

@@ -156,7 +156,15 @@ public final class PdfRenderer {
         ByteArrayOutputStream pdf = new ByteArrayOutputStream(256 * 1024);
         builder.toStream(OutputStream.nullOutputStream());
         try (PdfBoxRenderer renderer = parsed(builder)) {
-            renderer.createPDFWithoutClosing();
+            try {
+                renderer.createPDFWithoutClosing();
+            } catch (RuntimeException e) {
+                // a resource refused can make the layout engine fail later on its own (a font the
+                // CSS names from outside the folder: it paints text with no font); the refusal is
+                // the cause to report
+                sandbox.throwIfRefused();
+                throw e;
+            }
             sandbox.throwIfRefused();
             try (PDDocument document = renderer.getPdfDocument()) {
                 Calendar created = new GregorianCalendar(TimeZone.getTimeZone("UTC"));

@@ -11,6 +11,7 @@ import java.nio.file.attribute.FileTime;
 import java.time.Instant;
 import java.util.List;
 import org.annalist.ingest.DataProblemException;
+import org.annalist.render.AtomicFiles;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -68,4 +69,69 @@ class OutputFilesTest {
         assertThat(notOurs).exists();
         assertThat(Files.readAllBytes(folder.resolve("brief.pdf"))).containsExactly(1, 2);
     }
+
+    /** What the folder holds, names only. */
+    private List<String> listing() throws IOException {
+        try (var files = Files.list(folder)) {
+            return files.map(f -> f.getFileName().toString()).sorted().toList();
+        }
+    }
+
+    @Test
+    void aDiskThatFillsUpGivesItsReasonLeavesTheOldOutputWholeAndNoTemporaryFile() throws IOException {
+        Path target = Files.writeString(folder.resolve("brief.pdf"), "the brief of last month");
+        // the disk fills up half way through: the system's ENOSPC, as the JDK reports it
+        AtomicFiles.Sink full = (out, bytes) -> {
+            out.write(bytes, 0, bytes.length / 2);
+            throw new IOException("No space left on device");
+        };
+        assertThatThrownBy(() -> OutputFiles.write(target, new byte[4096], List.of(), full))
+                .isInstanceOf(DataProblemException.class)
+                .hasMessageContaining("brief.pdf").hasMessageContaining("cannot be written (No space left on device)");
+        assertThat(Files.readString(target)).isEqualTo("the brief of last month");
+        assertThat(listing()).containsExactly("brief.pdf");
+    }
+
+    @Test
+    void anOutputInsideARegularFileNamesTheFileThatIsNoFolder() throws IOException {
+        Path file = Files.writeString(folder.resolve("notes.txt"), "the user's");
+        for (Path target : List.of(file.resolve("brief.pdf"), file.resolve("sub/brief.pdf"))) {
+            assertThatThrownBy(() -> OutputFiles.write(target, new byte[] {1}, List.of()))
+                    .isInstanceOf(DataProblemException.class)
+                    .hasMessageContaining("cannot be written (" + file + " is a file, not a folder)");
+        }
+        assertThat(Files.readString(file)).isEqualTo("the user's");
+        assertThat(listing()).containsExactly("notes.txt");
+    }
+
+    @Test
+    void anOutputThatIsANamedPipeIsRefusedAndLeftInPlace() throws IOException, InterruptedException {
+        Path pipe = folder.resolve("brief.pdf");
+        Process mkfifo = new ProcessBuilder("mkfifo", pipe.toString()).start();
+        org.junit.jupiter.api.Assumptions.assumeTrue(mkfifo.waitFor() == 0, "mkfifo is available");
+        assertThatThrownBy(() -> OutputFiles.write(pipe, new byte[] {1}, List.of()))
+                .isInstanceOf(DataProblemException.class).hasMessageContaining("is not a regular file");
+        assertThat(Files.isRegularFile(pipe)).isFalse();
+        assertThat(Files.exists(pipe)).isTrue();
+        assertThat(listing()).containsExactly("brief.pdf");
+    }
+
+    @Test
+    void aNameThatFitsIsWrittenEvenWhereItsTemporaryNameWouldNot() throws IOException {
+        // 255 bytes, the most ext4 allows: the temporary name beside it is shortened, not the output's
+        Path target = folder.resolve("a".repeat(251) + ".pdf");
+        OutputFiles.write(target, new byte[] {7}, List.of());
+        assertThat(Files.readAllBytes(target)).containsExactly(7);
+        assertThat(listing()).containsExactly(target.getFileName().toString());
+    }
+
+    @Test
+    void aShortenedTemporaryFileOfAKilledRunIsStillRecognisedAndRemoved() throws IOException {
+        String name = "a".repeat(251) + ".pdf";
+        Path stale = Files.writeString(folder.resolve(AtomicFiles.temporaryName(name, "k3j9x2")), "half");
+        Files.setLastModifiedTime(stale, FileTime.from(Instant.now().minusSeconds(3600)));
+        OutputFiles.write(folder.resolve(name), new byte[] {1}, List.of());
+        assertThat(stale).doesNotExist();
+    }
+
 }

@@ -53,7 +53,7 @@ class AnalyzeCommandTest {
         assertThat(i.get("same_period_last_year").get("change_pct").asDouble()).isCloseTo(100 * (432.0 / 405 - 1),
                 org.assertj.core.api.Assertions.within(1e-9));
         assertThat(keys(i.get("year_to_date"))).contains("from", "to", "total", "previous_total", "change_pct");
-        assertThat(keys(i.get("rank"))).containsExactly("position", "of");
+        assertThat(keys(i.get("rank"))).containsExactly("position", "of", "tied_with");
         JsonNode c = f.get("calendar");
         assertThat(keys(c)).containsExactly("easter", "effects", "notes", "weekdays", "screened_out", "latest_change");
         assertThat(c.get("easter").get(0).get("date").asText()).isEqualTo("1949-04-17");   // Easter 1949 (Meeus)

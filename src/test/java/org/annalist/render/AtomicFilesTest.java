@@ -64,4 +64,17 @@ class AtomicFilesTest {
             assertThat(files).containsExactly(occupied);
         }
     }
+
+    @Test
+    void aTemporaryNameFitsTheFileSystemAndKeepsTheExtension() {
+        // the longest random part: an unsigned long in base 36 has 13 digits
+        String random = Long.toUnsignedString(-1L, 36);
+        for (String name : new String[] {"brief.pdf", "a".repeat(251) + ".pdf", "é".repeat(125) + ".findings.json"}) {
+            String temporary = AtomicFiles.temporaryName(name, random);
+            assertThat(temporary.getBytes(java.nio.charset.StandardCharsets.UTF_8).length).as(name).isLessThanOrEqualTo(255);
+            assertThat(temporary).startsWith(".").endsWith((name.endsWith(".json") ? ".json." : ".pdf.") + random + ".tmp");
+        }
+        assertThat(AtomicFiles.temporaryName("brief.pdf", "x1")).isEqualTo(".brief.pdf.x1.tmp");
+    }
+
 }
