@@ -9,11 +9,9 @@ import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
-import java.util.function.Consumer;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -28,7 +26,7 @@ final class CsvRows {
     record Row(int line, List<String> cells, int[] sourceColumns) {
 
         Row {
-            cells = cells instanceof Table.Cells ? cells : List.copyOf(cells);
+            cells = cells instanceof Table.Cells || cells instanceof Fields ? cells : List.copyOf(cells);
             sourceColumns = sourceColumns == null ? null : sourceColumns.clone();
         }
 
@@ -54,11 +52,36 @@ final class CsvRows {
             if (cells instanceof Table.Cells view) {
                 return view.blank();
             }
-            return cells.stream().allMatch(String::isEmpty);
+            for (int c = 0; c < cells.size(); c++) {
+                if (!cells.get(c).isEmpty()) {
+                    return false;
+                }
+            }
+            return true;
         }
 
         int nonEmptyCount() {
             return (int) cells.stream().filter(c -> !c.isEmpty()).count();
+        }
+    }
+
+    /** The cells of a row just read, in an array no one else holds (so a row need not copy them). */
+    static final class Fields extends AbstractList<String> implements java.util.RandomAccess {
+        private final String[] cells;
+
+        /** @param cells an array the caller lets go of */
+        Fields(String[] cells) {
+            this.cells = cells;
+        }
+
+        @Override
+        public String get(int index) {
+            return cells[index];
+        }
+
+        @Override
+        public int size() {
+            return cells.length;
         }
     }
 
@@ -246,38 +269,6 @@ final class CsvRows {
         return new Head(sample.toString(), taken, new PrefixedReader(read.toString(), text));
     }
 
-    /**
-     * Reads the records of {@code text} as they come, giving each to {@code sink} as a {@link Row} of
-     * trimmed cells with the line it starts on; nothing is held.
-     */
-    static void stream(Reader text, char delimiter, ProblemLog log, Consumer<Row> sink) {
-        LineCountingReader counted = new LineCountingReader(text);
-        int lastLine = 0;
-        try (CSVParser parser = CSVParser.parse(counted, format(delimiter))) {
-            Iterator<CSVRecord> records = parser.iterator();
-            while (true) {
-                CSVRecord record;
-                try {
-                    if (!records.hasNext()) {
-                        break;
-                    }
-                    record = records.next();
-                } catch (UncheckedIOException | IllegalStateException malformed) {
-                    throw log.fatal(lastLine + 1, 0, "a quoted cell is never closed (" + rootMessage(malformed)
-                            + "); expected a closing double quote before the end of the file");
-                }
-                lastLine = counted.lineOf(record.getCharacterPosition());
-                String[] cells = new String[record.size()];
-                for (int i = 0; i < cells.length; i++) {
-                    cells[i] = clean(record.get(i));
-                }
-                sink.accept(new Row(lastLine, Arrays.asList(cells)));
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-    }
-
     /** Text given back, then the rest of a reader (which closing this leaves open). */
     private static final class PrefixedReader extends Reader {
         private final String prefix;
@@ -306,7 +297,7 @@ final class CsvRows {
         }
     }
 
-    private static CSVFormat format(char delimiter) {
+    static CSVFormat format(char delimiter) {
         return CSVFormat.DEFAULT.builder()
                 .setDelimiter(delimiter)
                 .setQuote('"')
@@ -316,7 +307,7 @@ final class CsvRows {
     }
 
     /** The cell without the ordinary and no-break spaces that spreadsheet exports leave around cells. */
-    private static String clean(String value) {
+    static String clean(String value) {
         int start = 0;
         int end = value.length();
         while (start < end && isSpace(value.charAt(start))) {
@@ -328,7 +319,7 @@ final class CsvRows {
         return start == 0 && end == value.length() ? value : value.substring(start, end);
     }
 
-    private static boolean isSpace(char c) {
+    static boolean isSpace(char c) {
         return Character.isWhitespace(c) || c == '\u00A0' || c == '\u202F' || c == '\u2007';
     }
 
@@ -354,7 +345,7 @@ final class CsvRows {
      * gives its line; a line break is {@code \n}, {@code \r\n} or a lone {@code \r}. Only the starts
      * not yet asked about are kept (the parser reads ahead by a buffer at most).
      */
-    private static final class LineCountingReader extends Reader {
+    static final class LineCountingReader extends Reader {
         private final Reader in;
         private long position;
         private boolean afterCarriageReturn;
@@ -412,7 +403,7 @@ final class CsvRows {
         }
     }
 
-    private static String rootMessage(Throwable e) {
+    static String rootMessage(Throwable e) {
         Throwable root = e;
         while (root.getCause() != null) {
             root = root.getCause();

@@ -142,6 +142,11 @@ final class PeriodColumn {
         return (key << 8) >> 8;
     }
 
+    /** The epoch day of a dated key in {@code order}, or {@link #NONE} when the date is impossible that way. */
+    private static long epochDay(long key, DateOrder order) {
+        return tag(key) == DAY ? value(key) : date(key, order).map(LocalDate::toEpochDay).orElse(NONE);
+    }
+
     private static Optional<LocalDate> date(long key, DateOrder order) {
         long v = value(key);
         if (tag(key) == DAY) {
@@ -175,11 +180,11 @@ final class PeriodColumn {
             if (tag != DAY && tag != AMBIGUOUS) {
                 return NONE;
             }
-            Optional<LocalDate> date = date(key, dateOrder);
-            if (date.isEmpty()) {
+            long day = epochDay(key, dateOrder);
+            if (day == NONE) {
                 return NONE;
             }
-            return frequency == Frequency.DAILY ? date.get().toEpochDay() : Period.containing(frequency, date.get()).index();
+            return frequency == Frequency.DAILY ? day : Period.containing(frequency, LocalDate.ofEpochDay(day)).index();
         }
     }
 
@@ -224,12 +229,13 @@ final class PeriodColumn {
             if (key == NONE || (tag(key) != DAY && tag(key) != AMBIGUOUS)) {
                 return;
             }
-            date(key, order).ifPresent(d -> {
+            long day = epochDay(key, order);
+            if (day != NONE) {
                 if (n[0] == days[0].length) {
                     days[0] = Arrays.copyOf(days[0], days[0].length * 2);
                 }
-                days[0][n[0]++] = d.toEpochDay();
-            });
+                days[0][n[0]++] = day;
+            }
         });
         return distinctSorted(Arrays.copyOf(days[0], n[0]));
     }

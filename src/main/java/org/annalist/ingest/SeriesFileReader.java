@@ -78,7 +78,7 @@ public final class SeriesFileReader {
         long expectedRows = head.sampleLines() == 0 ? 16
                 : (long) (size / Math.max(1.0, head.sample().length() / (double) head.sampleLines()) * 1.02) + 16;
         RowReader rows = new RowReader(options, log, baseName(log.file()), expectedRows);
-        CsvRows.stream(head.whole(), delimiter, log, rows::row);
+        CsvStream.stream(head.whole(), delimiter, log, rows::row);
         RowReader.Read read = rows.end();
         List<Series> series = read.series();
         if (options.aggregation().isPresent()) {
