@@ -89,8 +89,12 @@ final class PeriodColumn {
         }
         PeriodCells.Parsed p = parsed.get();
         formats.add(p.format());
-        byKind.computeIfAbsent(kindOf(p), k -> new Examples(p instanceof PeriodCells.Fixed f ? f.period().frequency() : null))
-                .add(line, column, text);
+        Examples kind = byKind.get(kindOf(p));
+        if (kind == null) {
+            kind = new Examples(p instanceof PeriodCells.Fixed f ? f.period().frequency() : null);
+            byKind.put(kindOf(p), kind);
+        }
+        kind.add(line, column, text);
         if (p instanceof PeriodCells.Day d) {
             return pack(DAY, d.date().toEpochDay());
         }

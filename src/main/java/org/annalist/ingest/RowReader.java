@@ -187,6 +187,11 @@ final class RowReader {
                 values.add(Double.NaN, Set.of(), false, sourceColumn);   // reported already, or to be
                 continue;
             }
+            double plain = NumberCells.plainInteger(cell);
+            if (!Double.isNaN(plain) && flagColumn.isEmpty()) {
+                values.add(plain, Set.of(), false, sourceColumn);   // the commonest cell, read without objects
+                continue;
+            }
             why.setLength(0);
             Optional<NumberCells.Cell> value = NumberCells.parse(cell, reading.mark(), why);
             if (value.isEmpty()) {
