@@ -242,8 +242,8 @@ final class CsvStream {
                     }
                     record = records.next();
                 } catch (UncheckedIOException | IllegalStateException malformed) {
-                    throw log.fatal(lastLine + 1, 0, "a quoted cell is never closed (" + CsvRows.rootMessage(malformed)
-                            + "); expected a closing double quote before the end of the file");
+                    throw log.fatal(lastLine + 1, 0, "a quoted cell is never closed (" + inFile(CsvRows.rootMessage(malformed),
+                            firstLine) + "); expected a closing double quote before the end of the file");
                 }
                 String[] cells = new String[record.size()];
                 for (int i = 0; i < cells.length; i++) {
@@ -252,6 +252,14 @@ final class CsvStream {
                 emit(firstLine - 1 + counted.lineOf(record.getCharacterPosition()), cells);
             }
         }
+    }
+
+    private static final java.util.regex.Pattern LINE_IN_MESSAGE =
+            java.util.regex.Pattern.compile("(startline |line: )(\\d+)(, position: \\d+)?");
+
+    /** Commons CSV's message about a record read on its own, with the lines of the file (its character position left out). */
+    private static String inFile(String message, int firstLine) {
+        return LINE_IN_MESSAGE.matcher(message).replaceAll(m -> m.group(1) + (Integer.parseInt(m.group(2)) + firstLine - 1));
     }
 
     /** A string, then the rest of a reader. */
