@@ -15,6 +15,21 @@ final class DecimalMarks {
 
     /** How to read one cell: with {@code mark}; {@code pending} when the other mark's reading must be kept too. */
     record Reading(DecimalMark mark, boolean pending, boolean conflicting) {
+
+        /** One of the few readings there are (a cell of a big file makes none). */
+        static Reading of(DecimalMark mark, boolean pending, boolean conflicting) {
+            return ALL[mark.ordinal() * 4 + (pending ? 2 : 0) + (conflicting ? 1 : 0)];
+        }
+    }
+
+    private static final Reading[] ALL = new Reading[DecimalMark.values().length * 4];
+
+    static {
+        for (DecimalMark mark : DecimalMark.values()) {
+            for (int i = 0; i < 4; i++) {
+                ALL[mark.ordinal() * 4 + i] = new Reading(mark, (i & 2) != 0, (i & 1) != 0);
+            }
+        }
     }
 
     private final Optional<DecimalMark> requested;
@@ -30,7 +45,7 @@ final class DecimalMarks {
     /** Notes what {@code cell} on {@code line} proves, and says how to read it. */
     Reading see(String cell, int line) {
         if (requested.isPresent()) {
-            return new Reading(requested.get(), false, false);
+            return Reading.of(requested.get(), false, false);
         }
         switch (NumberCells.evidence(cell)) {
             case POINT -> {
@@ -47,7 +62,7 @@ final class DecimalMarks {
                     ambiguousCell = cell;
                     ambiguousLine = line;
                 }
-                return new Reading(proved == null ? DecimalMark.POINT : proved, dependsOnMark && proved == null, false);
+                return Reading.of(proved == null ? DecimalMark.POINT : proved, dependsOnMark && proved == null, false);
             }
         }
     }
@@ -56,7 +71,7 @@ final class DecimalMarks {
         if (proved == null) {
             proved = mark;
         }
-        return new Reading(proved, false, proved != mark);
+        return Reading.of(proved, false, proved != mark);
     }
 
     /**

@@ -56,6 +56,7 @@ final class RowReader {
     private SeriesValues.Axis shared;
     private final Map<String, SeriesValues> series = new LinkedHashMap<>();
     private final StringBuilder why = new StringBuilder();
+    private long cellsSoFar;
 
     /** @param expectedRows about how many rows the file has (to size the arrays of a wide file once) */
     RowReader(ReadOptions options, ProblemLog log, String fallbackName, long expectedRows) {
@@ -165,7 +166,8 @@ final class RowReader {
         if (shared != null) {
             shared.add(key, row.line());
         }
-        String keyText = keys.isEmpty() ? "" : String.join(" / ", keys.stream().map(k -> row.cell(k.index())).toList());
+        String keyText = keys.isEmpty() ? "" : keys.size() == 1 ? row.cell(keys.get(0).index())
+                : String.join(" / ", keys.stream().map(k -> row.cell(k.index())).toList());
         OptionalInt year = grid.isPresent() ? PeriodColumn.yearOf(key) : OptionalInt.empty();
         for (Column column : valueColumns) {
             String cell = row.cell(column.index());
@@ -174,6 +176,7 @@ final class RowReader {
                 continue;   // a totals column beside the months
             }
             SeriesValues values = seriesOf(keyText, column, row);
+            cellsSoFar++;
             long cellKey = key;
             if (grid.isPresent()) {
                 cellKey = year.isPresent() ? PeriodColumn.keyOf(grid.get().period(year.getAsInt(), column.index()))
@@ -213,9 +216,12 @@ final class RowReader {
         String name = grid.isPresent() ? (keyText.isEmpty() ? fallbackName : keyText) : seriesName(keyText, column);
         SeriesValues values = series.get(name);
         if (values == null) {
-            SeriesValues.Axis axis = shared != null ? shared : new SeriesValues.Axis(16);
+            // A long file sorted by series gives each series about as many rows as those before it had.
+            int capacity = shared != null ? (int) Math.min(expectedRows, Integer.MAX_VALUE / 2)
+                    : (int) Math.min(cellsSoFar / Math.max(1, series.size()) + 1, 1 << 20);
+            SeriesValues.Axis axis = shared != null ? shared : new SeriesValues.Axis(capacity);
             values = new SeriesValues(name, unitOf(column, unitColumn.map(u -> row.cell(u.index())), !keys.isEmpty()),
-                    axis, column.index() + 1, shared != null ? (int) Math.min(expectedRows, Integer.MAX_VALUE / 2) : 16);
+                    axis, shared == null, column.index() + 1, capacity);
             series.put(name, values);
         }
         return values;

@@ -82,8 +82,14 @@ final class SeriesValues {
     private int others;
     private boolean percent;
 
-    /** @param column the 1-based column of the series' cells in the file, for messages */
-    SeriesValues(String name, String unit, Axis axis, int column, int capacity) {
+    private final boolean ownAxis;
+
+    /**
+     * @param column  the 1-based column of the series' cells in the file, for messages
+     * @param ownAxis whether the axis is this series' alone (let go once the series is made)
+     */
+    SeriesValues(String name, String unit, Axis axis, boolean ownAxis, int column, int capacity) {
+        this.ownAxis = ownAxis;
         this.name = name;
         this.unit = unit;
         this.axis = axis;
@@ -201,6 +207,10 @@ final class SeriesValues {
         values = null;
         flagIds = null;
         columns = null;
+        if (ownAxis) {
+            axis.keys = null;   // let go before the next series is made: the reading and the series do not add up
+            axis.lines = null;
+        }
         if (!anyValue) {
             log.warn(0, 0, "series '" + name + "' has no values and was left out");
             return Optional.empty();
