@@ -1,7 +1,6 @@
 package org.annalist.ingest;
 
 import java.io.BufferedInputStream;
-import java.io.ByteArrayInputStream;
 import java.io.Closeable;
 import java.io.FilterReader;
 import java.io.IOException;
@@ -35,11 +34,6 @@ final class TextDecoding {
 
     /** The bytes of a file with the encoding they are read in (from {@code offset}, past a byte-order mark). */
     record Decoded(byte[] bytes, int offset, Charset charset, String charsetName) {
-
-        /** A fresh reader of the text from its start. */
-        Reader reader() {
-            return new InputStreamReader(new ByteArrayInputStream(bytes, offset, bytes.length - offset), charset);
-        }
     }
 
     private TextDecoding() {
