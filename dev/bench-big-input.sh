@@ -1,14 +1,16 @@
 #!/usr/bin/env bash
-# Times `check` on big generated CSV files and prints wall time and peak RSS (GNU time -v), with the
-# JVM's default settings. Not a test: run it by hand after changing the reader.
+# Times a command on big generated CSV files with the JVM's default settings (no -Xmx: what a user
+# gets from `java -jar`) and prints wall time and peak RSS, min / median / max over RUNS runs, against
+# the targets. Not a test: run it by hand, on a quiet machine, after changing the reader.
 #
-#   dev/bench-big-input.sh [JAR] [SIZES]
+#   dev/bench-big-input.sh [JAR] [SIZES] [RUNS] [COMMAND]
 #
-# JAR defaults to target/annalist.jar; SIZES is any of "2m 260mb" (default both).
+# JAR defaults to target/annalist.jar; SIZES is any of "2m 260mb" (default both); RUNS defaults to 3;
+# COMMAND is check (default) or analyze (analyze --horizon 0 leaves the outlook out).
 #   2m    : 2 million daily rows, one value column (about 30 MB)      target: <= 10 s, <= 512 MB peak RSS
 #   260mb : a long file (period, series, value) of 12,500 monthly series over 64 years,
-#           9.6 million rows (about 260 MB)                          target: <= 60 s
-# The files are written to /tmp/annalist-bench/ once and reused.
+#           9.6 million rows (about 250 MB)                          target: <= 60 s, <= 512 MB peak RSS
+# The files are written to /tmp/annalist-bench/ once and reused. Peak RSS is GNU time's %M.
 set -euo pipefail
 jar=${1:-target/annalist.jar}
 sizes=${2:-"2m 260mb"}
@@ -49,28 +51,45 @@ generate_long() {   # generate_long FILE SERIES
     }' > "$file.part" && mv "$file.part" "$file"
 }
 
-run() {   # run FILE
-    local file=$1
-    printf '%s (%s bytes): ' "$(basename "$file")" "$(stat -c %s "$file")"
-    local log; log=$(mktemp)
-    set +e
-    /usr/bin/time -v java -jar "$jar" check "$file" > /dev/null 2> "$log"
-    local rc=$?
-    set -e
-    local wall rss
-    wall=$(sed -n 's/.*Elapsed (wall clock) time (h:mm:ss or m:ss): //p' "$log")
-    rss=$(sed -n 's/.*Maximum resident set size (kbytes): //p' "$log")
-    local cpu
-    cpu=$(awk -F': ' '/User time|System time/ {s += $2} END {printf "%.1f", s}' "$log")
-    printf 'exit %s, wall %s, cpu %s s, peak RSS %s MB\n' "$rc" "$wall" "$cpu" "$((rss / 1024))"
-    [ "$rc" -eq 0 ] || grep -v -e '^\s' -e '^Command' "$log" | head -5
-    rm -f "$log"
+runs=${3:-3}
+command=${4:-check}
+
+stats() {   # stats VALUES... : min / median / max
+    printf '%s\n' "$@" | sort -g | awk '{v[NR] = $1} END {printf "%s / %s / %s", v[1], v[int((NR + 1) / 2)], v[NR]}'
+}
+
+run() {   # run FILE TARGET_SECONDS
+    local file=$1 target_s=$2 target_mb=512
+    printf '%s (%s bytes), %s, %s runs\n' "$(basename "$file")" "$(stat -c %s "$file")" "$command" "$runs"
+    local walls=() rsss=() log rc
+    log=$(mktemp)
+    for ((i = 1; i <= runs; i++)); do
+        set +e
+        # shellcheck disable=SC2086
+        /usr/bin/time -f '%e %M' -o "$log" java -jar "$jar" $command "$file" > /dev/null 2> "$log.err"
+        rc=$?
+        set -e
+        if [ "$rc" -ne 0 ]; then
+            echo "  run $i: exit $rc"; head -5 "$log.err"
+        fi
+        read -r wall rss < <(tail -1 "$log")
+        walls+=("$wall"); rsss+=("$((rss / 1024))")
+        printf '  run %d: %s s, peak RSS %s MB (load %s)\n' "$i" "$wall" "$((rss / 1024))" "$(cut -d' ' -f1 /proc/loadavg)"
+    done
+    rm -f "$log" "$log.err"
+    local worst_wall worst_rss
+    worst_wall=$(printf '%s\n' "${walls[@]}" | sort -g | tail -1)
+    worst_rss=$(printf '%s\n' "${rsss[@]}" | sort -g | tail -1)
+    printf '  wall s  min/median/max: %s   target <= %s s: %s\n' "$(stats "${walls[@]}")" "$target_s" \
+        "$(awk -v w="$worst_wall" -v t="$target_s" 'BEGIN {print (w <= t ? "met" : "NOT met")}')"
+    printf '  RSS MB  min/median/max: %s   target <= %s MB: %s\n' "$(stats "${rsss[@]}")" "$target_mb" \
+        "$([ "$worst_rss" -le "$target_mb" ] && echo met || echo "NOT met")"
 }
 
 for size in $sizes; do
     case $size in
-        2m) generate "$dir/rows-2m.csv" 2000000 1; run "$dir/rows-2m.csv" ;;
-        260mb) generate_long "$dir/long-260mb.csv" 12500; run "$dir/long-260mb.csv" ;;
+        2m) generate "$dir/rows-2m.csv" 2000000 1; run "$dir/rows-2m.csv" 10 ;;
+        260mb) generate_long "$dir/long-260mb.csv" 12500; run "$dir/long-260mb.csv" 60 ;;
         *) echo "unknown size $size (expected 2m or 260mb)" >&2; exit 2 ;;
     esac
 done

@@ -26,7 +26,7 @@ final class CsvRows {
     record Row(int line, List<String> cells, int[] sourceColumns) {
 
         Row {
-            cells = cells instanceof Table.Cells ? cells : List.copyOf(cells);
+            cells = cells instanceof Table.Cells || cells instanceof Fields ? cells : List.copyOf(cells);
             sourceColumns = sourceColumns == null ? null : sourceColumns.clone();
         }
 
@@ -52,7 +52,12 @@ final class CsvRows {
             if (cells instanceof Table.Cells view) {
                 return view.blank();
             }
-            return cells.stream().allMatch(String::isEmpty);
+            for (int c = 0; c < cells.size(); c++) {
+                if (!cells.get(c).isEmpty()) {
+                    return false;
+                }
+            }
+            return true;
         }
 
         int nonEmptyCount() {
@@ -60,10 +65,30 @@ final class CsvRows {
         }
     }
 
+    /** The cells of a row just read, in an array no one else holds (so a row need not copy them). */
+    static final class Fields extends AbstractList<String> implements java.util.RandomAccess {
+        private final String[] cells;
+
+        /** @param cells an array the caller lets go of */
+        Fields(String[] cells) {
+            this.cells = cells;
+        }
+
+        @Override
+        public String get(int index) {
+            return cells[index];
+        }
+
+        @Override
+        public int size() {
+            return cells.length;
+        }
+    }
+
     /**
-     * The rows of a file held compactly: the trimmed text of every cell in one buffer, and where each
-     * cell and row starts, so that a file of millions of rows costs about its own size in memory rather
-     * than a string and a list per row. {@link #get} makes the {@link Row} of a record when asked.
+     * Rows held compactly (the first rows of a file, or a whole table that must be rearranged): the
+     * text of every cell in one buffer, and where each cell and row starts, rather than a string and a
+     * list per row. {@link #get} makes the {@link Row} of a record when asked.
      */
     static final class Table extends AbstractList<Row> {
         private final StringBuilder text;
@@ -72,35 +97,44 @@ final class CsvRows {
         private int[] rowFirstCells;
         private int[] rowLines;
         private int rowCount;
+        private int[][] rowSourceColumns;   // made for the first rearranged row
 
-        /**
-         * Sized once from what the reader expects (growing a big buffer by doubling would hold two
-         * copies at a time): {@code characters} of text in {@code rows} rows of {@code cellsPerRow}.
-         */
-        private Table(int characters, int rows, int cellsPerRow) {
-            text = new StringBuilder(Math.max(16, characters));
-            cellStarts = new int[(int) Math.min(Integer.MAX_VALUE - 16, Math.max(16L, (long) rows * cellsPerRow + 2))];
-            rowFirstCells = new int[Math.max(16, rows + 2)];
-            rowLines = new int[Math.max(16, rows + 2)];
+        Table() {
+            text = new StringBuilder(1024);
+            cellStarts = new int[64];
+            rowFirstCells = new int[16];
+            rowLines = new int[16];
         }
 
-        private void add(int line, CSVRecord record) {
+        void append(Row row) {
             if (rowCount + 1 >= rowFirstCells.length) {
                 rowFirstCells = Arrays.copyOf(rowFirstCells, grown(rowFirstCells.length));
                 rowLines = Arrays.copyOf(rowLines, grown(rowLines.length));
+                rowSourceColumns = rowSourceColumns == null ? null : Arrays.copyOf(rowSourceColumns, rowLines.length);
+            }
+            if (row.sourceColumns != null) {
+                if (rowSourceColumns == null) {
+                    rowSourceColumns = new int[rowLines.length][];
+                }
+                rowSourceColumns[rowCount] = row.sourceColumns;
             }
             rowFirstCells[rowCount] = cellCount;
-            rowLines[rowCount] = line;
+            rowLines[rowCount] = row.line();
             rowCount++;
-            for (String value : record) {
+            for (String value : row.cells()) {
                 if (cellCount + 1 >= cellStarts.length) {
                     cellStarts = Arrays.copyOf(cellStarts, grown(cellStarts.length));
                 }
                 cellStarts[cellCount++] = text.length();
-                appendClean(text, value);
+                text.append(value);
             }
             rowFirstCells[rowCount] = cellCount;
             cellStarts[cellCount] = text.length();
+        }
+
+        /** The characters of the cells held. */
+        long characters() {
+            return text.length();
         }
 
         private static int grown(int length) {
@@ -112,7 +146,8 @@ final class CsvRows {
             if (index < 0 || index >= rowCount) {
                 throw new IndexOutOfBoundsException(index);
             }
-            return new Row(rowLines[index], new Cells(rowFirstCells[index], rowFirstCells[index + 1]));
+            return new Row(rowLines[index], new Cells(rowFirstCells[index], rowFirstCells[index + 1]),
+                    rowSourceColumns == null ? null : rowSourceColumns[index]);
         }
 
         /** The cells of one row, each made into a string only when asked for. */
@@ -145,11 +180,6 @@ final class CsvRows {
         public int size() {
             return rowCount;
         }
-
-        /** The line of the last row, or 0 when there is none. */
-        private int lastLine() {
-            return rowCount == 0 ? 0 : rowLines[rowCount - 1];
-        }
     }
 
     /** Tab and semicolon first: when they split every line alike they are the delimiter, while a comma may be a decimal mark. */
@@ -158,11 +188,6 @@ final class CsvRows {
     private static final double CONSISTENT_SHARE = 0.8;
 
     private CsvRows() {
-    }
-
-    /** The delimiter that splits the first lines of the text into the same number (two or more) of cells. */
-    static char detectDelimiter(Reader text) {
-        return detectDelimiter(firstNonBlankLines(text, SAMPLE_LINES));
     }
 
     /** The delimiter that splits the first lines into the same number (two or more) of cells. */
@@ -194,51 +219,85 @@ final class CsvRows {
         return best;
     }
 
-    static List<Row> parse(String text, char delimiter, ProblemLog log) {
-        return parse(new StringReader(text), delimiter, log, new Expected(text.length(), 16, 2));
+    /** What a file's first lines were read for: a sample to find the delimiter by, and the whole text, as if unread. */
+    record Head(String sample, int sampleLines, Reader whole) {
     }
+
+    /** Largest head read to find the delimiter by, in characters. */
+    private static final int HEAD_CHARACTERS = 4 << 20;
 
     /**
-     * What a file is expected to hold, to size the table once: its length in characters (at most),
-     * its number of lines, and the cells of its first line.
+     * Reads the first {@link #SAMPLE_LINES} non-blank lines of {@code text} (and no further) for the
+     * delimiter to be found from; the reader given back reads the text from its start.
      */
-    record Expected(int characters, int lines, int cellsPerLine) {
-
-        /** From the bytes of a file: their number, their line feeds, the delimiters on the first line. */
-        static Expected of(byte[] bytes, int offset, char delimiter) {
-            int lines = 1;
-            int firstLineCells = 1;
-            boolean firstLine = true;
-            for (int i = offset; i < bytes.length; i++) {
-                byte b = bytes[i];
-                if (b == '\n') {
-                    lines++;
-                    firstLine = false;
-                } else if (firstLine && b == delimiter) {
-                    firstLineCells++;
+    static Head head(Reader text) {
+        StringBuilder read = new StringBuilder();
+        StringBuilder sample = new StringBuilder();
+        StringBuilder line = new StringBuilder();
+        int taken = 0;
+        boolean afterCarriageReturn = false;
+        char[] buffer = new char[8192];
+        try {
+            int n = 0;
+            while (taken < SAMPLE_LINES && read.length() < HEAD_CHARACTERS && (n = text.read(buffer)) >= 0) {
+                read.append(buffer, 0, n);
+                for (int i = 0; i < n; i++) {
+                    char c = buffer[i];
+                    boolean lineFeedOfCrLf = c == '\n' && afterCarriageReturn;
+                    afterCarriageReturn = c == '\r';
+                    if (lineFeedOfCrLf) {
+                        continue;
+                    }
+                    if (c == '\n' || c == '\r') {
+                        if (!line.toString().isBlank() && taken < SAMPLE_LINES) {
+                            sample.append(line).append('\n');
+                            taken++;
+                        }
+                        line.setLength(0);
+                    } else {
+                        line.append(c);
+                    }
                 }
             }
-            return new Expected(bytes.length - offset, lines, firstLineCells);
-        }
-    }
-
-    /** Reads the records of {@code text} as they come, without holding the text as a whole. */
-    static Table parse(Reader text, char delimiter, ProblemLog log, Expected expected) {
-        Table rows = new Table(expected.characters(), expected.lines(), expected.cellsPerLine());
-        LineCountingReader counted = new LineCountingReader(text);
-        try (CSVParser parser = CSVParser.parse(counted, format(delimiter))) {
-            for (CSVRecord record : parser) {
-                rows.add(counted.lineOf(record.getCharacterPosition()), record);
+            if (taken < SAMPLE_LINES && !line.toString().isBlank()) {
+                sample.append(line).append('\n');   // the last line, or a part of a very long one
+                taken++;
             }
-        } catch (IOException | UncheckedIOException | IllegalStateException malformed) {
-            int line = rows.isEmpty() ? 1 : rows.lastLine() + 1;
-            throw log.fatal(line, 0, "a quoted cell is never closed (" + rootMessage(malformed)
-                    + "); expected a closing double quote before the end of the file");
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
-        return rows;
+        return new Head(sample.toString(), taken, new PrefixedReader(read.toString(), text));
     }
 
-    private static CSVFormat format(char delimiter) {
+    /** Text given back, then the rest of a reader (which closing this leaves open). */
+    private static final class PrefixedReader extends Reader {
+        private final String prefix;
+        private final Reader rest;
+        private int position;
+
+        PrefixedReader(String prefix, Reader rest) {
+            this.prefix = prefix;
+            this.rest = rest;
+        }
+
+        @Override
+        public int read(char[] buffer, int offset, int length) throws IOException {
+            if (position < prefix.length()) {
+                int n = Math.min(length, prefix.length() - position);
+                prefix.getChars(position, position + n, buffer, offset);
+                position += n;
+                return n;
+            }
+            return rest.read(buffer, offset, length);
+        }
+
+        @Override
+        public void close() {
+            // the rest is closed by whoever opened it (its bytes may still be wanted, for their digest)
+        }
+    }
+
+    static CSVFormat format(char delimiter) {
         return CSVFormat.DEFAULT.builder()
                 .setDelimiter(delimiter)
                 .setQuote('"')
@@ -247,8 +306,8 @@ final class CsvRows {
                 .get();
     }
 
-    /** Appends the cell without the ordinary and no-break spaces that spreadsheet exports leave around cells. */
-    private static void appendClean(StringBuilder to, String value) {
+    /** The cell without the ordinary and no-break spaces that spreadsheet exports leave around cells. */
+    static String clean(String value) {
         int start = 0;
         int end = value.length();
         while (start < end && isSpace(value.charAt(start))) {
@@ -257,10 +316,10 @@ final class CsvRows {
         while (end > start && isSpace(value.charAt(end - 1))) {
             end--;
         }
-        to.append(value, start, end);
+        return start == 0 && end == value.length() ? value : value.substring(start, end);
     }
 
-    private static boolean isSpace(char c) {
+    static boolean isSpace(char c) {
         return Character.isWhitespace(c) || c == '\u00A0' || c == '\u202F' || c == '\u2007';
     }
 
@@ -286,7 +345,7 @@ final class CsvRows {
      * gives its line; a line break is {@code \n}, {@code \r\n} or a lone {@code \r}. Only the starts
      * not yet asked about are kept (the parser reads ahead by a buffer at most).
      */
-    private static final class LineCountingReader extends Reader {
+    static final class LineCountingReader extends Reader {
         private final Reader in;
         private long position;
         private boolean afterCarriageReturn;
@@ -344,7 +403,7 @@ final class CsvRows {
         }
     }
 
-    private static String rootMessage(Throwable e) {
+    static String rootMessage(Throwable e) {
         Throwable root = e;
         while (root.getCause() != null) {
             root = root.getCause();

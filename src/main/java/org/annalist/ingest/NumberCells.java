@@ -150,6 +150,28 @@ final class NumberCells {
     }
 
     /**
+     * The value of a cell of an optional minus and up to 15 digits ({@code -1234}), read without the
+     * patterns or any object, as {@link #parse} reads it with either mark; {@code NaN} for any other cell.
+     */
+    static double plainInteger(String cell) {
+        int length = cell.length();
+        boolean negative = length > 1 && cell.charAt(0) == '-';
+        int start = negative ? 1 : 0;
+        if (length == start || length > 15) {
+            return Double.NaN;
+        }
+        long n = 0;
+        for (int i = start; i < length; i++) {
+            char c = cell.charAt(i);
+            if (c < '0' || c > '9') {
+                return Double.NaN;
+            }
+            n = n * 10 + (c - '0');
+        }
+        return negative ? -(double) n : (double) n;
+    }
+
+    /**
      * For the commonest cells, a shortcut past the patterns: 0 for an optional minus and digits only
      * ({@code -1234}), 1 for digits with one point between digits ({@code 12.5}), -1 for anything else.
      */

@@ -67,6 +67,16 @@ final class PeriodCells {
         String text = cell.trim();
         Matcher m;
         try {
+            if (isDigits(text, 0, 4) && text.length() >= 7 && text.charAt(4) == '-' && isDigits(text, 5, 7)) {
+                // The commonest cells, 2024-03-01 and 2024-03, read without the patterns (as they would read them).
+                if (text.length() == 10 && text.charAt(7) == '-' && isDigits(text, 8, 10)) {
+                    return Optional.of(new Day(LocalDate.of(number(text, 0, 4), number(text, 5, 7), number(text, 8, 10)),
+                            "YYYY-MM-DD"));
+                }
+                if (text.length() == 7) {
+                    return month(number(text, 0, 4), number(text, 5, 7), "YYYY-MM");
+                }
+            }
             if ((m = ISO_DATE.matcher(text)).matches()) {
                 return Optional.of(new Day(LocalDate.of(i(m, 1), i(m, 3), i(m, 4)), "YYYY-MM-DD"));
             }
@@ -123,6 +133,27 @@ final class PeriodCells {
 
     static Frequency frequencyOf(Fixed fixed) {
         return fixed.period().frequency();
+    }
+
+    private static boolean isDigits(String text, int from, int to) {
+        if (text.length() < to) {
+            return false;
+        }
+        for (int i = from; i < to; i++) {
+            char c = text.charAt(i);
+            if (c < '0' || c > '9') {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static int number(String text, int from, int to) {
+        int n = 0;
+        for (int i = from; i < to; i++) {
+            n = n * 10 + (text.charAt(i) - '0');
+        }
+        return n;
     }
 
     private static Optional<Parsed> month(int year, int month, String format) {

@@ -34,6 +34,17 @@ final class ProblemLog {
         }
     }
 
+    /**
+     * Counts {@code count} more errors of a kind already shown {@link #MAX_ERRORS} times: their text
+     * was not kept, and the log would not show it.
+     */
+    void moreErrors(long count) {
+        if (count > 0 && errors.size() < MAX_ERRORS) {
+            throw new IllegalStateException("an error to show was not kept");
+        }
+        suppressedErrors += (int) Math.min(count, Integer.MAX_VALUE - suppressedErrors);
+    }
+
     void warn(int line, int column, String message) {
         if (warnings.size() < MAX_WARNINGS) {
             warnings.add(new DataProblem(file, line, column, message));

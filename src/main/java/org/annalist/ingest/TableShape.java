@@ -1,19 +1,17 @@
 package org.annalist.ingest;
 
-import java.util.AbstractList;
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
-import java.util.Objects;
 import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.annalist.ingest.CsvRows.Row;
 
 /**
- * Finds the table inside a file's rows: the period column, the header row (if any), the data rows,
- * and what each other column holds (values, the names of series in a long layout, units, flags).
- * Title lines above the header and notes below the data are set aside with a warning.
+ * Finds the table in the first rows of a file: the period column, the header row (if any), the first
+ * data row, and what each other column holds (values, the names of series in a long layout, units,
+ * flags). Title lines above the header are set aside with a warning; the rows below are followed by
+ * {@link BodyRows}.
  */
 final class TableShape {
 
@@ -21,17 +19,6 @@ final class TableShape {
 
     /** A column with its role and its name (header text, without a unit in brackets). */
     record Column(int index, Role role, String name, String unit) {
-    }
-
-    record Shape(Optional<Row> header, List<Row> body, List<Column> columns) {
-
-        Column periodColumn() {
-            return columns.stream().filter(c -> c.role() == Role.PERIOD).findFirst().orElseThrow();
-        }
-
-        List<Column> with(Role role) {
-            return columns.stream().filter(c -> c.role() == role).toList();
-        }
     }
 
     private static final Pattern PERIOD_HEADER = Pattern.compile(
@@ -49,55 +36,115 @@ final class TableShape {
     private TableShape() {
     }
 
-    /** The rows that are not blank, as a view (a big file's rows are not copied). */
-    private static List<Row> nonBlank(List<Row> all) {
-        int[] kept = new int[Math.max(16, all.size())];
-        int count = 0;
-        for (int r = 0; r < all.size(); r++) {
-            if (!all.get(r).isBlank()) {
-                kept[count++] = r;
-            }
-        }
-        int size = count;
-        return new AbstractList<>() {
-            @Override
-            public Row get(int index) {
-                Objects.checkIndex(index, size);
-                return all.get(kept[index]);
-            }
+    /**
+     * Beyond the sample, the first rows are read on until every column has shown a value (a series
+     * that starts late), up to this many rows; a column still empty by then stays as it was classed.
+     */
+    static final int HEAD_LIMIT = 100_000;
 
-            @Override
-            public int size() {
-                return size;
-            }
-        };
+    /**
+     * The table's layout as the first rows of a file show it.
+     *
+     * @param firstData the index (among the rows given) of the first row of data
+     */
+    record Shape(Optional<Row> header, int firstData, List<Column> columns) {
+
+        Column periodColumn() {
+            return columns.stream().filter(c -> c.role() == Role.PERIOD).findFirst().orElseThrow();
+        }
+
+        List<Column> with(Role role) {
+            return columns.stream().filter(c -> c.role() == role).toList();
+        }
     }
 
-    static Shape locate(List<Row> allRows, ProblemLog log) {
-        List<Row> rows = nonBlank(allRows);
-        if (rows.isEmpty()) {
-            throw log.fatal(0, 0, "the file is empty; expected a header row and rows of dates or periods with values");
+    /**
+     * The first rows of a file (blank rows left out), collected until they settle the layout: the
+     * sample of {@link #LAYOUT_SAMPLE} rows below the first data row, and on until every column has
+     * shown a value or {@link #HEAD_LIMIT} rows.
+     */
+    static final class Head {
+        private final CsvRows.Table rows = new CsvRows.Table();
+        private boolean[] unfilled;
+        private int unfilledCount;
+
+        void add(Row row) {
+            rows.append(row);
+            if (rows.size() == 2 * LAYOUT_SAMPLE) {
+                findUnfilled();
+            } else if (unfilled != null && unfilledCount > 0) {
+                fill(row);
+            }
         }
+
+        /** True when the rows held settle the layout (more rows would change nothing). */
+        boolean complete() {
+            return rows.size() >= 2 * LAYOUT_SAMPLE && (unfilledCount == 0 || rows.size() >= HEAD_LIMIT);
+        }
+
+        List<Row> rows() {
+            return rows;
+        }
+
+        private void findUnfilled() {
+            try {
+                int periodColumn = findPeriodColumn(rows.subList(0, LAYOUT_SAMPLE), width(rows), new ProblemLog(""));
+                int first = firstData(rows, periodColumn);
+                int width = Math.max(width(rows), first > 0 ? rows.get(first - 1).cells().size() : 0);
+                unfilled = new boolean[width];
+                for (int c = 0; c < width; c++) {
+                    unfilled[c] = c != periodColumn;
+                }
+                unfilledCount = width - 1;
+                for (int r = first; r < rows.size(); r++) {
+                    fill(rows.get(r));
+                }
+            } catch (DataProblemException noLayout) {
+                unfilledCount = 0;   // reported when the layout is settled
+            }
+        }
+
+        private void fill(Row row) {
+            for (int c = 0; c < unfilled.length && unfilledCount > 0; c++) {
+                if (unfilled[c] && !NumberCells.isMissingMarker(row.cell(c))) {
+                    unfilled[c] = false;
+                    unfilledCount--;
+                }
+            }
+        }
+    }
+
+    /** The widest row's width, up to its last non-empty cell. */
+    private static int width(List<Row> rows) {
         int width = 0;
         for (Row row : rows) {
             width = Math.max(width, effectiveWidth(row));
         }
+        return width;
+    }
+
+    private static int firstData(List<Row> rows, int periodColumn) {
+        for (int r = 0; r < rows.size(); r++) {
+            if (PeriodCells.parse(rows.get(r).cell(periodColumn)).isPresent()) {
+                return r;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * The layout of the table that starts in {@code rows} (the first rows of a file, none blank): the
+     * period column, the header, the first data row, and what each column holds. Title lines above
+     * the header are set aside with a warning. When {@code wholeFile}, notes below the data are not
+     * taken for data in classing the columns.
+     */
+    static Shape locate(List<Row> rows, boolean wholeFile, ProblemLog log) {
+        if (rows.isEmpty()) {
+            throw log.fatal(0, 0, "the file is empty; expected a header row and rows of dates or periods with values");
+        }
+        int width = width(rows);
         int periodColumn = findPeriodColumn(rows.subList(0, Math.min(rows.size(), LAYOUT_SAMPLE)), width, log);
-        int firstData = -1;
-        int lastData = -1;
-        for (int r = 0; r < rows.size() && firstData < 0; r++) {
-            if (PeriodCells.parse(rows.get(r).cell(periodColumn)).isPresent()) {
-                firstData = r;
-            }
-        }
-        for (int r = rows.size() - 1; r >= 0 && lastData < 0; r--) {
-            if (PeriodCells.parse(rows.get(r).cell(periodColumn)).isPresent()) {
-                lastData = r;
-            }
-        }
-        while (lastData + 1 < rows.size() && !isNote(rows.get(lastData + 1), periodColumn)) {
-            lastData++;   // a data row with a bad period: kept, so that it is reported rather than skipped
-        }
+        int firstData = firstData(rows, periodColumn);
         Optional<Row> header = Optional.empty();
         if (firstData > 0) {
             header = Optional.of(rows.get(firstData - 1));
@@ -105,55 +152,20 @@ final class TableShape {
                 log.warn(title.line(), 0, "line set aside as a title above the header: '" + preview(title) + "'");
             }
         }
-        for (Row note : rows.subList(lastData + 1, rows.size())) {
-            log.warn(note.line(), 0, "line set aside as a note below the data: '" + preview(note) + "'");
-        }
-        List<Row> body = rows.subList(firstData, lastData + 1);
-        checkWidths(header, body, log);
-        if (header.isPresent() && effectiveWidth(header.get()) > width) {
-            width = effectiveWidth(header.get());
-        }
-        return new Shape(header, Collections.unmodifiableList(body), classify(header, body, width, periodColumn));
-    }
-
-    /**
-     * A data row with more fields than the header is refused (a value with an unquoted comma, such as
-     * {@code 1,234}, splits in two and would shift every cell after it); a row with fewer fields reads
-     * the fields missing at its end as missing values, said in one warning naming the lines. Without a
-     * header, the first data row sets the width.
-     */
-    private static void checkWidths(Optional<Row> header, List<Row> body, ProblemLog log) {
         // A trailing delimiter of the header declares a column (filled further down, or padding), one of a row does not.
-        Row reference = header.orElse(body.get(0));
-        int widest = reference.cells().size();
-        int expected = effectiveWidth(reference);
-        String against = header.isPresent() ? "the header has " : "the first data row has ";
-        List<Integer> shortLines = new ArrayList<>();
-        int shortCount = 0;
-        int firstShortFields = 0;
-        for (Row row : body) {
-            int fields = row.cells().size();
-            if (fields > widest && effectiveWidth(row) > widest) {
-                log.error(row.line(), row.column(widest), "this row has " + effectiveWidth(row) + " fields but " + against
-                        + widest + "; expected at most " + widest + " (quote a cell that holds the delimiter, "
-                        + "such as \"1,234\")");
-            } else if (fields < expected) {
-                if (shortCount == 0) {
-                    firstShortFields = fields;
-                }
-                if (shortLines.size() < 5) {
-                    shortLines.add(row.line());
-                }
-                shortCount++;
+        width = Math.max(width, header.map(h -> h.cells().size()).orElse(0));
+        int end = rows.size();
+        if (wholeFile) {
+            int lastData = rows.size() - 1;
+            while (lastData > firstData && PeriodCells.parse(rows.get(lastData).cell(periodColumn)).isEmpty()) {
+                lastData--;
             }
+            while (lastData + 1 < rows.size() && !isNote(rows.get(lastData + 1), periodColumn)) {
+                lastData++;
+            }
+            end = lastData + 1;
         }
-        if (shortCount > 0) {
-            String lines = shortLines.stream().map(String::valueOf).collect(java.util.stream.Collectors.joining(", "));
-            String more = shortCount > shortLines.size() ? " and " + (shortCount - shortLines.size()) + " more lines" : "";
-            log.warn(shortLines.get(0), 0, (shortCount == 1 ? "this row has " + firstShortFields + " fields but "
-                    : "rows with fewer fields than expected (lines " + lines + more + "): ") + against + expected
-                    + "; the missing fields were read as missing values");
-        }
+        return new Shape(header, firstData, classify(header, rows.subList(firstData, end), width, periodColumn));
     }
 
     private static int findPeriodColumn(List<Row> rows, int width, ProblemLog log) {
@@ -230,7 +242,7 @@ final class TableShape {
      * A row below the data that reads as a footnote or total rather than a data row with a mistyped
      * period: its period cell is empty or starts with a letter other than the Q of a quarter.
      */
-    private static boolean isNote(Row row, int periodColumn) {
+    static boolean isNote(Row row, int periodColumn) {
         String cell = row.cell(periodColumn);
         return cell.isEmpty() || (Character.isLetter(cell.charAt(0)) && !cell.matches("(?i)q[1-4].*")
                 && PeriodCells.parse(cell).isEmpty());
@@ -246,7 +258,7 @@ final class TableShape {
         return 0;
     }
 
-    private static String preview(Row row) {
+    static String preview(Row row) {
         String text = String.join(" ", row.cells().stream().filter(s -> !s.isEmpty()).toList());
         return text.length() > 60 ? text.substring(0, 57) + "..." : text;
     }

@@ -66,6 +66,32 @@ final class Transposed {
         return out;
     }
 
+    /**
+     * Whether the first table rows of a file (blank ones left out) are of this layout, as far as
+     * {@code row}, the next of them, tells: true when it is a header of periods, false when it is an
+     * ordinary header or data row, null when it tells nothing (a title line of one cell).
+     */
+    static Boolean decides(Row row) {
+        if (firstPeriodOfHeader(row) > 0) {
+            return true;
+        }
+        return row.nonEmptyCount() >= 2 ? false : null;
+    }
+
+    /** The column of the first period when {@code row} is a header of periods after labels; -1 when it is not. */
+    private static int firstPeriodOfHeader(Row row) {
+        int periods = 0;
+        int first = -1;
+        for (int c = 0; c < row.cells().size(); c++) {
+            if (PeriodCells.parse(row.cell(c)).isPresent()) {
+                periods++;
+                first = first < 0 ? c : first;
+            }
+        }
+        boolean labelledRows = first > 0 && PeriodCells.parse(row.cell(0)).isEmpty();
+        return periods >= MIN_PERIOD_HEADERS && labelledRows && periods >= (row.cells().size() - first) * 0.9 ? first : -1;
+    }
+
     /** The rows unfolded when the header holds the periods; the rows unchanged otherwise. */
     static List<Row> unfold(List<Row> rows, ProblemLog log) {
         int headerIndex = -1;
@@ -75,16 +101,8 @@ final class Transposed {
             if (row.isBlank()) {
                 continue;
             }
-            int periods = 0;
-            int first = -1;
-            for (int c = 0; c < row.cells().size(); c++) {
-                if (PeriodCells.parse(row.cell(c)).isPresent()) {
-                    periods++;
-                    first = first < 0 ? c : first;
-                }
-            }
-            boolean labelledRows = first > 0 && PeriodCells.parse(row.cell(0)).isEmpty();
-            if (periods >= MIN_PERIOD_HEADERS && labelledRows && periods >= (row.cells().size() - first) * 0.9) {
+            int first = firstPeriodOfHeader(row);
+            if (first > 0) {
                 headerIndex = r;
                 firstPeriod = first;
             } else if (row.nonEmptyCount() >= 2) {

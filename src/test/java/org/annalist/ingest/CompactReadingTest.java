@@ -69,6 +69,12 @@ class CompactReadingTest {
             assertThat(NumberCells.looksNumeric(cell)).isTrue();
             assertThat(NumberCells.isMissingMarker(cell)).isFalse();
         }
+        for (String cell : new String[] {"0", "-0", "12", "-12", "0012", "123456789012345"}) {
+            assertThat(NumberCells.plainInteger(cell)).as(cell).isEqualTo(Double.parseDouble(cell));
+        }
+        for (String cell : new String[] {"", "-", "12.5", "1,234", "12p", "1234567890123456", "NA", "--1"}) {
+            assertThat(NumberCells.plainInteger(cell)).as(cell).isNaN();
+        }
         assertThat(NumberCells.parse("12.5", DecimalMark.COMMA, new StringBuilder())).isEmpty();
         assertThat(NumberCells.evidence("12.5")).isEqualTo(NumberCells.Evidence.POINT);
         assertThat(NumberCells.evidence("1234")).isEqualTo(NumberCells.Evidence.NONE);
