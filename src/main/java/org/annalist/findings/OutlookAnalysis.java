@@ -190,6 +190,7 @@ final class OutlookAnalysis {
         OutlookFinding.Choice.Basis basis = switch (choice.basis()) {
             case COMBINATION_NOT_BEATEN -> OutlookFinding.Choice.Basis.COMBINATION_NOT_BEATEN;
             case SINGLE_CLEARLY_BETTER -> OutlookFinding.Choice.Basis.SINGLE_CLEARLY_BETTER;
+            case COMBINATION_TOO_FEW_TESTED -> OutlookFinding.Choice.Basis.COMBINATION_TOO_FEW_TESTED;
             case COMBINATION_WITHOUT_BACKTEST -> OutlookFinding.Choice.Basis.COMBINATION_WITHOUT_BACKTEST;
             case SHORT_SERIES -> OutlookFinding.Choice.Basis.SHORT_SERIES;
         };

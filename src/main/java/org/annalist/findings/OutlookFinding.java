@@ -81,6 +81,8 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
             COMBINATION_NOT_BEATEN,
             /** A single method was clearly and steadily better in the back-test. */
             SINGLE_CLEARLY_BETTER,
+            /** The back-test made too few forecasts to prefer a single method: the combination. */
+            COMBINATION_TOO_FEW_TESTED,
             /** No back-test was possible: the combination by default. */
             COMBINATION_WITHOUT_BACKTEST,
             /** Too few values for the usual methods. */
@@ -89,7 +91,8 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
 
         /** Whether the choice rests on a back-test. */
         public boolean backtested() {
-            return basis == Basis.COMBINATION_NOT_BEATEN || basis == Basis.SINGLE_CLEARLY_BETTER;
+            return basis == Basis.COMBINATION_NOT_BEATEN || basis == Basis.SINGLE_CLEARLY_BETTER
+                    || basis == Basis.COMBINATION_TOO_FEW_TESTED;
         }
     }
 

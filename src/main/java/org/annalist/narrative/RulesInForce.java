@@ -48,7 +48,8 @@ final class RulesInForce {
                         + " or more within two seasonal cycles an unusual stretch"),
                 new Rule("The outlook uses one method, not the average of three / only the values since the latest"
                         + " break, when", "its back-test error is at least " + Terms.number(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT)
-                        + "\u00A0% lower, in both halves of the test / at least "
+                        + "\u00A0% lower, in both halves of a test of at least "
+                        + Terms.number(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS) + " forecasts / at least "
                         + Terms.number(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT)
                         + "\u00A0% lower"),
                 new Rule("Next year called about the same as this year when", "the 80\u00A0% interval of the change"

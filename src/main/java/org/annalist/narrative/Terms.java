@@ -181,6 +181,9 @@ final class Terms {
             case COMBINATION_NOT_BEATEN -> String.format(Locale.ROOT, "the combination by default: no single method was"
                     + " clearly and steadily better in a rolling-origin back-test over the last %d periods", c.origins())
                     + scores;
+            case COMBINATION_TOO_FEW_TESTED -> String.format(Locale.ROOT, "the combination by default: a rolling-origin"
+                    + " back-test over the last %d periods made too few forecasts to prefer a single method", c.origins())
+                    + scores;
             case SINGLE_CLEARLY_BETTER -> String.format(Locale.ROOT, "clearly and steadily more accurate than the"
                     + " combination in a rolling-origin back-test over the last %d periods", c.origins()) + scores;
             case COMBINATION_WITHOUT_BACKTEST -> "the combination by default, without a back-test";

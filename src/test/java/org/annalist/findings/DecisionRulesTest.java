@@ -29,6 +29,8 @@ class DecisionRulesTest {
     void theOutlooksMarginsAreTheDecisionRules() {
         assertThat(org.annalist.analysis.forecast.Outlook.METHOD_ADVANTAGE_PCT)
                 .isEqualTo(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT);
+        assertThat(org.annalist.analysis.forecast.Outlook.MIN_CHOICE_FORECASTS)
+                .isEqualTo(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS);
         assertThat(org.annalist.analysis.forecast.Outlook.REGIME_ADVANTAGE_PCT)
                 .isEqualTo(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT);
     }

@@ -32,6 +32,10 @@ class TermsTest {
                 Optional.of(OutlookMethod.THETA), 0.7))).isEqualTo("clearly and steadily more accurate than the"
                 + " combination in a rolling-origin back-test over the last 8 periods (MASE: combination 0.90, best"
                 + " single method Theta 0.70)");
+        assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.COMBINATION_TOO_FEW_TESTED, 8, 0.9,
+                Optional.of(OutlookMethod.THETA), 0.4))).isEqualTo("the combination by default: a rolling-origin"
+                + " back-test over the last 8 periods made too few forecasts to prefer a single method (MASE:"
+                + " combination 0.90, best single method Theta 0.40)");
         assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.COMBINATION_WITHOUT_BACKTEST, 0,
                 Double.NaN, Optional.empty(), Double.NaN))).isEqualTo("the combination by default, without a back-test");
     }

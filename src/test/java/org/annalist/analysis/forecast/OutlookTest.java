@@ -106,8 +106,9 @@ class OutlookTest {
         assertThat(outlook.cycle()).isEqualTo(1);
         assertThat(outlook.origins()).isEqualTo(8);
         Outlook.Choice choice = outlook.choice();
-        assertThat(choice.basis()).isIn(Outlook.Choice.Basis.COMBINATION_NOT_BEATEN,
-                Outlook.Choice.Basis.SINGLE_CLEARLY_BETTER);
+        assertThat(choice.basis()).as("eight one-step forecasts are too few to choose on")
+                .isEqualTo(Outlook.Choice.Basis.COMBINATION_TOO_FEW_TESTED);
+        assertThat(outlook.chosen().method()).isEqualTo(Outlook.Method.COMBINATION);
         assertThat(choice.origins()).isEqualTo(8);
         assertThat(choice.combination()).contains(outlook.backtest().get(0));
         assertThat(choice.bestSingle()).contains(outlook.backtest().get(1));
@@ -279,9 +280,23 @@ class OutlookTest {
     }
 
     private static Outlook.Score score(Outlook.Method method, double mae, double earlier, double later) {
+        return score(method, mae, earlier, later, 24);
+    }
+
+    private static Outlook.Score score(Outlook.Method method, double mae, double earlier, double later, int forecasts) {
         HorizonErrors none = new HorizonErrors(new double[1], new double[1], new int[1],
                 new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
-        return new Outlook.Score(method, mae / 10, 5, mae, earlier / 10, later / 10, 5, 24, none);
+        return new Outlook.Score(method, mae / 10, 5, mae, earlier / 10, later / 10, 5, forecasts, none);
+    }
+
+    /** The rule's minimum (Outlook.MIN_CHOICE_FORECASTS = 20): eight forecasts, as yearly data give, choose nothing. */
+    @Test
+    void aSingleMethodDoesNotReplaceTheCombinationOnTooFewBacktestForecasts() {
+        Outlook.Score combination = score(Outlook.Method.COMBINATION, 10, 10, 10, 8);
+        Outlook.Score clear = score(Outlook.Method.THETA, 4, 4.5, 3.5, 8);
+        Outlook.Choice choice = Outlook.choose(new Backtest.Run(List.of(combination, clear), Backtest.COMBINABLE, 8, 10));
+        assertThat(choice.basis()).isEqualTo(Outlook.Choice.Basis.COMBINATION_TOO_FEW_TESTED);
+        assertThat(choice.bestSingle()).contains(clear);
     }
 
     /**
