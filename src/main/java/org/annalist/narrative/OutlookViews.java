@@ -100,7 +100,7 @@ final class OutlookViews {
     /** Why this method: the reason the combination is the default, and what the back-test showed. */
     static String why(OutlookFinding o, Formats f, String range) {
         String tested = "Each method was tested by forecasting each of the last " + f.count(o.backtestPeriods())
-                + " periods (" + range + ") from the data before it, as if made at the time";
+                + " periods (" + range + ") from the data before it";
         String asMuch = asMuch(org.annalist.findings.DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT);
         String averages = "Averages of several methods have forecast more accurately, on average, than any one"
                 + " method chosen in advance in large forecasting competitions";
