@@ -6,7 +6,8 @@
 # series, the point forecasts and the 80 % and 95 % limits of forecast::ets(), forecast::auto.arima()
 # and forecast::thetaf() with their default settings, h = the number of held-out values, rounded to
 # seven significant digits. dev/m3/r-{yearly,quarterly,monthly}.csv were made so on this project's
-# machine (R 4.2.2, forecast 8.20, December 2026); the monthly run takes about an hour of CPU.
+# machine (R 4.2.2, forecast 8.20, December 2026); the monthly run takes more than 80 minutes of CPU
+# (it writes its output only at the end).
 # Nothing is read or written besides the two input files and the named output.
 args <- commandArgs(trailingOnly = TRUE)
 suppressMessages(library(forecast))
