@@ -108,8 +108,8 @@ final class OutlookViews {
             case COMBINATION_NOT_BEATEN -> averages + ". " + tested + "; no single method did clearly better than the"
                     + " average (missing by " + asMuch + " or less, in both the earlier and the later half of the"
                     + " test), so the average is used.";
-            case COMBINATION_TOO_FEW_TESTED -> averages + ". " + tested + "; so few forecasts cannot show one method"
-                    + " to be better than the average, so the average is used.";
+            case COMBINATION_TOO_FEW_TESTED -> averages + ". " + tested + "; that many forecasts are too few to show"
+                    + " one method better than the average, which is therefore used.";
             case SINGLE_CLEARLY_BETTER -> tested + "; this one missed by " + asMuch + " as the average of the methods"
                     + " or less, in both the earlier and the later half of the test, so it is used instead of the"
                     + " average.";
