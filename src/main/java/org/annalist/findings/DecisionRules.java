@@ -72,6 +72,13 @@ public final class DecisionRules {
      */
     public static final double PATTERN_CHANGE_SHARE_OF_SWING = 0.25;
 
+    /**
+     * The peak "moved" only when the early peak's season is now below the new peak by more than a
+     * tenth of the swing (our rule: two seasons closer than that print alike or nearly so, and which
+     * of them is a hair higher flips with a year's noise).
+     */
+    public static final double PEAK_MOVE_SHARE_OF_SWING = 0.10;
+
     // ---- cycles -----------------------------------------------------------------------------
 
     /** A cycle is longer than two years (FPP3 §2.3: cycles last "at least 2 years"). */

@@ -59,11 +59,15 @@ final class SeasonalityFindings {
 
     /**
      * Changed when the early and late profiles do not overlap and a position's index moved by more
-     * than {@link DecisionRules#PATTERN_CHANGE_SHARE_OF_SWING} of the swing, or the peak moved.
+     * than {@link DecisionRules#PATTERN_CHANGE_SHARE_OF_SWING} of the swing, or the peak moved: the
+     * early peak's season now lies more than {@link DecisionRules#PEAK_MOVE_SHARE_OF_SWING} of the
+     * swing below the new peak (two seasons closer than that are a tie, not a move).
      */
     private static boolean changed(SeasonalPattern.Result s) {
+        double oldPeakNow = s.profile().stream().filter(i -> i.position() == s.earlyPeak().position())
+                .mapToDouble(SeasonalPattern.Index::value).findFirst().orElse(s.peak().value());
         return s.fullYears() >= 2 * SeasonalPattern.PROFILE_YEARS
                 && (s.largestShift() > DecisionRules.PATTERN_CHANGE_SHARE_OF_SWING * s.swing()
-                || s.earlyPeak().position() != s.peak().position());
+                || s.peak().value() - oldPeakNow > DecisionRules.PEAK_MOVE_SHARE_OF_SWING * s.swing());
     }
 }

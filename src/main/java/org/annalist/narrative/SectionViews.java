@@ -80,8 +80,8 @@ final class SectionViews {
         SeasonalityFinding.ProfilePoint trough = extreme(s, false);
         return new BriefView.SeasonView(verdict == SeasonVerdict.PRESENT, verdict == SeasonVerdict.NEGLIGIBLE, false,
                 false, String.valueOf(s.period()), f.fixed(s.strength(), 2), Terms.seasonalStrength(s.strength()),
-                Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), f.seasonName(series.frequency(), peak.position()),
-                index(peak.index(), multiplicative), f.seasonName(series.frequency(), trough.position()), index(trough.index(), multiplicative),
+                Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), printedEqual(s, peak, multiplicative),
+                index(peak.index(), multiplicative), printedEqual(s, trough, multiplicative), index(trough.index(), multiplicative),
                 multiplicative ? f.fixed(s.swing(), 0) : f.significant(s.swing()),
                 multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years, formFromMeasure());
     }
@@ -169,7 +169,7 @@ final class SectionViews {
     BriefView.IrregularView irregular() {
         IrregularFinding irregular = findings.irregular();
         return irregular.share() == null ? new BriefView.IrregularView(null, "", false)
-                : new BriefView.IrregularView(irregular.size().code(), f.fixed(100 * irregular.share(), 0) + "\u00A0%",
+                : new BriefView.IrregularView(irregular.size().code(), roughShare(irregular.share()),
                 irregular.size() == IrregularFinding.Size.LARGE);
     }
 
@@ -291,6 +291,23 @@ final class SectionViews {
     private String index(double value, boolean multiplicative) {
         return multiplicative ? f.signedFixed(value, 0) + "\u00A0%" : f.signedSignificant(value)
                 + measure.differenceUnit();
+    }
+
+    /** "about 12 %"; a share that rounds to 0 or 100 % is "under 1 %" or "over 99 %", never "about 0 %". */
+    private String roughShare(double share) {
+        double pct = 100 * share;
+        return pct < 0.5 ? "under 1\u00A0%" : pct >= 99.5 ? "over 99\u00A0%" : "about " + f.fixed(pct, 0) + "\u00A0%";
+    }
+
+    /**
+     * The extreme's season, with every other season whose index prints the same ("July and August"):
+     * naming one of two seasons the reader sees as equal would single it out on a difference the
+     * brief does not show.
+     */
+    private String printedEqual(SeasonalityFinding s, SeasonalityFinding.ProfilePoint extreme, boolean multiplicative) {
+        String printed = index(extreme.index(), multiplicative);
+        return Terms.listed(s.profile().stream().filter(p -> index(p.index(), multiplicative).equals(printed))
+                .map(p -> f.seasonName(series.frequency(), p.position())).toList());
     }
 
     private static SeasonalityFinding.ProfilePoint extreme(SeasonalityFinding s, boolean highest) {
