@@ -35,7 +35,7 @@ import org.annalist.series.SeriesBuilder;
  * <p>Usage, from the top folder after {@code mvn -q -B -DskipTests package}:
  * {@code java -cp target/annalist.jar:target/test-classes org.annalist.cli.M3Benchmark
  * ../shared/reference-data/forecasting [--r dev/m3] [--only monthly] [--every K] [--threads N]}.
- * {@code --variant none} prints only the published and R's figures. {@code --every K} takes every K-th series (a quick look while developing); the figures of record
+ * {@code --variant none} prints only the published and R's figures. {@code --by-step} adds each of our methods' coverage step by step ahead. {@code --every K} takes every K-th series (a quick look while developing); the figures of record
  * are over all series.
  */
 public final class M3Benchmark {
@@ -62,6 +62,10 @@ public final class M3Benchmark {
         long withIntervals;
         int missing;
         long nanos;
+        /** Per step ahead (index 0 = one step): values with intervals, and those inside the 80 and 95 % intervals. */
+        final long[] stepCount = new long[48];
+        final long[] step80 = new long[48];
+        final long[] step95 = new long[48];
 
         synchronized void add(M3Series s, int period, Forecast f) {
             double scale = naiveScale(s.train(), period);
@@ -77,6 +81,11 @@ public final class M3Benchmark {
                     withIntervals++;
                     covered80 += a >= f.lo80()[k] && a <= f.hi80()[k] ? 1 : 0;
                     covered95 += a >= f.lo95()[k] && a <= f.hi95()[k] ? 1 : 0;
+                    if (k < stepCount.length) {
+                        stepCount[k]++;
+                        step80[k] += a >= f.lo80()[k] && a <= f.hi80()[k] ? 1 : 0;
+                        step95[k] += a >= f.lo95()[k] && a <= f.hi95()[k] ? 1 : 0;
+                    }
                 }
             }
             mase += absolute / h / scale;
@@ -99,6 +108,7 @@ public final class M3Benchmark {
         int every = 1;
         int threads = Runtime.getRuntime().availableProcessors();
         List<String> variants = new ArrayList<>();
+        boolean byStep = false;
         for (int i = 1; i < args.length; i += 2) {
             switch (args[i]) {
                 case "--r" -> rFolder = Optional.of(Path.of(args[i + 1]));
@@ -106,6 +116,10 @@ public final class M3Benchmark {
                 case "--every" -> every = Integer.parseInt(args[i + 1]);
                 case "--threads" -> threads = Integer.parseInt(args[i + 1]);
                 case "--variant" -> variants.add(args[i + 1]);
+                case "--by-step" -> {
+                    byStep = true;
+                    i--;
+                }
                 default -> throw new IllegalArgumentException("unknown option " + args[i]);
             }
         }
@@ -113,12 +127,12 @@ public final class M3Benchmark {
         out.printf(Locale.ROOT, "%-10s %-22s %7s %8s %8s %8s %8s %9s%n", "frequency", "method", "series", "MASE",
                 "sMAPE", "cov80", "cov95", "CPU ms/series");
         for (String frequency : frequencies) {
-            run(folder, rFolder, frequency, every, threads, variants, out);
+            run(folder, rFolder, frequency, every, threads, variants, byStep, out);
         }
     }
 
     private static void run(Path folder, Optional<Path> rFolder, String frequency, int every, int threads,
-                            List<String> variants, PrintStream out) throws IOException {
+                            List<String> variants, boolean byStep, PrintStream out) throws IOException {
         Frequency f = switch (frequency) {
             case "monthly" -> Frequency.MONTHLY;
             case "quarterly" -> Frequency.QUARTERLY;
@@ -156,6 +170,20 @@ public final class M3Benchmark {
             out.printf(Locale.ROOT, "%-10s %-22s %7d %8.3f %8.2f %8s %8s %s%s%n", frequency, e.getKey(), t.series,
                     t.mase / t.series, t.smape / t.series, share(t.covered80, t.withIntervals),
                     share(t.covered95, t.withIntervals), ms, t.missing > 0 ? "  (no forecast for " + t.missing + ")" : "");
+        }
+        if (byStep) {
+            for (String name : names) {
+                Tally t = tallies.get(name);
+                if (t == null) {
+                    continue;
+                }
+                StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-10s %-22s cov80/cov95 by step:", frequency, name));
+                for (int k = 0; k < t.stepCount.length && t.stepCount[k] > 0; k++) {
+                    line.append(String.format(Locale.ROOT, " %d:%s/%s", k + 1, share(t.step80[k], t.stepCount[k]).trim(),
+                            share(t.step95[k], t.stepCount[k]).trim()));
+                }
+                out.println(line);
+            }
         }
     }
 
