@@ -42,6 +42,7 @@ final class MergedCells {
     private final List<Range> waiting = new ArrayList<>();
     private final List<Range> active = new ArrayList<>();
     private int nextWaiting;
+    private int reach;
     private boolean sorted = true;
 
     /** Adds a range (1-based rows, 0-based columns). */
@@ -56,6 +57,12 @@ final class MergedCells {
             sorted = false;
         }
         waiting.add(range);
+        reach = Math.max(reach, range.lastRow);
+    }
+
+    /** The last row any range covers (0 when there are none). */
+    int reach() {
+        return reach;
     }
 
     boolean isEmpty() {

@@ -217,7 +217,15 @@ final class OdsBook extends Workbook {
                 column = (int) Math.min((long) column + cellsRepeated, MAX_COLUMNS);
             }
             String[] row = Arrays.copyOf(cells, width);
+            if (width == 0 && first > merges.reach()) {
+                rowNumber = (int) Math.min((long) first - 1 + repeated, MAX_ROWS);   // empty rows, however many
+                return true;
+            }
             for (int r = 0; r < repeated && rowNumber < MAX_ROWS; r++) {
+                if (width == 0 && rowNumber + 1 > merges.reach()) {
+                    rowNumber = (int) Math.min((long) first - 1 + repeated, MAX_ROWS);
+                    break;
+                }
                 rowNumber++;
                 String[] filled = merges.isEmpty() ? row : merges.fill(rowNumber, row.clone());
                 boolean content = false;
@@ -225,10 +233,6 @@ final class OdsBook extends Workbook {
                     content |= cell != null && !cell.isEmpty();
                 }
                 if (!content) {
-                    if (width == 0 && merges.isEmpty()) {
-                        rowNumber = (int) Math.min((long) first - 1 + repeated, MAX_ROWS);   // empty rows, however many
-                        return true;
-                    }
                     continue;
                 }
                 if (!into.row(rowNumber, r + 1 < repeated ? filled.clone() : filled, hidden)) {

@@ -10,11 +10,18 @@ public final class DataNotes {
     private DataNotes() {
     }
 
-    /** {@code UTF-8, comma-separated, wide layout, periods written YYYY-MM, dates read day-first}. */
+    /**
+     * {@code UTF-8, comma-separated, wide layout, periods written YYYY-MM, dates read day-first}; for a workbook
+     * {@code sheet 1 'Nights' of an xlsx workbook, wide layout, …}.
+     */
     static String reading(SourceFacts.Reading r) {
         StringBuilder reading = new StringBuilder();
-        reading.append(r.charset()).append(", ").append(r.delimiter()).append("-separated, ").append(r.layout())
-                .append(" layout, periods written ").append(r.periodFormat());
+        if (r.sheet().isPresent()) {
+            reading.append(r.sheet().get()).append(", ");
+        } else {
+            reading.append(r.charset()).append(", ").append(r.delimiter()).append("-separated, ");
+        }
+        reading.append(r.layout()).append(" layout, periods written ").append(r.periodFormat());
         r.dateOrder().ifPresent(o -> reading.append(", dates read ").append(o));
         r.decimalMark().ifPresent(m -> reading.append(", decimal ").append(m));
         r.aggregatedTo().ifPresent(a -> reading.append("; aggregated to ").append(a).append(" by ")
