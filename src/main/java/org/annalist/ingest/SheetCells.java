@@ -28,8 +28,13 @@ final class SheetCells {
     private SheetCells() {
     }
 
+    private static final java.util.regex.Pattern NUMBERED_ERROR = java.util.regex.Pattern.compile("Err:\\d{3}");
+
     static boolean isError(String text) {
-        return ERRORS.contains(text) || text.matches("Err:\\d{3}");
+        if (text.isEmpty() || (text.charAt(0) != '#' && text.charAt(0) != 'E')) {
+            return false;   // the commonest cells, without a look-up
+        }
+        return ERRORS.contains(text) || NUMBERED_ERROR.matcher(text).matches();
     }
 
     /**

@@ -70,8 +70,8 @@ final class Workbooks {
             try (ZipParts parts = ZipParts.of(file, size)) {
                 return Optional.of(read(name, parts, sha256, options));
             }
-        } catch (IOException e) {
-            throw damaged(name, "", e);
+        } catch (IOException | RuntimeException e) {
+            throw e instanceof DataProblemException problem ? problem : damaged(name, "", e);
         }
     }
 
@@ -86,8 +86,8 @@ final class Workbooks {
         }
         try (ZipParts parts = ZipParts.of(bytes)) {
             return Optional.of(read(name, parts, sha256(bytes), options));
-        } catch (IOException e) {
-            throw damaged(name, "", e);
+        } catch (IOException | RuntimeException e) {
+            throw e instanceof DataProblemException problem ? problem : damaged(name, "", e);
         }
     }
 

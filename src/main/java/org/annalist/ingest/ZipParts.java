@@ -52,7 +52,7 @@ abstract class ZipParts implements AutoCloseable {
         return new OnDisk(new ZipFile(file.toFile()), inflationLimit(packageBytes));
     }
 
-    /** The parts of a zip held in memory (each part inflated once, when first asked for). */
+    /** The parts of a zip held in memory (bytes already in memory: small files, tests), each inflated once. */
     static ZipParts of(byte[] bytes) throws IOException {
         Map<String, byte[]> parts = new HashMap<>();
         long limit = inflationLimit(bytes.length);
