@@ -101,6 +101,9 @@ final class Workbooks {
 
     private static ReadResult read(String name, ZipParts parts, String sha256, ReadOptions options) throws IOException {
         Workbook book;
+        if (parts.isEmpty()) {
+            throw damaged(name, "", new IOException("it holds no parts"));
+        }
         if (parts.has(XlsxBook.WORKBOOK)) {   // ECMA-376 Part 1 §8.3 / §12.2: the workbook part of a SpreadsheetML package
             book = new XlsxBook(parts, parts.has("xl/vbaProject.bin") ? "xlsm" : "xlsx");
         } else if (mimetype(parts).startsWith(OdsBook.MIMETYPE)) {   // ODF 1.2 Part 3 §3.3, the mimetype file

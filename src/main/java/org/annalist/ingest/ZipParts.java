@@ -70,6 +70,9 @@ abstract class ZipParts implements AutoCloseable {
     /** Whether the package has the part. */
     abstract boolean has(String name);
 
+    /** Whether the package has no parts at all (a zip cut short, or an empty one). */
+    abstract boolean isEmpty();
+
     /** The part, read through the inflation limit, or empty when the package has none of that name. */
     final Optional<InputStream> open(String name) throws IOException {
         Optional<InputStream> raw = openRaw(name);
@@ -127,6 +130,11 @@ abstract class ZipParts implements AutoCloseable {
         }
 
         @Override
+        boolean isEmpty() {
+            return zip.size() == 0;
+        }
+
+        @Override
         Optional<InputStream> openRaw(String name) throws IOException {
             ZipEntry entry = zip.getEntry(name);
             return entry == null || entry.isDirectory() ? Optional.empty() : Optional.of(zip.getInputStream(entry));
@@ -149,6 +157,11 @@ abstract class ZipParts implements AutoCloseable {
         @Override
         boolean has(String name) {
             return parts.containsKey(name);
+        }
+
+        @Override
+        boolean isEmpty() {
+            return parts.isEmpty();
         }
 
         @Override
