@@ -54,6 +54,12 @@ public final class WorkbookBenchmark {
             writeBig(big, 1_000_000, 4);
             freshJvm(big, "512m");
         }
+        try (var files = Files.list(folder)) {
+            for (Path file : files.toList()) {
+                Files.delete(file);
+            }
+        }
+        Files.delete(folder);
     }
 
     private static void inProcess(Path file) {
