@@ -54,8 +54,12 @@ abstract class ZipParts implements AutoCloseable {
 
     /** The parts of a zip held in memory (bytes already in memory: small files, tests), each inflated once. */
     static ZipParts of(byte[] bytes) throws IOException {
+        return of(bytes, inflationLimit(bytes.length));
+    }
+
+    /** As {@link #of(byte[])}, with the limit on what a part inflates to given. */
+    static ZipParts of(byte[] bytes, long limit) throws IOException {
         Map<String, byte[]> parts = new HashMap<>();
-        long limit = inflationLimit(bytes.length);
         long total = 0;
         try (ZipInputStream in = new ZipInputStream(new ByteArrayInputStream(bytes))) {
             for (ZipEntry entry = in.getNextEntry(); entry != null; entry = in.getNextEntry()) {

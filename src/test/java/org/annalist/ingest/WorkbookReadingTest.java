@@ -277,4 +277,57 @@ class WorkbookReadingTest {
         assertThat(s.frequency()).isEqualTo(Frequency.MONTHLY);
         assertThat(s.start()).isEqualTo(Period.month(2023, 1));
     }
+
+    @Test
+    void aMacroWorkbookIsAnXlsxWithAVbaPart() {
+        // ECMA-376 Part 1 / [MS-OFFMACRO]: an .xlsm is an xlsx package with a vbaProject.bin part, which is not run
+        java.util.Map<String, byte[]> parts = new java.util.LinkedHashMap<>();
+        try (java.util.zip.ZipInputStream in = new java.util.zip.ZipInputStream(new java.io.ByteArrayInputStream(
+                WorkbookFiles.xlsx(false, WorkbookFiles.reference("AirPassengers.csv", "Data"))))) {
+            for (var e = in.getNextEntry(); e != null; e = in.getNextEntry()) {
+                parts.put(e.getName(), in.readAllBytes());
+            }
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        parts.put("xl/vbaProject.bin", new byte[] {1, 2, 3});
+        ReadResult read = read("macros.xlsm", WorkbookFiles.zip(parts, false));
+        assertThat(read.sheet().orElseThrow().format()).isEqualTo("xlsm");
+        assertThat(read.warnings()).isEmpty();
+    }
+
+    @Test
+    void anEncryptedOdsIsRefused() {
+        // ODF 1.2 Part 3 §4.8: an encrypted part is listed in the manifest with manifest:encryption-data
+        java.util.Map<String, byte[]> parts = new java.util.LinkedHashMap<>();
+        parts.put("mimetype", "application/vnd.oasis.opendocument.spreadsheet".getBytes());
+        parts.put("META-INF/manifest.xml", ("<manifest:manifest xmlns:manifest=\"urn:oasis:names:tc:opendocument:xmlns:"
+                + "manifest:1.0\"><manifest:file-entry manifest:full-path=\"content.xml\"><manifest:encryption-data "
+                + "manifest:checksum-type=\"SHA1/1K\"/></manifest:file-entry></manifest:manifest>").getBytes());
+        parts.put("content.xml", new byte[] {17, 99, 4, 120});
+        assertThatThrownBy(() -> read("locked.ods", WorkbookFiles.zip(parts, true)))
+                .hasMessage("locked.ods: is a password-protected (encrypted) workbook, which cannot be read; expected the "
+                        + "workbook saved without a password (or its sheet exported as CSV)");
+    }
+
+    @Test
+    void aHiddenSheetIsNotChosenUnlessNamed() {
+        Sheet hidden = WorkbookFiles.reference("Nile.csv", "Old").hidden();
+        Sheet shown = WorkbookFiles.reference("AirPassengers.csv", "Current");
+        for (String name : List.of("h.xlsx", "h.ods")) {
+            byte[] bytes = name.endsWith("xlsx") ? WorkbookFiles.xlsx(false, hidden, shown) : WorkbookFiles.ods(hidden, shown);
+            assertThat(read(name, bytes).sheet().orElseThrow().name()).isEqualTo("Current");
+            assertThat(read(name, bytes, ReadOptions.defaults().withSheet("Old")).series().get(0).frequency())
+                    .isEqualTo(Frequency.ANNUAL);
+        }
+    }
+
+    @Test
+    void aPartThatInflatesPastTheLimitIsRefused() throws java.io.IOException {
+        // a "zip bomb": a part far bigger inflated than the package; here 2 MB of zeros against a limit of 1 MB
+        byte[] zip = WorkbookFiles.zip(java.util.Map.of("xl/workbook.xml", new byte[2 << 20]), false);
+        assertThatThrownBy(() -> ZipParts.of(zip, 1 << 20)).isInstanceOf(ZipParts.TooLarge.class)
+                .hasMessage("xl/workbook.xml inflates to more than 1 MB");
+        assertThat(ZipParts.inflationLimit(1 << 20)).isEqualTo(100L * (1 << 20) + (64L << 20));
+    }
 }
