@@ -28,10 +28,11 @@ class WorkbookCommandsTest {
     @Test
     void aPublicSeriesAsXlsxAndAsOdsGivesTheSameFindingsJsonAsItsCsv() throws IOException {
         // AirPassengers (Box, Jenkins & Reinsel 1976, Series G); the CSV copied beside the workbooks so that
-        // every file has the same base name, which names the series
+        // every file has the same base name, which names the series; the xlsx stores its months as serial
+        // dates, the ods as office:date-value
         Path csv = Files.copy(Path.of(AIR), folder.resolve("AirPassengers.csv"));
         Path xlsx = write("AirPassengers.xlsx", WorkbookFiles.xlsx(false, WorkbookFiles.reference("AirPassengers.csv",
-                "Passengers")));
+                "Passengers", true)));
         Path ods = write("AirPassengers.ods", WorkbookFiles.ods(WorkbookFiles.reference("AirPassengers.csv", "Passengers")));
         Run fromCsv = Run.of("analyze", "--format", "json", csv.toString());
         Run fromXlsx = Run.of("analyze", "--format", "json", xlsx.toString());

@@ -79,13 +79,28 @@ public final class WorkbookFiles {
     private WorkbookFiles() {
     }
 
-    /** The {@code period,value} rows of a reference dataset as a sheet with a header, periods as serial dates. */
+    /** The {@code period,value} rows of a reference dataset as a sheet with a header, periods as dates (ISO cells). */
     public static Sheet reference(String dataset, String sheetName) {
+        return reference(dataset, sheetName, false);
+    }
+
+    /**
+     * As {@link #reference(String, String)}; with {@code serial}, each period a serial date of the 1900
+     * system shown as {@code mmm yyyy}, as spreadsheet programs store dates (xlsx only; days since
+     * 1899-12-30 from 1 March 1900 on, ECMA-376 Part 1 §18.17.4.1).
+     */
+    public static Sheet reference(String dataset, String sheetName, boolean serial) {
         Sheet sheet = new Sheet(sheetName).row("period", "value");
         for (String[] row : Files.referenceRows(dataset)) {
             String period = row[0];
-            String date = period.length() == 4 ? period + "-01-01" : period.length() == 7 ? period + "-01" : period;
-            sheet.row("D:" + date, row[1]);
+            if (period.length() == 4 || period.contains("Q")) {
+                sheet.row(period.length() == 4 ? period : "t:" + period, row[1]);   // a year as a number, a quarter as text
+                continue;
+            }
+            String date = period.length() == 7 ? period + "-01" : period;
+            long days = java.time.temporal.ChronoUnit.DAYS.between(java.time.LocalDate.of(1899, 12, 30),
+                    java.time.LocalDate.parse(date));
+            sheet.row(serial ? "d:" + days : "D:" + date, row[1]);
         }
         return sheet;
     }

@@ -56,6 +56,19 @@ class WorkbookReadingTest {
     }
 
     @Test
+    void everyReferenceSeriesReadsFromXlsxAndOdsAsFromItsCsv() {
+        // the public datasets of src/test/resources/reference/ (R 4.2 datasets): monthly, quarterly, annual
+        for (String dataset : List.of("AirPassengers.csv", "UKgas.csv", "Nile.csv", "co2.csv", "nottem.csv",
+                "sunspot.year.csv")) {
+            Series csv = Files.read(dataset, Files.resource("/reference/" + dataset)).series().get(0);
+            Sheet sheet = WorkbookFiles.reference(dataset, "Data", dataset.equals("AirPassengers.csv"));
+            assertSameSeries(read(dataset + ".xlsx", WorkbookFiles.xlsx(false, sheet)).series().get(0), csv);
+            assertSameSeries(read(dataset + ".ods", WorkbookFiles.ods(WorkbookFiles.reference(dataset, "Data")))
+                    .series().get(0), csv);
+        }
+    }
+
+    @Test
     void serialDatesReadInTheWorkbooksDateSystem() {
         // ECMA-376 Part 1 §18.17.4.1: 1900 system, serial 45352 = 2024-03-01; 1904 system (§18.2.28 date1904),
         // the same day is 45352 - 1462 = 43890 (1462 days from 1900-01-00 to 1904-01-01, with the phantom 29 Feb 1900)
