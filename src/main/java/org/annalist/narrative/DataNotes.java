@@ -21,7 +21,9 @@ public final class DataNotes {
         } else {
             reading.append(r.charset()).append(", ").append(r.delimiter()).append("-separated, ");
         }
-        reading.append(r.layout()).append(" layout, periods written ").append(r.periodFormat());
+        // a workbook's dates are cells of their own type, turned into text by the reader: "read as", not "written"
+        reading.append(r.layout()).append(r.sheet().isPresent() ? " layout, periods read as " : " layout, periods written ")
+                .append(r.periodFormat());
         r.dateOrder().ifPresent(o -> reading.append(", dates read ").append(o));
         r.decimalMark().ifPresent(m -> reading.append(", decimal ").append(m));
         r.aggregatedTo().ifPresent(a -> reading.append("; aggregated to ").append(a).append(" by ")

@@ -51,7 +51,8 @@ class WorkbookCommandsTest {
         Path xlsx = write("visitors.xlsx", WorkbookFiles.xlsx(false, new Sheet("About").row("Quennelmark"), nights));
         Run run = Run.of("check", xlsx.toString());
         assertThat(run.exitCode()).as(run.err()).isZero();
-        assertThat(run.out()).contains(xlsx + ": 3 data rows, wide layout, sheet 2 'Nights' of an xlsx workbook")
+        assertThat(run.out()).contains(xlsx + ": 3 data rows, wide layout, sheet 2 'Nights' of an xlsx workbook, "
+                        + "periods read as YYYY-MM-DD")
                 .contains("series 'Domestic'").contains("series 'Brevania'")
                 .contains(xlsx + ", sheet 'Nights', cell C3: holds the error #N/A; read as a missing value");
     }
