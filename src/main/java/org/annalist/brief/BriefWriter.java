@@ -186,7 +186,8 @@ final class BriefWriter {
         SourceFacts.Reading reading = new SourceFacts.Reading(read.charset(), read.delimiterName(), read.layout(),
                 read.periodFormat(), read.dateOrder().map(o -> o.name().toLowerCase(Locale.ROOT).replace('_', '-')),
                 read.decimalMark().map(m -> m.name().toLowerCase(Locale.ROOT)),
-                read.aggregation().map(a -> a.target().toString()), read.aggregation().map(a -> a.method().label()));
+                read.aggregation().map(a -> a.target().toString()), read.aggregation().map(a -> a.method().label()),
+                read.sheet().map(s -> "sheet " + s.number() + " '" + s.name() + "' of an " + s.format() + " workbook"));
         return new SourceFacts(Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading,
                 java.util.stream.Stream.concat(read.warnings().stream().map(DataProblem::toString), notes.stream()).toList(), "");
     }

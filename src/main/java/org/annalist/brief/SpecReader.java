@@ -40,7 +40,7 @@ public final class SpecReader {
     private static final Set<String> KEYS = Set.of("title", "organisation", "data", "series", "measure", "unit",
             "period", "paper", "language", "templates", "output", "generated_at", "horizon", "side_outputs", "combined",
             "total", "sort_by", "logo", "form", "per_day", "holidays", "date_order", "decimal_mark", "aggregate",
-            "aggregate_by", "max_input_mb");
+            "aggregate_by", "max_input_mb", "sheet");
 
     /** A Java array holds at most 2 GB, and so does the reader. */
     static final long MAX_LIMIT_MEGABYTES = 2047;
@@ -241,7 +241,7 @@ public final class SpecReader {
         }
     }
 
-    /** The reading keys, as the command line's {@code --date-order}, {@code --decimal-mark} and {@code --aggregate}. */
+    /** The reading keys, as the command line's {@code --date-order}, {@code --decimal-mark}, {@code --aggregate} and {@code --sheet}. */
     private ReadOptions readOptions(YamlTree.Mapping m) {
         ReadOptions options = ReadOptions.defaults();
         options = options.withDateOrder(values.optionalWord(m, "date_order", Words.DATE_ORDER)
@@ -249,6 +249,10 @@ public final class SpecReader {
         Optional<DecimalMark> mark = values.optionalWord(m, "decimal_mark", Words.DECIMAL_MARK);
         if (mark.isPresent()) {
             options = options.withDecimalMark(mark.get());
+        }
+        Optional<String> sheet = values.optionalText(m, "sheet");
+        if (sheet.isPresent()) {
+            options = options.withSheet(sheet.get());
         }
         Optional<Frequency> aggregate = values.optionalWord(m, "aggregate", Words.AGGREGATE);
         Optional<Aggregation.Method> by = values.optionalWord(m, "aggregate_by", Words.AGGREGATE_BY);

@@ -48,8 +48,10 @@ final class CheckCommand implements Callable<Integer> {
     }
 
     private static void printText(ReadResult read, PrintWriter out) {
-        out.printf(Locale.ROOT, "%s: %d data rows, %s layout, %s, %s-separated, periods written %s%s%s%n",
-                read.file(), read.rowsRead(), read.layout(), read.charset(), read.delimiterName(),
+        out.printf(Locale.ROOT, "%s: %d data rows, %s layout, %s, periods %s %s%s%s%n",
+                read.file(), read.rowsRead(), read.layout(), read.sheet().map(s -> "sheet " + s.number() + " '" + s.name()
+                        + "' of an " + s.format() + " workbook").orElse(read.charset() + ", " + read.delimiterName() + "-separated"),
+                read.sheet().isPresent() ? "read as" : "written",
                 read.periodFormat(),
                 read.dateOrder().map(o -> ", dates " + o.name().toLowerCase(Locale.ROOT).replace('_', '-')).orElse(""),
                 read.decimalMark().map(m -> ", decimal " + m.name().toLowerCase(Locale.ROOT)).orElse(""));

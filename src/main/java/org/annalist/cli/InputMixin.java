@@ -18,8 +18,12 @@ final class InputMixin {
     /** A Java array holds at most 2 GB, and so does the reader. */
     static final long MAX_LIMIT_MEGABYTES = 2047;
 
-    @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated).")
+    @Parameters(paramLabel = "FILE", description = "A CSV file (comma, semicolon or tab separated), or an .xlsx, .xlsm or .ods workbook.")
     Path file;
+
+    @Option(names = "--sheet", paramLabel = "NAME|NUMBER",
+            description = "The sheet of a workbook to read, by name or number (1 is the first). Default: the one sheet that holds a time series.")
+    Optional<String> sheet = Optional.empty();
 
     @Option(names = "--date-order", paramLabel = "ORDER", converter = Converters.Order.class,
             description = "How to read dates like 03/04/2024: auto (infer from the data), day-first, month-first. Default: auto.")
@@ -50,6 +54,9 @@ final class InputMixin {
         ReadOptions options = ReadOptions.defaults().withDateOrder(dateOrder);
         if (decimalMark.isPresent()) {
             options = options.withDecimalMark(decimalMark.get());
+        }
+        if (sheet.isPresent()) {
+            options = options.withSheet(sheet.get());
         }
         if (aggregate.isPresent()) {
             options = options.withAggregation(new Aggregation(aggregate.get(), aggregateBy));

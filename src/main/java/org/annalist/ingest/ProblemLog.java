@@ -13,13 +13,20 @@ final class ProblemLog {
     private static final int MAX_WARNINGS = 100;
 
     private final String file;
+    private final String sheet;
     private final List<DataProblem> errors = new ArrayList<>();
     private final List<DataProblem> warnings = new ArrayList<>();
     private int suppressedErrors;
     private int suppressedWarnings;
 
     ProblemLog(String file) {
+        this(file, "");
+    }
+
+    /** A log whose problems are located in {@code sheet} of a workbook (rows and cells rather than lines). */
+    ProblemLog(String file, String sheet) {
         this.file = file;
+        this.sheet = sheet;
     }
 
     String file() {
@@ -28,7 +35,7 @@ final class ProblemLog {
 
     void error(int line, int column, String message) {
         if (errors.size() < MAX_ERRORS) {
-            errors.add(new DataProblem(file, line, column, message));
+            errors.add(new DataProblem(file, line, column, message, sheet));
         } else {
             suppressedErrors++;
         }
@@ -47,7 +54,7 @@ final class ProblemLog {
 
     void warn(int line, int column, String message) {
         if (warnings.size() < MAX_WARNINGS) {
-            warnings.add(new DataProblem(file, line, column, message));
+            warnings.add(new DataProblem(file, line, column, message, sheet));
         } else {
             suppressedWarnings++;
         }
@@ -65,7 +72,7 @@ final class ProblemLog {
         List<DataProblem> all = new ArrayList<>(errors);
         all.sort(Comparator.comparingInt(DataProblem::line).thenComparingInt(DataProblem::column));
         if (suppressedErrors > 0) {
-            all.add(new DataProblem(file, 0, 0, suppressedErrors + " more problems of the same kinds not shown"));
+            all.add(new DataProblem(file, 0, 0, suppressedErrors + " more problems of the same kinds not shown", sheet));
         }
         throw new DataProblemException(all);
     }
@@ -82,7 +89,7 @@ final class ProblemLog {
             return List.copyOf(warnings);
         }
         List<DataProblem> all = new ArrayList<>(warnings);
-        all.add(new DataProblem(file, 0, 0, suppressedWarnings + " more warnings of the same kinds not shown"));
+        all.add(new DataProblem(file, 0, 0, suppressedWarnings + " more warnings of the same kinds not shown", sheet));
         return List.copyOf(all);
     }
 }

@@ -10,9 +10,10 @@ import java.util.Optional;
  * @param decimalMark the decimal mark, or empty to infer it from the numbers
  * @param aggregation the calendar to aggregate to, or empty to keep the file's own
  * @param maxInputBytes the largest file read, in bytes ({@link InputFiles#DEFAULT_MAX_BYTES} unless set)
+ * @param sheet the sheet of a workbook to read, by name or 1-based number, or empty to find the one with a series
  */
 public record ReadOptions(DateOrder dateOrder, Optional<DecimalMark> decimalMark, Optional<Aggregation> aggregation,
-                          long maxInputBytes) {
+                          long maxInputBytes, Optional<String> sheet) {
 
     public ReadOptions {
         Objects.requireNonNull(dateOrder, "dateOrder");
@@ -21,6 +22,12 @@ public record ReadOptions(DateOrder dateOrder, Optional<DecimalMark> decimalMark
         if (maxInputBytes <= 0) {
             throw new IllegalArgumentException("maxInputBytes must be positive, was " + maxInputBytes);
         }
+        Objects.requireNonNull(sheet, "sheet");
+    }
+
+    public ReadOptions(DateOrder dateOrder, Optional<DecimalMark> decimalMark, Optional<Aggregation> aggregation,
+                       long maxInputBytes) {
+        this(dateOrder, decimalMark, aggregation, maxInputBytes, Optional.empty());
     }
 
     /** Infer everything, aggregate nothing, read files up to the default size. */
@@ -29,18 +36,23 @@ public record ReadOptions(DateOrder dateOrder, Optional<DecimalMark> decimalMark
     }
 
     public ReadOptions withDateOrder(DateOrder order) {
-        return new ReadOptions(order, decimalMark, aggregation, maxInputBytes);
+        return new ReadOptions(order, decimalMark, aggregation, maxInputBytes, sheet);
     }
 
     public ReadOptions withDecimalMark(DecimalMark mark) {
-        return new ReadOptions(dateOrder, Optional.of(mark), aggregation, maxInputBytes);
+        return new ReadOptions(dateOrder, Optional.of(mark), aggregation, maxInputBytes, sheet);
     }
 
     public ReadOptions withAggregation(Aggregation to) {
-        return new ReadOptions(dateOrder, decimalMark, Optional.of(to), maxInputBytes);
+        return new ReadOptions(dateOrder, decimalMark, Optional.of(to), maxInputBytes, sheet);
     }
 
     public ReadOptions withMaxInputBytes(long bytes) {
-        return new ReadOptions(dateOrder, decimalMark, aggregation, bytes);
+        return new ReadOptions(dateOrder, decimalMark, aggregation, bytes, sheet);
+    }
+
+    /** Reads the sheet of a workbook named {@code nameOrNumber} (a 1-based number when no sheet has that name). */
+    public ReadOptions withSheet(String nameOrNumber) {
+        return new ReadOptions(dateOrder, decimalMark, aggregation, maxInputBytes, Optional.of(nameOrNumber));
     }
 }

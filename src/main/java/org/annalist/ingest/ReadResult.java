@@ -17,14 +17,35 @@ import org.annalist.series.Series;
  * @param decimalMark   the decimal mark used, when any number has a fraction or grouping
  * @param aggregation   the aggregation applied, if any
  * @param warnings      things worth knowing that did not stop the reading
+ * @param sheet         the workbook and sheet read, when the file is a workbook (then {@code charset} and
+ *                      {@code delimiter} say nothing about it)
  */
 public record ReadResult(String file, String sha256, String charset, char delimiter, int rowsRead, String layout,
                          String periodFormat, Optional<DateOrder> dateOrder, Optional<DecimalMark> decimalMark,
-                         Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings) {
+                         Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings,
+                         Optional<Sheet> sheet) {
+
+    /**
+     * The sheet a series was read from.
+     *
+     * @param format {@code xlsx}, {@code xlsm} or {@code ods}
+     * @param name   the sheet's name
+     * @param number its 1-based position in the workbook
+     */
+    public record Sheet(String format, String name, int number) {
+    }
 
     public ReadResult {
         series = List.copyOf(series);
         warnings = List.copyOf(warnings);
+        java.util.Objects.requireNonNull(sheet, "sheet");
+    }
+
+    public ReadResult(String file, String sha256, String charset, char delimiter, int rowsRead, String layout,
+                      String periodFormat, Optional<DateOrder> dateOrder, Optional<DecimalMark> decimalMark,
+                      Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings) {
+        this(file, sha256, charset, delimiter, rowsRead, layout, periodFormat, dateOrder, decimalMark, aggregation, series,
+                warnings, Optional.empty());
     }
 
     /** The delimiter in words: {@code comma}, {@code semicolon}, {@code tab} or {@code bar}. */

@@ -7,11 +7,13 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Supplier;
 import org.annalist.series.Series;
 
 /**
- * Reads the series in a delimited text file as real exports come: any of the delimiters, encodings,
+ * Reads the series in a delimited text file as real exports come (a workbook, known by its content, goes
+ * to {@link Workbooks} and from there through the same rows): any of the delimiters, encodings,
  * number and period formats of {@link CsvRows}, {@link NumberCells} and {@link PeriodCells}, in a
  * wide layout (a column per series) or a long one ({@code period, series, value}).
  *
@@ -34,6 +36,10 @@ public final class SeriesFileReader {
      * @throws DataProblemException when the file cannot be read or holds no usable series
      */
     public ReadResult read(Path file) {
+        Optional<ReadResult> workbook = Workbooks.read(file, options);   // a workbook is known by its content
+        if (workbook.isPresent()) {
+            return workbook.get();
+        }
         long size;
         try {
             size = Files.size(file);
@@ -45,6 +51,10 @@ public final class SeriesFileReader {
 
     /** Reads {@code bytes} as the contents of a file called {@code fileName} (used in messages). */
     public ReadResult read(String fileName, byte[] bytes) {
+        Optional<ReadResult> workbook = Workbooks.read(fileName, bytes, options);
+        if (workbook.isPresent()) {
+            return workbook.get();
+        }
         return read(fileName, () -> new ByteArrayInputStream(bytes), bytes.length);
     }
 

@@ -10,11 +10,20 @@ public final class DataNotes {
     private DataNotes() {
     }
 
-    /** {@code UTF-8, comma-separated, wide layout, periods written YYYY-MM, dates read day-first}. */
+    /**
+     * {@code UTF-8, comma-separated, wide layout, periods written YYYY-MM, dates read day-first}; for a workbook
+     * {@code sheet 1 'Nights' of an xlsx workbook, wide layout, …}.
+     */
     static String reading(SourceFacts.Reading r) {
         StringBuilder reading = new StringBuilder();
-        reading.append(r.charset()).append(", ").append(r.delimiter()).append("-separated, ").append(r.layout())
-                .append(" layout, periods written ").append(r.periodFormat());
+        if (r.sheet().isPresent()) {
+            reading.append(r.sheet().get()).append(", ");
+        } else {
+            reading.append(r.charset()).append(", ").append(r.delimiter()).append("-separated, ");
+        }
+        // a workbook's dates are cells of their own type, turned into text by the reader: "read as", not "written"
+        reading.append(r.layout()).append(r.sheet().isPresent() ? " layout, periods read as " : " layout, periods written ")
+                .append(r.periodFormat());
         r.dateOrder().ifPresent(o -> reading.append(", dates read ").append(o));
         r.decimalMark().ifPresent(m -> reading.append(", decimal ").append(m));
         r.aggregatedTo().ifPresent(a -> reading.append("; aggregated to ").append(a).append(" by ")

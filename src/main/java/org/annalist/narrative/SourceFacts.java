@@ -26,10 +26,18 @@ public record SourceFacts(String file, String sha256, int rowsRead, Reading read
      * @param dateOrder    {@code day-first} or {@code month-first}, for dates such as 03/04/2024
      * @param decimalMark  {@code point} or {@code comma}, when it had to be decided
      * @param aggregatedTo the calendar the values were aggregated to, with {@code aggregatedBy} ({@code sum}, {@code mean})
+     * @param sheet        the workbook's sheet read ({@code sheet 2 'Nights' of an xlsx workbook}), in place of the
+     *                     charset and delimiter, when the file is a workbook
      */
     public record Reading(String charset, String delimiter, String layout, String periodFormat,
                           Optional<String> dateOrder, Optional<String> decimalMark, Optional<String> aggregatedTo,
-                          Optional<String> aggregatedBy) {
+                          Optional<String> aggregatedBy, Optional<String> sheet) {
+
+        public Reading(String charset, String delimiter, String layout, String periodFormat, Optional<String> dateOrder,
+                       Optional<String> decimalMark, Optional<String> aggregatedTo, Optional<String> aggregatedBy) {
+            this(charset, delimiter, layout, periodFormat, dateOrder, decimalMark, aggregatedTo, aggregatedBy,
+                    Optional.empty());
+        }
     }
 
     /** The same facts with the characters the font cannot draw. */

@@ -92,8 +92,16 @@ class BadInputTest {
     @Test
     void binaryData() {
         DataProblemException e = catchThrowableOfType(DataProblemException.class,
-                () -> new SeriesFileReader(ReadOptions.defaults()).read("x.xlsx", new byte[] {80, 75, 3, 4, 0, 0, 8}));
+                () -> new SeriesFileReader(ReadOptions.defaults()).read("x.bin", new byte[] {1, 2, 3, 4, 0, 0, 8}));
         assertThat(e.problems().get(0).message()).contains("binary data");
+    }
+
+    @Test
+    void theStartOfAZipIsADamagedWorkbook() {
+        // 'PK\3\4' begins a zip (APPNOTE.TXT §4.3.7), as every xlsx and ods; cut short, it is a damaged workbook
+        DataProblemException e = catchThrowableOfType(DataProblemException.class,
+                () -> new SeriesFileReader(ReadOptions.defaults()).read("x.xlsx", new byte[] {80, 75, 3, 4, 0, 0, 8}));
+        assertThat(e.problems().get(0).message()).startsWith("is a damaged workbook");
     }
 
     @Test
