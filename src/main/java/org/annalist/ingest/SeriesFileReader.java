@@ -7,6 +7,7 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Supplier;
 import org.annalist.series.Series;
 
@@ -74,6 +75,10 @@ public final class SeriesFileReader {
 
     private ReadResult read(ProblemLog log, TextDecoding.Text text, long size) throws IOException {
         CsvRows.Head head = CsvRows.head(text.reader());
+        Optional<ReadResult> published = PublishedFiles.read(head, text, log, options, baseName(log.file()));
+        if (published.isPresent()) {
+            return published.get();   // SDMX-CSV, the bulk tab layout or JSON-stat, recognised by content
+        }
         char delimiter = CsvRows.detectDelimiter(head.sample());
         long expectedRows = head.sampleLines() == 0 ? 16
                 : (long) (size / Math.max(1.0, head.sample().length() / (double) head.sampleLines()) * 1.02) + 16;
