@@ -59,7 +59,8 @@ enum PublishedFormat {
         if (!time || !value) {
             return Optional.empty();
         }
-        return Optional.of("STRUCTURE".equals(firstId) ? SDMX_CSV_2 : SDMX_CSV_1);
+        boolean structure = firstId.startsWith("STRUCTURE") && !firstId.startsWith("STRUCTURE_");   // also STRUCTURE[;]
+        return Optional.of(structure ? SDMX_CSV_2 : SDMX_CSV_1);
     }
 
     /**

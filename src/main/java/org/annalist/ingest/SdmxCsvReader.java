@@ -177,10 +177,22 @@ final class SdmxCsvReader {
         }
         int limit = time < value ? value : time;
         int structure = format == PublishedFormat.SDMX_CSV_2 ? 1 : 0;   // STRUCTURE_ID (2.0), DATAFLOW (1.0)
-        for (int c = structure + 1; c < ids.size(); c++) {
-            boolean identifier = IDENTIFIER.matcher(PublishedFormat.codeOf(cells.get(c).strip())).matches();
-            if (!identifier && !labelColumns.containsKey(c - 1)) {
-                labelColumns.put(c, c - 1);   // labels=name: the names of the column before (SDMX-CSV 2.0, "Optional parameters")
+        if (ids.contains("STRUCTURE_NAME")) {
+            // labels=name (SDMX-CSV 2.0, "Optional parameters"): after the structure, action and key columns,
+            // each component's id column is directly followed by its name column
+            int c = structure + 1;
+            while (c < ids.size() && Set.of("STRUCTURE_NAME", "ACTION", "SERIES_KEY", "OBS_KEY").contains(ids.get(c))) {
+                c++;
+            }
+            for (; c + 1 < ids.size(); c += 2) {
+                labelColumns.put(c + 1, c);
+            }
+        } else {
+            for (int c = structure + 1; c < ids.size(); c++) {
+                boolean identifier = IDENTIFIER.matcher(PublishedFormat.codeOf(cells.get(c).strip())).matches();
+                if (!identifier && !labelColumns.containsKey(c - 1)) {
+                    labelColumns.put(c, c - 1);   // a name column without STRUCTURE_NAME: a header that is no identifier
+                }
             }
         }
         List<Integer> dimensions = new ArrayList<>();

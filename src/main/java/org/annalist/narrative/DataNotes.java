@@ -13,7 +13,11 @@ public final class DataNotes {
     /** {@code UTF-8, comma-separated, wide layout, periods written YYYY-MM, dates read day-first}. */
     static String reading(SourceFacts.Reading r) {
         StringBuilder reading = new StringBuilder();
-        reading.append(r.charset()).append(", ").append(r.delimiter()).append("-separated, ").append(r.layout())
+        reading.append(r.charset()).append(", ");
+        if (!r.delimiter().equals("none")) {
+            reading.append(r.delimiter()).append("-separated, ");   // JSON has no delimiter
+        }
+        reading.append(r.layout())
                 .append(" layout, periods written ").append(r.periodFormat());
         r.dateOrder().ifPresent(o -> reading.append(", dates read ").append(o));
         r.decimalMark().ifPresent(m -> reading.append(", decimal ").append(m));
