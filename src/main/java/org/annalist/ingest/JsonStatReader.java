@@ -67,9 +67,9 @@ final class JsonStatReader {
                 String field = p.currentName();
                 p.nextToken();
                 switch (field) {
-                    case "version" -> version = p.getValueAsString("");
-                    case "class" -> kind = p.getValueAsString("");
-                    case "label" -> label = p.getValueAsString("");
+                    case "version" -> version = scalar(p);
+                    case "class" -> kind = scalar(p);
+                    case "label" -> label = scalar(p);
                     case "id" -> ids = MAPPER.readTree(p);
                     case "size" -> sizes = MAPPER.readTree(p);
                     case "role" -> roles = MAPPER.readTree(p);
@@ -89,6 +89,13 @@ final class JsonStatReader {
 
     int rowsRead() {
         return rows;
+    }
+
+    /** A string (or number) member; an object or array where one was expected reads as empty and is passed over. */
+    private static String scalar(JsonParser p) throws IOException {
+        String text = p.currentToken().isScalarValue() ? p.getValueAsString("") : "";
+        p.skipChildren();
+        return text;
     }
 
     private KeyedSeries.Assembled cube() {
@@ -157,6 +164,9 @@ final class JsonStatReader {
                 continue;   // null: no observation in this cell
             }
             int flat = valueAt == null ? i : valueAt[i];
+            if (flat >= cells) {
+                throw problem("value." + flat, "is a position beyond the " + cells + " combinations of categories");
+            }
             int rest = flat;
             for (int d = n - 1; d >= 0; d--) {   // row-major: the last dimension varies fastest (section "value")
                 position[d] = rest % size[d];

@@ -175,6 +175,10 @@ final class SdmxCsvReader {
                 action = c;
             }
         }
+        if (time < 0 || value < 0) {
+            throw log.fatal(header.line(), 0, "the header has no " + (time < 0 ? "TIME_PERIOD" : "OBS_VALUE")
+                    + " column when split at '" + delimiter + "'; expected an SDMX-CSV header with both");
+        }
         int limit = time < value ? value : time;
         int structure = format == PublishedFormat.SDMX_CSV_2 ? 1 : 0;   // STRUCTURE_ID (2.0), DATAFLOW (1.0)
         if (ids.contains("STRUCTURE_NAME")) {
