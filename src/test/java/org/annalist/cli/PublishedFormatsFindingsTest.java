@@ -123,6 +123,24 @@ class PublishedFormatsFindingsTest {
     }
 
     @Test
+    void aSpecNamesASeriesOfAPortalFileByItsKey() throws IOException {
+        StringBuilder text = new StringBuilder("DATAFLOW,FREQ,INDICATOR,TIME_PERIOD,OBS_VALUE\n");
+        for (String[] r : rows()) {
+            text.append("RBJ:G(1.0),M,PAX,").append(r[0]).append(',').append(r[1]).append('\n');
+            text.append("RBJ:G(1.0),M,HALF,").append(r[0]).append(',').append(Integer.parseInt(r[1]) / 2.0).append('\n');
+        }
+        Files.writeString(dir.resolve("g.csv"), text.toString());
+        Files.writeString(dir.resolve("spec.yaml"), "briefs:\n  - data: g.csv\n    series: [M.HALF]\n"
+                + "    output: out/{series}.pdf\n    generated_at: 2026-11-20T08:00:00Z\n    horizon: 0\n");
+        Run batch = Run.of("batch", dir.resolve("spec.yaml").toString(), "--jobs", "1");
+        assertThat(batch.err()).doesNotContain("Exception");
+        assertThat(batch.exitCode()).isZero();
+        try (Stream<Path> made = Files.list(dir.resolve("out"))) {
+            assertThat(made.map(p -> p.getFileName().toString())).containsExactly("half.pdf");
+        }
+    }
+
+    @Test
     void aJsonStatWithoutTimeEndsWithExit2NamingTheKeyAndWritesNothing() throws IOException {
         Path file = dir.resolve("markets.json");
         Files.writeString(file, "{\"version\":\"2.0\",\"class\":\"dataset\",\"id\":[\"market\"],\"size\":[2],"
