@@ -46,6 +46,10 @@ final class KeyedSeries {
     private final Map<String, Observations> byKey = new LinkedHashMap<>();
     private final String prefix;
     private final int keyStart;
+    private final int frequencyDimension;
+    /** The codes of the SDMX code list CL_FREQ (from memory) for the calendars this tool has. */
+    private static final Map<String, Frequency> STATED_FREQUENCIES = Map.of("A", Frequency.ANNUAL, "Q", Frequency.QUARTERLY,
+            "M", Frequency.MONTHLY, "W", Frequency.WEEKLY, "D", Frequency.DAILY, "B", Frequency.BUSINESS_DAILY);
 
     /**
      * @param baseName   the file's name without extension, for a file of one series
@@ -54,6 +58,11 @@ final class KeyedSeries {
      *                   identifier in SDMX-CSV, tell series apart but are no part of their SDMX key)
      */
     KeyedSeries(String baseName, String prefix, List<Dimension> dimensions, int keyStart, ProblemLog log) {
+        int freq = -1;
+        for (int d = 0; d < dimensions.size(); d++) {
+            freq = freq < 0 && dimensions.get(d).id().equalsIgnoreCase("FREQ") ? d : freq;
+        }
+        this.frequencyDimension = freq;
         this.baseName = baseName;
         this.keyStart = keyStart;
         this.prefix = prefix;
@@ -76,7 +85,20 @@ final class KeyedSeries {
      *
      * @param line the line (or, in JSON, the line of the value) for messages
      */
-    void add(String[] codes, Period period, double value, Set<ValueFlag> flags, int line, int column) {
+    void add(String[] codes, Period given, double value, Set<ValueFlag> flags, int line, int column) {
+        Period period = given;
+        if (given.frequency() == Frequency.DAILY && frequencyDimension >= 0) {
+            // timeFormat=normalized writes a period as a date (SDMX-CSV 2.0, "Optional parameters"): FREQ says which
+            Frequency stated = STATED_FREQUENCIES.get(codes[frequencyDimension].toUpperCase(java.util.Locale.ROOT));
+            if (stated != null && stated != Frequency.DAILY) {
+                if (stated == Frequency.BUSINESS_DAILY && given.startDate().getDayOfWeek().getValue() > 5) {
+                    log.error(line, column, "period " + given + " is a weekend day but FREQ is B (business days);"
+                            + " expected Monday to Friday");
+                    return;
+                }
+                period = Period.containing(stated, given.startDate());
+            }
+        }
         String key = String.join("\u0000", codes);
         Observations series = byKey.get(key);
         if (series == null) {
@@ -196,7 +218,7 @@ final class KeyedSeries {
     /** The observations of one series as read, in primitive arrays. */
     private static final class Observations {
         private final String[] codes;
-        private final Frequency frequency;
+        private Frequency frequency;
         private final int firstLine;
         private long[] periods = new long[16];
         private double[] values = new double[16];
@@ -231,6 +253,13 @@ final class KeyedSeries {
 
         /** The series (empty, with a warning, when it has no value; errors are logged). */
         Optional<Series> assemble(String name, ProblemLog log) {
+            if (frequency == Frequency.DAILY && size > 0 && noWeekend()) {
+                // daily dates that never fall on a weekend are business days, as in a CSV (README, "Input it reads")
+                for (int i = 0; i < size; i++) {
+                    periods[i] = Period.containing(Frequency.BUSINESS_DAILY, java.time.LocalDate.ofEpochDay(periods[i])).index();
+                }
+                frequency = Frequency.BUSINESS_DAILY;
+            }
             long low = Long.MAX_VALUE;
             long high = Long.MIN_VALUE;
             for (int i = 0; i < size; i++) {
@@ -275,6 +304,15 @@ final class KeyedSeries {
             }
             StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, log);
             return Optional.of(Series.of(name, "", new Period(frequency, low), slots, i -> flagsAt(slotFlags, i)).trimmed());
+        }
+
+        private boolean noWeekend() {
+            for (int i = 0; i < size; i++) {
+                if (java.time.LocalDate.ofEpochDay(periods[i]).getDayOfWeek().getValue() > 5) {
+                    return false;
+                }
+            }
+            return true;
         }
 
         @SuppressWarnings("unchecked")

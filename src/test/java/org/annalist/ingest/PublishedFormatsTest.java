@@ -136,6 +136,31 @@ class PublishedFormatsTest {
     }
 
     @Test
+    void normalizedDatesAreReadInTheCalendarThatFreqStates() {
+        // SDMX-CSV 2.0, "Optional parameters", timeFormat=normalized: periods written as ISO 8601 dates;
+        // the FREQ dimension (code list CL_FREQ, from memory: A, Q, M, W, D, B) says which calendar they stand for
+        String text = """
+                STRUCTURE,STRUCTURE_ID,ACTION,FREQ,MARKET,TIME_PERIOD,OBS_VALUE
+                dataflow,QM:N(1.0),I,M,DOM,2024-01-01,5
+                dataflow,QM:N(1.0),I,M,DOM,2024-02-01,6
+                dataflow,QM:N(1.0),I,Q,DOM,2024-01-01,15
+                dataflow,QM:N(1.0),I,Q,DOM,2024-04-01,16
+                """;
+        ReadResult read = Files.read("normalized.csv", text);
+        assertThat(read.find("M.DOM").orElseThrow().start()).isEqualTo(Period.month(2024, 1));
+        assertThat(read.find("Q.DOM").orElseThrow().end()).isEqualTo(Period.quarter(2024, 2));
+    }
+
+    @Test
+    void dailyPeriodsThatNeverFallOnAWeekendAreBusinessDays() {
+        // as the CSV reader reads such dates (README, "Input it reads"); 2024-01-05 is a Friday, 2024-01-08 a Monday
+        String text = "DATAFLOW,TIME_PERIOD,OBS_VALUE\nQM:FX(1.0),2024-01-04,1\nQM:FX(1.0),2024-01-05,2\nQM:FX(1.0),2024-01-08,3\n";
+        Series s = Files.read("fx.csv", text).series().get(0);
+        assertThat(s.frequency()).isEqualTo(Frequency.BUSINESS_DAILY);
+        assertThat(s.size()).isEqualTo(3);
+    }
+
+    @Test
     void sdmxProblemsNameTheirLineAndNothingIsRead() {
         String text = """
                 DATAFLOW,MARKET,TIME_PERIOD,OBS_VALUE
