@@ -29,8 +29,12 @@ class PublishedFormatsFindingsTest {
     Path dir;
 
     private static List<String[]> rows() throws IOException {
+        return rows(CSV);
+    }
+
+    private static List<String[]> rows(Path csv) throws IOException {
         List<String[]> rows = new ArrayList<>();
-        List<String> lines = Files.readAllLines(CSV, StandardCharsets.UTF_8);
+        List<String> lines = Files.readAllLines(csv, StandardCharsets.UTF_8);
         for (String line : lines.subList(1, lines.size())) {
             if (!line.isBlank()) {
                 rows.add(line.split(","));
@@ -42,14 +46,14 @@ class PublishedFormatsFindingsTest {
     /** SDMX-CSV 1.0 ("Columns": DATAFLOW, dimensions, TIME_PERIOD, OBS_VALUE, attributes). */
     private static String sdmx1(List<String[]> rows) {
         StringBuilder text = new StringBuilder("DATAFLOW,FREQ,INDICATOR,TIME_PERIOD,OBS_VALUE,OBS_STATUS\n");
-        rows.forEach(r -> text.append("RBJ:SERIES_G(1.0),M,PAX,").append(r[0]).append(',').append(r[1]).append(",A\n"));
+        rows.forEach(r -> text.append("RBJ:SERIES_G(1.0),").append(r[0].contains("Q") ? "Q" : "M").append(",PAX,").append(r[0]).append(',').append(r[1]).append(",A\n"));
         return text.toString();
     }
 
     /** SDMX-CSV 2.0 ("Column headers": STRUCTURE, STRUCTURE_ID, ACTION), periods written 1949-M01. */
     private static String sdmx2(List<String[]> rows) {
         StringBuilder text = new StringBuilder("STRUCTURE,STRUCTURE_ID,ACTION,FREQ,TIME_PERIOD,OBS_VALUE\n");
-        rows.forEach(r -> text.append("dataflow,RBJ:SERIES_G(1.0),I,M,").append(r[0].replace("-", "-M")).append(',')
+        rows.forEach(r -> text.append("dataflow,RBJ:SERIES_G(1.0),I,").append(r[0].contains("Q") ? "Q," : "M,").append((r[0].contains("Q") ? r[0] : r[0].replace("-", "-M"))).append(',')
                 .append(r[1]).append('\n'));
         return text.toString();
     }
@@ -57,9 +61,10 @@ class PublishedFormatsFindingsTest {
     /** The bulk tab layout, periods across written 1949M01 with trailing spaces, newest first. */
     private static String bulk(List<String[]> rows) {
         StringBuilder header = new StringBuilder("freq,indicator\\TIME_PERIOD");
-        StringBuilder row = new StringBuilder("M,PAX");
+        StringBuilder row = new StringBuilder(rows.get(0)[0].contains("Q") ? "Q,PAX" : "M,PAX");
         for (int i = rows.size() - 1; i >= 0; i--) {
-            header.append('\t').append(rows.get(i)[0].replace("-", "M")).append(' ');
+            String period = rows.get(i)[0];
+            header.append('\t').append(period.contains("Q") ? period.replace("-", "") : period.replace("-", "M")).append(' ');
             row.append('\t').append(rows.get(i)[1]).append(' ');
         }
         return header + "\n" + row + "\n";
@@ -79,21 +84,23 @@ class PublishedFormatsFindingsTest {
                 + "\"value\":[" + values + "]}";
     }
 
+    /** Each format, for AirPassengers (monthly) and UKgas (quarterly; R's datasets, Durbin &amp; Koopman 2001). */
     static Stream<Arguments> formats() {
-        return Stream.of(
-                Arguments.of("SDMX-CSV 1.0", "csv", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::sdmx1),
-                Arguments.of("SDMX-CSV 2.0", "csv", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::sdmx2),
-                Arguments.of("bulk tab layout", "tsv", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::bulk),
-                Arguments.of("JSON-stat 2.0", "json", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::jsonStat));
+        return Stream.of("AirPassengers", "UKgas").flatMap(dataset -> Stream.of(
+                Arguments.of(dataset, "SDMX-CSV 1.0", "csv", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::sdmx1),
+                Arguments.of(dataset, "SDMX-CSV 2.0", "csv", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::sdmx2),
+                Arguments.of(dataset, "bulk tab layout", "tsv", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::bulk),
+                Arguments.of(dataset, "JSON-stat 2.0", "json", (Function<List<String[]>, String>) PublishedFormatsFindingsTest::jsonStat)));
     }
 
-    @ParameterizedTest(name = "{0}")
+    @ParameterizedTest(name = "{0} in {1}")
     @MethodSource("formats")
-    void aPublicSeriesInEachPortalFormatGivesTheSameFindingsAsItsCsv(String format, String extension,
+    void aPublicSeriesInEachPortalFormatGivesTheSameFindingsAsItsCsv(String dataset, String format, String extension,
                                                                      Function<List<String[]>, String> writer) throws IOException {
-        Path file = dir.resolve("AirPassengers." + extension);   // one series takes the file's name, as the CSV's does
-        Files.writeString(file, writer.apply(rows()), StandardCharsets.UTF_8);
-        Run expected = Run.of("analyze", CSV.toString(), "--format", "json");
+        Path csv = Path.of("src/test/resources/reference/" + dataset + ".csv");
+        Path file = dir.resolve(dataset + "." + extension);   // one series takes the file's name, as the CSV's does
+        Files.writeString(file, writer.apply(rows(csv)), StandardCharsets.UTF_8);
+        Run expected = Run.of("analyze", csv.toString(), "--format", "json");
         Run actual = Run.of("analyze", file.toString(), "--format", "json");
         assertThat(expected.exitCode()).isZero();
         assertThat(actual.err()).isEmpty();
