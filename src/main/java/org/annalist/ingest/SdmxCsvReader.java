@@ -219,8 +219,12 @@ final class SdmxCsvReader {
                 described.add(new KeyedSeries.Dimension(id, label));
             }
         }
-        List<String> repeated = ids.stream().filter(id -> !id.isEmpty()).filter(id -> ids.indexOf(id) != ids.lastIndexOf(id))
-                .distinct().toList();
+        List<String> components = new ArrayList<>();
+        for (int c = 0; c < ids.size(); c++) {
+            components.add(labelColumns.containsKey(c) ? "" : ids.get(c));   // names may repeat; ids may not
+        }
+        List<String> repeated = components.stream().filter(id -> !id.isEmpty())
+                .filter(id -> components.indexOf(id) != components.lastIndexOf(id)).distinct().toList();
         if (!repeated.isEmpty()) {
             throw log.fatal(header.line(), 0, "the header names " + String.join(", ", repeated)
                     + " more than once; expected each component in one column");
