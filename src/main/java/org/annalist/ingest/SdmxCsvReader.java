@@ -180,7 +180,8 @@ final class SdmxCsvReader {
                     + " column when split at '" + delimiter + "'; expected an SDMX-CSV header with both");
         }
         int limit = time < value ? value : time;
-        int structure = format == PublishedFormat.SDMX_CSV_2 ? 1 : 0;   // STRUCTURE_ID (2.0), DATAFLOW (1.0)
+        // STRUCTURE_ID (2.0), DATAFLOW (1.0); some portals' "SDMX-like" CSV has neither (-1)
+        int structure = format == PublishedFormat.SDMX_CSV_2 ? 1 : ids.get(0).equals("DATAFLOW") ? 0 : -1;
         if (ids.contains("STRUCTURE_NAME")) {
             // labels=name (SDMX-CSV 2.0, "Optional parameters"): after the structure, action and key columns,
             // each component's id column is directly followed by its name column
@@ -201,8 +202,10 @@ final class SdmxCsvReader {
         }
         List<Integer> dimensions = new ArrayList<>();
         List<KeyedSeries.Dimension> described = new ArrayList<>();
-        dimensions.add(structure);
-        described.add(new KeyedSeries.Dimension(ids.get(structure), ""));
+        if (structure >= 0) {
+            dimensions.add(structure);
+            described.add(new KeyedSeries.Dimension(ids.get(structure), ""));
+        }
         for (int c = structure + 1; c < ids.size(); c++) {
             String id = ids.get(c);
             Optional<SdmxFlags.Kind> status = SdmxFlags.kindOf(id);
@@ -230,7 +233,7 @@ final class SdmxCsvReader {
                     + " more than once; expected each component in one column");
         }
         dimensionColumns = dimensions.stream().mapToInt(Integer::intValue).toArray();
-        collected = new KeyedSeries(baseName, "", described, 1, log);
+        collected = new KeyedSeries(baseName, "", described, structure >= 0 ? 1 : 0, log);
     }
 
     private Optional<Integer> labelColumnOf(int component) {

@@ -61,6 +61,15 @@ class PublishedFormatsTest {
     }
 
     @Test
+    void aCsvWithSdmxColumnsButNoDataflowColumnIsReadByItsDimensions() {
+        // lower-case SDMX column ids, semicolons and the time first, as some portals write them (common practice, no source)
+        String text = "time_period;market;freq;obs_value;obs_status\n2024;DOM;A;5;\n2025;DOM;A;6;p\n2024;LH;A;1;\n";
+        ReadResult read = Files.read("yearly.csv", text);
+        assertThat(read.series()).extracting(Series::name).containsExactly("DOM", "LH");
+        assertThat(read.find("DOM.A").orElseThrow().flags(1)).containsExactly(ValueFlag.PROVISIONAL);
+    }
+
+    @Test
     void sdmxCsv1LabelsBothGiveTheSeriesAndTheDescriptionTheirNames() {
         // SDMX-CSV 1.0 and 2.0, labels=both: "ID: Name" in the header and "CODE: Name" in the cells
         String text = """
