@@ -60,7 +60,7 @@ class ArchitectureTest {
     static final Map<String, Set<String>> LIBRARIES = new LinkedHashMap<>(Map.of(
             "org.apache.commons.math3", Set.of("analysis"),
             "org.apache.commons.csv", Set.of("ingest"),
-            "com.fasterxml.jackson", Set.of("findings", "brief"),
+            "com.fasterxml.jackson", Set.of("ingest", "findings", "brief"),
             "freemarker", Set.of("narrative"),
             "org.jfree", Set.of("chart", "render"),
             "com.openhtmltopdf", Set.of("render"),

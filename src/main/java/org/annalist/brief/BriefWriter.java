@@ -189,7 +189,15 @@ final class BriefWriter {
                 read.aggregation().map(a -> a.target().toString()), read.aggregation().map(a -> a.method().label()),
                 read.sheet().map(s -> "sheet " + s.number() + " '" + s.name() + "' of an " + s.format() + " workbook"));
         return new SourceFacts(Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading,
-                java.util.stream.Stream.concat(read.warnings().stream().map(DataProblem::toString), notes.stream()).toList(), "");
+                java.util.stream.Stream.concat(java.util.stream.Stream.concat(dataSet(read),
+                        read.warnings().stream().map(DataProblem::toString)), notes.stream()).toList(), "");
+    }
+
+    /** The dimensions a statistics portal's series share ({@code Unit: Number; Country: Austria}), as a note naming the file. */
+    private static java.util.stream.Stream<String> dataSet(ReadResult read) {
+        String description = read.keys().description();
+        return description.isEmpty() ? java.util.stream.Stream.empty()
+                : java.util.stream.Stream.of(Path.of(read.file()).getFileName() + ": " + description);
     }
 
     /** The same input always gets the same PDF trailer ID, so that equal briefs are equal files. */

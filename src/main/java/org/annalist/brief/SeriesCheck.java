@@ -1,5 +1,6 @@
 package org.annalist.brief;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonUnwrapped;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -14,10 +15,14 @@ import org.annalist.series.ValueFlag;
 
 /**
  * What {@code check} reports for one series: the findings' {@code series} block, plus the missing
- * periods, the flagged periods per flag, and the file's warnings.
+ * periods, the flagged periods per flag, and the file's warnings; for a file of a statistics
+ * portal also the series' key ({@code M.NR.AT}) and the data set's shared dimensions (both left out
+ * of the JSON when empty).
  */
 public record SeriesCheck(@JsonUnwrapped SeriesFacts series, List<String> missingPeriods,
-                          Map<String, List<String>> flagged, List<String> warnings) {
+                          Map<String, List<String>> flagged, List<String> warnings,
+                          @JsonInclude(JsonInclude.Include.NON_EMPTY) String key,
+                          @JsonInclude(JsonInclude.Include.NON_EMPTY) String dataset) {
 
     public static List<SeriesCheck> of(ReadResult read) {
         List<String> warnings = read.warnings().stream().map(DataProblem::toString).toList();
@@ -31,7 +36,7 @@ public record SeriesCheck(@JsonUnwrapped SeriesFacts series, List<String> missin
                 }
             }
             checks.add(new SeriesCheck(SeriesFacts.of(s), s.missingPeriods().stream().map(Period::label).toList(),
-                    flagged, warnings));
+                    flagged, warnings, read.keys().of(s.name()).map(k -> k.key()).orElse(""), read.keys().description()));
         }
         return List.copyOf(checks);
     }

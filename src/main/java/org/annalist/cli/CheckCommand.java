@@ -50,15 +50,20 @@ final class CheckCommand implements Callable<Integer> {
     private static void printText(ReadResult read, PrintWriter out) {
         out.printf(Locale.ROOT, "%s: %d data rows, %s layout, %s, periods %s %s%s%s%n",
                 read.file(), read.rowsRead(), read.layout(), read.sheet().map(s -> "sheet " + s.number() + " '" + s.name()
-                        + "' of an " + s.format() + " workbook").orElse(read.charset() + ", " + read.delimiterName() + "-separated"),
+                        + "' of an " + s.format() + " workbook").orElse(read.charset()
+                        + (read.delimiter() == '\0' ? "" : ", " + read.delimiterName() + "-separated")),
                 read.sheet().isPresent() ? "read as" : "written",
                 read.periodFormat(),
                 read.dateOrder().map(o -> ", dates " + o.name().toLowerCase(Locale.ROOT).replace('_', '-')).orElse(""),
                 read.decimalMark().map(m -> ", decimal " + m.name().toLowerCase(Locale.ROOT)).orElse(""));
         read.aggregation().ifPresent(a -> out.printf(Locale.ROOT, "aggregated to %s by %s%n", a.target(), a.method().label()));
+        if (!read.keys().description().isEmpty()) {
+            out.printf(Locale.ROOT, "data set: %s%n", read.keys().description());
+        }
         for (SeriesCheck check : SeriesCheck.of(read)) {
             var s = check.series();
-            out.printf(Locale.ROOT, "%nseries '%s'%s%n", s.name(), s.unit() == null ? "" : " (" + s.unit() + ")");
+            out.printf(Locale.ROOT, "%nseries '%s'%s%s%n", s.name(), s.unit() == null ? "" : " (" + s.unit() + ")",
+                    check.key().isEmpty() ? "" : ", key " + check.key());
             out.printf(Locale.ROOT, "  %s, %s to %s, %d periods, %d missing%n", s.frequency(), s.start(), s.end(),
                     s.observations(), s.missing());
             if (!check.missingPeriods().isEmpty()) {

@@ -19,11 +19,13 @@ import org.annalist.series.Series;
  * @param warnings      things worth knowing that did not stop the reading
  * @param sheet         the workbook and sheet read, when the file is a workbook (then {@code charset} and
  *                      {@code delimiter} say nothing about it)
+ * @param keys          the series' keys and the data set's description, for the files of statistics
+ *                      portals (SDMX-CSV, JSON-stat, the bulk tab layout); {@link SeriesKeys#none()} otherwise
  */
 public record ReadResult(String file, String sha256, String charset, char delimiter, int rowsRead, String layout,
                          String periodFormat, Optional<DateOrder> dateOrder, Optional<DecimalMark> decimalMark,
                          Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings,
-                         Optional<Sheet> sheet) {
+                         Optional<Sheet> sheet, SeriesKeys keys) {
 
     /**
      * The sheet a series was read from.
@@ -39,13 +41,33 @@ public record ReadResult(String file, String sha256, String charset, char delimi
         series = List.copyOf(series);
         warnings = List.copyOf(warnings);
         java.util.Objects.requireNonNull(sheet, "sheet");
+        java.util.Objects.requireNonNull(keys, "keys");
     }
 
+    /** A file of plain columns, whose series have no keys. */
     public ReadResult(String file, String sha256, String charset, char delimiter, int rowsRead, String layout,
                       String periodFormat, Optional<DateOrder> dateOrder, Optional<DecimalMark> decimalMark,
                       Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings) {
         this(file, sha256, charset, delimiter, rowsRead, layout, periodFormat, dateOrder, decimalMark, aggregation, series,
-                warnings, Optional.empty());
+                warnings, Optional.empty(), SeriesKeys.none());
+    }
+
+    /** A sheet of a workbook, whose series have no keys. */
+    public ReadResult(String file, String sha256, String charset, char delimiter, int rowsRead, String layout,
+                      String periodFormat, Optional<DateOrder> dateOrder, Optional<DecimalMark> decimalMark,
+                      Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings,
+                      Optional<Sheet> sheet) {
+        this(file, sha256, charset, delimiter, rowsRead, layout, periodFormat, dateOrder, decimalMark, aggregation, series,
+                warnings, sheet, SeriesKeys.none());
+    }
+
+    /** A file of a statistics portal, whose series have keys. */
+    public ReadResult(String file, String sha256, String charset, char delimiter, int rowsRead, String layout,
+                      String periodFormat, Optional<DateOrder> dateOrder, Optional<DecimalMark> decimalMark,
+                      Optional<Aggregation> aggregation, List<Series> series, List<DataProblem> warnings,
+                      SeriesKeys keys) {
+        this(file, sha256, charset, delimiter, rowsRead, layout, periodFormat, dateOrder, decimalMark, aggregation, series,
+                warnings, Optional.empty(), keys);
     }
 
     /** The delimiter in words: {@code comma}, {@code semicolon}, {@code tab} or {@code bar}. */
@@ -54,6 +76,7 @@ public record ReadResult(String file, String sha256, String charset, char delimi
             case '\t' -> "tab";
             case ';' -> "semicolon";
             case '|' -> "bar";
+            case '\0' -> "none";
             default -> "comma";
         };
     }
@@ -68,14 +91,20 @@ public record ReadResult(String file, String sha256, String charset, char delimi
                 "no series named '" + name + "'; expected one of " + names())));
     }
 
-    /** The series names, quoted and listed: {@code 'Total', 'Domestic'}. */
+    /** The series names, quoted and listed: {@code 'Total', 'Domestic'}, each with its key when it has one ({@code 'Austria' (M.NR.AT)}). */
     public String names() {
-        return String.join(", ", series.stream().map(s -> "'" + s.name() + "'").toList());
+        return String.join(", ", series.stream().map(s -> "'" + s.name() + "'"
+                + keys.of(s.name()).map(k -> " (" + k.key() + ")").orElse("")).toList());
     }
 
-    /** The series named {@code name} (exact, then case-insensitive). */
+    /**
+     * The series named {@code name} (exact, then case-insensitive), or, in a file of a statistics
+     * portal, whose key is {@code name}: the whole key ({@code M.NR.AT}) or the codes of the
+     * dimensions that vary ({@code AT}).
+     */
     public Optional<Series> find(String name) {
         return series.stream().filter(s -> s.name().equals(name)).findFirst()
-                .or(() -> series.stream().filter(s -> s.name().equalsIgnoreCase(name)).findFirst());
+                .or(() -> series.stream().filter(s -> s.name().equalsIgnoreCase(name)).findFirst())
+                .or(() -> keys.seriesWithKey(name).flatMap(n -> series.stream().filter(s -> s.name().equals(n)).findFirst()));
     }
 }

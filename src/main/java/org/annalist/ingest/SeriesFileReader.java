@@ -84,6 +84,10 @@ public final class SeriesFileReader {
 
     private ReadResult read(ProblemLog log, TextDecoding.Text text, long size) throws IOException {
         CsvRows.Head head = CsvRows.head(text.reader());
+        Optional<ReadResult> published = PublishedFiles.read(head, text, log, options, baseName(log.file()));
+        if (published.isPresent()) {
+            return published.get();   // SDMX-CSV, the bulk tab layout or JSON-stat, recognised by content
+        }
         char delimiter = CsvRows.detectDelimiter(head.sample());
         long expectedRows = head.sampleLines() == 0 ? 16
                 : (long) (size / Math.max(1.0, head.sample().length() / (double) head.sampleLines()) * 1.02) + 16;

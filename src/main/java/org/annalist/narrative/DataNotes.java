@@ -19,7 +19,10 @@ public final class DataNotes {
         if (r.sheet().isPresent()) {
             reading.append(r.sheet().get()).append(", ");
         } else {
-            reading.append(r.charset()).append(", ").append(r.delimiter()).append("-separated, ");
+            reading.append(r.charset()).append(", ");
+            if (!r.delimiter().equals("none")) {
+                reading.append(r.delimiter()).append("-separated, ");   // JSON has no delimiter
+            }
         }
         // a workbook's dates are cells of their own type, turned into text by the reader: "read as", not "written"
         reading.append(r.layout()).append(r.sheet().isPresent() ? " layout, periods read as " : " layout, periods written ")
