@@ -6,13 +6,14 @@ import java.awt.Graphics;
 import java.awt.RenderingHints;
 import java.awt.geom.Rectangle2D;
 import java.io.ByteArrayOutputStream;
-import java.io.IOException;
-import java.io.OutputStreamWriter;
-import java.io.UncheckedIOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.util.Locale;
 import javax.xml.parsers.DocumentBuilderFactory;
+import javax.xml.transform.OutputKeys;
+import javax.xml.transform.Transformer;
+import javax.xml.transform.TransformerException;
+import javax.xml.transform.TransformerFactory;
+import javax.xml.transform.dom.DOMSource;
+import javax.xml.transform.stream.StreamResult;
 import javax.xml.parsers.ParserConfigurationException;
 import org.annalist.chart.Figure;
 import org.apache.batik.svggen.SVGGeneratorContext;
@@ -23,7 +24,8 @@ import org.w3c.dom.Element;
 /**
  * A chart as a standalone SVG file, for reuse in slides and web pages: drawn through Apache Batik's
  * SVG generator (Apache-2.0), with text as {@code <text>} elements in the brief's named font, so
- * that it can be searched, read aloud and edited.
+ * that it can be searched, read aloud and edited; colours and fonts are presentation attributes,
+ * which a web page's style sheet may override.
  */
 public final class SvgCharts {
 
@@ -52,14 +54,17 @@ public final class SvgCharts {
         Element root = g.getRoot();
         // a viewBox lets a web page or a slide scale the chart without cutting it
         root.setAttributeNS(null, "viewBox", String.format(Locale.ROOT, "0 0 %d %d", WIDTH, height));
-        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-        try (Writer writer = new OutputStreamWriter(bytes, StandardCharsets.UTF_8)) {
-            // style attributes (useCss) keep the file compact; no entity escaping: the file is UTF-8
-            g.stream(root, writer, true, false);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);   // writing to memory: not expected
-        }
         g.dispose();
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try {
+            // the JDK's serialiser: compact, UTF-8 (a × stays a character, not an entity)
+            Transformer xml = TransformerFactory.newInstance().newTransformer();
+            xml.setOutputProperty(OutputKeys.ENCODING, "UTF-8");
+            xml.setOutputProperty(OutputKeys.INDENT, "no");
+            xml.transform(new DOMSource(root), new StreamResult(bytes));
+        } catch (TransformerException e) {
+            throw new IllegalStateException("an SVG document in memory could not be written", e);
+        }
         return bytes.toByteArray();
     }
 

@@ -75,7 +75,7 @@ class SvgChartsTest {
         return texts;
     }
 
-    /** A CSS property as in effect on an element: its own style, else its nearest ancestor's. */
+    /** A property as in effect on an element: its own (style, then attribute), else its nearest ancestor's. */
     private static String inherited(Element element, String property) {
         for (Node n = element; n instanceof Element e; n = n.getParentNode()) {
             Map<String, String> style = new HashMap<>();
@@ -87,6 +87,9 @@ class SvgChartsTest {
             }
             if (style.containsKey(property)) {
                 return style.get(property);
+            }
+            if (e.hasAttribute(property)) {
+                return e.getAttribute(property);   // a presentation attribute, which a page's CSS may override
             }
         }
         return "";
