@@ -63,6 +63,7 @@ class ArchitectureTest {
             "com.fasterxml.jackson", Set.of("ingest", "findings", "brief"),
             "freemarker", Set.of("narrative"),
             "org.jfree", Set.of("chart", "render"),
+            "org.apache.batik", Set.of("render"),
             "com.openhtmltopdf", Set.of("render"),
             "org.apache.pdfbox", Set.of("render"),
             "picocli", Set.of("cli"),

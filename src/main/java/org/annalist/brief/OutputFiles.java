@@ -6,6 +6,7 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
 import java.time.Duration;
@@ -180,6 +181,10 @@ public final class OutputFiles {
     static String reason(IOException e) {
         if (e instanceof AccessDeniedException) {
             return "permission denied";
+        }
+        if (e instanceof NoSuchFileException) {
+            // the system names only the (temporary) file: in /proc, say, no file can be made at all
+            return "no file can be created in that folder";
         }
         if (e instanceof FileSystemException f && f.getReason() != null) {
             return f.getReason();

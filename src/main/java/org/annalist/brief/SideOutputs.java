@@ -31,7 +31,7 @@ public final class SideOutputs {
     }
 
     static void write(BriefWriter.Brief brief, Series series, Set<Kind> kinds) {
-        String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
+        String stem = brief.file().getFileName().toString().replaceFirst("(?i)\\.pdf$", "");
         Path folder = brief.file().toAbsolutePath().getParent();
         writeData(folder, stem, brief.findings(), series, kinds);
         writeCharts(folder, stem, brief.figures(), kinds);
@@ -39,7 +39,7 @@ public final class SideOutputs {
 
     /** For a combined brief: its small multiples, and per series the data files and the overview chart. */
     static void write(BriefWriter.CombinedBrief brief, List<Series> series, Set<Kind> kinds) {
-        String stem = brief.file().getFileName().toString().replaceFirst("\\.pdf$", "");
+        String stem = brief.file().getFileName().toString().replaceFirst("(?i)\\.pdf$", "");
         Path folder = brief.file().toAbsolutePath().getParent();
         writeCharts(folder, stem, List.of(brief.multiples()), kinds);
         for (int i = 0; i < series.size(); i++) {

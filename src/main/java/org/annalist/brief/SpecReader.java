@@ -144,6 +144,10 @@ public final class SpecReader {
         YamlTree.Node outputNode = m.entries().get("output");
         String output = outputNode == null ? folder.resolve("{series}-{period}.pdf").toString()
                 : values.path(outputNode, "output").toString();
+        if (!output.toLowerCase(Locale.ROOT).endsWith(".pdf")) {
+            // a brief is a PDF; its side outputs are named after it without the .pdf
+            throw values.problemAt(outputNode, "output '" + output + "': a brief is a PDF; expected a name ending in .pdf");
+        }
         Optional<Instant> generatedAt = values.optionalText(m, "generated_at").map(t -> {
             try {
                 return Instant.parse(t);

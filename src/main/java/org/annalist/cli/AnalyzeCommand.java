@@ -18,7 +18,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code annalist analyze FILE}: the findings, as notes or as JSON. */
-@Command(name = "analyze", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+@Command(name = "analyze", aliases = "analyse", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Analyse the series in FILE and print the findings with their evidence.")
 final class AnalyzeCommand implements Callable<Integer> {
 

@@ -56,6 +56,10 @@ final class BatchCommand implements Callable<Integer> {
         BriefSpec briefs = java.nio.file.Files.isDirectory(specFile) ? FolderSpec.of(specFile)
                 : SpecReader.read(specFile);
         if (outFolder != null) {
+            if (java.nio.file.Files.exists(outFolder) && !java.nio.file.Files.isDirectory(outFolder)) {
+                // else every brief would fail on it, one by one
+                throw new UserInputException("--out " + outFolder + ": is a file; expected a folder to write the briefs into");
+            }
             briefs = briefs.withOutputFolder(outFolder);
         }
         PrintWriter out = spec.commandLine().getOut();

@@ -1,5 +1,6 @@
 package org.annalist.cli;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
@@ -62,6 +63,12 @@ final class BriefCommand implements Callable<Integer> {
      * been told about them: the logo, the time, then the analysis choices.
      */
     Job job() {
+        if (output != null) {
+            refuseOtherThanPdf(output);
+        }
+        if (templates != null) {
+            refuseOtherThanFolder(templates);
+        }
         Path target = output != null ? output : Path.of(defaultName(input.file, series));
         if (logo != null) {
             Logo.problem(logo).ifPresent(problem -> {
@@ -86,6 +93,29 @@ final class BriefCommand implements Callable<Integer> {
         brief.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
         spec.commandLine().getOut().println("wrote " + brief.file() + " (" + brief.series().get(0).name() + ")");
         return ExitCodes.DONE;
+    }
+
+    /** A brief is a PDF: a name for anything else (report.docx, report) is a mistake, said before any work. */
+    static void refuseOtherThanPdf(Path output) {
+        Path name = output.getFileName();
+        if (name == null || !name.toString().toLowerCase(Locale.ROOT).endsWith(".pdf")) {
+            throw new UserInputException("-o " + output + ": a brief is a PDF; expected a file name ending in .pdf");
+        }
+    }
+
+    /** {@code --templates} names a folder that is there, before any work (the renderer would fail late and obscurely). */
+    static void refuseOtherThanFolder(Path folder) {
+        if (!Files.exists(folder)) {
+            throw new UserInputException("--templates " + folder + ": no such folder; expected a folder of templates "
+                    + "(brief.ftlx, brief.css)");
+        }
+        if (!Files.isDirectory(folder)) {
+            throw new UserInputException("--templates " + folder + ": is a file; expected a folder of templates "
+                    + "(brief.ftlx, brief.css)");
+        }
+        if (!Files.isReadable(folder)) {
+            throw new UserInputException("--templates " + folder + ": cannot be read (permission denied)");
+        }
     }
 
     static String defaultName(Path input, String series) {

@@ -26,9 +26,14 @@ final class ExitCodes {
     private ExitCodes() {
     }
 
-    /** For picocli's parameter errors: an unknown option, a value that is not one of the words, … */
+    /**
+     * For picocli's parameter errors: an unknown option or command (with the name most likely meant,
+     * see {@link Suggestions}), a value that is not one of the words, …
+     */
     static int usage(CommandLine.ParameterException e, String[] args) {
-        e.getCommandLine().getErr().println("annalist: " + e.getMessage());
+        String message = e instanceof CommandLine.UnmatchedArgumentException unmatched && !unmatched.getUnmatched().isEmpty()
+                ? Suggestions.unmatched(unmatched) : e.getMessage();
+        e.getCommandLine().getErr().println("annalist: " + message);
         e.getCommandLine().getErr().println("Try '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
         return BAD_INPUT;
     }

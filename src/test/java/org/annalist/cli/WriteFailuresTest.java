@@ -75,6 +75,17 @@ class WriteFailuresTest {
     }
 
     @Test
+    void aFolderWhereNoFileCanBeMadeSaysSoRatherThanNamingATemporaryFile() throws IOException {
+        // /proc takes no new files, even from root; the system's error names only the temporary file
+        Path proc = Path.of("/proc");
+        Assumptions.assumeTrue(Files.isDirectory(proc.resolve("self")), "a Linux /proc");
+        Run run = brief(proc.resolve("brief.pdf"));
+        assertThat(run.exitCode()).as(run.err()).isEqualTo(2);
+        assertThat(run.err()).isEqualTo(proc.resolve("brief.pdf") + ": cannot be written (no file can be created in that "
+                + "folder)" + System.lineSeparator());
+    }
+
+    @Test
     void theLongestNameTheFileSystemTakesIsWritten() throws IOException {
         Path target = folder.resolve("c".repeat(251) + ".pdf");
         Run run = brief(target);
