@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Start-up and batch figures of the distribution's launcher beside the old `java -jar` (default
 # JVM settings), each the min / median / max of RUNS runs of a fresh process, with peak resident
-# memory (GNU time's %M). Not a test: run it by hand from the top folder after
+# memory (GNU time's %M) and CPU time (user + system: on a busy machine, wall time mostly
+# measures the others' work). Not a test: run it by hand from the top folder after
 #   mvn -q -B -DskipTests package
 # (which builds target/annalist/, target/annalist.jar and the test classes).
 #
@@ -36,27 +37,28 @@ stats() {   # stats VALUES... : min / median / max
     printf '%s\n' "$@" | sort -g | awk '{v[NR] = $1} END {printf "%s / %s / %s", v[1], v[int((NR + 1) / 2)], v[NR]}'
 }
 
-measure() {   # measure LABEL N COMMAND... : wall seconds and peak RSS (MB) of N runs
-    local label=$1 n=$2 walls=() rss=() i
+measure() {   # measure LABEL N COMMAND... : wall seconds, CPU seconds (user + system) and peak RSS (MB) of N runs
+    local label=$1 n=$2 walls=() cpus=() rss=() i
     shift 2
     for ((i = 0; i < n; i++)); do
-        if ! /usr/bin/time -f '%e %M' -o "$work/time" "$@" > "$work/stdout" 2> "$work/stderr"; then
+        if ! /usr/bin/time -f '%e %U %S %M' -o "$work/time" "$@" > "$work/stdout" 2> "$work/stderr"; then
             echo "$label: the command failed: $*" >&2
             tail -5 "$work/stderr" >&2
             return 1
         fi
-        read -r wall kb < <(tail -1 "$work/time")
+        read -r wall user system kb < <(tail -1 "$work/time")
         walls+=("$wall")
+        cpus+=("$(awk -v u="$user" -v s="$system" 'BEGIN {printf "%.2f", u + s}')")
         rss+=("$((kb / 1024))")
     done
-    printf '%-44s %-22s %s\n' "$label" "$(stats "${walls[@]}")" "$(stats "${rss[@]}")"
+    printf '%-40s %-21s %-21s %s\n' "$label" "$(stats "${walls[@]}")" "$(stats "${cpus[@]}")" "$(stats "${rss[@]}")"
 }
 
 header() {
-    printf '\n%-44s %-22s %s\n' "$1 ($2 runs)" "wall s min/med/max" "peak RSS MB min/med/max"
+    printf '\n%-40s %-21s %-21s %s\n' "$1 ($2 runs)" "wall s min/med/max" "CPU s min/med/max" "peak RSS MB min/med/max"
 }
 
-printf 'machine: %s cores, load %s; %s\n' "$(nproc)" "$(cut -d' ' -f1-3 /proc/loadavg)" \
+printf 'machine: %s cores, load average %s at the start; %s\n' "$(nproc)" "$(cut -d' ' -f1-3 /proc/loadavg)" \
     "$(java -version 2>&1 | sed -n 1p)"
 
 if [[ " $figures " == *" startup "* ]]; then
@@ -73,13 +75,13 @@ fi
 
 if [[ " $figures " == *" warm "* ]]; then
     # a warm brief: the same brief again and again in one running JVM (test classes' Benchmark)
-    printf '\n%-44s %s\n' "brief, warm in a running JVM (5 rounds)" "ms per brief min/med/max"
+    printf '\n%-40s %s\n' "brief, warm in a running JVM (5 rounds)" "ms per brief min/med/max"
     cp="$jar:target/test-classes"
     # shellcheck disable=SC2046
-    printf '%-44s %s\n' "                old: default JVM settings" \
+    printf '%-40s %s\n' "                old: default JVM settings" \
         "$(stats $(java -cp "$cp" org.annalist.cli.Benchmark --warm-brief))"
     # shellcheck disable=SC2046
-    printf '%-44s %s\n' "                new: the launcher's settings" \
+    printf '%-40s %s\n' "                new: the launcher's settings" \
         "$(stats $(java -Xmx640m -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -cp "$cp" org.annalist.cli.Benchmark --warm-brief))"
 fi
 
@@ -122,3 +124,4 @@ if [[ " $figures " == *" bulk "* ]]; then
     measure "analyze 10,000  old: java -jar" "$batch_runs" $old analyze "$many" --horizon 0
     measure "analyze 10,000  new: bin/annalist" "$batch_runs" "$new" analyze "$many" --horizon 0
 fi
+printf '\nload average at the end: %s\n' "$(cut -d' ' -f1-3 /proc/loadavg)"

@@ -93,8 +93,7 @@ final class DemoCommand implements Callable<Integer> {
      * The demo data of the repository's top folder when run there, else the copy the distribution
      * carries beside {@code bin/} (its launcher passes that folder as {@code annalist.home}).
      */
-    static Path defaultData(Optional<String> installedHome) {
-        Path here = Path.of("demo-data");
+    static Path defaultData(Path here, Optional<String> installedHome) {
         if (Files.isDirectory(here) || installedHome.isEmpty()) {
             return here;
         }
@@ -105,7 +104,7 @@ final class DemoCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (data == null) {
-            data = defaultData(Optional.ofNullable(System.getProperty("annalist.home")));
+            data = defaultData(Path.of("demo-data"), Optional.ofNullable(System.getProperty("annalist.home")));
         }
         if (!Files.isDirectory(data)) {
             throw new UserInputException(data + ": no such folder; expected the demo-data folder of the Annalist "
