@@ -26,7 +26,8 @@ goto installHint
 
 :checkVersion
 set "JAVA_VERSION="
-for /f "tokens=3" %%v in ('"%JAVA_EXE%" -version 2^>^&1 ^| findstr /i /c:"version"') do if not defined JAVA_VERSION set "JAVA_VERSION=%%~v"
+rem exactly two quotes in the command, around the program: cmd keeps them (a path with spaces)
+for /f "tokens=3" %%v in ('"%JAVA_EXE%" -version 2^>^&1 ^| findstr /i version') do if not defined JAVA_VERSION set "JAVA_VERSION=%%~v"
 set "JAVA_MAJOR="
 for /f "tokens=1,2 delims=." %%a in ("%JAVA_VERSION%") do (
     if "%%a"=="1" (set "JAVA_MAJOR=%%b") else (set "JAVA_MAJOR=%%a")
