@@ -67,8 +67,9 @@ final class DemoCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--data", paramLabel = "DIR", description = "Folder of the demo data. Default: demo-data.")
-    Path data = Path.of("demo-data");
+    @Option(names = "--data", paramLabel = "DIR",
+            description = "Folder of the demo data. Default: demo-data, here or else in the installed tool's folder.")
+    Path data;
 
     @Option(names = "--out", paramLabel = "DIR", description = "Folder for the briefs. Default: out.")
     Path out = Path.of("out");
@@ -88,8 +89,23 @@ final class DemoCommand implements Callable<Integer> {
                 Optional.of(BriefOutput.pdf(out.resolve(demo.output()), masthead)));
     }
 
+    /**
+     * The demo data of the repository's top folder when run there, else the copy the distribution
+     * carries beside {@code bin/} (its launcher passes that folder as {@code annalist.home}).
+     */
+    static Path defaultData(Path here, Optional<String> installedHome) {
+        if (Files.isDirectory(here) || installedHome.isEmpty()) {
+            return here;
+        }
+        Path installed = Path.of(installedHome.get(), "demo-data");
+        return Files.isDirectory(installed) ? installed : here;
+    }
+
     @Override
     public Integer call() {
+        if (data == null) {
+            data = defaultData(Path.of("demo-data"), Optional.ofNullable(System.getProperty("annalist.home")));
+        }
         if (!Files.isDirectory(data)) {
             throw new UserInputException(data + ": no such folder; expected the demo-data folder of the Annalist "
                     + "repository (run from its top folder, or pass --data DIR)");

@@ -76,7 +76,7 @@ final class ExitCodes {
 
     /** What went wrong, on one line; an Error says what it means for the user. */
     static String describe(Throwable e) {
-        String what = e instanceof OutOfMemoryError ? "out of memory (" + e + "); a larger heap (java -Xmx…) may help"
+        String what = e instanceof OutOfMemoryError ? "out of memory (" + e + "); a larger heap may help (ANNALIST_JAVA_OPTS=-Xmx2g annalist …)"
                 : e instanceof StackOverflowError ? "the computation nested too deeply (" + e + ")"
                 : String.valueOf(e);
         return what.replaceAll("\\s*\\R\\s*", " ");

@@ -43,6 +43,10 @@ public final class Benchmark {
     }
 
     public static void main(String[] args) throws Exception {
+        if (args.length > 0 && args[0].equals("--warm-brief")) {
+            warmBriefRounds();
+            return;
+        }
         if (args.length > 0) {
             child(args);
             return;
@@ -292,6 +296,32 @@ public final class Benchmark {
             System.out.printf(Locale.ROOT, "Brief (demo total), cold, java %s-jar:%s %.2f s wall (best of 3)%n",
                     flags.length == 0 ? "" : String.join(" ", flags) + " ", flags.length == 0 ? "                          " : "", best);
         }
+    }
+
+    /**
+     * For {@code dev/bench-launcher.sh}: the demo's total brief made 10 times to warm this JVM
+     * (started with whatever flags are being measured), then 5 rounds of 5 briefs; prints each
+     * round's milliseconds per brief on one line.
+     */
+    private static void warmBriefRounds() throws Exception {
+        Path pdf = Files.createTempDirectory("annalist-bench").resolve("total.pdf");
+        Job job = new Job(new Job.Input(Path.of("demo-data/quennelmark-guest-nights.csv"), ReadOptions.defaults()),
+                SeriesChoice.one(Optional.of("Total"), Optional.empty()), AnalysisChoices.fromTheData(),
+                Optional.of(BriefOutput.pdf(pdf, new BriefOutput.MastheadChoices("Guest nights in Quennelmark", "",
+                        Optional.empty(), Masthead.Paper.A4, Locale.ENGLISH, Optional.empty(),
+                        Optional.of(Instant.parse("2026-11-20T08:00:00Z"))))));
+        for (int i = 0; i < 10; i++) {
+            new BriefPipeline().briefs(job);
+        }
+        List<String> rounds = new ArrayList<>();
+        for (int round = 0; round < 5; round++) {
+            long start = System.nanoTime();
+            for (int i = 0; i < 5; i++) {
+                new BriefPipeline().briefs(job);
+            }
+            rounds.add(String.format(Locale.ROOT, "%.0f", (System.nanoTime() - start) / 1e6 / 5));
+        }
+        System.out.println(String.join(" ", rounds));
     }
 
     /** {@code java FLAGS… -jar JAR}: this JVM's launcher on the jar the tool runs from, as a user starts it. */

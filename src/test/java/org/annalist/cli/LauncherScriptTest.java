@@ -1,0 +1,178 @@
+package org.annalist.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.File;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.TimeUnit;
+import java.util.jar.Attributes;
+import java.util.jar.JarOutputStream;
+import java.util.jar.Manifest;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The POSIX launcher {@code src/dist/bin/annalist}, as the distribution lays it out
+ * ({@code bin/annalist}, {@code lib/annalist.jar}), run by {@code /bin/sh}. Most cases run it on a
+ * stand-in Java (a shell script that prints the arguments it was given, with a {@code release}
+ * file naming its version), which shows what the launcher would start without starting a JVM;
+ * one starts the real Java on a jar whose manifest points at the test's classpath. Runs where
+ * {@code /bin/sh} exists (not on Windows); the test does not need the package phase.
+ */
+class LauncherScriptTest {
+
+    private static final Path SCRIPT = Path.of("src/dist/bin/annalist");
+
+    @TempDir
+    Path temp;
+
+    private Path home;
+
+    @BeforeEach
+    void layOutADistribution() throws IOException {
+        assumeTrue(Files.isExecutable(Path.of("/bin/sh")), "needs a POSIX shell");
+        home = temp.resolve("annalist home");   // a space in the path on purpose
+        Files.createDirectories(home.resolve("bin"));
+        Files.createDirectories(home.resolve("lib"));
+        Files.copy(SCRIPT, home.resolve("bin/annalist"));
+        executable(home.resolve("bin/annalist"));
+    }
+
+    @Test
+    void passesEveryArgumentThroughUnchangedAfterTheJvmSettings() throws Exception {
+        Path java = fakeJava("17.0.15");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(),
+                "brief", "my data.csv", "--title", "Nights \"high\" season", "*", "$HOME", "");
+        assertThat(run.code).isZero();
+        List<String> args = run.lines();
+        int main = args.indexOf("org.annalist.cli.Main");
+        assertThat(args.subList(main + 1, args.size()))
+                .containsExactly("brief", "my data.csv", "--title", "Nights \"high\" season", "*", "$HOME", "");
+        assertThat(args.subList(0, main)).contains("-XX:+UseSerialGC", "-Xmx640m", "-XX:TieredStopAtLevel=1",
+                "-Xshare:auto", "-cp", home.toRealPath().resolve("lib/annalist.jar").toString());
+    }
+
+    @Test
+    void findsItsFolderThroughASymbolicLinkFromAnotherWorkingFolder() throws Exception {
+        Path java = fakeJava("21.0.2");
+        Path linkFolder = Files.createDirectories(temp.resolve("elsewhere/on-path"));
+        Path link = Files.createSymbolicLink(linkFolder.resolve("annalist"), home.resolve("bin/annalist"));
+        Path workingFolder = Files.createDirectories(temp.resolve("work"));
+        Result run = run(Map.of("JAVA_HOME", java.toString()), workingFolder, link.toString(), "--version");
+        assertThat(run.code).isZero();
+        assertThat(run.lines()).contains(home.toRealPath().resolve("lib/annalist.jar").toString(),
+                "-Dannalist.home=" + home.toRealPath());
+    }
+
+    @Test
+    void userSettingsComeLastAndReplaceTheCollectorAndHeapBound() throws Exception {
+        Path java = fakeJava("17.0.1");
+        Result run = run(Map.of("JAVA_HOME", java.toString(), "ANNALIST_JAVA_OPTS", "-XX:+UseG1GC -Xmx2g -Dx=1"),
+                temp, home.resolve("bin/annalist").toString(), "check", "f.csv");
+        List<String> args = run.lines();
+        assertThat(args).doesNotContain("-XX:+UseSerialGC", "-Xmx640m").contains("-XX:+UseG1GC", "-Xmx2g", "-Dx=1");
+        assertThat(args.indexOf("-Dx=1")).isGreaterThan(args.indexOf("-XX:TieredStopAtLevel=1"));
+    }
+
+    @Test
+    void refusesAJavaOlderThan17SayingWhatToInstallWithExitCode2() throws Exception {
+        Path java = fakeJava("11.0.21");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "--help");
+        assertThat(run.code).isEqualTo(2);
+        assertThat(run.stdout).isEmpty();
+        assertThat(run.stderr).contains("needs Java 17 or later").contains("11.0.21").contains("install a Java 17");
+    }
+
+    @Test
+    void refusesAJavaHomeWithoutJavaWithExitCode2() throws Exception {
+        Path empty = Files.createDirectories(temp.resolve("no java here"));
+        Result run = run(Map.of("JAVA_HOME", empty.toString()), temp, home.resolve("bin/annalist").toString(), "--help");
+        assertThat(run.code).isEqualTo(2);
+        assertThat(run.stderr).contains("JAVA_HOME is set to '" + empty + "', which holds no bin/java")
+                .contains("install a Java 17");
+    }
+
+    @Test
+    void saysWhatToInstallWhenThereIsNoJavaAtAllWithExitCode2() throws Exception {
+        // an empty PATH folder: the script needs no outside program to find that there is no Java
+        Path tools = Files.createDirectories(temp.resolve("tools"));
+        Result run = run(Map.of("PATH", tools.toString()), temp, home.resolve("bin/annalist").toString(), "--help");
+        assertThat(run.code).isEqualTo(2);
+        assertThat(run.stderr).contains("no Java found").contains("install a Java 17");
+    }
+
+    @Test
+    void startsTheRealJavaOnTheTool() throws Exception {
+        Path java = Path.of(System.getProperty("java.home"));
+        assumeTrue(Files.isReadable(java.resolve("release")), "the running Java has no release file");
+        manifestOnlyJar(home.resolve("lib/annalist.jar"));
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "--version");
+        assertThat(run.code).as(run.stderr).isZero();
+        assertThat(run.stdout).startsWith("annalist ");
+        assertThat(run.stderr).isEmpty();
+    }
+
+    /** A JDK folder whose bin/java prints its arguments one per line, and whose release file names {@code version}. */
+    private Path fakeJava(String version) throws IOException {
+        Path jdk = Files.createDirectories(temp.resolve("jdk " + version));
+        Files.createDirectories(jdk.resolve("bin"));
+        Files.writeString(jdk.resolve("release"), "IMPLEMENTOR=\"test\"\nJAVA_RUNTIME_VERSION=\"" + version
+                + "+1\"\nJAVA_VERSION=\"" + version + "\"\n");
+        Path java = jdk.resolve("bin/java");
+        Files.writeString(java, "#!/bin/sh\nfor a in \"$@\"; do printf '%s\\n' \"$a\"; done\n");
+        executable(java);
+        return jdk;
+    }
+
+    /** A jar of nothing but a manifest whose Class-Path is this test's classpath: the tool as the test sees it. */
+    private static void manifestOnlyJar(Path jar) throws IOException {
+        Manifest manifest = new Manifest();
+        manifest.getMainAttributes().put(Attributes.Name.MANIFEST_VERSION, "1.0");
+        List<String> urls = new ArrayList<>();
+        for (String entry : System.getProperty("java.class.path").split(File.pathSeparator)) {
+            urls.add(Path.of(entry).toAbsolutePath().toUri().toString());
+        }
+        manifest.getMainAttributes().put(Attributes.Name.CLASS_PATH, String.join(" ", urls));
+        try (JarOutputStream out = new JarOutputStream(Files.newOutputStream(jar), manifest)) {
+            out.flush();
+        }
+    }
+
+    private static void executable(Path file) throws IOException {
+        Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rwxr-xr-x"));
+    }
+
+    private record Result(int code, String stdout, String stderr) {
+        List<String> lines() {
+            return stdout.lines().toList();
+        }
+    }
+
+    private static Result run(Map<String, String> env, Path workingFolder, String... command) throws Exception {
+        ProcessBuilder builder = new ProcessBuilder(command).directory(workingFolder.toFile());
+        builder.environment().remove("JAVA_HOME");
+        builder.environment().remove("ANNALIST_JAVA_OPTS");
+        builder.environment().putAll(env);
+        Path out = Files.createTempFile("launcher", ".out");
+        Path err = Files.createTempFile("launcher", ".err");
+        Process process = builder.redirectOutput(out.toFile()).redirectError(err.toFile()).start();
+        if (!process.waitFor(120, TimeUnit.SECONDS)) {
+            process.destroyForcibly();
+            throw new AssertionError("the launcher did not finish within 120 s: " + List.of(command));
+        }
+        Result result = new Result(process.exitValue(), Files.readString(out, StandardCharsets.UTF_8),
+                Files.readString(err, StandardCharsets.UTF_8));
+        Files.delete(out);
+        Files.delete(err);
+        return result;
+    }
+}
