@@ -80,17 +80,28 @@ final class Intervals {
     }
 
     /**
-     * The quantile a future error stays below with probability at least {@code level}, from
-     * {@code x}, errors of the same kind: the ⌈(n + 1)·level⌉-th smallest of the n values, the split
-     * conformal prediction quantile (Lei, G'Sell, Rinaldo, Tibshirani &amp; Wasserman 2018,
-     * Distribution-free predictive inference for regression, <i>J. Amer. Statist. Assoc.</i>
-     * 113(523), 1094–1111, §2.2, from memory), the largest when that rank exceeds n. The plain sample
-     * quantile of a few errors is, on average, exceeded by a new one more often than 1 − level.
+     * The {@code level} quantile of {@code x}, errors of the same kind, that a new error exceeds with
+     * probability 1 − level on average: the (n + 1)·level-th smallest of the n values, interpolated
+     * ([1] type 6). A new exchangeable value falls below the k-th smallest of n with probability
+     * k / (n + 1) (the rank argument of split conformal prediction: Lei, G'Sell, Rinaldo, Tibshirani
+     * &amp; Wasserman 2018, <i>J. Amer. Statist. Assoc.</i> 113(523), 1094–1111, §2.2, from memory).
+     * The plain type 7 quantile of a few errors is exceeded more often than that; the rank rounded up
+     * to ⌈(n + 1)·level⌉, the conformal guarantee, less often, and each of the outlook's widening
+     * steps, taken only when it widens, added that margin again: on M3 (every second series) the
+     * rounded-up rank gave 80 % coverage of 0.89 (monthly) and 0.87 (yearly), this one 0.87 and 0.83.
+     * Below the first position the smallest value, beyond the last the largest.
      */
     static double predictive(double[] x, double level) {
         double[] sorted = x.clone();
         Arrays.sort(sorted);
-        int rank = (int) Math.ceil((sorted.length + 1) * level);
-        return sorted[Math.min(sorted.length, rank) - 1];
+        double position = (sorted.length + 1) * level; // 1-based
+        if (position <= 1) {
+            return sorted[0];
+        }
+        if (position >= sorted.length) {
+            return sorted[sorted.length - 1];
+        }
+        int below = (int) Math.floor(position);
+        return sorted[below - 1] + (position - below) * (sorted[below] - sorted[below - 1]);
     }
 }

@@ -207,15 +207,17 @@ class OutlookTest {
     }
 
     /**
-     * The split conformal quantile (Lei et al. 2018, §2.2): of n = 10 values the ⌈11·0.8⌉ = 9th smallest
-     * for 80 %, and the largest for 95 %, where ⌈11·0.95⌉ = 11 exceeds n (arithmetic of the definition).
+     * The type 6 quantile at rank (n + 1)·p, checked against R 4.2.2 {@code quantile(x, p, type = 6)}
+     * (run on this project's machine): 1:10 at 0.8 gives 8.8 and at 0.95 gives 10 (rank 10.45 beyond
+     * n: the largest); 1:4 at 0.5 gives 2.5; c(2, 7, 1, 8, 2, 8, 1, 8) at 0.8 gives 8.
      */
     @Test
-    void predictiveQuantilesTakeTheConformalRank() {
+    void predictiveQuantilesTakeRankNPlusOneTimesPAsRsTypeSix() {
         double[] x = {10, 9, 8, 7, 6, 5, 4, 3, 2, 1};
-        assertThat(Intervals.predictive(x, 0.80)).isEqualTo(9);
+        assertThat(Intervals.predictive(x, 0.80)).isCloseTo(8.8, within(1e-12));
         assertThat(Intervals.predictive(x, 0.95)).isEqualTo(10);
-        assertThat(Intervals.predictive(new double[] {3, 1, 2, 4}, 0.5)).isEqualTo(3); // ⌈5·0.5⌉ = 3rd
+        assertThat(Intervals.predictive(new double[] {3, 1, 2, 4}, 0.5)).isCloseTo(2.5, within(1e-12));
+        assertThat(Intervals.predictive(new double[] {2, 7, 1, 8, 2, 8, 1, 8}, 0.8)).isEqualTo(8);
     }
 
     /** Seasonal random walk: variance σ²(⌊(h − 1)/m⌋ + 1) (Hyndman &amp; Athanasopoulos 2021, Table 5.2). */
