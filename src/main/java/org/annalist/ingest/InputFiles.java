@@ -1,6 +1,5 @@
 package org.annalist.ingest;
 
-import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.AccessDeniedException;
@@ -95,31 +94,9 @@ public final class InputFiles {
      * @throws DataProblemException as {@link #read}
      */
     public static InputStream openBounded(Path file, long maxBytes, String expected) {
-        InputStream in = open(file, maxBytes, expected);
-        return new FilterInputStream(in) {
-            private long count;
-
-            @Override
-            public int read() throws IOException {
-                int b = super.read();
-                count(b < 0 ? 0 : 1);
-                return b;
-            }
-
-            @Override
-            public int read(byte[] buffer, int offset, int length) throws IOException {
-                int n = super.read(buffer, offset, length);
-                count(Math.max(n, 0));
-                return n;
-            }
-
-            private void count(int n) {
-                count += n;
-                if (count > maxBytes) {
-                    throw new DataProblemException(new DataProblem(file.toString(), 0, 0, tooBig(maxBytes)));
-                }
-            }
-        };
+        return new LimitedStream(open(file, maxBytes, expected), maxBytes, max -> {
+            throw new DataProblemException(new DataProblem(file.toString(), 0, 0, tooBig(max)));
+        });
     }
 
     /** A size limit given in megabytes (MiB) as bytes. */

@@ -118,7 +118,7 @@ final class OdsBook extends Workbook {
                         table(sheet, sink);
                         return;
                     } else {
-                        skipElement();
+                        XlsxBook.skip(xml);
                     }
                 }
             }
@@ -153,7 +153,7 @@ final class OdsBook extends Workbook {
                         depth--;   // row() read its end
                     }
                     case "table" -> {   // a table inside a cell's frame: not the sheet's cells
-                        skipElement();
+                        XlsxBook.skip(xml);
                         depth--;
                     }
                     default -> {
@@ -196,7 +196,7 @@ final class OdsBook extends Workbook {
                 String name = xml.getLocalName();
                 boolean covered = name.equals("covered-table-cell");   // §9.1.5, under a merged cell
                 if (!TABLE.equals(xml.getNamespaceURI()) || !(covered || name.equals("table-cell"))) {
-                    skipElement();
+                    XlsxBook.skip(xml);
                     continue;
                 }
                 int cellsRepeated = Math.max(1, XlsxBook.number(xml.getAttributeValue(TABLE, "number-columns-repeated"), 1));
@@ -315,7 +315,7 @@ final class OdsBook extends Workbook {
                     } else if (inText && (name.equals("tab") || name.equals("line-break"))) {
                         text.append(' ');
                     } else if (!inText) {
-                        skipElement();   // annotations, frames: not the cell's text
+                        XlsxBook.skip(xml);   // annotations, frames: not the cell's text
                         depth--;
                     }
                 } else if (event == XMLStreamConstants.END_ELEMENT) {
@@ -327,18 +327,6 @@ final class OdsBook extends Workbook {
                 }
             }
             return text.toString();
-        }
-
-        private void skipElement() throws XMLStreamException {
-            int depth = 1;
-            while (depth > 0 && xml.hasNext()) {
-                int event = xml.next();
-                if (event == XMLStreamConstants.START_ELEMENT) {
-                    depth++;
-                } else if (event == XMLStreamConstants.END_ELEMENT) {
-                    depth--;
-                }
-            }
         }
     }
 }

@@ -222,6 +222,7 @@ final class XlsxBook extends Workbook {
         return text;
     }
 
+    /** Reads past the element just started, with everything inside it (shared by both workbook kinds). */
     static void skip(XMLStreamReader xml) throws XMLStreamException {
         int depth = 1;
         while (depth > 0 && xml.hasNext()) {

@@ -1,7 +1,6 @@
 package org.annalist.ingest;
 
 import java.io.ByteArrayInputStream;
-import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Path;
@@ -89,33 +88,12 @@ abstract class ZipParts implements AutoCloseable {
     public abstract void close() throws IOException;
 
     private static InputStream bounded(InputStream in, String name, long limit) {
-        return new FilterInputStream(in) {
-            private long count;
-
-            @Override
-            public int read() throws IOException {
-                int b = super.read();
-                count(b < 0 ? 0 : 1);
-                return b;
-            }
-
-            @Override
-            public int read(byte[] buffer, int offset, int length) throws IOException {
-                int n = super.read(buffer, offset, length);
-                count(Math.max(n, 0));
-                return n;
-            }
-
+        return new LimitedStream(in, limit, max -> {
+            throw new TooLarge(name, max);
+        }) {
             @Override
             public void close() {
                 // ZipInputStream's entries are closed with the stream; ZipFile's by the package
-            }
-
-            private void count(int n) throws TooLarge {
-                count += n;
-                if (count > limit) {
-                    throw new TooLarge(name, limit);
-                }
             }
         };
     }
