@@ -17,12 +17,13 @@ import org.annalist.series.ValueFlag;
  * What {@code check} reports for one series: the findings' {@code series} block, plus the missing
  * periods, the flagged periods per flag, and the file's warnings; for a file of a statistics
  * portal also the series' key ({@code M.NR.AT}) and the data set's shared dimensions (both left out
- * of the JSON when empty).
+ * of the JSON when empty); for a workbook the sheet read (left out for other files).
  */
 public record SeriesCheck(@JsonUnwrapped SeriesFacts series, List<String> missingPeriods,
                           Map<String, List<String>> flagged, List<String> warnings,
                           @JsonInclude(JsonInclude.Include.NON_EMPTY) String key,
-                          @JsonInclude(JsonInclude.Include.NON_EMPTY) String dataset) {
+                          @JsonInclude(JsonInclude.Include.NON_EMPTY) String dataset,
+                          @JsonInclude(JsonInclude.Include.NON_NULL) ReadResult.Sheet sheet) {
 
     public static List<SeriesCheck> of(ReadResult read) {
         List<String> warnings = read.warnings().stream().map(DataProblem::toString).toList();
@@ -36,7 +37,8 @@ public record SeriesCheck(@JsonUnwrapped SeriesFacts series, List<String> missin
                 }
             }
             checks.add(new SeriesCheck(SeriesFacts.of(s), s.missingPeriods().stream().map(Period::label).toList(),
-                    flagged, warnings, read.keys().of(s.name()).map(k -> k.key()).orElse(""), read.keys().description()));
+                    flagged, warnings, read.keys().of(s.name()).map(k -> k.key()).orElse(""), read.keys().description(),
+                    read.sheet().orElse(null)));
         }
         return List.copyOf(checks);
     }

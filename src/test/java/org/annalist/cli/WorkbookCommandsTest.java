@@ -55,6 +55,8 @@ class WorkbookCommandsTest {
                         + "periods read as YYYY-MM-DD")
                 .contains("series 'Domestic'").contains("series 'Brevania'")
                 .contains(xlsx + ", sheet 'Nights', cell C3: holds the error #N/A; read as a missing value");
+        Run json = Run.of("check", "--format", "json", xlsx.toString());
+        assertThat(json.out().replaceAll("\\s+", "")).contains("\"sheet\":{\"format\":\"xlsx\",\"name\":\"Nights\",\"number\":2}");
     }
 
     @Test
