@@ -8,9 +8,7 @@
 # seven significant digits. dev/m3/r-{yearly,quarterly,monthly}.csv were made so on this project's
 # machine (R 4.2.2, forecast 8.20, December 2026); the monthly run takes more than 80 minutes of CPU,
 # so each series' rows are appended as soon as they are made and a rerun into the same output file
-# skips the series it already holds (a run cut short resumes where it stopped). r-monthly.partial.csv
-# holds 688 of the 1,428 monthly series from such a run (3 December 2026); no benchmark reads it: copy it
-# to r-monthly.csv and rerun the monthly command into that file to finish it, then delete it.
+# skips the series it already holds (a run cut short resumes where it stopped).
 # Nothing is read or written besides the two input files and the named output.
 args <- commandArgs(trailingOnly = TRUE)
 suppressMessages(library(forecast))

@@ -26,6 +26,11 @@ final class Aggregator {
     private Aggregator() {
     }
 
+    /** Every series aggregated to {@code to}, or the series as they are when no aggregation was asked for. */
+    static List<Series> aggregateAll(List<Series> series, java.util.Optional<Aggregation> to, ProblemLog log) {
+        return to.isEmpty() ? series : series.stream().map(s -> aggregate(s, to.get(), log)).toList();
+    }
+
     static Series aggregate(Series series, Aggregation to, ProblemLog log) {
         Frequency from = series.frequency();
         if (from == to.target()) {

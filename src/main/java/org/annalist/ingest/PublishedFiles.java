@@ -53,11 +53,8 @@ final class PublishedFiles {
         if (series.isEmpty()) {
             throw log.fatal(0, 0, "no series with a value; expected at least one observation with a number");
         }
-        if (options.aggregation().isPresent()) {
-            Aggregation to = options.aggregation().get();
-            series = series.stream().map(s -> Aggregator.aggregate(s, to, log)).toList();
-            log.throwIfErrors();
-        }
+        series = Aggregator.aggregateAll(series, options.aggregation(), log);
+        log.throwIfErrors();
         return Optional.of(new ReadResult(log.file(), text.sha256(), text.charsetName(), delimiter, rows, format.layout(),
                 assembled.periodFormat(), java.util.Optional.empty(), java.util.Optional.empty(), options.aggregation(), series,
                 log.warnings(), assembled.keys()));

@@ -94,11 +94,7 @@ public final class SeriesFileReader {
         RowReader rows = new RowReader(options, log, baseName(log.file()), expectedRows);
         CsvStream.stream(head.whole(), delimiter, log, rows::row);
         RowReader.Read read = rows.end();
-        List<Series> series = read.series();
-        if (options.aggregation().isPresent()) {
-            Aggregation to = options.aggregation().get();
-            series = series.stream().map(s -> Aggregator.aggregate(s, to, log)).toList();
-        }
+        List<Series> series = Aggregator.aggregateAll(read.series(), options.aggregation(), log);
         log.throwIfErrors();
         return new ReadResult(log.file(), text.sha256(), text.charsetName(), delimiter, read.rowsRead(), read.layout(),
                 read.periodFormat(), read.dateOrder(), read.decimalMark(), options.aggregation(), series, log.warnings());

@@ -179,11 +179,7 @@ final class Workbooks {
             }
             warnHidden();
             RowReader.Read read = rows.end();
-            List<Series> series = read.series();
-            if (options.aggregation().isPresent()) {
-                Aggregation to = options.aggregation().get();
-                series = series.stream().map(s -> Aggregator.aggregate(s, to, log)).toList();
-            }
+            List<Series> series = Aggregator.aggregateAll(read.series(), options.aggregation(), log);
             log.throwIfErrors();
             List<DataProblem> warnings = new ArrayList<>(notes);
             warnings.addAll(log.warnings());
