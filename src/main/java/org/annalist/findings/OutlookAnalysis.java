@@ -89,7 +89,7 @@ final class OutlookAnalysis {
         boolean tested = !outlook.backtest().isEmpty();
         return new OutlookFinding(method(f.method(), period), model(f.model(), period), h, series.period(from), points,
                 total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats,
-                years.current(), years.change(), outlook.widened(),
+                years.current(), years.change(), outlook.widened(), outlook.narrowed(),
                 tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null,
                 typicalYearError(outlook, period), months(lastPeriod, f, h, kind));
     }

@@ -24,6 +24,8 @@ import org.annalist.series.Period;
  *                        observed part has a gap or begins before the series)
  * @param nextYearChange  the next year against {@code currentYear} (null when either is missing)
  * @param intervalsWidened whether the model's intervals were widened to the back-test's errors
+ * @param intervalsNarrowed whether the model's 80 % intervals were narrowed to the back-test's errors
+ *                        (only with at least a hundred of them)
  * @param backtestFrom    the first period the back-test forecast (null without a back-test) …
  * @param backtestTo      … and the last
  * @param typicalYearErrorPct the median absolute percentage error of the chosen method's sums of
@@ -34,12 +36,13 @@ import org.annalist.series.Period;
  */
 @JsonPropertyOrder({"method", "model", "horizon", "fitted_from", "forecasts", "next_year_total", "next_year_average",
     "backtest", "chosen_because", "typical_error_pct", "current_year", "next_year_change", "intervals_widened",
-    "backtest_from", "backtest_to", "typical_year_error_pct", "months"})
+    "intervals_narrowed", "backtest_from", "backtest_to", "typical_year_error_pct", "months"})
 public record OutlookFinding(OutlookMethod method, Model model, int horizon, Period fittedFrom, List<Point> forecasts,
                              Span nextYearTotal, Span nextYearAverage, List<Score> backtest, Choice chosenBecause,
                              Double typicalErrorPct, @JsonIgnore int nextYear, @JsonIgnore int backtestPeriods,
                              @JsonIgnore List<OutlookCaveat> caveats, CurrentYear currentYear,
-                             YearChange nextYearChange, boolean intervalsWidened, Period backtestFrom,
+                             YearChange nextYearChange, boolean intervalsWidened, boolean intervalsNarrowed,
+                             Period backtestFrom,
                              Period backtestTo, Double typicalYearErrorPct, List<Month> months) {
 
     public OutlookFinding {

@@ -151,7 +151,9 @@ public final class AnalystNotes {
             }
             if (o.backtestFrom() != null) {
                 line(out, "back-test span", "%s to %s%s", o.backtestFrom(), o.backtestTo(),
-                        o.intervalsWidened() ? "; intervals widened to its errors" : "");
+                        o.intervalsWidened() && o.intervalsNarrowed() ? "; intervals widened or narrowed to its errors"
+                                : o.intervalsWidened() ? "; intervals widened to its errors"
+                                : o.intervalsNarrowed() ? "; 80 % intervals narrowed to its errors" : "");
             }
             for (OutlookFinding.Score score : o.backtest()) {
                 line(out, "back-test", "%s: MASE %.2f, sMAPE %.1f %%", score.method().code(), score.mase(),

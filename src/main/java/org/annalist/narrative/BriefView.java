@@ -220,6 +220,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param currentYear the sentence on the current year as observed plus forecast; empty without one
      * @param backtestRange the periods the back-test forecast, e.g. {@code January 2024 to December 2025}
      * @param widened     the intervals were widened to the back-test's errors
+     * @param narrowed    the 80 % intervals were narrowed to the back-test's errors (at some steps)
      * @param noBacktest  why the forecasts could not be tested, as a sentence; empty with a back-test
      * @param typicalYearError the back-test's typical error of a year's total ({@code 1.9 %}); empty without
      * @param yearSteadier the year's typical error is smaller than a single period's (errors partly cancelled)
@@ -228,11 +229,11 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                               String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean compact,
                               boolean hasYear, boolean total, String nextYear, String yearMean, String yearLow,
                               String yearHigh, String comparison, String currentYear, String typicalError,
-                              String typicalYearError, boolean yearSteadier, String backtestSpan, String backtestRange, boolean widened, String noBacktest,
+                              String typicalYearError, boolean yearSteadier, String backtestSpan, String backtestRange, boolean widened, boolean narrowed, String noBacktest,
                               List<ScoreRow> backtest, List<String> caveats) {
 
         static final OutlookView ABSENT = new OutlookView(false, "", "", "", "", "", "", List.of(), false, false, false,
-                "", "", "", "", "", "", "", "", false, "", "", false, "", List.of(), List.of());
+                "", "", "", "", "", "", "", "", false, "", "", false, false, "", List.of(), List.of());
 
         public OutlookView {
             rows = List.copyOf(rows);

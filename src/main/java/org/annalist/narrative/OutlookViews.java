@@ -78,7 +78,7 @@ final class OutlookViews {
                         o.typicalYearErrorPct() < 10 ? 1 : 0) + "\u00A0%",
                 o.typicalYearErrorPct() != null && o.typicalErrorPct() != null
                         && o.typicalYearErrorPct() < o.typicalErrorPct(),
-                f.count(o.backtestPeriods()), range, o.intervalsWidened(), noBacktest, scores, caveats);
+                f.count(o.backtestPeriods()), range, o.intervalsWidened(), o.intervalsNarrowed(), noBacktest, scores, caveats);
     }
 
     /** The method as a reader of the outlook page can follow it, with the models in their usual notation. */

@@ -60,7 +60,8 @@ class AnalyzeCommandTest {
         JsonNode o = f.get("outlook");
         assertThat(keys(o)).containsExactly("method", "model", "horizon", "fitted_from", "forecasts", "next_year_total",
                 "next_year_average", "backtest", "chosen_because", "typical_error_pct", "current_year",
-                "next_year_change", "intervals_widened", "backtest_from", "backtest_to", "typical_year_error_pct", "months");
+                "next_year_change", "intervals_widened", "intervals_narrowed",
+                "backtest_from", "backtest_to", "typical_year_error_pct", "months");
         // 1960 is observed in full: it is its own estimate, and 1961 is set against it
         assertThat(o.get("current_year").get("year").asInt()).isEqualTo(1960);
         assertThat(o.get("current_year").get("forecast_periods").asInt()).isZero();

@@ -45,7 +45,15 @@ public final class M3Benchmark {
     private static final java.lang.management.ThreadMXBean CPU = java.lang.management.ManagementFactory.getThreadMXBean();
 
     /** One method's forecasts of one series: the mean and the four interval limits per step (NaN when absent). */
-    record Forecast(double[] mean, double[] lo80, double[] hi80, double[] lo95, double[] hi95) {
+    record Forecast(double[] mean, double[] lo80, double[] hi80, double[] lo95, double[] hi95, Optional<YearTotal> year) {
+
+        Forecast(double[] mean, double[] lo80, double[] hi80, double[] lo95, double[] hi95) {
+            this(mean, lo80, hi80, lo95, hi95, Optional.empty());
+        }
+    }
+
+    /** The next calendar year's total with its 80 % interval, and the steps ahead (0-based, end exclusive) it covers. */
+    record YearTotal(int from, int to, double lo80, double hi80) {
     }
 
     /** A series: its training values with their first period, and the held-out values. */
@@ -62,6 +70,9 @@ public final class M3Benchmark {
         long withIntervals;
         int missing;
         long nanos;
+        /** Next calendar years' totals with an interval, and those inside it. */
+        long yearCount;
+        long year80;
         /** Per step ahead (index 0 = one step): values with intervals, and those inside the 80 and 95 % intervals. */
         final long[] stepCount = new long[48];
         final long[] step80 = new long[48];
@@ -88,6 +99,14 @@ public final class M3Benchmark {
                     }
                 }
             }
+            f.year().ifPresent(y -> {
+                double total = 0;
+                for (int k = y.from(); k < y.to(); k++) {
+                    total += s.test()[k];
+                }
+                yearCount++;
+                year80 += total >= y.lo80() && total <= y.hi80() ? 1 : 0;
+            });
             mase += absolute / h / scale;
             smape += symmetric / h;
             series++;
@@ -124,8 +143,8 @@ public final class M3Benchmark {
             }
         }
         PrintStream out = System.out;
-        out.printf(Locale.ROOT, "%-10s %-22s %7s %8s %8s %8s %8s %9s%n", "frequency", "method", "series", "MASE",
-                "sMAPE", "cov80", "cov95", "CPU ms/series");
+        out.printf(Locale.ROOT, "%-10s %-22s %7s %8s %8s %8s %8s %13s %10s%n", "frequency", "method", "series", "MASE",
+                "sMAPE", "cov80", "cov95", "CPU ms/series", "year cov80");
         for (String frequency : frequencies) {
             run(folder, rFolder, frequency, every, threads, variants, byStep, out);
         }
@@ -167,9 +186,10 @@ public final class M3Benchmark {
         for (Map.Entry<String, Tally> e : tallies.entrySet()) {
             Tally t = e.getValue();
             String ms = t.nanos == 0 ? "" : String.format(Locale.ROOT, "%9.1f", t.nanos / 1e6 / Math.max(1, t.series + t.missing));
-            out.printf(Locale.ROOT, "%-10s %-22s %7d %8.3f %8.2f %8s %8s %s%s%n", frequency, e.getKey(), t.series,
+            out.printf(Locale.ROOT, "%-10s %-22s %7d %8.3f %8.2f %8s %8s %13s %10s%s%n", frequency, e.getKey(), t.series,
                     t.mase / t.series, t.smape / t.series, share(t.covered80, t.withIntervals),
-                    share(t.covered95, t.withIntervals), ms, t.missing > 0 ? "  (no forecast for " + t.missing + ")" : "");
+                    share(t.covered95, t.withIntervals), ms, share(t.year80, t.yearCount),
+                    t.missing > 0 ? "  (no forecast for " + t.missing + ")" : "");
         }
         if (byStep) {
             for (String name : names) {
@@ -232,7 +252,20 @@ public final class M3Benchmark {
             v[3][k] = p.lo95();
             v[4][k] = p.hi95();
         }
-        return Optional.of(new Forecast(v[0], v[1], v[2], v[3], v[4]));
+        Optional<YearTotal> year = Optional.empty();
+        if (outlook.nextYearTotal() != null) {
+            int from = -1;
+            int to = -1;
+            for (int k = 0; k < h; k++) {
+                if (points.get(k).period().year() == outlook.nextYear()) {
+                    from = from < 0 ? k : from;
+                    to = k + 1;
+                }
+            }
+            year = from < 0 ? Optional.empty()
+                    : Optional.of(new YearTotal(from, to, outlook.nextYearTotal().lo80(), outlook.nextYearTotal().hi80()));
+        }
+        return Optional.of(new Forecast(v[0], v[1], v[2], v[3], v[4], year));
     }
 
     private static String share(long covered, long total) {

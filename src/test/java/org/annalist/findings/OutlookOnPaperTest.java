@@ -157,4 +157,27 @@ class OutlookOnPaperTest {
         assertThat(o.backtest()).isNotEmpty();
         assertThat(o.intervalsWidened()).isTrue();
     }
+
+    /**
+     * The mirror image: noisy for most of the series and quiet in the back-test span, so the model's
+     * 80 % intervals are wider than the back-test's errors (24 origins, a few hundred errors): they
+     * are narrowed and flagged, and the 95 % intervals still contain them.
+     */
+    @Test
+    void intervalsWiderThanManyBacktestErrorsAreNarrowedAndFlagged() {
+        Random random = new Random(31);
+        double[] x = new double[120];
+        for (int t = 0; t < x.length; t++) {
+            double noise = t >= 96 ? 0.01 : 0.10;
+            x[t] = 1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) * (1 + noise * random.nextGaussian());
+        }
+        Series s = Series.builder("nights", Frequency.MONTHLY).unit("nights").append(Period.month(2012, 1), x).snapshot();
+        OutlookFinding o = new Analyst().analyse(s).outlook();
+        assertThat(o.backtest()).isNotEmpty();
+        assertThat(o.intervalsNarrowed()).isTrue();
+        for (OutlookFinding.Point p : o.forecasts()) {
+            assertThat(p.lo95()).isLessThanOrEqualTo(p.lo80());
+            assertThat(p.hi95()).isGreaterThanOrEqualTo(p.hi80());
+        }
+    }
 }

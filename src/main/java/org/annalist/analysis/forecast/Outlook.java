@@ -37,7 +37,8 @@ import java.util.Optional;
  * with a fixed seed ({@link Shocks}); the combination's paths are its members' paths averaged under
  * common shocks, so that its intervals keep the members' correlation. Where the intervals are
  * narrower than the errors the chosen method made in the back-test, they and the paths are widened
- * to those errors ({@link Widening}). Sums over several periods come from the paths
+ * to those errors; an 80 % interval wider than several hundred such errors support is narrowed to
+ * them ({@link Widening}). Sums over several periods come from the paths
  * ({@link YearSums}). Everything is clipped to the measure's bounds: counts are never forecast below
  * zero.
  *
@@ -253,9 +254,9 @@ public final class Outlook {
     /**
      * @param backtest every method's score, the combination first (empty without a back-test)
      * @param origins  back-test origins used; {@code cycle} the longest horizon scored
-     * @param widening per step, the factor by which the chosen forecast's intervals were widened to
-     *                 the back-test's errors ({@link Widening}; 1 where they were wide enough, all 1
-     *                 without a back-test)
+     * @param widening per step, the factor by which the chosen forecast's 80 % interval was widened
+     *                 (above 1) or narrowed (below 1) to the back-test's errors ({@link Widening}; 1
+     *                 where it matched them, all 1 without a back-test)
      */
     public record Result(Forecast chosen, Choice choice, Span span, List<Score> backtest, int origins, int cycle,
                          double[] widening) {
@@ -274,6 +275,16 @@ public final class Outlook {
         public boolean widened() {
             for (double w : widening) {
                 if (w > 1) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        /** Whether any step's 80 % interval was narrowed to the back-test's errors. */
+        public boolean narrowed() {
+            for (double w : widening) {
+                if (w < 1) {
                     return true;
                 }
             }

@@ -3,7 +3,7 @@ package org.annalist.analysis.forecast;
 import java.util.Arrays;
 
 /**
- * Intervals no narrower than the back-test supports: where the chosen model's 80 % interval at a
+ * Intervals as wide as the back-test supports: where the chosen model's 80 % interval at a
  * step ahead is narrower than the 80 % quantile of the errors its method made at that horizon in
  * the back-test ({@link HorizonErrors}, the empirical prediction intervals of Williams &amp; Goodman
  * 1971; Hyndman &amp; Athanasopoulos 2021, §5.5 — both from memory), the step's interval and sample
@@ -15,19 +15,38 @@ import java.util.Arrays;
  * absolute ones otherwise. The empirical quantiles are made non-decreasing in the horizon (a forecast
  * further ahead is not expected to be more accurate: common practice, no source), and beyond the
  * longest horizon tested the last ratio is carried forward, so the model's own growth of uncertainty
- * continues at the widened scale. A model interval never narrows.
+ * continues at the widened scale.
  *
  * <p>Last, the sum of the first cycle's forecasts (a year's total for monthly data) is checked the
  * same way against the back-test's errors of such sums ({@link HorizonErrors.CycleSums}): the model's
  * paths may let the months' errors cancel more than they did on the series' own past; if so, every
  * step is stretched further by the one factor that makes the sum's interval wide enough.
+ *
+ * <p>Then each interval is checked against all the back-test's errors pooled over the horizons, and
+ * stretched by one further factor where it would have held fewer of them than its level. The 80 %
+ * interval may also be narrowed by that check, but only with at least {@value #NARROWING_PAIRS}
+ * errors ({@link #NARROWING_PAIRS} says why); so it covers about eight in ten of the series' own
+ * back-test errors rather than at least eight in ten at every stage, which made it too wide. The
+ * 95 % interval is never narrower than the model's own nor than the 80 % one.
  */
 final class Widening {
 
     /** The fewest back-test errors the pooled check of an interval's coverage uses (our rule: the non-seasonal origins). */
     static final int POOLED_PAIRS = 8;
 
-    /** The forecast with its intervals widened, and the factor applied at each step (1: unchanged). */
+    /**
+     * The fewest back-test errors from which the pooled check may also <em>narrow</em> the 80 %
+     * interval: the share of n errors inside an interval has a binomial standard error of
+     * √(0.8 · 0.2 / n), ±4 points at n = 100 (common practice, no source), close enough to tell a too
+     * wide interval from noise. With fewer errors the interval is only ever widened: a floor at the
+     * model's own interval guards against a back-test that was luckier than the future. On the M3
+     * monthly series (1,428, 24 back-test origins, a few hundred errors each) the 80 % intervals,
+     * widened only, held 87 % of the held-out values; allowed to narrow, 79 % (M3Benchmark,
+     * December 2026). The 95 % interval is never narrowed: its tail has too few errors to say so.
+     */
+    static final int NARROWING_PAIRS = 100;
+
+    /** The forecast with its intervals widened or narrowed, and the factor applied at each step (1: unchanged). */
     record Widened(Outlook.Forecast forecast, double[] factors) {
 
         Widened {
@@ -80,12 +99,12 @@ final class Widening {
         for (int j = 0; j < h; j++) {
             factors[j] *= extra;
         }
-        double pooled80 = pooledFactor(errors.pairs(), mean, lo80, hi80, factors, 0.80, useRelative, bounds);
+        double pooled80 = pooledFactor(errors.pairs(), mean, lo80, hi80, factors, 0.80, useRelative, bounds, true);
         double[] factors95 = factors.clone();
         for (int j = 0; j < h; j++) {
             factors[j] *= pooled80;
         }
-        double pooled95 = pooledFactor(errors.pairs(), mean, lo95, hi95, factors95, 0.95, useRelative, bounds);
+        double pooled95 = pooledFactor(errors.pairs(), mean, lo95, hi95, factors95, 0.95, useRelative, bounds, false);
         for (int j = 0; j < h; j++) {
             factors95[j] = Math.max(factors[j], factors95[j] * pooled95);
             double c = factors[j];
@@ -110,11 +129,13 @@ final class Widening {
      * errors, pooled over all horizons: the {@code level} quantile of each error's ratio to the
      * interval's half-width at its horizon (relative errors against relative half-widths for a
      * positive series). Pooling gives the 95 % interval enough errors to be checked against, and
-     * catches the heavy tails that stretching it with the 80 % interval would miss. 1 when the
-     * interval was wide enough, or with fewer than {@value #POOLED_PAIRS} errors.
+     * catches the heavy tails that stretching it with the 80 % interval would miss. 1 with fewer than
+     * {@value #POOLED_PAIRS} errors, or when the interval was wide enough — unless {@code mayNarrow}
+     * and at least {@value #NARROWING_PAIRS} errors, when a factor below 1 narrows it to them.
      */
     private static double pooledFactor(HorizonErrors.Pairs pairs, double[] mean, double[] lo, double[] hi,
-                                       double[] factors, double level, boolean relative, Outlook.Bounds bounds) {
+                                       double[] factors, double level, boolean relative, Outlook.Bounds bounds,
+                                       boolean mayNarrow) {
         double[] absolute = pairs.absolute();
         double[] forecast = pairs.forecast();
         int[] horizon = pairs.horizon();
@@ -136,7 +157,10 @@ final class Widening {
             return 1;
         }
         double q = Intervals.predictive(Arrays.copyOf(ratios, n), level);
-        return Double.isFinite(q) && q > 1 ? q : 1;
+        if (!Double.isFinite(q)) {
+            return 1;
+        }
+        return mayNarrow && n >= NARROWING_PAIRS && q > 0 ? q : Math.max(q, 1);
     }
 
     /**
