@@ -146,14 +146,7 @@ class OutlookOnPaperTest {
     /** Values less noisy for most of the series and noisier in the back-test span: the intervals are widened. */
     @Test
     void intervalsNarrowerThanTheBacktestErrorsAreWidenedAndFlagged() {
-        Random random = new Random(31);
-        double[] x = new double[120];
-        for (int t = 0; t < x.length; t++) {
-            double noise = t >= 96 ? 0.10 : 0.01;
-            x[t] = 1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) * (1 + noise * random.nextGaussian());
-        }
-        Series s = Series.builder("nights", Frequency.MONTHLY).unit("nights").append(Period.month(2012, 1), x).snapshot();
-        OutlookFinding o = new Analyst().analyse(s).outlook();
+        OutlookFinding o = new Analyst().analyse(seasonalWithNoise(0.01, 0.10)).outlook();
         assertThat(o.backtest()).isNotEmpty();
         assertThat(o.intervalsWidened()).isTrue();
     }
@@ -165,19 +158,23 @@ class OutlookOnPaperTest {
      */
     @Test
     void intervalsWiderThanManyBacktestErrorsAreNarrowedAndFlagged() {
-        Random random = new Random(31);
-        double[] x = new double[120];
-        for (int t = 0; t < x.length; t++) {
-            double noise = t >= 96 ? 0.01 : 0.10;
-            x[t] = 1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) * (1 + noise * random.nextGaussian());
-        }
-        Series s = Series.builder("nights", Frequency.MONTHLY).unit("nights").append(Period.month(2012, 1), x).snapshot();
-        OutlookFinding o = new Analyst().analyse(s).outlook();
+        OutlookFinding o = new Analyst().analyse(seasonalWithNoise(0.10, 0.01)).outlook();
         assertThat(o.backtest()).isNotEmpty();
         assertThat(o.intervalsNarrowed()).isTrue();
         for (OutlookFinding.Point p : o.forecasts()) {
             assertThat(p.lo95()).isLessThanOrEqualTo(p.lo80());
             assertThat(p.hi95()).isGreaterThanOrEqualTo(p.hi80());
         }
+    }
+
+    /** Ten years of a seasonal monthly series with relative noise {@code early}, then {@code late} in its last two years. */
+    private static Series seasonalWithNoise(double early, double late) {
+        Random random = new Random(31);
+        double[] x = new double[120];
+        for (int t = 0; t < x.length; t++) {
+            double noise = t >= 96 ? late : early;
+            x[t] = 1000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)) * (1 + noise * random.nextGaussian());
+        }
+        return Series.builder("nights", Frequency.MONTHLY).unit("nights").append(Period.month(2012, 1), x).snapshot();
     }
 }
