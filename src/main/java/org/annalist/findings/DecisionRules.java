@@ -192,6 +192,12 @@ public final class DecisionRules {
      */
     public static final int OUTLOOK_MIN_CHOICE_FORECASTS = 20;
     /**
+     * The outlook's 80 % interval is narrowed to the back-test's errors, where it is wider than they
+     * support, only with at least this many errors (our rule: their share inside the interval is then
+     * known within about ±4 points, the binomial standard error; fewer errors only ever widen it).
+     */
+    public static final int OUTLOOK_NARROWING_ERRORS = 100;
+    /**
      * After a break, the latest regime alone replaces all values only when the back-test's error
      * fitted on it is at least this many % lower (our rule: the history holds the season, and a
      * break changes the level, which the methods re-anchor by themselves).

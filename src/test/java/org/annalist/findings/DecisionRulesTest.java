@@ -31,6 +31,8 @@ class DecisionRulesTest {
                 .isEqualTo(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT);
         assertThat(org.annalist.analysis.forecast.Outlook.MIN_CHOICE_FORECASTS)
                 .isEqualTo(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS);
+        assertThat(org.annalist.analysis.forecast.Outlook.NARROWING_ERRORS)
+                .isEqualTo(DecisionRules.OUTLOOK_NARROWING_ERRORS);
         assertThat(org.annalist.analysis.forecast.Outlook.REGIME_ADVANTAGE_PCT)
                 .isEqualTo(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT);
     }

@@ -79,6 +79,8 @@ public final class Outlook {
      * always) to 2.716; quarterly data give 26 and monthly data some 200.
      */
     public static final int MIN_CHOICE_FORECASTS = 20;
+    /** The back-test errors from which the 80 % interval may be narrowed to them ({@link Widening#NARROWING_PAIRS}). */
+    public static final int NARROWING_ERRORS = Widening.NARROWING_PAIRS;
     /** By how much, in %, the latest regime's back-test error must be below all values' to replace them (our rule). */
     public static final int REGIME_ADVANTAGE_PCT = 25;
 
