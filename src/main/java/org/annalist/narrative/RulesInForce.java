@@ -52,8 +52,8 @@ final class RulesInForce {
                         + Terms.number(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS) + " forecasts / at least "
                         + Terms.number(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT)
                         + "\u00A0% lower"),
-                new Rule("The outlook's 80\u00A0% interval narrowed to the back-test's errors when it is wider than they"
-                        + " support, with", "at least " + Terms.number(DecisionRules.OUTLOOK_NARROWING_ERRORS) + " errors"),
+                new Rule("Outlook intervals narrowed with", "at least " + Terms.number(DecisionRules.OUTLOOK_NARROWING_ERRORS)
+                        + " back-test errors (the 80\u00A0% interval only)"),
                 new Rule("Next year called about the same as this year when", "the 80\u00A0% interval of the change"
                         + " contains zero and lies within \u00B1" + Terms.number(DecisionRules.OUTLOOK_SAME_PCT) + "\u00A0%"),
                 new Rule("Irregular fluctuation called small / large", "share below "
