@@ -102,13 +102,13 @@ final class KeyedSeries {
         String key = String.join("\u0000", codes);
         Observations series = byKey.get(key);
         if (series == null) {
-            series = new Observations(codes.clone(), period.frequency(), line);
+            series = new Observations(codes.clone(), period, line);
             byKey.put(key, series);
         }
         if (period.frequency() != series.frequency) {
             log.error(line, column, "period " + period + " is " + period.frequency() + " but series "
-                    + keyOf(codes) + " has " + series.frequency + " periods (from line " + series.firstLine
-                    + "); expected one frequency per series");
+                    + keyOf(codes) + " has " + series.frequency + " periods (from " + series.first + (series.firstLine > 0
+                    ? ", " + log.where(series.firstLine) : "") + "); expected one frequency per series");
             return;
         }
         series.add(period.index(), value, flags, line);
@@ -220,15 +220,17 @@ final class KeyedSeries {
         private final String[] codes;
         private Frequency frequency;
         private final int firstLine;
+        private final Period first;
         private long[] periods = new long[16];
         private double[] values = new double[16];
         private int[] lines = new int[16];
         private Object[] flags;   // made when the first flag arrives
         private int size;
 
-        Observations(String[] codes, Frequency frequency, int firstLine) {
+        Observations(String[] codes, Period first, int firstLine) {
             this.codes = codes;
-            this.frequency = frequency;
+            this.frequency = first.frequency();
+            this.first = first;
             this.firstLine = firstLine;
         }
 
@@ -302,7 +304,7 @@ final class KeyedSeries {
             for (int slot = 0; slot < span; slot++) {
                 stored[slot] = !Double.isNaN(slots[slot]);
             }
-            StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, log);
+            StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, null, log);
             return Optional.of(Series.of(name, "", new Period(frequency, low), slots, i -> flagsAt(slotFlags, i)).trimmed());
         }
 

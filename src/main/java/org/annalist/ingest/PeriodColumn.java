@@ -330,7 +330,7 @@ final class PeriodColumn {
             Cell bad = impossible.get(DateOrder.DAY_FIRST).first.get(0);
             Cell other = impossible.get(DateOrder.MONTH_FIRST).first.get(0);
             throw log.fatal(bad.line(), bad.column(), "'" + bad.text() + "' needs month first but '" + other.text()
-                    + "' (line " + other.line() + ") needs day first; expected one day/month order in the file");
+                    + "' (" + log.where(other.line(), other.column()) + ") needs day first; expected one day/month order in the file");
         }
         boolean dayFirstRegular = regular(keys, DateOrder.DAY_FIRST);
         boolean monthFirstRegular = regular(keys, DateOrder.MONTH_FIRST);
