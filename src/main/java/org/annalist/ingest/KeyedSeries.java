@@ -48,7 +48,7 @@ final class KeyedSeries {
     private final int keyStart;
     private final int frequencyDimension;
     /** The codes of the SDMX code list CL_FREQ (from memory) for the calendars this tool has. */
-    private static final Map<String, Frequency> STATED_FREQUENCIES = Map.of("A", Frequency.ANNUAL, "Q", Frequency.QUARTERLY,
+    private static final Map<String, Frequency> STATED_FREQUENCIES = Map.of("A", Frequency.ANNUAL, "S", Frequency.HALF_YEARLY, "Q", Frequency.QUARTERLY,
             "M", Frequency.MONTHLY, "W", Frequency.WEEKLY, "D", Frequency.DAILY, "B", Frequency.BUSINESS_DAILY);
 
     /**

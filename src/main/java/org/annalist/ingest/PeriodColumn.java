@@ -274,6 +274,8 @@ final class PeriodColumn {
         long median = gaps[gaps.length / 2];
         if (median >= 360) {
             return Optional.of(Frequency.ANNUAL);
+        } else if (median >= 178 && median <= 186) {
+            return Optional.of(Frequency.HALF_YEARLY);
         } else if (median >= 85 && median <= 95) {
             return Optional.of(Frequency.QUARTERLY);
         } else if (median >= 27 && median <= 32) {

@@ -15,8 +15,9 @@ import org.annalist.series.Period;
  * compact forms of bulk downloads ({@code 2024M03}, {@code 2024Q1}, {@code 2024W05}, {@code 2024S1},
  * {@code 2024M03D15}; common practice, no source).
  *
- * <p>Half-years ({@code S}) and third parts of a year ({@code T}) are SDMX periods with no calendar
- * here: they are refused with a reason, as are periods that are no SDMX period at all.
+ * <p>Half-years ({@code 2024-S1}, January–June; {@code 2024-S2}) read as half-yearly periods. Third parts
+ * of a year ({@code T}) are SDMX periods with no calendar here: they are refused with a reason, as are
+ * periods that are no SDMX period at all.
  */
 final class SdmxPeriods {
 
@@ -38,7 +39,7 @@ final class SdmxPeriods {
     private static final Pattern COMPACT_DAY = Pattern.compile("(\\d{4})M(\\d{2})D(\\d{2})");
 
     /** What the accepted forms look like, for messages. */
-    static final String EXPECTED = "an SDMX period such as 2024, 2024-Q1, 2024-03, 2024-M03, 2024-W05 or 2024-03-15"
+    static final String EXPECTED = "an SDMX period such as 2024, 2024-S1, 2024-Q1, 2024-03, 2024-M03, 2024-W05 or 2024-03-15"
             + " (or 2024M03, 2024Q1 as bulk downloads write them)";
 
     private SdmxPeriods() {
@@ -113,10 +114,9 @@ final class SdmxPeriods {
                 }
                 yield Reading.of(Period.day(first.plusDays(number - 1L)));
             }
-            case 'S' -> Reading.refused("'" + text + "' is a half-year, a period this tool has no calendar for;"
-                    + " expected annual, quarterly, monthly, weekly or daily periods");
+            case 'S' -> Reading.of(Period.half(year, number));
             default -> Reading.refused("'" + text + "' is a third of a year, a period this tool has no calendar for;"
-                    + " expected annual, quarterly, monthly, weekly or daily periods");
+                    + " expected annual, half-yearly, quarterly, monthly, weekly or daily periods");
         };
     }
 }

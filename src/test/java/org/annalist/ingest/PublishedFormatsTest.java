@@ -139,7 +139,10 @@ class PublishedFormatsTest {
         assertThat(SdmxPeriods.read("2024-W05").period()).hasValue(Period.isoWeek(2024, 5));
         assertThat(SdmxPeriods.read("2024-01-15").period()).hasValue(Period.day(java.time.LocalDate.of(2024, 1, 15)));
         assertThat(SdmxPeriods.read("2024-D015").period()).hasValue(Period.day(java.time.LocalDate.of(2024, 1, 15)));
-        assertThat(SdmxPeriods.read("2024-S1").problem()).contains("half-year");
+        assertThat(SdmxPeriods.read("2024-S1").period()).hasValue(Period.half(2024, 1));
+        assertThat(SdmxPeriods.read("2024S2").period()).hasValue(Period.half(2024, 2));
+        assertThat(SdmxPeriods.read("2024-S3").period()).isEmpty();
+        assertThat(SdmxPeriods.read("2024-T1").problem()).contains("third of a year");
         assertThat(SdmxPeriods.read("2024-M13").period()).isEmpty();
         assertThat(SdmxPeriods.read("Jan 2024").problem()).contains("expected an SDMX period");
     }
@@ -174,13 +177,13 @@ class PublishedFormatsTest {
         String text = """
                 DATAFLOW,MARKET,TIME_PERIOD,OBS_VALUE
                 QM:NIGHTS(1.0),DOM,2024-01,1200
-                QM:NIGHTS(1.0),DOM,2024-S1,1310
+                QM:NIGHTS(1.0),DOM,2024-T1,1310
                 QM:NIGHTS(1.0),DOM,2024-02,12x
                 QM:NIGHTS(1.0),DOM,2024-01,1250
                 QM:NIGHTS(1.0),DOM,2024-Q2,1250
                 """;
         assertThatThrownBy(() -> Files.read("bad.csv", text)).isInstanceOf(DataProblemException.class)
-                .hasMessageContaining("bad.csv:3:3: '2024-S1' is a half-year")
+                .hasMessageContaining("bad.csv:3:3: '2024-T1' is a third of a year")
                 .hasMessageContaining("bad.csv:4:4: '12x' is not a number")
                 .hasMessageContaining("bad.csv:5: period 2024-01 appears again for series 'bad' (first on line 2)")
                 .hasMessageContaining("bad.csv:6:3: period 2024-Q2 is quarterly but series DOM has monthly periods");
