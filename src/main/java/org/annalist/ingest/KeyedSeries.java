@@ -43,6 +43,7 @@ final class KeyedSeries {
     private final List<Dimension> dimensions;
     private final ProblemLog log;
     private final List<Map<String, String>> codeLabels = new ArrayList<>();
+    private final List<Map<String, String>> codeUnits = new ArrayList<>();
     private final Map<String, Observations> byKey = new LinkedHashMap<>();
     private final String prefix;
     private final int keyStart;
@@ -70,7 +71,26 @@ final class KeyedSeries {
         this.log = log;
         for (int d = 0; d < dimensions.size(); d++) {
             codeLabels.add(new HashMap<>());
+            codeUnits.add(new HashMap<>());
         }
+    }
+
+    /** Notes the unit of measure of a dimension's code (JSON-stat's {@code category.unit}): the unit of its series. */
+    void unit(int dimension, String code, String unit) {
+        if (!unit.isEmpty()) {
+            codeUnits.get(dimension).putIfAbsent(code, unit);
+        }
+    }
+
+    /** The unit of a series: that of the first of its codes that has one, or empty. */
+    private String unitOf(String[] codes) {
+        for (int d = 0; d < codes.length; d++) {
+            String unit = codeUnits.get(d).get(codes[d]);
+            if (unit != null) {
+                return unit;
+            }
+        }
+        return "";
     }
 
     /** Notes the label of a dimension's code (the first label given for it counts). */
@@ -160,7 +180,7 @@ final class KeyedSeries {
         List<SeriesKeys.Key> keys = new ArrayList<>();
         for (int s = 0; s < all.size(); s++) {
             Observations o = all.get(s);
-            Optional<Series> made = o.assemble(names.get(s), log);
+            Optional<Series> made = o.assemble(names.get(s), unitOf(o.codes), log);
             if (made.isPresent()) {
                 series.add(made.get());
                 keys.add(new SeriesKeys.Key(names.get(s), keyOf(o.codes), all.size() == 1 ? "" : codesOf(o.codes, varies)));
@@ -254,7 +274,7 @@ final class KeyedSeries {
         }
 
         /** The series (empty, with a warning, when it has no value; errors are logged). */
-        Optional<Series> assemble(String name, ProblemLog log) {
+        Optional<Series> assemble(String name, String unit, ProblemLog log) {
             if (frequency == Frequency.DAILY && size > 0 && noWeekend()) {
                 // daily dates that never fall on a weekend are business days, as in a CSV (README, "Input it reads")
                 for (int i = 0; i < size; i++) {
@@ -305,7 +325,7 @@ final class KeyedSeries {
                 stored[slot] = !Double.isNaN(slots[slot]);
             }
             StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, null, log);
-            return Optional.of(Series.of(name, "", new Period(frequency, low), slots, i -> flagsAt(slotFlags, i)).trimmed());
+            return Optional.of(Series.of(name, unit, new Period(frequency, low), slots, i -> flagsAt(slotFlags, i)).trimmed());
         }
 
         private boolean noWeekend() {
