@@ -260,8 +260,9 @@ final class JsonStatReader {
     }
 
     /**
-     * The unit of each category that has one (JSON-stat 2.0, section "unit", a child of "category", meant for
-     * the categories of a dimension whose role is metric): its {@code label}, else its {@code symbol}
+     * The unit of each category that has one (JSON-stat 2.0 full specification, json-stat.org/full, "unit", with
+     * "decimals", "label", "symbol", "position": the properties checked; "unit" a child of "category", meant for
+     * the categories of a dimension whose role is metric, from memory): its {@code label}, else its {@code symbol}
      * ({@code position} says on which side of a number the symbol goes; {@code decimals} how many decimals
      * the producer shows, which a brief does not follow: it rounds by its own rules).
      */

@@ -48,7 +48,11 @@ final class KeyedSeries {
     private final String prefix;
     private final int keyStart;
     private final int frequencyDimension;
-    /** The codes of the SDMX code list CL_FREQ (from memory) for the calendars this tool has. */
+    /**
+     * The codes of the SDMX code list CL_FREQ for the calendars this tool has: A annual, S "half-yearly,
+     * semester", Q quarterly, M monthly (checked in CL_FREQ 2.1 as the SDMX registry publishes it, SDMX:CL_FREQ(2.1));
+     * W weekly, D daily, B business days from memory (B "business day" also in the IMF's CL_FREQ).
+     */
     private static final Map<String, Frequency> STATED_FREQUENCIES = Map.of("A", Frequency.ANNUAL, "S", Frequency.HALF_YEARLY, "Q", Frequency.QUARTERLY,
             "M", Frequency.MONTHLY, "W", Frequency.WEEKLY, "D", Frequency.DAILY, "B", Frequency.BUSINESS_DAILY);
 

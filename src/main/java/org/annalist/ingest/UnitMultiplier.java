@@ -5,9 +5,10 @@ import java.util.OptionalInt;
 
 /**
  * The SDMX attribute {@code UNIT_MULT}: the observation's value times ten to the power of its code is
- * the value in the series' unit (cross-domain concept UNIT_MULT, SDMX Content-Oriented Guidelines,
- * Annex 1, from memory; the code list CL_UNIT_MULT 1.1, whose codes are those exponents: 0 units,
- * 3 thousands, 6 millions, 9 billions, and negative ones for fractions). The multiplier is applied as
+ * the value in the unit of measure (SDMX Glossary 2.1, "Unit multiplier", cross-domain concept
+ * SDMX:CROSS_DOMAIN_CONCEPTS(2.0).UNIT_MULT, "UNIT_MULT=6 indicates that observations are in millions";
+ * its code list CL_UNIT_MULT: 0 for simple units, 3 thousands, 6 millions, 9 billions; both checked; negative
+ * exponents for fractions from memory). The multiplier is applied as
  * the file is read, so that series of different multipliers compare, and said in a warning.
  */
 final class UnitMultiplier {

@@ -7,10 +7,11 @@ import org.annalist.series.Series;
 import org.junit.jupiter.api.Test;
 
 /**
- * Units of portal files: SDMX's UNIT_MULT applied to the values (cross-domain concept UNIT_MULT, value
- * times 10^UNIT_MULT; code list CL_UNIT_MULT 1.1, codes 3 thousands, 6 millions; from memory and the
- * code list's description), and JSON-stat 2.0's {@code category.unit} (section "unit": label, symbol,
- * position, decimals) naming the series' unit.
+ * Units of portal files: SDMX's UNIT_MULT applied to the values (SDMX Glossary 2.1, "Unit multiplier":
+ * value times 10^UNIT_MULT, "UNIT_MULT=6 indicates that observations are in millions"; code list
+ * CL_UNIT_MULT: 3 thousands, 6 millions; checked), and JSON-stat 2.0's {@code category.unit} (full
+ * specification, json-stat.org/full, "unit" with decimals, label, symbol, position: the properties checked,
+ * their place under a metric dimension's category from memory) naming the series' unit.
  */
 class PublishedUnitsTest {
 
