@@ -9,6 +9,7 @@ import org.annalist.series.Holiday;
 import org.annalist.findings.Form;
 import org.annalist.findings.Measure;
 import org.annalist.findings.Analyst;
+import org.annalist.ingest.SeriesKeys;
 
 /**
  * What the user decides for the analysis instead of leaving it to the data. Empty means "decide
@@ -16,7 +17,7 @@ import org.annalist.findings.Analyst;
  *
  * @param form             additive or multiplicative, forced
  * @param measure          flow or level for every series (the command line's {@code --measure})
- * @param measureBySeries  flow or level by series name (a spec's {@code measure}); wins over {@code measure}
+ * @param measureBySeries  flow or level by series name or key (a spec's {@code measure}); wins over {@code measure}
  * @param holidays         a file of the user's moving holidays, estimated beside Easter
  * @param horizon          periods of outlook, 0 for none; empty for the default
  * @param perDay           analyse monthly or quarterly flows per average-length period
@@ -43,13 +44,16 @@ public record AnalysisChoices(Optional<Form> form, Optional<Measure> measure,
                 false);
     }
 
-    /** The measure kind declared for the series named {@code seriesName}, if any. */
-    Optional<Measure> measureOf(String seriesName) {
-        return Optional.ofNullable(measureBySeries.get(seriesName)).or(() -> measure);
+    /**
+     * The measure kind declared for the series named {@code seriesName}, if any: by its name, else by its
+     * key in a portal's file ({@code M.NR.DOM}, or the codes that vary, {@code DOM}), as {@code --series} takes either.
+     */
+    Optional<Measure> measureOf(String seriesName, SeriesKeys keys) {
+        return keys.lookUp(measureBySeries, seriesName).or(() -> measure);
     }
 
     /** The analysis of one series with these choices and the holidays read from {@link #holidays}. */
-    Analyst analystFor(String seriesName, List<Holiday> holidayDays) {
-        return new Analyst(form, measureOf(seriesName), holidayDays, horizon);
+    Analyst analystFor(String seriesName, SeriesKeys keys, List<Holiday> holidayDays) {
+        return new Analyst(form, measureOf(seriesName, keys), holidayDays, horizon);
     }
 }

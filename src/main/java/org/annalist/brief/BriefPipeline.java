@@ -8,6 +8,7 @@ import java.util.stream.IntStream;
 import org.annalist.series.Holiday;
 import org.annalist.findings.Findings;
 import org.annalist.ingest.DataProblemException;
+import org.annalist.ingest.SeriesKeys;
 import org.annalist.series.Series;
 
 /**
@@ -90,7 +91,7 @@ public final class BriefPipeline {
         for (SeriesSelection.Wanted wanted : SeriesSelection.wanted(job.series(), file)) {
             selected.add(SeriesSelection.select(job, file, wanted, true));
         }
-        List<Findings> findings = analyseAll(job, selected, holidays);
+        List<Findings> findings = analyseAll(job, selected, file.read().keys(), holidays);
         for (int i = 0; i < selected.size(); i++) {
             warnings.addAll(ReadingWarnings.ofSeries(selected.get(i).series(), findings.get(i),
                     job.analysis().holidays(), holidays));
@@ -103,12 +104,13 @@ public final class BriefPipeline {
      * series), and returns their findings in the selection's order: each series' findings depend
      * only on the series, so the order of the work changes nothing but the time.
      */
-    private static List<Findings> analyseAll(Job job, List<SeriesSelection.Selected> selected, List<Holiday> holidays) {
+    private static List<Findings> analyseAll(Job job, List<SeriesSelection.Selected> selected, SeriesKeys keys,
+                                            List<Holiday> holidays) {
         if (selected.size() < 2) {
-            return selected.stream().map(s -> analyse(job, s, holidays)).toList();
+            return selected.stream().map(s -> analyse(job, s, keys, holidays)).toList();
         }
         return IntStream.range(0, selected.size()).parallel()
-                .mapToObj(i -> analyse(job, selected.get(i), holidays)).toList();
+                .mapToObj(i -> analyse(job, selected.get(i), keys, holidays)).toList();
     }
 
     /**
@@ -161,7 +163,7 @@ public final class BriefPipeline {
         List<Series> series = selected.stream().map(SeriesSelection.Selected::series).toList();
         List<Findings> findings = new ArrayList<>();
         for (SeriesSelection.Selected s : selected) {
-            findings.add(analyse(job, s, holidays));
+            findings.add(analyse(job, s, file.read().keys(), holidays));
         }
         List<String> seriesWarnings = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
@@ -184,8 +186,8 @@ public final class BriefPipeline {
     }
 
     /** The analysis step: a derived ratio is analysed with its parts, whose sums its spans compare. */
-    private static Findings analyse(Job job, SeriesSelection.Selected selected, List<Holiday> holidays) {
-        var analyst = job.analysis().analystFor(selected.series().name(), holidays);
+    private static Findings analyse(Job job, SeriesSelection.Selected selected, SeriesKeys keys, List<Holiday> holidays) {
+        var analyst = job.analysis().analystFor(selected.series().name(), keys, holidays);
         return selected.parts().isPresent()
                 ? analyst.analyse(selected.series(), selected.parts().get())
                 : analyst.analyse(selected.series());

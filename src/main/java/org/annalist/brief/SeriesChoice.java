@@ -15,7 +15,7 @@ import java.util.Optional;
  * @param whenUnnamed  what to take when {@code names} is empty
  * @param latestPeriod the period to report as latest, as periods are written ({@code 2025-04});
  *                     empty for the last in the data
- * @param units        a unit by series name, replacing the unit read from the file
+ * @param units        a unit by series name (or key, in a portal's file), replacing the unit read from the file
  */
 public record SeriesChoice(List<String> names, WhenUnnamed whenUnnamed, Optional<String> latestPeriod,
                            Map<String, String> units) {

@@ -123,8 +123,9 @@ public final class SeriesSelection {
     private static Selected ofFile(Job job, ReadResult read, String asked, Series series) {
         SeriesChoice choice = job.series();
         Series prepared = series;
-        if (choice.units().containsKey(series.name())) {
-            prepared = prepared.renamed(series.name(), choice.units().get(series.name()));
+        Optional<String> unit = read.keys().lookUp(choice.units(), series.name());
+        if (unit.isPresent()) {
+            prepared = prepared.renamed(series.name(), unit.get());
         }
         if (job.analysis().perDay()) {
             try {

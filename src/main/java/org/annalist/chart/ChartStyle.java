@@ -56,6 +56,7 @@ public final class ChartStyle {
     public static String shortLabel(org.annalist.series.Period p) {
         return switch (p.frequency()) {
             case ANNUAL -> String.valueOf(p.year());
+            case HALF_YEARLY -> p.seasonLabel() + " " + p.year();
             case QUARTERLY -> p.seasonLabel() + " " + p.year();
             case MONTHLY -> MONTHS[p.seasonalPosition() - 1] + " " + p.year();
             case WEEKLY -> p.label();

@@ -22,7 +22,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code annalist batch SPEC.yaml|FOLDER}: every brief of a spec (or of a folder's CSV files),
+ * {@code annalist batch SPEC.yaml|FOLDER}: every brief of a spec (or of a folder's data files),
  * with a progress bar on an interactive terminal and a plain line per brief otherwise, on a pool sized to the cores; a line per
  * brief as it finishes, then a summary. Exit 0 when all were made, {@value ExitCodes#SOME_FAILED}
  * when some failed (the others are written), {@value ExitCodes#BAD_INPUT} when the spec itself is wrong.
@@ -35,7 +35,8 @@ final class BatchCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "SPEC|FOLDER", description = "The brief spec (YAML; see the README for "
-            + "its keys), or a folder: one brief per series of every CSV file in it, into FOLDER/briefs/.")
+            + "its keys), or a folder: one brief per series of every data file in it (CSV, SDMX-CSV, JSON-stat, "
+            + "workbooks; other files skipped with a note), into FOLDER/briefs/.")
     Path specFile;
 
     @Option(names = "--jobs", paramLabel = "N", description = "Briefs made at once. Default: the number of cores.")
@@ -53,8 +54,15 @@ final class BatchCommand implements Callable<Integer> {
         if (jobs < 1) {
             throw new UserInputException("--jobs: expected 1 or more, got " + jobs);
         }
-        BriefSpec briefs = java.nio.file.Files.isDirectory(specFile) ? FolderSpec.of(specFile)
-                : SpecReader.read(specFile);
+        List<String> skipped = List.of();
+        BriefSpec briefs;
+        if (java.nio.file.Files.isDirectory(specFile)) {
+            FolderSpec.Listing listing = FolderSpec.list(specFile);
+            briefs = listing.spec();
+            skipped = listing.skipped();
+        } else {
+            briefs = SpecReader.read(specFile);
+        }
         if (outFolder != null) {
             if (java.nio.file.Files.exists(outFolder) && !java.nio.file.Files.isDirectory(outFolder)) {
                 // else every brief would fail on it, one by one
@@ -63,6 +71,9 @@ final class BatchCommand implements Callable<Integer> {
             briefs = briefs.withOutputFolder(outFolder);
         }
         PrintWriter out = spec.commandLine().getOut();
+        for (String note : skipped) {
+            out.println("skipped " + note);
+        }
         BatchPlan plan = BatchPlan.of(briefs, new BriefPipeline());
         List<Batch.Outcome> outcomes;
         if (System.console() != null) {
@@ -86,6 +97,9 @@ final class BatchCommand implements Callable<Integer> {
         for (Batch.Outcome o : outcomes) {
             out.println((o.done() ? "  done    " : "  FAILED  ") + o.label() + "  "
                     + (o.done() ? o.file().get() : o.failure().orElse("")));
+        }
+        for (String note : skipped) {
+            out.println("  skipped " + note);
         }
         out.flush();
         return failed == 0 ? ExitCodes.DONE : ExitCodes.SOME_FAILED;

@@ -53,8 +53,8 @@ final class BodyRows {
         Optional<PeriodCells.Parsed> period = PeriodCells.parse(row.cell(periodColumn));
         if (notesFrom > 0) {
             if (period.isPresent()) {
-                log.error(row.line(), 0, "a data row below more than " + HELD_LIMIT + " lines without a period (from line "
-                        + notesFrom + "), which were set aside as notes; expected the notes below all the data");
+                log.error(row.line(), 0, "a data row below more than " + HELD_LIMIT + " " + log.lineWord()
+                        + "s without a period (from " + log.where(notesFrom) + "), which were set aside as notes; expected the notes below all the data");
             } else {
                 note(row);
             }
@@ -89,9 +89,10 @@ final class BodyRows {
         if (shortCount > 0) {
             String against = header.isPresent() ? "the header has " : "the first data row has ";
             String lines = shortLines.stream().map(String::valueOf).collect(Collectors.joining(", "));
-            String more = shortCount > shortLines.size() ? " and " + (shortCount - shortLines.size()) + " more lines" : "";
+            String more = shortCount > shortLines.size() ? " and " + (shortCount - shortLines.size()) + " more "
+                    + log.lineWord() + "s" : "";
             log.warn(shortLines.get(0), 0, (shortCount == 1 ? "this row has " + firstShortFields + " fields but "
-                    : "rows with fewer fields than expected (lines " + lines + more + "): ") + against + expected
+                    : "rows with fewer fields than expected (" + log.lineWord() + "s " + lines + more + "): ") + against + expected
                     + "; the missing fields were read as missing values");
         }
     }
@@ -102,7 +103,7 @@ final class BodyRows {
     }
 
     private void note(Row row) {
-        log.warn(row.line(), 0, "line set aside as a note below the data: '" + TableShape.preview(row) + "'");
+        log.warn(row.line(), 0, log.lineWord() + " set aside as a note below the data: '" + TableShape.preview(row) + "'");
     }
 
     private void reference(Row row) {

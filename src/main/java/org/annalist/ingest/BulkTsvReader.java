@@ -16,7 +16,9 @@ import org.annalist.series.Period;
  * dimension ({@code freq,unit,geo\TIME_PERIOD}), periods across the header ({@code 2024-01 } or
  * {@code 2024M01}, often with trailing spaces), and in each cell the value followed by its flags
  * ({@code 123 p}, {@code : c}; a colon alone is a missing value). The layout is common practice of
- * bulk downloads (no formal specification; described in the portals' download guides, from memory).
+ * bulk downloads (no SDMX specification: Eurostat's own format, described in its help pages "Which are the
+ * available formats" and, for the SDMX 2.1/3.0 APIs, "Details on the format": a header whose first cell is
+ * the dimension codes joined by commas, a backslash and TIME_PERIOD; one tab-delimited series a line; checked).
  */
 final class BulkTsvReader {
 

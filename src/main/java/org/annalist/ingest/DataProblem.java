@@ -22,24 +22,27 @@ public record DataProblem(String file, int line, int column, String message, Str
         this(file, line, column, message, "");
     }
 
+    /** Where the problem is: a line and column of text, or a sheet's row and cell. */
+    public Place place() {
+        return sheet.isEmpty() ? new Place.Text(line, column) : new Place.Cell(sheet, line, column);
+    }
+
+    /** Where the problem is, as a sentence names it: {@code line 12, column 3}, {@code cell C12}, {@code row 12}. */
+    public String where() {
+        return place().inWords();
+    }
+
     /**
      * {@code FILE:LINE[:COLUMN]: message}, the form every data message takes; in a workbook
      * {@code FILE, sheet 'NAME', cell C14: message} (or {@code row 14}).
      */
     @Override
     public String toString() {
+        String lead = place().lead();
         if (!sheet.isEmpty()) {
-            return file + ", sheet '" + sheet + "'" + (line <= 0 ? "" : column > 0 ? ", cell " + columnLetters(column) + line
-                    : ", row " + line) + ": " + message;
+            return file + ", " + lead + ": " + message;
         }
-        StringBuilder where = new StringBuilder(file);
-        if (line > 0) {
-            where.append(':').append(line);
-            if (column > 0) {
-                where.append(':').append(column);
-            }
-        }
-        return String.format(Locale.ROOT, "%s: %s", where, message);
+        return String.format(Locale.ROOT, "%s: %s", lead.isEmpty() ? file : file + ":" + lead, message);
     }
 
     /** The letters of a 1-based column as a spreadsheet names it: 1 → A, 27 → AA (ECMA-376 Part 1 §18.3.1.4, cell reference). */

@@ -84,8 +84,8 @@ final class DecimalMarks {
             return requested;
         }
         if (firstLine[0] > 0 && firstLine[1] > 0) {
-            throw log.fatal(Math.max(firstLine[0], firstLine[1]), 0, "numbers use a decimal point (line " + firstLine[0]
-                    + ") and a decimal comma (line " + firstLine[1] + "); expected one convention per file, "
+            throw log.fatal(Math.max(firstLine[0], firstLine[1]), 0, "numbers use a decimal point (" + log.where(firstLine[0])
+                    + ") and a decimal comma (" + log.where(firstLine[1]) + "); expected one convention per file, "
                     + "or --decimal-mark point|comma");
         }
         if (proved != null) {

@@ -131,8 +131,9 @@ final class JsonStatReader {
         int time = timeDimension(dimensionIds);
         List<List<String>> codes = new ArrayList<>();
         List<Map<String, String>> labels = new ArrayList<>();
+        List<Map<String, String>> units = new ArrayList<>();
         for (int d = 0; d < n; d++) {
-            categories(dimensionIds.get(d), size[d], codes, labels);
+            categories(dimensionIds.get(d), size[d], codes, labels, units);
         }
         Period[] periods = periods(dimensionIds.get(time), codes.get(time));
         if (valueAt == null && valueCount != cells) {
@@ -154,6 +155,7 @@ final class JsonStatReader {
             int d = others.get(k);
             for (String code : codes.get(d)) {
                 collected.label(k, code, labels.get(d).getOrDefault(code, ""));
+                collected.unit(k, code, units.get(d).getOrDefault(code, ""));
             }
         }
         int[] position = new int[n];
@@ -207,7 +209,8 @@ final class JsonStatReader {
     }
 
     /** A dimension's category codes in index order, and their labels (JSON-stat 2.0, section "category"). */
-    private void categories(String id, int size, List<List<String>> codes, List<Map<String, String>> labels) {
+    private void categories(String id, int size, List<List<String>> codes, List<Map<String, String>> labels,
+                            List<Map<String, String>> units) {
         String path = "dimension." + id;
         JsonNode dimension = dimensions.get(id);
         if (dimension == null || !dimension.isObject()) {
@@ -253,6 +256,30 @@ final class JsonStatReader {
         }
         codes.add(List.of(ordered));
         labels.add(names);
+        units.add(units(category.get("unit")));
+    }
+
+    /**
+     * The unit of each category that has one (JSON-stat 2.0 full specification, json-stat.org/full, "unit", with
+     * "decimals", "label", "symbol", "position": the properties checked; "unit" a child of "category", meant for
+     * the categories of a dimension whose role is metric, from memory): its {@code label}, else its {@code symbol}
+     * ({@code position} says on which side of a number the symbol goes; {@code decimals} how many decimals
+     * the producer shows, which a brief does not follow: it rounds by its own rules).
+     */
+    private static Map<String, String> units(JsonNode unit) {
+        Map<String, String> units = new LinkedHashMap<>();
+        if (unit != null && unit.isObject()) {
+            unit.fields().forEachRemaining(e -> {
+                JsonNode label = e.getValue().get("label");
+                JsonNode symbol = e.getValue().get("symbol");
+                String text = label != null && label.isTextual() && !label.asText().isBlank() ? label.asText()
+                        : symbol != null && symbol.isTextual() ? symbol.asText() : "";
+                if (!text.isBlank()) {
+                    units.put(e.getKey(), text.strip());
+                }
+            });
+        }
+        return units;
     }
 
     private Period[] periods(String id, List<String> codes) {

@@ -43,12 +43,17 @@ final class KeyedSeries {
     private final List<Dimension> dimensions;
     private final ProblemLog log;
     private final List<Map<String, String>> codeLabels = new ArrayList<>();
+    private final List<Map<String, String>> codeUnits = new ArrayList<>();
     private final Map<String, Observations> byKey = new LinkedHashMap<>();
     private final String prefix;
     private final int keyStart;
     private final int frequencyDimension;
-    /** The codes of the SDMX code list CL_FREQ (from memory) for the calendars this tool has. */
-    private static final Map<String, Frequency> STATED_FREQUENCIES = Map.of("A", Frequency.ANNUAL, "Q", Frequency.QUARTERLY,
+    /**
+     * The codes of the SDMX code list CL_FREQ for the calendars this tool has: A annual, S "half-yearly,
+     * semester", Q quarterly, M monthly (checked in CL_FREQ 2.1 as the SDMX registry publishes it, SDMX:CL_FREQ(2.1));
+     * W weekly, D daily, B business days from memory (B "business day" also in the IMF's CL_FREQ).
+     */
+    private static final Map<String, Frequency> STATED_FREQUENCIES = Map.of("A", Frequency.ANNUAL, "S", Frequency.HALF_YEARLY, "Q", Frequency.QUARTERLY,
             "M", Frequency.MONTHLY, "W", Frequency.WEEKLY, "D", Frequency.DAILY, "B", Frequency.BUSINESS_DAILY);
 
     /**
@@ -70,7 +75,26 @@ final class KeyedSeries {
         this.log = log;
         for (int d = 0; d < dimensions.size(); d++) {
             codeLabels.add(new HashMap<>());
+            codeUnits.add(new HashMap<>());
         }
+    }
+
+    /** Notes the unit of measure of a dimension's code (JSON-stat's {@code category.unit}): the unit of its series. */
+    void unit(int dimension, String code, String unit) {
+        if (!unit.isEmpty()) {
+            codeUnits.get(dimension).putIfAbsent(code, unit);
+        }
+    }
+
+    /** The unit of a series: that of the first of its codes that has one, or empty. */
+    private String unitOf(String[] codes) {
+        for (int d = 0; d < codes.length; d++) {
+            String unit = codeUnits.get(d).get(codes[d]);
+            if (unit != null) {
+                return unit;
+            }
+        }
+        return "";
     }
 
     /** Notes the label of a dimension's code (the first label given for it counts). */
@@ -102,13 +126,13 @@ final class KeyedSeries {
         String key = String.join("\u0000", codes);
         Observations series = byKey.get(key);
         if (series == null) {
-            series = new Observations(codes.clone(), period.frequency(), line);
+            series = new Observations(codes.clone(), period, line);
             byKey.put(key, series);
         }
         if (period.frequency() != series.frequency) {
             log.error(line, column, "period " + period + " is " + period.frequency() + " but series "
-                    + keyOf(codes) + " has " + series.frequency + " periods (from line " + series.firstLine
-                    + "); expected one frequency per series");
+                    + keyOf(codes) + " has " + series.frequency + " periods (from " + series.first + (series.firstLine > 0
+                    ? ", " + log.where(series.firstLine) : "") + "); expected one frequency per series");
             return;
         }
         series.add(period.index(), value, flags, line);
@@ -160,7 +184,7 @@ final class KeyedSeries {
         List<SeriesKeys.Key> keys = new ArrayList<>();
         for (int s = 0; s < all.size(); s++) {
             Observations o = all.get(s);
-            Optional<Series> made = o.assemble(names.get(s), log);
+            Optional<Series> made = o.assemble(names.get(s), unitOf(o.codes), log);
             if (made.isPresent()) {
                 series.add(made.get());
                 keys.add(new SeriesKeys.Key(names.get(s), keyOf(o.codes), all.size() == 1 ? "" : codesOf(o.codes, varies)));
@@ -220,15 +244,17 @@ final class KeyedSeries {
         private final String[] codes;
         private Frequency frequency;
         private final int firstLine;
+        private final Period first;
         private long[] periods = new long[16];
         private double[] values = new double[16];
         private int[] lines = new int[16];
         private Object[] flags;   // made when the first flag arrives
         private int size;
 
-        Observations(String[] codes, Frequency frequency, int firstLine) {
+        Observations(String[] codes, Period first, int firstLine) {
             this.codes = codes;
-            this.frequency = frequency;
+            this.frequency = first.frequency();
+            this.first = first;
             this.firstLine = firstLine;
         }
 
@@ -252,7 +278,7 @@ final class KeyedSeries {
         }
 
         /** The series (empty, with a warning, when it has no value; errors are logged). */
-        Optional<Series> assemble(String name, ProblemLog log) {
+        Optional<Series> assemble(String name, String unit, ProblemLog log) {
             if (frequency == Frequency.DAILY && size > 0 && noWeekend()) {
                 // daily dates that never fall on a weekend are business days, as in a CSV (README, "Input it reads")
                 for (int i = 0; i < size; i++) {
@@ -302,8 +328,8 @@ final class KeyedSeries {
             for (int slot = 0; slot < span; slot++) {
                 stored[slot] = !Double.isNaN(slots[slot]);
             }
-            StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, log);
-            return Optional.of(Series.of(name, "", new Period(frequency, low), slots, i -> flagsAt(slotFlags, i)).trimmed());
+            StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, null, log);
+            return Optional.of(Series.of(name, unit, new Period(frequency, low), slots, i -> flagsAt(slotFlags, i)).trimmed());
         }
 
         private boolean noWeekend() {

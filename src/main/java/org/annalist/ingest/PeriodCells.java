@@ -24,7 +24,7 @@ final class PeriodCells {
         String format();
     }
 
-    /** A year, quarter, month or ISO week, stated as such. */
+    /** A year, half-year, quarter, month or ISO week, stated as such. */
     record Fixed(Period period, String format) implements Parsed {
     }
 
@@ -55,6 +55,9 @@ final class PeriodCells {
     private static final Pattern YEAR_NAME = Pattern.compile("(\\d{4})[ \\-](\\p{L}{3,9})\\.?");
     private static final Pattern YEAR_QUARTER = Pattern.compile("(\\d{4})[ \\-]?Q([1-4])", Pattern.CASE_INSENSITIVE);
     private static final Pattern QUARTER_YEAR = Pattern.compile("Q([1-4])[ \\-]?(\\d{4})", Pattern.CASE_INSENSITIVE);
+    /** A half-year: {@code 2024-S1} as SDMX writes it, {@code 2024-H1}, {@code H2 2024} as tables often do (common practice, no source). */
+    private static final Pattern YEAR_HALF = Pattern.compile("(\\d{4})[ \\-]?([HS])([12])", Pattern.CASE_INSENSITIVE);
+    private static final Pattern HALF_YEAR = Pattern.compile("H([12])[ \\-]?(\\d{4})", Pattern.CASE_INSENSITIVE);
     private static final Pattern YEAR_WEEK = Pattern.compile("(\\d{4})-?W(\\d{1,2})", Pattern.CASE_INSENSITIVE);
     private static final Pattern YEAR = Pattern.compile("(1[5-9]\\d\\d|2[01]\\d\\d)");
     private static final Map<String, Integer> MONTHS = monthNames();
@@ -103,6 +106,12 @@ final class PeriodCells {
             }
             if ((m = QUARTER_YEAR.matcher(text)).matches()) {
                 return Optional.of(new Fixed(Period.quarter(i(m, 2), i(m, 1)), "Qn YYYY"));
+            }
+            if ((m = YEAR_HALF.matcher(text)).matches()) {
+                return Optional.of(new Fixed(Period.half(i(m, 1), i(m, 3)), "YYYY-" + m.group(2).toUpperCase(Locale.ROOT) + "n"));
+            }
+            if ((m = HALF_YEAR.matcher(text)).matches()) {
+                return Optional.of(new Fixed(Period.half(i(m, 2), i(m, 1)), "Hn YYYY"));
             }
             if ((m = YEAR_WEEK.matcher(text)).matches()) {
                 return Optional.of(new Fixed(Period.isoWeek(i(m, 1), i(m, 2)), "YYYY-Www"));

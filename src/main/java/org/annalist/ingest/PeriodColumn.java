@@ -274,6 +274,8 @@ final class PeriodColumn {
         long median = gaps[gaps.length / 2];
         if (median >= 360) {
             return Optional.of(Frequency.ANNUAL);
+        } else if (median >= 178 && median <= 186) {
+            return Optional.of(Frequency.HALF_YEARLY);
         } else if (median >= 85 && median <= 95) {
             return Optional.of(Frequency.QUARTERLY);
         } else if (median >= 27 && median <= 32) {
@@ -330,7 +332,7 @@ final class PeriodColumn {
             Cell bad = impossible.get(DateOrder.DAY_FIRST).first.get(0);
             Cell other = impossible.get(DateOrder.MONTH_FIRST).first.get(0);
             throw log.fatal(bad.line(), bad.column(), "'" + bad.text() + "' needs month first but '" + other.text()
-                    + "' (line " + other.line() + ") needs day first; expected one day/month order in the file");
+                    + "' (" + log.where(other.line(), other.column()) + ") needs day first; expected one day/month order in the file");
         }
         boolean dayFirstRegular = regular(keys, DateOrder.DAY_FIRST);
         boolean monthFirstRegular = regular(keys, DateOrder.MONTH_FIRST);

@@ -33,6 +33,26 @@ final class ProblemLog {
         return file;
     }
 
+    /** A line (a sheet's row) and column of this file, as a message's cross-reference names it: {@code line 4}, {@code row 4}, {@code cell B4}. */
+    String where(int line, int column) {
+        return (sheet.isEmpty() ? new Place.Text(line, column) : new Place.Cell(sheet, line, column)).inWords();
+    }
+
+    /** A whole line of this file (a sheet's row), as a cross-reference names it. */
+    String where(int line) {
+        return where(line, 0);
+    }
+
+    /** What this file's lines are called: {@code line}, or {@code row} in a sheet. */
+    String lineWord() {
+        return sheet.isEmpty() ? "line" : "row";
+    }
+
+    /** Whether the file is a workbook's sheet (rows and cells rather than lines). */
+    boolean inSheet() {
+        return !sheet.isEmpty();
+    }
+
     void error(int line, int column, String message) {
         if (errors.size() < MAX_ERRORS) {
             errors.add(new DataProblem(file, line, column, message, sheet));

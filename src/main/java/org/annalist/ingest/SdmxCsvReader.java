@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalInt;
 import java.util.Set;
 import java.util.regex.Pattern;
 import org.annalist.ingest.CsvRows.Row;
@@ -45,6 +46,8 @@ final class SdmxCsvReader {
     private int time = -1;
     private int value = -1;
     private int action = -1;
+    private int unitMult = -1;
+    private final Map<Integer, Integer> multipliersApplied = new java.util.TreeMap<>();   // UNIT_MULT → first line
     private int[] dimensionColumns;
     private final Map<Integer, Integer> labelColumns = new LinkedHashMap<>();   // label column → its component column
     private final List<int[]> statusColumns = new ArrayList<>();                 // {column, kind ordinal}
@@ -131,6 +134,19 @@ final class SdmxCsvReader {
             }
         }
         double v = statusMissing ? Double.NaN : number.get();
+        if (unitMult >= 0 && !Double.isNaN(v)) {
+            OptionalInt exponent = UnitMultiplier.exponent(row.cell(unitMult));
+            if (exponent.isEmpty()) {
+                log.error(row.line(), unitMult + 1, "UNIT_MULT '" + row.cell(unitMult).strip() + "' is not a power of ten; "
+                        + "expected a whole number from " + UnitMultiplier.LOWEST + " to " + UnitMultiplier.HIGHEST
+                        + " (3 for thousands, 6 for millions), or empty");
+                return;
+            }
+            if (exponent.getAsInt() != 0) {
+                v = UnitMultiplier.apply(v, exponent.getAsInt());
+                multipliersApplied.putIfAbsent(exponent.getAsInt(), row.line());
+            }
+        }
         collected.add(codes, period.period().get(), v, flags, row.line(), time + 1);
     }
 
@@ -145,6 +161,7 @@ final class SdmxCsvReader {
         if (partial > 0) {
             log.warn(firstPartial, 0, partial + " rows without a period or value (attributes of a partial key) were left out");
         }
+        multipliersApplied.forEach((exponent, line) -> log.warn(line, 0, UnitMultiplier.note(exponent)));
         unknownStatus.forEach((code, line) -> log.warn(line, 0, "status '" + code + "' is not one this tool knows"
                 + " (first on this line); its values were read without a flag"));
         if (rows == 0 && !log.hasErrors()) {
@@ -173,6 +190,8 @@ final class SdmxCsvReader {
                 value = c;
             } else if (id.equals("ACTION")) {
                 action = c;
+            } else if (id.equals("UNIT_MULT")) {
+                unitMult = c;
             }
         }
         if (time < 0 || value < 0) {

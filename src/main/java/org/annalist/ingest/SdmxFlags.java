@@ -11,7 +11,10 @@ import org.annalist.series.ValueFlag;
  * {@link ValueFlag}s: the SDMX observation status ({@code OBS_STATUS}, code list CL_OBS_STATUS of the
  * SDMX content-oriented guidelines), the confidentiality status ({@code CONF_STATUS}, CL_CONF_STATUS),
  * and the letter flags of bulk downloads and JSON-stat status ({@code OBS_FLAG}: {@code p}, {@code e},
- * {@code c}, …, as {@link ValueFlag#fromCode} knows them). The code lists are from memory.
+ * {@code c}, …, as {@link ValueFlag#fromCode} knows them). The CL_OBS_STATUS codes below (A normal, B break,
+ * D definition differs, E estimated, F forecast, I imputed, N not significant, P provisional, U low reliability;
+ * M, L, H, O, Q missing) checked against the list in SDMX's "Possible Ways of Implementing the Observation
+ * Status Concept" (version 2.0, May 2019); R (revised) and the CL_CONF_STATUS codes from memory.
  */
 final class SdmxFlags {
 

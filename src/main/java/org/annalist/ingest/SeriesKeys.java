@@ -1,6 +1,7 @@
 package org.annalist.ingest;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -42,6 +43,23 @@ public record SeriesKeys(String description, List<Key> keys) {
     /** The key of the series named {@code series}, if it has one. */
     public Optional<Key> of(String series) {
         return keys.stream().filter(k -> k.series().equals(series)).findFirst();
+    }
+
+    /**
+     * The value a map keyed by series gives the series named {@code series}: under its name, else under
+     * its key (whole, or the codes of the dimensions that vary), as {@link #seriesWithKey} reads a key.
+     */
+    public <V> Optional<V> lookUp(Map<String, V> byNameOrKey, String series) {
+        V byName = byNameOrKey.get(series);
+        if (byName != null) {
+            return Optional.of(byName);
+        }
+        for (Map.Entry<String, V> e : byNameOrKey.entrySet()) {
+            if (seriesWithKey(e.getKey()).filter(series::equals).isPresent()) {
+                return Optional.of(e.getValue());
+            }
+        }
+        return Optional.empty();
     }
 
     /** The name of the series whose key (whole, or of the varying dimensions) is {@code asked}, exact and then in any case. */

@@ -174,6 +174,7 @@ final class SeriesValues {
         }
         int span = (int) (high - low + 1);
         int[] claimedBy = new int[span];
+        int[] claimedColumn = new int[span];
         double[] slots = new double[span];
         Arrays.fill(slots, Double.NaN);
         int[] slotFlags = flagIds == null ? null : new int[span];
@@ -187,13 +188,15 @@ final class SeriesValues {
             }
             int slot = (int) (p - low);
             int line = axis.lines[i];
+            int cellColumn = columns == null ? column : columns[i];
             if (claimedBy[slot] != 0) {
-                log.error(line, columns == null ? column : columns[i], "period " + new Period(frequency, p)
-                        + " appears again for series '" + name + "' (first on line " + claimedBy[slot]
+                log.error(line, cellColumn, "period " + new Period(frequency, p)
+                        + " appears again for series '" + name + "' (first " + firstAt(log, claimedBy[slot], claimedColumn[slot])
                         + "); expected one row per period");
                 continue;
             }
             claimedBy[slot] = Math.max(line, 1);
+            claimedColumn[slot] = cellColumn;
             if (previous != PeriodColumn.NONE && p < previous && firstOutOfOrderLine == 0) {
                 firstOutOfOrderLine = line;
             }
@@ -222,10 +225,15 @@ final class SeriesValues {
         for (int slot = 0; slot < span; slot++) {
             stored[slot] = !Double.isNaN(slots[slot]);
         }
-        StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, log);
+        StrayPeriods.refuse(name, frequency, low, 0, span - 1, stored, claimedBy, log.inSheet() ? claimedColumn : null, log);
         // Empty cells before the first or after the last value (months not yet published) are not part of the span.
         return Optional.of(Series.of(name, unit.isEmpty() && percent ? "%" : unit, new Period(frequency, low), slots,
                 i -> slotFlags == null ? Set.of() : flagSets.get(slotFlags[i])).trimmed());
+    }
+
+    /** {@code on line 4} in a text file, {@code in cell B4} in a sheet. */
+    static String firstAt(ProblemLog log, int line, int column) {
+        return log.inSheet() ? "in " + log.where(line, column) : "on " + log.where(line);
     }
 
     private static int grown(int length) {

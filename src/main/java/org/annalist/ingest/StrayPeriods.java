@@ -23,9 +23,10 @@ final class StrayPeriods {
      * @param last   the slot of the last value
      * @param stored which slots hold a value
      * @param lines  the line of each slot's value
+     * @param columns the column of each slot's value (a sheet's cell), or null when a line says enough
      */
     static void refuse(String name, Frequency frequency, long base, int first, int last, boolean[] stored, int[] lines,
-                       ProblemLog log) {
+                       int[] columns, ProblemLog log) {
         int count = 0;
         int previous = -1;
         int widest = 0;
@@ -52,7 +53,7 @@ final class StrayPeriods {
         boolean strayBefore = valuesBefore <= count - valuesBefore;
         int stray = strayBefore ? before : after;
         int near = strayBefore ? after : before;
-        log.error(lines[stray], 0, "period " + new Period(frequency, base + stray).label() + " of series '" + name
+        log.error(lines[stray], columns == null ? 0 : columns[stray], "period " + new Period(frequency, base + stray).label() + " of series '" + name
                 + "' is " + widest + " missing periods away from its other values (next: " + new Period(frequency, base + near).label()
                 + "), more than the " + count + " values the series holds; expected periods near the others (a mistyped year?)");
     }

@@ -149,7 +149,7 @@ final class TableShape {
         if (firstData > 0) {
             header = Optional.of(rows.get(firstData - 1));
             for (Row title : rows.subList(0, firstData - 1)) {
-                log.warn(title.line(), 0, "line set aside as a title above the header: '" + preview(title) + "'");
+                log.warn(title.line(), 0, log.lineWord() + " set aside as a title above the header: '" + preview(title) + "'");
             }
         }
         // A trailing delimiter of the header declares a column (filled further down, or padding), one of a row does not.

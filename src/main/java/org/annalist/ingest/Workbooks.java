@@ -91,6 +91,15 @@ final class Workbooks {
         }
     }
 
+    /** Whether a zip package holds a workbook: SpreadsheetML's workbook part, or an OpenDocument spreadsheet's mimetype. */
+    static boolean isWorkbookPackage(Path file) {
+        try (ZipParts parts = ZipParts.of(file, Files.size(file))) {
+            return parts.has(XlsxBook.WORKBOOK) || mimetype(parts).startsWith(OdsBook.MIMETYPE);
+        } catch (IOException | RuntimeException unreadable) {
+            return false;
+        }
+    }
+
     private static DataProblemException compound(String name, byte[] bytes) {
         boolean encrypted = indexOf(bytes, ENCRYPTION_INFO) >= 0;
         return problem(name, encrypted ? "is a password-protected (encrypted) workbook, which cannot be read; expected "

@@ -44,11 +44,11 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     }
 
     /** The series' frequency, for the template's words; all false: daily or business-daily. */
-    public record Calendar(boolean annual, boolean quarterly, boolean monthly, boolean weekly) {
+    public record Calendar(boolean annual, boolean quarterly, boolean monthly, boolean weekly, boolean halfYearly) {
 
         static Calendar of(Frequency frequency) {
             return new Calendar(frequency == Frequency.ANNUAL, frequency == Frequency.QUARTERLY,
-                    frequency == Frequency.MONTHLY, frequency == Frequency.WEEKLY);
+                    frequency == Frequency.MONTHLY, frequency == Frequency.WEEKLY, frequency == Frequency.HALF_YEARLY);
         }
     }
 

@@ -124,6 +124,7 @@ public final class BriefViews {
         }
         String per = switch (series.frequency()) {
             case ANNUAL -> "a year";
+            case HALF_YEARLY -> "a half-year";
             case QUARTERLY -> "a quarter";
             case MONTHLY -> "a month";
             case WEEKLY -> "a week";

@@ -142,6 +142,7 @@ final class ClaimWords {
         return switch (frequency) {
             case MONTHLY -> new String[] {"twelve months", "twelve"};
             case QUARTERLY -> new String[] {"four quarters", "four"};
+            case HALF_YEARLY -> new String[] {"two half-years", "two"};
             case WEEKLY -> new String[] {"52 weeks", "52"};
             default -> new String[] {"365 days", "365"};
         };

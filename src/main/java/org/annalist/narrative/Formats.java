@@ -124,10 +124,11 @@ public final class Formats {
         return plain(n, 0);
     }
 
-    /** A period in words: {@code October 2026}, {@code Q3 2026}, {@code week 5 of 2024}, {@code 2 March 2024}. */
+    /** A period in words: {@code October 2026}, {@code the first half of 2026}, {@code Q3 2026}, {@code week 5 of 2024}, {@code 2 March 2024}. */
     public String period(Period period) {
         return switch (period.frequency()) {
             case ANNUAL -> String.valueOf(period.year());
+            case HALF_YEARLY -> "the " + seasonName(Frequency.HALF_YEARLY, period.seasonalPosition()) + " of " + period.year();
             case QUARTERLY -> period.seasonLabel() + " " + period.year();
             case MONTHLY -> period.startDate().format(DateTimeFormatter.ofPattern("MMMM yyyy", locale));
             case WEEKLY -> "week " + period.seasonalPosition() + " of " + period.year();
@@ -143,10 +144,11 @@ public final class Formats {
                 + period(period);
     }
 
-    /** A period in few characters, for table rows: {@code Oct 2026}, {@code Q3 2026}, {@code 2024-W05}, {@code 2 Mar 2024}. */
+    /** A period in few characters, for table rows: {@code Oct 2026}, {@code H1 2026}, {@code Q3 2026}, {@code 2024-W05}, {@code 2 Mar 2024}. */
     public String shortPeriod(Period period) {
         return switch (period.frequency()) {
             case ANNUAL -> String.valueOf(period.year());
+            case HALF_YEARLY -> "H" + period.seasonalPosition() + " " + period.year();
             case QUARTERLY -> period.seasonLabel() + " " + period.year();
             case MONTHLY -> period.seasonLabel() + " " + period.year();
             case WEEKLY -> period.label();
@@ -155,7 +157,7 @@ public final class Formats {
     }
 
     /**
-     * A season position in running text: {@code January} (months), {@code Q3}, {@code W05} (ISO
+     * A season position in running text: {@code January} (months), {@code first half}, {@code Q3}, {@code W05} (ISO
      * weeks), {@code Mondays} (days, Monday first).
      */
     public String seasonName(Frequency frequency, int position) {
@@ -163,6 +165,7 @@ public final class Formats {
             case MONTHLY -> Month.of(position).getDisplayName(TextStyle.FULL, locale);
             case DAILY, BUSINESS_DAILY -> DayOfWeek.of(position).getDisplayName(TextStyle.FULL, locale) + "s";
             case QUARTERLY -> "Q" + position;
+            case HALF_YEARLY -> position == 1 ? "first half" : "second half";
             case WEEKLY -> String.format(Locale.ROOT, "W%02d", position);
             case ANNUAL -> String.valueOf(position);
         };

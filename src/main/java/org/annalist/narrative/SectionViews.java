@@ -254,7 +254,8 @@ final class SectionViews {
 
     /** "October", "Q3", "Monday": the season a period's rank compares it within. */
     private String seasonName(Period p) {
-        return p.frequency() == Frequency.MONTHLY ? f.seasonName(p.frequency(), p.seasonalPosition())
+        return p.frequency() == Frequency.MONTHLY || p.frequency() == Frequency.HALF_YEARLY
+                ? f.seasonName(p.frequency(), p.seasonalPosition())
                 : p.frequency() == Frequency.QUARTERLY ? p.seasonLabel() : "week " + p.seasonalPosition();
     }
 
@@ -307,7 +308,8 @@ final class SectionViews {
     private String printedEqual(SeasonalityFinding s, SeasonalityFinding.ProfilePoint extreme, boolean multiplicative) {
         String printed = index(extreme.index(), multiplicative);
         return Terms.listed(s.profile().stream().filter(p -> index(p.index(), multiplicative).equals(printed))
-                .map(p -> f.seasonName(series.frequency(), p.position())).toList());
+                .map(p -> (series.frequency() == Frequency.HALF_YEARLY ? "the " : "")   // "peaks in the first half"
+                        + f.seasonName(series.frequency(), p.position())).toList());
     }
 
     private static SeasonalityFinding.ProfilePoint extreme(SeasonalityFinding s, boolean highest) {

@@ -12,6 +12,11 @@ import java.util.Locale;
  */
 public enum Frequency {
     ANNUAL("annual", 1, 1.0),
+    /**
+     * Two halves of a calendar year, January–June and July–December (the SDMX frequency {@code S},
+     * "half-yearly, semester", periods {@code 2024-S1}, {@code 2024-S2}).
+     */
+    HALF_YEARLY("half-yearly", 2, 2.0),
     QUARTERLY("quarterly", 4, 4.0),
     MONTHLY("monthly", 12, 12.0),
     /** ISO 8601 weeks, Monday to Sunday; week 53 exists in some years. */
@@ -35,7 +40,7 @@ public enum Frequency {
         return label;
     }
 
-    /** Observations per seasonal cycle: 12 for monthly, 4 quarterly, 52 weekly, 7 daily, 5 business-daily, 1 annual. */
+    /** Observations per seasonal cycle: 12 for monthly, 4 quarterly, 2 half-yearly, 52 weekly, 7 daily, 5 business-daily, 1 annual. */
     public int seasonalPeriod() {
         return seasonalPeriod;
     }
@@ -52,8 +57,9 @@ public enum Frequency {
         }
         return switch (this) {
             case DAILY, BUSINESS_DAILY -> coarser != DAILY && coarser != BUSINESS_DAILY;
-            case MONTHLY -> coarser == QUARTERLY || coarser == ANNUAL;
-            case QUARTERLY -> coarser == ANNUAL;
+            case MONTHLY -> coarser == QUARTERLY || coarser == HALF_YEARLY || coarser == ANNUAL;
+            case QUARTERLY -> coarser == HALF_YEARLY || coarser == ANNUAL;
+            case HALF_YEARLY -> coarser == ANNUAL;
             case WEEKLY, ANNUAL -> false;
         };
     }
@@ -67,7 +73,7 @@ public enum Frequency {
             }
         }
         throw new IllegalArgumentException("unknown frequency '" + text
-                + "'; expected one of annual, quarterly, monthly, weekly, daily, business-daily");
+                + "'; expected one of annual, half-yearly, quarterly, monthly, weekly, daily, business-daily");
     }
 
     @Override

@@ -7,15 +7,15 @@ import java.util.Locale;
 import java.util.Objects;
 
 /**
- * A point on a series' calendar: a year, quarter, month, ISO week, day or business day.
+ * A point on a series' calendar: a year, half-year, quarter, month, ISO week, day or business day.
  *
  * <p>Each period is a frequency plus a running index, so that arithmetic is plain integer
- * arithmetic: the index is the year (annual), {@code 4·year + quarter − 1}, {@code 12·year + month − 1},
+ * arithmetic: the index is the year (annual), {@code 2·year + half − 1}, {@code 4·year + quarter − 1}, {@code 12·year + month − 1},
  * the number of whole weeks from the Monday 1969-12-29 (weekly), the ISO epoch day (daily), or the
  * number of weekdays from that same Monday (business-daily). Periods of different frequencies are
  * never compared.
  *
- * <p>Labels follow the findings JSON contract: {@code 1898}, {@code 1960-Q1}, {@code 1949-01},
+ * <p>Labels follow the findings JSON contract: {@code 1898}, {@code 2024-S1} (a half-year, as SDMX writes it), {@code 1960-Q1}, {@code 1949-01},
  * {@code 2024-W05} (ISO 8601 week-based year), {@code 2024-03-01}.
  */
 public record Period(Frequency frequency, long index) implements Comparable<Period> {
@@ -32,6 +32,14 @@ public record Period(Frequency frequency, long index) implements Comparable<Peri
 
     public static Period year(int year) {
         return new Period(Frequency.ANNUAL, year);
+    }
+
+    /** Half {@code half} (1: January–June, 2: July–December) of {@code year}. */
+    public static Period half(int year, int half) {
+        if (half < 1 || half > 2) {
+            throw new IllegalArgumentException("half must be 1 or 2, was " + half);
+        }
+        return new Period(Frequency.HALF_YEARLY, 2L * year + half - 1);
     }
 
     public static Period quarter(int year, int quarter) {
@@ -73,6 +81,7 @@ public record Period(Frequency frequency, long index) implements Comparable<Peri
         long epochDay = date.toEpochDay();
         return switch (frequency) {
             case ANNUAL -> year(date.getYear());
+            case HALF_YEARLY -> half(date.getYear(), (date.getMonthValue() + 5) / 6);
             case QUARTERLY -> quarter(date.getYear(), (date.getMonthValue() + 2) / 3);
             case MONTHLY -> month(date.getYear(), date.getMonthValue());
             case WEEKLY -> new Period(frequency, Math.floorDiv(epochDay - FIRST_MONDAY_EPOCH_DAY, 7));
@@ -104,6 +113,7 @@ public record Period(Frequency frequency, long index) implements Comparable<Peri
     public LocalDate startDate() {
         return switch (frequency) {
             case ANNUAL -> LocalDate.of(Math.toIntExact(index), 1, 1);
+            case HALF_YEARLY -> LocalDate.of(Math.toIntExact(Math.floorDiv(index, 2)), 6 * (int) Math.floorMod(index, 2) + 1, 1);
             case QUARTERLY -> LocalDate.of(Math.toIntExact(Math.floorDiv(index, 4)), 3 * (int) Math.floorMod(index, 4) + 1, 1);
             case MONTHLY -> LocalDate.of(Math.toIntExact(Math.floorDiv(index, 12)), (int) Math.floorMod(index, 12) + 1, 1);
             case WEEKLY -> LocalDate.ofEpochDay(index * 7 + FIRST_MONDAY_EPOCH_DAY);
@@ -133,12 +143,13 @@ public record Period(Frequency frequency, long index) implements Comparable<Peri
     }
 
     /**
-     * 1-based position within the seasonal cycle: month 1–12, quarter 1–4, ISO week 1–53, weekday
+     * 1-based position within the seasonal cycle: month 1–12, half 1–2, quarter 1–4, ISO week 1–53, weekday
      * 1–7 (Monday first; 1–5 for business days), and 1 for annual data.
      */
     public int seasonalPosition() {
         return switch (frequency) {
             case ANNUAL -> 1;
+            case HALF_YEARLY -> (int) Math.floorMod(index, 2) + 1;
             case QUARTERLY -> (int) Math.floorMod(index, 4) + 1;
             case MONTHLY -> (int) Math.floorMod(index, 12) + 1;
             case WEEKLY -> startDate().get(IsoFields.WEEK_OF_WEEK_BASED_YEAR);
@@ -147,11 +158,12 @@ public record Period(Frequency frequency, long index) implements Comparable<Peri
         };
     }
 
-    /** English label of the seasonal position: {@code Jul}, {@code Q3}, {@code W05}, {@code Mon}. */
+    /** English label of the seasonal position: {@code Jul}, {@code H2} (a half; its label is SDMX's {@code 2024-S2}), {@code Q3}, {@code W05}, {@code Mon}. */
     public String seasonLabel() {
         int position = seasonalPosition();
         return switch (frequency) {
             case ANNUAL -> String.valueOf(year());
+            case HALF_YEARLY -> "H" + position;
             case QUARTERLY -> "Q" + position;
             case MONTHLY -> MONTH_ABBREVIATIONS[position - 1];
             case WEEKLY -> String.format(Locale.ROOT, "W%02d", position);
@@ -163,6 +175,7 @@ public record Period(Frequency frequency, long index) implements Comparable<Peri
     public String label() {
         return switch (frequency) {
             case ANNUAL -> String.valueOf(index);
+            case HALF_YEARLY -> year() + "-S" + seasonalPosition();
             case QUARTERLY -> year() + "-Q" + seasonalPosition();
             case MONTHLY -> String.format(Locale.ROOT, "%d-%02d", year(), seasonalPosition());
             case WEEKLY -> String.format(Locale.ROOT, "%d-W%02d", year(), seasonalPosition());

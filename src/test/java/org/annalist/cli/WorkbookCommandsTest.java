@@ -60,6 +60,26 @@ class WorkbookCommandsTest {
     }
 
     @Test
+    void checkInTextAndJsonNamesTheCellOfEachProblem() throws IOException {
+        Sheet nights = new Sheet("Nights").row("Guest nights").row("Month", "Domestic").row("2024-01", "100")
+                .row("2024-02", "e:#N/A").row("2024-03", "120");
+        Path ods = write("visitors.ods", WorkbookFiles.ods(nights));
+        Run text = Run.of("check", ods.toString());
+        Run json = Run.of("check", "--format", "json", ods.toString());
+        assertThat(text.exitCode()).as(text.err()).isZero();
+        assertThat(text.out()).contains(ods + ", sheet 'Nights', cell B4: holds the error #N/A; read as a missing value",
+                ods + ", sheet 'Nights', row 1: row set aside as a title above the header: 'Guest nights'");
+        assertThat(json.out()).contains(ods + ", sheet 'Nights', cell B4: holds the error #N/A; read as a missing value",
+                ods + ", sheet 'Nights', row 1: row set aside as a title above the header: 'Guest nights'");
+        Path broken = write("broken.xlsx", WorkbookFiles.xlsx(false, new Sheet("Nights").row("Month", "Domestic")
+                .row("2024-01", "100").row("2024-01", "110").row("2024-02", "1o0")));
+        Run refused = Run.of("check", "--format", "json", broken.toString());
+        assertThat(refused.exitCode()).isEqualTo(2);
+        assertThat(refused.err()).contains(broken + ", sheet 'Nights', cell B3: period 2024-01 appears again for series "
+                + "'Domestic' (first in cell B2)").contains(broken + ", sheet 'Nights', cell B4: '1o0'").doesNotContain("line");
+    }
+
+    @Test
     void theSheetOptionChoosesAmongSheetsWithSeries() throws IOException {
         Path xlsx = write("two.xlsx", WorkbookFiles.xlsx(false, WorkbookFiles.reference("AirPassengers.csv", "Nights"),
                 WorkbookFiles.reference("Nile.csv", "Flow")));

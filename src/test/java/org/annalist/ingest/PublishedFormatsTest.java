@@ -14,8 +14,10 @@ import org.junit.jupiter.api.Test;
  * SDMX-CSV 1.0 and 2.0, the tab-separated bulk layout and JSON-stat 2.0, on files written for these
  * tests to the published specifications: the SDMX-CSV field guides of the SDMX Technical Working
  * Group (github.com/sdmx-twg/sdmx-csv; 1.0 for SDMX 2.1, 2.0 for SDMX 3.0, "data message"), the
- * JSON-stat 2.0 format (json-stat.org/format), and for the bulk layout the download guides of the
- * portals (common practice, from memory). The section each check rests on is named beside it.
+ * JSON-stat 2.0 format (json-stat.org/format), and for the bulk layout Eurostat's description of its TSV
+ * format. The section each check rests on is named beside it; the SDMX-CSV 2.0 sections ("Design
+ * principles", "Columns", "Column headers (first row)", "Column content", "optional parameters") were
+ * checked in the field guide (docs/data_message_field_guide.md) on 2026-12-03, the others where said.
  * Values are invented, set in Quennelmark.
  */
 class PublishedFormatsTest {
@@ -49,7 +51,8 @@ class PublishedFormatsTest {
         ReadResult read = Files.read("nights.csv", SDMX1);
         Series dom = read.find("DOM").orElseThrow();
         Series bre = read.find("BRE").orElseThrow();
-        // CL_OBS_STATUS (SDMX content-oriented guidelines, from memory): A normal, P provisional, E estimated, M missing
+        // CL_OBS_STATUS (checked in SDMX's "Possible Ways of Implementing the Observation Status Concept" 2.0, 2019):
+        // A normal, P provisional, E estimated, M missing
         assertThat(dom.flags(0)).isEmpty();
         assertThat(dom.flags(1)).containsExactly(ValueFlag.PROVISIONAL);
         assertThat(dom.flags(2)).containsExactly(ValueFlag.ESTIMATED);
@@ -128,7 +131,8 @@ class PublishedFormatsTest {
 
     @Test
     void everySdmxPeriodFormReadsAsItsCalendar() {
-        // SDMX 2.1 Technical Notes, section 4.2.4 "Reporting period" (from memory), and the bulk downloads' compact forms
+        // SDMX 2.1 Section 6 "Technical Notes", §4.2 (the subsection number 4.2.4 "Reporting period" from memory;
+        // 2001-S1 and the ESCB's 2001-H1 checked in the Fusion Registry knowledge base), and the bulk downloads' compact forms
         assertThat(SdmxPeriods.read("2024").period()).hasValue(Period.year(2024));
         assertThat(SdmxPeriods.read("2024-A1").period()).hasValue(Period.year(2024));
         assertThat(SdmxPeriods.read("2024-Q1").period()).hasValue(Period.quarter(2024, 1));
@@ -139,7 +143,11 @@ class PublishedFormatsTest {
         assertThat(SdmxPeriods.read("2024-W05").period()).hasValue(Period.isoWeek(2024, 5));
         assertThat(SdmxPeriods.read("2024-01-15").period()).hasValue(Period.day(java.time.LocalDate.of(2024, 1, 15)));
         assertThat(SdmxPeriods.read("2024-D015").period()).hasValue(Period.day(java.time.LocalDate.of(2024, 1, 15)));
-        assertThat(SdmxPeriods.read("2024-S1").problem()).contains("half-year");
+        assertThat(SdmxPeriods.read("2024-S1").period()).hasValue(Period.half(2024, 1));
+        assertThat(SdmxPeriods.read("2024S2").period()).hasValue(Period.half(2024, 2));
+        assertThat(SdmxPeriods.read("2024-H2").period()).hasValue(Period.half(2024, 2));
+        assertThat(SdmxPeriods.read("2024-S3").period()).isEmpty();
+        assertThat(SdmxPeriods.read("2024-T1").problem()).contains("third of a year");
         assertThat(SdmxPeriods.read("2024-M13").period()).isEmpty();
         assertThat(SdmxPeriods.read("Jan 2024").problem()).contains("expected an SDMX period");
     }
@@ -147,7 +155,7 @@ class PublishedFormatsTest {
     @Test
     void normalizedDatesAreReadInTheCalendarThatFreqStates() {
         // SDMX-CSV 2.0, "Optional parameters", timeFormat=normalized: periods written as ISO 8601 dates;
-        // the FREQ dimension (code list CL_FREQ, from memory: A, Q, M, W, D, B) says which calendar they stand for
+        // the FREQ dimension (code list CL_FREQ 2.1: A, S, Q, M checked; W, D, B from memory) says which calendar they stand for
         String text = """
                 STRUCTURE,STRUCTURE_ID,ACTION,FREQ,MARKET,TIME_PERIOD,OBS_VALUE
                 dataflow,QM:N(1.0),I,M,DOM,2024-01-01,5
@@ -174,13 +182,13 @@ class PublishedFormatsTest {
         String text = """
                 DATAFLOW,MARKET,TIME_PERIOD,OBS_VALUE
                 QM:NIGHTS(1.0),DOM,2024-01,1200
-                QM:NIGHTS(1.0),DOM,2024-S1,1310
+                QM:NIGHTS(1.0),DOM,2024-T1,1310
                 QM:NIGHTS(1.0),DOM,2024-02,12x
                 QM:NIGHTS(1.0),DOM,2024-01,1250
                 QM:NIGHTS(1.0),DOM,2024-Q2,1250
                 """;
         assertThatThrownBy(() -> Files.read("bad.csv", text)).isInstanceOf(DataProblemException.class)
-                .hasMessageContaining("bad.csv:3:3: '2024-S1' is a half-year")
+                .hasMessageContaining("bad.csv:3:3: '2024-T1' is a third of a year")
                 .hasMessageContaining("bad.csv:4:4: '12x' is not a number")
                 .hasMessageContaining("bad.csv:5: period 2024-01 appears again for series 'bad' (first on line 2)")
                 .hasMessageContaining("bad.csv:6:3: period 2024-Q2 is quarterly but series DOM has monthly periods");

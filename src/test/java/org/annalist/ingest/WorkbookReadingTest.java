@@ -230,8 +230,8 @@ class WorkbookReadingTest {
                 .row("Source: accommodation survey");
         ReadResult read = read("t.xlsx", WorkbookFiles.xlsx(false, sheet));
         assertThat(read.series().get(0).values()).containsExactly(100, 110, 120);
-        assertThat(warnings(read)).contains("t.xlsx, sheet 'Nights', row 3: line set aside as a title above the header: "
-                + "'Guest nights, Quennelmark'", "t.xlsx, sheet 'Nights', row 8: line set aside as a note below the data: "
+        assertThat(warnings(read)).contains("t.xlsx, sheet 'Nights', row 3: row set aside as a title above the header: "
+                + "'Guest nights, Quennelmark'", "t.xlsx, sheet 'Nights', row 8: row set aside as a note below the data: "
                 + "'Source: accommodation survey'");
     }
 

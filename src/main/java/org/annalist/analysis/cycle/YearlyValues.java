@@ -64,6 +64,7 @@ public record YearlyValues(List<Integer> years, double[] values) {
     private static int fullYear(Frequency frequency) {
         return switch (frequency) {
             case ANNUAL -> 1;
+            case HALF_YEARLY -> 2;
             case QUARTERLY -> 4;
             case MONTHLY -> 12;
             case WEEKLY -> 52;

@@ -20,13 +20,14 @@ public final class YearOnYear {
     }
 
     /**
-     * Periods back to "the same period last year": 1 year, 4 quarters, 12 months, 52 weeks, 364 days
+     * Periods back to "the same period last year": 1 year, 2 half-years (the same half),  4 quarters, 12 months, 52 weeks, 364 days
      * (52 weeks, so that a Saturday is compared with a Saturday) or 260 business days (52 weeks of
      * five); the choices for weeks and days are our rules.
      */
     public static int lag(Frequency frequency) {
         return switch (frequency) {
             case ANNUAL -> 1;
+            case HALF_YEARLY -> 2;
             case QUARTERLY -> 4;
             case MONTHLY -> 12;
             case WEEKLY -> 52;
