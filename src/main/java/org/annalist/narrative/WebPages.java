@@ -26,6 +26,8 @@ public final class WebPages {
         configuration = new Configuration(Configuration.VERSION_2_3_35);
         configuration.setTemplateLoader(new ClassTemplateLoader(WebPages.class, "/web"));
         configuration.setDefaultEncoding("UTF-8");
+        configuration.setOutputEncoding("UTF-8");
+        configuration.setURLEscapingCharset("UTF-8");
         configuration.setOutputFormat(HTMLOutputFormat.INSTANCE);
         configuration.setLocale(Locale.ENGLISH);
         configuration.setTemplateExceptionHandler(TemplateExceptionHandler.RETHROW_HANDLER);

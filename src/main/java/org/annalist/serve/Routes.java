@@ -103,6 +103,15 @@ final class Routes {
     private void route(Exchange ex, Session session, List<String> p) throws IOException {
         String first = p.isEmpty() ? "" : p.get(0);
         boolean post = ex.isPost();
+        // every POST but the upload (whose token travels in its multipart body) shows the token first
+        Fields fields = new Fields();
+        if (post && !first.equals("open")) {
+            Optional<Fields> form = form(ex, session);
+            if (form.isEmpty()) {
+                return;
+            }
+            fields = form.get();
+        }
         switch (first) {
             case "" -> {
                 if (!post) {
@@ -124,10 +133,8 @@ final class Routes {
                         return;
                     }
                     if (post && p.size() == 3 && p.get(2).equals("close")) {
-                        if (tokenInForm(ex, session)) {
-                            session.close(file.get().id());
-                            ex.redirect("/");
-                        }
+                        session.close(file.get().id());
+                        ex.redirect("/");
                         return;
                     }
                     Optional<Integer> index = p.size() >= 4 && p.get(2).equals("series")
@@ -137,10 +144,7 @@ final class Routes {
                         return;
                     }
                     if (index.isPresent() && post && p.size() == 5 && p.get(4).equals("brief")) {
-                        Optional<Fields> form = form(ex, session);
-                        if (form.isPresent()) {
-                            files.makeBrief(ex, session, file.get(), index.get(), form.get());
-                        }
+                        files.makeBrief(ex, session, file.get(), index.get(), fields);
                         return;
                     }
                 }
@@ -172,10 +176,7 @@ final class Routes {
                     return;
                 }
                 if (post && p.size() == 2 && p.get(1).equals("run")) {
-                    Optional<Fields> form = form(ex, session);
-                    if (form.isPresent()) {
-                        routine.run(ex, session, Optional.ofNullable(form.get().getValue("name")).orElse(""));
-                    }
+                    routine.run(ex, session, Optional.ofNullable(fields.getValue("name")).orElse(""));
                     return;
                 }
             }
@@ -194,11 +195,9 @@ final class Routes {
             }
             case "end" -> {
                 if (post && p.size() == 1) {
-                    if (tokenInForm(ex, session)) {
-                        sessions.end(session);
-                        ex.expireSessionCookie();
-                        ex.redirect("/");
-                    }
+                    sessions.end(session);
+                    ex.expireSessionCookie();
+                    ex.redirect("/");
                     return;
                 }
             }
@@ -222,10 +221,6 @@ final class Routes {
             return Optional.empty();
         }
         return Optional.of(fields);
-    }
-
-    private boolean tokenInForm(Exchange ex, Session session) {
-        return form(ex, session).isPresent();
     }
 
     private void serveStatic(Exchange ex, String name) throws IOException {
