@@ -120,7 +120,8 @@ final class Exchange {
         var headers = response.getHeaders();
         headers.put(HttpHeader.CONTENT_TYPE, contentType);
         headers.put("X-Content-Type-Options", "nosniff");
-        headers.put("Referrer-Policy", "no-referrer");
+        // same-origin, not no-referrer: under no-referrer a browser sends "Origin: null" with a form, which the Guard refuses
+        headers.put("Referrer-Policy", "same-origin");
         headers.put(HttpHeader.CACHE_CONTROL, "no-store");
         headers.put("Content-Security-Policy", CONTENT_POLICY);
         headers.put("X-Frame-Options", "SAMEORIGIN");
