@@ -116,6 +116,7 @@ class WorkbenchBrowserTest {
         // a series: the findings; then another latest period and measure
         browser.findElement(By.linkText("Look at Total")).click();
         WebElement lead = waitFor(By.cssSelector(".draft .lead"));
+        String seriesPage = browser.getCurrentUrl();
         String before = lead.getText();
         assertThat(before).contains("October 2026");
         shot("4-series");
@@ -134,6 +135,9 @@ class WorkbenchBrowserTest {
         // the brief: made, its pages shown, the PDF saved
         browser.findElement(By.cssSelector("form.make button")).click();
         waitFor(By.cssSelector(".pages img"));
+        new WebDriverWait(browser, Duration.ofSeconds(60)).until(d -> Boolean.TRUE.equals(((org.openqa.selenium
+                .JavascriptExecutor) d).executeScript("var i = document.querySelector('.pages img');"
+                + " return i.complete && i.naturalWidth > 0;")));
         shot("6-brief");
         String pdfHref = browser.findElement(By.cssSelector(".downloads a.button")).getAttribute("href");
         byte[] pdf = fetch(pdfHref);
@@ -149,12 +153,22 @@ class WorkbenchBrowserTest {
         assertThat(waitFor(By.cssSelector("table.entries")).getText()).contains("Guest nights from Brevania");
         shot("7-spec");
         browser.findElement(By.cssSelector("main form button[type=submit]")).click();
-        new WebDriverWait(browser, Duration.ofSeconds(120)).until(d -> d.findElement(By.cssSelector(".progress-line"))
-                .getText().contains("Finished"));
+        // the page reloads itself while the run goes on: an element found may be gone a moment later
+        new WebDriverWait(browser, Duration.ofSeconds(120)).ignoring(org.openqa.selenium.StaleElementReferenceException.class)
+                .until(d -> d.findElement(By.cssSelector(".progress-line")).getText().contains("Finished"));
         shot("8-run");
         assertThat(browser.findElement(By.cssSelector(".progress-line")).getText()).contains("3 of 3 briefs made");
         byte[] result = fetch(browser.findElement(By.cssSelector("table.outcomes a")).getAttribute("href"));
         assertThat(new String(result, 0, 5, StandardCharsets.US_ASCII)).isEqualTo("%PDF-");
+
+        // 200 % zoom: the same page in half the CSS width, looked at in its screenshot
+        browser.manage().window().setSize(new org.openqa.selenium.Dimension(640, 1000));
+        browser.get(seriesPage);
+        waitFor(By.cssSelector(".draft .lead"));
+        shot("9-series-at-200-percent");
+        Object overflow = ((org.openqa.selenium.JavascriptExecutor) browser).executeScript(
+                "return document.documentElement.scrollWidth - document.documentElement.clientWidth;");
+        assertThat(((Number) overflow).intValue()).as("no sideways scrolling at 200 %").isLessThanOrEqualTo(0);
     }
 
     private static WebElement waitFor(By locator) {
