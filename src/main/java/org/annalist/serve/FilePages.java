@@ -18,6 +18,11 @@ import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.Job;
 import org.annalist.brief.SelectionProblem;
 import org.annalist.brief.SideOutputs;
+import org.annalist.brief.Words;
+import org.annalist.ingest.Aggregation;
+import org.annalist.ingest.DateOrder;
+import org.annalist.ingest.DecimalMark;
+import org.annalist.series.Frequency;
 import org.annalist.ingest.DataProblemException;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.render.PageImages;
@@ -67,7 +72,7 @@ final class FilePages {
         }
         Path incoming = session.newFolder(session.nextId('u'));
         try {
-            MultiPartConfig config = new MultiPartConfig.Builder().location(incoming).maxParts(4)
+            MultiPartConfig config = new MultiPartConfig.Builder().location(incoming).maxParts(10)
                     .maxPartSize(settings.maxUploadBytes()).maxSize(settings.maxUploadBytes() + FORM_SLACK)
                     .maxMemoryPartSize(64 * 1024).maxHeadersSize(8 * 1024).build();
             MultiPartFormData.Parts parts;
@@ -102,8 +107,13 @@ final class FilePages {
                 Path folder = session.newFolder(id);
                 Path stored = folder.resolve(name);
                 data.writeTo(stored);
-                Job.Input input = new Job.Input(stored, ReadOptions.defaults()
-                        .withMaxInputBytes(settings.maxUploadBytes()));
+                Optional<ReadOptions> options = readOptions(parts);
+                if (options.isEmpty()) {
+                    Session.delete(folder);
+                    routes.refuse(ex, Routes.Refusal.BAD_REQUEST, session);
+                    return;
+                }
+                Job.Input input = new Job.Input(stored, options.get());
                 try {
                     OpenFile file = new OpenFile(id, name, stored, input, session.read().read(input));
                     session.add(file);
@@ -116,6 +126,52 @@ final class FilePages {
         } finally {
             Session.delete(incoming);
         }
+    }
+
+    /**
+     * The reading options of the form, in the words the command line's options take ({@link Words}):
+     * empty when a field holds a word that is not one of them (the page offers only those).
+     */
+    private Optional<ReadOptions> readOptions(MultiPartFormData.Parts parts) {
+        ReadOptions options = ReadOptions.defaults().withMaxInputBytes(settings.maxUploadBytes());
+        String order = field(parts, "dateorder");
+        String mark = field(parts, "decimal");
+        String aggregate = field(parts, "aggregate");
+        String by = field(parts, "aggregateby");
+        String sheet = field(parts, "sheet");
+        if (!order.isEmpty()) {
+            Optional<DateOrder> o = Words.DATE_ORDER.valueOf(order);
+            if (o.isEmpty()) {
+                return Optional.empty();
+            }
+            options = options.withDateOrder(o.get());
+        }
+        if (!mark.isEmpty() && !Words.DECIMAL_MARK.isAuto(mark)) {
+            Optional<DecimalMark> m = Words.DECIMAL_MARK.valueOf(mark);
+            if (m.isEmpty()) {
+                return Optional.empty();
+            }
+            options = options.withDecimalMark(m.get());
+        }
+        if (!aggregate.isEmpty()) {
+            Optional<Frequency> to = Words.AGGREGATE.valueOf(aggregate);
+            Optional<Aggregation.Method> method = by.isEmpty() ? Optional.of(Aggregation.Method.SUM)
+                    : Words.AGGREGATE_BY.valueOf(by);
+            if (to.isEmpty() || method.isEmpty()) {
+                return Optional.empty();
+            }
+            options = options.withAggregation(new Aggregation(to.get(), method.get()));
+        }
+        if (!sheet.isEmpty()) {
+            options = options.withSheet(sheet);
+        }
+        return Optional.of(options);
+    }
+
+    private static String field(MultiPartFormData.Parts parts, String name) {
+        MultiPart.Part part = parts.getFirst(name);
+        String value = part == null ? "" : part.getContentAsString(StandardCharsets.UTF_8).strip();
+        return value.length() > 100 ? value.substring(0, 100) : value;
     }
 
     private static boolean tooLarge(Throwable cause) {
