@@ -88,7 +88,9 @@ final class RoutinePages {
             BriefSpec spec = SpecReader.read(file.get());
             for (BriefSpec.Entry entry : spec.briefs()) {
                 var job = entry.job();
-                String output = job.brief().map(b -> b.file() instanceof OutputName.Pattern pattern ? pattern.pattern()
+                // the file name only: a run writes into the session's folder, wherever the spec points
+                String output = job.brief().map(b -> b.file() instanceof OutputName.Pattern pattern
+                        ? pattern.pattern().substring(pattern.pattern().replace('\\', '/').lastIndexOf('/') + 1)
                         : b.file() instanceof OutputName.AsGiven given ? given.path().getFileName().toString() : "")
                         .orElse("");
                 entries.add(new EntryView(entry.line(), job.input().file().getFileName().toString(),
