@@ -2,7 +2,6 @@ package org.annalist.serve;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
 import java.util.List;
@@ -256,7 +255,4 @@ final class Routes {
         }
     }
 
-    static UncheckedIOException unchecked(IOException e) {
-        return new UncheckedIOException(e);
-    }
 }

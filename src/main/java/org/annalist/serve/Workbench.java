@@ -1,7 +1,6 @@
 package org.annalist.serve;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.net.Inet6Address;
 import java.net.InetAddress;
 import java.util.LinkedHashSet;
@@ -168,7 +167,4 @@ public final class Workbench implements AutoCloseable {
         }
     }
 
-    static UncheckedIOException unchecked(IOException e) {
-        return new UncheckedIOException(e);
-    }
 }
