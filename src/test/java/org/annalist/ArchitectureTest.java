@@ -42,7 +42,10 @@ class ArchitectureTest {
             "brief", Set.of("series", "ingest", "findings", "chart", "narrative", "render"),
             // commands run every job through brief; they name the value types the job is made of and
             // the problems they turn into exit codes, but call no analysis, chart or renderer
-            "cli", Set.of("brief", "series", "ingest", "findings", "narrative"));
+            "cli", Set.of("brief", "series", "ingest", "findings", "narrative", "serve"),
+            // the browser workbench runs jobs through brief like a command; it shows the brief's
+            // pages through render (PageImages) and words its pages in narrative's templates
+            "serve", Set.of("brief", "series", "ingest", "findings", "narrative", "render"));
 
     /** Where a stage may use only some classes of another: render draws the chart's figures, nothing else of it. */
     static final Map<String, Map<String, Set<String>>> ONLY = Map.of(
@@ -68,6 +71,10 @@ class ArchitectureTest {
             "org.apache.pdfbox", Set.of("render"),
             "picocli", Set.of("cli"),
             "me.tongfei", Set.of("cli")));
+
+    static {
+        LIBRARIES.put("org.eclipse.jetty", Set.of("serve"));
+    }
 
     @Test
     void everyUseGoesForwardInThePipeline() {

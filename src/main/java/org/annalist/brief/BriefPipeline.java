@@ -2,11 +2,17 @@ package org.annalist.brief;
 
 import java.nio.file.Path;
 import java.time.Instant;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.stream.IntStream;
 import org.annalist.series.Holiday;
+import org.annalist.chart.Figure;
+import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Findings;
+import org.annalist.render.SvgCharts;
 import org.annalist.ingest.DataProblemException;
 import org.annalist.ingest.SeriesKeys;
 import org.annalist.series.Series;
@@ -136,6 +142,55 @@ public final class BriefPipeline {
         }
         return made;
     }
+
+    /**
+     * The brief of the job's one series as a screen shows it (the browser workbench): the
+     * template's XHTML, each chart as SVG by the id the page places it with, what was found, and
+     * the warnings. Nothing is written; the file is read once for the pipeline's {@link SeriesFiles}.
+     *
+     * @param charts SVG documents by figure id ({@code overview}, {@code profile}, …), in the page's order
+     */
+    public record Preview(String xhtml, Map<String, String> charts, Series series, Findings findings,
+                          List<String> warnings) {
+        public Preview {
+            charts = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(charts));
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /**
+     * The preview of the brief the job describes, of its first selected series.
+     *
+     * @throws DataProblemException when the data or holiday file cannot be used
+     * @throws SelectionProblem     when the series cannot be selected as asked
+     */
+    public Preview preview(Job job) {
+        BriefOutput output = job.requireBrief();
+        List<Holiday> holidays = holidays(job);
+        SeriesFiles.ReadFile file = files.read(job.input());
+        SeriesSelection.Selected selected = SeriesSelection.select(job, file,
+                SeriesSelection.wanted(job.series(), file).get(0), true);
+        Series series = selected.series();
+        Findings findings = analyse(job, selected, holidays);
+        List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));
+        List<String> seriesWarnings = ReadingWarnings.ofSeries(series, findings, job.analysis().holidays(), holidays);
+        warnings.addAll(seriesWarnings);
+        BriefWriter.Page page = new BriefWriter.Page(job.input(), file.read(), output.masthead(),
+                output.titleFor(job.series(), series), GenerationTime.orDefault(output.masthead().generatedAt()),
+                singleOutput(output, selected), seriesWarnings);
+        BriefWriter.Draft draft = writer.draft(page, series, findings);
+        warnings.addAll(draft.warnings());
+        Map<String, String> charts = new LinkedHashMap<>();
+        for (Figure figure : draft.figures()) {
+            charts.put(figure.id(), new String(SvgCharts.svg(figure, figure.kind() == FigurePlan.Chart.OVERVIEW
+                    ? PREVIEW_CHART_HEIGHT : PREVIEW_SMALL_CHART_HEIGHT), StandardCharsets.UTF_8));
+        }
+        return new Preview(draft.xhtml().xhtml(), charts, series, findings, warnings);
+    }
+
+    /** The brief's chart heights (70 mm, 56 mm) at 96 px per inch. */
+    private static final int PREVIEW_CHART_HEIGHT = 265;
+    private static final int PREVIEW_SMALL_CHART_HEIGHT = 212;
 
     /** The holidays the job's analysis estimates, read from its holiday file (none without one). */
     List<Holiday> holidays(Job job) {

@@ -75,8 +75,27 @@ final class BriefWriter {
 
     private final PdfRenderer renderer = new PdfRenderer();
 
+    /**
+     * The brief of one series before it is laid out in pages: its template's XHTML and the charts it
+     * places (the browser workbench shows these; {@link #single} prints them).
+     */
+    record Draft(RenderedTemplate xhtml, List<Figure> figures, List<String> warnings) {
+        Draft {
+            figures = List.copyOf(figures);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
     /** Writes the brief of one series, as analysed into {@code findings}. */
     Brief single(Page page, Series series, Findings findings) {
+        Draft draft = draft(page, series, findings);
+        byte[] pdf = render(draft.xhtml(), page, draft.figures(), documentId(page.read().sha256(), series.name()));
+        write(page, pdf);
+        return new Brief(page.output(), series.name(), findings, draft.warnings(), draft.figures());
+    }
+
+    /** The brief of one series as its template words it, with its charts, not yet printed. */
+    Draft draft(Page page, Series series, Findings findings) {
         Fonts.registerWithAwt();
         Masthead masthead = masthead(page);
         SourceFacts source = sourceFacts(page.read(), page.notes());
@@ -91,10 +110,7 @@ final class BriefWriter {
         BriefView view = BriefViews.of(series, findings, plan, source, masthead);
         RenderedTemplate xhtml = new TemplateEngine(page.choices().templates())
                 .renderTraced(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
-        List<Figure> figures = figures(series, findings, plan);
-        byte[] pdf = render(xhtml, page, figures, documentId(page.read().sha256(), series.name()));
-        write(page, pdf);
-        return new Brief(page.output(), series.name(), findings, List.copyOf(warnings), figures);
+        return new Draft(xhtml, figures(series, findings, plan), warnings);
     }
 
     /**

@@ -1,0 +1,176 @@
+package org.annalist.serve;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.net.InetAddress;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.annalist.cli.Main;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The workbench over plain HTTP: the brief it serves is the command line's to the byte, and each
+ * safety rule holds (foreign Host, missing or wrong token, foreign Origin, oversized upload, names
+ * that try to leave their folder in every parameter that takes one).
+ */
+class WorkbenchHttpTest {
+
+    private static final String SECRET = "SECRET-OUTSIDE-THE-SERVED-FOLDER";
+    private static final Path DEMO = Path.of("demo-data/quennelmark-guest-nights.csv").toAbsolutePath();
+    private static final String TIME = "2026-11-20T08:00:00Z";
+    /** Small enough to test, larger than the demo file (6 kB). */
+    private static final long LIMIT = 64 * 1024;
+
+    @TempDir
+    static Path temp;
+
+    private static Workbench workbench;
+    private static RawHttp http;
+    private static String cookie;
+    private static String token;
+
+    @BeforeAll
+    static void start() throws IOException {
+        Path served = Files.createDirectories(temp.resolve("served"));
+        Files.copy(DEMO, served.resolve(DEMO.getFileName()));
+        Files.writeString(served.resolve("routine.yaml"), "briefs:\n  - data: " + DEMO.getFileName() + "\n    series: Brevania\n"
+                + "    output: market-{series}-{period}.pdf\n    generated_at: " + TIME + "\n");
+        Path outside = Files.createDirectories(temp.resolve("outside"));
+        Files.writeString(outside.resolve("secret.yaml"), "# " + SECRET + "\nbriefs: []\n");
+        Files.writeString(outside.resolve("secret.txt"), SECRET);
+        Files.createSymbolicLink(served.resolve("linked.yaml"), outside.resolve("secret.yaml"));
+        workbench = Workbench.start(new Settings(InetAddress.getLoopbackAddress(), 0, served, LIMIT,
+                Optional.of(Instant.parse(TIME)), Duration.ofHours(1)));
+        http = new RawHttp(workbench.port());
+        RawHttp.Answer home = http.get("/", null);
+        cookie = home.session().orElseThrow();
+        token = home.token();
+    }
+
+    @AfterAll
+    static void stop() {
+        workbench.close();
+    }
+
+    @Test
+    void theServedPdfIsByteIdenticalToTheCommandLines() throws IOException {
+        byte[] csv = Files.readAllBytes(DEMO);
+        RawHttp.Answer opened = http.upload(cookie, token, DEMO.getFileName().toString(), csv);
+        assertThat(opened.status()).isEqualTo(303);
+        String file = opened.header("location").orElseThrow().replaceFirst(".*/file/", "");
+        RawHttp.Answer made = http.postForm("/file/" + file + "/series/0/brief", cookie, "token=" + token);
+        assertThat(made.status()).isEqualTo(303);
+        String brief = made.header("location").orElseThrow().replaceFirst(".*/brief/", "");
+        RawHttp.Answer page = http.get("/brief/" + brief, cookie);
+        Matcher pdfLink = Pattern.compile("href=\"(/brief/" + brief + "/file/[^\"]+\\.pdf)\"").matcher(page.text());
+        assertThat(pdfLink.find()).as(page.text()).isTrue();
+        byte[] served = http.get(pdfLink.group(1), cookie).body();
+
+        // the command line on a file of the same name (the brief names the file, not its folder)
+        Path copy = Files.createDirectories(temp.resolve("cli")).resolve(DEMO.getFileName());
+        Files.copy(DEMO, copy);
+        Path out = temp.resolve("cli/total.pdf");
+        StringWriter err = new StringWriter();
+        int code = Main.run(new String[] {"brief", copy.toString(), "--series", "Total", "-o", out.toString(),
+            "--generated-at", TIME}, new PrintWriter(new StringWriter(), true), new PrintWriter(err, true));
+        assertThat(code).as(err.toString()).isZero();
+        assertThat(served).startsWith("%PDF".getBytes(StandardCharsets.US_ASCII)).isEqualTo(Files.readAllBytes(out));
+    }
+
+    @Test
+    void aForeignHostHeaderIsRefusedBeforeAnythingElse() throws IOException {
+        for (String host : List.of("rebound.example:" + workbench.port(), "127.0.0.1:1", "127.0.0.1", "localhost.example")) {
+            RawHttp.Answer answer = http.send("GET", "/", host, null, Map.of(), new byte[0]);
+            assertThat(answer.status()).as(host).isEqualTo(403);
+            assertThat(answer.session()).as("no session for " + host).isEmpty();
+        }
+        assertThat(http.send("GET", "/", null, null, Map.of(), new byte[0]).status()).isIn(400, 403);
+        assertThat(http.send("GET", "/", "localhost:" + workbench.port(), null, Map.of(), new byte[0]).status())
+                .isEqualTo(200);
+    }
+
+    @Test
+    void aStateChangingRequestWithoutTheTokenIsRefused() throws IOException {
+        String[] posts = {"/end", "/routine/run", "/file/f1/close"};
+        for (String target : posts) {
+            assertThat(http.postForm(target, cookie, "name=routine.yaml").status()).as(target).isEqualTo(403);
+            assertThat(http.postForm(target, cookie, "name=routine.yaml&token=0000").status()).as(target).isEqualTo(403);
+            assertThat(http.postForm(target, null, "name=routine.yaml&token=" + token).status()).as(target)
+                    .isEqualTo(403);
+        }
+        assertThat(http.upload(cookie, null, "a.csv", "period,value\n2024-01,1\n".getBytes(StandardCharsets.UTF_8))
+                .status()).isEqualTo(403);
+        assertThat(http.upload(cookie, "0123", "a.csv", "period,value\n2024-01,1\n".getBytes(StandardCharsets.UTF_8))
+                .status()).isEqualTo(403);
+        // a page of another site that holds the token still names itself in Origin
+        RawHttp.Answer foreign = http.send("POST", "/routine/run", http.host(), cookie,
+                Map.of("Content-Type", "application/x-www-form-urlencoded", "Origin", "http://elsewhere.example"),
+                ("name=routine.yaml&token=" + token).getBytes(StandardCharsets.UTF_8));
+        assertThat(foreign.status()).isEqualTo(403);
+        // the session is still there: none of these ended it
+        assertThat(http.get("/", cookie).session()).isEmpty();
+    }
+
+    @Test
+    void anOversizedUploadIsRefusedAndSaidSo() throws IOException {
+        byte[] big = new byte[(int) LIMIT * 3];
+        java.util.Arrays.fill(big, (byte) '1');
+        RawHttp.Answer answer = http.upload(cookie, token, "big.csv", big);
+        assertThat(answer.status()).isEqualTo(413);
+        assertThat(answer.text()).contains("too large").contains("up to 0 MB".equals("") ? "" : "MB");
+        assertThat(http.get("/", cookie).text()).contains("up to").doesNotContain("big.csv");
+    }
+
+    @Test
+    void noNameFromTheBrowserLeavesItsFolder() throws IOException {
+        List<String> names = List.of("../outside/secret.yaml", "..%2Foutside%2Fsecret.yaml", "%2E%2E/outside/secret.yaml",
+                temp.resolve("outside/secret.yaml").toString(), "linked.yaml", "./routine.yaml/../../outside/secret.yaml",
+                "..\\outside\\secret.yaml", "routine.yaml%00.txt");
+        for (String name : names) {
+            String encoded = java.net.URLEncoder.encode(name, StandardCharsets.UTF_8);
+            RawHttp.Answer spec = http.get("/routine/spec?name=" + encoded, cookie);
+            assertThat(spec.status()).as(name).isEqualTo(404);
+            assertThat(spec.text()).doesNotContain(SECRET);
+            RawHttp.Answer run = http.postForm("/routine/run", cookie, "token=" + token + "&name=" + encoded);
+            assertThat(run.status()).as(name).isEqualTo(404);
+        }
+        assertThat(http.get("/routine", cookie).text()).contains("routine.yaml").doesNotContain("linked.yaml");
+        assertThat(http.get("/routine/spec?name=routine.yaml", cookie).status()).isEqualTo(200);
+        List<String> targets = List.of("/brief/b1/file/..%2F..%2F..%2Foutside%2Fsecret.txt",
+                "/brief/b1/file/%2E%2E%2Fsecret.txt", "/brief/b1/page/..%2F1.png", "/run/r1/file/..%2Fsecret.txt",
+                "/file/..%2Ff1", "/file/f1/series/..%2F0", "/static/..%2Fhome.ftlh", "/static/..%2F..%2Fjetty-logging.properties",
+                "/" + temp.resolve("outside/secret.txt"), "/routine/spec/..%2F..%2Fsecret.txt");
+        for (String target : targets) {
+            RawHttp.Answer answer = http.get(target, cookie);
+            assertThat(answer.status()).as(target).isIn(400, 404);
+            assertThat(answer.text()).as(target).doesNotContain(SECRET);
+        }
+        RawHttp.Answer raw = http.send("GET", "/static/../../../outside/secret.txt", http.host(), cookie, Map.of(),
+                new byte[0]);
+        assertThat(raw.status()).isIn(400, 404);
+        assertThat(raw.text()).doesNotContain(SECRET);
+    }
+
+    @Test
+    void everyPageCarriesTheTokenAndForbidsOtherSitesScripts() throws IOException {
+        RawHttp.Answer home = http.get("/", cookie);
+        assertThat(home.token()).isEqualTo(token);
+        assertThat(home.header("content-security-policy").orElseThrow()).contains("default-src 'none'")
+                .contains("frame-ancestors 'self'");
+        assertThat(home.header("x-content-type-options")).contains("nosniff");
+    }
+}
