@@ -171,7 +171,7 @@ public final class BriefPipeline {
         SeriesSelection.Selected selected = SeriesSelection.select(job, file,
                 SeriesSelection.wanted(job.series(), file).get(0), true);
         Series series = selected.series();
-        Findings findings = analyse(job, selected, holidays);
+        Findings findings = analyse(job, selected, file.read().keys(), holidays);
         List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));
         List<String> seriesWarnings = ReadingWarnings.ofSeries(series, findings, job.analysis().holidays(), holidays);
         warnings.addAll(seriesWarnings);
