@@ -61,7 +61,7 @@ final class AppendixViews {
                     + "; intervals analytic or from 2,000 simulated paths"
                     + (o.intervalsWidened() ? ", widened where narrower than the back-test's errors (empirical"
                     + " intervals, Williams & Goodman 1971)" : "")
-                    + (o.intervalsNarrowed() ? (o.intervalsWidened() ? "; " : ", ") + "the 80 % intervals narrowed"
+                    + (o.intervalsNarrowed() ? (o.intervalsWidened() ? "; " : ", ") + "the 80\u00A0% intervals narrowed"
                     + " where wider than 100 or more of the back-test's errors support" : "")
                     + "; year totals and their intervals from the simulated paths"));
         }
