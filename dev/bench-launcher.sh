@@ -82,7 +82,7 @@ if [[ " $figures " == *" warm "* ]]; then
         "$(stats $(java -cp "$cp" org.annalist.cli.Benchmark --warm-brief))"
     # shellcheck disable=SC2046
     printf '%-40s %s\n' "                new: the launcher's settings" \
-        "$(stats $(java -Xmx640m -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -cp "$cp" org.annalist.cli.Benchmark --warm-brief))"
+        "$(stats $(java -Xmx640m -Xms64m -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -cp "$cp" org.annalist.cli.Benchmark --warm-brief))"
 fi
 
 if [[ " $figures " == *" batch "* ]]; then

@@ -7,7 +7,9 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 import org.annalist.chart.Captions;
 import org.annalist.chart.Figure;
 import org.annalist.chart.IrregularChart;
@@ -75,6 +77,13 @@ final class BriefWriter {
 
     private final PdfRenderer renderer = new PdfRenderer();
 
+    /**
+     * One template engine per template folder (the bundled templates: empty), kept for the writer's
+     * life, so that a batch or the demo parses each template once rather than once a brief
+     * (FreeMarker keeps what it parsed; its templates may be filled on several threads at once).
+     */
+    private final Map<Optional<Path>, TemplateEngine> engines = new ConcurrentHashMap<>();
+
     /** Writes the brief of one series, as analysed into {@code findings}. */
     Brief single(Page page, Series series, Findings findings) {
         Fonts.registerWithAwt();
@@ -89,8 +98,7 @@ final class BriefWriter {
         }
         FigurePlan plan = FigurePlan.of(series, findings);
         BriefView view = BriefViews.of(series, findings, plan, source, masthead);
-        RenderedTemplate xhtml = new TemplateEngine(page.choices().templates())
-                .renderTraced(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
+        RenderedTemplate xhtml = engine(page).renderTraced(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
         List<Figure> figures = figures(series, findings, plan);
         byte[] pdf = render(xhtml, page, figures, documentId(page.read().sha256(), series.name()));
         write(page, pdf);
@@ -109,8 +117,7 @@ final class BriefWriter {
                 .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
         MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read(), page.notes()), masthead, check,
                 choices.sortBy());
-        RenderedTemplate xhtml = new TemplateEngine(page.choices().templates())
-                .renderTraced(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
+        RenderedTemplate xhtml = engine(page).renderTraced(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
         Figure multiples = SmallMultiplesChart.of(series, findings);
         List<Figure> overviews = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
@@ -123,6 +130,10 @@ final class BriefWriter {
                 documentId(page.read().sha256(), String.join("|", series.stream().map(Series::name).toList())));
         write(page, pdf);
         return new CombinedBrief(page.output(), findings, check, multiples, List.copyOf(overviews));
+    }
+
+    private TemplateEngine engine(Page page) {
+        return engines.computeIfAbsent(page.choices().templates(), TemplateEngine::new);
     }
 
     /**
