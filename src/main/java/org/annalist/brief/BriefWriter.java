@@ -78,11 +78,14 @@ final class BriefWriter {
     private final PdfRenderer renderer = new PdfRenderer();
 
     /**
-     * One template engine per template folder (the bundled templates: empty), kept for the writer's
-     * life, so that a batch or the demo parses each template once rather than once a brief
-     * (FreeMarker keeps what it parsed; its templates may be filled on several threads at once).
+     * The bundled templates' engine, kept for the JVM's life, so that a batch, the demo or a
+     * long-running process parses each template once rather than once a brief (FreeMarker keeps
+     * what it parsed; its templates may be filled on several threads at once).
      */
-    private final Map<Optional<Path>, TemplateEngine> engines = new ConcurrentHashMap<>();
+    private static final TemplateEngine BUNDLED = new TemplateEngine(Optional.empty());
+
+    /** A user's template folders' engines, kept for this writer's life (a batch): each folder parsed once. */
+    private final Map<Path, TemplateEngine> engines = new ConcurrentHashMap<>();
 
     /** Writes the brief of one series, as analysed into {@code findings}. */
     Brief single(Page page, Series series, Findings findings) {
@@ -133,7 +136,9 @@ final class BriefWriter {
     }
 
     private TemplateEngine engine(Page page) {
-        return engines.computeIfAbsent(page.choices().templates(), TemplateEngine::new);
+        return page.choices().templates()
+                .map(folder -> engines.computeIfAbsent(folder, f -> new TemplateEngine(Optional.of(f))))
+                .orElse(BUNDLED);
     }
 
     /**
