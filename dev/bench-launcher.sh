@@ -74,15 +74,19 @@ if [[ " $figures " == *" startup "* ]]; then
 fi
 
 if [[ " $figures " == *" warm "* ]]; then
-    # a warm brief: the same brief again and again in one running JVM (test classes' Benchmark)
-    printf '\n%-40s %s\n' "brief, warm in a running JVM (5 rounds)" "ms per brief min/med/max"
+    # a warm brief: the same brief again and again in one running JVM (test classes' Benchmark),
+    # which prints the wall ms per brief of 5 rounds, then the process's CPU ms per brief
+    printf '\n%-40s %-21s %s\n' "brief, warm in a running JVM (5 rounds)" "wall ms min/med/max" "CPU ms min/med/max"
     cp="$jar:target/test-classes"
-    # shellcheck disable=SC2046
-    printf '%-40s %s\n' "                old: default JVM settings" \
-        "$(stats $(java -cp "$cp" org.annalist.cli.Benchmark --warm-brief))"
-    # shellcheck disable=SC2046
-    printf '%-40s %s\n' "                new: the launcher's settings" \
-        "$(stats $(java -Xmx640m -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -cp "$cp" org.annalist.cli.Benchmark --warm-brief))"
+    warm() {   # warm LABEL JAVA-FLAGS...
+        local label=$1 out
+        shift
+        out=$(java "$@" -cp "$cp" org.annalist.cli.Benchmark --warm-brief)
+        # shellcheck disable=SC2046
+        printf '%-40s %-21s %s\n' "$label" "$(stats $(echo "$out" | sed -n 1p))" "$(stats $(echo "$out" | sed -n 2p))"
+    }
+    warm "                old: default JVM settings"
+    warm "                new: the launcher's settings" -Xmx640m -Xms64m -XX:+UseSerialGC -XX:TieredStopAtLevel=1
 fi
 
 if [[ " $figures " == *" batch "* ]]; then

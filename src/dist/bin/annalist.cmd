@@ -26,8 +26,9 @@ goto installHint
 
 :checkVersion
 set "JAVA_VERSION="
-rem exactly two quotes in the command, around the program: cmd keeps them (a path with spaces)
-for /f "tokens=3" %%v in ('"%JAVA_EXE%" -version 2^>^&1 ^| findstr /i version') do if not defined JAVA_VERSION set "JAVA_VERSION=%%~v"
+rem 'call' first: cmd /c strips the first and last quote of a command that starts with one and holds
+rem a parenthesis or more than two quotes (C:\Program Files (x86)\...); after 'call' it keeps them
+for /f "tokens=3" %%v in ('call "%JAVA_EXE%" -version 2^>^&1 ^| findstr /i version') do if not defined JAVA_VERSION set "JAVA_VERSION=%%~v"
 set "JAVA_MAJOR="
 for /f "tokens=1,2 delims=." %%a in ("%JAVA_VERSION%") do (
     if "%%a"=="1" (set "JAVA_MAJOR=%%b") else (set "JAVA_MAJOR=%%a")
@@ -46,6 +47,6 @@ exit /b 2
 :run
 set "ANNALIST_DEFAULTS=-XX:TieredStopAtLevel=1 -XX:-UsePerfData -Xshare:auto -Xlog:cds*=off"
 echo %ANNALIST_JAVA_OPTS% | findstr /r /c:"-XX:+Use[A-Za-z]*GC" >nul || set "ANNALIST_DEFAULTS=-XX:+UseSerialGC %ANNALIST_DEFAULTS%"
-echo %ANNALIST_JAVA_OPTS% | findstr /c:"-Xmx" /c:"MaxHeapSize" /c:"MaxRAM" >nul || set "ANNALIST_DEFAULTS=-Xmx640m %ANNALIST_DEFAULTS%"
+echo %ANNALIST_JAVA_OPTS% | findstr /c:"-Xmx" /c:"MaxHeapSize" /c:"MaxRAM" >nul || set "ANNALIST_DEFAULTS=-Xmx640m -Xms64m %ANNALIST_DEFAULTS%"
 "%JAVA_EXE%" %ANNALIST_DEFAULTS% "-Dannalist.home=%ANNALIST_HOME%" %ANNALIST_JAVA_OPTS% -cp "%ANNALIST_HOME%\lib\annalist.jar" org.annalist.cli.Main %*
 exit /b %ERRORLEVEL%

@@ -23,17 +23,17 @@ import org.w3c.dom.NodeList;
  * tests) from each library's own POM, parent POMs included (license-maven-plugin, configured in
  * {@code pom.xml}); a dependency whose POM names a GPL licence, or none we know, fails here.
  */
-class LicencesTest {
+public class LicencesTest {
 
     /** What the build wrote and the jar bundles (process-resources copies it here before the tests). */
-    static final Path THIRD_PARTY = Path.of("target/classes/META-INF/THIRD-PARTY");
+    public static final Path THIRD_PARTY = Path.of("target/classes/META-INF/THIRD-PARTY");
 
     /** One line of the file: {@code (LICENCE) (LICENCE) Name (group:artifact:version - url)}. */
     private static final Pattern LINE = Pattern.compile("^\\s*((?:\\([^()]*(?:\\([^()]*\\)[^()]*)*\\)\\s*)+)(.*) \\(([^:\\s]+:[^:\\s]+:[^\\s]+) - .*\\)$");
     private static final Pattern LICENCE = Pattern.compile("\\(((?:[^()]|\\([^()]*\\))*)\\)");
 
     /** The allowed families, by the names POMs give them (their SPDX ids, or their titles in words). */
-    enum Family {
+    public enum Family {
         APACHE_2("apache-2\\.0|(the )?apache (software )?licen[cs]e,? (version )?2(\\.0)?|asl 2\\.0|apache 2(\\.0)?"),
         MIT("mit( licen[cs]e)?|the mit licen[cs]e"),
         BSD("(the )?(new |revised |simplified )?bsd( licen[cs]e)?|bsd-[23]-clause( licen[cs]e)?|bsd [23]-clause( licen[cs]e)?"
@@ -50,7 +50,7 @@ class LicencesTest {
         }
 
         /** The family a licence name belongs to; empty for any other licence (GPL, AGPL, CDDL, none we know). */
-        static Optional<Family> of(String licence) {
+        public static Optional<Family> of(String licence) {
             String name = licence.trim().toLowerCase(Locale.ROOT);
             for (Family family : values()) {
                 if (family.names.matcher(name).matches()) {
@@ -62,7 +62,7 @@ class LicencesTest {
     }
 
     /** A bundled library and the licences its POM offers (any one of them may be chosen). */
-    record Library(String coordinates, String name, List<String> licences) {
+    public record Library(String coordinates, String name, List<String> licences) {
 
         boolean allowed() {
             return licences.stream().anyMatch(l -> Family.of(l).isPresent());
@@ -74,7 +74,7 @@ class LicencesTest {
         }
     }
 
-    static List<Library> libraries(List<String> lines) {
+    public static List<Library> libraries(List<String> lines) {
         List<Library> libraries = new ArrayList<>();
         for (String line : lines) {
             Matcher m = LINE.matcher(line);

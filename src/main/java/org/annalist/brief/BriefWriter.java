@@ -7,7 +7,9 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 import org.annalist.chart.Captions;
 import org.annalist.chart.Figure;
 import org.annalist.chart.IrregularChart;
@@ -76,6 +78,16 @@ final class BriefWriter {
     private final PdfRenderer renderer = new PdfRenderer();
 
     /**
+     * The bundled templates' engine, kept for the JVM's life, so that a batch, the demo or a
+     * long-running process parses each template once rather than once a brief (FreeMarker keeps
+     * what it parsed; its templates may be filled on several threads at once).
+     */
+    private static final TemplateEngine BUNDLED = new TemplateEngine(Optional.empty());
+
+    /** A user's template folders' engines, kept for this writer's life (a batch): each folder parsed once. */
+    private final Map<Path, TemplateEngine> engines = new ConcurrentHashMap<>();
+
+    /**
      * The brief of one series before it is laid out in pages: its template's XHTML and the charts it
      * places (the browser workbench shows these; {@link #single} prints them).
      */
@@ -108,8 +120,7 @@ final class BriefWriter {
         }
         FigurePlan plan = FigurePlan.of(series, findings);
         BriefView view = BriefViews.of(series, findings, plan, source, masthead);
-        RenderedTemplate xhtml = new TemplateEngine(page.choices().templates())
-                .renderTraced(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
+        RenderedTemplate xhtml = engine(page).renderTraced(TemplateEngine.BRIEF_TEMPLATE, view, masthead.language());
         return new Draft(xhtml, figures(series, findings, plan), warnings);
     }
 
@@ -125,8 +136,7 @@ final class BriefWriter {
                 .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
         MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read(), page.notes()), masthead, check,
                 choices.sortBy());
-        RenderedTemplate xhtml = new TemplateEngine(page.choices().templates())
-                .renderTraced(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
+        RenderedTemplate xhtml = engine(page).renderTraced(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
         Figure multiples = SmallMultiplesChart.of(series, findings);
         List<Figure> overviews = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
@@ -139,6 +149,12 @@ final class BriefWriter {
                 documentId(page.read().sha256(), String.join("|", series.stream().map(Series::name).toList())));
         write(page, pdf);
         return new CombinedBrief(page.output(), findings, check, multiples, List.copyOf(overviews));
+    }
+
+    private TemplateEngine engine(Page page) {
+        return page.choices().templates()
+                .map(folder -> engines.computeIfAbsent(folder, f -> new TemplateEngine(Optional.of(f))))
+                .orElse(BUNDLED);
     }
 
     /**

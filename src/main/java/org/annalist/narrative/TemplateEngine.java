@@ -69,6 +69,9 @@ public final class TemplateEngine {
         this.limits = limits;
         configuration = new InterruptibleConfiguration();
         configuration.setTemplateLoader(loader(userTemplates));
+        // an engine is kept for many briefs (a batch): a user's template edited meanwhile is read
+        // again (the bundled ones cannot change while the JVM runs)
+        userTemplates.ifPresent(folder -> configuration.setTemplateUpdateDelayMilliseconds(0));
         configuration.setDefaultEncoding("UTF-8");
         configuration.setLocale(Locale.ENGLISH);
         configuration.setTemplateExceptionHandler(TemplateExceptionHandler.RETHROW_HANDLER);

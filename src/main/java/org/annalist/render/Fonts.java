@@ -5,6 +5,7 @@ import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
 import java.awt.Font;
 import java.awt.FontFormatException;
 import java.awt.GraphicsEnvironment;
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -30,6 +31,12 @@ public final class Fonts {
 
     private static boolean registeredWithAwt;
 
+    /**
+     * Each face's file, read from the jar once per JVM (2 MB for the three) rather than inflated
+     * again for every brief of a batch; the layout engine parses and subsets it per document.
+     */
+    private static final byte[][] FILES = new byte[FACES.length][];
+
     private Fonts() {
     }
 
@@ -39,11 +46,11 @@ public final class Fonts {
             return;
         }
         GraphicsEnvironment environment = GraphicsEnvironment.getLocalGraphicsEnvironment();
-        for (Face face : FACES) {
-            try (InputStream in = open(face.resource())) {
+        for (int i = 0; i < FACES.length; i++) {
+            try (InputStream in = new ByteArrayInputStream(file(i))) {
                 environment.registerFont(Font.createFont(Font.TRUETYPE_FONT, in));
             } catch (IOException | FontFormatException e) {
-                throw new IllegalStateException("bundled font " + face.resource() + " cannot be loaded", e);
+                throw new IllegalStateException("bundled font " + FACES[i].resource() + " cannot be loaded", e);
             }
         }
         registeredWithAwt = true;
@@ -60,8 +67,28 @@ public final class Fonts {
     }
 
     static void registerWith(PdfRendererBuilder builder) {
-        for (Face face : FACES) {
-            builder.useFont(() -> open(face.resource()), Figure.FONT_FAMILY, face.weight(), face.style(), true);
+        for (int i = 0; i < FACES.length; i++) {
+            Face face = FACES[i];
+            int index = i;
+            builder.useFont(() -> new ByteArrayInputStream(file(index)), Figure.FONT_FAMILY, face.weight(), face.style(), true);
+        }
+    }
+
+    /** The regular face's file (for {@link BundledFontMapper}). */
+    static byte[] regularFile() {
+        return file(0);
+    }
+
+    private static byte[] file(int face) {
+        synchronized (FILES) {
+            if (FILES[face] == null) {
+                try (InputStream in = open(FACES[face].resource())) {
+                    FILES[face] = in.readAllBytes();
+                } catch (IOException e) {
+                    throw new UncheckedIOException("bundled font " + FACES[face].resource() + " cannot be read", e);
+                }
+            }
+            return FILES[face];
         }
     }
 

@@ -32,6 +32,7 @@ import java.awt.color.ICC_Profile;
 import java.nio.charset.StandardCharsets;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.common.PDMetadata;
+import org.apache.pdfbox.pdmodel.font.FontMappers;
 import org.apache.pdfbox.util.DateConverter;
 
 /**
@@ -71,6 +72,8 @@ public final class PdfRenderer {
     static {
         XRLog.setLoggingEnabled(false);   // openhtmltopdf logs every font load at INFO on stderr
         PDFBOX_LOG.setLevel(Level.SEVERE);
+        // the standard fonts the layout engine creates are answered without an index of the system's fonts
+        FontMappers.set(new BundledFontMapper());
     }
 
     /**
@@ -83,6 +86,9 @@ public final class PdfRenderer {
      *                                  than {@link #LAYOUT_LIMIT}
      */
     public byte[] render(String xhtml, Sandbox sandbox, List<Figure> figures, Instant createdAt, long documentId) {
+        // AWT's start-up, once per JVM, runs here rather than on the worker: a worker stopped past its
+        // time while AWT's classes initialise would leave them unusable for the rest of the JVM
+        Fonts.registerWithAwt();
         AtomicReference<byte[]> pdf = new AtomicReference<>();
         AtomicReference<Throwable> failure = new AtomicReference<>();
         Thread worker = new Thread(() -> {

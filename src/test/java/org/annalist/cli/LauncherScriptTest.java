@@ -57,7 +57,7 @@ class LauncherScriptTest {
         int main = args.indexOf("org.annalist.cli.Main");
         assertThat(args.subList(main + 1, args.size()))
                 .containsExactly("brief", "my data.csv", "--title", "Nights \"high\" season", "*", "$HOME", "");
-        assertThat(args.subList(0, main)).contains("-XX:+UseSerialGC", "-Xmx640m", "-XX:TieredStopAtLevel=1",
+        assertThat(args.subList(0, main)).contains("-XX:+UseSerialGC", "-Xmx640m", "-Xms64m", "-XX:TieredStopAtLevel=1",
                 "-Xshare:auto", "-cp", home.toRealPath().resolve("lib/annalist.jar").toString());
     }
 
@@ -79,7 +79,8 @@ class LauncherScriptTest {
         Result run = run(Map.of("JAVA_HOME", java.toString(), "ANNALIST_JAVA_OPTS", "-XX:+UseG1GC -Xmx2g -Dx=1"),
                 temp, home.resolve("bin/annalist").toString(), "check", "f.csv");
         List<String> args = run.lines();
-        assertThat(args).doesNotContain("-XX:+UseSerialGC", "-Xmx640m").contains("-XX:+UseG1GC", "-Xmx2g", "-Dx=1");
+        // the starting size goes with the bound: a bound of the user's below it would be refused
+        assertThat(args).doesNotContain("-XX:+UseSerialGC", "-Xmx640m", "-Xms64m").contains("-XX:+UseG1GC", "-Xmx2g", "-Dx=1");
         assertThat(args.indexOf("-Dx=1")).isGreaterThan(args.indexOf("-XX:TieredStopAtLevel=1"));
     }
 
