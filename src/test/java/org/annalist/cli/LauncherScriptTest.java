@@ -122,6 +122,25 @@ class LauncherScriptTest {
         assertThat(run.stderr).isEmpty();
     }
 
+    /**
+     * A brief through the launcher writes its PDF and says nothing on standard error: no library's
+     * log lines reach the user (with SLF4J on the class path for the workbench's server, PDFBox's
+     * logging goes through it and once announced its font substitutions on every brief).
+     */
+    @Test
+    void aBriefThroughTheLauncherSaysNothingOnStandardError() throws Exception {
+        Path java = Path.of(System.getProperty("java.home"));
+        assumeTrue(Files.isReadable(java.resolve("release")), "the running Java has no release file");
+        manifestOnlyJar(home.resolve("lib/annalist.jar"));
+        Path data = Path.of("src/test/resources/reference/AirPassengers.csv").toAbsolutePath();
+        Path pdf = temp.resolve("air.pdf");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief",
+                data.toString(), "-o", pdf.toString(), "--generated-at", "2026-11-20T08:00:00Z");
+        assertThat(run.code).as(run.stderr).isZero();
+        assertThat(pdf).isRegularFile();
+        assertThat(run.stderr).isEmpty();
+    }
+
     /** A JDK folder whose bin/java prints its arguments one per line, and whose release file names {@code version}. */
     private Path fakeJava(String version) throws IOException {
         Path jdk = Files.createDirectories(temp.resolve("jdk " + version));
