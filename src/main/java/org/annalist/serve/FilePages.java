@@ -204,7 +204,7 @@ final class FilePages {
         try {
             BriefPipeline.Preview preview = session.pipeline().preview(job);
             model.put("draft", DraftFragment.of(preview));
-            model.put("warnings", shown(preview.warnings(), file));
+            model.put("warnings", preview.warnings());
         } catch (SelectionProblem problem) {
             model.put("problem", problem.reason().plainly());
             status = 422;
@@ -256,14 +256,8 @@ final class FilePages {
         }
         String title = chosen.title().isEmpty() ? series.name() : chosen.title();
         session.add(new MadeBrief(id, file.id(), index, title, folder, pdf, written, PageImages.pages(made.file()),
-                shown(made.warnings(), file)));
+                made.warnings()));
         ex.redirect("/brief/" + id);
-    }
-
-    /** Warnings name the file by the name the user gave it, not by the server's temporary folder. */
-    private static List<String> shown(List<String> warnings, OpenFile file) {
-        String stored = file.stored().toString();
-        return warnings.stream().map(w -> w.replace(stored, file.name())).toList();
     }
 
     void brief(Exchange ex, Session session, MadeBrief brief) {

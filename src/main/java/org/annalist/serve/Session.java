@@ -30,7 +30,7 @@ final class Session {
     private final String token;
     private final Path folder;
     /** Files read once per session; a new setting re-analyses the series already read. */
-    private final SeriesFiles read = new SeriesFiles();
+    private final SeriesFiles read = new SeriesFiles(this::shownAs);
     private final BriefPipeline pipeline = new BriefPipeline(read);
     private final Map<String, OpenFile> files = new LinkedHashMap<>();
     private final Map<String, MadeBrief> briefs = new LinkedHashMap<>();
@@ -66,6 +66,15 @@ final class Session {
 
     Path folder() {
         return folder;
+    }
+
+    /**
+     * How briefs and messages name a file: one of this session's (an upload, kept in a folder of its
+     * own under the name the user's file has) by that name alone, as the command line names a file
+     * of that name in the current folder; the server's temporary folder is never printed.
+     */
+    private String shownAs(Path file) {
+        return file.startsWith(folder) ? file.getFileName().toString() : file.toString();
     }
 
     BriefPipeline pipeline() {

@@ -92,6 +92,39 @@ class WorkbenchHttpTest {
     }
 
     @Test
+    void aBriefMadeInTheBrowserNamesTheFileAsTheUserCalledItNotByTheServersFolder() throws IOException {
+        // an invented note line below the data: the reader sets it aside with a warning naming file and line
+        String csv = Files.readString(DEMO) + "Source: Quennelmark statistics office\n";
+        int noteLine = Files.readAllLines(DEMO).size() + 1;
+        RawHttp.Answer opened = http.upload(cookie, token, "visitors.csv", csv.getBytes(StandardCharsets.UTF_8));
+        assertThat(opened.status()).isEqualTo(303);
+        String file = opened.header("location").orElseThrow().replaceFirst(".*/file/", "");
+        RawHttp.Answer made = http.postForm("/file/" + file + "/series/0/brief", cookie, "token=" + token);
+        String brief = made.header("location").orElseThrow().replaceFirst(".*/brief/", "");
+        String page = http.get("/brief/" + brief, cookie).text();
+        Matcher links = Pattern.compile("href=\"(/brief/" + brief + "/file/[^\"]+)\"").matcher(page);
+        String server = workbench.temporaryFolder().toString();
+        int files = 0;
+        while (links.find()) {
+            byte[] body = http.get(links.group(1), cookie).body();
+            String text = links.group(1).endsWith(".pdf") ? pdfText(body) : new String(body, StandardCharsets.UTF_8);
+            assertThat(text).as(links.group(1)).doesNotContain(server).doesNotContain("annalist-serve-");
+            if (links.group(1).endsWith(".pdf")) {
+                assertThat(text).contains("visitors.csv:" + noteLine + ": line set aside as a note");
+            }
+            files++;
+        }
+        assertThat(files).as(page).isGreaterThan(1);
+        assertThat(page).contains("visitors.csv:" + noteLine).doesNotContain(server);
+    }
+
+    private static String pdfText(byte[] pdf) throws IOException {
+        try (org.apache.pdfbox.pdmodel.PDDocument document = org.apache.pdfbox.Loader.loadPDF(pdf)) {
+            return new org.apache.pdfbox.text.PDFTextStripper().getText(document).replace('\n', ' ');
+        }
+    }
+
+    @Test
     void aForeignHostHeaderIsRefusedBeforeAnythingElse() throws IOException {
         for (String host : List.of("rebound.example:" + workbench.port(), "127.0.0.1:1", "127.0.0.1", "localhost.example")) {
             RawHttp.Answer answer = http.send("GET", "/", host, null, Map.of(), new byte[0]);
