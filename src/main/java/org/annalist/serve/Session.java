@@ -33,6 +33,7 @@ final class Session {
     private final SeriesFiles read = new SeriesFiles(this::shownAs);
     private final BriefPipeline pipeline = new BriefPipeline(read);
     private final Map<String, OpenFile> files = new LinkedHashMap<>();
+    private final Map<String, BriefExtras> extras = new LinkedHashMap<>();
     private final Map<String, MadeBrief> briefs = new LinkedHashMap<>();
     private final Map<String, RoutineRun> runs = new LinkedHashMap<>();
     private final AtomicInteger counter = new AtomicInteger();
@@ -116,7 +117,17 @@ final class Session {
         return List.copyOf(files.values());
     }
 
+    /** The logo and holidays file given for the briefs of an open file (none until the user gives them). */
+    synchronized BriefExtras extras(String fileId) {
+        return extras.getOrDefault(fileId, BriefExtras.NONE);
+    }
+
+    synchronized void extras(String fileId, BriefExtras given) {
+        extras.put(fileId, given);
+    }
+
     synchronized void close(String fileId) {
+        extras.remove(fileId);
         OpenFile file = files.remove(fileId);
         if (file != null) {
             delete(file.stored().getParent());
@@ -146,6 +157,7 @@ final class Session {
     /** Ends the session: its files, briefs and results are deleted. */
     synchronized void end() {
         files.clear();
+        extras.clear();
         briefs.clear();
         runs.clear();
         delete(folder);
