@@ -178,6 +178,13 @@ class WorkbenchHttpTest {
         assertThat(given.text()).contains("festivals.csv").contains("line 3").contains("is not a date; expected YYYY-MM-DD")
                 .contains("None in use.").contains("value=\"6\"").doesNotContain("Exception")
                 .doesNotContain(workbench.temporaryFolder().toString());
+        // a file over the upload limit is refused and said so, as a data file is
+        byte[] big = new byte[(int) LIMIT * 2];
+        java.util.Arrays.fill(big, (byte) '1');
+        RawHttp.Answer oversized = http.multipart("/file/" + file + "/extras", cookie,
+                new java.util.LinkedHashMap<>(Map.of("token", token, "index", "0")), "holidays", "big.csv", big);
+        assertThat(oversized.status()).isEqualTo(413);
+        assertThat(oversized.text()).contains("too large");
         // without its token the same request changes nothing
         assertThat(http.multipart("/file/" + file + "/extras", cookie, new java.util.LinkedHashMap<>(Map.of("index", "0")),
                 "holidays", "festivals.csv", holidays.getBytes(StandardCharsets.UTF_8)).status()).isEqualTo(403);
