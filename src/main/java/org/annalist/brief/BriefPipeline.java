@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.stream.IntStream;
 import org.annalist.series.Holiday;
 import org.annalist.chart.Figure;
@@ -100,7 +101,7 @@ public final class BriefPipeline {
         List<Findings> findings = analyseAll(job, selected, file.read().keys(), holidays);
         for (int i = 0; i < selected.size(); i++) {
             warnings.addAll(ReadingWarnings.ofSeries(selected.get(i).series(), findings.get(i),
-                    job.analysis().holidays(), holidays));
+                    shownHolidays(job), holidays));
         }
         return new Analysed(findings, warnings);
     }
@@ -173,7 +174,7 @@ public final class BriefPipeline {
         Series series = selected.series();
         Findings findings = analyse(job, selected, file.read().keys(), holidays);
         List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));
-        List<String> seriesWarnings = ReadingWarnings.ofSeries(series, findings, job.analysis().holidays(), holidays);
+        List<String> seriesWarnings = ReadingWarnings.ofSeries(series, findings, shownHolidays(job), holidays);
         warnings.addAll(seriesWarnings);
         BriefWriter.Page page = new BriefWriter.Page(job.input(), file.read(), output.masthead(),
                 output.titleFor(job.series(), series), GenerationTime.orDefault(output.masthead().generatedAt()),
@@ -197,7 +198,12 @@ public final class BriefPipeline {
         return job.analysis().holidays().map(files::holidays).orElse(List.of());
     }
 
-    /** Where the brief of one selected series goes. */
+    /** The job's holiday file as messages and briefs name it ({@link SeriesFiles#shownAs}). */
+    private Optional<Path> shownHolidays(Job job) {
+        return job.analysis().holidays().map(file -> Path.of(files.shownAs(file)));
+    }
+
+        /** Where the brief of one selected series goes. */
     static Path singleOutput(BriefOutput output, SeriesSelection.Selected selected) {
         return output.file().resolve(selected.series().name(), selected.latestPeriod());
     }
@@ -222,7 +228,7 @@ public final class BriefPipeline {
         }
         List<String> seriesWarnings = new ArrayList<>();
         for (int i = 0; i < series.size(); i++) {
-            seriesWarnings.addAll(ReadingWarnings.ofSeries(series.get(i), findings.get(i), job.analysis().holidays(),
+            seriesWarnings.addAll(ReadingWarnings.ofSeries(series.get(i), findings.get(i), shownHolidays(job),
                     holidays));
         }
         List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));

@@ -4,6 +4,8 @@ import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
+import java.util.function.Function;
 import org.annalist.series.Holiday;
 import org.annalist.ingest.DataProblemException;
 import org.annalist.ingest.HolidayFile;
@@ -32,16 +34,36 @@ public final class SeriesFiles {
 
     private final Map<Job.Input, ReadFile> data = new HashMap<>();
     private final Map<Path, List<Holiday>> holidays = new HashMap<>();
+    private final Function<Path, String> names;
+
+    /** Files named in messages and briefs as the user gave their paths. */
+    public SeriesFiles() {
+        this(Path::toString);
+    }
+
+    /**
+     * Files named in messages and briefs by {@code names}: the workbench keeps an upload in a folder
+     * of its own under the name the user's file has, and names it by that name alone, as the command
+     * line names a file of that name in the current folder.
+     */
+    public SeriesFiles(Function<Path, String> names) {
+        this.names = Objects.requireNonNull(names, "names");
+    }
+
+    /** How messages and briefs name {@code file}. */
+    public String shownAs(Path file) {
+        return names.apply(file);
+    }
 
     /**
      * The file as read with its options. The path is kept as given (not made absolute), since
-     * messages and the brief's appendix name the file as the user wrote it.
+     * messages and the brief's appendix name the file as the user wrote it ({@link #shownAs}).
      *
      * @throws DataProblemException when the file cannot be used
      */
     public synchronized ReadFile read(Job.Input input) {
         return data.computeIfAbsent(input, in -> {
-            ReadResult read = new SeriesFileReader(in.readOptions()).read(in.file());
+            ReadResult read = new SeriesFileReader(in.readOptions()).read(in.file(), shownAs(in.file()));
             return new ReadFile(read, DerivedSeries.of(read.series()));
         });
     }
@@ -52,6 +74,6 @@ public final class SeriesFiles {
      * @throws DataProblemException when the file cannot be used
      */
     public synchronized List<Holiday> holidays(Path file) {
-        return holidays.computeIfAbsent(file, HolidayFile::read);
+        return holidays.computeIfAbsent(file, f -> HolidayFile.read(f, shownAs(f)));
     }
 }

@@ -23,7 +23,11 @@ public final class HolidayFile {
     }
 
     public static List<Holiday> read(Path file) {
-        String name = file.toString();
+        return read(file, file.toString());
+    }
+
+    /** As {@link #read(Path)}, the file named {@code name} in messages (a file kept under the user's name elsewhere). */
+    public static List<Holiday> read(Path file, String name) {
         ProblemLog log = new ProblemLog(name);
         byte[] bytes = InputFiles.read(file, InputFiles.DEFAULT_MAX_BYTES, "a holiday file of date,name lines");
         // Decoded as a data file is: a byte-order mark honoured, UTF-8, else Windows-1252 (a spreadsheet's Latin-1).

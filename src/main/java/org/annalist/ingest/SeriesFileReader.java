@@ -36,7 +36,17 @@ public final class SeriesFileReader {
      * @throws DataProblemException when the file cannot be read or holds no usable series
      */
     public ReadResult read(Path file) {
-        Optional<ReadResult> workbook = Workbooks.read(file, options);   // a workbook is known by its content
+        return read(file, file.toString());
+    }
+
+    /**
+     * Reads {@code file}, named {@code shownAs} in messages and in the result (a file kept elsewhere
+     * than the user had it, under the user's name).
+     *
+     * @throws DataProblemException when the file cannot be read or holds no usable series
+     */
+    public ReadResult read(Path file, String shownAs) {
+        Optional<ReadResult> workbook = Workbooks.read(file, shownAs, options);   // a workbook is known by its content
         if (workbook.isPresent()) {
             return workbook.get();
         }
@@ -46,7 +56,7 @@ public final class SeriesFileReader {
         } catch (IOException unknown) {
             size = 0;   // the opening says why
         }
-        return read(file.toString(), () -> InputFiles.openBounded(file, options.maxInputBytes(), "a CSV file"), size);
+        return read(shownAs, () -> InputFiles.openBounded(file, options.maxInputBytes(), "a CSV file"), size);
     }
 
     /** Reads {@code bytes} as the contents of a file called {@code fileName} (used in messages). */

@@ -50,7 +50,11 @@ final class Workbooks {
 
     /** The series of {@code file} when it is a workbook (or a zip or compound file, refused here); empty when it is text. */
     static Optional<ReadResult> read(Path file, ReadOptions options) {
-        String name = file.toString();
+        return read(file, file.toString(), options);
+    }
+
+    /** As {@link #read(Path, ReadOptions)}, the file named {@code name} in messages and in the result. */
+    static Optional<ReadResult> read(Path file, String name, ReadOptions options) {
         byte[] head;
         try (InputStream in = InputFiles.open(file, options.maxInputBytes(), "a CSV file")) {
             head = in.readNBytes(8);

@@ -1,5 +1,10 @@
 package org.annalist.serve;
 
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Base64;
+import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.annalist.brief.BriefPipeline;
@@ -21,13 +26,23 @@ final class DraftFragment {
     private static final Pattern XML_DECLARATION = Pattern.compile("^<\\?xml[^>]*\\?>\\s*");
     /** The brief's ids are given a prefix, so that they cannot clash with the page's own. */
     private static final Pattern ID = Pattern.compile("\\b(id|href)=\"(#?)([A-Za-z][\\w-]*)\"");
+    /** A picture the brief takes from a file (the logo): a web page may not, and must not learn the server's folders. */
+    private static final Pattern FILE_IMAGE = Pattern.compile("<img\\b[^>]*\\bsrc=\"file:[^\"]*\"[^>]*>");
 
     private DraftFragment() {
     }
 
-    static String of(BriefPipeline.Preview preview) {
+    /**
+     * The fragment; the logo, when the brief has one, is placed as a {@code data:} picture (the page's
+     * policy allows no other source), so that the page names no file of the server's.
+     */
+    static String of(BriefPipeline.Preview preview, Optional<Path> logo) {
         Matcher body = BODY.matcher(preview.xhtml());
         String html = body.find() ? body.group(1) : "";
+        if (logo.isPresent()) {
+            html = html.replace("src=\"" + logo.get().toAbsolutePath().toUri() + "\"", "src=\"" + dataUri(logo.get()) + "\"");
+        }
+        html = FILE_IMAGE.matcher(html).replaceAll("");
         html = PRINT_ONLY.matcher(html).replaceAll("");
         html = ID.matcher(html).replaceAll(m -> m.group(1).equals("href") && m.group(2).isEmpty()
                 ? Matcher.quoteReplacement(m.group()) : m.group(1) + "=\"" + m.group(2) + "brief-" + m.group(3) + "\"");
@@ -44,6 +59,20 @@ final class DraftFragment {
         }
         chart.appendTail(out);
         return out.toString();
+    }
+
+    /** The logo as a {@code data:} address, its type from its first bytes (it passed the brief's check). */
+    private static String dataUri(Path logo) {
+        try {
+            byte[] bytes = Files.readAllBytes(logo);
+            String type = bytes.length > 3 && (bytes[0] & 0xFF) == 0x89 && bytes[1] == 'P' ? "image/png"
+                    : bytes.length > 3 && (bytes[0] & 0xFF) == 0xFF && (bytes[1] & 0xFF) == 0xD8 ? "image/jpeg"
+                    : bytes.length > 3 && bytes[0] == 'G' && bytes[1] == 'I' && bytes[2] == 'F' ? "image/gif"
+                    : "application/octet-stream";
+            return "data:" + type + ";base64," + Base64.getEncoder().encodeToString(bytes);
+        } catch (IOException e) {
+            return "";   // deleted meanwhile: no picture rather than a broken page
+        }
     }
 
     private static final Pattern SVG_ID = Pattern.compile("\\bid=\"([^\"]+)\"");

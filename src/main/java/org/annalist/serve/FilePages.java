@@ -41,7 +41,7 @@ final class FilePages {
     /** A session keeps at most this many files open; closing one makes room. */
     static final int MAX_OPEN_FILES = 20;
     /** What a multipart request may carry beside the file: the token, the boundaries, the part headers. */
-    private static final long FORM_SLACK = 64 * 1024;
+    static final long FORM_SLACK = 64 * 1024;
     /** The preview's pages: 96 dpi, a screen's own size. */
     private static final int PREVIEW_DPI = 96;
 
@@ -174,7 +174,7 @@ final class FilePages {
         return value.length() > 100 ? value.substring(0, 100) : value;
     }
 
-    private static boolean tooLarge(Throwable cause) {
+    static boolean tooLarge(Throwable cause) {
         String message = String.valueOf(cause == null ? "" : cause.getMessage()).toLowerCase(Locale.ROOT);
         return message.contains("max") || message.contains("size") || message.contains("length");
     }
@@ -194,17 +194,29 @@ final class FilePages {
 
     /** The findings as the brief states them, for the settings in the query; the file is not read again. */
     void series(Exchange ex, Session session, OpenFile file, int index) {
-        SeriesSettings chosen = SeriesSettings.from(ex::query);
+        series(ex, session, file, index, SeriesSettings.from(ex::query), List.of());
+    }
+
+    /**
+     * The series' page with {@code chosen}; {@code refused} says what was wrong with a logo or holidays
+     * file just sent (the page answers 422 then, and the files in use stay as they were).
+     */
+    void series(Exchange ex, Session session, OpenFile file, int index, SeriesSettings chosen,
+                List<FileView.Problem> refused) {
         Series series = file.read().read().series().get(index);
-        Job job = chosen.job(file, series.name(), session.folder().resolve("preview.pdf"), settings.generatedAt(),
-                Set.of());
+        BriefExtras extras = session.extras(file.id());
+        Job job = chosen.job(file, extras, series.name(), session.folder().resolve("preview.pdf"),
+                settings.generatedAt(), Set.of());
         Map<String, Object> model = seriesModel(file, index, series, chosen);
+        model.put("logoName", BriefExtras.name(extras.logo()));
+        model.put("holidaysName", BriefExtras.name(extras.holidays()));
+        model.put("refused", refused);
         long started = System.nanoTime();
-        int status = 200;
+        int status = refused.isEmpty() ? 200 : 422;
         try {
             BriefPipeline.Preview preview = session.pipeline().preview(job);
-            model.put("draft", DraftFragment.of(preview));
-            model.put("warnings", shown(preview.warnings(), file));
+            model.put("draft", DraftFragment.of(preview, extras.logo()));
+            model.put("warnings", preview.warnings());
         } catch (SelectionProblem problem) {
             model.put("problem", problem.reason().plainly());
             status = 422;
@@ -239,8 +251,8 @@ final class FilePages {
         Path folder = session.newFolder(id);
         String base = file.name().replaceFirst("\\.[^.]+$", "");
         String pdf = slug(base + "-" + series.name()) + ".pdf";
-        Job job = chosen.job(file, series.name(), folder.resolve(pdf), settings.generatedAt(),
-                EnumSet.allOf(SideOutputs.Kind.class));
+        Job job = chosen.job(file, session.extras(file.id()), series.name(), folder.resolve(pdf),
+                settings.generatedAt(), EnumSet.allOf(SideOutputs.Kind.class));
         BriefPipeline.Made made;
         try {
             made = session.pipeline().briefs(job).get(0);
@@ -256,14 +268,8 @@ final class FilePages {
         }
         String title = chosen.title().isEmpty() ? series.name() : chosen.title();
         session.add(new MadeBrief(id, file.id(), index, title, folder, pdf, written, PageImages.pages(made.file()),
-                shown(made.warnings(), file)));
+                made.warnings()));
         ex.redirect("/brief/" + id);
-    }
-
-    /** Warnings name the file by the name the user gave it, not by the server's temporary folder. */
-    private static List<String> shown(List<String> warnings, OpenFile file) {
-        String stored = file.stored().toString();
-        return warnings.stream().map(w -> w.replace(stored, file.name())).toList();
     }
 
     void brief(Exchange ex, Session session, MadeBrief brief) {

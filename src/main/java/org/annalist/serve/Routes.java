@@ -41,12 +41,14 @@ final class Routes {
     private final Sessions sessions;
     private final WebPages pages = new WebPages();
     private final FilePages files;
+    private final ExtrasUpload extras;
     private final RoutinePages routine;
 
     Routes(Settings settings, Sessions sessions, ExecutorService routines) {
         this.settings = settings;
         this.sessions = sessions;
         this.files = new FilePages(this, settings);
+        this.extras = new ExtrasUpload(this, files, settings);
         this.routine = new RoutinePages(this, settings, routines);
     }
 
@@ -102,9 +104,10 @@ final class Routes {
     private void route(Exchange ex, Session session, List<String> p) throws IOException {
         String first = p.isEmpty() ? "" : p.get(0);
         boolean post = ex.isPost();
-        // every POST but the upload (whose token travels in its multipart body) shows the token first
+        // every POST but the uploads (whose token travels in their multipart body) shows the token first
+        boolean multipart = first.equals("open") || first.equals("file") && p.size() == 3 && p.get(2).equals("extras");
         Fields fields = new Fields();
-        if (post && !first.equals("open")) {
+        if (post && !multipart) {
             Optional<Fields> form = form(ex, session);
             if (form.isEmpty()) {
                 return;
@@ -129,6 +132,10 @@ final class Routes {
                 if (file.isPresent()) {
                     if (!post && p.size() == 2) {
                         files.check(ex, session, file.get());
+                        return;
+                    }
+                    if (post && p.size() == 3 && p.get(2).equals("extras")) {
+                        extras.upload(ex, session, file.get());
                         return;
                     }
                     if (post && p.size() == 3 && p.get(2).equals("close")) {

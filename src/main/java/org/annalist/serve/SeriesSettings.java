@@ -116,14 +116,16 @@ public record SeriesSettings(String period, String measure, String form, String 
 
     /**
      * The job of a brief of {@code series} with these settings, written to {@code output} with the
-     * side outputs asked for; as {@code brief} builds it from its options.
+     * side outputs asked for, the logo and holidays file the user gave for the file's briefs; as
+     * {@code brief} builds it from its options.
      */
-    Job job(OpenFile file, String series, Path output, Optional<Instant> generatedAt, Set<SideOutputs.Kind> sides) {
-        BriefOutput.MastheadChoices masthead = new BriefOutput.MastheadChoices(title, organisation, Optional.empty(),
+    Job job(OpenFile file, BriefExtras extras, String series, Path output, Optional<Instant> generatedAt,
+            Set<SideOutputs.Kind> sides) {
+        BriefOutput.MastheadChoices masthead = new BriefOutput.MastheadChoices(title, organisation, extras.logo(),
                 Words.PAPER.valueOf(paper).orElse(Masthead.Paper.A4), Locale.ENGLISH, Optional.empty(), generatedAt);
         Optional<Form> chosenForm = form.isEmpty() ? Optional.empty() : Words.FORM.valueOf(form);
         Optional<Measure> chosenMeasure = measure.isEmpty() ? Optional.empty() : Words.MEASURE.valueOf(measure);
-        AnalysisChoices choices = new AnalysisChoices(chosenForm, chosenMeasure, Map.of(), Optional.empty(),
+        AnalysisChoices choices = new AnalysisChoices(chosenForm, chosenMeasure, Map.of(), extras.holidays(),
                 horizon.isEmpty() ? Optional.empty() : Optional.of(Integer.parseInt(horizon)), perDay);
         return new Job(file.input(), SeriesChoice.one(Optional.of(series),
                 period.isEmpty() ? Optional.empty() : Optional.of(period)), choices,

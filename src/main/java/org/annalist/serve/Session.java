@@ -30,9 +30,10 @@ final class Session {
     private final String token;
     private final Path folder;
     /** Files read once per session; a new setting re-analyses the series already read. */
-    private final SeriesFiles read = new SeriesFiles();
+    private final SeriesFiles read = new SeriesFiles(this::shownAs);
     private final BriefPipeline pipeline = new BriefPipeline(read);
     private final Map<String, OpenFile> files = new LinkedHashMap<>();
+    private final Map<String, BriefExtras> extras = new LinkedHashMap<>();
     private final Map<String, MadeBrief> briefs = new LinkedHashMap<>();
     private final Map<String, RoutineRun> runs = new LinkedHashMap<>();
     private final AtomicInteger counter = new AtomicInteger();
@@ -66,6 +67,15 @@ final class Session {
 
     Path folder() {
         return folder;
+    }
+
+    /**
+     * How briefs and messages name a file: one of this session's (an upload, kept in a folder of its
+     * own under the name the user's file has) by that name alone, as the command line names a file
+     * of that name in the current folder; the server's temporary folder is never printed.
+     */
+    private String shownAs(Path file) {
+        return file.startsWith(folder) ? file.getFileName().toString() : file.toString();
     }
 
     BriefPipeline pipeline() {
@@ -107,7 +117,17 @@ final class Session {
         return List.copyOf(files.values());
     }
 
+    /** The logo and holidays file given for the briefs of an open file (none until the user gives them). */
+    synchronized BriefExtras extras(String fileId) {
+        return extras.getOrDefault(fileId, BriefExtras.NONE);
+    }
+
+    synchronized void extras(String fileId, BriefExtras given) {
+        extras.put(fileId, given);
+    }
+
     synchronized void close(String fileId) {
+        extras.remove(fileId);
         OpenFile file = files.remove(fileId);
         if (file != null) {
             delete(file.stored().getParent());
@@ -137,6 +157,7 @@ final class Session {
     /** Ends the session: its files, briefs and results are deleted. */
     synchronized void end() {
         files.clear();
+        extras.clear();
         briefs.clear();
         runs.clear();
         delete(folder);

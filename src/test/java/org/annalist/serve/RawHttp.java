@@ -76,6 +76,21 @@ final class RawHttp {
                 body.toByteArray());
     }
 
+    /** A multipart form to {@code target}: the text fields in order, then one file field. */
+    Answer multipart(String target, String cookie, Map<String, String> fields, String fileField, String fileName,
+                     byte[] content) throws IOException {
+        String boundary = "----annalist-test-boundary";
+        ByteArrayOutputStream body = new ByteArrayOutputStream();
+        fields.forEach((name, value) -> body.writeBytes(("--" + boundary + "\r\nContent-Disposition: form-data; name=\""
+                + name + "\"\r\n\r\n" + value + "\r\n").getBytes(StandardCharsets.UTF_8)));
+        body.writeBytes(("--" + boundary + "\r\nContent-Disposition: form-data; name=\"" + fileField + "\"; filename=\""
+                + fileName + "\"\r\nContent-Type: application/octet-stream\r\n\r\n").getBytes(StandardCharsets.UTF_8));
+        body.writeBytes(content);
+        body.writeBytes(("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8));
+        return send("POST", target, host(), cookie, Map.of("Content-Type", "multipart/form-data; boundary=" + boundary),
+                body.toByteArray());
+    }
+
     Answer send(String method, String target, String host, String cookie, Map<String, String> headers, byte[] body)
             throws IOException {
         try (Socket socket = new Socket("127.0.0.1", port)) {

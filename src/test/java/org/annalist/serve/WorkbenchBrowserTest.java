@@ -132,6 +132,17 @@ class WorkbenchBrowserTest {
         assertThat(browser.findElement(By.id("period")).getAttribute("value")).isEqualTo("2025-04");
         shot("5-series-changed");
 
+        // a holidays file with a date that is not one: refused with its line, the settings kept
+        Path festivals = temp.resolve("festivals.csv");
+        Files.writeString(festivals, "date,name\n2024-05-14,Lantern festival\n2024-13-40,Harbour days\n");
+        browser.findElement(By.id("holidays")).sendKeys(festivals.toString());
+        browser.findElement(By.cssSelector("form[action$='/extras'] button[type=submit]")).click();
+        WebElement refused = waitFor(By.cssSelector("form[action$='/extras'] [role=alert]"));
+        assertThat(refused.getText()).contains("festivals.csv").contains("line 3").contains("is not a date");
+        assertThat(browser.findElement(By.id("period")).getAttribute("value")).isEqualTo("2025-04");
+        ((org.openqa.selenium.JavascriptExecutor) browser).executeScript("arguments[0].scrollIntoView()", refused);
+        shot("5b-holidays-refused");
+
         // the brief: made, its pages shown, the PDF saved
         browser.findElement(By.cssSelector("form.make button")).click();
         waitFor(By.cssSelector(".pages img"));

@@ -92,6 +92,136 @@ class WorkbenchHttpTest {
     }
 
     @Test
+    void aBriefMadeInTheBrowserNamesTheFileAsTheUserCalledItNotByTheServersFolder() throws IOException {
+        // an invented note line below the data: the reader sets it aside with a warning naming file and line
+        String csv = Files.readString(DEMO) + "Source: Quennelmark statistics office\n";
+        int noteLine = Files.readAllLines(DEMO).size() + 1;
+        RawHttp.Answer opened = http.upload(cookie, token, "visitors.csv", csv.getBytes(StandardCharsets.UTF_8));
+        assertThat(opened.status()).isEqualTo(303);
+        String file = opened.header("location").orElseThrow().replaceFirst(".*/file/", "");
+        RawHttp.Answer made = http.postForm("/file/" + file + "/series/0/brief", cookie, "token=" + token);
+        String brief = made.header("location").orElseThrow().replaceFirst(".*/brief/", "");
+        String page = http.get("/brief/" + brief, cookie).text();
+        Matcher links = Pattern.compile("href=\"(/brief/" + brief + "/file/[^\"]+)\"").matcher(page);
+        String server = workbench.temporaryFolder().toString();
+        int files = 0;
+        while (links.find()) {
+            byte[] body = http.get(links.group(1), cookie).body();
+            String text = links.group(1).endsWith(".pdf") ? pdfText(body) : new String(body, StandardCharsets.UTF_8);
+            assertThat(text).as(links.group(1)).doesNotContain(server).doesNotContain("annalist-serve-");
+            if (links.group(1).endsWith(".pdf")) {
+                assertThat(text).contains("visitors.csv:" + noteLine + ": line set aside as a note");
+            }
+            files++;
+        }
+        assertThat(files).as(page).isGreaterThan(1);
+        assertThat(page).contains("visitors.csv:" + noteLine).doesNotContain(server);
+    }
+
+    @Test
+    void aLogoGivenOnTheSeriesPageIsPrintedInTheBriefAsTheCommandLinePrintsIt() throws IOException {
+        // an invented two-colour mark, made here
+        java.awt.image.BufferedImage mark = new java.awt.image.BufferedImage(60, 24, java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g = mark.createGraphics();
+        g.setColor(java.awt.Color.WHITE);
+        g.fillRect(0, 0, 60, 24);
+        g.setColor(new java.awt.Color(20, 60, 120));
+        g.fillRect(4, 4, 20, 16);
+        g.dispose();
+        Path logo = Files.createDirectories(temp.resolve("logo-cli")).resolve("mark.png");
+        javax.imageio.ImageIO.write(mark, "png", logo.toFile());
+
+        String file = opened(DEMO.getFileName().toString(), Files.readAllBytes(DEMO));
+        RawHttp.Answer given = http.multipart("/file/" + file + "/extras", cookie,
+                new java.util.LinkedHashMap<>(Map.of("token", token, "index", "0")), "logo", "mark.png",
+                Files.readAllBytes(logo));
+        assertThat(given.status()).as(given.text()).isEqualTo(303);
+        assertThat(http.get("/file/" + file + "/series/0", cookie).text()).contains("In use: mark.png")
+                .contains("src=\"data:image/png;base64,").doesNotContain(workbench.temporaryFolder().toString());
+        byte[] served = pdfOf(file);
+        try (org.apache.pdfbox.pdmodel.PDDocument document = org.apache.pdfbox.Loader.loadPDF(served)) {
+            var resources = document.getPage(0).getResources();
+            boolean image = false;
+            for (var name : resources.getXObjectNames()) {
+                image |= resources.getXObject(name) instanceof org.apache.pdfbox.pdmodel.graphics.image.PDImageXObject;
+            }
+            assertThat(image).as("an image on page 1").isTrue();
+        }
+
+        Path copy = Files.createDirectories(temp.resolve("logo-cli/data")).resolve(DEMO.getFileName());
+        Files.copy(DEMO, copy);
+        Path out = temp.resolve("logo-cli/total.pdf");
+        StringWriter err = new StringWriter();
+        int code = Main.run(new String[] {"brief", copy.toString(), "--series", "Total", "--logo", logo.toString(),
+            "-o", out.toString(), "--generated-at", TIME}, new PrintWriter(new StringWriter(), true),
+            new PrintWriter(err, true));
+        assertThat(code).as(err.toString()).isZero();
+        assertThat(served).isEqualTo(Files.readAllBytes(out));
+
+        // a file that is not a picture is refused on the page, and the logo in use stays
+        RawHttp.Answer bad = http.multipart("/file/" + file + "/extras", cookie,
+                new java.util.LinkedHashMap<>(Map.of("token", token, "index", "0")), "logo", "notes.png",
+                "not a picture".getBytes(StandardCharsets.UTF_8));
+        assertThat(bad.status()).isEqualTo(422);
+        assertThat(bad.text()).contains("notes.png").contains("expected a PNG, JPEG or GIF file")
+                .contains("In use: mark.png").doesNotContain("Exception").doesNotContain(workbench.temporaryFolder().toString());
+    }
+
+    @Test
+    void aBrokenHolidaysFileIsShownWithItsLineAndNotUsed() throws IOException {
+        String file = opened(DEMO.getFileName().toString(), Files.readAllBytes(DEMO));
+        String holidays = "date,name\n2024-05-14,Lantern festival\n2024-13-40,Harbour days\n";
+        RawHttp.Answer given = http.multipart("/file/" + file + "/extras", cookie,
+                new java.util.LinkedHashMap<>(Map.of("token", token, "index", "0", "horizon", "6")), "holidays",
+                "festivals.csv", holidays.getBytes(StandardCharsets.UTF_8));
+        assertThat(given.status()).isEqualTo(422);
+        assertThat(given.text()).contains("festivals.csv").contains("line 3").contains("is not a date; expected YYYY-MM-DD")
+                .contains("None in use.").contains("value=\"6\"").doesNotContain("Exception")
+                .doesNotContain(workbench.temporaryFolder().toString());
+        // a file over the upload limit is refused and said so, as a data file is
+        byte[] big = new byte[(int) LIMIT * 2];
+        java.util.Arrays.fill(big, (byte) '1');
+        RawHttp.Answer oversized = http.multipart("/file/" + file + "/extras", cookie,
+                new java.util.LinkedHashMap<>(Map.of("token", token, "index", "0")), "holidays", "big.csv", big);
+        assertThat(oversized.status()).isEqualTo(413);
+        assertThat(oversized.text()).contains("too large");
+        // without its token the same request changes nothing
+        assertThat(http.multipart("/file/" + file + "/extras", cookie, new java.util.LinkedHashMap<>(Map.of("index", "0")),
+                "holidays", "festivals.csv", holidays.getBytes(StandardCharsets.UTF_8)).status()).isEqualTo(403);
+        // a good file is used: the page names it, and the brief is made with it
+        String good = "date,name\n2024-05-14,Lantern festival\n2025-05-13,Lantern festival\n";
+        RawHttp.Answer used = http.multipart("/file/" + file + "/extras", cookie,
+                new java.util.LinkedHashMap<>(Map.of("token", token, "index", "0")), "holidays", "festivals.csv",
+                good.getBytes(StandardCharsets.UTF_8));
+        assertThat(used.status()).as(used.text()).isEqualTo(303);
+        assertThat(http.get("/file/" + file + "/series/0", cookie).text()).contains("In use: festivals.csv");
+        assertThat(pdfOf(file)).startsWith("%PDF".getBytes(StandardCharsets.US_ASCII));
+    }
+
+    private static String opened(String name, byte[] content) throws IOException {
+        RawHttp.Answer opened = http.upload(cookie, token, name, content);
+        assertThat(opened.status()).isEqualTo(303);
+        return opened.header("location").orElseThrow().replaceFirst(".*/file/", "");
+    }
+
+    /** The PDF of the file's first series made with the default settings. */
+    private static byte[] pdfOf(String file) throws IOException {
+        RawHttp.Answer made = http.postForm("/file/" + file + "/series/0/brief", cookie, "token=" + token);
+        assertThat(made.status()).isEqualTo(303);
+        String brief = made.header("location").orElseThrow().replaceFirst(".*/brief/", "");
+        Matcher pdfLink = Pattern.compile("href=\"(/brief/" + brief + "/file/[^\"]+\\.pdf)\"")
+                .matcher(http.get("/brief/" + brief, cookie).text());
+        assertThat(pdfLink.find()).isTrue();
+        return http.get(pdfLink.group(1), cookie).body();
+    }
+
+    private static String pdfText(byte[] pdf) throws IOException {
+        try (org.apache.pdfbox.pdmodel.PDDocument document = org.apache.pdfbox.Loader.loadPDF(pdf)) {
+            return new org.apache.pdfbox.text.PDFTextStripper().getText(document).replace('\n', ' ');
+        }
+    }
+
+    @Test
     void aForeignHostHeaderIsRefusedBeforeAnythingElse() throws IOException {
         for (String host : List.of("rebound.example:" + workbench.port(), "127.0.0.1:1", "127.0.0.1", "localhost.example")) {
             RawHttp.Answer answer = http.send("GET", "/", host, null, Map.of(), new byte[0]);
