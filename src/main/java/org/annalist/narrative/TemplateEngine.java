@@ -72,6 +72,15 @@ public final class TemplateEngine {
         // an engine is kept for many briefs (a batch): a user's template edited meanwhile is read
         // again (the bundled ones cannot change while the JVM runs)
         userTemplates.ifPresent(folder -> configuration.setTemplateUpdateDelayMilliseconds(0));
+        lockDown(configuration);
+    }
+
+    /**
+     * The settings every template of the project is filled under, the brief's and the workbench's
+     * pages alike: UTF-8, English, errors thrown rather than printed into the output, and no way
+     * for a template to create Java objects or reach the API of the values it is given.
+     */
+    static void lockDown(Configuration configuration) {
         configuration.setDefaultEncoding("UTF-8");
         configuration.setLocale(Locale.ENGLISH);
         configuration.setTemplateExceptionHandler(TemplateExceptionHandler.RETHROW_HANDLER);

@@ -3,14 +3,10 @@ package org.annalist.narrative;
 import freemarker.cache.ClassTemplateLoader;
 import freemarker.core.HTMLOutputFormat;
 import freemarker.template.Configuration;
-import freemarker.template.DefaultObjectWrapperBuilder;
-import freemarker.core.TemplateClassResolver;
 import freemarker.template.TemplateException;
-import freemarker.template.TemplateExceptionHandler;
 import java.io.IOException;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
-import java.util.Locale;
 import java.util.Map;
 
 /**
@@ -25,19 +21,10 @@ public final class WebPages {
     public WebPages() {
         configuration = new Configuration(Configuration.VERSION_2_3_35);
         configuration.setTemplateLoader(new ClassTemplateLoader(WebPages.class, "/web"));
-        configuration.setDefaultEncoding("UTF-8");
+        TemplateEngine.lockDown(configuration);
         configuration.setOutputEncoding("UTF-8");
         configuration.setURLEscapingCharset("UTF-8");
         configuration.setOutputFormat(HTMLOutputFormat.INSTANCE);
-        configuration.setLocale(Locale.ENGLISH);
-        configuration.setTemplateExceptionHandler(TemplateExceptionHandler.RETHROW_HANDLER);
-        configuration.setLogTemplateExceptions(false);
-        configuration.setWrapUncheckedExceptions(true);
-        configuration.setFallbackOnNullLoopVariable(false);
-        configuration.setNewBuiltinClassResolver(TemplateClassResolver.ALLOWS_NOTHING_RESOLVER);
-        configuration.setAPIBuiltinEnabled(false);
-        // record components read as values (page.title); needs the jar's Multi-Release manifest
-        configuration.setObjectWrapper(new DefaultObjectWrapperBuilder(Configuration.VERSION_2_3_35).build());
     }
 
     /**

@@ -5,15 +5,11 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
-import java.util.concurrent.ExecutionException;
 import org.annalist.brief.Logo;
 import org.annalist.ingest.DataProblem;
 import org.annalist.ingest.DataProblemException;
-import org.eclipse.jetty.http.HttpHeader;
 import org.eclipse.jetty.http.MultiPart;
-import org.eclipse.jetty.http.MultiPartConfig;
 import org.eclipse.jetty.http.MultiPartFormData;
 
 /**
@@ -35,33 +31,14 @@ final class ExtrasUpload {
     }
 
     void upload(Exchange ex, Session session, OpenFile file) throws IOException {
-        if (ex.request().getLength() > 2 * settings.maxUploadBytes() + FilePages.FORM_SLACK) {
-            routes.refuse(ex, Routes.Refusal.TOO_LARGE, session);
-            return;
-        }
-        String contentType = ex.header(HttpHeader.CONTENT_TYPE).orElse("");
-        if (!contentType.toLowerCase(Locale.ROOT).startsWith("multipart/form-data")) {
-            routes.refuse(ex, Routes.Refusal.BAD_REQUEST, session);
-            return;
-        }
         Path incoming = session.newFolder(session.nextId('u'));
         try {
-            MultiPartConfig config = new MultiPartConfig.Builder().location(incoming).maxParts(20)
-                    .maxPartSize(settings.maxUploadBytes()).maxSize(2 * settings.maxUploadBytes() + FilePages.FORM_SLACK)
-                    .maxMemoryPartSize(64 * 1024).maxHeadersSize(8 * 1024).build();
-            MultiPartFormData.Parts parts;
-            try {
-                parts = MultiPartFormData.from(ex.request(), ex.request(), contentType, config).get();
-            } catch (ExecutionException e) {
-                routes.refuse(ex, FilePages.tooLarge(e.getCause()) ? Routes.Refusal.TOO_LARGE
-                        : Routes.Refusal.BAD_REQUEST, session);
-                return;
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                routes.refuse(ex, Routes.Refusal.BUSY, session);
+            Optional<MultiPartFormData.Parts> form = MultipartForms.read(ex, session, routes, incoming, 20,
+                    settings.maxUploadBytes(), 2 * settings.maxUploadBytes() + FilePages.FORM_SLACK);
+            if (form.isEmpty()) {
                 return;
             }
-            try (parts) {
+            try (MultiPartFormData.Parts parts = form.get()) {
                 if (!session.tokenMatches(text(parts, "token", 200))) {
                     routes.refuse(ex, Routes.Refusal.NO_TOKEN, session);
                     return;

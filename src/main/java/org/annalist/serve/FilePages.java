@@ -12,7 +12,6 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import java.util.concurrent.ExecutionException;
 import java.util.stream.Stream;
 import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.Job;
@@ -28,7 +27,6 @@ import org.annalist.ingest.ReadOptions;
 import org.annalist.render.PageImages;
 import org.annalist.series.Series;
 import org.eclipse.jetty.http.MultiPart;
-import org.eclipse.jetty.http.MultiPartConfig;
 import org.eclipse.jetty.http.MultiPartFormData;
 import org.eclipse.jetty.util.Fields;
 
@@ -60,34 +58,14 @@ final class FilePages {
 
     /** A file sent from the browser: kept in the session's folder under its own name, read once, checked. */
     void upload(Exchange ex, Session session) throws IOException {
-        long length = ex.request().getLength();
-        if (length > settings.maxUploadBytes() + FORM_SLACK) {
-            routes.refuse(ex, Routes.Refusal.TOO_LARGE, session);
-            return;
-        }
-        String contentType = ex.header(org.eclipse.jetty.http.HttpHeader.CONTENT_TYPE).orElse("");
-        if (!contentType.toLowerCase(Locale.ROOT).startsWith("multipart/form-data")) {
-            routes.refuse(ex, Routes.Refusal.BAD_REQUEST, session);
-            return;
-        }
         Path incoming = session.newFolder(session.nextId('u'));
         try {
-            MultiPartConfig config = new MultiPartConfig.Builder().location(incoming).maxParts(10)
-                    .maxPartSize(settings.maxUploadBytes()).maxSize(settings.maxUploadBytes() + FORM_SLACK)
-                    .maxMemoryPartSize(64 * 1024).maxHeadersSize(8 * 1024).build();
-            MultiPartFormData.Parts parts;
-            try {
-                parts = MultiPartFormData.from(ex.request(), ex.request(), contentType, config).get();
-            } catch (ExecutionException e) {
-                routes.refuse(ex, tooLarge(e.getCause()) ? Routes.Refusal.TOO_LARGE : Routes.Refusal.BAD_REQUEST,
-                        session);
-                return;
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                routes.refuse(ex, Routes.Refusal.BUSY, session);
+            Optional<MultiPartFormData.Parts> form = MultipartForms.read(ex, session, routes, incoming, 10,
+                    settings.maxUploadBytes(), settings.maxUploadBytes() + FORM_SLACK);
+            if (form.isEmpty()) {
                 return;
             }
-            try (parts) {
+            try (MultiPartFormData.Parts parts = form.get()) {
                 MultiPart.Part token = parts.getFirst("token");
                 if (token == null || !session.tokenMatches(token.getContentAsString(StandardCharsets.UTF_8))) {
                     routes.refuse(ex, Routes.Refusal.NO_TOKEN, session);
@@ -172,11 +150,6 @@ final class FilePages {
         MultiPart.Part part = parts.getFirst(name);
         String value = part == null ? "" : part.getContentAsString(StandardCharsets.UTF_8).strip();
         return value.length() > 100 ? value.substring(0, 100) : value;
-    }
-
-    static boolean tooLarge(Throwable cause) {
-        String message = String.valueOf(cause == null ? "" : cause.getMessage()).toLowerCase(Locale.ROOT);
-        return message.contains("max") || message.contains("size") || message.contains("length");
     }
 
     void check(Exchange ex, Session session, OpenFile file) {
