@@ -8,7 +8,8 @@
 # seven significant digits. dev/m3/r-{yearly,quarterly,monthly}.csv were made so on this project's
 # machine (R 4.2.2, forecast 8.20, December 2026); the monthly run takes more than 80 minutes of CPU,
 # so each series' rows are appended as soon as they are made and a rerun into the same output file
-# skips the series it already holds (a run cut short resumes where it stopped).
+# skips the series it already holds (a run cut short resumes where it stopped). The monthly file is
+# committed gzipped (r-monthly.csv.gz; M3Benchmark reads either): gunzip it before resuming into it.
 # Nothing is read or written besides the two input files and the named output.
 args <- commandArgs(trailingOnly = TRUE)
 suppressMessages(library(forecast))

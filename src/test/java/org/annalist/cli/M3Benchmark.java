@@ -176,7 +176,9 @@ public final class M3Benchmark {
                 + "-published-forecasts.csv"), byId);
         published.forEach((method, forecasts) -> tallies.put(method, tally(forecasts, byId, period)));
         if (rFolder.isPresent()) {
-            Path rFile = rFolder.get().resolve("r-" + frequency + ".csv");
+            Path plain = rFolder.get().resolve("r-" + frequency + ".csv");
+            // the monthly file is kept gzipped in the repository (4.5 MB as text)
+            Path rFile = Files.exists(plain) ? plain : rFolder.get().resolve("r-" + frequency + ".csv.gz");
             if (Files.exists(rFile)) {
                 Map<String, Map<String, Forecast>> r = readForecasts(rFile, byId);
                 r.forEach((method, forecasts) -> tallies.put("R " + method, tally(forecasts, byId, period)));
@@ -346,10 +348,18 @@ public final class M3Benchmark {
         };
     }
 
+    /** A CSV file's lines, gzipped ({@code .gz}) or not. */
+    private static List<String> lines(Path file) throws IOException {
+        try (java.io.InputStream in = file.toString().endsWith(".gz")
+                ? new java.util.zip.GZIPInputStream(Files.newInputStream(file)) : Files.newInputStream(file)) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8).lines().toList();
+        }
+    }
+
     /** Rows by their first field, in file order. */
     private static Map<String, List<String[]>> rows(Path file) throws IOException {
         Map<String, List<String[]>> rows = new LinkedHashMap<>();
-        List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+        List<String> lines = lines(file);
         for (String line : lines.subList(1, lines.size())) {
             String[] fields = line.split(",");
             rows.computeIfAbsent(fields[0], k -> new ArrayList<>()).add(fields);
@@ -364,7 +374,7 @@ public final class M3Benchmark {
     private static Map<String, Map<String, Forecast>> readForecasts(Path file, Map<String, M3Series> byId)
             throws IOException {
         Map<String, Map<String, double[][]>> values = new TreeMap<>();
-        List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+        List<String> lines = lines(file);
         for (String line : lines.subList(1, lines.size())) {
             String[] fields = line.split(",");
             M3Series s = byId.get(fields[1]);
