@@ -84,6 +84,16 @@ final class BriefWriter {
      */
     private static final TemplateEngine BUNDLED = new TemplateEngine(Optional.empty());
 
+    /**
+     * Starts the warm-up of the PDF path ({@link PdfWarmUp}) for a brief of these choices: with the
+     * bundled templates, the one the brief is filled from is parsed too.
+     */
+    static void warmUp(BriefOutput.MastheadChoices choices, boolean combined) {
+        PdfWarmUp.start(choices.templates().isPresent() ? Optional.empty()
+                : Optional.of(combined ? TemplateEngine.MULTI_TEMPLATE : TemplateEngine.BRIEF_TEMPLATE),
+                choices.language(), BUNDLED);
+    }
+
     /** A user's template folders' engines, kept for this writer's life (a batch): each folder parsed once. */
     private final Map<Path, TemplateEngine> engines = new ConcurrentHashMap<>();
 

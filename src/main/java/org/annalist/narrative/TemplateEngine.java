@@ -103,6 +103,19 @@ public final class TemplateEngine {
     }
 
     /**
+     * Parses a template into the engine's cache ahead of its first use (a cold brief does this on a
+     * spare core while the series is analysed); a template that cannot be parsed is left for
+     * {@link #renderTraced} to report.
+     */
+    public void prepare(String templateName, Locale language) {
+        try {
+            configuration.getTemplate(templateName, language);
+        } catch (IOException e) {
+            // reported, with its line, when the template is filled
+        }
+    }
+
+    /**
      * As {@link #render}, keeping where each part of the output came from, so that a later
      * complaint about the XHTML (not well-formed, a file it may not use) names the template's line.
      */

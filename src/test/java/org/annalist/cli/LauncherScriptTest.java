@@ -85,6 +85,87 @@ class LauncherScriptTest {
     }
 
     @Test
+    void onJava17To24TheClassDataArchiveMadeForThisFolderAndJavaIsUsed() throws Exception {
+        Path java = fakeJava("21.0.2");
+        Path lib = home.toRealPath().resolve("lib");
+        Files.writeString(lib.resolve("annalist.jsa"), "archive");
+        Files.writeString(lib.resolve("annalist.jsa.txt"), home.toRealPath() + "|21.0.2+1\n");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "--version");
+        assertThat(run.lines()).contains("-XX:SharedArchiveFile=" + lib.resolve("annalist.jsa"), "-Xshare:auto")
+                .noneMatch(a -> a.startsWith("-XX:AOT"));
+    }
+
+    /** Java 25's ahead-of-time cache replaces the class-data archive; the JVM refuses -Xshare beside it. */
+    @Test
+    void onJava25AndLaterTheAheadOfTimeCacheMadeForThisFolderAndJavaIsUsedWithoutXshare() throws Exception {
+        Path java = fakeJava("25.0.1");
+        Path lib = home.toRealPath().resolve("lib");
+        Files.writeString(lib.resolve("annalist.aot"), "cache");
+        Files.writeString(lib.resolve("annalist.aot.txt"), home.toRealPath() + "|25.0.1+1\n");
+        Files.writeString(lib.resolve("annalist.jsa"), "archive");
+        Files.writeString(lib.resolve("annalist.jsa.txt"), home.toRealPath() + "|25.0.1+1\n");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "check", "f.csv");
+        assertThat(run.code).isZero();
+        assertThat(run.lines()).contains("-XX:AOTCache=" + lib.resolve("annalist.aot"), "-XX:TieredStopAtLevel=1")
+                .noneMatch(a -> a.startsWith("-Xshare") || a.startsWith("-XX:SharedArchiveFile"));
+    }
+
+    @Test
+    void onJava25ACacheMadeForAnotherJavaIsPassedOverAndACheckDoesNotMakeOne() throws Exception {
+        Path java = fakeJava("25.0.2");
+        Path lib = home.toRealPath().resolve("lib");
+        Files.writeString(lib.resolve("annalist.aot"), "cache");
+        Files.writeString(lib.resolve("annalist.aot.txt"), home.toRealPath() + "|25.0.1+1\n");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "check", "f.csv");
+        assertThat(run.lines()).noneMatch(a -> a.startsWith("-XX:AOT"));
+        assertThat(Files.readString(lib.resolve("annalist.aot.txt"))).contains("25.0.1+1");
+    }
+
+    /**
+     * Where no cache fits, the first brief records what it loads and the cache is assembled from the
+     * record after it (the assembling run's messages never reach the user); the record is removed.
+     */
+    @Test
+    void onJava25AFirstBriefRecordsWhatItLoadsAndLeavesTheCacheForTheNextRun() throws Exception {
+        Path java = fakeJava("25.0.1");
+        Path lib = home.toRealPath().resolve("lib");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
+        assertThat(run.code).isZero();
+        assertThat(run.lines()).contains("-XX:AOTMode=record", "-XX:-DisplayVMOutput", "brief", "f.csv")
+                .doesNotContain("-XX:AOTMode=create");
+        assertThat(Files.readString(lib.resolve("annalist.aot"))).isEqualTo("cache");
+        assertThat(Files.readString(lib.resolve("annalist.aot.txt"))).isEqualTo(home.toRealPath() + "|25.0.1+1\n");
+        try (var left = Files.list(lib)) {
+            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("annalist.aot", "annalist.aot.txt");
+        }
+        Result next = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
+        assertThat(next.lines()).contains("-XX:AOTCache=" + lib.resolve("annalist.aot")).doesNotContain("-XX:AOTMode=record");
+    }
+
+    @Test
+    void onJava25AFailingFirstBriefKeepsItsExitCodeAndLeavesNoCache() throws Exception {
+        Path java = fakeJava("25.0.1");
+        Path lib = home.toRealPath().resolve("lib");
+        Result run = run(Map.of("JAVA_HOME", java.toString(), "FAKE_EXIT", "2"), temp,
+                home.resolve("bin/annalist").toString(), "brief", "missing.csv");
+        assertThat(run.code).isEqualTo(2);
+        try (var left = Files.list(lib)) {
+            assertThat(left).isEmpty();
+        }
+    }
+
+    @Test
+    void classDataSettingsOfTheUsersOwnReplaceTheCacheOnJava25() throws Exception {
+        Path java = fakeJava("25.0.1");
+        Path lib = home.toRealPath().resolve("lib");
+        Files.writeString(lib.resolve("annalist.aot"), "cache");
+        Files.writeString(lib.resolve("annalist.aot.txt"), home.toRealPath() + "|25.0.1+1\n");
+        Result run = run(Map.of("JAVA_HOME", java.toString(), "ANNALIST_JAVA_OPTS", "-Xshare:off"), temp,
+                home.resolve("bin/annalist").toString(), "brief", "f.csv");
+        assertThat(run.lines()).contains("-Xshare:off").noneMatch(a -> a.startsWith("-XX:AOT"));
+    }
+
+    @Test
     void refusesAJavaOlderThan17SayingWhatToInstallWithExitCode2() throws Exception {
         Path java = fakeJava("11.0.21");
         Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "--help");
@@ -141,14 +222,32 @@ class LauncherScriptTest {
         assertThat(run.stderr).isEmpty();
     }
 
-    /** A JDK folder whose bin/java prints its arguments one per line, and whose release file names {@code version}. */
+    /**
+     * A JDK folder whose bin/java prints its arguments one per line and exits with {@code FAKE_EXIT}
+     * (0 without it), and whose release file names {@code version}.
+     */
     private Path fakeJava(String version) throws IOException {
         Path jdk = Files.createDirectories(temp.resolve("jdk " + version));
         Files.createDirectories(jdk.resolve("bin"));
         Files.writeString(jdk.resolve("release"), "IMPLEMENTOR=\"test\"\nJAVA_RUNTIME_VERSION=\"" + version
                 + "+1\"\nJAVA_VERSION=\"" + version + "\"\n");
         Path java = jdk.resolve("bin/java");
-        Files.writeString(java, "#!/bin/sh\nfor a in \"$@\"; do printf '%s\\n' \"$a\"; done\n");
+        // as Java 25 does: a record run writes its configuration, a create run the cache
+        Files.writeString(java, """
+                #!/bin/sh
+                mode=; conf=; cache=
+                for a in "$@"; do
+                    printf '%s\\n' "$a"
+                    case $a in
+                        -XX:AOTMode=*) mode=${a#*=} ;;
+                        -XX:AOTConfiguration=*) conf=${a#*=} ;;
+                        -XX:AOTCache=*) cache=${a#*=} ;;
+                    esac
+                done
+                if [ "$mode" = record ]; then printf 'record' > "$conf"; fi
+                if [ "$mode" = create ]; then printf 'cache' > "$cache"; fi
+                exit ${FAKE_EXIT:-0}
+                """);
         executable(java);
         return jdk;
     }
