@@ -16,6 +16,9 @@
 #   batch of 200 briefs         <= 45 s, <= 1 GiB peak RSS; a batch of 1,000 no higher peak
 #   analyze 10,000 series       <= 20 s, <= 1 GiB peak RSS (--horizon 0: no outlook, no PDF)
 # The generated inputs go to /tmp/annalist-bench-launcher/ (BENCH_DIR) and are reused.
+# JAVA25_HOME (a Java 25 or later) adds the launcher's figures on that Java, with its ahead-of-time
+# cache (made by an untimed first run). The cold brief is also measured without the PDF path's
+# warm-up (-Dannalist.warmup=false), and the batch with full tiered compilation (C2) beside C1 only.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 runs=${1:-5}
@@ -71,6 +74,16 @@ if [[ " $figures " == *" startup "* ]]; then
         --generated-at 2026-11-20T08:00:00Z
     measure "brief, cold     new: bin/annalist" "$runs" "$new" brief "$data" --series Total -o "$work/total.pdf" \
         --generated-at 2026-11-20T08:00:00Z
+    measure "brief, cold     new, no PDF warm-up" "$runs" env ANNALIST_JAVA_OPTS=-Dannalist.warmup=false "$new" brief \
+        "$data" --series Total -o "$work/total.pdf" --generated-at 2026-11-20T08:00:00Z
+    if [ -n "${JAVA25_HOME:-}" ]; then
+        # the first run on this Java makes lib/annalist.aot (untimed)
+        JAVA_HOME=$JAVA25_HOME "$new" brief "$data" --series Total -o "$work/total.pdf" > /dev/null
+        measure "--help          new: Java 25, AOT cache" "$runs" env JAVA_HOME="$JAVA25_HOME" "$new" --help
+        measure "check           new: Java 25, AOT cache" "$runs" env JAVA_HOME="$JAVA25_HOME" "$new" check "$data"
+        measure "brief, cold     new: Java 25, AOT cache" "$runs" env JAVA_HOME="$JAVA25_HOME" "$new" brief "$data" \
+            --series Total -o "$work/total.pdf" --generated-at 2026-11-20T08:00:00Z
+    fi
 fi
 
 if [[ " $figures " == *" warm "* ]]; then
@@ -106,6 +119,8 @@ if [[ " $figures " == *" batch "* ]]; then
     header "batch" "$batch_runs"
     measure "batch 200 briefs    old: java -jar" "$batch_runs" $old batch "$work/batch-200/briefs.yaml"
     measure "batch 200 briefs    new: bin/annalist" "$batch_runs" "$new" batch "$work/batch-200/briefs.yaml"
+    measure "batch 200 briefs    new, full tiered" "$batch_runs" env ANNALIST_JAVA_OPTS=-XX:TieredStopAtLevel=4 "$new" \
+        batch "$work/batch-200/briefs.yaml"
     measure "batch 1,000 briefs  new: bin/annalist" "$batch_runs" "$new" batch "$work/batch-1000/briefs.yaml"
 fi
 
