@@ -63,15 +63,26 @@ final class PdfWarmUp {
     }
 
     private static void run(java.util.Optional<String> template, Locale language, TemplateEngine engine) {
+        warmUpHere(template, language, engine);
+    }
+
+    /**
+     * The warm-up's work, on the calling thread.
+     *
+     * @return whether the page was laid out (a failure is dropped: the real brief reports its cause)
+     */
+    static boolean warmUpHere(java.util.Optional<String> template, Locale language, TemplateEngine engine) {
         try {
             template.ifPresent(name -> engine.prepare(name, language));
             Series series = sample();
             Captions captions = new Captions("a", "b", "c", "d", "e", "f", "g", "h", "i");
             Figure chart = YearOverlayChart.of(series, captions);
-            new PdfRenderer().render(page(chart.id()), Sandbox.closed(Path.of("").toAbsolutePath()), List.of(chart),
-                    Instant.EPOCH, 0L);
+            byte[] pdf = new PdfRenderer().render(page(chart.id()), Sandbox.closed(Path.of("").toAbsolutePath()),
+                    List.of(chart), Instant.EPOCH, 0L);
+            return pdf.length > 0;
         } catch (Throwable dropped) {
             // nothing to report: the real brief takes the same path and reports what fails there
+            return false;
         }
     }
 
