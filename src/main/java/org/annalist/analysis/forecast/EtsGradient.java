@@ -3,10 +3,12 @@ package org.annalist.analysis.forecast;
 /**
  * The exact gradient of the ETS estimation criterion n log(Σ e_t²) + 2 Σ log|ŷ_t| ([1] §5.2, the
  * second sum for multiplicative errors only, as {@link EtsFilter#criterion} computes it) with respect
- * to α, β* = β/α, γ, φ and every initial state, by forward-mode differentiation of the state
- * equations [1, Table 2.3] (derived here, from memory of the chain rule; no published source): each
- * state carries its derivatives along the recursion. One pass costs a few criterion evaluations, where
- * forward differences cost one evaluation per variable (some 17 for a monthly seasonal model).
+ * to α, β* = β/α, γ, φ and every initial state, by reverse-mode differentiation of the state
+ * equations [1, Table 2.3] (derived here from the chain rule, from memory; no published source): a
+ * forward pass keeps each step's states, a backward pass carries the criterion's derivative with
+ * respect to each state back to the start. It costs about three criterion evaluations whatever the
+ * number of variables, where forward differences cost one evaluation per variable (some 17 for a
+ * monthly seasonal model).
  *
  * <h2>References</h2>
  * <ol>
@@ -26,31 +28,33 @@ final class EtsGradient {
     private final EtsModel model;
     private final double[] y;
     private final int k;
-    private final double[] dl;
-    private final double[] db;
-    private final double[][] ds;
-    private final double[] dq;
-    private final double[] dphib;
-    private final double[] gSum;
-    private final double[] gLog;
+    /** What the forward pass keeps of each step for the backward one: the states read, the forecast, the error. */
+    private final double[] levels;
+    private final double[] trends;
+    private final double[] oldests;
+    private final double[] fs;
+    private final double[] es;
+    private final double[] seasonAdjoint;
 
     /** @param stateCount the length of the initial states {level, trend (if any), s_1 … s_m (if seasonal)} */
     EtsGradient(EtsModel model, double[] y, int stateCount) {
         this.model = model;
         this.y = y;
         k = STATES + stateCount;
-        dl = new double[k];
-        db = new double[k];
-        ds = new double[model.seasonSlots()][k];
-        dq = new double[k];
-        dphib = new double[k];
-        gSum = new double[k];
-        gLog = new double[k];
+        int n = y.length;
+        levels = new double[n];
+        trends = new double[n];
+        oldests = new double[n];
+        fs = new double[n];
+        es = new double[n];
+        seasonAdjoint = new double[model.seasonSlots()];
     }
 
     /**
      * Writes the criterion's gradient into {@code g} (length {@link #STATES} + number of states):
      * ∂/∂α, ∂/∂β*, ∂/∂γ, ∂/∂φ (zero where the model lacks the parameter), then ∂/∂ each initial state.
+     * One forward pass of the recursions of {@link EtsFilter#criterion}, then one backward pass of
+     * their adjoints (reverse-mode differentiation), about three criterion evaluations in all.
      *
      * @return false where the criterion is infinite (a forecast not finite) or the gradient is not finite
      */
@@ -60,95 +64,123 @@ final class EtsGradient {
         boolean seasonal = season != EtsModel.Season.NONE;
         boolean additiveSeason = season == EtsModel.Season.ADDITIVE;
         boolean multiplicativeError = model.error() == EtsModel.Error.MULTIPLICATIVE;
-        boolean damped = model.damped();
         int m = model.seasonSlots();
+        int n = y.length;
+        double phi = model.damped() ? phiValue : 1;
         double l = initial[0];
         double b = trended ? initial[1] : 0;
         double[] s = new double[m]; // s_j at s[(head + j − 1) mod m], as EtsFilter.criterion keeps them
-        java.util.Arrays.fill(dl, 0);
-        java.util.Arrays.fill(db, 0);
-        java.util.Arrays.fill(gSum, 0);
-        java.util.Arrays.fill(gLog, 0);
-        dl[STATES] = 1;
-        if (trended) {
-            db[STATES + 1] = 1;
-        }
-        for (int j = 0; j < m; j++) {
-            java.util.Arrays.fill(ds[j], 0);
-        }
+        int first = model.firstSeasonIndex();
         if (seasonal) {
-            int first = model.firstSeasonIndex();
             System.arraycopy(initial, first, s, 0, m);
-            for (int j = 0; j < m; j++) {
-                ds[j][STATES + first + j] = 1;
-            }
         }
         int head = 0;
-        double phi = damped ? phiValue : 1;
         double sumE2 = 0;
-        for (double v : y) {
+        for (int t = 0; t < n; t++) {
+            double v = y[t];
             int slot = head == 0 ? m - 1 : head - 1;
             double phib = trended ? phi * b : 0;
             double q = l + phib;
             double oldest = seasonal ? s[slot] : 0;
-            double[] dOld = ds[slot];
-            for (int i = 0; i < k; i++) {
-                dphib[i] = trended ? phi * db[i] : 0;
-                dq[i] = dl[i] + dphib[i];
-            }
-            if (trended && damped) {
-                dphib[PHI] += b;
-                dq[PHI] += b;
-            }
             double f = !seasonal ? q : additiveSeason ? q + oldest : q * oldest;
             if (!Double.isFinite(f)) {
                 return false;
             }
             double e = multiplicativeError ? (v - f) / f : v - f;
             sumE2 += e * e;
-            // ∂e/∂f: −1 for additive errors, −v/f² for multiplicative ones
-            double eByF = multiplicativeError ? -v / (f * f) : -1;
+            levels[t] = l;
+            trends[t] = b;
+            oldests[t] = oldest;
+            fs[t] = f;
+            es[t] = e;
             double pp = !seasonal ? v : additiveSeason ? v - oldest : v / oldest;
-            double ppByOld = !seasonal ? 0 : additiveSeason ? -1 : -v / (oldest * oldest);
             double newL = q + alpha * (pp - q);
-            double growth = (newL - l) - phib;
-            double t = !seasonal ? 0 : additiveSeason ? v - q : v / q;
-            double tByQ = additiveSeason ? -1 : -v / (q * q);
-            double tMinusOld = t - oldest;
-            for (int i = 0; i < k; i++) {
-                double dOldI = seasonal ? dOld[i] : 0;
-                double df = !seasonal ? dq[i] : additiveSeason ? dq[i] + dOldI : q * dOldI + oldest * dq[i];
-                gSum[i] += e * eByF * df;
-                gLog[i] += df / f;
-                double dNewL = dq[i] + alpha * (ppByOld * dOldI - dq[i]);
-                if (trended) {
-                    db[i] = dphib[i] + betaStar * (dNewL - dl[i] - dphib[i]);
-                }
-                if (seasonal) {
-                    dOld[i] = dOldI + gamma * (tByQ * dq[i] - dOldI); // the new s_1 takes the old s_m's slot
-                }
-                dl[i] = dNewL;
-            }
-            dl[ALPHA] += pp - q;
             if (trended) {
-                db[ALPHA] += betaStar * (pp - q);
-                db[BETA_STAR] += growth;
+                b = phib + betaStar * ((newL - l) - phib);
             }
             if (seasonal) {
-                dOld[GAMMA] += tMinusOld;
-            }
-            if (trended) {
-                b = phib + betaStar * growth;
-            }
-            if (seasonal) {
+                double tt = additiveSeason ? v - q : v / q;
                 head = slot;
-                s[head] = oldest + gamma * tMinusOld;
+                s[head] = oldest + gamma * (tt - oldest);
             }
             l = newL;
         }
-        double n = y.length;
+        java.util.Arrays.fill(g, 0);
+        java.util.Arrays.fill(seasonAdjoint, 0);
+        double levelBar = 0; // the adjoints of the level and trend after step t
+        double trendBar = 0;
+        double errorWeight = 2 * n / sumE2; // ∂/∂e_t of n log Σe² is errorWeight · e_t
+        for (int t = n - 1; t >= 0; t--) {
+            double v = y[t];
+            int slot = m - 1 - t % m; // the slot step t read and wrote (head runs backwards from 0)
+            l = levels[t];
+            b = trends[t];
+            double oldest = oldests[t];
+            double f = fs[t];
+            double phib = trended ? phi * b : 0;
+            double q = l + phib;
+            double pp = !seasonal ? v : additiveSeason ? v - oldest : v / oldest;
+            double newL = q + alpha * (pp - q);
+            double oldBar = 0;
+            double qBar = 0;
+            double phibBar = 0;
+            double lBar = 0;
+            if (seasonal) { // s' = oldest + γ (tt − oldest), tt = v − q or v / q
+                double sBar = seasonAdjoint[slot];
+                double tt = additiveSeason ? v - q : v / q;
+                oldBar += (1 - gamma) * sBar;
+                g[GAMMA] += (tt - oldest) * sBar;
+                qBar += (additiveSeason ? -1 : -v / (q * q)) * gamma * sBar;
+            }
+            double newLBar = levelBar;
+            if (trended) { // b' = φb + β* ((newL − l) − φb)
+                newLBar += betaStar * trendBar;
+                lBar -= betaStar * trendBar;
+                phibBar += (1 - betaStar) * trendBar;
+                g[BETA_STAR] += ((newL - l) - phib) * trendBar;
+            }
+            // newL = q + α (pp − q)
+            qBar += (1 - alpha) * newLBar;
+            g[ALPHA] += (pp - q) * newLBar;
+            double ppBar = alpha * newLBar;
+            if (seasonal) {
+                oldBar += (additiveSeason ? -1 : -v / (oldest * oldest)) * ppBar;
+            }
+            // the criterion's own terms: e_t through f, and 2 log|f| for multiplicative errors
+            double fBar = errorWeight * es[t] * (multiplicativeError ? -v / (f * f) : -1)
+                    + (multiplicativeError ? 2 / f : 0);
+            if (!seasonal) {
+                qBar += fBar;
+            } else if (additiveSeason) {
+                qBar += fBar;
+                oldBar += fBar;
+            } else {
+                qBar += fBar * oldest;
+                oldBar += fBar * q;
+            }
+            lBar += qBar;
+            phibBar += qBar;
+            double bBar = 0;
+            if (trended) {
+                bBar = phi * phibBar;
+                if (model.damped()) {
+                    g[PHI] += b * phibBar;
+                }
+            }
+            levelBar = lBar;
+            trendBar = bBar;
+            if (seasonal) {
+                seasonAdjoint[slot] = oldBar;
+            }
+        }
+        g[STATES] = levelBar;
+        if (trended) {
+            g[STATES + 1] = trendBar;
+        }
+        if (seasonal) {
+            System.arraycopy(seasonAdjoint, 0, g, STATES + first, m);
+        }
         for (int i = 0; i < k; i++) {
-            g[i] = n * 2 * gSum[i] / sumE2 + (multiplicativeError ? 2 * gLog[i] : 0);
             if (!Double.isFinite(g[i])) {
                 return false;
             }
