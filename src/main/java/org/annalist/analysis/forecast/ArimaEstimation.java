@@ -12,7 +12,8 @@ import org.apache.commons.math3.linear.SingularValueDecomposition;
  * (the function {@code Arima} of the forecast package [2] calls it): conditional sum of squares
  * (CSS, the first d + mD + p + mP values conditioned on, later innovations from zero MA residuals),
  * exact Gaussian maximum likelihood by the Kalman filter ({@link ArimaKalman}), or CSS to start ML
- * (R's default "CSS-ML"). The search is R's BFGS ({@link ArimaOptimiser}); for ML the AR parts are
+ * (R's default "CSS-ML"). The search is R's BFGS ({@link ArimaOptimiser}), for CSS alone with the
+ * exact gradient ({@link CssGradient}) in place of R's differences; for ML the AR parts are
  * searched as partial autocorrelations, so the estimate is stationary by construction, and a
  * non-invertible MA estimate is replaced by its invertible twin ({@link ArimaPolynomials}). A CSS start
  * that is not stationary is refused, as R refuses it. A mean or drift enters as a regression term
@@ -127,7 +128,9 @@ final class ArimaEstimation {
             return Optional.empty();
         }
         if (method == Arima.Method.CSS) {
-            ArimaOptimiser css = new ArimaOptimiser(par -> cssObjective(par, ncond), parscale);
+            // the exact gradient, not R's differences: a model search fits dozens of these
+            CssGradient gradient = new CssGradient(order, ncond, differenced(y), xreg == null ? null : differenced(xreg));
+            ArimaOptimiser css = new ArimaOptimiser(par -> cssObjective(par, ncond), parscale, gradient::at);
             Optional<ArimaOptimiser.Result> found = css.minimise(init, ArimaOptimiser.MAX_ITERATIONS);
             if (found.isEmpty()) {
                 return Optional.empty();

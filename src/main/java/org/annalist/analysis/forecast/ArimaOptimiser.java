@@ -39,15 +39,32 @@ final class ArimaOptimiser {
         }
     }
 
+    /** An exact gradient of the objective at the unscaled parameters; false where it is not finite. */
+    interface Gradient {
+        boolean at(double[] par, double[] g);
+    }
+
     private final ToDoubleFunction<double[]> objective;
     private final double[] parscale;
     private final double[] point;
+    /** Null for R's central differences. */
+    private final Gradient exact;
 
     /** @param objective of the unscaled parameters; may return NaN or infinity where undefined */
     ArimaOptimiser(ToDoubleFunction<double[]> objective, double[] parscale) {
+        this(objective, parscale, null);
+    }
+
+    /**
+     * With an exact gradient in place of R's central differences: the same search, ending within the
+     * same relative tolerance of the same optimum (not at R's last iterate), for about 3 objective
+     * evaluations per gradient instead of 2 per parameter.
+     */
+    ArimaOptimiser(ToDoubleFunction<double[]> objective, double[] parscale, Gradient exact) {
         this.objective = objective;
         this.parscale = parscale.clone();
         this.point = new double[parscale.length];
+        this.exact = exact;
     }
 
     private double valueAtScaled(double[] scaled) {
@@ -57,8 +74,20 @@ final class ArimaOptimiser {
         return objective.applyAsDouble(point);
     }
 
-    /** Central differences on the scaled variables; empty when one is not finite (R stops with an error). */
+    /** Central differences (or the exact gradient) on the scaled variables; false when one is not finite (R stops with an error). */
     private boolean gradient(double[] scaled, double[] g) {
+        if (exact != null) { // chain rule to the scaled variables: ∂f/∂b_i = parscale_i ∂f/∂x_i
+            for (int i = 0; i < scaled.length; i++) {
+                point[i] = scaled[i] * parscale[i];
+            }
+            if (!exact.at(point, g)) {
+                return false;
+            }
+            for (int i = 0; i < g.length; i++) {
+                g[i] *= parscale[i];
+            }
+            return true;
+        }
         for (int i = 0; i < scaled.length; i++) {
             double keep = scaled[i];
             scaled[i] = keep + STEP;
