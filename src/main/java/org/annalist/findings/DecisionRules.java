@@ -198,6 +198,14 @@ public final class DecisionRules {
      */
     public static final int OUTLOOK_NARROWING_ERRORS = 100;
     /**
+     * Beyond the horizons the back-test scored, the outlook's 95 % interval grows at least as the
+     * back-test's errors grew, extended as h to a power between these two: 1/2, a random walk's
+     * errors (Hyndman &amp; Athanasopoulos 2021, §5.5, from memory), and 1, a mis-estimated slope's
+     * (common practice, no source).
+     */
+    public static final double OUTLOOK_SLOWEST_FAR_GROWTH = 0.5;
+    public static final double OUTLOOK_FASTEST_FAR_GROWTH = 1.0;
+    /**
      * After a break, the latest regime alone replaces all values only when the back-test's error
      * fitted on it is at least this many % lower (our rule: the history holds the season, and a
      * break changes the level, which the methods re-anchor by themselves).

@@ -17,6 +17,19 @@ import java.util.Arrays;
  * longest horizon tested the last ratio is carried forward, so the model's own growth of uncertainty
  * continues at the widened scale.
  *
+ * <p>Beyond that horizon the 95 % interval is also kept from growing more slowly than the
+ * back-test's errors grew ({@link #farGrowth}): the errors' 80 % quantile at the longest horizon
+ * tested, L, is extended to step h as e_L · (h / L)^b, b the growth exponent of the tested errors
+ * between steps 1 and L, held between {@value #SLOWEST_FAR_GROWTH} (a random walk's forecast errors,
+ * whose spread grows as √h: Hyndman &amp; Athanasopoulos 2021, §5.5, from memory) and
+ * {@value #FASTEST_FAR_GROWTH} (the error of a mis-estimated slope, growing in proportion to h: common
+ * practice, no source); {@value #SLOWEST_FAR_GROWTH} where one horizon was tested. Where the model's
+ * own interval, at the carried scale, is narrower than that, the step's 95 % interval is stretched by
+ * the ratio. Only the 95 % interval: its tail is what the few far-ahead values of a short back-test
+ * cannot check (on the M3 quarterly series, tested four steps ahead and forecast eight, the 95 %
+ * intervals held 90–91 % at steps seven and eight), while stretching the 80 % interval too made it
+ * wider than its level on the yearly series (M3Benchmark, December 2026).
+ *
  * <p>Last, the sum of the first cycle's forecasts (a year's total for monthly data) is checked the
  * same way against the back-test's errors of such sums ({@link HorizonErrors.CycleSums}): the model's
  * paths may let the months' errors cancel more than they did on the series' own past; if so, every
@@ -33,6 +46,11 @@ final class Widening {
 
     /** The fewest back-test errors the pooled check of an interval's coverage uses (our rule: the non-seasonal origins). */
     static final int POOLED_PAIRS = 8;
+
+    /** The slowest growth exponent of the errors beyond the horizons tested (a random walk's, √h). */
+    static final double SLOWEST_FAR_GROWTH = 0.5;
+    /** The fastest growth exponent of the errors beyond the horizons tested (a slope's error, h). */
+    static final double FASTEST_FAR_GROWTH = 1.0;
 
     /**
      * The fewest back-test errors from which the pooled check may also <em>narrow</em> the 80 %
@@ -83,10 +101,16 @@ final class Widening {
             empirical[k] = Math.max(empirical[k], empirical[k - 1]);
         }
         double[] factors = new double[h];
+        double[] far = new double[h];
+        Arrays.fill(far, 1);
         double carried = 1;
         for (int j = 0; j < h; j++) {
             if (j >= empirical.length) {
                 factors[j] = carried;
+                boolean clippedBelow = lo80[j] <= bounds.lower();
+                double own = clippedBelow ? hi80[j] - mean[j] : (hi80[j] - lo80[j]) / 2;
+                double wanted = farGrowth(empirical, j) * (useRelative ? Math.abs(mean[j]) : 1);
+                far[j] = own > 0 && wanted > own * carried ? wanted / (own * carried) : 1;
                 continue;
             }
             double wanted = useRelative ? empirical[j] * Math.abs(mean[j]) : empirical[j];
@@ -103,6 +127,7 @@ final class Widening {
         double[] factors95 = factors.clone();
         for (int j = 0; j < h; j++) {
             factors[j] *= pooled80;
+            factors95[j] *= far[j];
         }
         double pooled95 = pooledFactor(errors.pairs(), mean, lo95, hi95, factors95, 0.95, useRelative, bounds, false);
         for (int j = 0; j < h; j++) {
@@ -121,6 +146,24 @@ final class Widening {
             }
         }
         return new Widened(new Outlook.Forecast(f.model(), mean, lo80, hi80, lo95, hi95, paths), factors);
+    }
+
+    /**
+     * The back-test errors' 80 % quantile (relative or absolute, as {@code empirical}) extended to
+     * the 0-based step {@code j} beyond the {@code L} horizons tested: e_L · ((j + 1) / L)^b, b =
+     * log(e_L / e_1) / log L held between {@value #SLOWEST_FAR_GROWTH} and {@value #FASTEST_FAR_GROWTH}
+     * ({@value #SLOWEST_FAR_GROWTH} for L = 1 or errors that say nothing); NaN when e_L is not a number.
+     */
+    static double farGrowth(double[] empirical, int j) {
+        int last = empirical.length;
+        if (last == 0 || j < last) {
+            return last == 0 ? Double.NaN : empirical[Math.min(j, last - 1)];
+        }
+        double exponent = last > 1 && empirical[0] > 0 ? Math.log(empirical[last - 1] / empirical[0]) / Math.log(last)
+                : SLOWEST_FAR_GROWTH;
+        exponent = Double.isFinite(exponent) ? Math.min(FASTEST_FAR_GROWTH, Math.max(SLOWEST_FAR_GROWTH, exponent))
+                : SLOWEST_FAR_GROWTH;
+        return empirical[last - 1] * Math.pow((j + 1.0) / last, exponent);
     }
 
     /**

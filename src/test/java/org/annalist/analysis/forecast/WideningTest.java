@@ -172,4 +172,72 @@ class WideningTest {
                     .isGreaterThanOrEqualTo(sums.relative80() * after[0] * (1 - 1e-6));
         }
     }
+
+    /**
+     * Planted truth: a random walk with unit steps, forecast by its last value, whose k-step errors
+     * are N(0, k) (Hyndman &amp; Athanasopoulos 2021, §5.5, from memory), back-tested four steps ahead
+     * with the exact 80 % quantiles 1.2816·√k (normal quantile, published tables); the model's own
+     * intervals are flat (±1.2816 and ±1.96, the one-step ones) for eight steps. Steps five to eight:
+     * the 80 % interval keeps the scale carried from step four (±1.2816·2, as before this rule), the
+     * 95 % interval grows as the errors did, ±1.96·√k, and on 20,000 seeded simulated continuations
+     * it holds 95 % ± 1 point of the values eight steps ahead, where the carried scale holds about
+     * 83 % (P(|Z| &lt; 1.96·2/√8)).
+     */
+    @Test
+    void beyondTheTestedHorizonsTheNinetyFivePercentIntervalGrowsAsTheErrorsDid() {
+        int h = 8;
+        double z80 = 1.2815516;
+        double z95 = 1.9599640;
+        double[] mean = new double[h];
+        double[] lo80 = new double[h];
+        double[] hi80 = new double[h];
+        double[] lo95 = new double[h];
+        double[] hi95 = new double[h];
+        for (int k = 0; k < h; k++) {
+            lo80[k] = -z80;
+            hi80[k] = z80;
+            lo95[k] = -z95;
+            hi95[k] = z95;
+        }
+        double[] quantile = new double[4];
+        for (int k = 0; k < 4; k++) {
+            quantile[k] = z80 * Math.sqrt(k + 1);
+        }
+        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE,
+                java.util.Optional.empty(), false), mean, lo80, hi80, lo95, hi95, new double[0][h]);
+        HorizonErrors errors = new HorizonErrors(quantile, new double[4], new int[4],
+                new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
+        Outlook.Forecast w = Widening.apply(f, errors, false, Outlook.Bounds.NONE).forecast();
+        for (int k = 4; k < h; k++) {
+            assertThat(w.hi80()[k]).as("step %d, 80 %%", k + 1).isCloseTo(2 * z80, within(1e-9));
+            assertThat(w.hi95()[k]).as("step %d, 95 %%", k + 1).isCloseTo(z95 * Math.sqrt(k + 1), within(1e-9));
+            assertThat(w.lo95()[k]).isCloseTo(-z95 * Math.sqrt(k + 1), within(1e-9));
+        }
+        java.util.Random random = new java.util.Random(20261203L);
+        int paths = 20_000;
+        int inside = 0;
+        for (int p = 0; p < paths; p++) {
+            double y = 0;
+            for (int k = 0; k < h; k++) {
+                y += random.nextGaussian();
+            }
+            inside += y >= w.lo95()[h - 1] && y <= w.hi95()[h - 1] ? 1 : 0;
+        }
+        assertThat(inside / (double) paths).isCloseTo(0.95, within(0.01));
+    }
+
+    /**
+     * The growth of the errors beyond the horizons tested (our rule, see {@link Widening}): one
+     * horizon tested gives the random walk's √h; errors that grew as k² over the tested horizons are
+     * extended in proportion to h, not faster; errors that did not grow, as √h, not slower; within
+     * the tested horizons the tested quantile itself.
+     */
+    @Test
+    void theErrorsGrowthBeyondTheTestedHorizonsLiesBetweenARandomWalksAndASlopes() {
+        assertThat(Widening.farGrowth(new double[] {2}, 3)).isCloseTo(2 * Math.sqrt(4), within(1e-12));
+        assertThat(Widening.farGrowth(new double[] {1, 4, 9, 16}, 7)).isCloseTo(16 * 8 / 4.0, within(1e-12));
+        assertThat(Widening.farGrowth(new double[] {3, 3, 3, 3}, 7)).isCloseTo(3 * Math.sqrt(2), within(1e-12));
+        assertThat(Widening.farGrowth(new double[] {1, 2, 3, 4}, 2)).isEqualTo(3);
+        assertThat(Widening.farGrowth(new double[] {Double.NaN, 2}, 3)).isCloseTo(2 * Math.sqrt(2), within(1e-12));
+    }
 }
