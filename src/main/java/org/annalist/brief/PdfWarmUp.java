@@ -3,6 +3,7 @@ package org.annalist.brief;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
@@ -32,13 +33,17 @@ import org.annalist.series.Series;
  * It writes no file, reports nothing (a failure here is dropped; the real brief meets and reports
  * the same cause), and never delays the end of the process: its thread is a daemon, and a failing
  * run exits without waiting for it. It runs at most once per JVM, only for commands that write a
- * brief, and not on a single core, where it would only compete with the analysis.
+ * brief, and not where no core is spare (a single core, or a load average at or above the number
+ * of cores), where it would only compete with the analysis.
  */
 final class PdfWarmUp {
 
     private static final AtomicBoolean STARTED = new AtomicBoolean();
 
-    /** Set to {@code false} (a system property) to measure a cold brief without it. */
+    /**
+     * A system property for measuring: {@code false} turns the warm-up off, {@code always} runs it
+     * on a busy machine too; anything else, or none, runs it where a core is spare.
+     */
     static final String PROPERTY = "annalist.warmup";
 
     private PdfWarmUp() {
@@ -53,13 +58,29 @@ final class PdfWarmUp {
      * @param engine   the bundled templates' engine
      */
     static void start(java.util.Optional<String> template, Locale language, TemplateEngine engine) {
-        if (Runtime.getRuntime().availableProcessors() < 2 || !Boolean.parseBoolean(System.getProperty(PROPERTY, "true"))
+        int cores = Runtime.getRuntime().availableProcessors();
+        String mode = System.getProperty(PROPERTY, "");
+        if (cores < 2 || mode.equals("false") || (!mode.equals("always") && busy(cores))
                 || !STARTED.compareAndSet(false, true)) {
             return;
         }
         Thread thread = new Thread(() -> run(template, language, engine), "pdf warm-up");
         thread.setDaemon(true);
         thread.start();
+    }
+
+    /**
+     * Whether the machine has no spare core: the run queue's average over the last minute (Linux's
+     * {@code /proc/loadavg}) is at least the number of cores. Where that cannot be read, a core is
+     * taken to be spare.
+     */
+    static boolean busy(int cores) {
+        try {
+            String[] load = Files.readString(Path.of("/proc/loadavg")).trim().split("\\s+");
+            return Double.parseDouble(load[0]) >= cores;
+        } catch (IOException | RuntimeException e) {
+            return false;
+        }
     }
 
     private static void run(java.util.Optional<String> template, Locale language, TemplateEngine engine) {

@@ -1,6 +1,7 @@
 package org.annalist.brief;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -39,6 +40,14 @@ class PdfWarmUpTest {
         // other test classes may run in a second JVM at the same time: only new files named like ours would count
         assertThat(listing(Path.of(System.getProperty("java.io.tmpdir")))).filteredOn(name -> !tempBefore.contains(name))
                 .noneMatch(name -> name.contains("warm") || name.endsWith(".pdf"));
+    }
+
+    /** Linux's /proc/loadavg: a load average is never negative, and never reaches Integer.MAX_VALUE. */
+    @Test
+    void aMachineCountsAsBusyWhenItsLoadAverageReachesItsCores() {
+        assumeTrue(Files.isReadable(Path.of("/proc/loadavg")), "needs Linux's /proc/loadavg");
+        assertThat(PdfWarmUp.busy(0)).isTrue();
+        assertThat(PdfWarmUp.busy(Integer.MAX_VALUE)).isFalse();
     }
 
     @Test
