@@ -1,9 +1,9 @@
 package org.annalist.brief;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
@@ -70,17 +70,12 @@ final class PdfWarmUp {
     }
 
     /**
-     * Whether the machine has no spare core: the run queue's average over the last minute (Linux's
-     * {@code /proc/loadavg}) is at least the number of cores. Where that cannot be read, a core is
-     * taken to be spare.
+     * Whether the machine has no spare core: the run queue's average over the last minute, as the
+     * JVM reports it, is at least the number of cores. Where the JVM cannot tell (a negative
+     * average), a core is taken to be spare.
      */
     static boolean busy(int cores) {
-        try {
-            String[] load = Files.readString(Path.of("/proc/loadavg")).trim().split("\\s+");
-            return Double.parseDouble(load[0]) >= cores;
-        } catch (IOException | RuntimeException e) {
-            return false;
-        }
+        return ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage() >= cores;
     }
 
     private static void run(java.util.Optional<String> template, Locale language, TemplateEngine engine) {

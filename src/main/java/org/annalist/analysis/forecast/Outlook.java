@@ -262,13 +262,21 @@ public final class Outlook {
      * @param widening per step, the factor by which the chosen forecast's 80 % interval was widened
      *                 (above 1) or narrowed (below 1) to the back-test's errors ({@link Widening}; 1
      *                 where it matched them, all 1 without a back-test)
+     * @param widened95 whether any step's 95 % interval was widened to the back-test's errors, with
+     *                 the 80 % interval or on its own (beyond the horizons tested, or by the pooled check)
      */
     public record Result(Forecast chosen, Choice choice, Span span, List<Score> backtest, int origins, int cycle,
-                         double[] widening) {
+                         double[] widening, boolean widened95) {
 
         public Result {
             backtest = List.copyOf(backtest);
             widening = widening.clone();
+        }
+
+        /** A result whose 95 % intervals were widened only where its 80 % intervals were. */
+        public Result(Forecast chosen, Choice choice, Span span, List<Score> backtest, int origins, int cycle,
+                      double[] widening) {
+            this(chosen, choice, span, backtest, origins, cycle, widening, Arrays.stream(widening).anyMatch(w -> w > 1));
         }
 
         @Override
@@ -276,14 +284,9 @@ public final class Outlook {
             return widening.clone();
         }
 
-        /** Whether any step's intervals were widened to the back-test's errors. */
+        /** Whether any step's intervals (80 % or 95 %) were widened to the back-test's errors. */
         public boolean widened() {
-            for (double w : widening) {
-                if (w > 1) {
-                    return true;
-                }
-            }
-            return false;
+            return widened95 || Arrays.stream(widening).anyMatch(w -> w > 1);
         }
 
         /** Whether any step's 80 % interval was narrowed to the back-test's errors. */
@@ -366,14 +369,17 @@ public final class Outlook {
         Method chosen = f.method();
         List<Score> scores = run.map(Backtest.Run::scores).orElse(List.of());
         double[] widening = ones(horizon);
+        boolean widened95 = false;
         Optional<Score> own = scores.stream().filter(s -> s.method() == chosen).findFirst();
         if (own.isPresent()) {
             boolean positive = bounds.lower() >= 0 && Arrays.stream(fitted.y()).allMatch(v -> v > 0);
             Widening.Widened w = Widening.apply(f, own.get().errors(), positive, bounds);
             f = w.forecast();
             widening = w.factors();
+            widened95 = w.widened95();
         }
-        return Optional.of(new Result(f, choice, span, scores, scores.isEmpty() ? 0 : origins, cycle, widening));
+        return Optional.of(new Result(f, choice, span, scores, scores.isEmpty() ? 0 : origins, cycle, widening,
+                widened95));
     }
 
     /** The combination, unless a single method was clearly and steadily better in the back-test. */

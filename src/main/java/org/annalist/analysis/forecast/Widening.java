@@ -64,8 +64,12 @@ final class Widening {
      */
     static final int NARROWING_PAIRS = 100;
 
-    /** The forecast with its intervals widened or narrowed, and the factor applied at each step (1: unchanged). */
-    record Widened(Outlook.Forecast forecast, double[] factors) {
+    /**
+     * The forecast with its intervals widened or narrowed, the factor applied to its 80 % interval at
+     * each step (1: unchanged), and whether any step's 95 % interval was widened — by those factors
+     * or on its own, beyond the horizons tested or by the pooled check.
+     */
+    record Widened(Outlook.Forecast forecast, double[] factors, boolean widened95) {
 
         Widened {
             factors = factors.clone();
@@ -130,8 +134,10 @@ final class Widening {
             factors95[j] *= far[j];
         }
         double pooled95 = pooledFactor(errors.pairs(), mean, lo95, hi95, factors95, 0.95, useRelative, bounds, false);
+        boolean widened95 = false;
         for (int j = 0; j < h; j++) {
             factors95[j] = Math.max(factors[j], factors95[j] * pooled95);
+            widened95 |= factors95[j] > 1;
             double c = factors[j];
             double c95 = factors95[j];
             lo95[j] = bounds.clip(mean[j] - c95 * (mean[j] - lo95[j]));
@@ -145,7 +151,7 @@ final class Widening {
                 path[j] = bounds.clip(mean[j] + c * (path[j] - mean[j]));
             }
         }
-        return new Widened(new Outlook.Forecast(f.model(), mean, lo80, hi80, lo95, hi95, paths), factors);
+        return new Widened(new Outlook.Forecast(f.model(), mean, lo80, hi80, lo95, hi95, paths), factors, widened95);
     }
 
     /**
