@@ -47,6 +47,9 @@ exit /b 2
 :run
 set "ANNALIST_DEFAULTS=-XX:TieredStopAtLevel=1 -XX:-UsePerfData -Xshare:auto -Xlog:cds*=off"
 echo %ANNALIST_JAVA_OPTS% | findstr /r /c:"-XX:+Use[A-Za-z]*GC" >nul || set "ANNALIST_DEFAULTS=-XX:+UseSerialGC %ANNALIST_DEFAULTS%"
-echo %ANNALIST_JAVA_OPTS% | findstr /c:"-Xmx" /c:"MaxHeapSize" /c:"MaxRAM" >nul || set "ANNALIST_DEFAULTS=-Xmx640m -Xms64m %ANNALIST_DEFAULTS%"
+rem a batch starts its heap at 192 MB, so that its footprint does not creep up with its length
+set "ANNALIST_START_HEAP=-Xms64m"
+if /i "%~1"=="batch" set "ANNALIST_START_HEAP=-Xms192m"
+echo %ANNALIST_JAVA_OPTS% | findstr /c:"-Xmx" /c:"MaxHeapSize" /c:"MaxRAM" >nul || set "ANNALIST_DEFAULTS=-Xmx640m %ANNALIST_START_HEAP% %ANNALIST_DEFAULTS%"
 "%JAVA_EXE%" %ANNALIST_DEFAULTS% "-Dannalist.home=%ANNALIST_HOME%" %ANNALIST_JAVA_OPTS% -cp "%ANNALIST_HOME%\lib\annalist.jar" org.annalist.cli.Main %*
 exit /b %ERRORLEVEL%
