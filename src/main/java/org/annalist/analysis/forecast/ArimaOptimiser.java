@@ -76,7 +76,11 @@ final class ArimaOptimiser {
 
     /** Central differences (or the exact gradient) on the scaled variables; false when one is not finite (R stops with an error). */
     private boolean gradient(double[] scaled, double[] g) {
-        if (exact != null) { // chain rule to the scaled variables: ∂f/∂b_i = parscale_i ∂f/∂x_i
+        return gradient(scaled, g, exact != null);
+    }
+
+    private boolean gradient(double[] scaled, double[] g, boolean useExact) {
+        if (useExact) { // chain rule to the scaled variables: ∂f/∂b_i = parscale_i ∂f/∂x_i
             for (int i = 0; i < scaled.length; i++) {
                 point[i] = scaled[i] * parscale[i];
             }
@@ -266,9 +270,11 @@ final class ArimaOptimiser {
             double keep = scaled[i];
             double eps = STEP / parscale[i]; // [2] optimhess: ndeps / parscale on the scaled variable
             scaled[i] = keep + eps;
-            boolean ok = gradient(scaled, g1);
+            // R's differences here even with an exact gradient: whether a model's variances are valid
+            // (the forecast package's check) should not depend on which gradient the search used
+            boolean ok = gradient(scaled, g1, false);
             scaled[i] = keep - eps;
-            ok &= gradient(scaled, g2);
+            ok &= gradient(scaled, g2, false);
             scaled[i] = keep;
             if (!ok) {
                 return Optional.empty();

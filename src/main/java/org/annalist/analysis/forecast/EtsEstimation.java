@@ -79,7 +79,7 @@ final class EtsEstimation {
      * heuristic start in units of the series' scale (seasonal factors in their own units), so that
      * the search sees variables of similar size; the last season follows from the others.
      */
-    private static final class Coordinates {
+    static final class Coordinates {
 
         private final EtsModel model;
         private final double[] y;
@@ -89,7 +89,7 @@ final class EtsEstimation {
         private final double scale;
         private final double[] lower;
         private final double[] upper;
-        private final double[] guess;
+        final double[] guess;
         /** The initial states of the point being evaluated, reused from one evaluation to the next. */
         private final double[] initial;
         /** The gradient's pass and its result in α, β*, γ, φ and the states, made at the first gradient. */
