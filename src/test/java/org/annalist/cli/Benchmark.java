@@ -331,7 +331,7 @@ public final class Benchmark {
     }
 
     /** A positive monthly series: trend, multiplicative season, noise, an occasional shock. */
-    private static double[] synthetic(Random random, int n) {
+    static double[] synthetic(Random random, int n) {
         double[] x = new double[n];
         double slope = random.nextGaussian() * 0.004;
         for (int t = 0; t < n; t++) {

@@ -30,12 +30,12 @@ public final class OutlookSpeed {
         Random random = new Random(42);
         double[][] monthly200 = new double[count][];
         for (int i = 0; i < count; i++) {
-            monthly200[i] = synthetic(random, 200);
+            monthly200[i] = Benchmark.synthetic(random, 200);
         }
         Series[] twentyYears = new Series[count];
         for (int i = 0; i < count; i++) {
             twentyYears[i] = Series.builder("s" + i, Frequency.MONTHLY)
-                    .append(Period.month(2005, 1), synthetic(random, 240)).snapshot();
+                    .append(Period.month(2005, 1), Benchmark.synthetic(random, 240)).snapshot();
         }
         Analyst analyst = new Analyst();
         for (int round = 0; round < 2; round++) { // warm-up: the same work twice
@@ -60,17 +60,5 @@ public final class OutlookSpeed {
                 + "%.1f ms CPU per series (warm, %d series)%n", outlookMs, count);
         System.out.printf(Locale.ROOT, "Whole analysis with outlook, 20-year monthly series, one core: "
                 + "%.1f ms CPU per series (warm, %d series)%n", wholeMs, count);
-    }
-
-    /** {@link Benchmark}'s recipe: a trend, a multiplicative season, 5 % noise, rare outliers. */
-    private static double[] synthetic(Random random, int n) {
-        double[] x = new double[n];
-        double slope = random.nextGaussian() * 0.004;
-        for (int t = 0; t < n; t++) {
-            double season = 1 + 0.3 * Math.sin(2 * Math.PI * (t - 3) / 12);
-            x[t] = 1000 * Math.exp(slope * t) * season * Math.exp(0.05 * random.nextGaussian())
-                    * (random.nextDouble() < 0.01 ? 1.5 : 1);
-        }
-        return x;
     }
 }
