@@ -192,25 +192,8 @@ class WideningTest {
         int h = 8;
         double z80 = 1.2815516;
         double z95 = 1.9599640;
-        double[] mean = new double[h];
-        double[] lo80 = new double[h];
-        double[] hi80 = new double[h];
-        double[] lo95 = new double[h];
-        double[] hi95 = new double[h];
-        for (int k = 0; k < h; k++) {
-            lo80[k] = -z80;
-            hi80[k] = z80;
-            lo95[k] = -z95;
-            hi95[k] = z95;
-        }
-        double[] quantile = new double[4];
-        for (int k = 0; k < 4; k++) {
-            quantile[k] = z80 * Math.sqrt(k + 1);
-        }
-        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE,
-                java.util.Optional.empty(), false), mean, lo80, hi80, lo95, hi95, new double[0][h]);
-        HorizonErrors errors = new HorizonErrors(quantile, new double[4], new int[4],
-                new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
+        Outlook.Forecast f = centredForecast(h, k -> 1.0);
+        HorizonErrors errors = randomWalkErrors(4);
         Outlook.Forecast w = Widening.apply(f, errors, false, Outlook.Bounds.NONE).forecast();
         for (int k = 4; k < h; k++) {
             assertThat(w.hi80()[k]).as("step %d, 80 %%", k + 1).isCloseTo(2 * z80, within(1e-9));
@@ -239,28 +222,9 @@ class WideningTest {
     @Test
     void aNinetyFivePercentIntervalWidenedOnItsOwnCountsAsWidened() {
         int h = 8;
-        double z80 = 1.2815516;
         double z95 = 1.9599640;
-        double[] mean = new double[h];
-        double[] lo80 = new double[h];
-        double[] hi80 = new double[h];
-        double[] lo95 = new double[h];
-        double[] hi95 = new double[h];
-        double[] quantile = new double[4];
-        for (int k = 0; k < h; k++) {
-            double tested = Math.sqrt(Math.min(k + 1, 4));
-            lo80[k] = -z80 * tested;
-            hi80[k] = z80 * tested;
-            lo95[k] = -z95 * tested;
-            hi95[k] = z95 * tested;
-            if (k < 4) {
-                quantile[k] = z80 * Math.sqrt(k + 1);
-            }
-        }
-        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE,
-                java.util.Optional.empty(), false), mean, lo80, hi80, lo95, hi95, new double[0][h]);
-        HorizonErrors errors = new HorizonErrors(quantile, new double[4], new int[4],
-                new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
+        Outlook.Forecast f = centredForecast(h, k -> Math.sqrt(Math.min(k + 1, 4)));
+        HorizonErrors errors = randomWalkErrors(4);
         Widening.Widened w = Widening.apply(f, errors, false, Outlook.Bounds.NONE);
         assertThat(w.factors()).containsOnly(1.0);
         assertThat(w.forecast().hi95()[h - 1]).isCloseTo(z95 * Math.sqrt(h), within(1e-9));
@@ -285,5 +249,35 @@ class WideningTest {
         assertThat(Widening.farGrowth(new double[] {3, 3, 3, 3}, 7)).isCloseTo(3 * Math.sqrt(2), within(1e-12));
         assertThat(Widening.farGrowth(new double[] {1, 2, 3, 4}, 2)).isEqualTo(3);
         assertThat(Widening.farGrowth(new double[] {Double.NaN, 2}, 3)).isCloseTo(2 * Math.sqrt(2), within(1e-12));
+    }
+
+    /**
+     * A forecast of 0 with normal intervals, ±1.2816 and ±1.96 (published normal tables) times
+     * {@code scale} at each 0-based step.
+     */
+    private static Outlook.Forecast centredForecast(int h, java.util.function.IntToDoubleFunction scale) {
+        double[] lo80 = new double[h];
+        double[] hi80 = new double[h];
+        double[] lo95 = new double[h];
+        double[] hi95 = new double[h];
+        for (int k = 0; k < h; k++) {
+            double s = scale.applyAsDouble(k);
+            lo80[k] = -1.2815516 * s;
+            hi80[k] = 1.2815516 * s;
+            lo95[k] = -1.9599640 * s;
+            hi95[k] = 1.9599640 * s;
+        }
+        return new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(),
+                false), new double[h], lo80, hi80, lo95, hi95, new double[0][h]);
+    }
+
+    /** A random walk's back-test errors over {@code tested} horizons: 80 % quantiles 1.2816·√k (normal tables). */
+    private static HorizonErrors randomWalkErrors(int tested) {
+        double[] quantile = new double[tested];
+        for (int k = 0; k < tested; k++) {
+            quantile[k] = 1.2815516 * Math.sqrt(k + 1);
+        }
+        return new HorizonErrors(quantile, new double[tested], new int[tested],
+                new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0));
     }
 }
