@@ -60,11 +60,15 @@ final class PdfWarmUp {
     static void start(java.util.Optional<String> template, Locale language, TemplateEngine engine) {
         int cores = Runtime.getRuntime().availableProcessors();
         String mode = System.getProperty(PROPERTY, "");
-        if (cores < 2 || mode.equals("false") || (!mode.equals("always") && busy(cores))
-                || !STARTED.compareAndSet(false, true)) {
+        if (cores < 2 || mode.equals("false") || !STARTED.compareAndSet(false, true)) {
             return;
         }
-        Thread thread = new Thread(() -> run(template, language, engine), "pdf warm-up");
+        // the load is read on the new thread: the JVM's management classes it loads stay off the brief's path
+        Thread thread = new Thread(() -> {
+            if (mode.equals("always") || !busy(cores)) {
+                warmUpHere(template, language, engine);
+            }
+        }, "pdf warm-up");
         thread.setDaemon(true);
         thread.start();
     }
@@ -76,10 +80,6 @@ final class PdfWarmUp {
      */
     static boolean busy(int cores) {
         return ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage() >= cores;
-    }
-
-    private static void run(java.util.Optional<String> template, Locale language, TemplateEngine engine) {
-        warmUpHere(template, language, engine);
     }
 
     /**
