@@ -21,6 +21,7 @@ import org.annalist.findings.OutlierFinding;
 import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.SeriesFacts;
 import org.annalist.findings.TrendFinding;
+import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 
 /** The text form of {@code analyze}: one line per finding with its evidence, as an analyst's notes. */
@@ -47,10 +48,10 @@ public final class AnalystNotes {
                 Terms.formReason(form.reason()), form.elasticity() == null ? ""
                         : String.format(Locale.ROOT, " (elasticity of swing to level %.2f over %d years, level ratio %.2f)",
                         form.elasticity(), form.cycles(), form.levelRatio()));
-        line(out, "trend", "%s", trend(f.trend()));
+        line(out, "trend", "%s", trend(f.trend(), slopeTime(f)));
         f.trend().latestRegime().ifPresent(latest -> line(out, "since break",
-                "%s since %s: Sen slope %s per year (95%% CI %s to %s), %s", Terms.direction(latest.direction()),
-                latest.since().label(), num(latest.slopePerYear()), num(latest.lower95()), num(latest.upper95()),
+                "%s since %s: Sen slope %s %s (95%% CI %s to %s), %s", Terms.direction(latest.direction()),
+                latest.since().label(), num(latest.slopePerYear()), slopeTime(f), num(latest.lower95()), num(latest.upper95()),
                 p(latest.pValue())));
         line(out, "seasonality", "%s", seasonality(f.seasonality(), MeasureWords.measureOf(f).relativeChanges()));
         line(out, "cycle", "%s", cycle(f.cycle()));
@@ -60,10 +61,10 @@ public final class AnalystNotes {
         for (BreakFinding b : f.breaks()) {
             String interval = b.ci95().get(0).equals(b.ci95().get(1)) ? b.ci95().get(0) + " only"
                     : b.ci95().get(0) + " to " + b.ci95().get(1);
-            line(out, "break", "%s (95%% interval %s): %s; fitted lines at the break %s → %s (%s), slope %s → %s"
-                            + " a year; sup-F %.1f, %s%s", b.period(), interval, Terms.breakKind(b.kind()),
+            line(out, "break", "%s (95%% interval %s): %s; fitted lines at the break %s → %s (%s), slope %s → %s %s"
+                            + "; sup-F %.1f, %s%s", b.period(), interval, Terms.breakKind(b.kind()),
                     num(b.levelBefore()), num(b.levelAfter()), change(f, b.levelAfter() - b.levelBefore(), b.changePct()),
-                    num(b.slopeBefore()), num(b.slopeAfter()),
+                    num(b.slopeBefore()), num(b.slopeAfter()), slopeTime(f),
                     b.statistic(), p(b.pValue()), b.provisional() ? "; provisional" : "");
         }
         if (f.breaks().size() > 1) {
@@ -192,7 +193,12 @@ public final class AnalystNotes {
         }
     }
 
-    private static String trend(TrendFinding t) {
+    /** What the slopes in units are counted over: {@code a year}, or {@code a month each year} for a flow. */
+    private static String slopeTime(Findings f) {
+        return MeasureWords.slopeTime(MeasureWords.measureOf(f), Frequency.fromLabel(f.series().frequency()));
+    }
+
+    private static String trend(TrendFinding t, String slopeTime) {
         if (!t.assessed()) {
             return "not assessed: " + Terms.trendNotAssessed();
         }
@@ -201,8 +207,9 @@ public final class AnalystNotes {
                 Terms.test(k.test()), k.statistic(), p(k.pValue()))).orElse("");
         String ofLevel = t.changePctPerYear() == null ? ""
                 : String.format(Locale.ROOT, ", %+.2f %% of the mean level per year", t.changePctPerYear());
-        return String.format(Locale.ROOT, "%s — %s: z = %.2f, %s, n = %d; Sen slope %s per year (95%% CI %s to %s)%s%s",
-                words, Terms.trendTest(t.test()), t.statistic(), p(t.pValue()), t.n(), num(t.slopePerYear()), num(t.slopeCi95().get(0)),
+        return String.format(Locale.ROOT, "%s — %s: z = %.2f, %s, n = %d; Sen slope %s %s (95%% CI %s to %s)%s%s",
+                words, Terms.trendTest(t.test()), t.statistic(), p(t.pValue()), t.n(), num(t.slopePerYear()), slopeTime,
+                num(t.slopeCi95().get(0)),
                 num(t.slopeCi95().get(1)), ofLevel, kendall);
     }
 

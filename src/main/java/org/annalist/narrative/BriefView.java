@@ -116,10 +116,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param sinceBreak the trend within the latest regime, or null
      * @param percentPerYear the slope as % of the average level; empty where changes are not in % (a rate, a temperature)
      * @param slopeUnit  what the slope is counted in, with a leading space: the unit, {@code  percentage points}, {@code  °F}
+     * @param slopeTime  what the slope is counted over, after its unit: {@code a year}, or {@code a month each year}
+     *                   for a flow's monthly values ({@link MeasureWords#slopeTime})
      */
     public record TrendView(boolean assessed, boolean rising, boolean falling, String test, String statistic, String pValue,
                             String slopePerYear, String slopeSize, String lower, String upper, String percentPerYear, String basis,
-                            String reason, SinceBreak sinceBreak, String seasonalKendall, String slopeUnit) {
+                            String reason, SinceBreak sinceBreak, String seasonalKendall, String slopeUnit, String slopeTime) {
     }
 
     /** @param since the first period of the latest regime, in words */
@@ -164,8 +166,10 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param change        size of the step without sign ({@code 23.1 %}, or in units with the unit when
      *                      the values are not all positive); {@code rise} gives its direction
      * @param step          the break is reported as a step in level
-     * @param slope         the break is reported as a change of slope ({@code slopeBefore} → {@code slopeAfter}
-     *                      a year, each with its unit)
+     * @param slope         the break is reported as a change of slope ({@code slopeBefore} → {@code slopeAfter},
+     *                      each with its unit, then {@code slopeTime})
+     * @param slopeTime     what the slopes are counted over: {@code a year} for slopes in % (a series worked in
+     *                      logs), else as {@link TrendView#slopeTime()}
      * @param drifted       the regime before this break is the previous break's and its line moved from
      *                      {@code previousAfter} to {@code before}
      * @param overall       on the last of two or more breaks: the ratio of fitted levels from just before the
@@ -176,7 +180,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                            String change, boolean rise, String statistic, String pValue, boolean provisional,
                            boolean step, boolean slope, String slopeBefore, String slopeAfter, boolean drifted,
                            String previousAfter, String overall, boolean overallRise, String firstBefore,
-                           String firstPeriod) {
+                           String firstPeriod, String slopeTime) {
     }
 
     /**

@@ -122,15 +122,7 @@ public final class BriefViews {
         if (series.unit().isEmpty()) {
             return "";
         }
-        String per = switch (series.frequency()) {
-            case ANNUAL -> "a year";
-            case HALF_YEARLY -> "a half-year";
-            case QUARTERLY -> "a quarter";
-            case MONTHLY -> "a month";
-            case WEEKLY -> "a week";
-            case DAILY, BUSINESS_DAILY -> "a day";
-        };
-        return series.unit() + " " + per;
+        return series.unit() + " " + MeasureWords.perPeriod(series.frequency());
     }
 
     static String listPeriods(List<Period> periods, Formats f) {

@@ -33,7 +33,10 @@ final class ClaimWords {
         this.measure = measure;
     }
 
-    /** The size of a claim without its sign: {@code 1.8 %}, {@code 0.9 percentage points}, {@code 2,940 nights a year}. */
+    /**
+     * The size of a claim without its sign: {@code 1.8 %}, {@code 0.9 percentage points},
+     * {@code 2,940 nights a month each year} (a monthly flow's slope, {@link MeasureWords#slopeTime}).
+     */
     String size(Claim c) {
         return size(c, units());
     }
@@ -45,11 +48,11 @@ final class ClaimWords {
             // a straight line's slope over the average level: not a compound growth rate, so said as what it is
             case PERCENT_PER_YEAR -> f.percent(v) + " of the average level a year";
             case UNITS -> f.value(v) + units;
-            case UNITS_PER_YEAR -> f.significant(v) + units + " a year";
+            case UNITS_PER_YEAR -> f.significant(v) + units + " " + MeasureWords.slopeTime(measure, c.to().frequency());
         };
     }
 
-    /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a year}. */
+    /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a month each year}. */
     String signedSize(Claim c) {
         return signed(c, size(c));
     }

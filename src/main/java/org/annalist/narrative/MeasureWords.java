@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import java.util.Locale;
 import org.annalist.findings.Findings;
 import org.annalist.findings.Measure;
+import org.annalist.series.Frequency;
 import org.annalist.series.Series;
 
 /**
@@ -96,6 +97,29 @@ final class MeasureWords {
     String size(double change, Double changePct) {
         return percent() ? (changePct == null ? "" : f.percent(Math.abs(changePct)))
                 : f.value(Math.abs(change)) + differenceUnit();
+    }
+
+    /** The span one value covers, as said after a unit: {@code a month}, {@code a quarter}, {@code a year}. */
+    static String perPeriod(Frequency frequency) {
+        return switch (frequency) {
+            case ANNUAL -> "a year";
+            case HALF_YEARLY -> "a half-year";
+            case QUARTERLY -> "a quarter";
+            case MONTHLY -> "a month";
+            case WEEKLY -> "a week";
+            case DAILY, BUSINESS_DAILY -> "a day";
+        };
+    }
+
+    /**
+     * What a slope in units is counted over, said after its unit: {@code a year} where one value is a
+     * year's or the measure is not summed (a level's, a rate's or a temperature's change a year is
+     * what it reads as), else {@code a month each year}. A flow's slope is fitted to its monthly
+     * (quarterly, daily...) values, so it is the change of one period's total a year: a twelfth of
+     * the yearly total's change for monthly data, which "nights a year" would be read as.
+     */
+    static String slopeTime(Measure measure, Frequency frequency) {
+        return measure.summed() && frequency != Frequency.ANNUAL ? perPeriod(frequency) + " each year" : "a year";
     }
 
     /** The sentence that says once how the series is treated. */

@@ -48,7 +48,7 @@ final class SectionViews {
         TrendFinding t = findings.trend();
         if (!t.assessed()) {
             return new BriefView.TrendView(false, false, false, "", "", "", "", "", "", "", "", "",
-                    Terms.trendNotAssessed(), null, null, measure.differenceUnit());
+                    Terms.trendNotAssessed(), null, null, measure.differenceUnit(), slopeTime());
         }
         BriefView.SinceBreak since = t.latestRegime().map(r -> new BriefView.SinceBreak(f.period(r.since()),
                 r.direction() == Direction.INCREASING, r.direction() == Direction.DECREASING,
@@ -62,7 +62,12 @@ final class SectionViews {
                 f.significant(t.slopeCi95().get(0)),
                 f.significant(t.slopeCi95().get(1)),
                 t.changePctPerYear() == null || !measure.percent() ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%",
-                Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit());
+                Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit(), slopeTime());
+    }
+
+    /** What a slope in the series' units is counted over: {@code a year}, or {@code a month each year} for a flow. */
+    private String slopeTime() {
+        return MeasureWords.slopeTime(measure.measure(), series.frequency());
     }
 
     BriefView.SeasonView season() {
@@ -124,15 +129,16 @@ final class SectionViews {
                     && Math.abs(b.levelBefore() - previous.levelAfter()) > 0.0005 * Math.abs(previous.levelAfter());
             BreakFinding first = all.get(0);
             boolean overall = j == all.size() - 1 && j > 0;
+            boolean slopesInPercent = findings.transform() == Transform.LOG && b.levelBefore() > 0 && b.levelAfter() > 0;
             rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
                     f.period(b.ci95().get(1)), b.ci95().get(0).equals(b.ci95().get(1)),
                     f.value(b.levelBefore()), f.value(b.levelAfter()), size(b.levelBefore(), b.levelAfter()),
                     b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
-                    b.kind().step(), b.kind().slope(), slope(b.slopeBefore(), b.levelBefore()),
-                    slope(b.slopeAfter(), b.levelAfter()), drifted,
+                    b.kind().step(), b.kind().slope(), slope(b.slopeBefore(), b.levelBefore(), slopesInPercent),
+                    slope(b.slopeAfter(), b.levelAfter(), slopesInPercent), drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
                     overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
-                    f.value(first.levelBefore()), f.period(first.period())));
+                    f.value(first.levelBefore()), f.period(first.period()), slopesInPercent ? "a year" : slopeTime()));
         }
         return rows;
     }
@@ -140,10 +146,11 @@ final class SectionViews {
     /**
      * A regime's slope at a break, with its unit: for a series worked in logs, the line is a curve
      * whose growth rate is what stays the same along it, so the slope is given as % a year
-     * (exp(log slope) − 1, the log slope being the slope over the level); else in units a year.
+     * (exp(log slope) − 1, the log slope being the slope over the level); else in units, counted
+     * over {@link #slopeTime()}.
      */
-    private String slope(double perYear, double level) {
-        if (findings.transform() == Transform.LOG && level > 0) {
+    private String slope(double perYear, double level, boolean inPercent) {
+        if (inPercent) {
             return f.signedPercent(100 * Math.expm1(perYear / level));
         }
         return f.signedSignificant(perYear) + measure.differenceUnit();

@@ -70,9 +70,14 @@ class HeadlineAgreesEverywhereTest {
         if (trend != null && !trend.get("status").asText().equals("withheld")
                 && !trend.get("direction").asText().equals("none")) {
             String verb = trend.get("direction").asText().equals("increasing") ? "rising" : "falling";
+            // a monthly flow's slope in units is the change of a month's total each year, and says so everywhere
+            assertThat(json.at("/series/frequency").asText() + " " + json.at("/series/measure").asText())
+                    .isEqualTo("monthly flow");
+            String unit = json.at("/series/unit").asText("");
             String slope = trend.get("unit").asText().equals("percent_per_year")
                     ? F.fixed(Math.abs(trend.get("size").asDouble()), 1) + " % a year"
-                    : F.significant(Math.abs(trend.get("size").asDouble()));
+                    : F.significant(Math.abs(trend.get("size").asDouble())) + (unit.isEmpty() ? "" : " " + unit)
+                    + " a month each year";
             if (since != null) {
                 Period from = Period.month(Integer.parseInt(since.get("from").asText().substring(0, 4)),
                         Integer.parseInt(since.get("from").asText().substring(5, 7)));
@@ -85,6 +90,8 @@ class HeadlineAgreesEverywhereTest {
                 assertThat(text).containsIgnoringCase("the underlying trend has been " + verb);
             }
             assertThat(text).contains(sign(trend) + slope);
+            assertThat(notes).contains(sign(trend) + (trend.get("unit").asText().equals("percent_per_year")
+                    ? slope.replace(" a year", " of the average level a year") : slope));
         }
 
         // the notes carry the JSON's claims, one line each, with the same direction

@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.Random;
 import java.util.function.IntToDoubleFunction;
 import org.annalist.analysis.Reference;
@@ -14,6 +15,8 @@ import org.annalist.findings.Analyst;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.BreakKind;
 import org.annalist.findings.Episode;
+import org.annalist.findings.FigurePlan;
+import org.annalist.findings.Transform;
 import org.annalist.findings.Findings;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
@@ -71,6 +74,28 @@ class BreaksAsFittedTest {
         assertThat(Math.abs(b.changePct())).isLessThan(3.0);
         String notes = AnalystNotes.of(f);
         assertThat(notes).contains("change of slope").doesNotContain("step in level");
+    }
+
+    @Test
+    void aFlowsChangeOfSlopeInUnitsIsCountedPerMonthEachYear() {
+        // flat at 10,000 nights a month for six years, then rising 1,800 a month each year, with a
+        // season of constant size (so worked in units, not logs) and noise of 100
+        Random random = new Random(29);
+        double[] x = new double[144];
+        for (int t = 0; t < x.length; t++) {
+            double level = t >= 72 ? 10_000 + 150 * (t - 71.5) : 10_000;
+            x[t] = level + 1_500 * Math.sin(2 * Math.PI * (t - 3) / 12) + 100 * random.nextGaussian();
+        }
+        Series s = Series.builder("synthetic", Frequency.MONTHLY).unit("nights").append(START, x).snapshot();
+        Findings f = analyse(s);
+        assertThat(f.transform()).as("a season of constant size is worked in units").isNotEqualTo(Transform.LOG);
+        BreakFinding b = f.breaks().stream().filter(k -> k.kind().slope()).findFirst().orElseThrow();
+        SectionViews views = new SectionViews(s, f, FigurePlan.of(s, f), Formats.forValues(x, Locale.ENGLISH));
+        BriefView.BreakRow row = views.breaks().get(f.breaks().indexOf(b));
+        // a month's nights change by the slope each year: "a year" alone would read as the yearly total's change
+        assertThat(row.slopeAfter()).endsWith("\u00A0nights");
+        assertThat(row.slopeTime()).isEqualTo("a month each year");
+        assertThat(AnalystNotes.of(f)).contains(" a month each year; sup-F").doesNotContain("per year (95%");
     }
 
     @Test

@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Locale;
+import org.annalist.findings.Claim;
 import org.annalist.findings.Measure;
 import org.annalist.findings.Claims;
 import org.annalist.findings.ClaimsFixture;
@@ -26,8 +27,32 @@ class ClaimWordsTest {
                 .sinceBreak(Period.month(2022, 8), Direction.INCREASING, 2935, 0.0001).findings().claims();
         String[] tile = words(claims).trendTile();
         // 2935 to three significant digits (Formats.significant); not the whole period's +1.9 % a year
-        assertThat(tile[0]).isEqualTo("+2,940\u00a0nights a year");
+        // a monthly flow: the slope is the change of a month's nights each year, not of the year's
+        assertThat(tile[0]).isEqualTo("+2,940\u00a0nights a month each year");
         assertThat(tile[1]).startsWith("since August 2022");
+    }
+
+    @Test
+    void aMonthlyFlowsSlopeIsSaidAsTheChangeOfAMonthsTotalEachYear() {
+        Claims claims = ClaimsFixture.monthly(END, 190).latest(1).yearToDate(4).rollingYear(4)
+                .wholeTrend(Direction.INCREASING, 1.9, 0.0001).step(Period.month(2022, 8), 4)
+                .sinceBreak(Period.month(2022, 8), Direction.INCREASING, 2935, 0.0001).findings().claims();
+        ClaimWords words = words(claims);
+        assertThat(words.trendSentence())
+                .startsWith("Since August 2022 the level has been rising, by about 2,940\u00a0nights a month each year (p");
+        // analyze's claim lines size the same claim in the same words
+        assertThat(words.signedSize(claims.find(Claim.Quantity.TREND_SINCE_BREAK).orElseThrow()))
+                .isEqualTo("+2,940\u00a0nights a month each year");
+    }
+
+    @Test
+    void aStocksSlopeStaysAYearBecauseItsLevelIsNotSummed() {
+        Claims claims = ClaimsFixture.monthly(END, 190).latest(1).yearToDate(4).rollingYear(4)
+                .wholeTrend(Direction.INCREASING, 1.9, 0.0001).step(Period.month(2022, 8), 4)
+                .sinceBreak(Period.month(2022, 8), Direction.INCREASING, 2935, 0.0001).findings().claims();
+        ClaimWords beds = new ClaimWords(claims, Formats.forValues(new double[] {100_000}, Locale.ENGLISH), "beds",
+                Measure.LEVEL);
+        assertThat(beds.trendTile()[0]).isEqualTo("+2,940\u00a0beds a year");
     }
 
     @Test
