@@ -232,7 +232,7 @@ final class BriefWriter {
                 read.sheet().map(s -> "sheet " + s.number() + " '" + s.name() + "' of an " + s.format() + " workbook"));
         return new SourceFacts(Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading,
                 java.util.stream.Stream.concat(java.util.stream.Stream.concat(dataSet(read),
-                        read.warnings().stream().map(DataProblem::toString)), notes.stream()).toList(), "");
+                        read.warnings().stream().map(p -> p.withFileNameOnly().toString())), notes.stream()).toList(), "");
     }
 
     /** The dimensions a statistics portal's series share ({@code Unit: Number; Country: Austria}), as a note naming the file. */

@@ -45,6 +45,19 @@ public record DataProblem(String file, int line, int column, String message, Str
         return String.format(Locale.ROOT, "%s: %s", lead.isEmpty() ? file : file + ":" + lead, message);
     }
 
+    /**
+     * The same problem naming its file without the folder: for a page that leaves the user's
+     * machine, where a folder says nothing to the reader and may say too much about the machine.
+     */
+    public DataProblem withFileNameOnly() {
+        try {
+            java.nio.file.Path name = java.nio.file.Path.of(file).getFileName();
+            return new DataProblem(name == null ? file : name.toString(), line, column, message, sheet);
+        } catch (java.nio.file.InvalidPathException notAPath) {
+            return this;   // a name no file system takes was never a folder and a file
+        }
+    }
+
     /** The letters of a 1-based column as a spreadsheet names it: 1 → A, 27 → AA (ECMA-376 Part 1 §18.3.1.4, cell reference). */
     public static String columnLetters(int column) {
         StringBuilder letters = new StringBuilder();
