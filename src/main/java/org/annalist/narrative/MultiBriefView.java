@@ -7,13 +7,19 @@ import java.util.List;
  * multiples on a shared time axis, whether the parts add up to the total, and a compact section
  * per series built from that series' own {@link BriefView}.
  *
- * @param listedOrder the rows keep the order in which the brief lists the series
- * @param sortedBy    otherwise, the figure they are sorted by, in words
+ * @param listedOrder    the rows keep the order in which the brief lists the series
+ * @param sortedBy       otherwise, the figure they are sorted by, in words
+ * @param allProvisional every series' latest value is provisional or estimated
+ * @param provisional    otherwise, the series whose latest value is, in words; empty when none is
+ * @param outlookMethods each outlook's method and why it was used, series by series ({@link MultiOutlookWords#methods})
+ * @param partsForecasts whether the parts' next-year estimates add up to the total's, a sentence; empty
+ *                       without a total or without such estimates
  */
 public record MultiBriefView(BriefView.Document document, Header header, List<ComparisonRow> rows, boolean listedOrder,
                              String sortedBy,
                              Consistency consistency, List<BriefView> sections, List<String> notes,
-                             BriefView.Provenance provenance) {
+                             BriefView.Provenance provenance, boolean allProvisional, String provisional, String outlookMethods,
+                             String partsForecasts) {
 
     public MultiBriefView {
         rows = List.copyOf(rows);

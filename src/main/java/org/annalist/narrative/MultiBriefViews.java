@@ -68,9 +68,20 @@ public final class MultiBriefViews {
                 "time series, " + header.seriesList());
         List<String> notes = DataNotes.notes(source);
         BriefView.Provenance provenance = sections.get(0).provenance();
+        List<String> provisional = new ArrayList<>();
+        for (int i = 0; i < series.size(); i++) {
+            if (sections.get(i).lead().provisional()) {
+                provisional.add(series.get(i).name());
+            }
+        }
         return new MultiBriefView(document, header, rows, sortBy == SortBy.ORDER,
                 sortBy.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '),
-                consistency, sections, notes, provenance);
+                consistency, sections, notes, provenance,
+                provisional.size() == series.size(),
+                provisional.isEmpty() || provisional.size() == series.size() ? "" : Terms.listed(provisional),
+                MultiOutlookWords.methods(series, findings),
+                check.map(c -> MultiOutlookWords.partsForecasts(c, series, findings, formatsOf(c.total(), series, masthead)))
+                        .orElse(""));
     }
 
     /** The latest change on a year earlier, or the year to date's, in %, points or units as the measure has it. */
