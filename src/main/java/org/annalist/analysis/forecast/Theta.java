@@ -119,11 +119,11 @@ public final class Theta {
     }
 
     /**
-     * The fit in a form decided elsewhere: seasonally adjusted or not. The back-test fits Theta on
-     * the values before its first origin in the form the test on all values chose, as it does with
-     * the ETS and ARIMA forms: two seasons of training values are too few for the test (which
-     * wants more than two), and Theta without its adjustment would then be scored as a flat line
-     * on a seasonal series.
+     * The fit in a form decided elsewhere: seasonally adjusted or not. Where the values before the
+     * back-test's first origin are two seasons or fewer, too few for the test (which wants more
+     * than two), the back-test fits Theta on them in the form the test on all values chose, as it
+     * does with the ETS and ARIMA forms; left to the test, Theta would go without its adjustment
+     * and be scored as a flat line through a seasonal series.
      *
      * @param deseasonalise whether to divide by the classical multiplicative indices; ignored
      *                      (not adjusted) with fewer than two full seasons or values not all above zero
