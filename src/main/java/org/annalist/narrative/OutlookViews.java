@@ -68,8 +68,8 @@ final class OutlookViews {
         return new BriefView.OutlookView(true, methodName, why(o, f, range), f.period(o.fittedFrom()),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
                 rows.size() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
-                year == null ? "" : rounded(year.mean(), yearStep, f), year == null ? "" : rounded(year.lo80(), yearStep, f),
-                year == null ? "" : rounded(year.hi80(), yearStep, f),
+                year == null ? "" : rounded(year.mean(), yearStep, f), year == null ? "" : f.significant(year.lo80()),
+                year == null ? "" : f.significant(year.hi80()),
                 year == null ? "" : comparison(o.nextYearChange(), o.currentYear(), series, f),
                 currentYear(o.currentYear(), unit, f, yearStep),
                 // a % error of a value on an interval scale depends on where its zero was put
@@ -196,8 +196,8 @@ final class OutlookViews {
         return c == null ? "" : currentYear(c, unit, f, step(c.estimate().mean(), c.estimate().hi80() - c.estimate().lo80()));
     }
 
-    /** … with its figures rounded to {@code step} (no coarser than the estimate's own step). */
-    private static String currentYear(OutlookFinding.CurrentYear c, String unit, Formats f, double step) {
+    /** … with its estimate rounded to {@code meanStep} where that is finer than its own step (the other figures keep theirs). */
+    private static String currentYear(OutlookFinding.CurrentYear c, String unit, Formats f, double meanStep) {
         if (c == null || c.forecastPeriods() == 0) {
             return "";
         }
@@ -208,11 +208,12 @@ final class OutlookViews {
         String rest = c.forecastPeriods() == 1 ? f.period(firstForecast)
                 : f.period(firstForecast) + " to " + f.period(lastForecast);
         OutlookFinding.Span e = c.estimate();
-        step = Double.isNaN(step) ? step(e.mean(), e.hi80() - e.lo80()) : Math.min(step, step(e.mean(), e.hi80() - e.lo80()));
+        double step = step(e.mean(), e.hi80() - e.lo80());
+        double estimateStep = meanStep > 0 ? Math.min(meanStep, step) : step;
         String what = c.total() ? "The total for " : "The average for ";
         String part = c.total() ? rounded(c.observed(), step, f) + unit + " observed " + observed
                 : "an average of " + rounded(c.observed(), step, f) + unit + " observed " + observed;
-        return what + c.year() + " is estimated at " + rounded(e.mean(), step, f) + unit + ": " + part
+        return what + c.year() + " is estimated at " + rounded(e.mean(), estimateStep, f) + unit + ": " + part
                 + ", and forecasts for " + rest + " (80\u00A0% interval " + rounded(e.lo80(), step, f) + " to "
                 + rounded(e.hi80(), step, f) + unit + ", from the forecast part alone).";
     }
