@@ -57,6 +57,7 @@ final class OutlookViews {
         }
         OutlookFinding.Span year = o.nextYearTotal() != null ? o.nextYearTotal() : o.nextYearAverage();
         boolean total = o.nextYearTotal() != null;
+        double yearStep = year == null ? Double.NaN : yearStep(year.mean(), o.currentYear(), o.nextYearChange(), f);
         String unit = series.unit().isBlank() ? "" : "\u00A0" + series.unit();
         String methodName = methodInWords(o.model());
         String noBacktest = o.caveats().stream().filter(c -> c instanceof OutlookCaveat.NoBacktest)
@@ -67,10 +68,10 @@ final class OutlookViews {
         return new BriefView.OutlookView(true, methodName, why(o, f, range), f.period(o.fittedFrom()),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
                 rows.size() > TABLE_ROWS, year != null, total, String.valueOf(o.nextYear()),
-                year == null ? "" : f.significant(year.mean()), year == null ? "" : f.significant(year.lo80()),
+                year == null ? "" : rounded(year.mean(), yearStep, f), year == null ? "" : f.significant(year.lo80()),
                 year == null ? "" : f.significant(year.hi80()),
                 year == null ? "" : comparison(o.nextYearChange(), o.currentYear(), series, f),
-                currentYear(o.currentYear(), unit, f),
+                currentYear(o.currentYear(), unit, f, yearStep),
                 // a % error of a value on an interval scale depends on where its zero was put
                 o.typicalErrorPct() == null || measure.measure() == Measure.INTERVAL ? "" : f.fixed(Math.max(o.typicalErrorPct(), 0.1),
                         o.typicalErrorPct() < 10 ? 1 : 0) + "\u00A0%",
@@ -163,8 +164,40 @@ final class OutlookViews {
         return ", " + change + " on " + against + " (80\u00A0% interval of the change " + low + " to " + high + ")";
     }
 
+    /**
+     * The rounding step of next year's value and of the current year's estimate it is set against:
+     * the estimate's own step ({@link #step}), no coarser than three significant digits of next
+     * year's value, and made finer (down to a thousandth of that) until the change a reader
+     * recomputes from the two printed figures prints as the stated change. Without a printed
+     * estimate to set it against (a current year observed in full, or none), three significant
+     * digits, as the table.
+     */
+    static double yearStep(double next, OutlookFinding.CurrentYear current, OutlookFinding.YearChange change,
+                           Formats f) {
+        double threeDigits = step(next, Double.NaN);
+        if (current == null || current.forecastPeriods() == 0 || change == null || change.pct() == null) {
+            return threeDigits;
+        }
+        OutlookFinding.Span e = current.estimate();
+        double step = Math.min(threeDigits, step(e.mean(), e.hi80() - e.lo80()));
+        String stated = f.signedPercent(change.pct());
+        for (double finest = step / 1000; step > finest; step /= 10) {
+            double base = Math.round(e.mean() / step) * step;
+            double recomputed = 100 * (Math.round(next / step) * step / base - 1);
+            if (base > 0 && f.signedPercent(recomputed).equals(stated)) {
+                break;
+            }
+        }
+        return step;
+    }
+
     /** The current year as observed plus forecast, in a sentence; empty when it is observed in full or unknown. */
     static String currentYear(OutlookFinding.CurrentYear c, String unit, Formats f) {
+        return c == null ? "" : currentYear(c, unit, f, step(c.estimate().mean(), c.estimate().hi80() - c.estimate().lo80()));
+    }
+
+    /** … with its estimate rounded to {@code meanStep} where that is finer than its own step (the other figures keep theirs). */
+    private static String currentYear(OutlookFinding.CurrentYear c, String unit, Formats f, double meanStep) {
         if (c == null || c.forecastPeriods() == 0) {
             return "";
         }
@@ -176,10 +209,11 @@ final class OutlookViews {
                 : f.period(firstForecast) + " to " + f.period(lastForecast);
         OutlookFinding.Span e = c.estimate();
         double step = step(e.mean(), e.hi80() - e.lo80());
+        double estimateStep = meanStep > 0 ? Math.min(meanStep, step) : step;
         String what = c.total() ? "The total for " : "The average for ";
         String part = c.total() ? rounded(c.observed(), step, f) + unit + " observed " + observed
                 : "an average of " + rounded(c.observed(), step, f) + unit + " observed " + observed;
-        return what + c.year() + " is estimated at " + rounded(e.mean(), step, f) + unit + ": " + part
+        return what + c.year() + " is estimated at " + rounded(e.mean(), estimateStep, f) + unit + ": " + part
                 + ", and forecasts for " + rest + " (80\u00A0% interval " + rounded(e.lo80(), step, f) + " to "
                 + rounded(e.hi80(), step, f) + unit + ", from the forecast part alone).";
     }
@@ -198,6 +232,9 @@ final class OutlookViews {
     }
 
     private static String rounded(double v, double step, Formats f) {
+        if (!(step > 0) || Double.isInfinite(step)) {
+            return f.significant(v);   // a value of zero has no digits to round to
+        }
         double r = Math.round(v / step) * step;
         return step >= 1 ? f.count(Math.round(r)) : f.fixed(r, (int) Math.ceil(-Math.log10(step) - 1e-9));
     }

@@ -84,6 +84,34 @@ class OutlookViewsTest {
                 "1,547,000 to 1,560,000\u00A0nights", "1,348,000\u00A0nights observed");
     }
 
+    /**
+     * Next year's total and the current year's estimate are printed finely enough that the change
+     * recomputed from them prints as the stated one (the numbers of the demo's total nights,
+     * invented: 1,578,106 against 1,555,595 is +1.45 %, which three significant digits,
+     * 1,580,000 against 1,556,000, made +1.5 %).
+     */
+    @Test
+    void theChangeCanBeRecomputedFromThePrintedYearFigures() {
+        Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+        OutlookFinding.CurrentYear current = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
+                Period.month(2026, 10), 10, 1_350_831, 2, new OutlookFinding.Span(1_555_595, 1_550_148, 1_561_117));
+        OutlookFinding.YearChange change = new OutlookFinding.YearChange(2027, 2026, 1.4471, -0.6, 3.5, 22_511,
+                -9_396, 54_702, false);
+        double step = OutlookViews.yearStep(1_578_106, current, change, f);
+        assertThat(step).isEqualTo(1_000);
+        assertThat(OutlookViews.currentYear(current, "", f)).contains("estimated at 1,556,000");
+        assertThat(f.signedPercent(100 * (1_578_000 / 1_556_000.0 - 1))).isEqualTo(f.signedPercent(change.pct()));
+        // a change on the edge of its last digit needs finer figures: 1,003,900 against 1,000,400 is
+        // +0.35 % (+0.3 % printed), but rounded to thousands, 1,004,000 against 1,000,000, +0.4 %
+        OutlookFinding.CurrentYear even = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
+                Period.month(2026, 10), 10, 800_000, 2, new OutlookFinding.Span(1_000_400, 990_400, 1_010_400));
+        OutlookFinding.YearChange edge = new OutlookFinding.YearChange(2027, 2026, 100 * (1_003_900 / 1_000_400.0 - 1),
+                -1.0, 2.0, 3_500, -5_000, 9_000, false);
+        double fine = OutlookViews.yearStep(1_003_900, even, edge, f);
+        assertThat(fine).isEqualTo(100);
+        assertThat(f.signedPercent(100 * (1_003_900 / 1_000_400.0 - 1))).isEqualTo(f.signedPercent(edge.pct()));
+    }
+
     /** A printed reader has no findings file: the outlook page refers to none. */
     @Test
     void theOutlookPageRefersToNoFile() throws IOException {

@@ -146,7 +146,8 @@ final class Regimes {
      * Large steps followed by a movement back: a break whose step (the gap at the break) is at least
      * {@code |stepPct|} % either way, after which the fitted level moved back the other way by at
      * least {@code minimumChangePct} % of the level it had reached — along the stepped regime's own
-     * line, or through the regime after the next break. The furthest point is the end of the
+     * line, beyond what the old line's slope would have carried it over the same periods, or through
+     * the regime after the next break. The furthest point is the end of the
      * stepped regime's line that lies further from the level before the step; the return is
      * measured at the end of the regime that moved back (the next regime when it lies further back,
      * else the stepped regime's end). A gradual decline followed by a step up has no large step to
@@ -174,10 +175,19 @@ final class Regimes {
                 asOf = next.end();
                 returned = next.endLevel();
             }
-            if (returnStart.isEmpty() && sign * step.slopeBefore() < 0) {
-                continue;   // the stepped line only carries on the way the old one went: no return
+            double moved = -sign * (returned - extremeLevel);
+            if (returnStart.isEmpty()) {
+                // Along the stepped line only what goes beyond the old line's own slope is a return:
+                // a line that merely carries on the way the old one went (a decline, stepped up, that
+                // keeps declining) is none; one that climbs back far faster than the old one rose is.
+                // The old slope is carried on both in units and at its rate from the stepped level,
+                // whichever goes further, so that neither a line nor a log fit makes a return of it.
+                int periods = asOf - step.start() + 1;
+                double inUnits = step.slopeBefore() * periods;
+                double atRate = step.slopeBefore() / Math.abs(step.levelBefore()) * Math.abs(extremeLevel) * periods;
+                moved -= Math.max(0, Math.max(-sign * inUnits, -sign * atRate));
             }
-            double back = -sign * 100 * (returned - extremeLevel) / Math.abs(extremeLevel);
+            double back = 100 * moved / Math.abs(extremeLevel);
             if (back < minimumChangePct) {
                 continue;   // no real return: a lasting step, which the break itself describes
             }

@@ -7,7 +7,8 @@ import java.util.Optional;
  * The outlook's single methods as its back-test runs them: each is prepared once on the values
  * before the first origin — the ETS form and the ARIMA orders that the searches on all values chose
  * ({@link CandidateForecasts.Searched}), their parameters estimated afresh on those earlier values,
- * and the Theta fit — and then, from every later origin, forecasts with its parameters kept and its
+ * and the Theta fit (adjusted for the season as on all values where the earlier values are too few
+ * to test for one) — and then, from every later origin, forecasts with its parameters kept and its
  * states updated by the values since (updating, not re-estimating [1, §2.2]). One model search
  * serves both the forecasts and the back-test: the forms are chosen knowing the later values (the
  * parameters are not), which makes the back-test's errors a little smaller than a search at the
@@ -68,7 +69,9 @@ final class Members {
             case ARIMA -> forms.arima().flatMap(f -> Arima.fit(training, f.order(), f.method()))
                     .or(() -> AutoArima.fitConditional(training, period))
                     .map(fit -> fit::forecastsFromOrigins);
-            case THETA -> Theta.fit(training, period)
+            // two seasons are too few for Theta's own test for a season: the form chosen on all values
+            case THETA -> (training.length > 2 * period ? Theta.fit(training, period)
+                    : Theta.fit(training, period, forms.theta().map(Theta.Fit::deseasonalised).orElse(false)))
                     .map(theta -> eachOrigin((before, h) -> theta.updated(before).map(f -> f.forecast(h))));
             case SEASONAL_NAIVE -> training.length < cycle ? Optional.empty()
                     : Optional.of(eachOrigin((before, h) -> Optional.of(SeasonalNaive.forecast(before, cycle, h))));

@@ -115,6 +115,20 @@ public final class Theta {
 
     /** @return empty when the simple smoothing cannot be fitted (fewer than {@value #MIN_VALUES} values, or no finite likelihood) */
     public static Optional<Fit> fit(double[] y, int period) {
+        return fit(y, period, isSeasonal(y, period));
+    }
+
+    /**
+     * The fit in a form decided elsewhere: seasonally adjusted or not. Where the values before the
+     * back-test's first origin are two seasons or fewer, too few for the test (which wants more
+     * than two), the back-test fits Theta on them in the form the test on all values chose, as it
+     * does with the ETS and ARIMA forms; left to the test, Theta would go without its adjustment
+     * and be scored as a flat line through a seasonal series.
+     *
+     * @param deseasonalise whether to divide by the classical multiplicative indices; ignored
+     *                      (not adjusted) with fewer than two full seasons or values not all above zero
+     */
+    static Optional<Fit> fit(double[] y, int period, boolean deseasonalise) {
         int n = y.length;
         if (n < MIN_VALUES) {
             return Optional.empty();
@@ -122,7 +136,7 @@ public final class Theta {
         double[] index = new double[Math.max(1, period)];
         Arrays.fill(index, 1);
         double[] adjusted = y;
-        if (isSeasonal(y, period)) {
+        if (deseasonalise && period >= 2 && n >= 2 * period && Arrays.stream(y).allMatch(v -> v > 0)) {
             ClassicalDecomposition.Result d = ClassicalDecomposition.of(y, period, ClassicalDecomposition.Type.MULTIPLICATIVE);
             index = d.figure().clone();
             adjusted = new double[n];
