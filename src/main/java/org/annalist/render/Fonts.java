@@ -1,6 +1,7 @@
 package org.annalist.render;
 
 import com.openhtmltopdf.outputdevice.helper.BaseRendererBuilder.FontStyle;
+import com.openhtmltopdf.pdfboxout.PDFontSupplier;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
 import java.awt.Font;
 import java.awt.FontFormatException;
@@ -10,6 +11,10 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import org.annalist.chart.Figure;
+import org.apache.fontbox.ttf.TrueTypeFont;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.font.PDFont;
+import org.apache.pdfbox.pdmodel.font.PDType0Font;
 
 /**
  * The brief's one font family, DejaVu Sans (Bitstream Vera licence, see {@code fonts/LICENSE-DejaVu.txt}),
@@ -33,7 +38,7 @@ public final class Fonts {
 
     /**
      * Each face's file, read from the jar once per JVM (2 MB for the three) rather than inflated
-     * again for every brief of a batch; the layout engine parses and subsets it per document.
+     * again for every brief of a batch; {@link ParsedFaces} parses it, each document subsets it.
      */
     private static final byte[][] FILES = new byte[FACES.length][];
 
@@ -66,12 +71,30 @@ public final class Fonts {
         return missing.toString();
     }
 
-    static void registerWith(PdfRendererBuilder builder) {
+    /**
+     * Registers the family with the layout engine for one document, from faces already parsed:
+     * each face is embedded into {@code document} (as a subset) when the layout first needs it.
+     */
+    static void registerWith(PdfRendererBuilder builder, PDDocument document, ParsedFaces parsed) {
         for (int i = 0; i < FACES.length; i++) {
             Face face = FACES[i];
-            int index = i;
-            builder.useFont(() -> new ByteArrayInputStream(file(index)), Figure.FONT_FAMILY, face.weight(), face.style(), true);
+            TrueTypeFont font = parsed.face(i);
+            builder.useFont(new PDFontSupplier(null) {
+                @Override
+                public PDFont supply() {
+                    try {
+                        return PDType0Font.load(document, font, true);
+                    } catch (IOException e) {
+                        throw new UncheckedIOException("bundled font " + face.resource() + " cannot be embedded", e);
+                    }
+                }
+            }, Figure.FONT_FAMILY, face.weight(), face.style(), true);
         }
+    }
+
+    /** How many faces the family has. */
+    static int faceCount() {
+        return FACES.length;
     }
 
     /** The regular face's file (for {@link BundledFontMapper}). */
@@ -79,7 +102,8 @@ public final class Fonts {
         return file(0);
     }
 
-    private static byte[] file(int face) {
+    /** Face {@code face}'s file, as the jar holds it. */
+    static byte[] file(int face) {
         synchronized (FILES) {
             if (FILES[face] == null) {
                 try (InputStream in = open(FACES[face].resource())) {

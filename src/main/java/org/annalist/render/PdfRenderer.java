@@ -158,10 +158,15 @@ public final class PdfRenderer {
         builder.useColorProfile(ICC_Profile.getInstance(ColorSpace.CS_sRGB).getData());
         builder.useObjectDrawerFactory(drawers);
         builder.useUnicodeLineBreaker(new NumberKeepingLineBreaker());
-        Fonts.registerWith(builder);
+        // the document is made here, as the layout engine would make it, so that the faces parsed
+        // for an earlier brief can be embedded into it
+        PDDocument target = new PDDocument();
+        builder.usePDDocument(target);
+        ParsedFaces faces = ParsedFaces.borrow();
+        Fonts.registerWith(builder, target, faces);
         ByteArrayOutputStream pdf = new ByteArrayOutputStream(256 * 1024);
         builder.toStream(OutputStream.nullOutputStream());
-        try (PdfBoxRenderer renderer = parsed(builder)) {
+        try (target; PdfBoxRenderer renderer = parsed(builder)) {
             try {
                 renderer.createPDFWithoutClosing();
             } catch (RuntimeException e) {
@@ -172,17 +177,17 @@ public final class PdfRenderer {
                 throw e;
             }
             sandbox.throwIfRefused();
-            try (PDDocument document = renderer.getPdfDocument()) {
-                Calendar created = new GregorianCalendar(TimeZone.getTimeZone("UTC"));
-                created.setTimeInMillis(createdAt.toEpochMilli());
-                document.getDocumentInformation().setCreationDate(created);
-                pinXmpCreateDate(document, created);
-                document.setDocumentId(documentId);
-                document.save(pdf);
-            }
+            Calendar created = new GregorianCalendar(TimeZone.getTimeZone("UTC"));
+            created.setTimeInMillis(createdAt.toEpochMilli());
+            target.getDocumentInformation().setCreationDate(created);
+            pinXmpCreateDate(target, created);
+            target.setDocumentId(documentId);
+            target.save(pdf);
         } catch (IOException e) {
             throw new UncheckedIOException("the PDF could not be laid out", e);
         }
+        // only a layout that finished hands its faces on (one stopped part-way may have left them mid-read)
+        faces.giveBack();
         return pdf.toByteArray();
     }
 
