@@ -66,7 +66,7 @@ final class Members {
                     .map(best -> (y, firstOrigin, reach) -> EtsFilter.forecastsFromOrigins(best.model(), y,
                             best.parameters(), firstOrigin, reach));
             case ARIMA -> forms.arima().flatMap(f -> Arima.fit(training, f.order(), f.method()))
-                    .or(() -> AutoArima.fitConditional(training, period))
+                    .or(() -> AutoArima.fitForOutlook(training, period))
                     .map(fit -> fit::forecastsFromOrigins);
             case THETA -> Theta.fit(training, period)
                     .map(theta -> eachOrigin((before, h) -> theta.updated(before).map(f -> f.forecast(h))));

@@ -15,6 +15,10 @@ public final class OutlookLab {
         Optional<Outlook.Forecast> f = switch (variant) {
             case "ets" -> CandidateForecasts.forecast(Outlook.Method.ETS, y, period, h, bounds, List.of());
             case "arima" -> CandidateForecasts.forecast(Outlook.Method.ARIMA, y, period, h, bounds, List.of());
+            case "arima-exact" -> CandidateForecasts.forecast(Outlook.Method.ARIMA, new CandidateForecasts.Searched(y, period,
+                    Optional.empty(), AutoArima.fit(y, period), Optional.empty()), h, bounds, List.of());
+            case "arima-refit" -> CandidateForecasts.forecast(Outlook.Method.ARIMA, new CandidateForecasts.Searched(y, period,
+                    Optional.empty(), AutoArima.fit(y, period, true), Optional.empty()), h, bounds, List.of());
             case "theta" -> CandidateForecasts.forecast(Outlook.Method.THETA, y, period, h, bounds, List.of());
             case "comb" -> CandidateForecasts.forecast(Outlook.Method.COMBINATION, y, period, h, bounds,
                     Backtest.COMBINABLE);
