@@ -43,7 +43,7 @@ final class CandidateForecasts {
 
         static Searched on(double[] y, int period) {
             return new Searched(y, period, EtsSelection.select(y, period).map(EtsSelection.Choice::best),
-                    period <= Backtest.MAX_ARIMA_PERIOD ? AutoArima.fitConditional(y, period) : Optional.empty(),
+                    period <= Backtest.MAX_ARIMA_PERIOD ? AutoArima.fitForOutlook(y, period) : Optional.empty(),
                     Theta.fit(y, period));
         }
     }

@@ -67,7 +67,7 @@ final class Members {
                     .map(best -> (y, firstOrigin, reach) -> EtsFilter.forecastsFromOrigins(best.model(), y,
                             best.parameters(), firstOrigin, reach));
             case ARIMA -> forms.arima().flatMap(f -> Arima.fit(training, f.order(), f.method()))
-                    .or(() -> AutoArima.fitConditional(training, period))
+                    .or(() -> AutoArima.fitForOutlook(training, period))
                     .map(fit -> fit::forecastsFromOrigins);
             // two seasons are too few for Theta's own test for a season: the form chosen on all values
             case THETA -> (training.length > 2 * period ? Theta.fit(training, period)

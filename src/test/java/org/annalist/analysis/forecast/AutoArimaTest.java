@@ -87,6 +87,29 @@ class AutoArimaTest {
         assertThat(same).as("series on which our order is R's").isEqualTo(names.size());
     }
 
+    /**
+     * The outlook's search on non-seasonal data is R's default one: on four M3 yearly series
+     * (Makridakis &amp; Hibon 2000, the competition's training values) where the conditional search
+     * chose another order, R's order and its AICc to 1e-4 relative ({@code arima_m3_yearly.csv}: R
+     * 4.2.2, forecast 8.20, {@code auto.arima(y)}, copied from {@code dev/m3/r-arima-yearly.csv},
+     * made by {@code dev/m3/r-arima-orders.R}).
+     */
+    @Test
+    void outlookSearchOnYearlySeriesChoosesRsOrder() {
+        Reference ref = Reference.csv("arima_m3_yearly.csv");
+        for (String name : new String[] {"N0022", "N0028", "N0033", "N0034"}) {
+            Map<String, String> row = ref.row(name);
+            double[] y = java.util.Arrays.stream(row.get("values").split(";")).mapToDouble(Double::parseDouble).toArray();
+            ArimaOrder r = ArimaOrder.of(i(row, "p"), i(row, "d"), i(row, "q"), i(row, "constant") == 1);
+            Arima.Fit fit = AutoArima.fitForOutlook(y, 1).orElseThrow();
+            assertThat(normalise(fit.order())).as(name + " order").isEqualTo(normalise(r));
+            double aicc = Double.parseDouble(row.get("aicc"));
+            assertThat(fit.aicc()).as(name + " AICc").isCloseTo(aicc, within(1e-4 * Math.abs(aicc)));
+            assertThat(AutoArima.fitConditional(y, 1).orElseThrow().order()).as(name + " conditional order")
+                    .isNotEqualTo(fit.order());
+        }
+    }
+
     /** The constant flag only matters with at most one difference. */
     private static ArimaOrder normalise(ArimaOrder o) {
         return o.differences() > 1 ? o.withArma(o.p(), o.q(), o.seasonalP(), o.seasonalQ(), false) : o;

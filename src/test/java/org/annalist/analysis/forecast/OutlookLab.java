@@ -15,6 +15,9 @@ public final class OutlookLab {
         Optional<Outlook.Forecast> f = switch (variant) {
             case "ets" -> CandidateForecasts.forecast(Outlook.Method.ETS, y, period, h, bounds, List.of());
             case "arima" -> CandidateForecasts.forecast(Outlook.Method.ARIMA, y, period, h, bounds, List.of());
+            // R's default search (exact likelihood up to 150 values), and the CSS search with R's exact refit
+            case "arima-exact" -> arimaAlone(y, period, h, bounds, AutoArima.fit(y, period));
+            case "arima-refit" -> arimaAlone(y, period, h, bounds, AutoArima.fit(y, period, true));
             case "theta" -> CandidateForecasts.forecast(Outlook.Method.THETA, y, period, h, bounds, List.of());
             case "comb" -> CandidateForecasts.forecast(Outlook.Method.COMBINATION, y, period, h, bounds,
                     Backtest.COMBINABLE);
@@ -43,5 +46,11 @@ public final class OutlookLab {
             }
         };
         return f.map(x -> new double[][] {x.mean(), x.lo80(), x.hi80(), x.lo95(), x.hi95()});
+    }
+
+    private static Optional<Outlook.Forecast> arimaAlone(double[] y, int period, int h, Outlook.Bounds bounds,
+                                                         Optional<Arima.Fit> fit) {
+        return CandidateForecasts.forecast(Outlook.Method.ARIMA,
+                new CandidateForecasts.Searched(y, period, Optional.empty(), fit, Optional.empty()), h, bounds, List.of());
     }
 }
