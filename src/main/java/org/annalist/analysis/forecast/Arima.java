@@ -135,8 +135,13 @@ public final class Arima {
             return order.label();
         }
 
+        /** The means of {@link #predict}, without its variances. */
         public double[] forecast(int h) {
-            return predict(h).mean();
+            double[] mean = estimate.kalman().forecastMeans(h);
+            for (int k = 0; k < h; k++) {
+                mean[k] += regression(n + k + 1);
+            }
+            return mean;
         }
 
         /** Means and variances 1 … h ahead: [2] §4.11, with R's σ² ({@link #sigma2}). */

@@ -94,17 +94,29 @@ final class ArimaKalman {
         double[][] means = new double[y.length - firstOrigin][];
         double[] state = new double[rd];
         double[] next = new double[rd];
-        run(y, null, firstOrigin, origin -> {
-            double[] m = new double[Math.min(reach, y.length - origin)];
-            System.arraycopy(a, 0, state, 0, rd);
-            for (int k = 0; k < m.length; k++) {
-                transition(state, next);
-                System.arraycopy(next, 0, state, 0, rd);
-                m[k] = observe(state);
-            }
-            means[origin - firstOrigin] = m;
-        });
+        run(y, null, firstOrigin, origin -> means[origin - firstOrigin] =
+                meansAhead(Math.min(reach, y.length - origin), state, next));
         return means;
+    }
+
+    /**
+     * The forecast means of {@link #forecast} alone, 1 … h steps after the filtered state, without
+     * the covariances (the same arithmetic, so the same values).
+     */
+    double[] forecastMeans(int h) {
+        return meansAhead(h, new double[rd], new double[rd]);
+    }
+
+    /** Means 1 … h steps after the filtered state {@link #a}, with {@code state} and {@code next} as room to work. */
+    private double[] meansAhead(int h, double[] state, double[] next) {
+        double[] m = new double[h];
+        System.arraycopy(a, 0, state, 0, rd);
+        for (int k = 0; k < h; k++) {
+            transition(state, next);
+            System.arraycopy(next, 0, state, 0, rd);
+            m[k] = observe(state);
+        }
+        return m;
     }
 
     /**
