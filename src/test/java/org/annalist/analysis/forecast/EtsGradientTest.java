@@ -85,6 +85,41 @@ class EtsGradientTest {
         }
     }
 
+    /**
+     * After the criterion at a point, the search's gradient there comes from the criterion's kept
+     * forward pass: bit for bit the gradient of a whole pass of its own, for every model (the
+     * search's path, and so every fit, must not depend on which pass served).
+     */
+    @Test
+    void gradientFromTheCriterionsKeptPassIsTheWholePasssGradient() {
+        double[] y = seasonal(4, 72);
+        for (EtsModel.Error error : EtsModel.Error.values()) {
+            for (EtsModel.Trend trend : EtsModel.Trend.values()) {
+                for (boolean damped : new boolean[] {false, true}) {
+                    if (damped && trend == EtsModel.Trend.NONE) {
+                        continue;
+                    }
+                    for (EtsModel.Season season : EtsModel.Season.values()) {
+                        EtsModel model = new EtsModel(error, trend, damped, season, 12);
+                        EtsEstimation.Coordinates kept = new EtsEstimation.Coordinates(model, y);
+                        EtsEstimation.Coordinates fresh = new EtsEstimation.Coordinates(model, y);
+                        double[] z = kept.guess.clone();
+                        z[0] = 0.4;
+                        z[1] = 0.1;
+                        z[2] = 0.3;
+                        z[3] = 0.9;
+                        double[] fromKept = new double[z.length];
+                        double[] fromWhole = new double[z.length];
+                        assertThat(kept.criterion(z)).as(model.label()).isFinite();
+                        assertThat(kept.gradient(z, fromKept)).as(model.label()).isTrue();
+                        assertThat(fresh.gradient(z, fromWhole)).as(model.label()).isTrue();
+                        assertThat(fromKept).as(model.label()).containsExactly(fromWhole);
+                    }
+                }
+            }
+        }
+    }
+
     private static void check(EtsModel model, double[] y) {
         double[] start = EtsEstimation.initialStates(model, y);
         double[] x = new double[EtsGradient.STATES + start.length];
