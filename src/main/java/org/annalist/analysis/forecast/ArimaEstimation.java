@@ -78,6 +78,10 @@ final class ArimaEstimation {
     private final double[] adjusted;
     /** Without a regression term, the differenced values the conditional sum of squares works on. */
     private double[] differencedOnce;
+    /** The conditional sum of squares' room: residuals nobody asked for, and the non-zero lags of φ and θ. */
+    private double[] scratch;
+    private int[] arLags;
+    private int[] maLags;
 
     ArimaEstimation(double[] y, ArimaOrder order) {
         this.y = y;
@@ -319,19 +323,26 @@ final class ArimaEstimation {
         } else {
             w = differenced(x);
         }
-        double[] resid = residuals != null ? residuals : new double[n];
+        if (scratch == null) { // room reused by every evaluation of the search
+            scratch = new double[n];
+            arLags = new int[phi.length];
+            maLags = new int[theta.length];
+        }
+        double[] resid = residuals != null ? residuals : scratch;
         double ssq = 0;
         int nu = 0;
         // the expanded seasonal polynomials are mostly zeros: (1 − φB)(1 − ΦB¹²) has 2 of its 13 lags
-        int[] arLags = nonZero(phi);
-        int[] maLags = nonZero(theta);
+        int arCount = nonZero(phi, arLags);
+        int maCount = nonZero(theta, maLags);
         for (int l = ncond; l < n; l++) {
             double tmp = w[l];
-            for (int j : arLags) {
+            for (int a = 0; a < arCount; a++) {
+                int j = arLags[a];
                 tmp -= phi[j] * w[l - j - 1];
             }
             int jmax = l - ncond;
-            for (int j : maLags) {
+            for (int a = 0; a < maCount; a++) {
+                int j = maLags[a];
                 if (j >= jmax) {
                     break;
                 }
@@ -364,16 +375,15 @@ final class ArimaEstimation {
         return w;
     }
 
-    /** The indices of the coefficients that are not zero, in increasing order. */
-    private static int[] nonZero(double[] coefficients) {
+    /** Writes the indices of the coefficients that are not zero into {@code lags}, in increasing order; returns how many. */
+    private static int nonZero(double[] coefficients, int[] lags) {
         int count = 0;
-        int[] lags = new int[coefficients.length];
         for (int j = 0; j < coefficients.length; j++) {
             if (coefficients[j] != 0) {
                 lags[count++] = j;
             }
         }
-        return java.util.Arrays.copyOf(lags, count);
+        return count;
     }
 
     private void invertMa(double[] par) {
