@@ -47,10 +47,11 @@ final class ArimaKalman {
     final double[] a;
     final double[] pm;
     private final double[] anew;
-    private final double[] pnew;
+    /** P⁻, rewritten whole at each prediction. */
+    private double[] pnew;
     private final double[] mm;
-    /** The previous step's P⁻, for the test of convergence. */
-    private final double[] previous;
+    /** The previous step's P⁻, for the test of convergence: the two swap rooms rather than copy. */
+    private double[] previous;
     private final double[] gainVector;
     /** The lags k (0-based) with Δ_k ≠ 0: (1 − B)(1 − B¹²) has 3 of 13, so the sums skip the zeros. */
     private final int[] lags;
@@ -143,9 +144,11 @@ final class ArimaKalman {
             }
             predictState();
             if (l > 0 && !steady) {
+                double[] last = pnew; // kept for the test of convergence; its room takes the step after
+                pnew = previous;
+                previous = last;
                 predictCovariance();
-                boolean unchanged = converged();
-                steady = unchanged && l > rd;
+                steady = l > rd && converged();
             }
             double resid = y[l] - anew[0];
             for (int i : lags) {
@@ -191,7 +194,7 @@ final class ArimaKalman {
      * time-invariant model the covariance converges to the steady-state solution of the Riccati
      * equation; R's {@code ARIMA_Like} keeps recomputing it). The test compares P⁻ with the previous
      * step's, kept in {@code previous}, to a relative {@value #STEADY_TOLERANCE}, far below what
-     * changes the likelihood's printed digits.
+     * changes the likelihood's printed digits; it is only asked after the first rd + 1 steps.
      */
     private boolean converged() {
         double change = 0;
@@ -200,7 +203,6 @@ final class ArimaKalman {
             change = Math.max(change, Math.abs(pnew[i] - previous[i]));
             size = Math.max(size, Math.abs(pnew[i]));
         }
-        System.arraycopy(pnew, 0, previous, 0, pnew.length);
         return change <= STEADY_TOLERANCE * size;
     }
 

@@ -31,6 +31,11 @@ final class EtsGradient {
     private final EtsModel model;
     private final double[] y;
     private final int k;
+    /** The model's form, read once: both passes branch on it at every step. */
+    private final boolean trended;
+    private final boolean seasonal;
+    private final boolean additiveSeason;
+    private final boolean multiplicativeError;
     /** What the forward pass keeps of each step for the backward one: the states read, the forecast, the error. */
     private final double[] levels;
     private final double[] trends;
@@ -47,6 +52,10 @@ final class EtsGradient {
         this.model = model;
         this.y = y;
         k = STATES + stateCount;
+        trended = model.trend() != EtsModel.Trend.NONE;
+        seasonal = model.season() != EtsModel.Season.NONE;
+        additiveSeason = model.season() == EtsModel.Season.ADDITIVE;
+        multiplicativeError = model.error() == EtsModel.Error.MULTIPLICATIVE;
         int n = y.length;
         levels = new double[n];
         trends = new double[n];
@@ -65,11 +74,6 @@ final class EtsGradient {
      * @return false where the criterion is infinite (a forecast not finite) or the gradient is not finite
      */
     boolean at(double alpha, double betaStar, double gamma, double phiValue, double[] initial, double[] g) {
-        boolean trended = model.trend() != EtsModel.Trend.NONE;
-        EtsModel.Season season = model.season();
-        boolean seasonal = season != EtsModel.Season.NONE;
-        boolean additiveSeason = season == EtsModel.Season.ADDITIVE;
-        boolean multiplicativeError = model.error() == EtsModel.Error.MULTIPLICATIVE;
         int m = model.seasonSlots();
         int n = y.length;
         double phi = model.damped() ? phiValue : 1;
@@ -151,11 +155,6 @@ final class EtsGradient {
 
     /** The backward pass over the kept forward pass: the adjoints of the states, step by step back to the start. */
     private boolean backward(double alpha, double betaStar, double gamma, double phiValue, double sumE2, double[] g) {
-        boolean trended = model.trend() != EtsModel.Trend.NONE;
-        EtsModel.Season season = model.season();
-        boolean seasonal = season != EtsModel.Season.NONE;
-        boolean additiveSeason = season == EtsModel.Season.ADDITIVE;
-        boolean multiplicativeError = model.error() == EtsModel.Error.MULTIPLICATIVE;
         int m = model.seasonSlots();
         int n = y.length;
         double phi = model.damped() ? phiValue : 1;
