@@ -135,8 +135,13 @@ public final class Arima {
             return order.label();
         }
 
+        /** The means of {@link #predict}, without its variances. */
         public double[] forecast(int h) {
-            return predict(h).mean();
+            double[] mean = estimate.kalman().forecastMeans(h);
+            for (int k = 0; k < h; k++) {
+                mean[k] += regression(n + k + 1);
+            }
+            return mean;
         }
 
         /** Means and variances 1 … h ahead: [2] §4.11, with R's σ² ({@link #sigma2}). */
@@ -159,6 +164,16 @@ public final class Arima {
             ArimaKalman kalman = estimate.kalman();
             int rd = kalman.stateSize();
             double sd = Math.sqrt(sigma2);
+            // the loading R = (1, θ₁ … θ_q, 0 … 0): the zeros past θ_q would add nothing to the state
+            double[] loadings = new double[estimate.theta().length + 1];
+            for (int i = 0; i < loadings.length; i++) {
+                loadings[i] = kalman.loading(i);
+            }
+            int longest = java.util.Arrays.stream(shocks).mapToInt(row -> row.length).max().orElse(0);
+            double[] regression = new double[longest];
+            for (int k = 0; k < longest; k++) {
+                regression[k] = regression(n + k + 1);
+            }
             double[][] out = new double[shocks.length][];
             double[] state = new double[rd];
             double[] next = new double[rd];
@@ -169,11 +184,13 @@ public final class Arima {
                 for (int k = 0; k < h; k++) {
                     kalman.transition(state, next);
                     double e = sd * shocks[path][k];
-                    for (int i = 0; i < rd; i++) {
-                        next[i] += kalman.loading(i) * e;
+                    for (int i = 0; i < loadings.length; i++) {
+                        next[i] += loadings[i] * e;
                     }
-                    System.arraycopy(next, 0, state, 0, rd);
-                    out[path][k] = kalman.observe(state) + regression(n + k + 1);
+                    double[] stepped = next; // the new state; the old one's room takes the next step
+                    next = state;
+                    state = stepped;
+                    out[path][k] = kalman.observe(state) + regression[k];
                 }
             }
             return out;

@@ -2,10 +2,6 @@ package org.annalist.analysis.forecast;
 
 import java.util.Optional;
 import java.util.function.Supplier;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.LUDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.SingularValueDecomposition;
 
 /**
  * Estimation of a seasonal ARIMA model with fixed orders, step for step as R's {@code arima} [1]
@@ -28,16 +24,11 @@ import org.apache.commons.math3.linear.SingularValueDecomposition;
  */
 final class ArimaEstimation {
 
-    /** R's finite-difference step of {@code ARIMA_Gradtrans}. */
-    private static final double GRADTRANS_STEP = 1e-3;
-    /** R's {@code solve} refuses a matrix whose reciprocal condition number is below the machine epsilon. */
-    private static final double SINGULAR = Math.ulp(1.0);
-
     /**
      * @param coef          ar, ma, sar, sma, then the mean or drift coefficient
      * @param sigma2        R's {@code arima} σ̂²: the ML ssq / n.used, or the CSS mean square
      * @param value         the minimised objective, R's {@code res$value}
-     * @param varianceValid whether every diagonal element of the estimates' covariance is non-negative
+     * @param varianceValid whether every diagonal element of the estimates' covariance is non-negative ({@link ArimaCovarianceCheck})
      *                      (the forecast package refuses the model otherwise); computed on demand, since
      *                      its numerical Hessian costs as much as the search
      * @param filtered      the Kalman filter run over the values, whose final state the forecasts
@@ -87,6 +78,10 @@ final class ArimaEstimation {
     private final double[] adjusted;
     /** Without a regression term, the differenced values the conditional sum of squares works on. */
     private double[] differencedOnce;
+    /** The conditional sum of squares' room: residuals nobody asked for, and the non-zero lags of φ and θ. */
+    private double[] scratch;
+    private int[] arLags;
+    private int[] maLags;
 
     ArimaEstimation(double[] y, ArimaOrder order) {
         this.y = y;
@@ -130,7 +125,7 @@ final class ArimaEstimation {
         if (method == Arima.Method.CSS) {
             // the exact gradient, not R's differences: a model search fits dozens of these
             CssGradient gradient = new CssGradient(order, ncond, differenced(y), xreg == null ? null : differenced(xreg));
-            ArimaOptimiser css = new ArimaOptimiser(par -> cssObjective(par, ncond), parscale, gradient::at);
+            ArimaOptimiser css = new ArimaOptimiser(par -> cssObjective(par, ncond, gradient), parscale, gradient::at);
             Optional<ArimaOptimiser.Result> found = css.minimise(init, ArimaOptimiser.MAX_ITERATIONS);
             if (found.isEmpty()) {
                 return Optional.empty();
@@ -138,7 +133,7 @@ final class ArimaEstimation {
             double[] coef = found.get().par();
             double[] at = coef.clone();
             java.util.function.BooleanSupplier valid = () -> npar == 0
-                    || css.hessian(at).map(h -> varianceValid(h, nUsed, null)).orElse(false);
+                    || css.hessian(at).map(h -> ArimaCovarianceCheck.varianceValid(h, nUsed, null)).orElse(false);
             double[][] pt = ArimaPolynomials.expand(coef, order, false);
             removeRegression(coef);
             double[] residuals = new double[n];
@@ -148,7 +143,7 @@ final class ArimaEstimation {
                     filteredOnDemand(pt[0], pt[1], adjusted), valid, nUsed));
         }
         if (method == Arima.Method.CSS_ML) {
-            Optional<ArimaOptimiser.Result> found = new ArimaOptimiser(par -> cssObjective(par, ncond), parscale)
+            Optional<ArimaOptimiser.Result> found = new ArimaOptimiser(par -> cssObjective(par, ncond, null), parscale)
                     .minimise(init, ArimaOptimiser.MAX_ITERATIONS);
             if (found.isEmpty()) {
                 return Optional.empty();
@@ -187,7 +182,8 @@ final class ArimaEstimation {
                 value = mlObjective(coef, true);
             }
             double[] raw = coef.clone();
-            valid = () -> ml.hessian(raw).map(h -> varianceValid(h, nUsed, gradTransform(raw))).orElse(false);
+            valid = () -> ml.hessian(raw).map(h -> ArimaCovarianceCheck.varianceValid(h, nUsed,
+                    ArimaCovarianceCheck.gradTransform(order, raw))).orElse(false);
             ArimaPolynomials.partrans(order.p(), coef, 0, coef, 0);
             ArimaPolynomials.partrans(order.seasonalP(), coef, order.p() + order.q(), coef, order.p() + order.q());
         }
@@ -296,10 +292,12 @@ final class ArimaEstimation {
         }
     }
 
-    private double cssObjective(double[] par, int ncond) {
+    /** With the residuals kept for {@code gradient}'s forward pass at {@code par} where it takes them (null: none). */
+    private double cssObjective(double[] par, int ncond, CssGradient gradient) {
         double[][] pt = ArimaPolynomials.expand(par, order, false);
         removeRegression(par);
-        return 0.5 * Math.log(css(adjusted, pt[0], pt[1], ncond, null));
+        double[] residuals = gradient == null ? null : gradient.residualsKeptFor(par);
+        return 0.5 * Math.log(css(adjusted, pt[0], pt[1], ncond, residuals));
     }
 
     private double mlObjective(double[] par, boolean transform) {
@@ -325,19 +323,26 @@ final class ArimaEstimation {
         } else {
             w = differenced(x);
         }
-        double[] resid = residuals != null ? residuals : new double[n];
+        if (scratch == null) { // room reused by every evaluation of the search
+            scratch = new double[n];
+            arLags = new int[phi.length];
+            maLags = new int[theta.length];
+        }
+        double[] resid = residuals != null ? residuals : scratch;
         double ssq = 0;
         int nu = 0;
         // the expanded seasonal polynomials are mostly zeros: (1 − φB)(1 − ΦB¹²) has 2 of its 13 lags
-        int[] arLags = nonZero(phi);
-        int[] maLags = nonZero(theta);
+        int arCount = nonZero(phi, arLags);
+        int maCount = nonZero(theta, maLags);
         for (int l = ncond; l < n; l++) {
             double tmp = w[l];
-            for (int j : arLags) {
+            for (int a = 0; a < arCount; a++) {
+                int j = arLags[a];
                 tmp -= phi[j] * w[l - j - 1];
             }
             int jmax = l - ncond;
-            for (int j : maLags) {
+            for (int a = 0; a < maCount; a++) {
+                int j = maLags[a];
                 if (j >= jmax) {
                     break;
                 }
@@ -370,73 +375,19 @@ final class ArimaEstimation {
         return w;
     }
 
-    /** The indices of the coefficients that are not zero, in increasing order. */
-    private static int[] nonZero(double[] coefficients) {
+    /** Writes the indices of the coefficients that are not zero into {@code lags}, in increasing order; returns how many. */
+    private static int nonZero(double[] coefficients, int[] lags) {
         int count = 0;
-        int[] lags = new int[coefficients.length];
         for (int j = 0; j < coefficients.length; j++) {
             if (coefficients[j] != 0) {
                 lags[count++] = j;
             }
         }
-        return java.util.Arrays.copyOf(lags, count);
+        return count;
     }
 
     private void invertMa(double[] par) {
         ArimaPolynomials.invertMovingAverage(par, order.p(), order.q());
         ArimaPolynomials.invertMovingAverage(par, order.p() + order.q() + order.seasonalP(), order.seasonalQ());
-    }
-
-    /** [1] {@code ARIMA_Gradtrans}: the Jacobian of the AR transformation by forward differences. */
-    private double[][] gradTransform(double[] raw) {
-        double[][] a = new double[npar][npar];
-        for (int i = 0; i < npar; i++) {
-            a[i][i] = 1;
-        }
-        jacobianBlock(raw, 0, order.p(), a);
-        jacobianBlock(raw, order.p() + order.q(), order.seasonalP(), a);
-        return a;
-    }
-
-    private static void jacobianBlock(double[] raw, int from, int length, double[][] a) {
-        if (length == 0) {
-            return;
-        }
-        double[] w1 = new double[length];
-        double[] w2 = new double[length];
-        double[] w3 = new double[length];
-        System.arraycopy(raw, from, w1, 0, length);
-        ArimaPolynomials.partrans(length, w1, 0, w2, 0);
-        for (int i = 0; i < length; i++) {
-            w1[i] += GRADTRANS_STEP;
-            ArimaPolynomials.partrans(length, w1, 0, w3, 0);
-            for (int j = 0; j < length; j++) {
-                a[from + i][from + j] = (w3[j] - w2[j]) / GRADTRANS_STEP;
-            }
-            w1[i] -= GRADTRANS_STEP;
-        }
-    }
-
-    /**
-     * Whether diag(Aᵀ (n H)⁻¹ A) ≥ 0, the forecast package's {@code checkarima} (it rejects a model whose
-     * standard errors are NaN); a singular Hessian fails as R's {@code solve} does.
-     */
-    private static boolean varianceValid(double[][] hessian, int nUsed, double[][] a) {
-        int k = hessian.length;
-        RealMatrix h = new Array2DRowRealMatrix(hessian).scalarMultiply(nUsed);
-        double[] singular = new SingularValueDecomposition(h).getSingularValues();
-        if (!(singular[k - 1] >= SINGULAR * singular[0])) {
-            return false; // R's solve: "system is computationally singular"
-        }
-        LUDecomposition lu = new LUDecomposition(h, 0);
-        RealMatrix inverse = lu.getSolver().getInverse();
-        RealMatrix variance = a == null ? inverse
-                : new Array2DRowRealMatrix(a).transpose().multiply(inverse).multiply(new Array2DRowRealMatrix(a));
-        for (int i = 0; i < k; i++) {
-            if (!(variance.getEntry(i, i) >= 0)) {
-                return false;
-            }
-        }
-        return true;
     }
 }

@@ -47,10 +47,11 @@ final class ArimaKalman {
     final double[] a;
     final double[] pm;
     private final double[] anew;
-    private final double[] pnew;
+    /** P⁻, rewritten whole at each prediction. */
+    private double[] pnew;
     private final double[] mm;
-    /** The previous step's P⁻, for the test of convergence. */
-    private final double[] previous;
+    /** The previous step's P⁻, for the test of convergence: the two swap rooms rather than copy. */
+    private double[] previous;
     private final double[] gainVector;
     /** The lags k (0-based) with Δ_k ≠ 0: (1 − B)(1 − B¹²) has 3 of 13, so the sums skip the zeros. */
     private final int[] lags;
@@ -94,17 +95,29 @@ final class ArimaKalman {
         double[][] means = new double[y.length - firstOrigin][];
         double[] state = new double[rd];
         double[] next = new double[rd];
-        run(y, null, firstOrigin, origin -> {
-            double[] m = new double[Math.min(reach, y.length - origin)];
-            System.arraycopy(a, 0, state, 0, rd);
-            for (int k = 0; k < m.length; k++) {
-                transition(state, next);
-                System.arraycopy(next, 0, state, 0, rd);
-                m[k] = observe(state);
-            }
-            means[origin - firstOrigin] = m;
-        });
+        run(y, null, firstOrigin, origin -> means[origin - firstOrigin] =
+                meansAhead(Math.min(reach, y.length - origin), state, next));
         return means;
+    }
+
+    /**
+     * The forecast means of {@link #forecast} alone, 1 … h steps after the filtered state, without
+     * the covariances (the same arithmetic, so the same values).
+     */
+    double[] forecastMeans(int h) {
+        return meansAhead(h, new double[rd], new double[rd]);
+    }
+
+    /** Means 1 … h steps after the filtered state {@link #a}, with {@code state} and {@code next} as room to work. */
+    private double[] meansAhead(int h, double[] state, double[] next) {
+        double[] m = new double[h];
+        System.arraycopy(a, 0, state, 0, rd);
+        for (int k = 0; k < h; k++) {
+            transition(state, next);
+            System.arraycopy(next, 0, state, 0, rd);
+            m[k] = observe(state);
+        }
+        return m;
     }
 
     /**
@@ -131,9 +144,11 @@ final class ArimaKalman {
             }
             predictState();
             if (l > 0 && !steady) {
+                double[] last = pnew; // kept for the test of convergence; its room takes the step after
+                pnew = previous;
+                previous = last;
                 predictCovariance();
-                boolean unchanged = converged();
-                steady = unchanged && l > rd;
+                steady = l > rd && converged();
             }
             double resid = y[l] - anew[0];
             for (int i : lags) {
@@ -179,7 +194,7 @@ final class ArimaKalman {
      * time-invariant model the covariance converges to the steady-state solution of the Riccati
      * equation; R's {@code ARIMA_Like} keeps recomputing it). The test compares P⁻ with the previous
      * step's, kept in {@code previous}, to a relative {@value #STEADY_TOLERANCE}, far below what
-     * changes the likelihood's printed digits.
+     * changes the likelihood's printed digits; it is only asked after the first rd + 1 steps.
      */
     private boolean converged() {
         double change = 0;
@@ -188,7 +203,6 @@ final class ArimaKalman {
             change = Math.max(change, Math.abs(pnew[i] - previous[i]));
             size = Math.max(size, Math.abs(pnew[i]));
         }
-        System.arraycopy(pnew, 0, previous, 0, pnew.length);
         return change <= STEADY_TOLERANCE * size;
     }
 

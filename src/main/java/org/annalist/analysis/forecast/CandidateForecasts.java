@@ -3,6 +3,7 @@ package org.annalist.analysis.forecast;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Supplier;
 
 /**
  * The outlook's methods fitted on all the values they are given, each as a forecast with intervals
@@ -67,11 +68,16 @@ final class CandidateForecasts {
         return single(method, searched, horizon, shocks).map(m -> m.forecast(bounds));
     }
 
-    /** A single method's fit: its model, its point forecasts, closed-form variances where it has them, and its paths. */
-    private record Fitted(Outlook.Model model, double[] mean, Optional<Prediction> prediction, double[][] paths) {
+    /**
+     * A single method's fit: its model, its point forecasts, its paths, and its closed-form means
+     * and variances where it has them — made only when its own intervals are asked for: the
+     * combination needs the members' point forecasts and paths alone.
+     */
+    private record Fitted(Outlook.Model model, double[] mean, double[][] paths,
+                          Supplier<Optional<Prediction>> prediction) {
 
         Outlook.Forecast forecast(Outlook.Bounds bounds) {
-            return prediction.map(p -> Intervals.fromPrediction(model, p, paths, bounds))
+            return prediction.get().map(p -> Intervals.fromPrediction(model, p, paths, bounds))
                     .orElseGet(() -> Intervals.fromPaths(model, mean, paths, bounds));
         }
     }
@@ -82,17 +88,17 @@ final class CandidateForecasts {
         return switch (method) {
             case ETS -> searched.ets().map(fit -> new Fitted(
                     Outlook.Model.single(Outlook.Method.ETS, Optional.of(fit.model().label()), false), fit.forecast(horizon),
-                    fit.hasAnalyticIntervals() ? Optional.of(fit.predict(horizon)) : Optional.empty(), fit.paths(shocks)));
+                    fit.paths(shocks), () -> fit.hasAnalyticIntervals() ? Optional.of(fit.predict(horizon)) : Optional.empty()));
             case ARIMA -> searched.arima().map(fit -> new Fitted(
                     Outlook.Model.single(Outlook.Method.ARIMA, Optional.of(fit.label()), false), fit.forecast(horizon),
-                    Optional.of(fit.predict(horizon)), fit.paths(shocks)));
+                    fit.paths(shocks), () -> Optional.of(fit.predict(horizon))));
             case THETA -> searched.theta().map(theta -> new Fitted(
                     Outlook.Model.single(Outlook.Method.THETA, Optional.empty(), theta.deseasonalised()),
-                    theta.forecast(horizon), Optional.of(theta.predict(horizon)), theta.paths(shocks)));
+                    theta.forecast(horizon), theta.paths(shocks), () -> Optional.of(theta.predict(horizon))));
             case SEASONAL_NAIVE -> y.length <= cycle ? Optional.empty() : Optional.of(new Fitted(
                     Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, Optional.empty(), false),
-                    SeasonalNaive.forecast(y, cycle, horizon), Optional.of(SeasonalNaive.predict(y, cycle, horizon)),
-                    SeasonalNaive.paths(y, cycle, shocks)));
+                    SeasonalNaive.forecast(y, cycle, horizon), SeasonalNaive.paths(y, cycle, shocks),
+                    () -> Optional.of(SeasonalNaive.predict(y, cycle, horizon))));
             case COMBINATION, NAIVE_WITH_DRIFT -> throw new IllegalArgumentException("not a single method: " + method);
         };
     }

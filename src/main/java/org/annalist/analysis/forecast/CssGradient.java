@@ -10,7 +10,10 @@ package org.annalist.analysis.forecast;
  * from memory), then ∂F/∂φ_k = −Σ ē_l w_{l−k−1}, ∂F/∂θ_k = −Σ ē_l e_{l−k−1} and the chain rule
  * through the multiplicative seasonal expansion ({@link ArimaPolynomials#expand}). It costs about
  * three evaluations of the objective whatever the number of coefficients, where the central
- * differences R's {@code optim} uses cost two per coefficient.
+ * differences R's {@code optim} uses cost two per coefficient. Without a regression term the
+ * objective's own residuals are those of the forward pass (the same recursion on the same
+ * differenced values), so the objective keeps them here ({@link #residualsKeptFor}) and the gradient
+ * at the same coefficients — where R's search always asks for it — runs the backward pass alone.
  *
  * <h2>References</h2>
  * <ol>
@@ -36,6 +39,8 @@ final class CssGradient {
     private final double[] adjoint;
     private final double[] dPhi;
     private final double[] dTheta;
+    /** The coefficients whose residuals {@link #e} holds, from the objective (null when none are kept). */
+    private double[] keptFor;
 
     /**
      * @param differencedY    y differenced d times at lag 1 and D times at the seasonal lag, in place
@@ -95,8 +100,13 @@ final class CssGradient {
         for (int l = 0; l < n; l++) {
             w[l] = wx == null ? wy[l] : wy[l] - beta * wx[l];
         }
+        boolean kept = keptFor != null && java.util.Arrays.equals(par, keptFor);
+        keptFor = null;
         double ssq = 0;
-        for (int l = ncond; l < n; l++) {
+        for (int l = ncond; kept && l < n; l++) { // the objective's residuals at these coefficients
+            ssq += e[l] * e[l];
+        }
+        for (int l = kept ? n : ncond; l < n; l++) {
             double tmp = w[l];
             for (int k : arSupport) {
                 tmp -= phi[k] * w[l - k - 1];
@@ -158,6 +168,21 @@ final class CssGradient {
             }
         }
         return true;
+    }
+
+    /**
+     * Where the objective at {@code par} may write its residuals (e_l from l = ncond on) for the
+     * gradient at the same coefficients to use; null with a regression term, whose objective
+     * differences the adjusted values rather than subtracting the differenced regressor, so that its
+     * residuals may differ from the forward pass's in the last digits.
+     */
+    double[] residualsKeptFor(double[] par) {
+        if (wx != null) {
+            keptFor = null;
+            return null;
+        }
+        keptFor = par.clone();
+        return e;
     }
 
     /**

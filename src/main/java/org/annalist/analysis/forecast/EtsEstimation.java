@@ -92,9 +92,11 @@ final class EtsEstimation {
         final double[] guess;
         /** The initial states of the point being evaluated, reused from one evaluation to the next. */
         private final double[] initial;
-        /** The gradient's pass and its result in α, β*, γ, φ and the states, made at the first gradient. */
-        private EtsGradient gradient;
-        private double[] natural;
+        /** The gradient's passes and its result in α, β*, γ, φ and the states. */
+        private final EtsGradient gradient;
+        private final double[] natural;
+        /** The point whose forward pass the gradient keeps, valid while it {@link EtsGradient#hasKeptPass}. */
+        private final double[] keptAt;
 
         Coordinates(EtsModel model, double[] y) {
             this.model = model;
@@ -118,6 +120,9 @@ final class EtsEstimation {
                 upper[smoothing + i] = factor ? STATE_RANGE - start[i] : STATE_RANGE;
             }
             initial = new double[start.length];
+            gradient = new EtsGradient(model, y, initial.length);
+            natural = new double[EtsGradient.STATES + initial.length];
+            keptAt = new double[dimension];
         }
 
         private boolean isSeasonalFactor(int state) {
@@ -126,10 +131,12 @@ final class EtsEstimation {
 
         /** The likelihood criterion at z; +∞ where z gives a last seasonal factor at or below zero. */
         double criterion(double[] z) {
+            gradient.forgetKept();
             if (!fillInitial(z)) {
                 return Double.POSITIVE_INFINITY;
             }
-            return EtsFilter.criterion(model, y, z[0], beta(z), gamma(z), phi(z), initial);
+            System.arraycopy(z, 0, keptAt, 0, z.length);
+            return EtsFilter.criterion(model, y, z[0], beta(z), gamma(z), phi(z), initial, gradient);
         }
 
         /**
@@ -140,13 +147,14 @@ final class EtsEstimation {
             if (!fillInitial(z)) {
                 return false;
             }
-            if (gradient == null) {
-                gradient = new EtsGradient(model, y, initial.length);
-                natural = new double[EtsGradient.STATES + initial.length];
-            }
             boolean trended = model.trend() != EtsModel.Trend.NONE;
             boolean seasonal = model.season() != EtsModel.Season.NONE;
-            if (!gradient.at(z[0], trended ? beta(z) / z[0] : 0, gamma(z), phi(z), initial, natural)) {
+            double betaStar = trended ? beta(z) / z[0] : 0;
+            // the search asks for the gradient where it has just evaluated the criterion: its pass serves
+            boolean found = gradient.hasKeptPass() && Arrays.equals(z, keptAt)
+                    ? gradient.fromKeptPass(z[0], betaStar, gamma(z), phi(z), natural)
+                    : gradient.at(z[0], betaStar, gamma(z), phi(z), initial, natural);
+            if (!found) {
                 return false;
             }
             java.util.Arrays.fill(g, 0);

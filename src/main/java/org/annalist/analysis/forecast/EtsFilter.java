@@ -129,6 +129,19 @@ final class EtsFilter {
      */
     static double criterion(EtsModel model, double[] y, double alpha, double beta, double gamma, double phiValue,
                             double[] initial) {
+        return criterion(model, y, alpha, beta, gamma, phiValue, initial, null);
+    }
+
+    /**
+     * {@link #criterion(EtsModel, double[], double, double, double, double, double[])}, its forward
+     * pass kept in {@code keep} (when not null) for the gradient at the same point
+     * ({@link EtsGradient#fromKeptPass}); marked whole only when the criterion is reached.
+     */
+    static double criterion(EtsModel model, double[] y, double alpha, double beta, double gamma, double phiValue,
+                            double[] initial, EtsGradient keep) {
+        if (keep != null) {
+            keep.forgetKept();
+        }
         EtsModel.Error error = model.error();
         EtsModel.Trend trend = model.trend();
         EtsModel.Season season = model.season();
@@ -145,7 +158,8 @@ final class EtsFilter {
         double sumE2 = 0;
         double sumLogF = 0;
         double productF = 1; // Σ log|ŷ| as the log of a running product, taken before it can overflow
-        for (double v : y) {
+        for (int step = 0; step < y.length; step++) {
+            double v = y[step];
             int oldestSlot = head == 0 ? m - 1 : head - 1;
             double phib = trend == EtsModel.Trend.NONE ? 0 : phi * b;
             double q = l + phib;
@@ -157,6 +171,9 @@ final class EtsFilter {
             }
             double e = error == EtsModel.Error.ADDITIVE ? v - f : (v - f) / f;
             sumE2 += e * e;
+            if (keep != null) {
+                keep.keep(step, l, b, oldest, f, e);
+            }
             if (error == EtsModel.Error.MULTIPLICATIVE) {
                 double size = Math.abs(f);
                 if (size > 1e100 || size < 1e-100) {
@@ -183,6 +200,9 @@ final class EtsFilter {
             l = newL;
         }
         sumLogF += Math.log(productF);
+        if (keep != null) {
+            keep.finishKept(sumE2);
+        }
         return y.length * Math.log(sumE2) + 2 * sumLogF; // [2] §5.2: n log(Σe²) + 2 Σ log|ŷ|
     }
 

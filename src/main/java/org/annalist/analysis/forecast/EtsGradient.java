@@ -8,7 +8,10 @@ package org.annalist.analysis.forecast;
  * forward pass keeps each step's states, a backward pass carries the criterion's derivative with
  * respect to each state back to the start. It costs about three criterion evaluations whatever the
  * number of variables, where forward differences cost one evaluation per variable (some 17 for a
- * monthly seasonal model).
+ * monthly seasonal model). Where the criterion was just evaluated at the same point,
+ * {@link EtsFilter#criterion} keeps its forward pass here ({@link #keep}) and the gradient needs the
+ * backward pass alone ({@link #fromKeptPass}): a quasi-Newton search asks for the gradient exactly
+ * where its line search accepted a value.
  *
  * <h2>References</h2>
  * <ol>
@@ -28,6 +31,11 @@ final class EtsGradient {
     private final EtsModel model;
     private final double[] y;
     private final int k;
+    /** The model's form, read once: both passes branch on it at every step. */
+    private final boolean trended;
+    private final boolean seasonal;
+    private final boolean additiveSeason;
+    private final boolean multiplicativeError;
     /** What the forward pass keeps of each step for the backward one: the states read, the forecast, the error. */
     private final double[] levels;
     private final double[] trends;
@@ -35,12 +43,19 @@ final class EtsGradient {
     private final double[] fs;
     private final double[] es;
     private final double[] seasonAdjoint;
+    /** Σ e_t² of the kept pass, and whether a whole pass is kept ({@link #finishKept}). */
+    private double keptSumE2;
+    private boolean kept;
 
     /** @param stateCount the length of the initial states {level, trend (if any), s_1 … s_m (if seasonal)} */
     EtsGradient(EtsModel model, double[] y, int stateCount) {
         this.model = model;
         this.y = y;
         k = STATES + stateCount;
+        trended = model.trend() != EtsModel.Trend.NONE;
+        seasonal = model.season() != EtsModel.Season.NONE;
+        additiveSeason = model.season() == EtsModel.Season.ADDITIVE;
+        multiplicativeError = model.error() == EtsModel.Error.MULTIPLICATIVE;
         int n = y.length;
         levels = new double[n];
         trends = new double[n];
@@ -59,14 +74,10 @@ final class EtsGradient {
      * @return false where the criterion is infinite (a forecast not finite) or the gradient is not finite
      */
     boolean at(double alpha, double betaStar, double gamma, double phiValue, double[] initial, double[] g) {
-        boolean trended = model.trend() != EtsModel.Trend.NONE;
-        EtsModel.Season season = model.season();
-        boolean seasonal = season != EtsModel.Season.NONE;
-        boolean additiveSeason = season == EtsModel.Season.ADDITIVE;
-        boolean multiplicativeError = model.error() == EtsModel.Error.MULTIPLICATIVE;
         int m = model.seasonSlots();
         int n = y.length;
         double phi = model.damped() ? phiValue : 1;
+        kept = false; // overwritten below
         double l = initial[0];
         double b = trended ? initial[1] : 0;
         double[] s = new double[m]; // s_j at s[(head + j − 1) mod m], as EtsFilter.criterion keeps them
@@ -88,11 +99,7 @@ final class EtsGradient {
             }
             double e = multiplicativeError ? (v - f) / f : v - f;
             sumE2 += e * e;
-            levels[t] = l;
-            trends[t] = b;
-            oldests[t] = oldest;
-            fs[t] = f;
-            es[t] = e;
+            keep(t, l, b, oldest, f, e);
             double pp = !seasonal ? v : additiveSeason ? v - oldest : v / oldest;
             double newL = q + alpha * (pp - q);
             if (trended) {
@@ -105,6 +112,53 @@ final class EtsGradient {
             }
             l = newL;
         }
+        return backward(alpha, betaStar, gamma, phiValue, sumE2, g);
+    }
+
+    /** Forgets the kept pass: the criterion is about to be evaluated elsewhere. */
+    void forgetKept() {
+        kept = false;
+    }
+
+    /** Keeps step t of the criterion's forward pass: the level, trend and oldest season it read, its forecast and error. */
+    void keep(int t, double level, double trend, double oldest, double f, double e) {
+        levels[t] = level;
+        trends[t] = trend;
+        oldests[t] = oldest;
+        fs[t] = f;
+        es[t] = e;
+    }
+
+    /** Marks the pass kept by {@link #keep} as whole, with its Σ e_t². */
+    void finishKept(double sumE2) {
+        keptSumE2 = sumE2;
+        kept = true;
+    }
+
+    /**
+     * {@link #at} from the forward pass {@link EtsFilter#criterion} kept, which must have been run
+     * at the same parameters and initial states: the same values, from the backward pass alone.
+     *
+     * @throws IllegalStateException when no whole pass is kept
+     */
+    boolean fromKeptPass(double alpha, double betaStar, double gamma, double phiValue, double[] g) {
+        if (!kept) {
+            throw new IllegalStateException("no forward pass kept");
+        }
+        return backward(alpha, betaStar, gamma, phiValue, keptSumE2, g);
+    }
+
+    /** Whether a whole forward pass is kept. */
+    boolean hasKeptPass() {
+        return kept;
+    }
+
+    /** The backward pass over the kept forward pass: the adjoints of the states, step by step back to the start. */
+    private boolean backward(double alpha, double betaStar, double gamma, double phiValue, double sumE2, double[] g) {
+        int m = model.seasonSlots();
+        int n = y.length;
+        double phi = model.damped() ? phiValue : 1;
+        int first = model.firstSeasonIndex();
         java.util.Arrays.fill(g, 0);
         java.util.Arrays.fill(seasonAdjoint, 0);
         double levelBar = 0; // the adjoints of the level and trend after step t
@@ -113,8 +167,8 @@ final class EtsGradient {
         for (int t = n - 1; t >= 0; t--) {
             double v = y[t];
             int slot = m - 1 - t % m; // the slot step t read and wrote (head runs backwards from 0)
-            l = levels[t];
-            b = trends[t];
+            double l = levels[t];
+            double b = trends[t];
             double oldest = oldests[t];
             double f = fs[t];
             double phib = trended ? phi * b : 0;

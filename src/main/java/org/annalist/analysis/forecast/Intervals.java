@@ -1,6 +1,7 @@
 package org.annalist.analysis.forecast;
 
 import java.util.Arrays;
+import org.annalist.analysis.OrderStatistics;
 
 /**
  * The outlook's 80 and 95 % intervals: the normal approximation around a closed-form mean and
@@ -65,18 +66,48 @@ final class Intervals {
         return out;
     }
 
-    /** Sample quantiles by linear interpolation between order statistics ([1] type 7). */
+    /**
+     * Sample quantiles by linear interpolation between order statistics ([1] type 7). Only the order
+     * statistics the quantiles need are selected ({@link OrderStatistics#select}), not the whole
+     * sample sorted: the same values, at a fraction of the cost for the paths' 2,000 values.
+     */
     static double[] quantiles(double[] x, double... probabilities) {
-        double[] sorted = x.clone();
-        Arrays.sort(sorted);
+        int n = x.length;
+        int[] below = new int[probabilities.length];
+        double[] fraction = new double[probabilities.length];
+        int[] ranks = new int[2 * probabilities.length];
+        for (int i = 0; i < probabilities.length; i++) {
+            double position = probabilities[i] * (n - 1); // [1] type 7: h = (n − 1)p + 1, 1-based
+            below[i] = (int) Math.floor(position);
+            fraction[i] = position - below[i];
+            ranks[2 * i] = below[i];
+            ranks[2 * i + 1] = Math.min(below[i] + 1, n - 1);
+        }
+        double[] ordered = orderStatistics(x, ranks);
         double[] q = new double[probabilities.length];
         for (int i = 0; i < probabilities.length; i++) {
-            double position = probabilities[i] * (sorted.length - 1); // [1] type 7: h = (n − 1)p + 1, 1-based
-            int below = (int) Math.floor(position);
-            int above = Math.min(below + 1, sorted.length - 1);
-            q[i] = sorted[below] + (position - below) * (sorted[above] - sorted[below]);
+            double lower = ordered[2 * i];
+            q[i] = lower + fraction[i] * (ordered[2 * i + 1] - lower);
         }
         return q;
+    }
+
+    /** The values of {@code x} at the 0-based {@code ranks} (any order, repeats allowed) as if sorted; NaN sorts last. */
+    private static double[] orderStatistics(double[] x, int[] ranks) {
+        double[] values = x.clone();
+        for (double v : values) {
+            if (Double.isNaN(v)) { // no rank for selection: sort, as the values would be sorted
+                Arrays.sort(values);
+                return Arrays.stream(ranks).mapToDouble(r -> values[r]).toArray();
+            }
+        }
+        int[] distinct = Arrays.stream(ranks).sorted().distinct().toArray();
+        double[] selected = OrderStatistics.select(values, distinct);
+        double[] out = new double[ranks.length];
+        for (int i = 0; i < ranks.length; i++) {
+            out[i] = selected[Arrays.binarySearch(distinct, ranks[i])];
+        }
+        return out;
     }
 
     /**

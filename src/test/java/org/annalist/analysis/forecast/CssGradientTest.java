@@ -104,6 +104,39 @@ class CssGradientTest {
         }
     }
 
+    /**
+     * Given the objective's residuals at the same coefficients (those a CSS fit with these
+     * coefficients reports), the gradient is bit for bit the one of its own forward pass, so the
+     * search's path does not depend on which pass served; with a regression term it keeps none.
+     */
+    @Test
+    void gradientFromTheObjectivesResidualsIsTheWholePasssGradient() {
+        double[] y = seasonalArma(4, 150);
+        Object[][] cases = {
+            {new ArimaOrder(2, 1, 1, 1, 1, 1, 12, false), new double[] {0.3, -0.2, 0.35, 0.1, -0.5}},
+            {new ArimaOrder(0, 1, 1, 0, 1, 1, 12, false), new double[] {-0.6, -0.3}},
+        };
+        for (Object[] c : cases) {
+            ArimaOrder order = (ArimaOrder) c[0];
+            double[] par = (double[]) c[1];
+            int m = order.period();
+            int ncond = order.d() + order.seasonalD() * m + order.p() + m * order.seasonalP();
+            double[] whole = new double[par.length];
+            assertThat(new CssGradient(order, ncond, differenced(y, order), null).at(par, whole)).isTrue();
+            CssGradient kept = new CssGradient(order, ncond, differenced(y, order), null);
+            double[] residuals = Arima.withCoefficients(y, order, Arima.Method.CSS, par).orElseThrow().residuals();
+            System.arraycopy(residuals, 0, kept.residualsKeptFor(par), 0, residuals.length);
+            double[] fromKept = new double[par.length];
+            assertThat(kept.at(par, fromKept)).isTrue();
+            assertThat(fromKept).as(order.label()).containsExactly(whole);
+        }
+        ArimaOrder withMean = new ArimaOrder(1, 0, 1, 1, 0, 1, 12, true);
+        double[] ones = new double[y.length];
+        java.util.Arrays.fill(ones, 1);
+        assertThat(new CssGradient(withMean, 13, y, ones).residualsKeptFor(new double[] {0.4, 0.3, 0.2, 0.4, 55}))
+                .isNull();
+    }
+
     /** d times at lag 1, D times at the seasonal lag, in place, as {@link ArimaEstimation} differences. */
     private static double[] differenced(double[] x, ArimaOrder order) {
         double[] w = x.clone();

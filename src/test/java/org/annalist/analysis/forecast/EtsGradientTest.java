@@ -3,6 +3,8 @@ package org.annalist.analysis.forecast;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -18,6 +20,23 @@ class EtsGradientTest {
         return y;
     }
 
+    /** Every form of ETS model with a monthly season where it has one: each error, trend, damping and season. */
+    private static List<EtsModel> everyModel() {
+        List<EtsModel> models = new ArrayList<>();
+        for (EtsModel.Error error : EtsModel.Error.values()) {
+            for (EtsModel.Trend trend : EtsModel.Trend.values()) {
+                for (boolean damped : new boolean[] {false, true}) {
+                    for (EtsModel.Season season : EtsModel.Season.values()) {
+                        if (!damped || trend != EtsModel.Trend.NONE) {
+                            models.add(new EtsModel(error, trend, damped, season, 12));
+                        }
+                    }
+                }
+            }
+        }
+        return models;
+    }
+
     /**
      * The exact gradient of the estimation criterion agrees with central differences of
      * {@link EtsFilter#criterion} (steps of 10⁻⁶ relative, common practice (no source)) to 10⁻⁵
@@ -28,17 +47,8 @@ class EtsGradientTest {
     void exactGradientAgreesWithCentralDifferencesOfTheCriterion() {
         for (long seed = 1; seed <= 2; seed++) {
             double[] y = seasonal(seed, 96);
-            for (EtsModel.Error error : EtsModel.Error.values()) {
-                for (EtsModel.Trend trend : EtsModel.Trend.values()) {
-                    for (boolean damped : new boolean[] {false, true}) {
-                        if (damped && trend == EtsModel.Trend.NONE) {
-                            continue;
-                        }
-                        for (EtsModel.Season season : EtsModel.Season.values()) {
-                            check(new EtsModel(error, trend, damped, season, 12), y);
-                        }
-                    }
-                }
+            for (EtsModel model : everyModel()) {
+                check(model, y);
             }
         }
     }
@@ -51,37 +61,52 @@ class EtsGradientTest {
     @Test
     void searchGradientAgreesWithDifferencesInTheSearchsVariables() {
         double[] y = seasonal(3, 84);
-        for (EtsModel.Error error : EtsModel.Error.values()) {
-            for (EtsModel.Trend trend : EtsModel.Trend.values()) {
-                for (boolean damped : new boolean[] {false, true}) {
-                    if (damped && trend == EtsModel.Trend.NONE) {
-                        continue;
-                    }
-                    for (EtsModel.Season season : EtsModel.Season.values()) {
-                        EtsModel model = new EtsModel(error, trend, damped, season, 12);
-                        EtsEstimation.Coordinates c = new EtsEstimation.Coordinates(model, y);
-                        double[] z = c.guess.clone();
-                        z[0] = 0.3;
-                        z[1] = 0.15;
-                        z[2] = 0.2;
-                        z[3] = 0.93;
-                        for (int i = 4; i < z.length; i++) {
-                            z[i] = 0.004 * (i % 3 - 1);
-                        }
-                        double[] g = new double[z.length];
-                        assertThat(c.gradient(z, g)).as(model.label()).isTrue();
-                        for (int i = 0; i < z.length; i++) {
-                            double h = 1e-6;
-                            double[] up = z.clone();
-                            double[] down = z.clone();
-                            up[i] += h;
-                            down[i] -= h;
-                            double fd = (c.criterion(up) - c.criterion(down)) / (2 * h);
-                            assertThat(g[i]).as(model.label() + " z" + i).isCloseTo(fd, within(1e-5 * Math.max(1, Math.abs(fd))));
-                        }
-                    }
-                }
+        for (EtsModel model : everyModel()) {
+            EtsEstimation.Coordinates c = new EtsEstimation.Coordinates(model, y);
+            double[] z = c.guess.clone();
+            z[0] = 0.3;
+            z[1] = 0.15;
+            z[2] = 0.2;
+            z[3] = 0.93;
+            for (int i = 4; i < z.length; i++) {
+                z[i] = 0.004 * (i % 3 - 1);
             }
+            double[] g = new double[z.length];
+            assertThat(c.gradient(z, g)).as(model.label()).isTrue();
+            for (int i = 0; i < z.length; i++) {
+                double h = 1e-6;
+                double[] up = z.clone();
+                double[] down = z.clone();
+                up[i] += h;
+                down[i] -= h;
+                double fd = (c.criterion(up) - c.criterion(down)) / (2 * h);
+                assertThat(g[i]).as(model.label() + " z" + i).isCloseTo(fd, within(1e-5 * Math.max(1, Math.abs(fd))));
+            }
+        }
+    }
+
+    /**
+     * After the criterion at a point, the search's gradient there comes from the criterion's kept
+     * forward pass: bit for bit the gradient of a whole pass of its own, for every model (the
+     * search's path, and so every fit, must not depend on which pass served).
+     */
+    @Test
+    void gradientFromTheCriterionsKeptPassIsTheWholePasssGradient() {
+        double[] y = seasonal(4, 72);
+        for (EtsModel model : everyModel()) {
+            EtsEstimation.Coordinates kept = new EtsEstimation.Coordinates(model, y);
+            EtsEstimation.Coordinates fresh = new EtsEstimation.Coordinates(model, y);
+            double[] z = kept.guess.clone();
+            z[0] = 0.4;
+            z[1] = 0.1;
+            z[2] = 0.3;
+            z[3] = 0.9;
+            double[] fromKept = new double[z.length];
+            double[] fromWhole = new double[z.length];
+            assertThat(kept.criterion(z)).as(model.label()).isFinite();
+            assertThat(kept.gradient(z, fromKept)).as(model.label()).isTrue();
+            assertThat(fresh.gradient(z, fromWhole)).as(model.label()).isTrue();
+            assertThat(fromKept).as(model.label()).containsExactly(fromWhole);
         }
     }
 
