@@ -63,11 +63,7 @@ class EtsGradientTest {
         double[] y = seasonal(3, 84);
         for (EtsModel model : everyModel()) {
             EtsEstimation.Coordinates c = new EtsEstimation.Coordinates(model, y);
-            double[] z = c.guess.clone();
-            z[0] = 0.3;
-            z[1] = 0.15;
-            z[2] = 0.2;
-            z[3] = 0.93;
+            double[] z = smoothingAt(c.guess, 0.3, 0.15, 0.2, 0.93);
             for (int i = 4; i < z.length; i++) {
                 z[i] = 0.004 * (i % 3 - 1);
             }
@@ -96,11 +92,7 @@ class EtsGradientTest {
         for (EtsModel model : everyModel()) {
             EtsEstimation.Coordinates kept = new EtsEstimation.Coordinates(model, y);
             EtsEstimation.Coordinates fresh = new EtsEstimation.Coordinates(model, y);
-            double[] z = kept.guess.clone();
-            z[0] = 0.4;
-            z[1] = 0.1;
-            z[2] = 0.3;
-            z[3] = 0.9;
+            double[] z = smoothingAt(kept.guess, 0.4, 0.1, 0.3, 0.9);
             double[] fromKept = new double[z.length];
             double[] fromWhole = new double[z.length];
             assertThat(kept.criterion(z)).as(model.label()).isFinite();
@@ -140,5 +132,15 @@ class EtsGradientTest {
 
     private static double[] tail(double[] x) {
         return java.util.Arrays.copyOfRange(x, EtsGradient.STATES, x.length);
+    }
+
+    /** The search's start with its first four variables set: α, β/α, γ/(1 − α), and φ for a damped model (else the first state's offset). */
+    private static double[] smoothingAt(double[] guess, double alpha, double betaShare, double gammaShare, double phi) {
+        double[] z = guess.clone();
+        z[0] = alpha;
+        z[1] = betaShare;
+        z[2] = gammaShare;
+        z[3] = phi;
+        return z;
     }
 }
