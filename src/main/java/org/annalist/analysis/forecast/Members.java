@@ -70,7 +70,7 @@ final class Members {
                     .or(() -> AutoArima.fitForOutlook(training, period))
                     .map(fit -> fit::forecastsFromOrigins);
             // two seasons are too few for Theta's own test for a season: the form chosen on all values
-            case THETA -> (training.length > 2 * period ? Theta.fit(training, period)
+            case THETA -> (Theta.seasonTestable(training.length, period) ? Theta.fit(training, period)
                     : Theta.fit(training, period, forms.theta().map(Theta.Fit::deseasonalised).orElse(false)))
                     .map(theta -> eachOrigin((before, h) -> theta.updated(before).map(f -> f.forecast(h))));
             case SEASONAL_NAIVE -> training.length < cycle ? Optional.empty()

@@ -151,9 +151,14 @@ public final class Theta {
                 .map(ses -> new Fit(seasonalIndex, ses, StartLine.through(values, n).slope() / 2, n)); // [2] §3: b/2
     }
 
+    /** Whether {@link #isSeasonal}'s test can be run on {@code n} values: a season, and more than two of them. */
+    static boolean seasonTestable(int n, int period) {
+        return period >= 2 && n > 2 * period;
+    }
+
     /** Positive data, more than two seasons, and a significant lag-m autocorrelation (as R's thetaf, from memory). */
     static boolean isSeasonal(double[] y, int period) {
-        if (period < 2 || y.length <= 2 * period) {
+        if (!seasonTestable(y.length, period)) {
             return false;
         }
         for (double v : y) {
