@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.PartsCheck;
@@ -36,7 +37,7 @@ final class MultiOutlookWords {
             String method = o == null ? NONE : method(o.model()) + ", " + reason(o.chosenBecause().basis());
             seriesByMethod.computeIfAbsent(method, k -> new ArrayList<>()).add(series.get(i).name());
         }
-        if (seriesByMethod.keySet().equals(java.util.Set.of(NONE))) {
+        if (seriesByMethod.keySet().equals(Set.of(NONE))) {
             return NONE;
         }
         List<String> groups = new ArrayList<>();

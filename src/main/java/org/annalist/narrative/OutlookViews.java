@@ -193,10 +193,13 @@ final class OutlookViews {
 
     /** The current year as observed plus forecast, in a sentence; empty when it is observed in full or unknown. */
     static String currentYear(OutlookFinding.CurrentYear c, String unit, Formats f) {
-        return c == null ? "" : currentYear(c, unit, f, step(c.estimate().mean(), c.estimate().hi80() - c.estimate().lo80()));
+        return currentYear(c, unit, f, Double.NaN);
     }
 
-    /** … with its estimate rounded to {@code meanStep} where that is finer than its own step (the other figures keep theirs). */
+    /**
+     * … with its estimate rounded to {@code meanStep} where that is finer than its own step (the
+     * other figures keep theirs); NaN for its own step.
+     */
     private static String currentYear(OutlookFinding.CurrentYear c, String unit, Formats f, double meanStep) {
         if (c == null || c.forecastPeriods() == 0) {
             return "";

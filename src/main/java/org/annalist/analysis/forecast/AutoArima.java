@@ -107,7 +107,8 @@ public final class AutoArima {
      * The outlook's search: R's defaults ({@link #fit(double[], int)}) for non-seasonal data,
      * {@link #fitConditional} for seasonal data. On the 645 M3 yearly series the default search chose
      * R's order for every series, the conditional one for 81 %, and the outlook's mean MASE went
-     * from 2.668 to 2.662 (the whole analysis's from 2.670 to 2.664) at a few ms more per series. On the 756 quarterly series the default
+     * from 2.668 to 2.662 (the whole analysis's from 2.670 to 2.664) at a few ms more per series. On
+     * the 756 quarterly series the default
      * search also chose R's order for all but one (the conditional one for 44 %: on short series the
      * conditional sum of squares favours seasonal AR and MA terms), and ARIMA's own MASE fell from
      * 1.205 to R's 1.189, but the outlook's rose from 1.078 to 1.083 (the combination's was 1.082),
