@@ -36,7 +36,8 @@ import java.util.Optional;
  * closed-form forecast variance where it has one, else quantiles of {@value #PATHS} simulated paths
  * with a fixed seed ({@link Shocks}); the combination's paths are its members' paths averaged under
  * common shocks, so that its intervals keep the members' correlation. Where the intervals are
- * narrower than the errors the chosen method made in the back-test, they and the paths are widened
+ * narrower than the errors the chosen method made in the back-test — the combination's errors when a
+ * single method was chosen over it ({@link Widening#yardstick}) — they and the paths are widened
  * to those errors; an 80 % interval wider than several hundred such errors support is narrowed to
  * them ({@link Widening}). Sums over several periods come from the paths
  * ({@link YearSums}). Everything is clipped to the measure's bounds: counts are never forecast below
@@ -370,10 +371,11 @@ public final class Outlook {
         List<Score> scores = run.map(Backtest.Run::scores).orElse(List.of());
         double[] widening = ones(horizon);
         boolean widened95 = false;
-        Optional<Score> own = scores.stream().filter(s -> s.method() == chosen).findFirst();
-        if (own.isPresent()) {
+        Method judgedBy = Widening.yardstick(choice, chosen);
+        Optional<Score> yardstick = scores.stream().filter(s -> s.method() == judgedBy).findFirst();
+        if (yardstick.isPresent()) {
             boolean positive = bounds.lower() >= 0 && Arrays.stream(fitted.y()).allMatch(v -> v > 0);
-            Widening.Widened w = Widening.apply(f, own.get().errors(), positive, bounds);
+            Widening.Widened w = Widening.apply(f, yardstick.get().errors(), positive, bounds);
             f = w.forecast();
             widening = w.factors();
             widened95 = w.widened95();
