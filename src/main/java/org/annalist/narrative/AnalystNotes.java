@@ -302,7 +302,8 @@ public final class AnalystNotes {
     }
 
     public static String all(List<Findings> findings) {
-        return findings.stream().map(AnalystNotes::of).collect(Collectors.joining(System.lineSeparator()));
+        // each series' notes depend on its findings alone: a file of thousands is written on every core, in order
+        return findings.parallelStream().map(AnalystNotes::of).collect(Collectors.joining(System.lineSeparator()));
     }
 
     /** Period labels, comma-separated: {@code 2019-10, 2022-10}. */
