@@ -8,7 +8,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.stream.IntStream;
+import java.util.function.Function;
 import org.annalist.series.Holiday;
 import org.annalist.chart.Figure;
 import org.annalist.findings.FigurePlan;
@@ -91,6 +91,27 @@ public final class BriefPipeline {
 
     /** As {@link #findings}, with the warnings ({@code analyze}). */
     public Analysed analysed(Job job) {
+        Rendered<Findings> rendered = rendered(job, findings -> findings);
+        return new Analysed(rendered.outputs(), rendered.warnings());
+    }
+
+    /**
+     * What {@link #analysed} gives, with each series' findings turned into {@code render}'s output as
+     * soon as they are made and then let go: a file of thousands of series ({@code analyze} as text)
+     * holds their notes, not their findings.
+     *
+     * @param outputs  one per series, in order
+     * @param warnings as {@link Analysed#warnings}
+     */
+    public record Rendered<T>(List<T> outputs, List<String> warnings) {
+        public Rendered {
+            outputs = List.copyOf(outputs);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /** As {@link #analysed}, each series' findings rendered by {@code render} (which must be safe on several threads). */
+    public <T> Rendered<T> rendered(Job job, Function<Findings, T> render) {
         List<Holiday> holidays = holidays(job);
         SeriesFiles.ReadFile file = files.read(job.input());
         List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));
@@ -98,26 +119,35 @@ public final class BriefPipeline {
         for (SeriesSelection.Wanted wanted : SeriesSelection.wanted(job.series(), file)) {
             selected.add(SeriesSelection.select(job, file, wanted, true));
         }
-        List<Findings> findings = analyseAll(job, selected, file.read().keys(), holidays);
-        for (int i = 0; i < selected.size(); i++) {
-            warnings.addAll(ReadingWarnings.ofSeries(selected.get(i).series(), findings.get(i),
-                    shownHolidays(job), holidays));
+        Optional<Path> holidayFile = shownHolidays(job);
+        List<Analysis<T>> all = analyseAll(selected, s -> {
+            Findings findings = analyse(job, s, file.read().keys(), holidays);
+            return new Analysis<>(render.apply(findings),
+                    ReadingWarnings.ofSeries(s.series(), findings, holidayFile, holidays));
+        });
+        List<T> outputs = new ArrayList<>(all.size());
+        for (Analysis<T> analysis : all) {
+            outputs.add(analysis.output());
+            warnings.addAll(analysis.warnings());
         }
-        return new Analysed(findings, warnings);
+        return new Rendered<>(outputs, warnings);
+    }
+
+    /** One series' rendered findings and the warnings about it. */
+    private record Analysis<T>(T output, List<String> warnings) {
     }
 
     /**
      * Analyses the selected series, on every core when there are several (a file of thousands of
-     * series), and returns their findings in the selection's order: each series' findings depend
-     * only on the series, so the order of the work changes nothing but the time.
+     * series), and returns what {@code analysis} made of each in the selection's order: each series'
+     * findings depend only on the series, so the order of the work changes nothing but the time.
      */
-    private static List<Findings> analyseAll(Job job, List<SeriesSelection.Selected> selected, SeriesKeys keys,
-                                            List<Holiday> holidays) {
+    private static <T> List<T> analyseAll(List<SeriesSelection.Selected> selected,
+                                          Function<SeriesSelection.Selected, T> analysis) {
         if (selected.size() < 2) {
-            return selected.stream().map(s -> analyse(job, s, keys, holidays)).toList();
+            return selected.stream().map(analysis).toList();
         }
-        return IntStream.range(0, selected.size()).parallel()
-                .mapToObj(i -> analyse(job, selected.get(i), keys, holidays)).toList();
+        return selected.parallelStream().map(analysis).toList();
     }
 
     /**

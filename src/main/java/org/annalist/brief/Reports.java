@@ -1,6 +1,5 @@
 package org.annalist.brief;
 
-import java.util.List;
 import org.annalist.findings.Findings;
 import org.annalist.findings.FindingsJson;
 import org.annalist.narrative.AnalystNotes;
@@ -17,8 +16,8 @@ public final class Reports {
         return FindingsJson.write(value, JsonTerms.ENGLISH);
     }
 
-    /** One line per finding with its evidence, series after series. */
-    public static String notes(List<Findings> findings) {
-        return AnalystNotes.all(findings);
+    /** One series' notes: one line per finding with its evidence ({@code analyze} joins them series after series). */
+    public static String notes(Findings findings) {
+        return AnalystNotes.of(findings);
     }
 }

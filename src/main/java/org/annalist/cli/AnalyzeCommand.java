@@ -9,7 +9,6 @@ import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.Job;
 import org.annalist.brief.SelectionProblem;
 import org.annalist.brief.SeriesChoice;
-import org.annalist.findings.Findings;
 import org.annalist.brief.Reports;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -55,19 +54,22 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        List<Findings> findings;
+        // the text is made series by series as each is analysed, so that a file of thousands of
+        // series holds their notes rather than their findings
+        BriefPipeline.Rendered<?> rendered;
         try {
-            BriefPipeline.Analysed analysed = new BriefPipeline().analysed(job());
-            findings = analysed.findings();
-            analysed.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
+            rendered = format == Format.json ? new BriefPipeline().rendered(job(), findings -> findings)
+                    : new BriefPipeline().rendered(job(), Reports::notes);
         } catch (SelectionProblem problem) {
             throw SelectionWords.forAnalyze(problem);
         }
+        rendered.warnings().forEach(w -> spec.commandLine().getErr().println("warning: " + w));
         PrintWriter out = spec.commandLine().getOut();
+        List<?> outputs = rendered.outputs();
         if (format == Format.json) {
-            out.print(Reports.json(findings.size() == 1 ? findings.get(0) : findings));
+            out.print(Reports.json(outputs.size() == 1 ? outputs.get(0) : outputs));
         } else {
-            out.print(Reports.notes(findings));
+            out.print(String.join(System.lineSeparator(), outputs.stream().map(String.class::cast).toList()));
         }
         out.flush();
         return ExitCodes.DONE;

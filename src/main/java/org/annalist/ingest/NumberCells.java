@@ -68,6 +68,14 @@ final class NumberCells {
         if (point == 0) {
             return Evidence.NONE;
         }
+        if (point == 1) {
+            return pointEvidence(cell);
+        }
+        return patternEvidence(cell);
+    }
+
+    /** {@link #evidence} by the number pattern alone, for any cell (the shortcuts above agree with it). */
+    static Evidence patternEvidence(String cell) {
         Matcher m = NUMBER.matcher(cell);
         if (!m.matches()) {
             return Evidence.NONE;
@@ -95,6 +103,23 @@ final class NumberCells {
             return Evidence.NONE;                                    // 1,234 or 1.234: either reading fits
         }
         return mark == '.' ? Evidence.POINT : Evidence.COMMA;
+    }
+
+    /**
+     * {@link #evidence} of a cell of an optional minus and digits with one point between digits
+     * ({@code 12.5}, {@code -1.234}), as the pattern's reading below decides it, without the patterns
+     * (the commonest value cell; a file of millions of them spent most of its reading time there):
+     * the point proves itself unless it could group thousands, that is, exactly three digits follow
+     * it and one to three digits other than a lone 0 precede it.
+     */
+    private static Evidence pointEvidence(String cell) {
+        int start = cell.charAt(0) == '-' ? 1 : 0;
+        int point = cell.indexOf('.');
+        int digitsBefore = point - start;
+        int digitsAfter = cell.length() - point - 1;
+        boolean loneZero = digitsBefore == 1 && cell.charAt(start) == '0';
+        boolean groupable = digitsAfter == 3 && digitsBefore <= 3 && !loneZero;
+        return groupable ? Evidence.NONE : Evidence.POINT;
     }
 
     /**

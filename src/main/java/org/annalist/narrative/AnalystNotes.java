@@ -301,10 +301,6 @@ public final class AnalystNotes {
         return Math.abs(v) >= 100 ? String.format(Locale.ROOT, "%.1f", v) : String.format(Locale.ROOT, "%.4g", v);
     }
 
-    public static String all(List<Findings> findings) {
-        return findings.stream().map(AnalystNotes::of).collect(Collectors.joining(System.lineSeparator()));
-    }
-
     /** Period labels, comma-separated: {@code 2019-10, 2022-10}. */
     private static String labels(List<Period> periods) {
         return periods.stream().map(Period::label).collect(Collectors.joining(", "));

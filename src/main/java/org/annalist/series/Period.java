@@ -2,6 +2,7 @@ package org.annalist.series;
 
 import java.time.DayOfWeek;
 import java.time.LocalDate;
+import java.time.temporal.ChronoField;
 import java.time.temporal.IsoFields;
 import java.util.Locale;
 import java.util.Objects;
@@ -138,8 +139,20 @@ public record Period(Frequency frequency, long index) implements Comparable<Peri
 
     /** The calendar year; for ISO weeks the week-based year, so 2021-01-01 lies in week 2020-W53. */
     public int year() {
-        LocalDate start = startDate();
-        return frequency == Frequency.WEEKLY ? start.get(IsoFields.WEEK_BASED_YEAR) : start.getYear();
+        // the arithmetic of startDate without making the date: a bulk analysis asks millions of periods their year
+        return switch (frequency) {
+            case ANNUAL -> validYear(index);
+            case HALF_YEARLY -> validYear(Math.floorDiv(index, 2));
+            case QUARTERLY -> validYear(Math.floorDiv(index, 4));
+            case MONTHLY -> validYear(Math.floorDiv(index, 12));
+            case WEEKLY -> startDate().get(IsoFields.WEEK_BASED_YEAR);
+            case DAILY, BUSINESS_DAILY -> startDate().getYear();
+        };
+    }
+
+    /** The year as {@link LocalDate#of} takes it: an int, within the years a date can have (else it throws as that does). */
+    private static int validYear(long year) {
+        return ChronoField.YEAR.checkValidIntValue(Math.toIntExact(year));
     }
 
     /**

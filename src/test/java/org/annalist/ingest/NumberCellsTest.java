@@ -3,6 +3,9 @@ package org.annalist.ingest;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Optional;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
 import org.annalist.series.ValueFlag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -60,5 +63,28 @@ class NumberCellsTest {
         "1,234,567|POINT", "0.123|POINT", "1,234|NONE", "1.234|NONE", "1234|NONE"})
     void theDigitsProveTheDecimalMarkOnlyWhenUnambiguous(String cell, NumberCells.Evidence expected) {
         assertThat(NumberCells.evidence(cell)).isEqualTo(expected);
+    }
+
+    /**
+     * The shortcut for cells of digits with one point ({@code 751.0}, {@code -0.125}, {@code 00.123})
+     * decides as the number pattern does, on every such cell: a minus or none, 1 to 5 digits
+     * (leading zeros included), the point, 1 to 5 digits (synthetic cells).
+     */
+    @Property
+    void onePointCellsProveTheMarkAsThePatternSays(@ForAll boolean minus, @ForAll @IntRange(min = 1, max = 5) int before,
+                                                   @ForAll @IntRange(min = 1, max = 5) int after,
+                                                   @ForAll @IntRange(min = 0, max = 99_999) int digits,
+                                                   @ForAll @IntRange(min = 0, max = 99_999) int fraction) {
+        String integerPart = String.format("%05d", digits).substring(5 - before);
+        String fractionPart = String.format("%05d", fraction).substring(5 - after);
+        String cell = (minus ? "-" : "") + integerPart + "." + fractionPart;
+        assertThat(NumberCells.evidence(cell)).as(cell).isEqualTo(NumberCells.patternEvidence(cell));
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {"-0.123|POINT", "-1.234|NONE", "00.123|NONE", "1234.567|POINT", "751.0|POINT"})
+    void aMinusOrLeadingZeroChangesNothingButTheDigitsBeforeThePoint(String cell, NumberCells.Evidence expected) {
+        assertThat(NumberCells.evidence(cell)).isEqualTo(expected);
+        assertThat(NumberCells.patternEvidence(cell)).isEqualTo(expected);
     }
 }

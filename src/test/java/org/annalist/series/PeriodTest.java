@@ -76,4 +76,31 @@ class PeriodTest {
             assertThat(origin.until(origin.plus(steps))).isEqualTo(steps);
         }
     }
+
+    /**
+     * A period's year is its first day's year (the week-based year for ISO weeks), also for periods
+     * before year 0, which {@link Period#year} finds without making the date (java.time's calendar
+     * is the reference).
+     */
+    @Property
+    void theYearIsTheFirstDaysYear(@ForAll @LongRange(min = -40_000, max = 60_000) long epochDay) {
+        LocalDate date = LocalDate.ofEpochDay(epochDay * 37);
+        for (Frequency f : Frequency.values()) {
+            if (f == Frequency.BUSINESS_DAILY && date.getDayOfWeek().getValue() > 5) {
+                continue;
+            }
+            Period period = Period.containing(f, date);
+            int expected = f == Frequency.WEEKLY ? period.startDate().get(java.time.temporal.IsoFields.WEEK_BASED_YEAR)
+                    : period.startDate().getYear();
+            assertThat(period.year()).as(period.label()).isEqualTo(expected);
+        }
+    }
+
+    @Test
+    void aYearBeyondTheCalendarIsRefusedAsTheDateWouldBe() {
+        assertThatThrownBy(() -> new Period(Frequency.MONTHLY, 12L * 1_000_000_000L).year())
+                .isInstanceOf(java.time.DateTimeException.class);
+        assertThatThrownBy(() -> new Period(Frequency.MONTHLY, 12L * 1_000_000_000L).startDate())
+                .isInstanceOf(java.time.DateTimeException.class);
+    }
 }

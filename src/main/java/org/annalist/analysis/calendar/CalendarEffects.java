@@ -258,7 +258,9 @@ public final class CalendarEffects {
      */
     public static Optional<Result> robust(double[] irregular, Period start, int easterWindow, List<Holiday> holidays,
                                           Weekdays weekdays, double screenScore) {
-        Design d = design(irregular, start, easterWindow, holidays, weekdays);
+        // the regressors depend on the calendar alone: made once for both designs below
+        Regressors calendar = Regressors.of(start, irregular.length, easterWindow, holidays, weekdays);
+        Design d = design(irregular, calendar, easterWindow);
         if (d == null) {
             return Optional.empty();
         }
@@ -287,7 +289,7 @@ public final class CalendarEffects {
         for (int t : screened) {
             kept[t] = Double.NaN;
         }
-        Design rest = design(kept, start, easterWindow, holidays, weekdays);
+        Design rest = design(kept, calendar, easterWindow);
         return rest == null ? Optional.empty() : leastSquares(rest, screened);
     }
 
@@ -296,14 +298,27 @@ public final class CalendarEffects {
                           int easterWindow) {
     }
 
+    /** Every position's centred regressors with their names ({@link #regressors}). */
+    private record Regressors(double[][] all, List<String> names) {
+
+        static Regressors of(Period start, int n, int easterWindow, List<Holiday> holidays, Weekdays weekdays) {
+            if (!applies(start.frequency())) {
+                throw new IllegalArgumentException("calendar effects are estimated for monthly or quarterly data, not "
+                        + start.frequency());
+            }
+            List<String> names = new ArrayList<>();
+            return new Regressors(regressors(start, n, easterWindow, holidays, weekdays, names), names);
+        }
+    }
+
     private static Design design(double[] irregular, Period start, int easterWindow, List<Holiday> holidays,
                                  Weekdays weekdays) {
-        if (!applies(start.frequency())) {
-            throw new IllegalArgumentException("calendar effects are estimated for monthly or quarterly data, not "
-                    + start.frequency());
-        }
-        List<String> names = new ArrayList<>();
-        double[][] all = regressors(start, irregular.length, easterWindow, holidays, weekdays, names);
+        return design(irregular, Regressors.of(start, irregular.length, easterWindow, holidays, weekdays), easterWindow);
+    }
+
+    private static Design design(double[] irregular, Regressors calendar, int easterWindow) {
+        List<String> names = calendar.names();
+        double[][] all = calendar.all();
         List<Integer> rows = new ArrayList<>();
         for (int t = 0; t < irregular.length; t++) {
             if (!Double.isNaN(irregular[t])) {

@@ -72,7 +72,7 @@ final class HuberRegression {
             for (int r = 0; r < y.length; r++) {
                 residual[r] = y[r] - dot(x[r], beta);
             }
-            double median = OrderStatistics.median(residual.clone());
+            double median = OrderStatistics.median(residual);   // which leaves residual as it is
             double[] deviation = new double[residual.length];
             for (int r = 0; r < residual.length; r++) {
                 deviation[r] = Math.abs(residual[r] - median);

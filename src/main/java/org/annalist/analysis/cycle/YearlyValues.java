@@ -34,6 +34,10 @@ public record YearlyValues(List<Integer> years, double[] values) {
     public static Optional<YearlyValues> of(double[] values, Period start) {
         Frequency frequency = start.frequency();
         Period end = start.plus(values.length - 1);
+        int[] yearOf = new int[values.length];   // each period's year, found once
+        for (int i = 0; i < values.length; i++) {
+            yearOf[i] = start.plus(i).year();
+        }
         List<Integer> years = new ArrayList<>();
         List<Double> means = new ArrayList<>();
         for (int year = start.year(); year <= end.year(); year++) {
@@ -41,7 +45,7 @@ public record YearlyValues(List<Integer> years, double[] values) {
             int n = 0;
             int expected = 0;
             for (int i = 0; i < values.length; i++) {
-                if (start.plus(i).year() == year) {
+                if (yearOf[i] == year) {
                     expected++;
                     if (!Double.isNaN(values[i])) {
                         sum += values[i];
