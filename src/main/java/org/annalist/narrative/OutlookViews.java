@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import java.util.ArrayList;
 import java.util.List;
 import org.annalist.findings.Measure;
+import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.OutlookMethod;
@@ -23,7 +24,8 @@ final class OutlookViews {
     }
 
     /** @param measure how next year is compared with the last complete one: in %, points or units */
-    static BriefView.OutlookView of(Series series, OutlookFinding o, Formats f, MeasureWords measure) {
+    static BriefView.OutlookView of(Series series, Findings findings, Formats f, MeasureWords measure) {
+        OutlookFinding o = findings.outlook();
         if (o == null) {
             return BriefView.OutlookView.ABSENT;
         }
@@ -62,8 +64,12 @@ final class OutlookViews {
         String methodName = methodInWords(o.model());
         String noBacktest = o.caveats().stream().filter(c -> c instanceof OutlookCaveat.NoBacktest)
                 .map(c -> Terms.outlookCaveat(c, f)).findFirst().orElse("");
-        List<String> caveats = o.caveats().stream().filter(c -> !(c instanceof OutlookCaveat.NoBacktest))
-                .map(c -> Terms.outlookCaveat(c, f)).toList();
+        List<String> caveats = new ArrayList<>(o.caveats().stream().filter(c -> !(c instanceof OutlookCaveat.NoBacktest))
+                .map(c -> Terms.outlookCaveat(c, f)).toList());
+        String easter = OutlookCautions.easter(findings, f, measure.percent());
+        if (!easter.isEmpty()) {
+            caveats.add(easter);
+        }
         String range = o.backtestFrom() == null ? "" : f.period(o.backtestFrom()) + " to " + f.period(o.backtestTo());
         return new BriefView.OutlookView(true, methodName, why(o, f, range), f.period(o.fittedFrom()),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
@@ -79,7 +85,8 @@ final class OutlookViews {
                         o.typicalYearErrorPct() < 10 ? 1 : 0) + "\u00A0%",
                 o.typicalYearErrorPct() != null && o.typicalErrorPct() != null
                         && o.typicalYearErrorPct() < o.typicalErrorPct(),
-                f.count(o.backtestPeriods()), range, o.intervalsWidened(), o.intervalsNarrowed(), noBacktest, scores, caveats);
+                f.count(o.backtestPeriods()), range, o.intervalsWidened(), o.intervalsNarrowed(), noBacktest, scores, caveats,
+                OutlookCautions.againstTrend(series, findings, f), OutlookCautions.againstTrend(series, findings, f, false));
     }
 
     /** The method as a reader of the outlook page can follow it, with the models in their usual notation. */

@@ -209,8 +209,17 @@ final class Terms {
                     + " seasonal pattern, before forecasting: the forecasts do not expect it to recur.";
         }
         if (caveat instanceof OutlookCaveat.BreakTooRecent b) {
+            String periods = MeasureWords.perPeriod(b.start().frequency()).substring(2) + "s";
+            if (b.periodsSince() >= b.periodsNeeded()) {
+                return "The outlook uses all values, the years before the structural change in " + f.period(b.start())
+                        + " included: without a back-test, fitting on the values since then alone could not be"
+                        + " checked.";
+            }
             return "The latest structural change, in " + f.period(b.start()) + ", is too recent to fit the outlook on the"
-                    + " new level alone: it uses all values, so it may lag behind the new level.";
+                    + " new level alone: trying that needs at least " + b.periodsNeeded() + " " + periods + " since the"
+                    + " change, to fit on them and test the forecasts on the same recent " + periods + " as forecasts from"
+                    + " all values, and there are " + b.periodsSince() + ". The outlook uses all values, so it may lag"
+                    + " behind the new level.";
         }
         if (caveat instanceof OutlookCaveat.NoBacktest n) {
             return switch (n.reason()) {

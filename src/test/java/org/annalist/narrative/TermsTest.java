@@ -61,6 +61,21 @@ class TermsTest {
                 .isEqualTo("1 missing value was filled with what trend and season predict before forecasting.");
     }
 
+    /**
+     * A break too recent for the outlook says how recent is too recent: the periods needed since it
+     * (Outlook.shortestOwnRegime: 24 to fit on and 24 to test, for monthly data) and those there are
+     * (invented: 44 months since March 2023).
+     */
+    @Test
+    void aBreakTooRecentForTheOutlookSaysItsThreshold() {
+        Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+        assertThat(org.annalist.analysis.forecast.Outlook.shortestOwnRegime(190, 12)).isEqualTo(48);
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.BreakTooRecent(Period.month(2023, 3), 44, 48), f))
+                .contains("in March 2023, is too recent", "needs at least 48 months since the change", "there are 44.");
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.BreakTooRecent(Period.quarter(2020, 2), 20, 16), f))
+                .doesNotContain("too recent").contains("without a back-test");
+    }
+
     /** After a break the outlook keeps the history unless the regime alone did clearly better: the caveat says which. */
     @Test
     void theHistoryKeptAfterABreakIsSaidWithItsReason() {
