@@ -70,8 +70,10 @@ final class OutlookCautions {
                 : (Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ") + span + ", " + pacePct;
         double side = Math.signum(next - pace);   // which way the outlook lies from the trend's pace
         if (!allReasons) {
-            return "Next year's " + f.signedPercent(next) + gap + ": the outlook starts from the latest level instead of"
-                    + " extending the trend line.";
+            String against = opposite ? (next < 0 ? " is a fall against " : " is a rise against ")
+                    : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
+            return "Next year's " + f.signedPercent(next) + against + span + " (" + f.signedPercent(pace)
+                    + " a year of the latest year's level): the outlook starts from the latest level, not the trend line.";
         }
         List<String> reasons = new ArrayList<>();
         reasons.add("the outlook does not extend the trend line (its methods start from the latest level and give"
