@@ -28,7 +28,8 @@ final class OutlookCautions {
      * it does not: material when the two go opposite ways (next year not "about the same"), or
      * their paces differ by {@link DecisionRules#OUTLOOK_TREND_GAP_POINTS} points or more. The
      * trend's pace is its Sen slope over the mean of the latest year's values, so that both are
-     * % a year of a level a reader has just seen. The reasons, each only when its evidence points
+     * % a year of a level a reader has just seen (the whole period's trend keeps the % of its average
+     * level that its own page gives). The reasons, each only when its evidence points
      * the way of the difference: the methods start from the latest level (always so); the last
      * twelve months' change; the outlook fitted on all values, the years before the latest break
      * included; a bridged fall or rise whose movement back lifts (or lowers) the trend; and the
@@ -56,7 +57,10 @@ final class OutlookCautions {
         if (slope == null || !(level > 0)) {
             return "";
         }
-        double pace = 100 * slope / level;
+        // the whole period's trend is given on its page as % of its average level: the same figure here
+        Double pagePct = sinceBreak ? null : findings.trend().changePctPerYear();
+        double pace = pagePct != null ? pagePct : 100 * slope / level;
+        String basis = pagePct != null ? " a year of its average level" : " a year of the latest year's average level";
         OutlookFinding.YearChange change = o.nextYearChange();
         double next = change.pct();
         boolean opposite = Math.signum(pace) != Math.signum(next) && !change.aboutTheSame();
@@ -64,7 +68,7 @@ final class OutlookCautions {
             return "";
         }
         String span = sinceBreak ? "the trend since " + f.period(trend.from()) : "the trend over the whole period";
-        String pacePct = "about " + f.signedPercent(pace) + " a year of the latest year's average level";
+        String pacePct = "about " + f.signedPercent(pace) + basis;
         String gap = opposite ? " is a " + (next < 0 ? "fall" : "rise") + ", while " + span + " "
                 + (pace > 0 ? "rises" : "falls") + " by " + pacePct
                 : (Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ") + span + ", " + pacePct;
@@ -73,7 +77,7 @@ final class OutlookCautions {
             String against = opposite ? (next < 0 ? " is a fall against " : " is a rise against ")
                     : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
             return "Next year's " + f.signedPercent(next) + against + span + " (" + f.signedPercent(pace)
-                    + " a year of the latest year's level): the outlook starts from the latest level, not the trend line.";
+                    + (pagePct != null ? basis : " a year of the latest year's level") + "): the outlook starts from the latest level, not the trend line.";
         }
         List<String> reasons = new ArrayList<>();
         reasons.add("the outlook does not extend the trend line (its methods start from the latest level and give"
@@ -88,7 +92,7 @@ final class OutlookCautions {
                 && o.caveats().stream().anyMatch(c -> c instanceof OutlookCaveat.BreakTooRecent
                 || c instanceof OutlookCaveat.HistoryKept)) {
             reasons.add("it is fitted on all values from " + f.period(o.fittedFrom()) + ", the years before the change in "
-                    + f.period(trend.from()) + " included, over which the trend was " + (side < 0 ? "slower" : "faster"));
+                    + f.period(trend.from()) + " included, over which the trend's rate was " + (side < 0 ? "lower" : "higher"));
         }
         for (OutlookCaveat c : o.caveats()) {
             if (c instanceof OutlookCaveat.ShockBridged b && trend.from().compareTo(b.to()) <= 0

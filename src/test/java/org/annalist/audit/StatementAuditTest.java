@@ -310,6 +310,36 @@ class StatementAuditTest {
         }, "a key figure set at a size its length does not call for");
     }
 
+    /**
+     * Terms a board member would not know (the reviewer's list) are not used on the pages before the
+     * reading guide unless the guide explains them; "regime" is not used there at all.
+     */
+    @Test
+    void everyStatisticiansTermOfTheMainPagesIsInTheReadingGuide() {
+        List<String> glossed = List.of("sup-F", "Sen slope", "sMAPE", "MASE", "seasonal naive", "p-value",
+                "Robust score", "Back-test", "Trend-cycle");
+        assertNone(b -> {
+            int guide = b.html().indexOf("id=\"guide\"");
+            int appendix = b.html().indexOf("id=\"appendix\"");
+            if (guide < 0 || appendix < guide) {
+                return List.of();
+            }
+            String main = AuditedBrief.words(b.html().substring(0, guide)).toLowerCase(java.util.Locale.ROOT);
+            String glossary = AuditedBrief.words(b.html().substring(guide, appendix)).toLowerCase(java.util.Locale.ROOT);
+            List<String> found = new ArrayList<>();
+            for (String term : glossed) {
+                String t = term.toLowerCase(java.util.Locale.ROOT);
+                if (main.contains(t) && !glossary.contains(t)) {
+                    found.add(term + " used but not in the reading guide");
+                }
+            }
+            if (main.contains("regime")) {
+                found.add("regime");
+            }
+            return found;
+        }, "a statistician's term on the main pages that the reading guide does not explain");
+    }
+
     // ---- 6. outlook sentences that mislead on paper -------------------------------------------
 
     @Test
