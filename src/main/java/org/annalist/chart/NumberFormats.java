@@ -26,13 +26,13 @@ final class NumberFormats {
     }
 
     /**
-     * Signed labels, grouped, with up to {@code decimals} decimals: {@code +14}, {@code −3.5}; a
-     * value that rounds to zero is {@code 0}, with no sign.
+     * Signed labels, grouped, with exactly {@code decimals} decimals, so that labels side by side
+     * share them: {@code +14}, {@code −3.5}, {@code +12.0}; a value that rounds to zero has no sign.
      */
     static NumberFormat signed(int decimals) {
         DecimalFormatSymbols symbols = DecimalFormatSymbols.getInstance(Locale.ENGLISH);
         symbols.setMinusSign('\u2212');
-        String digits = decimals == 0 ? "#,##0" : "#,##0." + "#".repeat(decimals);
+        String digits = decimals == 0 ? "#,##0" : "#,##0." + "0".repeat(decimals);
         return new NoNegativeZero(new DecimalFormat("+" + digits + ";\u2212" + digits, symbols));
     }
 

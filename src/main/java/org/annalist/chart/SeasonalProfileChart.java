@@ -28,9 +28,11 @@ public final class SeasonalProfileChart {
         ChartStyle.install();
         boolean multiplicative = season.multiplicative();
         DefaultCategoryDataset data = new DefaultCategoryDataset();
+        double step = multiplicative ? 1 : labelStep(season.profile());
+        int decimals = (int) Math.max(0, Math.round(-Math.log10(step)));
         for (SeasonalityFinding.ProfilePoint p : season.profile()) {
             // rounded as labelled, so that a tiny index reads 0, not −0
-            data.addValue(multiplicative ? Math.rint(p.index()) + 0.0 : p.index(), "index", p.label());
+            data.addValue(Math.rint(p.index() / step) * step + 0.0, "index", p.label());
         }
         String axis = ChartStyle.drawable(captions.profileAxis());
         JFreeChart chart = ChartFactory.createBarChart(null, null, axis, data, PlotOrientation.VERTICAL, false, false,
@@ -50,12 +52,25 @@ public final class SeasonalProfileChart {
         bars.setSeriesOutlinePaint(0, Color.WHITE);
         bars.setDrawBarOutline(false);
         bars.setDefaultItemLabelGenerator(new StandardCategoryItemLabelGenerator("{2}",
-                NumberFormats.signed(multiplicative ? 0 : 1)));
+                NumberFormats.signed(decimals)));
         bars.setDefaultItemLabelsVisible(true);
         bars.setDefaultItemLabelFont(ChartStyle.smallFont());
         bars.setDefaultItemLabelPaint(ChartStyle.INK);
         bars.setDefaultPositiveItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE12, TextAnchor.BOTTOM_CENTER));
         bars.setDefaultNegativeItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE6, TextAnchor.TOP_CENTER));
         return new Figure(FigurePlan.Chart.PROFILE, chart);
+    }
+
+    /**
+     * The rounding step shared by every bar's label of a profile in units: three significant digits
+     * of the largest bar (as the text gives the peak and trough, Formats.significant), so that labels
+     * beside each other never mix "+12" and "+3.5", nor "+5,138" beside a text's "+5,140".
+     */
+    static double labelStep(java.util.List<SeasonalityFinding.ProfilePoint> profile) {
+        double largest = profile.stream().mapToDouble(p -> Math.abs(p.index())).max().orElse(0);
+        if (!(largest > 0) || Double.isInfinite(largest)) {
+            return 1;
+        }
+        return Math.pow(10, Math.floor(Math.log10(largest)) - 2);
     }
 }

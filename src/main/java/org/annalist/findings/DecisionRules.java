@@ -245,4 +245,10 @@ public final class DecisionRules {
      * bare verb.
      */
     public static final double OUTLOOK_SAME_PCT = 2.0;
+    /**
+     * The outlook page says why next year's change differs from the trend stated on the first page
+     * when they go opposite ways, or when their paces (both in % a year) differ by this many
+     * percentage points or more (our rule).
+     */
+    public static final double OUTLOOK_TREND_GAP_POINTS = 2.0;
 }

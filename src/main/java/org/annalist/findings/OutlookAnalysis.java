@@ -52,7 +52,7 @@ final class OutlookAnalysis {
         }
         Outlook.Result outlook = result.get();
         int from = outlook.span().from();
-        history(series, regimeStart, outlook.span()).ifPresent(caveats::add);
+        history(series, regimeStart, outlook.span(), last + 1).ifPresent(caveats::add);
         if (outlook.backtest().isEmpty()) {
             caveats.add(new OutlookCaveat.NoBacktest(Outlook.backtestPossible(y.length, period)
                     ? OutlookCaveat.NoBacktest.Reason.NO_SCALE : OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT));
@@ -135,7 +135,7 @@ final class OutlookAnalysis {
     }
 
     /** What the outlook did with the history before a structural break, or empty without one. */
-    private static Optional<OutlookCaveat> history(Series series, int regimeStart, Outlook.Span span) {
+    private static Optional<OutlookCaveat> history(Series series, int regimeStart, Outlook.Span span, int used) {
         if (regimeStart <= 0) {
             return Optional.empty();
         }
@@ -143,7 +143,8 @@ final class OutlookAnalysis {
         return Optional.of(switch (span.basis()) {
             case REGIME_CLEARLY_BETTER -> new OutlookCaveat.FittedSinceBreak(start, span.allMae(), span.regimeMae());
             case ALL_VALUES_NOT_BEATEN -> new OutlookCaveat.HistoryKept(start, span.allMae(), span.regimeMae());
-            case REGIME_TOO_SHORT, NO_BREAK -> new OutlookCaveat.BreakTooRecent(start);
+            case REGIME_TOO_SHORT, NO_BREAK -> new OutlookCaveat.BreakTooRecent(start, used - regimeStart,
+                    Outlook.shortestOwnRegime(used, series.frequency().seasonalPeriod()));
         });
     }
 

@@ -15,8 +15,15 @@ public sealed interface OutlookCaveat {
     record FittedSinceBreak(Period start, double allMae, double regimeMae) implements OutlookCaveat {
     }
 
-    /** The latest structural change is too recent to fit on the new level alone: all values are used. */
-    record BreakTooRecent(Period start) implements OutlookCaveat {
+    /**
+     * The latest structural change is too recent to fit on the new level alone: all values are used.
+     *
+     * @param periodsSince  periods from the change to the latest value
+     * @param periodsNeeded periods needed since the change to compare fitting on them alone
+     *                      ({@link org.annalist.analysis.forecast.Outlook#shortestOwnRegime}); when
+     *                      {@code periodsSince} reaches it, the comparison failed for want of a back-test
+     */
+    record BreakTooRecent(Period start, int periodsSince, int periodsNeeded) implements OutlookCaveat {
     }
 
     /**

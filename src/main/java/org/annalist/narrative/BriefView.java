@@ -154,9 +154,11 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     /**
      * @param calendar        what the expected value allows for of the calendar, a sentence; empty when nothing worth naming
      * @param calendarAllowed the expected values include significant calendar effects
+     * @param withinBreak     the first period of the structural change whose 95 % interval holds this
+     *                        period, as written; empty when none does
      */
     public record OutlierRow(String period, String observed, String expected, String deviation, String score,
-                             boolean above, String calendar, boolean calendarAllowed) {
+                             boolean above, String calendar, boolean calendarAllowed, String withinBreak) {
     }
 
     /**
@@ -168,6 +170,8 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param step          the break is reported as a step in level
      * @param slope         the break is reported as a change of slope ({@code slopeBefore} → {@code slopeAfter},
      *                      each with its unit, then {@code slopeTime})
+     * @param bendWithGap   a change of slope whose two fitted lines still lie a reported step apart
+     *                      ({@link SectionViews#bendWithGap}): the words name the gap ({@code change}) too
      * @param slopeTime     what the slopes are counted over: {@code a year} for slopes in % (a series worked in
      *                      logs), else as {@link TrendView#slopeTime()}
      * @param drifted       the regime before this break is the previous break's and its line moved from
@@ -180,7 +184,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                            String change, boolean rise, String statistic, String pValue, boolean provisional,
                            boolean step, boolean slope, String slopeBefore, String slopeAfter, boolean drifted,
                            String previousAfter, String overall, boolean overallRise, String firstBefore,
-                           String firstPeriod, String slopeTime) {
+                           String firstPeriod, String slopeTime, boolean bendWithGap) {
     }
 
     /**
@@ -228,16 +232,20 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param noBacktest  why the forecasts could not be tested, as a sentence; empty with a back-test
      * @param typicalYearError the back-test's typical error of a year's total ({@code 1.9 %}); empty without
      * @param yearSteadier the year's typical error is smaller than a single period's (errors partly cancelled)
+     * @param againstTrend why next year's change differs from the trend the first page states
+     *                     ({@link OutlookCautions#againstTrend}); empty when it does not differ materially
+     * @param againstTrendShort the same with only the reason that always holds, for the multi-series brief
      */
     public record OutlookView(boolean present, String method, String chosenBecause, String fittedFrom, String horizon,
                               String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean compact,
                               boolean hasYear, boolean total, String nextYear, String yearMean, String yearLow,
                               String yearHigh, String comparison, String currentYear, String typicalError,
                               String typicalYearError, boolean yearSteadier, String backtestSpan, String backtestRange, boolean widened, boolean narrowed, String noBacktest,
-                              List<ScoreRow> backtest, List<String> caveats) {
+                              List<ScoreRow> backtest, List<String> caveats, String againstTrend,
+                              String againstTrendShort) {
 
         static final OutlookView ABSENT = new OutlookView(false, "", "", "", "", "", "", List.of(), false, false, false,
-                "", "", "", "", "", "", "", "", false, "", "", false, false, "", List.of(), List.of());
+                "", "", "", "", "", "", "", "", false, "", "", false, false, "", List.of(), List.of(), "", "");
 
         public OutlookView {
             rows = List.copyOf(rows);

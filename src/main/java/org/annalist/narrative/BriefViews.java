@@ -47,7 +47,7 @@ public final class BriefViews {
                 sections.trend(),
                 sections.season(), sections.cycle(), sections.outliers(), sections.breaks(), sections.episodes(),
                 sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(),
-                OutlookViews.of(series, findings.outlook(), f, measure), facts(series, findings, f),
+                OutlookViews.of(series, findings, f, measure), facts(series, findings, f),
                 notes, AppendixViews.methods(findings, f), AppendixViews.thresholds(), provenance);
     }
 

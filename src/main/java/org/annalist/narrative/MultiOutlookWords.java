@@ -26,15 +26,18 @@ final class MultiOutlookWords {
     }
 
     /**
-     * The outlooks' methods, series that share a method and a reason named together: {@code for Total,
-     * Domestic and Brevania the average of ETS, ARIMA and Theta, as no single method did clearly
-     * better in the back-test; none for Long-haul}; {@code none} when no series has an outlook.
+     * The outlooks' methods, series that share a method and a reason named together, in the words of
+     * {@link OutlookMethodWords}: {@code for Total, Domestic and Brevania the average of three methods:
+     * exponential smoothing, an ARIMA model and the Theta method, as no single method did clearly
+     * better than the average in the back-test; none for Long-haul}; {@code none} when no series has
+     * an outlook.
      */
     static String methods(List<Series> series, List<Findings> findings) {
         Map<String, List<String>> seriesByMethod = new LinkedHashMap<>();
         for (int i = 0; i < series.size(); i++) {
             OutlookFinding o = findings.get(i).outlook();
-            String method = o == null ? NONE : method(o.model()) + ", " + reason(o.chosenBecause().basis());
+            String method = o == null ? NONE : OutlookMethodWords.method(o.model(), false) + ", as "
+                    + OutlookMethodWords.reason(o.chosenBecause().basis());
             seriesByMethod.computeIfAbsent(method, k -> new ArrayList<>()).add(series.get(i).name());
         }
         if (seriesByMethod.keySet().equals(Set.of(NONE))) {
@@ -44,28 +47,6 @@ final class MultiOutlookWords {
         seriesByMethod.forEach((method, names) -> groups.add(method.equals(NONE) ? NONE + " for " + Terms.listed(names)
                 : "for " + Terms.listed(names) + " " + method));
         return String.join("; ", groups);
-    }
-
-    /** A method by its usual name: {@code the average of ETS, ARIMA and Theta}, {@code ETS}, {@code the naive rule}. */
-    private static String method(OutlookFinding.Model model) {
-        return switch (model.method()) {
-            case COMBINATION -> "the average of " + Terms.listed(model.members().stream()
-                    .map(m -> m.method().code()).toList());
-            case ETS, ARIMA, THETA -> model.method().code();
-            case SEASONAL_NAIVE -> "the seasonal naive rule";
-            case NAIVE -> "the naive rule";
-            case NAIVE_WITH_DRIFT -> "the naive rule with drift";
-        };
-    }
-
-    private static String reason(OutlookFinding.Choice.Basis basis) {
-        return switch (basis) {
-            case COMBINATION_NOT_BEATEN -> "as no single method did clearly better in the back-test";
-            case SINGLE_CLEARLY_BETTER -> "as it did clearly better than the average in the back-test";
-            case COMBINATION_TOO_FEW_TESTED -> "as the back-test had too few forecasts to prefer one method";
-            case COMBINATION_WITHOUT_BACKTEST -> "the series being too short for a back-test";
-            case SHORT_SERIES -> "the series being too short for the usual methods";
-        };
     }
 
     /**

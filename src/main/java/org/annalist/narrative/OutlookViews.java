@@ -3,6 +3,7 @@ package org.annalist.narrative;
 import java.util.ArrayList;
 import java.util.List;
 import org.annalist.findings.Measure;
+import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.OutlookMethod;
@@ -23,7 +24,8 @@ final class OutlookViews {
     }
 
     /** @param measure how next year is compared with the last complete one: in %, points or units */
-    static BriefView.OutlookView of(Series series, OutlookFinding o, Formats f, MeasureWords measure) {
+    static BriefView.OutlookView of(Series series, Findings findings, Formats f, MeasureWords measure) {
+        OutlookFinding o = findings.outlook();
         if (o == null) {
             return BriefView.OutlookView.ABSENT;
         }
@@ -59,11 +61,15 @@ final class OutlookViews {
         boolean total = o.nextYearTotal() != null;
         double yearStep = year == null ? Double.NaN : yearStep(year.mean(), o.currentYear(), o.nextYearChange(), f);
         String unit = series.unit().isBlank() ? "" : "\u00A0" + series.unit();
-        String methodName = methodInWords(o.model());
+        String methodName = OutlookMethodWords.method(o.model(), true);
         String noBacktest = o.caveats().stream().filter(c -> c instanceof OutlookCaveat.NoBacktest)
                 .map(c -> Terms.outlookCaveat(c, f)).findFirst().orElse("");
-        List<String> caveats = o.caveats().stream().filter(c -> !(c instanceof OutlookCaveat.NoBacktest))
-                .map(c -> Terms.outlookCaveat(c, f)).toList();
+        List<String> caveats = new ArrayList<>(o.caveats().stream().filter(c -> !(c instanceof OutlookCaveat.NoBacktest))
+                .map(c -> Terms.outlookCaveat(c, f)).toList());
+        String easter = OutlookCautions.easter(findings, f, measure.percent());
+        if (!easter.isEmpty()) {
+            caveats.add(easter);
+        }
         String range = o.backtestFrom() == null ? "" : f.period(o.backtestFrom()) + " to " + f.period(o.backtestTo());
         return new BriefView.OutlookView(true, methodName, why(o, f, range), f.period(o.fittedFrom()),
                 f.count(o.horizon()), rows.get(0).period(), f.shortPeriod(last.plus(o.horizon())), rows,
@@ -79,23 +85,8 @@ final class OutlookViews {
                         o.typicalYearErrorPct() < 10 ? 1 : 0) + "\u00A0%",
                 o.typicalYearErrorPct() != null && o.typicalErrorPct() != null
                         && o.typicalYearErrorPct() < o.typicalErrorPct(),
-                f.count(o.backtestPeriods()), range, o.intervalsWidened(), o.intervalsNarrowed(), noBacktest, scores, caveats);
-    }
-
-    /** The method as a reader of the outlook page can follow it, with the models in their usual notation. */
-    static String methodInWords(OutlookFinding.Model model) {
-        return switch (model.method()) {
-            case COMBINATION -> "the average of " + (model.members().size() == 3 ? "three" : "two") + " methods: "
-                    + Terms.listed(model.members().stream().map(OutlookViews::methodInWords).toList());
-            case ETS -> "exponential smoothing (" + model.label().orElseThrow() + ")";
-            case ARIMA -> "an ARIMA model (" + model.label().orElseThrow() + ")";
-            case THETA -> model.seasonallyAdjusted() ? "the Theta method (on seasonally adjusted values)"
-                    : "the Theta method";
-            case SEASONAL_NAIVE -> "the seasonal naive rule (each period as the same period a year before)";
-            case NAIVE -> "the naive rule (every period as the latest value)";
-            case NAIVE_WITH_DRIFT -> "the naive rule with drift (the latest value plus the average change per"
-                    + " period so far)";
-        };
+                f.count(o.backtestPeriods()), range, o.intervalsWidened(), o.intervalsNarrowed(), noBacktest, scores, caveats,
+                OutlookCautions.againstTrend(series, findings, f), OutlookCautions.againstTrend(series, findings, f, false));
     }
 
     /** Why this method: the reason the combination is the default, and what the back-test showed. */
@@ -105,18 +96,17 @@ final class OutlookViews {
         String asMuch = asMuch(org.annalist.findings.DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT);
         String averages = "Averages of several methods have forecast more accurately, on average, than any one"
                 + " method chosen in advance in large forecasting competitions";
-        return switch (o.chosenBecause().basis()) {
-            case COMBINATION_NOT_BEATEN -> averages + ". " + tested + "; no single method did clearly better than the"
-                    + " average (missing by " + asMuch + " or less, in both the earlier and the later half of the"
-                    + " test), so the average is used.";
-            case COMBINATION_TOO_FEW_TESTED -> averages + ". " + tested + "; that many forecasts are too few to show"
-                    + " one method better than the average, which is therefore used.";
-            case SINGLE_CLEARLY_BETTER -> tested + "; this one missed by " + asMuch + " as the average of the methods"
-                    + " or less, in both the earlier and the later half of the test, so it is used instead of the"
-                    + " average.";
-            case COMBINATION_WITHOUT_BACKTEST -> averages + "; this series is too short to test them on its own past.";
-            case SHORT_SERIES -> "The series is too short for the usual methods, so the forecast only carries its"
-                    + " latest values forward; its intervals are wide because so few values show how much it varies.";
+        OutlookFinding.Choice.Basis basis = o.chosenBecause().basis();
+        String reason = OutlookMethodWords.reason(basis);
+        String margin = " (missing by " + asMuch + " or less, in both the earlier and the later half of the test)";
+        return switch (basis) {
+            case COMBINATION_NOT_BEATEN -> averages + ". " + tested + "; " + reason + margin + ", so the average is used.";
+            case COMBINATION_TOO_FEW_TESTED -> averages + ". " + tested + "; " + reason + ", so the average is used.";
+            case SINGLE_CLEARLY_BETTER -> tested + "; this one " + OutlookMethodWords.DID_BETTER + margin
+                    + ", so it is used instead of the average.";
+            case COMBINATION_WITHOUT_BACKTEST -> averages + "; " + reason + ".";
+            case SHORT_SERIES -> Character.toUpperCase(reason.charAt(0)) + reason.substring(1) + ", so the forecast only carries its latest values"
+                    + " forward; its intervals are wide because so few values show how much it varies.";
         };
     }
 

@@ -42,7 +42,8 @@ final class RulesInForce {
                 new Rule("Breaks searched with PELT instead of Bai-Perron above", DecisionRules.PELT_ABOVE + " periods"),
                 new Rule("A step and a movement back read as one episode", "a step of "
                         + Terms.number(Math.abs(DecisionRules.COLLAPSE_PCT)) + "\u00A0% or more either way, then a move back"
-                        + " of at least " + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0%"),
+                        + " of at least " + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0% beyond where the old line's slope"
+                        + " would have carried it"),
                 new Rule("An outlier", "robust score \u2265 " + Terms.number(DecisionRules.OUTLIER_SCORE) + "; runs of "
                         + DecisionRules.OUTLIER_SHIFT_RUN + " or more are shifts; " + DecisionRules.OUTLIER_STRETCH_FLAGS
                         + " or more within two seasonal cycles an unusual stretch"),
@@ -54,8 +55,10 @@ final class RulesInForce {
                         + "\u00A0% lower"),
                 new Rule("Outlook intervals narrowed with", "at least " + Terms.number(DecisionRules.OUTLOOK_NARROWING_ERRORS)
                         + " back-test errors (the 80\u00A0% interval only)"),
-                new Rule("Next year called about the same as this year when", "the 80\u00A0% interval of the change"
-                        + " contains zero and lies within \u00B1" + Terms.number(DecisionRules.OUTLOOK_SAME_PCT) + "\u00A0%"),
+                new Rule("Next year called about the same / set against the trend when",
+                        "the 80\u00A0% interval of the change contains zero and lies within \u00B1"
+                        + Terms.number(DecisionRules.OUTLOOK_SAME_PCT) + "\u00A0% / opposite to it or "
+                        + Terms.number(DecisionRules.OUTLOOK_TREND_GAP_POINTS) + " points a year apart"),
                 new Rule("Irregular fluctuation called small / large", "share below "
                         + Terms.number(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + "\u00A0% / above "
                         + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + "\u00A0%"),

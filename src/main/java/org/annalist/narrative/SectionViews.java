@@ -2,7 +2,9 @@ package org.annalist.narrative;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.annalist.findings.BreakFinding;
+import org.annalist.findings.BreakKind;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
 import org.annalist.findings.FigurePlan;
@@ -113,9 +115,17 @@ final class SectionViews {
                     f.value(o.expected()), measure.signedChange(o.observed() - o.expected(), o.deviationPct()),
                     f.fixed(Math.abs(o.score()), 1),
                     o.direction() == Side.ABOVE, o.calendar() == null ? ""
-                    : CalendarSentences.outlier(series.period(o.index()), o.calendar()), calendarAllowed));
+                    : CalendarSentences.outlier(series.period(o.index()), o.calendar()), calendarAllowed,
+                    breakAround(o.period()).map(b -> f.period(b.period())).orElse("")));
         }
         return rows;
+    }
+
+    /** The structural change whose 95 % interval holds {@code period}, if any (the latest such). */
+    private Optional<BreakFinding> breakAround(Period period) {
+        return findings.breaks().stream()
+                .filter(b -> b.ci95().get(0).compareTo(period) <= 0 && period.compareTo(b.ci95().get(1)) <= 0)
+                .reduce((first, second) -> second);
     }
 
     List<BriefView.BreakRow> breaks() {
@@ -138,9 +148,20 @@ final class SectionViews {
                     slope(b.slopeAfter(), b.levelAfter(), slopesInPercent), drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
                     overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
-                    f.value(first.levelBefore()), f.period(first.period()), slopesInPercent ? "a year" : slopeTime()));
+                    f.value(first.levelBefore()), f.period(first.period()), slopesInPercent ? "a year" : slopeTime(),
+                    bendWithGap(b)));
         }
         return rows;
+    }
+
+    /**
+     * Whether a break described as a change of slope still shows a gap between its two fitted lines
+     * as large as a reported step ({@link DecisionRules#MIN_BREAK_CHANGE_PCT}): BIC found a bend alone
+     * about as good as a bend and a step, yet the levels printed beside the words jump, so the words
+     * must name the gap too.
+     */
+    static boolean bendWithGap(BreakFinding b) {
+        return b.kind() == BreakKind.SLOPE && Math.abs(b.changePct()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
     }
 
     /**

@@ -162,33 +162,27 @@ final class Terms {
         return String.join(", ", names.subList(0, names.size() - 1)) + " and " + names.get(names.size() - 1);
     }
 
-    /** The outlook's model: {@code ETS(M,A,M)}, {@code Theta, seasonally adjusted}, {@code mean of …}. */
+    /** The outlook's model in notation: {@code ETS(M,A,M)}, {@code Theta, seasonally adjusted}, {@code average of …}. */
     static String forecastModel(OutlookFinding.Model m) {
         return switch (m.method()) {
             case ETS, ARIMA -> m.label().orElseThrow();
             case THETA -> m.seasonallyAdjusted() ? "Theta, seasonally adjusted" : "Theta";
             case SEASONAL_NAIVE, NAIVE -> m.method().code();
             case NAIVE_WITH_DRIFT -> "naive with drift";
-            case COMBINATION -> "mean of " + listed(m.members().stream().map(Terms::forecastModel).toList());
+            case COMBINATION -> "average of " + listed(m.members().stream().map(Terms::forecastModel).toList());
         };
     }
 
-    /** How the outlook's method was chosen, in one clause with its figures. */
+    /**
+     * How the outlook's method was chosen, in one clause with its figures: the reason in the words
+     * of {@link OutlookMethodWords#reason}, then the back-test it rests on.
+     */
     static String choice(OutlookFinding.Choice c) {
-        String scores = c.backtested() ? String.format(Locale.ROOT, " (MASE: combination %.2f, best single method %s %.2f)",
+        String scores = c.backtested() ? String.format(Locale.ROOT, "; MASE: combination %.2f, best single method %s %.2f",
                 c.combinationMase(), c.bestSingle().map(OutlookMethod::code).orElse(""), c.bestSingleMase()) : "";
-        return switch (c.basis()) {
-            case COMBINATION_NOT_BEATEN -> String.format(Locale.ROOT, "the combination by default: no single method was"
-                    + " clearly and steadily better in a rolling-origin back-test over the last %d periods", c.origins())
-                    + scores;
-            case COMBINATION_TOO_FEW_TESTED -> String.format(Locale.ROOT, "the combination by default: a rolling-origin"
-                    + " back-test over the last %d periods made too few forecasts to prefer a single method", c.origins())
-                    + scores;
-            case SINGLE_CLEARLY_BETTER -> String.format(Locale.ROOT, "clearly and steadily more accurate than the"
-                    + " combination in a rolling-origin back-test over the last %d periods", c.origins()) + scores;
-            case COMBINATION_WITHOUT_BACKTEST -> "the combination by default, without a back-test";
-            case SHORT_SERIES -> "too few values for the other methods, without a back-test";
-        };
+        String test = c.backtested() ? String.format(Locale.ROOT, " (rolling-origin back-test over the last %d periods%s)",
+                c.origins(), scores) : "";
+        return OutlookMethodWords.reason(c.basis()) + test;
     }
 
     /** What limits the outlook, with its periods in words. */
@@ -209,8 +203,17 @@ final class Terms {
                     + " seasonal pattern, before forecasting: the forecasts do not expect it to recur.";
         }
         if (caveat instanceof OutlookCaveat.BreakTooRecent b) {
+            String periods = MeasureWords.perPeriod(b.start().frequency()).substring(2) + "s";
+            if (b.periodsSince() >= b.periodsNeeded()) {
+                return "The outlook uses all values, the years before the structural change in " + f.period(b.start())
+                        + " included: without a back-test, fitting on the values since then alone could not be"
+                        + " checked.";
+            }
             return "The latest structural change, in " + f.period(b.start()) + ", is too recent to fit the outlook on the"
-                    + " new level alone: it uses all values, so it may lag behind the new level.";
+                    + " new level alone: trying that needs at least " + b.periodsNeeded() + " " + periods + " since the"
+                    + " change, to fit on them and test the forecasts on the same recent " + periods + " as forecasts from"
+                    + " all values, and there are " + b.periodsSince() + ". The outlook uses all values, so it may lag"
+                    + " behind the new level.";
         }
         if (caveat instanceof OutlookCaveat.NoBacktest n) {
             return switch (n.reason()) {

@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Function;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -16,6 +17,11 @@ import org.annalist.audit.PlantedSeries.Planted;
 import org.annalist.audit.PlantedSeries.Scenario;
 import org.annalist.ingest.ReadOptions;
 import org.annalist.ingest.SeriesFileReader;
+import org.annalist.findings.CalendarFinding;
+import org.annalist.findings.Claim;
+import org.annalist.findings.DecisionRules;
+import org.annalist.findings.Direction;
+import org.annalist.narrative.Formats;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 import org.junit.jupiter.api.BeforeAll;
@@ -110,6 +116,32 @@ class StatementAuditTest {
             }
         }
         assertThat(wrong).isEmpty();
+    }
+
+    /**
+     * A break called a change of slope whose two fitted lines still lie a reported step apart
+     * (DecisionRules.MIN_BREAK_CHANGE_PCT) names that gap beside the bend: the levels printed with
+     * it jump, and "a change of slope" alone would deny it (the demo's long-haul market, March 2022).
+     */
+    @Test
+    void aBendWhoseFittedLinesJumpSaysTheGap() {
+        assertNone(b -> {
+            List<String> found = new ArrayList<>();
+            Formats f = Formats.forValues(b.series().values(), java.util.Locale.UK);
+            for (JsonNode k : b.json().path("breaks")) {
+                boolean gap = Math.abs(k.get("change_pct").asDouble()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
+                String said = "in " + f.period(period(b.series(), k)) + " a change of slope from ";
+                int at = b.text().indexOf(said);
+                if (!k.get("kind").asText().equals("slope") || at < 0) {
+                    continue;
+                }
+                String clause = b.text().substring(at, b.text().indexOf('(', at));
+                if (gap != clause.contains("fitted lines")) {
+                    found.add(clause + "[change_pct " + k.get("change_pct") + "]");
+                }
+            }
+            return found;
+        }, "a change of slope worded without the gap its fitted lines show, or with one they do not");
     }
 
     /** Consecutive breaks share their middle regime: the one's "after" runs along its line into the next one's "before". */
@@ -215,6 +247,99 @@ class StatementAuditTest {
         assertThat(flagged).as("March or April flagged where only Easter moved it, without Easter named").isEmpty();
     }
 
+    /**
+     * A one-off inside a structural change's 95 % interval is not reported as both without a word:
+     * the brief says why it is a one-off there too (the demo's long-haul market, August 2022).
+     */
+    @Test
+    void aOneOffInsideABreaksIntervalIsExplained() {
+        assertNone(b -> {
+            List<String> found = new ArrayList<>();
+            Formats f = Formats.forValues(b.series().values(), java.util.Locale.UK);
+            for (JsonNode o : b.json().path("outliers")) {
+                Period at = b.series().periodLabelled(o.get("period").asText()).orElseThrow();
+                for (JsonNode k : b.json().path("breaks")) {
+                    Period from = b.series().periodLabelled(k.get("ci95").get(0).asText()).orElseThrow();
+                    Period to = b.series().periodLabelled(k.get("ci95").get(1).asText()).orElseThrow();
+                    if (from.compareTo(at) <= 0 && at.compareTo(to) <= 0
+                            && !b.body().contains(f.period(at) + " lies within the 95\u00a0% interval of the structural change")) {
+                        found.add(f.period(at) + " inside the interval of " + k.get("period").asText());
+                    }
+                }
+            }
+            return found;
+        }, "a one-off inside a break's interval reported as both without a word");
+    }
+
+    /** "Too recent" says what recent enough would be: the periods needed since the change, and those there are. */
+    @Test
+    void aBreakTooRecentForTheOutlookSaysTheThreshold() {
+        Pattern tooRecent = Pattern.compile("is too recent to fit the outlook on the new level alone: trying that needs"
+                + " at least (\\d+) (\\w+) since the change, .*? and there are (\\d+)\\.");
+        assertNone(b -> {
+            String text = b.body();
+            if (!text.contains("too recent")) {
+                return List.of();
+            }
+            Matcher m = tooRecent.matcher(text);
+            if (!m.find()) {
+                return List.of(text.substring(text.indexOf("too recent") - 60, text.indexOf("too recent") + 120));
+            }
+            return Integer.parseInt(m.group(3)) < Integer.parseInt(m.group(1)) ? List.of() : List.of(m.group());
+        }, "a break called too recent without its threshold, or with one it reaches");
+    }
+
+    /**
+     * A key figure too long for one line at the tiles' 12 pt ("+753 nights a month each year") is
+     * set at 10 pt, so that a quarter-page tile holds it on two lines, not three (measured on the
+     * demo's long-haul brief, pdftoppm -r 70).
+     */
+    @Test
+    void aLongKeyFigureIsSetSmallerSoItsTileDoesNotRunToThreeLines() {
+        Pattern value = Pattern.compile("<div class=\"(key-value[^\"]*)\">(.*?)</div>", Pattern.DOTALL);
+        assertNone(b -> {
+            List<String> found = new ArrayList<>();
+            Matcher m = value.matcher(b.html());
+            while (m.find()) {
+                String words = AuditedBrief.words(m.group(2));
+                if (words.length() > 16 != m.group(1).equals("key-value long")) {
+                    found.add(m.group(1) + ": " + words);
+                }
+            }
+            return found;
+        }, "a key figure set at a size its length does not call for");
+    }
+
+    /**
+     * Terms a board member would not know (the reviewer's list) are not used on the pages before the
+     * reading guide unless the guide explains them; "regime" is not used there at all.
+     */
+    @Test
+    void everyStatisticiansTermOfTheMainPagesIsInTheReadingGuide() {
+        List<String> glossed = List.of("sup-F", "Sen slope", "sMAPE", "MASE", "seasonal naive", "p-value",
+                "Robust score", "Back-test", "Trend-cycle");
+        assertNone(b -> {
+            int guide = b.html().indexOf("id=\"guide\"");
+            int appendix = b.html().indexOf("id=\"appendix\"");
+            if (guide < 0 || appendix < guide) {
+                return List.of();
+            }
+            String main = AuditedBrief.words(b.html().substring(0, guide)).toLowerCase(java.util.Locale.ROOT);
+            String glossary = AuditedBrief.words(b.html().substring(guide, appendix)).toLowerCase(java.util.Locale.ROOT);
+            List<String> found = new ArrayList<>();
+            for (String term : glossed) {
+                String t = term.toLowerCase(java.util.Locale.ROOT);
+                if (main.contains(t) && !glossary.contains(t)) {
+                    found.add(term + " used but not in the reading guide");
+                }
+            }
+            if (main.contains("regime")) {
+                found.add("regime");
+            }
+            return found;
+        }, "a statistician's term on the main pages that the reading guide does not explain");
+    }
+
     // ---- 6. outlook sentences that mislead on paper -------------------------------------------
 
     @Test
@@ -272,6 +397,45 @@ class StatementAuditTest {
             }
             return found;
         }, "a trend stated against the latest year");
+    }
+
+    /**
+     * Next year's change going against the trend the first page states (next year not "about the
+     * same") is never left without a word: the outlook page says why.
+     */
+    @Test
+    void anOutlookAgainstTheStatedTrendSaysWhy() {
+        assertNone(b -> {
+            JsonNode change = b.json().path("outlook").path("next_year_change");
+            Optional<Claim> trend = b.findings().claims().pageTrend().filter(Claim::directional);
+            if (trend.isEmpty() || change.isMissingNode() || change.isNull() || change.path("pct").isNull()
+                    || change.path("about_the_same").asBoolean()) {
+                return List.of();
+            }
+            double sign = trend.get().direction() == Direction.INCREASING ? 1 : -1;
+            boolean against = sign * change.get("pct").asDouble() < 0;
+            return against && !b.body().contains("This is because the outlook does not extend the trend line")
+                    ? List.of(trend.get().direction() + " trend beside next year " + change.get("pct")) : List.of();
+        }, "an outlook against the stated trend with no word of why");
+    }
+
+    /**
+     * Where the calendar analysis kept an Easter effect and the outlook forecasts a March or April,
+     * the outlook page says the forecasts do not move that effect with Easter's date (the forecasts
+     * are made on the observed values and put no calendar effect back).
+     */
+    @Test
+    void anOutlookOverEasterSaysItDoesNotMoveEastersEffect() {
+        assertNone(b -> {
+            boolean kept = b.findings().calendar() != null && b.findings().calendar().effects().stream()
+                    .anyMatch(e -> e.name().equals(CalendarFinding.EASTER) && e.kept());
+            boolean spring = b.findings().outlook() != null && b.findings().outlook().forecasts().stream()
+                    .anyMatch(p -> p.period().startDate().getMonthValue() <= 4 && p.period().endDate().getMonthValue() >= 3
+                            && p.period().startDate().getYear() == p.period().endDate().getYear());
+            boolean said = b.body().contains("The forecasts do not move it with Easter");
+            return said != (kept && spring) ? List.of("Easter kept: " + kept + ", March or April forecast: " + spring
+                    + ", said: " + said) : List.of();
+        }, "an outlook over March or April silent on Easter's moving effect, or speaking of it without one");
     }
 
     /** The outlook of a monthly series prints every month to December of the year after the latest. */

@@ -1,6 +1,7 @@
 package org.annalist.chart;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Test;
 
@@ -34,7 +35,26 @@ class NumberFormatsTest {
         assertThat(NumberFormats.signed(0).format(-0.3)).isEqualTo("0");
         assertThat(NumberFormats.signed(0).format(0.4)).isEqualTo("0");
         assertThat(NumberFormats.signed(1).format(-3.46)).isEqualTo("\u22123.5");
-        assertThat(NumberFormats.signed(1).format(-0.04)).isEqualTo("0");
+        assertThat(NumberFormats.signed(1).format(-0.04)).isEqualTo("0.0");
         assertThat(NumberFormats.signed(1).format(1234.56)).isEqualTo("+1,234.6");
+    }
+
+    /** Bar labels side by side share their decimals: never "+12" beside "+3.5" (the glassworks profile). */
+    @Test
+    void barLabelsSideBySideShareTheirDecimals() {
+        assertThat(NumberFormats.signed(1).format(12.0)).isEqualTo("+12.0");
+        assertThat(NumberFormats.signed(1).format(3.5)).isEqualTo("+3.5");
+        // three significant digits of the largest bar, as the text gives peak and trough (invented profiles)
+        assertThat(SeasonalProfileChart.labelStep(profile(5137.7, -4824.0, 976.3))).isEqualTo(10);
+        assertThat(SeasonalProfileChart.labelStep(profile(12.04, 3.5, -7.2))).isCloseTo(0.1, within(1e-12));
+        assertThat(SeasonalProfileChart.labelStep(profile(0.31, -0.2))).isCloseTo(0.001, within(1e-15));
+    }
+
+    private static java.util.List<org.annalist.findings.SeasonalityFinding.ProfilePoint> profile(double... indices) {
+        java.util.List<org.annalist.findings.SeasonalityFinding.ProfilePoint> points = new java.util.ArrayList<>();
+        for (int i = 0; i < indices.length; i++) {
+            points.add(new org.annalist.findings.SeasonalityFinding.ProfilePoint(i + 1, "M" + (i + 1), indices[i]));
+        }
+        return points;
     }
 }

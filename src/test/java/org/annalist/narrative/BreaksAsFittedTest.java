@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.Random;
 import java.util.function.IntToDoubleFunction;
@@ -98,6 +99,26 @@ class BreaksAsFittedTest {
         assertThat(AnalystNotes.of(f)).contains(" a month each year; sup-F").doesNotContain("per year (95%");
     }
 
+    /**
+     * A bend whose two fitted lines still lie a reported step apart (at least
+     * DecisionRules.MIN_BREAK_CHANGE_PCT) is worded with its gap; a bend whose lines meet, or a
+     * break already called a step, is not (invented breaks: the demo long-haul's +5.9 % of March 2022).
+     */
+    @Test
+    void aBendIsSaidToHaveAGapOnlyWhenItsFittedLinesLieAStepApart() {
+        assertThat(SectionViews.bendWithGap(bend(BreakKind.SLOPE, 10_360, 10_970))).isTrue();
+        assertThat(SectionViews.bendWithGap(bend(BreakKind.SLOPE, 14_562, 14_006))).isTrue();
+        assertThat(SectionViews.bendWithGap(bend(BreakKind.SLOPE, 10_000, 10_100))).isFalse();
+        assertThat(SectionViews.bendWithGap(bend(BreakKind.BOTH, 10_360, 10_970))).isFalse();
+        assertThat(SectionViews.bendWithGap(bend(BreakKind.LEVEL, 10_360, 10_970))).isFalse();
+    }
+
+    private static BreakFinding bend(BreakKind kind, double before, double after) {
+        Period at = Period.month(2022, 3);
+        return new BreakFinding(at, List.of(at.plus(-5), at.plus(4)), before, after, 100 * (after / before - 1), 39,
+                0.004, false, 134, kind, 0.5 * before, 0.2 * after, at.plus(11), after * 1.2);
+    }
+
     @Test
     void twoConsecutiveBreaksShareTheirMiddleLevel() {
         Findings f = analyse(series(23, t -> t >= 100 ? 12_000 : t >= 50 ? 16_000 : 10_000));
@@ -171,6 +192,18 @@ class BreaksAsFittedTest {
         String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8).replaceAll("\\s+", " ");
         assertThat(readme).contains("its 95 % interval reaches the latest period");
         assertThat(RulesInForce.all()).anySatisfy(r -> assertThat(r.value().replace('\u00A0', ' ')).contains("its 95 % interval reaches the latest period"));
+    }
+
+    /**
+     * The appendix's episode rule names its refinement (Regimes.episodes): along the stepped line,
+     * only a climb beyond where the old line's slope would have carried the level counts as a move
+     * back (3 % is DecisionRules.MIN_BREAK_CHANGE_PCT).
+     */
+    @Test
+    void theAppendixEpisodeRuleSaysOnlyAClimbBeyondTheOldSlopeCounts() {
+        assertThat(RulesInForce.all()).filteredOn(r -> r.decides().contains("episode")).singleElement()
+                .satisfies(r -> assertThat(r.value()).contains("a move back of at least 3\u00A0% beyond where the old line's"
+                        + " slope would have carried it"));
     }
 
     @Test

@@ -78,8 +78,24 @@ class MultiOutlookWordsTest {
                 outlook(600, single(OutlookMethod.ETS), OutlookFinding.Choice.Basis.SINGLE_CLEARLY_BETTER),
                 findings(null));
         assertThat(MultiOutlookWords.partsForecasts(CHECK, SERIES, findings, F)).isEmpty();
-        assertThat(MultiOutlookWords.methods(SERIES, findings)).isEqualTo("for Total the average of ETS, ARIMA and Theta, "
-                + "as no single method did clearly better in the back-test; for North ETS, as it did clearly better than "
-                + "the average in the back-test; none for South");
+        assertThat(MultiOutlookWords.methods(SERIES, findings)).isEqualTo("for Total the average of three methods: "
+                + "exponential smoothing, an ARIMA model and the Theta method, as no single method did clearly better than "
+                + "the average in the back-test; for North exponential smoothing, as it did clearly better than the average"
+                + " in the back-test; none for South");
+    }
+
+    /**
+     * The board brief names each outlook's method and reason in the words of the single brief's
+     * outlook page and appendix (OutlookMethodWords): the same reason clause in all three places.
+     */
+    @Test
+    void theBoardBriefAndTheSingleBriefsWordTheMethodAndItsReasonAlike() {
+        var basis = OutlookFinding.Choice.Basis.COMBINATION_NOT_BEATEN;
+        Findings total = outlook(1000, COMBINATION, basis);
+        String reason = OutlookMethodWords.reason(basis);
+        String board = MultiOutlookWords.methods(List.of(SERIES.get(0)), List.of(total));
+        assertThat(board).contains(OutlookMethodWords.method(total.outlook().model(), false), ", as " + reason);
+        assertThat(OutlookViews.why(total.outlook(), F, "November 2024 to October 2026")).contains("; " + reason + " (");
+        assertThat(Terms.choice(total.outlook().chosenBecause())).startsWith(reason);
     }
 }

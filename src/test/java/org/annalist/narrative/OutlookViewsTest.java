@@ -34,7 +34,7 @@ class OutlookViewsTest {
         Series s = cutInOctober();
         Findings findings = new Analyst().analyse(s);
         Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
-        BriefView.OutlookView v = OutlookViews.of(s, findings.outlook(), f, MeasureWords.of(s, findings, f));
+        BriefView.OutlookView v = OutlookViews.of(s, findings, f, MeasureWords.of(s, findings, f));
         assertThat(v.rows()).hasSize(14);
         assertThat(v.rows().get(0).period()).isEqualTo("Nov 2017");
         assertThat(v.rows().get(13).period()).isEqualTo("Dec 2018");
@@ -47,7 +47,7 @@ class OutlookViewsTest {
         Series s = cutInOctober();
         Findings findings = new Analyst().analyse(s);
         Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
-        BriefView.OutlookView v = OutlookViews.of(s, findings.outlook(), f, MeasureWords.of(s, findings, f));
+        BriefView.OutlookView v = OutlookViews.of(s, findings, f, MeasureWords.of(s, findings, f));
         assertThat(v.comparison()).contains("the estimate for 2017 (", "80\u00A0% interval of the change ");
         assertThat(v.comparison()).doesNotContain("2016", "unchanged");
         assertThat(v.currentYear()).startsWith("The total for 2017 is estimated at ")

@@ -24,20 +24,21 @@ class TermsTest {
 
     @Test
     void theOutlooksChoiceIsWordedFromItsScores() {
+        // the reason in the words every brief uses (OutlookMethodWords), then the back-test's figures
         assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.COMBINATION_NOT_BEATEN, 24, 0.5912,
-                Optional.of(OutlookMethod.ETS), 0.6249))).isEqualTo("the combination by default: no single method was"
-                + " clearly and steadily better in a rolling-origin back-test over the last 24 periods (MASE:"
-                + " combination 0.59, best single method ETS 0.62)");
+                Optional.of(OutlookMethod.ETS), 0.6249))).isEqualTo("no single method did clearly better than the"
+                + " average in the back-test (rolling-origin back-test over the last 24 periods; MASE: combination 0.59,"
+                + " best single method ETS 0.62)");
         assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.SINGLE_CLEARLY_BETTER, 8, 0.9,
-                Optional.of(OutlookMethod.THETA), 0.7))).isEqualTo("clearly and steadily more accurate than the"
-                + " combination in a rolling-origin back-test over the last 8 periods (MASE: combination 0.90, best"
-                + " single method Theta 0.70)");
+                Optional.of(OutlookMethod.THETA), 0.7))).isEqualTo("it did clearly better than the average in the"
+                + " back-test (rolling-origin back-test over the last 8 periods; MASE: combination 0.90, best single"
+                + " method Theta 0.70)");
         assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.COMBINATION_TOO_FEW_TESTED, 8, 0.9,
-                Optional.of(OutlookMethod.THETA), 0.4))).isEqualTo("the combination by default: a rolling-origin"
-                + " back-test over the last 8 periods made too few forecasts to prefer a single method (MASE:"
-                + " combination 0.90, best single method Theta 0.40)");
+                Optional.of(OutlookMethod.THETA), 0.4))).startsWith("the back-test made too few forecasts to prefer one"
+                + " method (rolling-origin back-test over the last 8 periods;");
         assertThat(Terms.choice(new OutlookFinding.Choice(OutlookFinding.Choice.Basis.COMBINATION_WITHOUT_BACKTEST, 0,
-                Double.NaN, Optional.empty(), Double.NaN))).isEqualTo("the combination by default, without a back-test");
+                Double.NaN, Optional.empty(), Double.NaN))).isEqualTo("the series is too short to test the methods on"
+                + " its own past");
     }
 
     @Test
@@ -47,7 +48,7 @@ class TermsTest {
                 List.of());
         OutlookFinding.Model theta = new OutlookFinding.Model(OutlookMethod.THETA, Optional.empty(), true, List.of());
         assertThat(Terms.forecastModel(new OutlookFinding.Model(OutlookMethod.COMBINATION, Optional.empty(), false,
-                List.of(ets, arima, theta)))).isEqualTo("mean of ETS(A,N,N), ARIMA(0,1,1) and Theta, seasonally adjusted");
+                List.of(ets, arima, theta)))).isEqualTo("average of ETS(A,N,N), ARIMA(0,1,1) and Theta, seasonally adjusted");
         assertThat(Terms.forecastModel(theta)).isEqualTo("Theta, seasonally adjusted");
     }
 
@@ -59,6 +60,21 @@ class TermsTest {
                         + " fitted, its forecasts of the last periods missed by less than when fitted on all values.");
         assertThat(Terms.outlookCaveat(new OutlookCaveat.GapsFilled(1), f))
                 .isEqualTo("1 missing value was filled with what trend and season predict before forecasting.");
+    }
+
+    /**
+     * A break too recent for the outlook says how recent is too recent: the periods needed since it
+     * (Outlook.shortestOwnRegime: 24 to fit on and 24 to test, for monthly data) and those there are
+     * (invented: 44 months since March 2023).
+     */
+    @Test
+    void aBreakTooRecentForTheOutlookSaysItsThreshold() {
+        Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+        assertThat(org.annalist.analysis.forecast.Outlook.shortestOwnRegime(190, 12)).isEqualTo(48);
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.BreakTooRecent(Period.month(2023, 3), 44, 48), f))
+                .contains("in March 2023, is too recent", "needs at least 48 months since the change", "there are 44.");
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.BreakTooRecent(Period.quarter(2020, 2), 20, 16), f))
+                .doesNotContain("too recent").contains("without a back-test");
     }
 
     /** After a break the outlook keeps the history unless the regime alone did clearly better: the caveat says which. */

@@ -342,7 +342,7 @@ public final class Outlook {
         if (regimeStart > 0 && regimeStart < y.length) {
             double[] regime = Arrays.copyOfRange(y, regimeStart, y.length);
             // the regime is back-tested with the forms found on all values, so the two spans differ in their values only
-            Optional<Backtest.Run> own = all.isPresent() && Backtest.origins(regime.length, period) >= origins
+            Optional<Backtest.Run> own = all.isPresent() && regime.length >= shortestOwnRegime(y.length, period)
                     ? Backtest.run(regime, onAll, regime.length - origins, cycle, reach) : Optional.empty();
             span = own.map(o -> weigh(regimeStart, all.get(), o))
                     .orElse(new Span(0, Span.Basis.REGIME_TOO_SHORT, Double.NaN, Double.NaN));
@@ -382,6 +382,15 @@ public final class Outlook {
         }
         return Optional.of(new Result(f, choice, span, scores, scores.isEmpty() ? 0 : origins, cycle, widening,
                 widened95));
+    }
+
+    /**
+     * The fewest values since the latest break for the outlook to weigh fitting on them alone: the
+     * shortest training span, then as many back-test origins as a back-test on all {@code n} values
+     * has, so that both back-tests forecast the same periods (for monthly data 24 + 24 = 48).
+     */
+    public static int shortestOwnRegime(int n, int period) {
+        return Math.max(MIN_VALUES, 2 * period) + Backtest.origins(n, period);
     }
 
     /** The combination, unless a single method was clearly and steadily better in the back-test. */
