@@ -26,6 +26,18 @@ class EtsSimplexSearchTest {
         assertThat(fit.parameters().initial()[0]).isCloseTo(124.089942650416, within(1.0));
     }
 
+    /** A quarterly model goes to the simplex search, a yearly or monthly one to the quasi-Newton search. */
+    @Test
+    void quarterlyModelsAreFittedByTheSimplexSearch() {
+        double[] y = Reference.dataset("UKgas.csv");
+        EtsModel quarterly = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, false,
+                EtsModel.Season.NONE, 4);
+        EtsModel yearly = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, false,
+                EtsModel.Season.NONE, 1);
+        assertThat(quarterly.fit(y).orElseThrow().aicc()).isEqualTo(EtsSimplexSearch.fit(quarterly, y).orElseThrow().aicc());
+        assertThat(yearly.fit(y).orElseThrow().aicc()).isNotEqualTo(EtsSimplexSearch.fit(yearly, y).orElseThrow().aicc());
+    }
+
     /** Rosenbrock's function (common practice) has its minimum 0 at (1, 1); the search from (−1.2, 1) finds it. */
     @Test
     void nelderMeadFindsRosenbrocksMinimum() {
