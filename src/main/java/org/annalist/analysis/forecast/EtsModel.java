@@ -29,6 +29,9 @@ import java.util.Optional;
  * <li>Hyndman, R. J. &amp; Khandakar, Y. (2008). Automatic time series forecasting: the forecast
  * package for R. <i>Journal of Statistical Software</i> 27(3), 1–22. DOI 10.18637/jss.v027.i03.</li>
  * </ol>
+ *
+ * @param period the season's length; a model without a season carries its series' period (or 1),
+ *               which decides only how it is estimated ({@link EtsEstimation#SIMPLEX_PERIOD})
  */
 public record EtsModel(Error error, Trend trend, boolean damped, Season season, int period) {
 

@@ -103,7 +103,7 @@ class EtsGradientTest {
     }
 
     private static void check(EtsModel model, double[] y) {
-        double[] start = EtsEstimation.initialStates(model, y);
+        double[] start = EtsEstimation.initialStates(model, y, false);
         double[] x = new double[EtsGradient.STATES + start.length];
         x[EtsGradient.ALPHA] = 0.35;
         x[EtsGradient.BETA_STAR] = 0.2;

@@ -195,7 +195,7 @@ class EtsModelTest {
                 for (int trend = 0; trend < 3; trend++) {
                     EtsModel model = new EtsModel(error, trend == 0 ? EtsModel.Trend.NONE : EtsModel.Trend.ADDITIVE,
                             trend == 2, season, season == EtsModel.Season.NONE ? 1 : 12);
-                    double[] initial = EtsEstimation.initialStates(model, y);
+                    double[] initial = EtsEstimation.initialStates(model, y, false);
                     EtsModel.Parameters p = new EtsModel.Parameters(0.4, 0.04, 0.1, 0.95, initial);
                     EtsModel.Fit fit = model.filter(y, p).orElseThrow();
                     assertThat(EtsFilter.criterion(model, y, p)).as(model.label()).isCloseTo(fit.lik(), within(1e-9 * Math.abs(fit.lik())));
