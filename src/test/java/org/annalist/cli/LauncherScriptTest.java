@@ -112,6 +112,41 @@ class LauncherScriptTest {
                 .noneMatch(a -> a.startsWith("-XX:AOT"));
     }
 
+    /**
+     * On Java 17 to 24, where no archive fits, the first brief lists the classes it loads, and the
+     * archive is dumped from the list after it (the dumping run's messages never reach the user);
+     * the list is removed.
+     */
+    @Test
+    void onJava17AFirstBriefListsTheClassesItLoadsAndLeavesTheArchiveForTheNextRun() throws Exception {
+        Path java = fakeJava("17.0.15");
+        Path lib = home.toRealPath().resolve("lib");
+        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
+        assertThat(run.code).isZero();
+        assertThat(run.lines()).contains("-Xshare:off", "brief", "f.csv").doesNotContain("-Xshare:dump")
+                .anyMatch(a -> a.startsWith("-XX:DumpLoadedClassList="));
+        assertThat(Files.readString(lib.resolve("annalist.jsa"))).isEqualTo("archive");
+        assertThat(Files.readString(lib.resolve("annalist.jsa.txt"))).isEqualTo(home.toRealPath() + "|17.0.15+1\n");
+        try (var left = Files.list(lib)) {
+            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("annalist.jsa", "annalist.jsa.txt");
+        }
+        Result next = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
+        assertThat(next.lines()).contains("-XX:SharedArchiveFile=" + lib.resolve("annalist.jsa"))
+                .noneMatch(a -> a.startsWith("-XX:DumpLoadedClassList"));
+    }
+
+    @Test
+    void onJava17AFailingFirstBriefKeepsItsExitCodeAndLeavesNoArchive() throws Exception {
+        Path java = fakeJava("17.0.15");
+        Path lib = home.toRealPath().resolve("lib");
+        Result run = run(Map.of("JAVA_HOME", java.toString(), "FAKE_EXIT", "2"), temp,
+                home.resolve("bin/annalist").toString(), "brief", "missing.csv");
+        assertThat(run.code).isEqualTo(2);
+        try (var left = Files.list(lib)) {
+            assertThat(left).isEmpty();
+        }
+    }
+
     /** Java 25's ahead-of-time cache replaces the class-data archive; the JVM refuses -Xshare beside it. */
     @Test
     void onJava25AndLaterTheAheadOfTimeCacheMadeForThisFolderAndJavaIsUsedWithoutXshare() throws Exception {
@@ -252,17 +287,22 @@ class LauncherScriptTest {
         // as Java 25 does: a record run writes its configuration, a create run the cache
         Files.writeString(java, """
                 #!/bin/sh
-                mode=; conf=; cache=
+                mode=; conf=; cache=; list=; archive=; dump=
                 for a in "$@"; do
                     printf '%s\\n' "$a"
                     case $a in
                         -XX:AOTMode=*) mode=${a#*=} ;;
                         -XX:AOTConfiguration=*) conf=${a#*=} ;;
                         -XX:AOTCache=*) cache=${a#*=} ;;
+                        -XX:DumpLoadedClassList=*) list=${a#*=} ;;
+                        -XX:SharedArchiveFile=*) archive=${a#*=} ;;
+                        -Xshare:dump) dump=yes ;;
                     esac
                 done
                 if [ "$mode" = record ]; then printf 'record' > "$conf"; fi
                 if [ "$mode" = create ]; then printf 'cache' > "$cache"; fi
+                if [ -n "$list" ]; then printf 'list' > "$list"; fi
+                if [ "$dump" = yes ]; then printf 'archive' > "$archive"; fi
                 exit ${FAKE_EXIT:-0}
                 """);
         executable(java);
