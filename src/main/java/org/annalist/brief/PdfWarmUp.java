@@ -57,15 +57,16 @@ final class PdfWarmUp {
     }
 
     /**
-     * The warm-up's work, on the calling thread: the template first (the brief needs it first),
-     * then the fonts and the colour profile.
+     * The warm-up's work, on the calling thread, in the order the brief needs it: the fonts (its
+     * first step after the analysis checks the title's characters against them), the template,
+     * then the layout's font faces and colour profile.
      *
      * @return whether all of it was done (a failure is dropped: the brief reports its cause)
      */
     static boolean prepare(Optional<String> template, Locale language, Supplier<TemplateEngine> engine) {
         try {
-            template.ifPresent(name -> engine.get().prepare(name, language));
             Fonts.registerWithAwt();
+            template.ifPresent(name -> engine.get().prepare(name, language));
             PdfRenderer.prepare();
             return true;
         } catch (RuntimeException | LinkageError dropped) {
