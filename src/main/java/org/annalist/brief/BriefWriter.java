@@ -91,8 +91,8 @@ final class BriefWriter {
     }
 
     /**
-     * Starts the warm-up of the PDF path ({@link PdfWarmUp}) for a brief of these choices: with the
-     * bundled templates, the one the brief is filled from is parsed too.
+     * Starts the brief's set-up ahead on a second thread ({@link PdfWarmUp}) for a brief of these
+     * choices: with the bundled templates, the one the brief is filled from is parsed too.
      */
     static void warmUp(BriefOutput.MastheadChoices choices, boolean combined) {
         PdfWarmUp.start(choices.templates().isPresent() ? Optional.empty()

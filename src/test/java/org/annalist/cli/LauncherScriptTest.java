@@ -123,7 +123,7 @@ class LauncherScriptTest {
         Path lib = home.toRealPath().resolve("lib");
         Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
         assertThat(run.code).isZero();
-        assertThat(run.lines()).contains("-Xshare:off", "brief", "f.csv").doesNotContain("-Xshare:dump")
+        assertThat(run.lines()).contains("brief", "f.csv").doesNotContain("-Xshare:dump")
                 .anyMatch(a -> a.startsWith("-XX:DumpLoadedClassList="));
         assertThat(Files.readString(lib.resolve("annalist.jsa"))).isEqualTo("archive");
         assertThat(Files.readString(lib.resolve("annalist.jsa.txt"))).isEqualTo(home.toRealPath() + "|17.0.15+1\n");
