@@ -119,32 +119,10 @@ class LauncherScriptTest {
      */
     @Test
     void onJava17AFirstBriefListsTheClassesItLoadsAndLeavesTheArchiveForTheNextRun() throws Exception {
-        Path java = fakeJava("17.0.15");
-        Path lib = home.toRealPath().resolve("lib");
-        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
-        assertThat(run.code).isZero();
-        assertThat(run.lines()).contains("brief", "f.csv").doesNotContain("-Xshare:dump")
-                .anyMatch(a -> a.startsWith("-XX:DumpLoadedClassList="));
-        assertThat(Files.readString(lib.resolve("annalist.jsa"))).isEqualTo("archive");
-        assertThat(Files.readString(lib.resolve("annalist.jsa.txt"))).isEqualTo(home.toRealPath() + "|17.0.15+1\n");
-        try (var left = Files.list(lib)) {
-            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("annalist.jsa", "annalist.jsa.txt");
-        }
-        Result next = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
-        assertThat(next.lines()).contains("-XX:SharedArchiveFile=" + lib.resolve("annalist.jsa"))
+        assertThat(firstBriefLeaving("17.0.15", "annalist.jsa", "archive")).contains("brief", "f.csv")
+                .doesNotContain("-Xshare:dump").anyMatch(a -> a.startsWith("-XX:DumpLoadedClassList="));
+        assertThat(briefAgain("17.0.15")).contains("-XX:SharedArchiveFile=" + home.toRealPath().resolve("lib/annalist.jsa"))
                 .noneMatch(a -> a.startsWith("-XX:DumpLoadedClassList"));
-    }
-
-    @Test
-    void onJava17AFailingFirstBriefKeepsItsExitCodeAndLeavesNoArchive() throws Exception {
-        Path java = fakeJava("17.0.15");
-        Path lib = home.toRealPath().resolve("lib");
-        Result run = run(Map.of("JAVA_HOME", java.toString(), "FAKE_EXIT", "2"), temp,
-                home.resolve("bin/annalist").toString(), "brief", "missing.csv");
-        assertThat(run.code).isEqualTo(2);
-        try (var left = Files.list(lib)) {
-            assertThat(left).isEmpty();
-        }
     }
 
     /** Java 25's ahead-of-time cache replaces the class-data archive; the JVM refuses -Xshare beside it. */
@@ -179,30 +157,48 @@ class LauncherScriptTest {
      */
     @Test
     void onJava25AFirstBriefRecordsWhatItLoadsAndLeavesTheCacheForTheNextRun() throws Exception {
-        Path java = fakeJava("25.0.1");
-        Path lib = home.toRealPath().resolve("lib");
-        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
-        assertThat(run.code).isZero();
-        assertThat(run.lines()).contains("-XX:AOTMode=record", "-XX:-DisplayVMOutput", "brief", "f.csv")
-                .doesNotContain("-XX:AOTMode=create");
-        assertThat(Files.readString(lib.resolve("annalist.aot"))).isEqualTo("cache");
-        assertThat(Files.readString(lib.resolve("annalist.aot.txt"))).isEqualTo(home.toRealPath() + "|25.0.1+1\n");
-        try (var left = Files.list(lib)) {
-            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("annalist.aot", "annalist.aot.txt");
-        }
-        Result next = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
-        assertThat(next.lines()).contains("-XX:AOTCache=" + lib.resolve("annalist.aot")).doesNotContain("-XX:AOTMode=record");
+        assertThat(firstBriefLeaving("25.0.1", "annalist.aot", "cache"))
+                .contains("-XX:AOTMode=record", "-XX:-DisplayVMOutput", "brief", "f.csv").doesNotContain("-XX:AOTMode=create");
+        assertThat(briefAgain("25.0.1")).contains("-XX:AOTCache=" + home.toRealPath().resolve("lib/annalist.aot"))
+                .doesNotContain("-XX:AOTMode=record");
     }
 
-    @Test
-    void onJava25AFailingFirstBriefKeepsItsExitCodeAndLeavesNoCache() throws Exception {
-        Path java = fakeJava("25.0.1");
+    /**
+     * A first brief on a stand-in Java of {@code version}, which must leave in lib/ exactly
+     * {@code archive} (holding what the stand-in wrote, {@code content}) and its .txt naming this
+     * folder and Java; returns the arguments the launcher gave Java.
+     */
+    private List<String> firstBriefLeaving(String version, String archive, String content) throws Exception {
         Path lib = home.toRealPath().resolve("lib");
-        Result run = run(Map.of("JAVA_HOME", java.toString(), "FAKE_EXIT", "2"), temp,
-                home.resolve("bin/annalist").toString(), "brief", "missing.csv");
-        assertThat(run.code).isEqualTo(2);
+        Result run = run(Map.of("JAVA_HOME", fakeJava(version).toString()), temp, home.resolve("bin/annalist").toString(),
+                "brief", "f.csv");
+        assertThat(run.code).isZero();
+        assertThat(Files.readString(lib.resolve(archive))).isEqualTo(content);
+        assertThat(Files.readString(lib.resolve(archive + ".txt"))).isEqualTo(home.toRealPath() + "|" + version + "+1\n");
         try (var left = Files.list(lib)) {
-            assertThat(left).isEmpty();
+            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder(archive, archive + ".txt");
+        }
+        return run.lines();
+    }
+
+    /** The arguments of a brief on the stand-in Java of {@code version} made before. */
+    private List<String> briefAgain(String version) throws Exception {
+        return run(Map.of("JAVA_HOME", temp.resolve("jdk " + version).toString()), temp,
+                home.resolve("bin/annalist").toString(), "brief", "f.csv").lines();
+    }
+
+    /** Java 17's class-data archive and Java 25's cache alike: a first brief that fails makes neither. */
+    @Test
+    void aFailingFirstBriefKeepsItsExitCodeAndLeavesNoArchiveOrCache() throws Exception {
+        Path lib = home.toRealPath().resolve("lib");
+        for (String version : List.of("17.0.15", "25.0.1")) {
+            Path java = fakeJava(version);
+            Result run = run(Map.of("JAVA_HOME", java.toString(), "FAKE_EXIT", "2"), temp,
+                    home.resolve("bin/annalist").toString(), "brief", "missing.csv");
+            assertThat(run.code).as(version).isEqualTo(2);
+            try (var left = Files.list(lib)) {
+                assertThat(left).as(version).isEmpty();
+            }
         }
     }
 
