@@ -17,9 +17,8 @@
 #   analyze 10,000 series       <= 20 s, <= 1 GiB peak RSS (--horizon 0: no outlook, no PDF)
 # The generated inputs go to /tmp/annalist-bench-launcher/ (BENCH_DIR) and are reused.
 # JAVA25_HOME (a Java 25 or later) adds the launcher's figures on that Java, with its ahead-of-time
-# cache (made by an untimed first run). The cold brief is also measured without the PDF path's
-# warm-up (-Dannalist.warmup=false) and with it even on a busy machine (=always), and the batch with
-# full tiered compilation (C2) beside C1 only.
+# cache (made by an untimed first run). The cold brief is also measured without the brief's
+# warm-up (-Dannalist.warmup=false), and the batch with full tiered compilation (C2) beside C1 only.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 runs=${1:-5}
@@ -76,9 +75,6 @@ if [[ " $figures " == *" startup "* ]]; then
     measure "brief, cold     new: bin/annalist" "$runs" "$new" brief "$data" --series Total -o "$work/total.pdf" \
         --generated-at 2026-11-20T08:00:00Z
     measure "brief, cold     new, no PDF warm-up" "$runs" env ANNALIST_JAVA_OPTS=-Dannalist.warmup=false "$new" brief \
-        "$data" --series Total -o "$work/total.pdf" --generated-at 2026-11-20T08:00:00Z
-    # the warm-up is left out where the load average is at or above the cores; this runs it anyway
-    measure "brief, cold     new, warm-up always" "$runs" env ANNALIST_JAVA_OPTS=-Dannalist.warmup=always "$new" brief \
         "$data" --series Total -o "$work/total.pdf" --generated-at 2026-11-20T08:00:00Z
     if [ -n "${JAVA25_HOME:-}" ]; then
         # the first run on this Java makes lib/annalist.aot (untimed)

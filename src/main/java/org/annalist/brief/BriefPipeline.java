@@ -159,18 +159,18 @@ public final class BriefPipeline {
      */
     public List<Made> briefs(Job job) {
         BriefOutput output = job.requireBrief();
+        // before the file is read: the warm-up needs nothing from it
+        BriefWriter.warmUp(output.masthead(), output.combined().isPresent());
         List<Holiday> holidays = holidays(job);
         SeriesFiles.ReadFile file = files.read(job.input());
         Instant generatedAt = GenerationTime.orDefault(output.masthead().generatedAt());
         if (output.combined().isPresent()) {
             List<SeriesSelection.Selected> all = SeriesSelection.all(job, file, false);
-            BriefWriter.warmUp(output.masthead(), true);
             return List.of(make(job, file, all, holidays, combinedOutput(output, all), generatedAt));
         }
         List<Made> made = new ArrayList<>();
         for (SeriesSelection.Wanted wanted : SeriesSelection.wanted(job.series(), file)) {
             SeriesSelection.Selected selected = SeriesSelection.select(job, file, wanted, true);
-            BriefWriter.warmUp(output.masthead(), false);
             made.add(make(job, file, List.of(selected), holidays, singleOutput(output, selected), generatedAt));
         }
         return made;

@@ -82,16 +82,22 @@ final class BriefWriter {
      * long-running process parses each template once rather than once a brief (FreeMarker keeps
      * what it parsed; its templates may be filled on several threads at once).
      */
-    private static final TemplateEngine BUNDLED = new TemplateEngine(Optional.empty());
+    private static final class Bundled {
+        /**
+         * Made where first asked for (a holder class), so that a brief's warm-up can make it on
+         * the spare core: FreeMarker's set-up is a few tens of milliseconds in a cold JVM.
+         */
+        static final TemplateEngine ENGINE = new TemplateEngine(Optional.empty());
+    }
 
     /**
-     * Starts the warm-up of the PDF path ({@link PdfWarmUp}) for a brief of these choices: with the
-     * bundled templates, the one the brief is filled from is parsed too.
+     * Starts the brief's set-up ahead on a second thread ({@link PdfWarmUp}) for a brief of these
+     * choices: with the bundled templates, the one the brief is filled from is parsed too.
      */
     static void warmUp(BriefOutput.MastheadChoices choices, boolean combined) {
         PdfWarmUp.start(choices.templates().isPresent() ? Optional.empty()
                 : Optional.of(combined ? TemplateEngine.MULTI_TEMPLATE : TemplateEngine.BRIEF_TEMPLATE),
-                choices.language(), BUNDLED);
+                choices.language(), () -> Bundled.ENGINE);
     }
 
     /** A user's template folders' engines, kept for this writer's life (a batch): each folder parsed once. */
@@ -164,7 +170,7 @@ final class BriefWriter {
     private TemplateEngine engine(Page page) {
         return page.choices().templates()
                 .map(folder -> engines.computeIfAbsent(folder, f -> new TemplateEngine(Optional.of(f))))
-                .orElse(BUNDLED);
+                .orElseGet(() -> Bundled.ENGINE);
     }
 
     /**

@@ -55,4 +55,19 @@ public record ReadOptions(DateOrder dateOrder, Optional<DecimalMark> decimalMark
     public ReadOptions withSheet(String nameOrNumber) {
         return new ReadOptions(dateOrder, decimalMark, aggregation, maxInputBytes, Optional.of(nameOrNumber));
     }
+
+    // equals and hashCode written out as the record would make them (the same comparison, the same
+    // hash): a record's own are linked through method handles on their first call, some 10-25 ms of
+    // a cold brief's start-up each (README, "Start-up and memory")
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof ReadOptions that && dateOrder == that.dateOrder && decimalMark.equals(that.decimalMark)
+                && aggregation.equals(that.aggregation) && maxInputBytes == that.maxInputBytes && sheet.equals(that.sheet);
+    }
+
+    @Override
+    public int hashCode() {
+        int hash = (31 * dateOrder.hashCode() + decimalMark.hashCode()) * 31 + aggregation.hashCode();
+        return (31 * hash + Long.hashCode(maxInputBytes)) * 31 + sheet.hashCode();
+    }
 }

@@ -77,6 +77,16 @@ public final class PdfRenderer {
     }
 
     /**
+     * What a layout needs of its own that no brief changes, made ahead (a brief's warm-up does this
+     * while the series is analysed): a set of the font's faces parsed for the next layout to borrow,
+     * and the colour profile read.
+     */
+    public static void prepare() {
+        ParsedFaces.borrow().giveBack();
+        ICC_Profile.getInstance(ColorSpace.CS_sRGB).getData();
+    }
+
+    /**
      * @param sandbox    what the XHTML may use besides itself (files of the template folder, the
      *                   logo) and where its relative links resolve
      * @param createdAt  the document's creation date (pinned so that the same input gives the same file)

@@ -1,7 +1,6 @@
 package org.annalist.brief;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -20,8 +19,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The PDF path's warm-up ({@link PdfWarmUp}) does real work, leaves no trace, and cannot change a
- * brief: a brief laid out while warm-ups run beside it is the same to the byte.
+ * The brief's warm-up ({@link PdfWarmUp}) does the brief's own set-up, leaves no trace, and cannot
+ * change a brief: a brief laid out while warm-ups run beside it is the same to the byte.
  */
 class PdfWarmUpTest {
 
@@ -31,23 +30,23 @@ class PdfWarmUpTest {
     Path temp;
 
     @Test
-    void theWarmUpLaysOutItsPageAndWritesNoFile() throws IOException {
+    void theWarmUpDoesItsSetUpAndWritesNoFile() throws IOException {
         List<String> before = listing(Path.of(""));
         List<String> tempBefore = listing(Path.of(System.getProperty("java.io.tmpdir")));
         TemplateEngine engine = new TemplateEngine(Optional.empty());
-        assertThat(PdfWarmUp.warmUpHere(Optional.of(TemplateEngine.BRIEF_TEMPLATE), Locale.ENGLISH, engine)).isTrue();
+        assertThat(PdfWarmUp.prepare(Optional.of(TemplateEngine.BRIEF_TEMPLATE), Locale.ENGLISH, () -> engine)).isTrue();
         assertThat(listing(Path.of(""))).isEqualTo(before);
         // other test classes may run in a second JVM at the same time: only new files named like ours would count
         assertThat(listing(Path.of(System.getProperty("java.io.tmpdir")))).filteredOn(name -> !tempBefore.contains(name))
                 .noneMatch(name -> name.contains("warm") || name.endsWith(".pdf"));
     }
 
-    /** Linux's /proc/loadavg: a load average is never negative, and never reaches Integer.MAX_VALUE. */
+    /** A user's template folder is read by the brief alone: the bundled templates' engine is then not even made. */
     @Test
-    void aMachineCountsAsBusyWhenItsLoadAverageReachesItsCores() {
-        assumeTrue(Files.isReadable(Path.of("/proc/loadavg")), "needs Linux's /proc/loadavg");
-        assertThat(PdfWarmUp.busy(0)).isTrue();
-        assertThat(PdfWarmUp.busy(Integer.MAX_VALUE)).isFalse();
+    void withTheUsersTemplatesTheBundledEngineIsNotMade() {
+        assertThat(PdfWarmUp.prepare(Optional.empty(), Locale.ENGLISH, () -> {
+            throw new AssertionError("the bundled engine was asked for");
+        })).isTrue();
     }
 
     @Test
@@ -56,7 +55,7 @@ class PdfWarmUpTest {
         Files.writeString(folder.resolve("brief.ftlx"), "<#if>");
         TemplateEngine engine = new TemplateEngine(Optional.of(folder));
         engine.prepare(TemplateEngine.BRIEF_TEMPLATE, Locale.ENGLISH);   // no exception
-        assertThat(PdfWarmUp.warmUpHere(Optional.of(TemplateEngine.BRIEF_TEMPLATE), Locale.ENGLISH, engine)).isTrue();
+        assertThat(PdfWarmUp.prepare(Optional.of(TemplateEngine.BRIEF_TEMPLATE), Locale.ENGLISH, () -> engine)).isTrue();
     }
 
     @Test
@@ -69,7 +68,7 @@ class PdfWarmUpTest {
         Thread warming = new Thread(() -> {
             TemplateEngine engine = new TemplateEngine(Optional.empty());
             while (!done.get()) {
-                if (PdfWarmUp.warmUpHere(Optional.of(TemplateEngine.BRIEF_TEMPLATE), Locale.ENGLISH, engine)) {
+                if (PdfWarmUp.prepare(Optional.of(TemplateEngine.BRIEF_TEMPLATE), Locale.ENGLISH, () -> engine)) {
                     warmUps.incrementAndGet();
                 }
             }

@@ -112,6 +112,19 @@ class LauncherScriptTest {
                 .noneMatch(a -> a.startsWith("-XX:AOT"));
     }
 
+    /**
+     * On Java 17 to 24, where no archive fits, the first brief lists the classes it loads, and the
+     * archive is dumped from the list after it (the dumping run's messages never reach the user);
+     * the list is removed.
+     */
+    @Test
+    void onJava17AFirstBriefListsTheClassesItLoadsAndLeavesTheArchiveForTheNextRun() throws Exception {
+        assertThat(firstBriefLeaving("17.0.15", "annalist.jsa", "archive")).contains("brief", "f.csv")
+                .doesNotContain("-Xshare:dump").anyMatch(a -> a.startsWith("-XX:DumpLoadedClassList="));
+        assertThat(briefAgain("17.0.15")).contains("-XX:SharedArchiveFile=" + home.toRealPath().resolve("lib/annalist.jsa"))
+                .noneMatch(a -> a.startsWith("-XX:DumpLoadedClassList"));
+    }
+
     /** Java 25's ahead-of-time cache replaces the class-data archive; the JVM refuses -Xshare beside it. */
     @Test
     void onJava25AndLaterTheAheadOfTimeCacheMadeForThisFolderAndJavaIsUsedWithoutXshare() throws Exception {
@@ -144,30 +157,48 @@ class LauncherScriptTest {
      */
     @Test
     void onJava25AFirstBriefRecordsWhatItLoadsAndLeavesTheCacheForTheNextRun() throws Exception {
-        Path java = fakeJava("25.0.1");
-        Path lib = home.toRealPath().resolve("lib");
-        Result run = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
-        assertThat(run.code).isZero();
-        assertThat(run.lines()).contains("-XX:AOTMode=record", "-XX:-DisplayVMOutput", "brief", "f.csv")
-                .doesNotContain("-XX:AOTMode=create");
-        assertThat(Files.readString(lib.resolve("annalist.aot"))).isEqualTo("cache");
-        assertThat(Files.readString(lib.resolve("annalist.aot.txt"))).isEqualTo(home.toRealPath() + "|25.0.1+1\n");
-        try (var left = Files.list(lib)) {
-            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("annalist.aot", "annalist.aot.txt");
-        }
-        Result next = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(), "brief", "f.csv");
-        assertThat(next.lines()).contains("-XX:AOTCache=" + lib.resolve("annalist.aot")).doesNotContain("-XX:AOTMode=record");
+        assertThat(firstBriefLeaving("25.0.1", "annalist.aot", "cache"))
+                .contains("-XX:AOTMode=record", "-XX:-DisplayVMOutput", "brief", "f.csv").doesNotContain("-XX:AOTMode=create");
+        assertThat(briefAgain("25.0.1")).contains("-XX:AOTCache=" + home.toRealPath().resolve("lib/annalist.aot"))
+                .doesNotContain("-XX:AOTMode=record");
     }
 
-    @Test
-    void onJava25AFailingFirstBriefKeepsItsExitCodeAndLeavesNoCache() throws Exception {
-        Path java = fakeJava("25.0.1");
+    /**
+     * A first brief on a stand-in Java of {@code version}, which must leave in lib/ exactly
+     * {@code archive} (holding what the stand-in wrote, {@code content}) and its .txt naming this
+     * folder and Java; returns the arguments the launcher gave Java.
+     */
+    private List<String> firstBriefLeaving(String version, String archive, String content) throws Exception {
         Path lib = home.toRealPath().resolve("lib");
-        Result run = run(Map.of("JAVA_HOME", java.toString(), "FAKE_EXIT", "2"), temp,
-                home.resolve("bin/annalist").toString(), "brief", "missing.csv");
-        assertThat(run.code).isEqualTo(2);
+        Result run = run(Map.of("JAVA_HOME", fakeJava(version).toString()), temp, home.resolve("bin/annalist").toString(),
+                "brief", "f.csv");
+        assertThat(run.code).isZero();
+        assertThat(Files.readString(lib.resolve(archive))).isEqualTo(content);
+        assertThat(Files.readString(lib.resolve(archive + ".txt"))).isEqualTo(home.toRealPath() + "|" + version + "+1\n");
         try (var left = Files.list(lib)) {
-            assertThat(left).isEmpty();
+            assertThat(left.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder(archive, archive + ".txt");
+        }
+        return run.lines();
+    }
+
+    /** The arguments of a brief on the stand-in Java of {@code version} made before. */
+    private List<String> briefAgain(String version) throws Exception {
+        return run(Map.of("JAVA_HOME", temp.resolve("jdk " + version).toString()), temp,
+                home.resolve("bin/annalist").toString(), "brief", "f.csv").lines();
+    }
+
+    /** Java 17's class-data archive and Java 25's cache alike: a first brief that fails makes neither. */
+    @Test
+    void aFailingFirstBriefKeepsItsExitCodeAndLeavesNoArchiveOrCache() throws Exception {
+        Path lib = home.toRealPath().resolve("lib");
+        for (String version : List.of("17.0.15", "25.0.1")) {
+            Path java = fakeJava(version);
+            Result run = run(Map.of("JAVA_HOME", java.toString(), "FAKE_EXIT", "2"), temp,
+                    home.resolve("bin/annalist").toString(), "brief", "missing.csv");
+            assertThat(run.code).as(version).isEqualTo(2);
+            try (var left = Files.list(lib)) {
+                assertThat(left).as(version).isEmpty();
+            }
         }
     }
 
@@ -252,17 +283,22 @@ class LauncherScriptTest {
         // as Java 25 does: a record run writes its configuration, a create run the cache
         Files.writeString(java, """
                 #!/bin/sh
-                mode=; conf=; cache=
+                mode=; conf=; cache=; list=; archive=; dump=
                 for a in "$@"; do
                     printf '%s\\n' "$a"
                     case $a in
                         -XX:AOTMode=*) mode=${a#*=} ;;
                         -XX:AOTConfiguration=*) conf=${a#*=} ;;
                         -XX:AOTCache=*) cache=${a#*=} ;;
+                        -XX:DumpLoadedClassList=*) list=${a#*=} ;;
+                        -XX:SharedArchiveFile=*) archive=${a#*=} ;;
+                        -Xshare:dump) dump=yes ;;
                     esac
                 done
                 if [ "$mode" = record ]; then printf 'record' > "$conf"; fi
                 if [ "$mode" = create ]; then printf 'cache' > "$cache"; fi
+                if [ -n "$list" ]; then printf 'list' > "$list"; fi
+                if [ "$dump" = yes ]; then printf 'archive' > "$archive"; fi
                 exit ${FAKE_EXIT:-0}
                 """);
         executable(java);

@@ -77,4 +77,23 @@ public record ArimaOrder(int p, int d, int q, int seasonalP, int seasonalD, int 
     ArimaOrder withArma(int newP, int newQ, int newSeasonalP, int newSeasonalQ, boolean newConstant) {
         return new ArimaOrder(newP, d, newQ, newSeasonalP, seasonalD, newSeasonalQ, period, newConstant);
     }
+
+    // equals and hashCode written out as the record would make them (the same comparison, the same
+    // hash): a record's own are linked through method handles on their first call, some 10-25 ms of
+    // a cold brief's start-up each (README, "Start-up and memory")
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof ArimaOrder that && p == that.p && d == that.d && q == that.q
+                && seasonalP == that.seasonalP && seasonalD == that.seasonalD && seasonalQ == that.seasonalQ
+                && period == that.period && constant == that.constant;
+    }
+
+    @Override
+    public int hashCode() {
+        int hash = 0;
+        for (int component : new int[] {p, d, q, seasonalP, seasonalD, seasonalQ, period}) {
+            hash = 31 * hash + component;
+        }
+        return 31 * hash + Boolean.hashCode(constant);
+    }
 }
