@@ -67,7 +67,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
                        String changePercent, boolean up, boolean down, boolean provisional, String step,
                        String trendSentence, boolean trendFirst, String calendarNote,
-                       boolean difference) {
+                       boolean difference, String calendarLead) {
     }
 
     /**

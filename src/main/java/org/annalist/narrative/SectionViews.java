@@ -270,7 +270,9 @@ final class SectionViews {
         List<BriefView.KeyFigure> figures = new ArrayList<>();
         ClaimWords words = new ClaimWords(findings.claims(), f, series.unit(), measure.measure());
         figures.add(new BriefView.KeyFigure(lead.period(), lead.value().isEmpty() ? "\u2013" : lead.value(),
-                lead.comparable() ? words.latestNote() : "no comparison with a year earlier"));
+                !lead.comparable() ? "no comparison with a year earlier"
+                        : lead.calendarLead().isEmpty() ? words.latestNote()
+                        : CalendarLead.of(findings).tileNote(words, findings.claims())));
         if (period.available() && !period.ytdChange().isEmpty()) {
             IndicatorsFinding.Span ytd = findings.indicators().yearToDate();
             figures.add(new BriefView.KeyFigure("Year to date", measure.percent() ? period.ytdChange()
