@@ -2,6 +2,7 @@ package org.annalist.narrative;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CycleFinding;
 import org.annalist.findings.Episode;
@@ -83,10 +84,11 @@ final class SectionViews {
         boolean multiplicative = s.multiplicative();
         SeasonalityFinding.ProfilePoint peak = extreme(s, true);
         SeasonalityFinding.ProfilePoint trough = extreme(s, false);
+        String[] peakWords = peakWords(s, peak, multiplicative);
         return new BriefView.SeasonView(verdict == SeasonVerdict.PRESENT, verdict == SeasonVerdict.NEGLIGIBLE, false,
                 false, String.valueOf(s.period()), f.fixed(s.strength(), 2), Terms.seasonalStrength(s.strength()),
-                Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), printedEqual(s, peak, multiplicative),
-                index(peak.index(), multiplicative), printedEqual(s, trough, multiplicative), index(trough.index(), multiplicative),
+                Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), peakWords[0],
+                peakWords[1], printedEqual(s, trough, multiplicative), index(trough.index(), multiplicative),
                 multiplicative ? f.fixed(s.swing(), 0) : f.significant(s.swing()),
                 multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years, formFromMeasure());
     }
@@ -319,6 +321,31 @@ final class SectionViews {
         return Terms.listed(s.profile().stream().filter(p -> index(p.index(), multiplicative).equals(printed))
                 .map(p -> (series.frequency() == Frequency.HALF_YEARLY ? "the " : "")   // "peaks in the first half"
                         + f.seasonName(series.frequency(), p.position())).toList());
+    }
+
+    /**
+     * The peak's season(s) and index(es): one season only where it was above the runner-up in most
+     * years ({@link PeakEvidence}); else both, in calendar order, "July–August" with "+4,810 and +5,140".
+     */
+    private String[] peakWords(SeasonalityFinding s, SeasonalityFinding.ProfilePoint peak, boolean multiplicative) {
+        String named = printedEqual(s, peak, multiplicative);
+        Optional<PeakEvidence> evidence = PeakEvidence.of(series, s.profile());
+        if (evidence.isEmpty() || evidence.get().singlePeak() || !named.equals(seasonName(peak))) {
+            return new String[] {named, index(peak.index(), multiplicative)};
+        }
+        SeasonalityFinding.ProfilePoint other = evidence.get().runnerUp();
+        int n = s.profile().size();
+        boolean otherFirst = (other.position() % n) + 1 == peak.position()
+                || (other.position() < peak.position() && (peak.position() % n) + 1 != other.position());
+        SeasonalityFinding.ProfilePoint a = otherFirst ? other : peak;
+        SeasonalityFinding.ProfilePoint b = otherFirst ? peak : other;
+        boolean adjacent = (a.position() % n) + 1 == b.position();
+        return new String[] {seasonName(a) + (adjacent ? "\u2013" : " and ") + seasonName(b),
+                index(a.index(), multiplicative) + " and " + index(b.index(), multiplicative)};
+    }
+
+    private String seasonName(SeasonalityFinding.ProfilePoint p) {
+        return f.seasonName(series.frequency(), p.position());
     }
 
     private static SeasonalityFinding.ProfilePoint extreme(SeasonalityFinding s, boolean highest) {
