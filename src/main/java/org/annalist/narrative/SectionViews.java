@@ -170,9 +170,34 @@ final class SectionViews {
             views.add(new BriefView.EpisodeView(f.period(e.start()), !e.rise(), size(e.before(), e.extremeLevel()),
                     e.extreme().equals(e.start()), f.period(e.extreme()), f.value(e.before()),
                     f.value(e.extremeLevel()), f.value(e.returnedLevel()), f.period(e.asOf()), e.asOf().equals(last),
-                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%"));
+                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%",
+                    stepBack(e)));
         }
         return views;
+    }
+
+    /**
+     * A step against the return within a year of the period the return is measured at: without it,
+     * "had risen back all the way" would stand beside a lower level that followed. Said with the
+     * level it left, against the level before the episode: ", but in October 2022 the level stepped
+     * down by 9.6 %, to about 7.7 % below the level before the fall (fitted level 62,109 just after)".
+     */
+    private String stepBack(Episode e) {
+        double year = series.frequency().periodsPerYear();
+        for (BreakFinding b : findings.breaks()) {
+            long after = e.asOf().until(b.period());
+            // a step the same way as the return is part of it, not a step back
+            boolean withTheReturn = e.rise() ? b.changePct() < 0 : b.changePct() > 0;
+            if (!b.kind().step() || after <= 0 || after > year || withTheReturn) {
+                continue;
+            }
+            boolean below = b.levelAfter() < e.before();
+            return ", but in " + f.period(b.period()) + " the level stepped " + (b.changePct() < 0 ? "down" : "up")
+                    + " by " + size(b.levelBefore(), b.levelAfter()) + ", to about "
+                    + size(e.before(), b.levelAfter()) + (below ? " below" : " above") + " the level before the "
+                    + (e.rise() ? "rise" : "fall") + " (fitted level " + f.value(b.levelAfter()) + " just after)";
+        }
+        return "";
     }
 
     BriefView.IrregularView irregular() {
