@@ -116,11 +116,12 @@ class OutlookViewsTest {
     @Test
     void theCombinedBriefsNextYearFigureIsTheOutlookSectionsFigure() {
         Series s = cutInOctober();
-        Findings findings = new Analyst().analyse(s);
         Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
-        BriefView.OutlookView v = OutlookViews.of(s, findings.outlook(), f, MeasureWords.of(s, findings, f));
-        assertThat(v.yearMean()).isNotEmpty();
-        assertThat(OutlookViews.nextYearPrinted(findings.outlook(), f)).isEqualTo(v.yearMean());
+        Findings findings = new Analyst().analyse(s);
+        OutlookFinding outlook = findings.outlook();
+        String section = OutlookViews.of(s, outlook, f, MeasureWords.of(s, findings, f)).yearMean();
+        assertThat(section).isNotEmpty();
+        assertThat(OutlookViews.nextYearPrinted(outlook, f)).isEqualTo(section);
         assertThat(OutlookViews.nextYearPrinted(null, f)).isEmpty();
     }
 
