@@ -34,6 +34,6 @@ class ReaderCautionTest {
     void theClosingCautionKeepsThatForecastsAreEstimates() {
         String text = AuditedBrief.of("closing", planted()).text();
         assertThat(text.substring(text.lastIndexOf("The figures in this brief are statistical estimates")))
-                .contains("may be revised, and forecasts are estimates. They do not decide anything");
+                .contains("values may be revised, and forecasts are estimates. They do not decide anything");
     }
 }
