@@ -179,8 +179,8 @@ final class SectionViews {
     /**
      * A step against the return within a year of the period the return is measured at: without it,
      * "had risen back all the way" would stand beside a lower level that followed. Said with the
-     * level it left, against the level before the episode: ", but in October 2022 the level stepped
-     * down by 9.6 %, to about 7.7 % below the level before the fall (fitted level 62,109 just after)".
+     * level it left, against the level before the episode: "It did not stay there: in October 2022 the
+     * level stepped down by 9.6 %, to about 7.7 % below the level before the fall (fitted level 62,109 just after)."
      */
     private String stepBack(Episode e) {
         double year = series.frequency().periodsPerYear();
@@ -192,10 +192,10 @@ final class SectionViews {
                 continue;
             }
             boolean below = b.levelAfter() < e.before();
-            return ", but in " + f.period(b.period()) + " the level stepped " + (b.changePct() < 0 ? "down" : "up")
+            return "It did not stay there: in " + f.period(b.period()) + " the level stepped " + (b.changePct() < 0 ? "down" : "up")
                     + " by " + size(b.levelBefore(), b.levelAfter()) + ", to about "
                     + size(e.before(), b.levelAfter()) + (below ? " below" : " above") + " the level before the "
-                    + (e.rise() ? "rise" : "fall") + " (fitted level " + f.value(b.levelAfter()) + " just after)";
+                    + (e.rise() ? "rise" : "fall") + " (fitted level " + f.value(b.levelAfter()) + " just after).";
         }
         return "";
     }

@@ -30,7 +30,7 @@ class EpisodeStepBackTest {
         // both sizes worked from the findings: the step's own and the level after it against the level before the fall
         String stepPct = String.format(Locale.ROOT, "%.1f", Math.abs(step.changePct()));
         String belowPct = String.format(Locale.ROOT, "%.1f", 100 * (1 - step.levelAfter() / e.before()));
-        assertThat(brief.text()).contains(", but in October 2022 the level stepped down by " + stepPct
+        assertThat(brief.text()).contains("of the step). It did not stay there: in October 2022 the level stepped down by " + stepPct
                 + "\u00A0%, to about " + belowPct + "\u00A0% below the level before the fall (fitted level ");
     }
 }
