@@ -67,7 +67,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
                        String changePercent, boolean up, boolean down, boolean provisional, String step,
                        String trendSentence, boolean trendFirst, String calendarNote,
-                       boolean difference) {
+                       boolean difference, String calendarLead) {
     }
 
     /**
@@ -196,10 +196,11 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param share      how far back it moved, in words ({@code about a quarter of the way})
      * @param sharePct   the same as a percentage of the step
      * @param latest     the return is measured at the series' latest period
+     * @param stepBack   a step the other way soon after the return, in words ({@link SectionViews}); empty when none
      */
     public record EpisodeView(String start, boolean fell, String size, boolean atOnce, String extreme,
                               String before, String extremeLevel, String returned, String asOf, boolean latest,
-                              String share, String sharePct) {
+                              String share, String sharePct, String stepBack) {
     }
 
     /**

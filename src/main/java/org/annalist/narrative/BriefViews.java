@@ -59,7 +59,7 @@ public final class BriefViews {
         boolean trendFirst = words.trendFirst();
         if (findings.recent().isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", false, false,
-                    false, step, trend, trendFirst, "", false);
+                    false, step, trend, trendFirst, "", false, "");
         }
         RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
         boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
@@ -67,7 +67,7 @@ public final class BriefViews {
         Optional<Claim> latest = claims.pageLatest();
         if (last.value() == null || latest.isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                    "", "", false, false, provisional, step, trend, trendFirst, "", false);
+                    "", "", false, false, provisional, step, trend, trendFirst, "", false, "");
         }
         // the sign and size are the claim's, which the key figures and the findings JSON carry too
         Claim change = latest.get();
@@ -75,13 +75,16 @@ public final class BriefViews {
                 || last.period().frequency() == Frequency.BUSINESS_DAILY
                 ? "the same weekday a year before (" + f.period(last.yearEarlierPeriod()) + ")"
                 : f.period(last.yearEarlierPeriod());
+        // a single period the calendar distorts beyond its sign does not lead alone (CalendarLead)
+        CalendarLead calendarLead = CalendarLead.of(findings);
         String calendar = change.quantity() == Claim.Quantity.LATEST_CALENDAR_ADJUSTED
                 ? claims.find(Claim.Quantity.LATEST_VS_YEAR_EARLIER).map(raw -> " once the calendar's effect is taken out ("
                         + words.signedSize(raw) + " as counted)").orElse("") : "";
         return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
                 yearEarlier, words.size(change), change.direction() == Direction.INCREASING,
                 change.direction() == Direction.DECREASING, provisional, step, trend, trendFirst, calendar,
-                change.unit() != Claim.SizeUnit.PERCENT);
+                change.unit() != Claim.SizeUnit.PERCENT, calendarLead.withholdsSinglePeriod()
+                        ? calendarLead.sentence(words, claims, f.period(last.period()), yearEarlier) : "");
     }
 
     private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {

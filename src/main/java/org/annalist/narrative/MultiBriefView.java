@@ -31,9 +31,15 @@ public record MultiBriefView(BriefView.Document document, Header header, List<Co
                          String generatedAt, String seriesList, String logo) {
     }
 
-    /** One row of the comparison table, formatted; a dash where a figure cannot be given. */
+    /**
+     * One row of the comparison table, formatted; a dash where a figure cannot be given.
+     *
+     * @param nextYear       next year's central estimate, rounded as the series' outlook section prints it
+     * @param nextYearChange its change on the current year, e.g. {@code +1.4 % on 2026}; empty when not given
+     */
     public record ComparisonRow(String series, String unit, String latest, String yearOnYear, String yearToDate,
-                                String trend, String peak, String breaks, String outliers, String nextYear) {
+                                String trend, String peak, String breaks, String outliers, String nextYear,
+                                String nextYearChange) {
     }
 
     /**

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import org.annalist.findings.FigurePlan;
 import org.annalist.findings.Findings;
+import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.IndicatorsFinding;
 import org.annalist.findings.PartsCheck;
 import org.annalist.series.Series;
@@ -41,18 +42,20 @@ public final class MultiBriefViews {
             BriefView v = sections.get(i);
             Formats f = Formats.forValues(series.get(i).values(), masthead.language());
             Findings fi = findings.get(i);
-            String nextYear = "\u2013";
-            if (fi.outlook() != null && fi.outlook().nextYearTotal() != null) {
-                nextYear = f.significant(fi.outlook().nextYearTotal().mean());
-            } else if (fi.outlook() != null && fi.outlook().nextYearAverage() != null) {
-                nextYear = f.significant(fi.outlook().nextYearAverage().mean()) + " (average)";
-            }
+            // the figure and rounding of the series' own outlook section, with its change on the current year
+            String printed = OutlookViews.nextYearPrinted(fi.outlook(), f);
+            String nextYear = printed.isEmpty() ? "\u2013"
+                    : fi.outlook().nextYearTotal() == null ? printed + " (average)" : printed;
+            OutlookFinding.YearChange change = printed.isEmpty() ? null : fi.outlook().nextYearChange();
+            String nextYearChange = change == null || change.pct() == null || fi.outlook().currentYear() == null ? ""
+                    : f.signedPercent(change.pct()) + " on " + change.againstYear()
+                    + (fi.outlook().currentYear().forecastPeriods() > 0 ? " (est.)" : "");
             rows.add(new MultiBriefView.ComparisonRow(series.get(i).name(), series.get(i).unit(),
                     v.lead().value().isEmpty() ? "\u2013" : v.lead().value(),
                     change(series.get(i), fi, f, false), change(series.get(i), fi, f, true),
                     new ClaimWords(fi.claims(), f, series.get(i).unit(), MeasureWords.measureOf(fi)).trendCell(),
                     v.season().present() ? v.season().peak() : "none claimed",
-                    String.valueOf(v.breaks().size()), String.valueOf(v.outliers().size()), nextYear));
+                    String.valueOf(v.breaks().size()), String.valueOf(v.outliers().size()), nextYear, nextYearChange));
         }
         Formats first = Formats.forValues(series.get(0).values(), masthead.language());
         MultiBriefView.Consistency consistency = check.map(c -> PartsWords.consistency(c, formatsOf(c.total(), series, masthead)))

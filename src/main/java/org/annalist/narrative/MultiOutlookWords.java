@@ -75,9 +75,13 @@ final class MultiOutlookWords {
         if (Math.abs(gapPct) <= PartsCheck.TOLERANCE_PCT) {
             return estimates + " add up to " + check.total() + "'s within " + f.percent(PartsCheck.TOLERANCE_PCT) + ".";
         }
+        // the total's figure as its own section prints it; the parts' sum is the one to leave unquoted
+        String own = OutlookViews.nextYearPrinted(total.get(), f);
         return estimates + " do not add up within " + f.percent(PartsCheck.TOLERANCE_PCT) + ": together about "
                 + f.significant(sum) + ", which is " + f.percent(Math.abs(gapPct)) + (gapPct < 0 ? " below " : " above ")
-                + check.total() + "'s " + f.significant(expected) + ".";
+                + check.total() + "'s " + own + ". For the total, quote " + check.total() + "'s own estimate (" + own
+                + "): it is forecast from " + check.total() + "'s own history, whereas each part is forecast apart and"
+                + " their sum is no forecast of the total.";
     }
 
     /** The outlook of the named series when it has a next-year total, else empty. */

@@ -224,6 +224,16 @@ final class OutlookViews {
         return Math.min(threeDigits, Math.pow(10, Math.floor(Math.log10(width / 4))));
     }
 
+    /**
+     * Next year's central estimate as the outlook page prints it (rounded to {@link #yearStep}), so
+     * that a combined brief's table and notes quote the very figure of the series' section; empty
+     * without a next-year figure.
+     */
+    static String nextYearPrinted(OutlookFinding o, Formats f) {
+        OutlookFinding.Span year = o == null ? null : o.nextYearTotal() != null ? o.nextYearTotal() : o.nextYearAverage();
+        return year == null ? "" : rounded(year.mean(), yearStep(year.mean(), o.currentYear(), o.nextYearChange(), f), f);
+    }
+
     private static String rounded(double v, double step, Formats f) {
         if (!(step > 0) || Double.isInfinite(step)) {
             return f.significant(v);   // a value of zero has no digits to round to

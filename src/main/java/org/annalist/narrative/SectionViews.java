@@ -85,10 +85,11 @@ final class SectionViews {
         boolean multiplicative = s.multiplicative();
         SeasonalityFinding.ProfilePoint peak = extreme(s, true);
         SeasonalityFinding.ProfilePoint trough = extreme(s, false);
+        String[] peakWords = peakWords(s, peak, multiplicative);
         return new BriefView.SeasonView(verdict == SeasonVerdict.PRESENT, verdict == SeasonVerdict.NEGLIGIBLE, false,
                 false, String.valueOf(s.period()), f.fixed(s.strength(), 2), Terms.seasonalStrength(s.strength()),
-                Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), printedEqual(s, peak, multiplicative),
-                index(peak.index(), multiplicative), printedEqual(s, trough, multiplicative), index(trough.index(), multiplicative),
+                Terms.test(s.test()), f.fixed(s.statistic(), 1), f.pValue(s.pValue()), peakWords[0],
+                peakWords[1], printedEqual(s, trough, multiplicative), index(trough.index(), multiplicative),
                 multiplicative ? f.fixed(s.swing(), 0) : f.significant(s.swing()),
                 multiplicative ? "%" : series.unit(), multiplicative, s.changed(), formReason, years, formFromMeasure());
     }
@@ -189,9 +190,34 @@ final class SectionViews {
             views.add(new BriefView.EpisodeView(f.period(e.start()), !e.rise(), size(e.before(), e.extremeLevel()),
                     e.extreme().equals(e.start()), f.period(e.extreme()), f.value(e.before()),
                     f.value(e.extremeLevel()), f.value(e.returnedLevel()), f.period(e.asOf()), e.asOf().equals(last),
-                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%"));
+                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%",
+                    stepBack(e)));
         }
         return views;
+    }
+
+    /**
+     * A step against the return within a year of the period the return is measured at: without it,
+     * "had risen back all the way" would stand beside a lower level that followed. Said with the
+     * level it left, against the level before the episode: "It did not stay there: in October 2022 the
+     * level stepped down by 9.6 %, to about 7.7 % below the level before the fall (fitted level 62,109 just after)."
+     */
+    private String stepBack(Episode e) {
+        double year = series.frequency().periodsPerYear();
+        for (BreakFinding b : findings.breaks()) {
+            long after = e.asOf().until(b.period());
+            // a step the same way as the return is part of it, not a step back
+            boolean withTheReturn = e.rise() ? b.changePct() < 0 : b.changePct() > 0;
+            if (!b.kind().step() || after <= 0 || after > year || withTheReturn) {
+                continue;
+            }
+            boolean below = b.levelAfter() < e.before();
+            return "It did not stay there: in " + f.period(b.period()) + " the level stepped " + (b.changePct() < 0 ? "down" : "up")
+                    + " by " + size(b.levelBefore(), b.levelAfter()) + ", to about "
+                    + size(e.before(), b.levelAfter()) + (below ? " below" : " above") + " the level before the "
+                    + (e.rise() ? "rise" : "fall") + " (fitted level " + f.value(b.levelAfter()) + " just after).";
+        }
+        return "";
     }
 
     BriefView.IrregularView irregular() {
@@ -291,7 +317,9 @@ final class SectionViews {
         List<BriefView.KeyFigure> figures = new ArrayList<>();
         ClaimWords words = new ClaimWords(findings.claims(), f, series.unit(), measure.measure());
         figures.add(new BriefView.KeyFigure(lead.period(), lead.value().isEmpty() ? "\u2013" : lead.value(),
-                lead.comparable() ? words.latestNote() : "no comparison with a year earlier"));
+                !lead.comparable() ? "no comparison with a year earlier"
+                        : lead.calendarLead().isEmpty() ? words.latestNote()
+                        : CalendarLead.of(findings).tileNote(words, findings.claims())));
         if (period.available() && !period.ytdChange().isEmpty()) {
             IndicatorsFinding.Span ytd = findings.indicators().yearToDate();
             figures.add(new BriefView.KeyFigure("Year to date", measure.percent() ? period.ytdChange()
@@ -338,6 +366,31 @@ final class SectionViews {
         return Terms.listed(s.profile().stream().filter(p -> index(p.index(), multiplicative).equals(printed))
                 .map(p -> (series.frequency() == Frequency.HALF_YEARLY ? "the " : "")   // "peaks in the first half"
                         + f.seasonName(series.frequency(), p.position())).toList());
+    }
+
+    /**
+     * The peak's season(s) and index(es): one season only where it was above the runner-up in most
+     * years ({@link PeakEvidence}); else both, in calendar order, "July–August" with "+4,810 and +5,140".
+     */
+    private String[] peakWords(SeasonalityFinding s, SeasonalityFinding.ProfilePoint peak, boolean multiplicative) {
+        String named = printedEqual(s, peak, multiplicative);
+        Optional<PeakEvidence> evidence = PeakEvidence.of(series, s.profile());
+        if (evidence.isEmpty() || evidence.get().singlePeak() || !named.equals(seasonName(peak))) {
+            return new String[] {named, index(peak.index(), multiplicative)};
+        }
+        SeasonalityFinding.ProfilePoint other = evidence.get().runnerUp();
+        int n = s.profile().size();
+        boolean otherFirst = (other.position() % n) + 1 == peak.position()
+                || (other.position() < peak.position() && (peak.position() % n) + 1 != other.position());
+        SeasonalityFinding.ProfilePoint a = otherFirst ? other : peak;
+        SeasonalityFinding.ProfilePoint b = otherFirst ? peak : other;
+        boolean adjacent = (a.position() % n) + 1 == b.position();
+        return new String[] {seasonName(a) + (adjacent ? "\u2013" : " and ") + seasonName(b),
+                index(a.index(), multiplicative) + " and " + index(b.index(), multiplicative)};
+    }
+
+    private String seasonName(SeasonalityFinding.ProfilePoint p) {
+        return f.seasonName(series.frequency(), p.position());
     }
 
     private static SeasonalityFinding.ProfilePoint extreme(SeasonalityFinding s, boolean highest) {

@@ -198,9 +198,10 @@ final class Terms {
                     + " last periods did not miss by clearly less.";
         }
         if (caveat instanceof OutlookCaveat.ShockBridged b) {
-            return "The " + (b.rise() ? "rise" : "fall") + " from " + f.period(b.from()) + " to " + f.period(b.to())
-                    + ", later reversed, was replaced by a line between the levels before and after it, with the usual"
-                    + " seasonal pattern, before forecasting: the forecasts do not expect it to recur.";
+            // what was bridged, not a verdict on recovery: a step may have followed the climb back
+            return "The " + (b.rise() ? "rise" : "fall") + " of " + f.period(b.from()) + " and the movement back from it,"
+                    + " to " + f.period(b.to()) + ", were replaced by a line between the levels before and after,"
+                    + " with the usual seasonal pattern, before forecasting: the forecasts do not expect it to recur.";
         }
         if (caveat instanceof OutlookCaveat.BreakTooRecent b) {
             String periods = MeasureWords.perPeriod(b.start().frequency()).substring(2) + "s";

@@ -71,7 +71,7 @@ record AuditedBrief(String label, Series series, Findings findings, JsonNode jso
         String noStyle = html.replaceAll("(?s)<style.*?</style>", " ").replaceAll("(?s)<head>.*?</head>", " ");
         String text = noStyle.replaceAll("(?s)<[^>]+>", " ")
                 .replace("&#160;", "\u00a0").replace("&nbsp;", "\u00a0").replace("&#8722;", "\u2212")
-                .replace("&lt;", "<").replace("&gt;", ">").replace("&quot;", "\"").replace("&#39;", "'")
+                .replace("&lt;", "<").replace("&gt;", ">").replace("&quot;", "\"").replace("&#39;", "'").replace("&apos;", "'")
                 .replace("&amp;", "&");
         return text.replaceAll("[ \\t\\r\\n]+", " ").trim();
     }

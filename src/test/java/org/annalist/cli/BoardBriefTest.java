@@ -68,7 +68,15 @@ class BoardBriefTest {
         assertThat(text).contains("Their next-year estimates for 2027 do not add up within 0.5 %: together about "
                 + f.significant(parts).replace('\u00A0', ' ') + ", which is "
                 + f.percent(Math.abs(gapPct)).replace('\u00A0', ' ') + (gapPct < 0 ? " below" : " above")
-                + " Total's " + f.significant(total).replace('\u00A0', ' ') + ".");
+                + " Total's " + totalAsInItsSection(text) + ". For the total, quote Total's own estimate");
+    }
+
+    /** Total's next-year figure as its outlook section on the board prints it (the first outlook sentence). */
+    private static String totalAsInItsSection(String text) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("Total In .*?Outlook: the total for 2027 would be about ([0-9,]+)")
+                .matcher(text);
+        assertThat(m.find()).as("Total's outlook sentence").isTrue();
+        return m.group(1);
     }
 
     @Test

@@ -112,6 +112,19 @@ class OutlookViewsTest {
         assertThat(f.signedPercent(100 * (1_003_900 / 1_000_400.0 - 1))).isEqualTo(f.signedPercent(edge.pct()));
     }
 
+    /** A combined brief's table quotes next year's figure as the series' outlook section prints it, not re-rounded. */
+    @Test
+    void theCombinedBriefsNextYearFigureIsTheOutlookSectionsFigure() {
+        Series s = cutInOctober();
+        Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
+        Findings findings = new Analyst().analyse(s);
+        OutlookFinding outlook = findings.outlook();
+        String section = OutlookViews.of(s, outlook, f, MeasureWords.of(s, findings, f)).yearMean();
+        assertThat(section).isNotEmpty();
+        assertThat(OutlookViews.nextYearPrinted(outlook, f)).isEqualTo(section);
+        assertThat(OutlookViews.nextYearPrinted(null, f)).isEmpty();
+    }
+
     /** A printed reader has no findings file: the outlook page refers to none. */
     @Test
     void theOutlookPageRefersToNoFile() throws IOException {
