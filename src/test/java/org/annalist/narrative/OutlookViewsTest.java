@@ -119,7 +119,7 @@ class OutlookViewsTest {
         Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
         Findings findings = new Analyst().analyse(s);
         OutlookFinding outlook = findings.outlook();
-        String section = OutlookViews.of(s, outlook, f, MeasureWords.of(s, findings, f)).yearMean();
+        String section = OutlookViews.of(s, findings, f, MeasureWords.of(s, findings, f)).yearMean();
         assertThat(section).isNotEmpty();
         assertThat(OutlookViews.nextYearPrinted(outlook, f)).isEqualTo(section);
         assertThat(OutlookViews.nextYearPrinted(null, f)).isEmpty();
