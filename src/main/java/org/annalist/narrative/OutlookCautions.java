@@ -79,9 +79,10 @@ final class OutlookCautions {
             return "Next year's " + f.signedPercent(next) + against + span + " (" + f.signedPercent(pace)
                     + (pagePct != null ? basis : " a year of the latest year's level") + "): the outlook starts from the latest level, not the trend line.";
         }
+        // how the method works is no reason by itself (recent periods may pull either way): said apart
+        String method = " The outlook does not extend the trend line: its methods start from the latest level and"
+                + " give the most recent periods the most weight.";
         List<String> reasons = new ArrayList<>();
-        reasons.add("the outlook does not extend the trend line (its methods start from the latest level and give"
-                + " the most recent periods the most weight)");
         findings.claims().find(Claim.Quantity.ROLLING_YEAR).flatMap(Claim::relativePct)
                 .filter(r -> Math.signum(r - pace) == side)
                 .ifPresent(r -> reasons.add((series.frequency().periodsPerYear() == 12 ? "the last twelve months were "
@@ -107,9 +108,13 @@ final class OutlookCautions {
                     + f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
                     + ", holds the trend's pace)");
         }
+        String opening = "Next year's " + f.signedPercent(next) + gap + "." + method;
+        if (reasons.isEmpty()) {
+            return opening;
+        }
         String last = reasons.remove(reasons.size() - 1);
-        return "Next year's " + f.signedPercent(next) + gap + ". This is because " + String.join("; ", reasons)
-                + (reasons.isEmpty() ? "" : "; and ") + last + ".";
+        return opening + " On this series, " + String.join("; ", reasons) + (reasons.isEmpty() ? "" : "; and ")
+                + last + ".";
     }
 
     /**

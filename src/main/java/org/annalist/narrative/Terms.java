@@ -199,9 +199,11 @@ final class Terms {
         }
         if (caveat instanceof OutlookCaveat.ShockBridged b) {
             // what was bridged, not a verdict on recovery: a step may have followed the climb back
-            return "The " + (b.rise() ? "rise" : "fall") + " of " + f.period(b.from()) + " and the movement back from it,"
-                    + " to " + f.period(b.to()) + ", were replaced by a line between the levels before and after,"
-                    + " with the usual seasonal pattern, before forecasting: the forecasts do not expect it to recur.";
+            // nor does the bridge's end say when the climb back ended: the trend section dates that by its own rule
+            return "For the " + (b.rise() ? "rise" : "fall") + " of " + f.period(b.from()) + ", the values from "
+                    + f.period(b.from()) + " to " + f.period(b.to()) + " were replaced by a line between the levels"
+                    + " before and after, with the usual seasonal pattern, before forecasting: the forecasts do not"
+                    + " expect it to recur.";
         }
         if (caveat instanceof OutlookCaveat.BreakTooRecent b) {
             String periods = MeasureWords.perPeriod(b.start().frequency()).substring(2) + "s";

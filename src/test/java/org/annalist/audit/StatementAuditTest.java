@@ -414,7 +414,7 @@ class StatementAuditTest {
             }
             double sign = trend.get().direction() == Direction.INCREASING ? 1 : -1;
             boolean against = sign * change.get("pct").asDouble() < 0;
-            return against && !b.body().contains("This is because the outlook does not extend the trend line")
+            return against && !b.body().contains("The outlook does not extend the trend line")
                     ? List.of(trend.get().direction() + " trend beside next year " + change.get("pct")) : List.of();
         }, "an outlook against the stated trend with no word of why");
     }

@@ -133,4 +133,17 @@ class OutlookViewsTest {
             assertThat(text).as(template).doesNotContain("findings file");
         }
     }
+
+    /**
+     * The observed part of the current year is printed as finely as the estimate it adds up to
+     * (the reviewer's case: 421,146 observed shown as 420,000 beside an estimate of 1,503,000).
+     */
+    @Test
+    void theObservedPartOfTheYearIsRoundedAsFinelyAsItsEstimate() {
+        Formats f = Formats.forValues(new double[] {100_000}, Locale.ENGLISH);
+        OutlookFinding.CurrentYear c = new OutlookFinding.CurrentYear(2025, true, Period.month(2025, 1),
+                Period.month(2025, 4), 4, 421_146, 8, new OutlookFinding.Span(1_503_000, 1_460_000, 1_545_000));
+        assertThat(OutlookViews.currentYear(c, " nights", f, 1_000)).contains("estimated at 1,503,000 nights",
+                "421,000 nights observed");
+    }
 }

@@ -99,4 +99,18 @@ class TermsTest {
         assertThat(Terms.breakMethod(new BreakMethod(BreakMethod.Search.NOT_SEARCHED_TOO_SHORT, false, 12)))
                 .isEqualTo("not searched: fewer than two regimes of 12 periods");
     }
+
+    /**
+     * A bridged fall names the span the outlook replaced, not the end of the climb back: the trend
+     * section dates that by its own rule, and the two dates may differ (the demo's long-haul market:
+     * bridged to February 2022, back above the old level by February 2023).
+     */
+    @Test
+    void aBridgedFallNamesTheSpanReplacedWithoutDatingTheClimbBack() {
+        Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+        String words = Terms.outlookCaveat(new OutlookCaveat.ShockBridged(Period.month(2021, 1), Period.month(2022, 2),
+                false), f);
+        assertThat(words).startsWith("For the fall of January 2021, the values from January 2021 to February 2022"
+                + " were replaced by a line").doesNotContain("movement back");
+    }
 }
