@@ -1,7 +1,5 @@
 package org.annalist.narrative;
 
-import java.time.format.DateTimeFormatter;
-import java.util.Locale;
 import java.util.Optional;
 import org.annalist.findings.CalendarNote;
 import org.annalist.findings.Claim;
@@ -30,10 +28,6 @@ import org.annalist.findings.Findings;
  */
 record CalendarLead(Optional<CalendarNote.EasterShift> easter, Optional<CalendarNote.EasterSpanTogether> span,
                     boolean signsDisagree) {
-
-    private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("d MMMM yyyy", Locale.ENGLISH);
-    /** Percentages only: their format does not depend on the series' values. */
-    private static final Formats PCT = Formats.forValues(new double[0], Locale.ENGLISH);
 
     static CalendarLead of(Findings findings) {
         Claims claims = findings.claims();
@@ -74,8 +68,9 @@ record CalendarLead(Optional<CalendarNote.EasterShift> easter, Optional<Calendar
         if (span.isPresent()) {
             CalendarNote.EasterShift e = easter.orElseThrow();
             return spanWords() + ", which Easter's move does not affect, " + spanChange() + "; " + period
-                    + " alone is distorted by Easter's date (" + DAY.format(e.easterNow()) + ", a year earlier "
-                    + DAY.format(e.easterBefore()) + ")" + (both.isEmpty() ? "." : ": " + both + ".");
+                    + " alone is distorted by Easter's date (" + CalendarSentences.DAY.format(e.easterNow())
+                    + ", a year earlier " + CalendarSentences.DAY.format(e.easterBefore()) + ")"
+                    + (both.isEmpty() ? "." : ": " + both + ".");
         }
         return "Against " + yearEarlier + " it was " + both
                 + ": the calendar's effect is as large as the change, so its direction cannot be told.";
@@ -86,7 +81,7 @@ record CalendarLead(Optional<CalendarNote.EasterShift> easter, Optional<Calendar
         if (span.isPresent()) {
             double pct = span.get().changePct();
             String change = Math.abs(pct) < DecisionRules.FLAT_CHANGE_PCT
-                    ? "about the same" : PCT.signedPercent(pct);
+                    ? "about the same" : CalendarSentences.PCT.signedPercent(pct);
             return change + " " + (span.get().months() ? "March and April" : "first two quarters")
                     + " together on a year earlier (Easter moved)";
         }
@@ -106,6 +101,7 @@ record CalendarLead(Optional<CalendarNote.EasterShift> easter, Optional<Calendar
         if (Math.abs(pct) < DecisionRules.FLAT_CHANGE_PCT) {
             return "were about the same as a year earlier";
         }
-        return "were " + PCT.percent(Math.abs(pct)) + (pct > 0 ? " higher" : " lower") + " than a year earlier";
+        return "were " + CalendarSentences.PCT.percent(Math.abs(pct)) + (pct > 0 ? " higher" : " lower")
+                + " than a year earlier";
     }
 }

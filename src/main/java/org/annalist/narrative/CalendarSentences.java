@@ -19,10 +19,10 @@ import org.annalist.series.Period;
  */
 final class CalendarSentences {
 
-    private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("d MMMM yyyy", Locale.ENGLISH);
+    static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("d MMMM yyyy", Locale.ENGLISH);
     private static final String[] COUNT = {"no", "one", "two", "three", "four", "five"};
     /** Percentages and p-values only: their format does not depend on the series' values. */
-    private static final Formats PCT = Formats.forValues(new double[0], Locale.ENGLISH);
+    static final Formats PCT = Formats.forValues(new double[0], Locale.ENGLISH);
 
     private CalendarSentences() {
     }

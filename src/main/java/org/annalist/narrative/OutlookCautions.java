@@ -29,8 +29,9 @@ final class OutlookCautions {
      * their paces differ by {@link DecisionRules#OUTLOOK_TREND_GAP_POINTS} points or more. The
      * trend's pace is its Sen slope over the mean of the latest year's values, so that both are
      * % a year of a level a reader has just seen (the whole period's trend keeps the % of its average
-     * level that its own page gives). The reasons, each only when its evidence points
-     * the way of the difference: the methods start from the latest level (always so); the last
+     * level that its own page gives). That the methods start from the latest level, not the trend
+     * line, is said apart: it holds for every series, so it explains no particular gap. The reasons
+     * on this series, each only when its evidence points the way of the difference: the last
      * twelve months' change; the outlook fitted on all values, the years before the latest break
      * included; a bridged fall or rise whose movement back lifts (or lowers) the trend; and the
      * change's own 80 % interval holding the trend's pace.

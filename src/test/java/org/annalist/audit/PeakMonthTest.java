@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
  */
 class PeakMonthTest {
 
-    /** A summer season; August is {@code augustOverJuly} above July in even years and below it in odd ones. */
+    /** A summer season; August is {@code evenYears} above July in even years and {@code oddYears} in odd ones. */
     private static Series summer(double evenYears, double oddYears) {
         double[] season = {-300, -250, -150, -50, 50, 200, 0, 0, 150, 0, -200, -280};
         double[] x = new double[96];
