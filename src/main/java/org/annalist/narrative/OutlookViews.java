@@ -204,9 +204,9 @@ final class OutlookViews {
         double step = step(e.mean(), e.hi80() - e.lo80());
         double estimateStep = meanStep > 0 ? Math.min(meanStep, step) : step;
         String what = c.total() ? "The total for " : "The average for ";
-        // the observed part is known exactly: at least as fine as the estimate it adds up to
-        String part = c.total() ? rounded(c.observed(), estimateStep, f) + unit + " observed " + observed
-                : "an average of " + rounded(c.observed(), estimateStep, f) + unit + " observed " + observed;
+        // the observed part is known exactly: printed as the latest-period pages print the year so far
+        String part = c.total() ? f.value(c.observed()) + unit + " observed " + observed
+                : "an average of " + f.value(c.observed()) + unit + " observed " + observed;
         return what + c.year() + " is estimated at " + rounded(e.mean(), estimateStep, f) + unit + ": " + part
                 + ", and forecasts for " + rest + " (80\u00A0% interval " + rounded(e.lo80(), step, f) + " to "
                 + rounded(e.hi80(), step, f) + unit + ", from the forecast part alone).";

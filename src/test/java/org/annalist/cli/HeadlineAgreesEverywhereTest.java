@@ -94,6 +94,14 @@ class HeadlineAgreesEverywhereTest {
                     ? slope.replace(" a year", " of the average level a year") : slope));
         }
 
+        // the year so far is one figure: the first page's total is the outlook page's observed part
+        java.util.regex.Matcher soFar = java.util.regex.Pattern.compile("the total was ([0-9,]+)").matcher(text);
+        java.util.regex.Matcher observedPart = java.util.regex.Pattern.compile("is estimated at [^:]+: ([0-9,]+)")
+                .matcher(text);
+        if (soFar.find() && observedPart.find()) {
+            assertThat(observedPart.group(1)).isEqualTo(soFar.group(1));
+        }
+
         // the notes carry the JSON's claims, one line each, with the same direction
         List<String> lines = new ArrayList<>();
         notes.lines().filter(l -> l.startsWith("claim:")).forEach(lines::add);

@@ -74,14 +74,17 @@ class OutlookViewsTest {
         assertThat(OutlookViews.comparison(narrow, current, s, f)).startsWith(", about the same as the estimate for 2026 (+0.4");
     }
 
-    /** The current year's total is printed to the digit at which its interval shows (invented numbers). */
+    /**
+     * The current year's estimate is printed to the digit at which its interval shows, the observed
+     * part as it is (invented numbers).
+     */
     @Test
     void theCurrentYearIsPrintedPreciselyEnoughForItsIntervalToShow() {
         Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
         OutlookFinding.CurrentYear c = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
                 Period.month(2026, 10), 10, 1_347_512, 2, new OutlookFinding.Span(1_553_421, 1_546_870, 1_560_240));
         assertThat(OutlookViews.currentYear(c, "\u00A0nights", f)).contains("1,553,000\u00A0nights",
-                "1,547,000 to 1,560,000\u00A0nights", "1,348,000\u00A0nights observed");
+                "1,547,000 to 1,560,000\u00A0nights", "1,347,512\u00A0nights observed");
     }
 
     /**
@@ -135,15 +138,16 @@ class OutlookViewsTest {
     }
 
     /**
-     * The observed part of the current year is printed as finely as the estimate it adds up to
-     * (the reviewer's case: 421,146 observed shown as 420,000 beside an estimate of 1,503,000).
+     * The observed part of the current year is known exactly and printed as the latest-period page
+     * prints the year so far (the reviewers' cases: 421,146 observed shown as 420,000 beside an
+     * estimate of 1,503,000; then 120,058 on the first page shown as 120,060 on the outlook page).
      */
     @Test
-    void theObservedPartOfTheYearIsRoundedAsFinelyAsItsEstimate() {
+    void theObservedPartOfTheYearIsPrintedAsTheYearSoFarIs() {
         Formats f = Formats.forValues(new double[] {100_000}, Locale.ENGLISH);
         OutlookFinding.CurrentYear c = new OutlookFinding.CurrentYear(2025, true, Period.month(2025, 1),
                 Period.month(2025, 4), 4, 421_146, 8, new OutlookFinding.Span(1_503_000, 1_460_000, 1_545_000));
         assertThat(OutlookViews.currentYear(c, " nights", f, 1_000)).contains("estimated at 1,503,000 nights",
-                "421,000 nights observed");
+                f.value(421_146.0) + " nights observed").contains("421,146");
     }
 }
