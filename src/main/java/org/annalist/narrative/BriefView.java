@@ -235,7 +235,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param yearSteadier the year's typical error is smaller than a single period's (errors partly cancelled)
      * @param againstTrend why next year's change differs from the trend the first page states
      *                     ({@link OutlookCautions#againstTrend}); empty when it does not differ materially
-     * @param againstTrendShort the same with only the reason that always holds, for the multi-series brief
+     * @param againstTrendShort the same with one reason, for the multi-series brief
      */
     public record OutlookView(boolean present, String method, String chosenBecause, String fittedFrom, String horizon,
                               String firstPeriod, String lastPeriod, List<ForecastRow> rows, boolean compact,

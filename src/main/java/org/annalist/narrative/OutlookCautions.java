@@ -41,8 +41,10 @@ final class OutlookCautions {
     }
 
     /**
-     * As {@link #againstTrend(Series, Findings, Formats)}; without {@code allReasons}, the one reason
-     * that always holds, for the multi-series brief's short sections.
+     * As {@link #againstTrend(Series, Findings, Formats)}; without {@code allReasons}, for the
+     * multi-series brief's short sections, one reason: the change's interval holding the trend's
+     * pace where it does, else the first other reason the evidence shows, else that the methods start
+     * from the latest level.
      */
     static String againstTrend(Series series, Findings findings, Formats f, boolean allReasons) {
         OutlookFinding o = findings.outlook();
@@ -74,12 +76,6 @@ final class OutlookCautions {
                 + (pace > 0 ? "rises" : "falls") + " by " + pacePct
                 : (Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ") + span + ", " + pacePct;
         double side = Math.signum(next - pace);   // which way the outlook lies from the trend's pace
-        if (!allReasons) {
-            String against = opposite ? (next < 0 ? " is a fall against " : " is a rise against ")
-                    : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
-            return "Next year's " + f.signedPercent(next) + against + span + " (" + f.signedPercent(pace)
-                    + (pagePct != null ? basis : " a year of the latest year's level") + "): the outlook starts from the latest level, not the trend line.";
-        }
         // how the method works is no reason by itself (recent periods may pull either way): said apart
         String method = " The outlook does not extend the trend line: its methods start from the latest level and"
                 + " give the most recent periods the most weight.";
@@ -104,10 +100,23 @@ final class OutlookCautions {
                         + (b.rise() ? "lowers" : "lifts") + " the trend, is not carried forward");
             }
         }
+        String withinUncertainty = null;
         if (change.pctLo80() != null && change.pctLo80() <= pace && pace <= change.pctHi80()) {
-            reasons.add("the difference lies within the outlook's uncertainty (the 80\u00A0% interval of the change, "
-                    + f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
-                    + ", holds the trend's pace)");
+            withinUncertainty = "the difference lies within the outlook's uncertainty (the 80\u00A0% interval of the"
+                    + " change, " + f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
+                    + ", holds the trend's pace)";
+            reasons.add(withinUncertainty);
+        }
+        if (!allReasons) {
+            // the short sections give one reason: the uncertainty when it holds the trend's pace, else the
+            // first the evidence shows; how the method works only when the evidence shows none
+            String against = opposite ? (next < 0 ? " is a fall against " : " is a rise against ")
+                    : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
+            String why = withinUncertainty != null ? withinUncertainty
+                    : reasons.isEmpty() ? "the outlook does not extend the trend line but starts from the latest level"
+                    : reasons.get(0);
+            return "Next year's " + f.signedPercent(next) + against + span + " (" + f.signedPercent(pace)
+                    + (pagePct != null ? basis : " a year of the latest year's level") + "): " + why + ".";
         }
         String opening = "Next year's " + f.signedPercent(next) + gap + "." + method;
         if (reasons.isEmpty()) {
