@@ -32,9 +32,11 @@ final class OutlookCautions {
      * level that its own page gives). That the methods start from the latest level, not the trend
      * line, is said apart: it holds for every series, so it explains no particular gap. The reasons
      * on this series, each only when its evidence points the way of the difference: the last
-     * twelve months' change; the outlook fitted on all values, the years before the latest break
-     * included; a bridged fall or rise whose movement back lifts (or lowers) the trend; and the
-     * change's own 80 % interval holding the trend's pace.
+     * twelve months' change; the year next year is set against having run on the other side of the
+     * trend's pace (a base effect: its year to date); the outlook fitted on all values, the years
+     * before the latest break included; a bridged fall or rise whose movement back lifts (or lowers)
+     * the trend; and the change's own 80 % interval holding the trend's pace. A change whose own
+     * 80 % interval holds zero "points" down or up; it is not called a fall or a rise.
      */
     static String againstTrend(Series series, Findings findings, Formats f) {
         return againstTrend(series, findings, f, true);
@@ -72,7 +74,11 @@ final class OutlookCautions {
         }
         String span = sinceBreak ? "the trend since " + f.period(trend.from()) : "the trend over the whole period";
         String pacePct = "about " + f.signedPercent(pace) + basis;
-        String gap = opposite ? " is a " + (next < 0 ? "fall" : "rise") + ", while " + span + " "
+        // a change whose own 80 % interval holds zero is not called a fall or a rise outright
+        boolean unsure = change.pctLo80() != null && change.pctLo80() <= 0 && 0 <= change.pctHi80();
+        String direction = unsure ? " points " + (next < 0 ? "down" : "up")
+                + " (its 80\u00A0% interval also holds no change)" : " is a " + (next < 0 ? "fall" : "rise");
+        String gap = opposite ? direction + ", while " + span + " "
                 + (pace > 0 ? "rises" : "falls") + " by " + pacePct
                 : (Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ") + span + ", " + pacePct;
         double side = Math.signum(next - pace);   // which way the outlook lies from the trend's pace
@@ -85,11 +91,21 @@ final class OutlookCautions {
                 .ifPresent(r -> reasons.add((series.frequency().periodsPerYear() == 12 ? "the last twelve months were "
                         : "the latest year was ") + f.percent(Math.abs(r)) + (r < 0 ? " below" : " above")
                         + (series.frequency().periodsPerYear() == 12 ? " the twelve before" : " the year before")));
+        // a base effect: the year next year is set against ran on the other side of the trend's pace
+        int baseYear = change.againstYear();
+        findings.claims().find(Claim.Quantity.YEAR_TO_DATE)
+                .filter(c -> c.to().year() == baseYear).flatMap(Claim::relativePct)
+                .filter(y -> Math.signum(y - pace) == -side)
+                .ifPresent(y -> reasons.add(baseYear + " itself ran " + (y > pace ? "high" : "low") + ": its "
+                        + (series.frequency().periodsPerYear() == 12 ? "months" : "periods") + " so far were "
+                        + f.signedPercent(y) + " on a year earlier, " + (y > pace ? "above" : "below")
+                        + " the trend's pace, and next year is set against that " + (y > pace ? "higher" : "lower")
+                        + " base"));
         Double wholeSlope = findings.trend().slopePerYear();
         if (sinceBreak && wholeSlope != null && Math.signum(wholeSlope - slope) == side
                 && o.caveats().stream().anyMatch(c -> c instanceof OutlookCaveat.BreakTooRecent
                 || c instanceof OutlookCaveat.HistoryKept)) {
-            reasons.add("it is fitted on all values from " + f.period(o.fittedFrom()) + ", the years before the change in "
+            reasons.add("the outlook is fitted on all values from " + f.period(o.fittedFrom()) + ", the years before the change in "
                     + f.period(trend.from()) + " included, over which the trend's rate was " + (side < 0 ? "lower" : "higher"));
         }
         for (OutlookCaveat c : o.caveats()) {
@@ -110,7 +126,8 @@ final class OutlookCautions {
         if (!allReasons) {
             // the short sections give one reason: the uncertainty when it holds the trend's pace, else the
             // first the evidence shows; how the method works only when the evidence shows none
-            String against = opposite ? (next < 0 ? " is a fall against " : " is a rise against ")
+            String against = opposite ? (unsure ? " points " + (next < 0 ? "down" : "up") + " against "
+                    : next < 0 ? " is a fall against " : " is a rise against ")
                     : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
             String why = withinUncertainty != null ? withinUncertainty
                     : reasons.isEmpty() ? "the outlook does not extend the trend line but starts from the latest level"

@@ -45,12 +45,20 @@ class OutlookCautionsTest {
         assertThat(trend.quantity()).isEqualTo(Claim.Quantity.TREND_SINCE_BREAK);
         assertThat(change.pct()).isNegative();
         String why = OutlookCautions.againstTrend(domestic, findings, f);
-        assertThat(why).startsWith("Next year's " + f.signedPercent(change.pct()) + " is a fall, while the trend since "
+        // its own 80 % interval holds zero: the change points down, it is not called a fall
+        assertThat(change.pctLo80()).isNegative();
+        assertThat(change.pctHi80()).isPositive();
+        assertThat(why).startsWith("Next year's " + f.signedPercent(change.pct())
+                + " points down (its 80\u00A0% interval also holds no change), while the trend since "
                 + f.period(trend.from()) + " rises")
                 .contains("does not extend the trend line", "fitted on all values from "
                         + f.period(findings.outlook().fittedFrom()));
         // how the method works is said apart, not as the cause: this market's recent months rose strongly
-        assertThat(why).doesNotContain("because").contains(". On this series, it is fitted on all values from ");
+        assertThat(why).doesNotContain("because").contains(". On this series, ", "the outlook is fitted on all values from ");
+        // the base effect: the year set against ran above the trend's pace (its year to date, from the findings)
+        double soFar = findings.claims().find(Claim.Quantity.YEAR_TO_DATE).flatMap(Claim::relativePct).orElseThrow();
+        assertThat(why).contains(change.againstYear() + " itself ran high: its months so far were "
+                + f.signedPercent(soFar) + " on a year earlier");
         // the trend's pace lies inside the change's 80 % interval, and the brief says so with that interval
         assertThat(why).contains(f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
                 + ", holds the trend's pace");
@@ -65,7 +73,7 @@ class OutlookCautionsTest {
     void theShortSectionGivesTheUncertaintyAsItsReasonWhenTheIntervalHoldsTheTrendsPace() {
         OutlookFinding.YearChange change = findings.outlook().nextYearChange();
         String shortWhy = OutlookCautions.againstTrend(domestic, findings, f, false);
-        assertThat(shortWhy).startsWith("Next year's " + f.signedPercent(change.pct()) + " is a fall against the trend since ")
+        assertThat(shortWhy).startsWith("Next year's " + f.signedPercent(change.pct()) + " points down against the trend since ")
                 .endsWith("the difference lies within the outlook's uncertainty (the 80\u00A0% interval of the change, "
                         + f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
                         + ", holds the trend's pace).")
