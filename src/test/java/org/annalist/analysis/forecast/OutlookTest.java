@@ -37,11 +37,16 @@ class OutlookTest {
      * behind ets on USAccDeaths (0.609 against 0.431, two years of training values) and JohnsonJohnson
      * (2.217 against 1.856); 1.142 since quarterly ETS models are fitted by R's simplex search
      * (JohnsonJohnson 2.290, austres 0.061 → 0.086, UKgas 2.670 → 2.680, while the M3 quarterly
-     * outlook went from 1.078 to 1.060). This pins that the outlook stays within 6 % of R's ets and
-     * below the mean of three while that gap is open.
+     * outlook went from 1.078 to 1.060). Where the gap is (members fitted on all training values,
+     * derived with this test's data): our ETS and Theta give R's ets and thetaf MASE on
+     * JohnsonJohnson (1.856, 5.538) and our Theta gives thetaf's on all eight, so the gap there is
+     * the equal-weight combination carrying Theta, which the back-test does not show to be steadily
+     * worse (over its later four origins Theta's error equals ETS's); on USAccDeaths it is our ARIMA
+     * member (0.893 against auto.arima's 0.615). This pins that the outlook stays within 6 % of R's
+     * ets (1.142 is 5.3 % above it) and below the mean of three while that gap is open.
      */
     @Test
-    void onEightPublicSeriesTheOutlookStaysWithinFivePercentOfRsEtsAndBelowTheMeanOfThree() {
+    void onEightPublicSeriesTheOutlookStaysWithinSixPercentOfRsEtsAndBelowTheMeanOfThree() {
         double ours = 0;
         double ets = 0;
         double mean3 = 0;
