@@ -31,22 +31,18 @@ class OutlookTest {
 
     /**
      * Eight public series with the last two seasons held out (forecast_accuracy_holdout8.csv, made by
-     * make-holdout8.R with R 4.2.2 and forecast 8.20). The goal is a mean MASE at most R's automatic
-     * ets() (1.084 over the eight rows); the mean of the eight rows' MASE of the mean of R's ets,
-     * auto.arima and thetaf is 1.214. Measured in December 2026: 1.128, ahead of that mean of three,
-     * behind ets on USAccDeaths (0.609 against 0.431, two years of training values) and JohnsonJohnson
-     * (2.217 against 1.856); 1.142 since quarterly ETS models are fitted by R's simplex search
-     * (JohnsonJohnson 2.290, austres 0.061 → 0.086, UKgas 2.670 → 2.680, while the M3 quarterly
-     * outlook went from 1.078 to 1.060). Where the gap is (members fitted on all training values,
-     * derived with this test's data): our ETS and Theta give R's ets and thetaf MASE on
-     * JohnsonJohnson (1.856, 5.538) and our Theta gives thetaf's on all eight, so the gap there is
-     * the equal-weight combination carrying Theta, which the back-test does not show to be steadily
-     * worse (over its later four origins Theta's error equals ETS's); on USAccDeaths it is our ARIMA
-     * member (0.893 against auto.arima's 0.615). This pins that the outlook stays within 6 % of R's
-     * ets (1.142 is 5.3 % above it) and below the mean of three while that gap is open.
+     * make-holdout8.R with R 4.2.2 and forecast 8.20): the outlook's mean MASE is at most R's
+     * automatic ets() (1.084 over the eight rows; the issue's goal) and below the mean of the eight
+     * rows' MASE of the mean of R's ets, auto.arima and thetaf (1.214). Measured in December 2026:
+     * 1.128, then 1.142 since quarterly ETS models are fitted by R's simplex search; 1.073 since Theta
+     * works on the logarithms of a deseasonalised series (JohnsonJohnson 2.290 → 1.887, AirPassengers
+     * 2.090 → 1.958, austres 0.086 → 0.058; USAccDeaths 0.613 against R ets 0.431 remains the largest
+     * gap, from the ARIMA member). Before the logarithms the gap was the equal-weight combination
+     * carrying a linear Theta on JohnsonJohnson (thetaf's MASE there: 5.538), which the back-test did
+     * not show to be steadily worse.
      */
     @Test
-    void onEightPublicSeriesTheOutlookStaysWithinSixPercentOfRsEtsAndBelowTheMeanOfThree() {
+    void onEightPublicSeriesTheOutlookIsAtLeastAsAccurateAsRsEtsAndBelowTheMeanOfThree() {
         double ours = 0;
         double ets = 0;
         double mean3 = 0;
@@ -62,7 +58,7 @@ class OutlookTest {
             ets += split.rValue("ets_MASE") / AgainstR.EIGHT.length;
             mean3 += split.rValue("mean3_MASE") / AgainstR.EIGHT.length;
         }
-        assertThat(ours).as("%s; R's mean of three %.3f", each, mean3).isLessThanOrEqualTo(1.06 * ets)
+        assertThat(ours).as("%s; R's mean of three %.3f", each, mean3).isLessThanOrEqualTo(ets)
                 .isLessThan(mean3);
     }
 

@@ -28,7 +28,7 @@ class RecordsCopyTheirArraysTest {
         assertThat(fit.forecast(2)).containsExactly(5, 5);
 
         double[] index = {0.5, 1.5};
-        Theta.Fit theta = new Theta.Fit(index, fit, 0, 10);
+        Theta.Fit theta = new Theta.Fit(index, fit, 0, 10, false);
         index[0] = 7;
         theta.seasonalIndex()[1] = 7;
         assertThat(theta.seasonalIndex()).containsExactly(0.5, 1.5);
