@@ -53,7 +53,8 @@ final class AppendixViews {
                     + " series too short for the usual methods" : "equal-weight combination (Makridakis & Hibon 2000; "
                     + "Makridakis, Spiliotis & Assimakopoulos 2020) of exponential smoothing state-space models chosen "
                     + "by AICc (Hyndman, Koehler, Snyder & Grose 2002; Hyndman et al. 2008), automatic ARIMA by the "
-                    + "stepwise search of Hyndman & Khandakar (2008) and Theta (Assimakopoulos & Nikolopoulos 2000), "
+                    + "stepwise search of Hyndman & Khandakar (2008) and Theta (Assimakopoulos & Nikolopoulos 2000; on the "
+                    + "logarithms of seasonally adjusted values), "
                     + "checked against each method alone and the seasonal naive rule in a rolling-origin back-test "
                     + "(Tashman 2000) by MASE (Hyndman & Koehler 2006)",
                     Terms.forecastModel(o.model()) + ", fitted from " + o.fittedFrom() + ", " + o.horizon()
