@@ -17,8 +17,13 @@ javac -d "$classes" -cp "$dist/lib/annalist.jar" dev/critical-path/CriticalPath.
 options=()
 while [ $# -gt 0 ] && [ "$1" != "--" ]; do options+=("$1"); shift; done
 [ $# -gt 0 ] && shift
-# the launcher's settings (src/dist/bin/annalist) for a command other than batch; the tool's class
-# is added after the jar, which the archive allows
+# the launcher's settings (src/dist/bin/annalist) for a command other than batch, huge pages where
+# the kernel gives them on request as it asks for them; the tool's class is added after the jar,
+# which the archive allows
+thp=()
+if grep -qF '[madvise]' /sys/kernel/mm/transparent_hugepage/enabled 2>/dev/null; then
+    thp=(-XX:+UseTransparentHugePages)
+fi
 exec java -Xmx640m -Xms64m -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -XX:-UsePerfData -Xshare:auto -Xlog:cds*=off \
-    -XX:SharedArchiveFile="$dist/lib/annalist.jsa" -Dannalist.home="$dist" "${options[@]}" \
+    "${thp[@]}" -XX:SharedArchiveFile="$dist/lib/annalist.jsa" -Dannalist.home="$dist" "${options[@]}" \
     -cp "$dist/lib/annalist.jar:$classes" CriticalPath "$@"

@@ -78,6 +78,35 @@ class LauncherScriptTest {
         assertThat(own).contains("-Xmx2g").doesNotContain("-Xmx640m", "-Xms192m");
     }
 
+    /**
+     * Huge pages are asked for where the kernel gives them on request ({@code [madvise]} in its
+     * setting), for every command but a batch, whose footprint was sized with small pages; where the
+     * kernel gives none, or gives them unasked, they are not asked for (a kernel without them would
+     * make the JVM warn). The expectation follows this machine's setting; the user's own setting
+     * comes later and wins.
+     */
+    @Test
+    void asksForHugePagesWhereTheKernelGivesThemOnRequestButNotForABatch() throws Exception {
+        Path java = fakeJava("17.0.15");
+        Path setting = Path.of("/sys/kernel/mm/transparent_hugepage/enabled");
+        boolean onRequest = Files.isReadable(setting) && Files.readString(setting).contains("[madvise]");
+        String launcher = home.resolve("bin/annalist").toString();
+        List<String> check = run(Map.of("JAVA_HOME", java.toString()), temp, launcher, "check", "f.csv").lines();
+        List<String> brief = run(Map.of("JAVA_HOME", java.toString()), temp, launcher, "brief", "f.csv").lines();
+        List<String> batch = run(Map.of("JAVA_HOME", java.toString()), temp, launcher, "batch", "b.yaml").lines();
+        if (onRequest) {
+            assertThat(check).contains("-XX:+UseTransparentHugePages");
+            assertThat(brief).contains("-XX:+UseTransparentHugePages");
+        } else {
+            assertThat(check).doesNotContain("-XX:+UseTransparentHugePages");
+            assertThat(brief).doesNotContain("-XX:+UseTransparentHugePages");
+        }
+        assertThat(batch).doesNotContain("-XX:+UseTransparentHugePages");
+        List<String> own = run(Map.of("JAVA_HOME", java.toString(), "ANNALIST_JAVA_OPTS", "-XX:-UseTransparentHugePages"),
+                temp, launcher, "check", "f.csv").lines();
+        assertThat(own.indexOf("-XX:-UseTransparentHugePages")).isGreaterThan(own.indexOf("-XX:+UseTransparentHugePages"));
+    }
+
     @Test
     void findsItsFolderThroughASymbolicLinkFromAnotherWorkingFolder() throws Exception {
         Path java = fakeJava("21.0.2");
