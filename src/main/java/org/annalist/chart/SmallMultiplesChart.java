@@ -14,8 +14,10 @@ import org.jfree.data.xy.XYSeriesCollection;
 
 /**
  * Several series as small charts stacked on one shared time axis, each on its own scale (a market
- * of a tenth of the total would otherwise lie flat): the values thin and grey, the trend-cycle over
- * them in the accent colour, so that the shapes compare at a glance.
+ * of a tenth of the total would otherwise lie flat): the values thin, solid and light grey, the
+ * trend-cycle over them thick and dashed in the accent colour, as on the overview charts, so that
+ * the shapes compare at a glance and the two lines differ by width, dash and lightness when
+ * printed in greyscale (the caption names them so).
  */
 public final class SmallMultiplesChart {
 
@@ -53,7 +55,7 @@ public final class SmallMultiplesChart {
             renderer.setSeriesPaint(0, ChartStyle.INK_LIGHT);
             renderer.setSeriesStroke(0, ChartStyle.OBSERVED_THIN_STROKE);
             renderer.setSeriesPaint(1, ChartStyle.ACCENT);
-            renderer.setSeriesStroke(1, ChartStyle.OBSERVED_STROKE);
+            renderer.setSeriesStroke(1, ChartStyle.TREND_STROKE);
             XYPlot plot = new XYPlot(data, null, values, renderer);
             plot.setOutlineVisible(false);
             plot.setDomainGridlinesVisible(false);

@@ -32,8 +32,12 @@ final class CalendarAnalysis {
         private final WeekdayKind weekdays;
         private final List<CalendarEffects.Effect> kept;
         private final List<Holiday> holidays;
+        /** Whether the data could tell Easter's effect; null where no effect was estimated at all. */
+        private final CalendarFinding.EasterEvidence easter;
 
-        private Fit(Optional<CalendarEffects.Result> result, WeekdayKind weekdays, List<Holiday> holidays) {
+        private Fit(Optional<CalendarEffects.Result> result, WeekdayKind weekdays, List<Holiday> holidays,
+                    CalendarFinding.EasterEvidence easter) {
+            this.easter = easter;
             this.result = result;
             this.weekdays = weekdays;
             this.holidays = List.copyOf(holidays);
@@ -76,16 +80,17 @@ final class CalendarAnalysis {
      */
     /** No effects: a temperature's monthly mean counts no days, so Easter and weekdays put nothing into it. */
     static Fit none(Series series, List<Holiday> holidays) {
-        return new Fit(Optional.empty(), WeekdayKind.of(series), holidays);
+        return new Fit(Optional.empty(), WeekdayKind.of(series), holidays, null);
     }
 
     static Fit fit(Series series, double[] workingRemainder, List<Holiday> holidays) {
         WeekdayKind kind = WeekdayKind.of(series);
         if (!CalendarEffects.applies(series.frequency()) || workingRemainder == null || beforeGregorian(series)) {
-            return new Fit(Optional.empty(), kind, holidays);
+            return new Fit(Optional.empty(), kind, holidays, null);
         }
+        CalendarFinding.EasterEvidence easter = EasterSplits.of(series);
         return new Fit(CalendarEffects.robust(workingRemainder, series.start(), CalendarRegressors.DEFAULT_EASTER_WINDOW,
-                holidays, kind.weekdays(), DecisionRules.CALENDAR_SCREEN_SCORE), kind, holidays);
+                easter.tested(), holidays, kind.weekdays(), DecisionRules.CALENDAR_SCREEN_SCORE), kind, holidays, easter);
     }
 
     /**
@@ -140,7 +145,7 @@ final class CalendarAnalysis {
         List<CalendarNote> notes = indicators == null || indicators.lastYear().isEmpty() ? List.of()
                 : notes(series, indicators, fit, log, holidays, latest);
         List<Period> screened = fit.result.map(r -> r.screened().stream().map(series::period).toList()).orElse(List.of());
-        return new CalendarFinding(easter, effects, notes, fit.weekdays, screened, latest);
+        return new CalendarFinding(easter, effects, notes, fit.weekdays, screened, latest, fit.easter);
     }
 
     /**
@@ -173,10 +178,13 @@ final class CalendarAnalysis {
         double shareNow = CalendarRegressors.easterShare(now, window);
         double shareBefore = CalendarRegressors.easterShare(before, window);
         if (Math.abs(shareNow - shareBefore) > 1e-9) {
-            Optional<Double> explained = kept(fit, CalendarEffects.EASTER).filter(e -> !Double.isNaN(yoy))
-                    .map(e -> effectPct(e.coefficient(), shareNow - shareBefore, log, lastYear.value()));
+            Optional<Double> explained = Double.isNaN(yoy) ? Optional.empty()
+                    : differencePct(series, r, fit, CalendarEffects.EASTER, log);
             notes.add(new CalendarNote.EasterShift(now, Easter.sunday(now.year()), Easter.sunday(before.year()), window,
                     Math.round(shareNow * window), Math.round(shareBefore * window), explained, yoy));
+            if (fit.easter != null && !fit.easter.tested()) {
+                notes.add(new CalendarNote.EasterUntold(fit.easter));
+            }
             easterSpanTogether(series, r).ifPresent(notes::add);
         }
         for (Holiday holiday : holidays) {
@@ -184,12 +192,11 @@ final class CalendarAnalysis {
             double inBefore = holiday.share(before);
             if (Math.abs(inNow - inBefore) > 1e-9) {
                 notes.add(new CalendarNote.HolidayShift(holiday.name(), now, before, inNow, inBefore,
-                        kept(fit, holiday.name()).map(e -> effectPct(e.coefficient(), inNow - inBefore, log,
-                                lastYear.value()))));
+                        differencePct(series, r, fit, holiday.name(), log)));
             }
         }
         if (series.frequency() == Frequency.MONTHLY) {
-            weekdayNote(fit, now, before, log, lastYear.value()).ifPresent(notes::add);
+            weekdayNote(series, r, fit, log).ifPresent(notes::add);
         }
         if (r.longerFebruary() != 0) {
             notes.add(new CalendarNote.LeapFebruary(now, before,
@@ -209,19 +216,19 @@ final class CalendarAnalysis {
      * ({@link WeekdayKind}): Friday and Saturday nights for overnight stays, Saturdays and Sundays
      * for day visits, and for other series Saturdays and Sundays only when their effect counts.
      */
-    private static Optional<CalendarNote> weekdayNote(Fit fit, Period now, Period before, boolean log, double value) {
+    private static Optional<CalendarNote> weekdayNote(Series series, LatestIndicators.Result r, Fit fit, boolean log) {
+        Period now = r.period();
+        Period before = r.lastYear().orElseThrow().period();
         if (fit.weekdays == WeekdayKind.NIGHTS) {
             int nightsNow = CalendarRegressors.weekendNights(now);
             int nightsBefore = CalendarRegressors.weekendNights(before);
             return nightsNow == nightsBefore ? Optional.empty()
                     : Optional.of(new CalendarNote.WeekendNights(now, before, nightsNow, nightsBefore,
-                    kept(fit, CalendarEffects.WEEKEND).map(e -> effectPct(e.coefficient(), nightsNow - nightsBefore, log,
-                            value))));
+                    differencePct(series, r, fit, CalendarEffects.WEEKEND, log)));
         }
         int daysNow = CalendarRegressors.weekendDays(now);
         int daysBefore = CalendarRegressors.weekendDays(before);
-        Optional<Double> effect = kept(fit, CalendarEffects.WEEKEND_DAYS)
-                .map(e -> effectPct(e.coefficient(), daysNow - daysBefore, log, value));
+        Optional<Double> effect = differencePct(series, r, fit, CalendarEffects.WEEKEND_DAYS, log);
         if (daysNow == daysBefore || (fit.weekdays == WeekdayKind.OTHER && effect.isEmpty())) {
             return Optional.empty();
         }
@@ -250,11 +257,13 @@ final class CalendarAnalysis {
         double adjustedBefore = log ? valueBefore * Math.exp(-partBefore) : valueBefore - partBefore;
         // the value the latest period would have had with a year earlier's calendar
         double base = log ? valueNow * Math.exp(-moved) : valueNow - moved;
+        CalendarEffects.Result result = fit.result.orElseThrow();
         List<CalendarFinding.Part> parts = new ArrayList<>();
         for (CalendarEffects.Effect e : fit.kept) {
-            double d = fit.result.orElseThrow().part(e.name(), now) - fit.result.orElseThrow().part(e.name(), before);
+            double d = result.part(e.name(), now) - result.part(e.name(), before);
             if (Math.abs(d) > 1e-12) {
-                parts.add(new CalendarFinding.Part(e.name(), shiftPct(d, log, base), e.pValue()));
+                parts.add(new CalendarFinding.Part(e.name(), differencePct(valueNow, valueBefore,
+                        result.part(e.name(), now), result.part(e.name(), before), log), e.pValue()));
             }
         }
         if (parts.isEmpty()) {
@@ -265,8 +274,48 @@ final class CalendarAnalysis {
         Double adjustedPct = changePct == null || adjustedBefore <= 0 ? null : 100 * (adjustedNow / adjustedBefore - 1);
         Double share = changePct == null || adjustedPct == null || Math.abs(changePct) < 0.05 ? null
                 : (changePct - adjustedPct) / changePct;
+        double calendarPct = changePct != null && adjustedPct != null
+                ? 100 * ((1 + changePct / 100) / (1 + adjustedPct / 100) - 1)
+                : shiftPct(moved, log, base);
         return new CalendarFinding.AdjustedChange(r.period(), lastYear.period(), lastYear.change(), changePct,
-                adjustedNow - adjustedBefore, adjustedPct, shiftPct(moved, log, base), share, parts);
+                adjustedNow - adjustedBefore, adjustedPct, calendarPct, share, parts);
+    }
+
+    /**
+     * What the named effect's difference between the latest period and a year earlier did to the
+     * change between them ({@link #differencePct(double, double, double, double, boolean)}), when the
+     * effect counts.
+     */
+    private static Optional<Double> differencePct(Series series, LatestIndicators.Result r, Fit fit, String name,
+                                                  boolean log) {
+        LatestIndicators.Comparison lastYear = r.lastYear().orElseThrow();
+        int now = series.indexOf(r.period());
+        int before = series.indexOf(lastYear.period());
+        if (now < 0 || before < 0) {
+            return Optional.empty();
+        }
+        CalendarEffects.Result result = fit.result.orElse(null);
+        return kept(fit, name).map(e -> differencePct(r.value(), lastYear.value(), result.part(name, now),
+                result.part(name, before), log));
+    }
+
+    /**
+     * What the calendar's difference between the two periods did to the change on a year earlier, in %:
+     * the factor by which it multiplied the ratio of the two values, (1 + change as counted) /
+     * (1 + change without it) − 1, where "without it" takes the effect's part out of each value (on
+     * logs exp(partNow − partBefore) − 1, whatever the values). So defined, the change as counted, the
+     * change without the calendar and this figure recompute from one another as printed; NaN where a
+     * value without the effect is not positive.
+     */
+    private static double differencePct(double valueNow, double valueBefore, double partNow, double partBefore,
+                                        boolean log) {
+        if (log) {
+            return 100 * (Math.exp(partNow - partBefore) - 1);
+        }
+        double withoutNow = valueNow - partNow;
+        double withoutBefore = valueBefore - partBefore;
+        return withoutNow <= 0 || withoutBefore <= 0 || valueBefore <= 0 ? Double.NaN
+                : 100 * ((valueNow / valueBefore) * (withoutBefore / withoutNow) - 1);
     }
 
     /** A shift on the working scale as a % of {@code base}: exp(d) − 1 on logs, d / base otherwise. */

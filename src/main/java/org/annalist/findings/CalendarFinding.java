@@ -14,9 +14,12 @@ import org.annalist.series.Period;
  * @param screenedOut  periods kept out of the calendar estimate as one-offs (robust screen)
  * @param latestChange the latest period's change on a year earlier with the significant calendar
  *                     effects allowed for; null when no significant effect differed between the two
+ * @param easterEvidence whether the data can tell an Easter effect, and from which years; null where
+ *                     no calendar effect was estimated
  */
 public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, List<CalendarNote> notes,
-                              WeekdayKind weekdays, List<Period> screenedOut, AdjustedChange latestChange) {
+                              WeekdayKind weekdays, List<Period> screenedOut, AdjustedChange latestChange,
+                              EasterEvidence easterEvidence) {
 
     /** The name of the Easter effect in {@code effects}. */
     public static final String EASTER = CalendarEffects.EASTER;
@@ -36,6 +39,24 @@ public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, Lis
     }
 
     /**
+     * The years that can tell Easter's effect apart ({@code EasterSplits}).
+     *
+     * @param mostlyEarlier years whose days before Easter fell mostly in March (the first quarter)
+     * @param mostlyLater   years whose days before Easter fell mostly in April (the second quarter)
+     * @param needed        years of each needed ({@link DecisionRules#MIN_EASTER_YEARS_EACH_MONTH})
+     * @param tested        whether there were enough of both, so that the Easter effect was estimated
+     * @param months        whether the periods are months (else quarters)
+     */
+    public record EasterEvidence(List<Integer> mostlyEarlier, List<Integer> mostlyLater, int needed, boolean tested,
+                                 boolean months) {
+
+        public EasterEvidence {
+            mostlyEarlier = List.copyOf(mostlyEarlier);
+            mostlyLater = List.copyOf(mostlyLater);
+        }
+    }
+
+    /**
      * @param coefficient per whole Easter window in the period, or per extra Friday or Saturday night
      *                    (or Saturday or Sunday), on the working scale (logs when multiplicative)
      * @param effectPct   the same as a % of the period's value
@@ -51,8 +72,12 @@ public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, Lis
      * @param changePct         observed change in %; null where a % change means nothing (a value ≤ 0 a year earlier)
      * @param adjustedChange    the change of the calendar-adjusted values, in the series' units
      * @param adjustedChangePct the same in %; null as {@code changePct}
-     * @param calendarPct       how much the calendar's difference moved the latest period, in % of the
-     *                          value it would have had with the calendar of a year earlier
+     * @param calendarPct       how much the calendar's difference moved the change, in %:
+     *                          (1 + changePct/100) / (1 + adjustedChangePct/100) − 1, so that the three
+     *                          recompute from one another (on logs the latest value's calendar factor
+     *                          against a year earlier's); where changes are not in %, the difference's
+     *                          part in % of the value the latest period would have had with a year
+     *                          earlier's calendar
      * @param calendarShare     the share of the observed % change the calendar accounts for,
      *                          (changePct − adjustedChangePct) / changePct; null when changePct is
      *                          null or within ±0.05 of zero
@@ -68,7 +93,9 @@ public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, Lis
     }
 
     /**
-     * @param effectPct what this effect's difference put into the latest period, in %
+     * @param effectPct what this effect's difference did to the change on a year earlier, in %: the
+     *                  change's ratio as counted over its ratio with this effect's part taken out of
+     *                  both values, less one (alone among the parts, it equals {@code calendarPct})
      * @param pValue    the effect's p-value (Newey–West)
      */
     public record Part(String name, double effectPct, double pValue) {

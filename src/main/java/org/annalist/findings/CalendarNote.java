@@ -15,11 +15,19 @@ public sealed interface CalendarNote {
      *
      * @param window       days before Easter Sunday that count as Easter's
      * @param daysNow      of those days, how many fell in the latest period
-     * @param explainedPct the change the Easter effect accounts for, in %, when the effect counts
+     * @param explainedPct what the Easter effect's difference did to the change, in %, when the effect
+     *                     counts: (1 + change) / (1 + change without it) − 1
      * @param changePct    the year-on-year change, in % (NaN when unknown)
      */
     record EasterShift(Period now, LocalDate easterNow, LocalDate easterBefore, int window, long daysNow,
                        long daysBefore, Optional<Double> explainedPct, double changePct) implements CalendarNote {
+    }
+
+    /**
+     * Easter moved between the periods compared, but the data cannot yet tell its effect: too few
+     * years of each split of the days before it ({@link CalendarFinding.EasterEvidence}).
+     */
+    record EasterUntold(CalendarFinding.EasterEvidence evidence) implements CalendarNote {
     }
 
     /**
@@ -45,7 +53,8 @@ public sealed interface CalendarNote {
      * for other series only when the estimated weekday effect is significant.
      *
      * @param weekdays  the kind of series the count was noted for
-     * @param effectPct what the difference put into the latest period, in %, when the effect counts
+     * @param effectPct what the difference did to the change on a year earlier, in %, when the effect
+     *                  counts: (1 + change) / (1 + change without it) − 1
      */
     record WeekendDays(Period now, Period before, int daysNow, int daysBefore, WeekdayKind weekdays,
                        Optional<Double> effectPct) implements CalendarNote {

@@ -171,6 +171,16 @@ public final class DecisionRules {
      */
     public static final double CALENDAR_SCREEN_SCORE = 3.5;
     /**
+     * Easter's effect is estimated only when, among the data's years, the days before Easter fell
+     * mostly in March (the first quarter) in at least this many and mostly in April (the second) in
+     * at least this many (our rule). The Easter regressor, centred per calendar month, varies only
+     * with that split; with a single year of one split, its estimate is that year's difference from
+     * the others, whatever else happened in it, and a p-value computed from it overstates the
+     * evidence. Two of each is the least that lets one year be checked against another.
+     */
+    public static final int MIN_EASTER_YEARS_EACH_MONTH = 2;
+
+    /**
      * An outlier's row names the calendar when the significant calendar effects moved its expected
      * value by at least 1 % (our rule: smaller effects are within a month's noise and would only
      * clutter the table).

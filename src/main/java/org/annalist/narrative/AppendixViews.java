@@ -2,6 +2,9 @@ package org.annalist.narrative;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import org.annalist.findings.CalendarFinding;
+import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookFinding;
 
@@ -42,7 +45,8 @@ final class AppendixViews {
         rows.add(new BriefView.MethodRow("Structural breaks", "Bai & Perron (1998, 2003); dates' intervals after "
                 + "Bai (1997); PELT: Killick, Fearnhead & Eckley (2012)", Typography.printed(Terms.breakMethod(findings.breakMethod()))));
         rows.add(new BriefView.MethodRow("Outliers", "modified z-score of the decomposition remainder (Iglewicz & "
-                + "Hoaglin 1993), robust scale (MAD)", "outliers kept out of the break search; none reported next to a break"));
+                + "Hoaglin 1993), robust scale (MAD)", outlierSettings(findings, f)));
+        easterRow(findings).ifPresent(rows::add);
         rows.add(new BriefView.MethodRow("Irregular fluctuation", "share of the variation around the long-run "
                 + "straight line carried by the remainder", ""));
         if (findings.outlook() != null) {
@@ -67,6 +71,47 @@ final class AppendixViews {
                     + "; year totals and their intervals from the simulated paths"));
         }
         return rows;
+    }
+
+    /**
+     * What the outlier search did around this series' breaks, read from its findings: none is reported
+     * in the periods next to a break's first period ({@link DecisionRules#OUTLIER_QUIET_BEFORE_BREAK},
+     * {@link DecisionRules#OUTLIER_QUIET_FROM_BREAK}), but one farther off may still lie within a
+     * break's 95 % interval and is then named, as the breaks section names it.
+     */
+    static String outlierSettings(Findings findings, Formats f) {
+        String settings = "outliers kept out of the break search";
+        if (findings.breaks().isEmpty()) {
+            return settings;
+        }
+        settings += "; none reported in the " + Terms.number(DecisionRules.OUTLIER_QUIET_BEFORE_BREAK) + " periods before a"
+                + " structural change's first period or the " + Terms.number(DecisionRules.OUTLIER_QUIET_FROM_BREAK)
+                + " from it on";
+        List<String> within = findings.outliers().stream()
+                .filter(o -> findings.breaks().stream().anyMatch(b -> b.ci95().get(0).compareTo(o.period()) <= 0
+                        && o.period().compareTo(b.ci95().get(1)) <= 0))
+                .map(o -> f.period(o.period())).toList();
+        if (!within.isEmpty()) {
+            settings += "; " + Terms.listed(within) + (within.size() == 1 ? ", within a" : ", within")
+                    + " structural change's 95\u00A0% interval, " + (within.size() == 1 ? "is" : "are") + " reported as well";
+        }
+        return settings;
+    }
+
+    /**
+     * That the data cannot yet tell Easter's effect, so it was not estimated
+     * ({@link DecisionRules#MIN_EASTER_YEARS_EACH_MONTH}); no row where it was, or where no calendar
+     * effect is estimated at all.
+     */
+    private static Optional<BriefView.MethodRow> easterRow(Findings findings) {
+        CalendarFinding c = findings.calendar();
+        if (c == null || c.easterEvidence() == null || c.easterEvidence().tested()) {
+            return Optional.empty();
+        }
+        CalendarFinding.EasterEvidence e = c.easterEvidence();
+        return Optional.of(new BriefView.MethodRow("Easter effect", "share of the days before Easter in each period"
+                + " (Bell & Hillmer 1983)", "not estimated: the data cannot yet tell it, as " + CalendarSentences.easterYears(e)
+                + "; at least " + CalendarSentences.count(e.needed()) + " of each are needed"));
     }
 
     static List<BriefView.Fact> thresholds() {

@@ -100,10 +100,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param lastLevel  in the last full year
      * @param rose       whether it is higher at the end
      * @param drops      years of steps down of 10 % or more (by the fitted lines at the break)
+     * @param leadBeforeChange that the trend-cycle starts to move before a sudden change the chart
+     *                   holds, a sentence; empty without one ({@link ChartWords#leadBeforeSuddenChange})
      */
     public record Charts(ChartView overview, ChartView profile, ChartView years, ChartView irregular, String firstYear,
                          String lastYear, String firstLevel, String lastLevel, boolean rose, List<String> drops,
-                         String smoothingMethod, int smoothingWindow) {
+                         String smoothingMethod, int smoothingWindow, String leadBeforeChange) {
 
         public Charts {
             drops = List.copyOf(drops);

@@ -35,6 +35,10 @@ final class CalendarSentences {
                     DAY.format(e.easterNow()), DAY.format(e.easterBefore()), days(e.daysNow(), e.window()), e.window(),
                     name(e.now()), days(e.daysBefore(), e.window()));
         }
+        if (note instanceof CalendarNote.EasterUntold u) {
+            return "The data cannot yet tell whether Easter's date moves this series: " + easterYears(u.evidence())
+                    + "; at least " + count(u.evidence().needed()) + " of each are needed.";
+        }
         if (note instanceof CalendarNote.EasterSpanTogether t) {
             return String.format(Locale.ROOT, "%s together, which Easter's move does not affect: %s on a year earlier.",
                     t.months() ? "March and April" : "The first two quarters", PCT.signedPercent(t.changePct()));
@@ -117,7 +121,7 @@ final class CalendarSentences {
         return "the timing of " + effect;
     }
 
-    private static String effectName(String effect) {
+    static String effectName(String effect) {
         return effect.equals(CalendarFinding.EASTER) ? "Easter"
                 : effect.equals(CalendarFinding.WEEKEND_NIGHTS) ? "Friday and Saturday nights"
                 : effect.equals(CalendarFinding.WEEKEND_DAYS) ? "Saturdays and Sundays" : effect;
@@ -144,6 +148,31 @@ final class CalendarSentences {
         }
         return String.format(Locale.ROOT, "%.0f %% of %s's days fell in %s, against %.0f %% on average", 100 * c.regressor(),
                 c.effect(), name(period), 100 * c.typical()) + allowed + ".";
+    }
+
+    /**
+     * "the days before Easter fell mostly in March in one of its years (2024) and mostly in April in
+     * two (2023 and 2025)".
+     */
+    static String easterYears(CalendarFinding.EasterEvidence e) {
+        boolean months = e.months();
+        return "the days before Easter fell mostly in " + (months ? "March" : "the first quarter") + " in "
+                + years(e.mostlyEarlier()) + " and mostly in " + (months ? "April" : "the second") + " in "
+                + years(e.mostlyLater());
+    }
+
+    /** "none of its years", "one of its years (2024)", "two (2023 and 2025)". */
+    private static String years(List<Integer> years) {
+        if (years.isEmpty()) {
+            return "none of its years";
+        }
+        return count(years.size()) + (years.size() == 1 ? " of its years" : "") + " ("
+                + Terms.listed(years.stream().map(String::valueOf).toList()) + ")";
+    }
+
+    /** A small count in words ("two"), a larger one in figures. */
+    static String count(int n) {
+        return n >= 0 && n < COUNT.length ? COUNT[n] : String.valueOf(n);
     }
 
     private static String month(YearMonth m) {

@@ -1,6 +1,7 @@
 package org.annalist.narrative;
 
 import org.annalist.findings.Findings;
+import org.annalist.series.Frequency;
 import org.annalist.series.Series;
 
 /** The words the charts print: legend entries and axis titles, worded as the sentences word them. */
@@ -45,6 +46,45 @@ public final class ChartWords {
         int first = series.start().year();
         int last = series.end().year();
         return last - first + 1 > 2 ? first + " to " + (last - 2) + " (thin)" : "";
+    }
+
+    /**
+     * That the trend-cycle starts to move before a sudden change, when the chart holds one (a break
+     * that steps the level, or a fall or rise that moved back); empty otherwise. A centred average of
+     * w periods puts the values of up to ⌊w/2⌋ periods ahead into each point (a 2×12 average: six
+     * months), so its line leaves the old level that long before a jump.
+     */
+    public static String leadBeforeSuddenChange(Series series, Findings findings) {
+        boolean sudden = findings.breaks().stream().anyMatch(b -> b.kind().step()) || !findings.episodes().isEmpty();
+        if (findings.smoothing() == null || !sudden) {
+            return "";
+        }
+        int ahead = findings.smoothing().window() / 2;
+        if (ahead < 1) {
+            return "";
+        }
+        return "A centred average starts to move up to " + span(ahead, series.frequency()) + " before a sudden change.";
+    }
+
+    /** {@code periods} periods in words: "half a year" where that is what they make, else a count. */
+    private static String span(int periods, Frequency frequency) {
+        double years = periods / frequency.periodsPerYear();
+        if (Math.abs(years - 0.5) < 0.02) {
+            return "half a year";
+        }
+        if (Math.abs(years - Math.rint(years)) < 0.02 && years >= 0.98) {
+            long whole = Math.round(years);
+            return whole == 1 ? "a year" : whole + " years";
+        }
+        String noun = switch (frequency) {
+            case MONTHLY -> "month";
+            case QUARTERLY -> "quarter";
+            case HALF_YEARLY -> "half-year";
+            case WEEKLY -> "week";
+            case ANNUAL -> "year";
+            case DAILY, BUSINESS_DAILY -> "day";
+        };
+        return periods + " " + noun + (periods == 1 ? "" : "s");
     }
 
     private static String against(Series series, Findings findings, String what) {

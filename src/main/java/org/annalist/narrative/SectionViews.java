@@ -238,7 +238,8 @@ final class SectionViews {
                 f.significant(trend[first]), f.significant(trend[last]), trend[last] > trend[first],
                 BriefViews.dropYears(series, findings.breaks()),
                 findings.smoothing() == null ? "" : Terms.movingAverage(findings.smoothing().method()),
-                findings.smoothing() == null ? 0 : findings.smoothing().window());
+                findings.smoothing() == null ? 0 : findings.smoothing().window(),
+                ChartWords.leadBeforeSuddenChange(series, findings));
     }
 
     private BriefView.ChartView chart(FigurePlan.Chart chart) {

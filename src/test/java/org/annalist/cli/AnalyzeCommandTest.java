@@ -55,7 +55,10 @@ class AnalyzeCommandTest {
         assertThat(keys(i.get("year_to_date"))).contains("from", "to", "total", "previous_total", "change_pct");
         assertThat(keys(i.get("rank"))).containsExactly("position", "of", "tied_with");
         JsonNode c = f.get("calendar");
-        assertThat(keys(c)).containsExactly("easter", "effects", "notes", "weekdays", "screened_out", "latest_change");
+        assertThat(keys(c)).containsExactly("easter", "effects", "notes", "weekdays", "screened_out", "latest_change",
+                "easter_evidence");
+        assertThat(keys(c.get("easter_evidence"))).containsExactly("mostly_earlier", "mostly_later", "needed", "tested",
+                "months");
         assertThat(c.get("easter").get(0).get("date").asText()).isEqualTo("1949-04-17");   // Easter 1949 (Meeus)
         JsonNode o = f.get("outlook");
         assertThat(keys(o)).containsExactly("method", "model", "horizon", "fitted_from", "forecasts", "next_year_total",

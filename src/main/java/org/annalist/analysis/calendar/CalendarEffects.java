@@ -178,6 +178,12 @@ public final class CalendarEffects {
 
     static double[][] regressors(Period start, int n, int easterWindow, List<Holiday> holidays, Weekdays weekdays,
                                  List<String> names) {
+        return regressors(start, n, easterWindow, true, holidays, weekdays, names);
+    }
+
+    /** As above; without the Easter regressor when {@code easter} is false (the caller's rule). */
+    static double[][] regressors(Period start, int n, int easterWindow, boolean easter, List<Holiday> holidays,
+                                 Weekdays weekdays, List<String> names) {
         int period = start.frequency().seasonalPeriod();
         int columns = 2 + holidays.size();
         double[][] raw = new double[n][columns];
@@ -211,7 +217,7 @@ public final class CalendarEffects {
                 ss += centred[t][c] * centred[t][c];
             }
             // a regressor that does not vary within the calendar months carries nothing (our rule)
-            if (ss > 1e-12) {
+            if (ss > 1e-12 && (c != 0 || easter)) {
                 keep.add(c);
             }
         }
@@ -258,8 +264,17 @@ public final class CalendarEffects {
      */
     public static Optional<Result> robust(double[] irregular, Period start, int easterWindow, List<Holiday> holidays,
                                           Weekdays weekdays, double screenScore) {
+        return robust(irregular, start, easterWindow, true, holidays, weekdays, screenScore);
+    }
+
+    /**
+     * As {@link #robust(double[], Period, int, List, Weekdays, double)}; with {@code easter} false the
+     * Easter effect is not estimated (the caller decided the data cannot tell it).
+     */
+    public static Optional<Result> robust(double[] irregular, Period start, int easterWindow, boolean easter,
+                                          List<Holiday> holidays, Weekdays weekdays, double screenScore) {
         // the regressors depend on the calendar alone: made once for both designs below
-        Regressors calendar = Regressors.of(start, irregular.length, easterWindow, holidays, weekdays);
+        Regressors calendar = Regressors.of(start, irregular.length, easterWindow, easter, holidays, weekdays);
         Design d = design(irregular, calendar, easterWindow);
         if (d == null) {
             return Optional.empty();
@@ -301,19 +316,21 @@ public final class CalendarEffects {
     /** Every position's centred regressors with their names ({@link #regressors}). */
     private record Regressors(double[][] all, List<String> names) {
 
-        static Regressors of(Period start, int n, int easterWindow, List<Holiday> holidays, Weekdays weekdays) {
+        static Regressors of(Period start, int n, int easterWindow, boolean easter, List<Holiday> holidays,
+                             Weekdays weekdays) {
             if (!applies(start.frequency())) {
                 throw new IllegalArgumentException("calendar effects are estimated for monthly or quarterly data, not "
                         + start.frequency());
             }
             List<String> names = new ArrayList<>();
-            return new Regressors(regressors(start, n, easterWindow, holidays, weekdays, names), names);
+            return new Regressors(regressors(start, n, easterWindow, easter, holidays, weekdays, names), names);
         }
     }
 
     private static Design design(double[] irregular, Period start, int easterWindow, List<Holiday> holidays,
                                  Weekdays weekdays) {
-        return design(irregular, Regressors.of(start, irregular.length, easterWindow, holidays, weekdays), easterWindow);
+        return design(irregular, Regressors.of(start, irregular.length, easterWindow, true, holidays, weekdays),
+                easterWindow);
     }
 
     private static Design design(double[] irregular, Regressors calendar, int easterWindow) {
