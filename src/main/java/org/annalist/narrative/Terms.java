@@ -250,6 +250,8 @@ final class Terms {
                     + m.minimumRegime() + ", then every break checked by " + checked;
             case BAI_PERRON -> "Bai-Perron, changes in " + (m.levelAndSlope() ? "level and slope" : "level")
                     + ", number of breaks by BIC, then reduced until every break passes " + checked
+                    + (m.levelAndSlope() ? "; a step only where one line bent at the break fits worse (F-test, "
+                    + number(100 * DecisionRules.ALPHA) + " %, in the values and in their logs)" : "")
                     + ", minimum regime " + m.minimumRegime();
         };
     }
