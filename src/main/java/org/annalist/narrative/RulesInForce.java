@@ -35,9 +35,6 @@ final class RulesInForce {
                 new Rule("A break is called a step, a change of slope, or both", "each part only when it moves the level "
                         + Terms.number(DecisionRules.MIN_BREAK_CHANGE_PCT) + "\u00A0%; when both do, the simpler by BIC unless"
                         + " two separate lines lower BIC by " + Terms.number(DecisionRules.BREAK_KIND_BIC_MARGIN) + " more"),
-                new Rule("A step is claimed at a change of slope only when", "one line bent at the break without a jump"
-                        + " fits worse, F-test p < " + Terms.number(DecisionRules.ALPHA) + ", both in the values and in"
-                        + " their logs; else the lines are joined there"),
                 new Rule("A break is provisional when", "the regime after it runs to the latest period and is too short"
                         + " to date it: its 95\u00A0% interval reaches the latest period"),
                 new Rule("Shortest regime between breaks", "one seasonal period; "
