@@ -63,7 +63,10 @@ final class BreakAnalysis {
 
     /**
      * What a break changed. A break of a level model is a step. Of a level-and-slope model, a step
-     * is reported only when the gap at the break reaches {@link DecisionRules#MIN_BREAK_CHANGE_PCT}
+     * is reported only when the data carry it against one line bent at the break, on the working
+     * scale and the other, at {@link DecisionRules#ALPHA} (the search then leaves a gap; else it
+     * joins the lines and the gap is 0: {@link org.annalist.analysis.breaks.StepOrBend}), and when
+     * the gap at the break reaches {@link DecisionRules#MIN_BREAK_CHANGE_PCT}
      * and a change of slope only when it carries the lines that far apart within one minimum regime;
      * when both reach it, BIC over the two regimes chooses between parallel lines with a jump and
      * one bent line, and "both" only when separate lines are better by

@@ -199,8 +199,9 @@ final class SectionViews {
     /**
      * A step against the return within a year of the period the return is measured at: without it,
      * "had risen back all the way" would stand beside a lower level that followed. Said with the
-     * level it left, against the level before the episode: "It did not stay there: in October 2022 the
-     * level stepped down by 9.6 %, to about 7.7 % below the level before the fall (fitted level 62,109 just after)."
+     * level it left, against the level before the episode: "It did not stay there: in October 2021 the
+     * level stepped down by 15.2 %, to about 12.0 % below the level before the fall (fitted level 9,120 just after)."
+     * (invented figures). A bend that levels off has no step ({@code BreakKind.SLOPE}) and says nothing here.
      */
     private String stepBack(Episode e) {
         double year = series.frequency().periodsPerYear();

@@ -250,7 +250,9 @@ final class Terms {
                     + m.minimumRegime() + ", then every break checked by " + checked;
             case BAI_PERRON -> "Bai-Perron, changes in " + (m.levelAndSlope() ? "level and slope" : "level")
                     + ", number of breaks by BIC, then reduced until every break passes " + checked
-                    + ", minimum regime " + m.minimumRegime();
+                    + ", minimum regime " + m.minimumRegime()
+                    // StepOrBend: an F-test at the brief's level, in the values and in their logs
+                    + (m.levelAndSlope() ? "; a step only if a bend fits worse" : "");
         };
     }
 

@@ -1,6 +1,5 @@
 package org.annalist.analysis.breaks;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -113,15 +112,28 @@ public final class BreakSearch {
      *                      empty for a level model, whose regimes have no slope
      * @param end           index of the new regime's last period
      * @param endLevel      the new regime's fitted line at its last period, in the series' units
+     * @param stepOrBend    the test of the step against a continuous bend at the same date
+     *                      ({@link StepOrBend}); empty for a level model. When the step is not
+     *                      supported, the break is that bend: the lines of its two regimes are joined
+     *                      there ({@link JoinedLines}), the levels before and after are one value,
+     *                      and {@code changePct} is 0
      */
     public record Break(int start, int earliest, int latest, double levelBefore, double levelAfter, double changePct,
                         Optional<TestResult> test, boolean provisional, double slopeBefore, double slopeAfter,
-                        double divergencePct, Optional<BreakShape> shape, int end, double endLevel) {
+                        double divergencePct, Optional<BreakShape> shape, int end, double endLevel,
+                        Optional<StepOrBend> stepOrBend) {
 
         public Break {
             Objects.requireNonNull(test, "test");
             Objects.requireNonNull(shape, "shape");
+            Objects.requireNonNull(stepOrBend, "stepOrBend");
         }
+
+        /** Whether the break is a bend without a step: its step was not supported ({@link StepOrBend}). */
+        public boolean bentWithoutStep() {
+            return stepOrBend.isPresent() && levelBefore == levelAfter;
+        }
+
     }
 
     /**
@@ -322,13 +334,8 @@ public final class BreakSearch {
             used = best.minimumRegime();
             starts = new Confirmation(y, model, h, log, minimumChangePct, alpha).backward(best);
         }
-        Regimes regimes = new Regimes(y, model, h, log);
-        List<Break> breaks = new ArrayList<>(starts.length);
-        for (int j = 0; j < starts.length; j++) {
-            int from = j == 0 ? 0 : starts[j - 1];
-            int to = j + 1 < starts.length ? starts[j + 1] - 1 : n - 1;
-            breaks.add(regimes.describe(from, starts[j], to, minimumChangePct));
-        }
+        Regimes regimes = new Regimes(y, model, h, log, alpha);
+        List<Break> breaks = regimes.describeAll(starts, minimumChangePct);
         return new Result(method, Optional.of(model), used, breaks,
                 regimes.episodes(breaks, collapsePct, minimumChangePct));
     }

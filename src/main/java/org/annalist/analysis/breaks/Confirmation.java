@@ -87,9 +87,13 @@ final class Confirmation {
     /**
      * The gap between the two regimes' fitted lines at the break instant {@code start − ½} (regimes
      * {@code from..start−1} and {@code start..to}), in % of the level before; on logs,
-     * {@code 100 (e^{after − before} − 1)}.
+     * {@code 100 (e^{after − before} − 1)}. 0 when that gap is no step the data carry
+     * ({@link StepOrBend}): the break is then a bend, as {@link Regimes#describe} reports it.
      */
     private double changePct(int from, int start, int to) {
+        if (bend(from, start, to).isPresent()) {
+            return 0;
+        }
         double before = atBreak(from, start - 1, start);
         double after = atBreak(start, to, start);
         return log ? 100 * (Math.exp(after - before) - 1) : 100 * (after - before) / Math.abs(before);
@@ -97,18 +101,30 @@ final class Confirmation {
 
     /**
      * How far the change of slope carries the lines apart over the minimum regime, in % (0 for
-     * levels). A change of slope counts only between two regimes of at least 1.5 minimum regimes
-     * each: the adjusted series bends around a step over about STL's trend window, 1.5 seasonal
-     * periods and a little more (Cleveland et al. 1990, the default n_t ≥ 1.5 n_p / (1 − 1.5/n_s)),
-     * and a line over a regime that short would read that bend as a slope.
+     * levels, and between regimes too short for a slope to count: {@link Regimes#slopesCount}).
      */
     private double divergencePct(int from, int start, int to) {
-        if (Math.min(start - from, to - start + 1) < Math.ceil(1.5 * h)) {
+        if (!Regimes.slopesCount(h, from, start, to)) {
             return 0;
+        }
+        Optional<StepOrBend> bend = bend(from, start, to);
+        if (bend.isPresent()) {
+            StepOrBend line = bend.get();
+            return new Regimes(y, model, h, log, alpha).divergencePct(line.slopeBefore(), line.slopeAfter(),
+                    line.levelAtBreak());
         }
         double slopeOld = BaiPerron.regimeFit(y, model, from, start - 1, start)[1];
         double slopeNew = BaiPerron.regimeFit(y, model, start, to, start)[1];
-        return new Regimes(y, model, h, log).divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start));
+        return new Regimes(y, model, h, log, alpha).divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start));
+    }
+
+    /** The continuous bend at the break when the two lines' gap is no supported step; empty otherwise or for levels. */
+    private Optional<StepOrBend> bend(int from, int start, int to) {
+        if (model == BaiPerron.Model.LEVEL || !Regimes.slopesCount(h, from, start, to)) {
+            return Optional.empty();
+        }
+        StepOrBend test = StepOrBend.of(y, from, start, to, log);
+        return test.stepSupported(alpha) ? Optional.empty() : Optional.of(test);
     }
 
     private double atBreak(int a, int b, int start) {

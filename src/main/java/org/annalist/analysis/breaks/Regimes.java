@@ -18,26 +18,64 @@ final class Regimes {
     private final BaiPerron.Model model;
     private final int h;
     private final boolean log;
+    private final double alpha;
 
-    Regimes(double[] y, BaiPerron.Model model, int h, boolean log) {
+    /** @param alpha significance level of the test of a step against a bend ({@link StepOrBend}) */
+    Regimes(double[] y, BaiPerron.Model model, int h, boolean log, double alpha) {
         this.y = y;
         this.model = model;
         this.h = h;
         this.log = log;
+        this.alpha = alpha;
+    }
+
+    /**
+     * The confirmed breaks, the new regimes starting at {@code starts}. Each break's gap is tested
+     * against a continuous bend at its date over its two regimes ({@link StepOrBend}); when any is
+     * a bend, the regimes' lines come from one segmented line joined at the bends
+     * ({@link JoinedLines}), else each regime has its own line. Either way a regime between two
+     * breaks gives the "after" of the one and the "before" of the next from its one line.
+     */
+    List<BreakSearch.Break> describeAll(int[] starts, double minimumChangePct) {
+        int m = starts.length;
+        List<Optional<StepOrBend>> tests = new ArrayList<>(m);
+        boolean[] bent = new boolean[m];
+        boolean anyBent = false;
+        for (int j = 0; j < m; j++) {
+            int from = j == 0 ? 0 : starts[j - 1];
+            int to = j + 1 < m ? starts[j + 1] - 1 : y.length - 1;
+            Optional<StepOrBend> test = model == BaiPerron.Model.LEVEL || !slopesCount(h, from, starts[j], to)
+                    ? Optional.empty() : Optional.of(StepOrBend.of(y, from, starts[j], to, log));
+            tests.add(test);
+            bent[j] = test.isPresent() && !test.get().stepSupported(alpha);
+            anyBent |= bent[j];
+        }
+        Optional<JoinedLines> joined = anyBent ? Optional.of(JoinedLines.fit(y, starts, bent)) : Optional.empty();
+        List<BreakSearch.Break> breaks = new ArrayList<>(m);
+        for (int j = 0; j < m; j++) {
+            int from = j == 0 ? 0 : starts[j - 1];
+            int to = j + 1 < m ? starts[j + 1] - 1 : y.length - 1;
+            int start = starts[j];
+            double tau = start - 0.5;
+            int regime = j;
+            double[] old = joined.map(lines -> lines.at(regime, tau)).orElseGet(() -> atBreak(from, start - 1, start));
+            double[] fresh = joined.map(lines -> lines.at(regime + 1, tau)).orElseGet(() -> atBreak(start, to, start));
+            breaks.add(describe(from, start, to, minimumChangePct, old, fresh, bent[j], tests.get(j)));
+        }
+        return breaks;
     }
 
     /**
      * The break with the new regime {@code start..to} after the old regime {@code from..start−1}.
-     * Both regimes' fitted lines are read at the break instant τ = start − ½ (between the old
-     * regime's last period and the new regime's first): the levels before and after are the two
-     * lines there, so the step is the gap between them at one date; a regime between two breaks
-     * gives the "after" of the one and the "before" of the next from its one line.
+     * Both regimes' fitted lines ({@code old}, {@code fresh}: value at the break instant τ = start − ½
+     * and slope per period) are read at τ, between the old regime's last period and the new
+     * regime's first: the levels before and after are the two lines there, so the step is the gap
+     * between them at one date. A bend has one level there, and no step.
      */
-    BreakSearch.Break describe(int from, int start, int to, double minimumChangePct) {
-        double[] old = atBreak(from, start - 1, start);
-        double[] fresh = atBreak(start, to, start);
+    private BreakSearch.Break describe(int from, int start, int to, double minimumChangePct, double[] old,
+                                       double[] fresh, boolean bent, Optional<StepOrBend> stepOrBend) {
         double before = old[0];
-        double after = fresh[0];
+        double after = bent ? before : fresh[0];   // one joined line: the same level, not two roundings of it
         double sdBefore = residualSd(from, start - 1);
         double sdAfter = residualSd(start, to);
         // [3] Δ, σ₁, σ₂ and the room for the date: back to the old regime's start, on to the new regime's end
@@ -46,7 +84,7 @@ final class Regimes {
         Optional<TestResult> local = Confirmation.localTest(y, model, h, from, start, to);
         double levelBefore = units(before);
         double levelAfter = units(after);
-        double changePct = 100 * (levelAfter - levelBefore) / Math.abs(levelBefore);
+        double changePct = bent ? 0 : 100 * (levelAfter - levelBefore) / Math.abs(levelBefore);
         // slopes in the series' units per period at the break: on logs d e^{a+bt}/dt = b e^{a+bt}
         double slopeBefore = log ? old[1] * levelBefore : old[1];
         double slopeAfter = log ? fresh[1] * levelAfter : fresh[1];
@@ -65,7 +103,7 @@ final class Regimes {
         Optional<BreakShape> shape = model == BaiPerron.Model.LEVEL ? Optional.empty()
                 : Optional.of(BreakShape.of(y, from, start, to));
         return new BreakSearch.Break(start, earliest, latest, levelBefore, levelAfter, changePct, local, provisional,
-                slopeBefore, slopeAfter, divergencePct(old[1], fresh[1], before), shape, to, endLevel);
+                slopeBefore, slopeAfter, divergencePct(old[1], fresh[1], before), shape, to, endLevel, stepOrBend);
     }
 
     /**
@@ -105,6 +143,18 @@ final class Regimes {
 
     /** 95 % point of χ² with one degree of freedom. */
     private static final double CHI2_1_95 = 3.841458820694124;
+
+    /**
+     * Whether a change of slope counts between the regimes {@code from..start−1} and
+     * {@code start..to}: only when both have at least 1.5 minimum regimes. The adjusted series
+     * bends around a step over about STL's trend window, 1.5 seasonal periods and a little more
+     * (Cleveland et al. 1990, the default n_t ≥ 1.5 n_p / (1 − 1.5/n_s)), and a line over a regime
+     * that short would read that bend as a slope. Nor is a bend then weighed against the step
+     * ({@link StepOrBend}): it is no credible description there.
+     */
+    static boolean slopesCount(int h, int from, int start, int to) {
+        return Math.min(start - from, to - start + 1) >= Math.ceil(1.5 * h);
+    }
 
     /** Intercept at the break instant start − ½ and slope per period of the fit over {@code a..b}. */
     private double[] atBreak(int a, int b, int start) {

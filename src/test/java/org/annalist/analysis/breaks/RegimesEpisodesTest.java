@@ -13,13 +13,14 @@ import org.junit.jupiter.api.Test;
  */
 class RegimesEpisodesTest {
 
-    private static final Regimes REGIMES = new Regimes(new double[0], BaiPerron.Model.LEVEL_AND_SLOPE, 12, false);
+    private static final Regimes REGIMES = new Regimes(new double[0], BaiPerron.Model.LEVEL_AND_SLOPE, 12, false,
+            0.05);
 
     /** A break as the regimes' fit describes it; only what {@link Regimes#episodes} reads is set. */
     private static BreakSearch.Break fitted(int start, double before, double after, double slopeBefore,
                                             double slopeAfter, int end, double endLevel) {
         return new BreakSearch.Break(start, start, start, before, after, 100 * (after - before) / before,
-                Optional.empty(), false, slopeBefore, slopeAfter, 0, Optional.empty(), end, endLevel);
+                Optional.empty(), false, slopeBefore, slopeAfter, 0, Optional.empty(), end, endLevel, Optional.empty());
     }
 
     @Test
