@@ -35,10 +35,19 @@ public final class SeriesFiles {
     private final Map<Job.Input, ReadFile> data = new HashMap<>();
     private final Map<Path, List<Holiday>> holidays = new HashMap<>();
     private final Function<Path, String> names;
+    private final boolean digests;
 
     /** Files named in messages and briefs as the user gave their paths. */
     public SeriesFiles() {
         this(Path::toString);
+    }
+
+    /**
+     * Files named as the user gave their paths and read without their SHA-256 (which only a brief's
+     * provenance states), for analyses that write no brief ({@code analyze}).
+     */
+    public static SeriesFiles withoutDigests() {
+        return new SeriesFiles(Path::toString, false);
     }
 
     /**
@@ -47,7 +56,12 @@ public final class SeriesFiles {
      * line names a file of that name in the current folder.
      */
     public SeriesFiles(Function<Path, String> names) {
+        this(names, true);
+    }
+
+    private SeriesFiles(Function<Path, String> names, boolean digests) {
         this.names = Objects.requireNonNull(names, "names");
+        this.digests = digests;
     }
 
     /** How messages and briefs name {@code file}. */
@@ -63,7 +77,8 @@ public final class SeriesFiles {
      */
     public synchronized ReadFile read(Job.Input input) {
         return data.computeIfAbsent(input, in -> {
-            ReadResult read = new SeriesFileReader(in.readOptions()).read(in.file(), shownAs(in.file()));
+            SeriesFileReader reader = new SeriesFileReader(in.readOptions());
+            ReadResult read = (digests ? reader : reader.withoutDigest()).read(in.file(), shownAs(in.file()));
             return new ReadFile(read, DerivedSeries.of(read.series()));
         });
     }

@@ -9,6 +9,7 @@ import org.annalist.brief.BriefPipeline;
 import org.annalist.brief.Job;
 import org.annalist.brief.SelectionProblem;
 import org.annalist.brief.SeriesChoice;
+import org.annalist.brief.SeriesFiles;
 import org.annalist.brief.Reports;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -58,8 +59,10 @@ final class AnalyzeCommand implements Callable<Integer> {
         // series holds their notes rather than their findings
         BriefPipeline.Rendered<?> rendered;
         try {
-            rendered = format == Format.json ? new BriefPipeline().rendered(job(), findings -> findings)
-                    : new BriefPipeline().rendered(job(), Reports::notes);
+            // no brief, so no file digest to state: the files are read without computing it
+            BriefPipeline pipeline = new BriefPipeline(SeriesFiles.withoutDigests());
+            rendered = format == Format.json ? pipeline.rendered(job(), findings -> findings)
+                    : pipeline.rendered(job(), Reports::notes);
         } catch (SelectionProblem problem) {
             throw SelectionWords.forAnalyze(problem);
         }

@@ -9,7 +9,8 @@ import org.annalist.series.Series;
  * appendix states.
  *
  * @param file          the file as the user named it
- * @param sha256        hex SHA-256 of the file's bytes
+ * @param sha256        hex SHA-256 of the file's bytes, or {@link #NOT_DIGESTED} when the reading was asked not to
+ *                      compute it ({@link SeriesFileReader#withoutDigest}); {@link #sha256()} refuses that
  * @param rowsRead      data rows read (header, titles and notes not counted)
  * @param layout        {@code wide} (a column per series) or {@code long} (a column naming the series)
  * @param periodFormat  the period format(s) as written, e.g. {@code YYYY-MM}
@@ -37,7 +38,11 @@ public record ReadResult(String file, String sha256, String charset, char delimi
     public record Sheet(String format, String name, int number) {
     }
 
+    /** The {@code sha256} of a file read without its digest. */
+    public static final String NOT_DIGESTED = "";
+
     public ReadResult {
+        java.util.Objects.requireNonNull(sha256, "sha256");
         series = List.copyOf(series);
         warnings = List.copyOf(warnings);
         java.util.Objects.requireNonNull(sheet, "sheet");
@@ -68,6 +73,25 @@ public record ReadResult(String file, String sha256, String charset, char delimi
                       SeriesKeys keys) {
         this(file, sha256, charset, delimiter, rowsRead, layout, periodFormat, dateOrder, decimalMark, aggregation, series,
                 warnings, Optional.empty(), keys);
+    }
+
+    /**
+     * Hex SHA-256 of the file's bytes, which a brief's provenance states.
+     *
+     * @throws IllegalStateException when the file was read without it ({@link SeriesFileReader#withoutDigest}):
+     *                               a brief must not state a digest nobody computed
+     */
+    @Override
+    public String sha256() {
+        if (sha256.equals(NOT_DIGESTED)) {
+            throw new IllegalStateException(file + " was read without its SHA-256");
+        }
+        return sha256;
+    }
+
+    /** True when the file's SHA-256 was computed as it was read. */
+    public boolean digested() {
+        return !sha256.equals(NOT_DIGESTED);
     }
 
     /** The delimiter in words: {@code comma}, {@code semicolon}, {@code tab} or {@code bar}. */

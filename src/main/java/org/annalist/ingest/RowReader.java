@@ -130,7 +130,7 @@ final class RowReader {
 
     private void settleLayout(boolean wholeFile) {
         List<Row> rows = head.rows();
-        shape = TableShape.locate(rows, wholeFile, log);
+        shape = TableShape.locate(head, wholeFile, log);
         periodColumn = shape.periodColumn();
         valueColumns = shape.with(Role.VALUE);
         if (valueColumns.isEmpty()) {

@@ -27,9 +27,25 @@ import org.annalist.series.Series;
 public final class SeriesFileReader {
 
     private final ReadOptions options;
+    private final boolean digest;
 
+    /** A reader that computes each file's SHA-256 as it reads it, for a brief's provenance. */
     public SeriesFileReader(ReadOptions options) {
+        this(options, true);
+    }
+
+    private SeriesFileReader(ReadOptions options, boolean digest) {
         this.options = options;
+        this.digest = digest;
+    }
+
+    /**
+     * This reader without the SHA-256 of a delimited text file, for commands that state no
+     * provenance ({@code analyze}, {@code check}): its result's digest is
+     * {@link ReadResult#NOT_DIGESTED}. A workbook, read whole anyway, still has its digest.
+     */
+    public SeriesFileReader withoutDigest() {
+        return new SeriesFileReader(options, false);
     }
 
     /**
@@ -79,7 +95,7 @@ public final class SeriesFileReader {
 
     private ReadResult read(String fileName, Supplier<InputStream> bytes, long size, boolean windows1252) {
         ProblemLog log = new ProblemLog(fileName);
-        try (InputStream in = bytes.get(); TextDecoding.Text text = TextDecoding.open(in, windows1252, log)) {
+        try (InputStream in = bytes.get(); TextDecoding.Text text = TextDecoding.open(in, windows1252, log, digest)) {
             try {
                 return read(log, text, size);
             } catch (DataProblemException problem) {

@@ -51,7 +51,7 @@ final class TextDecoding {
         }
     }
 
-    /** The text of a stream, decoded as it is read, and the SHA-256 of its bytes. */
+    /** The text of a stream, decoded as it is read, and the SHA-256 of its bytes when it was asked for. */
     static final class Text implements Closeable {
         private final InputStream bytes;
         private final MessageDigest digest;
@@ -75,8 +75,14 @@ final class TextDecoding {
             return charsetName;
         }
 
-        /** Hex SHA-256 of all the bytes (those not yet read are read for it). */
+        /**
+         * Hex SHA-256 of all the bytes (those not yet read are read for it), or
+         * {@link ReadResult#NOT_DIGESTED} when the text was opened without a digest.
+         */
         String sha256() throws IOException {
+            if (digest == null) {
+                return ReadResult.NOT_DIGESTED;
+            }
             bytes.transferTo(OutputStream.nullOutputStream());
             return HexFormat.of().formatHex(digest.digest());
         }
@@ -103,16 +109,21 @@ final class TextDecoding {
     /**
      * Opens the text of {@code stream}: a byte-order mark honoured, else UTF-8 (the reader throws
      * {@link NotUtf8} on the first byte that is not), or Windows-1252 when {@code windows1252} (after
-     * such a failure), which is said in a warning.
+     * such a failure), which is said in a warning. With {@code digest}, the SHA-256 of the bytes is
+     * computed as they are read ({@link Text#sha256}); without, it is not (a third of a second of
+     * C1-compiled work for 50 MB, which only a brief's provenance states).
      */
-    static Text open(InputStream stream, boolean windows1252, ProblemLog log) throws IOException {
-        MessageDigest digest;
-        try {
-            digest = MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("every Java platform has SHA-256", e);
+    static Text open(InputStream stream, boolean windows1252, ProblemLog log, boolean digest) throws IOException {
+        MessageDigest sha256 = null;
+        if (digest) {
+            try {
+                sha256 = MessageDigest.getInstance("SHA-256");
+            } catch (NoSuchAlgorithmException e) {
+                throw new IllegalStateException("every Java platform has SHA-256", e);
+            }
         }
-        BufferedInputStream in = new BufferedInputStream(new DigestInputStream(stream, digest), 1 << 16);
+        BufferedInputStream in = new BufferedInputStream(sha256 == null ? stream : new DigestInputStream(stream, sha256),
+                1 << 16);
         in.mark(4096);
         byte[] probe = in.readNBytes(4096);
         in.reset();
@@ -125,7 +136,7 @@ final class TextDecoding {
                 throw log.fatal(0, 0, "the file starts with a " + bomCharset.name()
                         + " byte-order mark but is not valid " + bomCharset.name() + "; expected text in that encoding");
             });
-            return new Text(in, digest, strict, bomCharset.name() + " with byte-order mark", false);
+            return new Text(in, sha256, strict, bomCharset.name() + " with byte-order mark", false);
         }
         for (int i = 0; i < probe.length; i++) {
             if (probe[i] == 0) {
@@ -136,12 +147,12 @@ final class TextDecoding {
         if (windows1252) {
             log.warn(0, 0, "the file is not valid UTF-8; read it as Windows-1252. "
                     + "Save it as UTF-8 if accented names look wrong");
-            return new Text(in, digest, new InputStreamReader(in, Charset.forName("windows-1252")), "windows-1252", false);
+            return new Text(in, sha256, new InputStreamReader(in, Charset.forName("windows-1252")), "windows-1252", false);
         }
         Reader utf8 = checked(new InputStreamReader(in, reporting(StandardCharsets.UTF_8)), () -> {
             throw new NotUtf8();
         });
-        return new Text(in, digest, utf8, "UTF-8", true);
+        return new Text(in, sha256, utf8, "UTF-8", true);
     }
 
     private static CharsetDecoder reporting(Charset charset) {

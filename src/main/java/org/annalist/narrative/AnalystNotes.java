@@ -260,6 +260,9 @@ public final class AnalystNotes {
 
     /** A number that could not be computed reads "n/a" (the JSON has null), never NaN or Infinity. */
     private static String notComputed(String text) {
+        if (!text.contains("NaN") && !text.contains("Infinity")) {
+            return text;   // nearly every line: the pattern would find nothing
+        }
         return NOT_A_NUMBER.matcher(text).replaceAll("n/a");
     }
 

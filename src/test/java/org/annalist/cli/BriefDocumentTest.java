@@ -77,6 +77,14 @@ class BriefDocumentTest {
         assertThat(text).contains(f.series().name());
     }
 
+    @Test
+    void theAppendixStatesTheSha256OfTheFileRead() throws Exception {
+        // the digest computed here from the file's bytes (derived in the test), as the brief must state it
+        String sha256 = java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest(Files.readAllBytes(Path.of(NIGHTS))));
+        assertThat(totalFacts.text().replaceAll("\\s+", "")).contains("SHA-256ofthefile" + sha256);
+    }
+
     /** The outlook page states the findings' forecasts, rounded to three significant digits, and the caution. */
     @Test
     void theOutlookPageStatesTheForecastsTheirAccuracyAndTheCaution() {

@@ -1,6 +1,7 @@
 package org.annalist.ingest;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.catchThrowableOfType;
 
 import java.nio.charset.Charset;
@@ -90,6 +91,23 @@ class StreamingReaderTest {
         assertThat(read.rowsRead()).isEqualTo(90_000);
         assertThat(read.series().get(0).size()).isEqualTo(90_000);
         assertThat(read.sha256()).isEqualTo(java.util.HexFormat.of().formatHex(sha256(months(90_000, "7"))));
+    }
+
+    @Test
+    void withoutTheDigestTheSameSeriesAreReadAndNoDigestCanBeStated() {
+        String text = months(6_000, "7") + "2400-01,\"2,5\"\n";
+        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
+        ReadResult digested = new SeriesFileReader(ReadOptions.defaults()).read("in.csv", bytes);
+        ReadResult plain = new SeriesFileReader(ReadOptions.defaults()).withoutDigest().read("in.csv", bytes);
+
+        assertThat(plain.series()).isEqualTo(digested.series());
+        assertThat(plain.rowsRead()).isEqualTo(digested.rowsRead());
+        assertThat(plain.decimalMark()).isEqualTo(digested.decimalMark());
+        assertThat(digested.digested()).isTrue();
+        assertThat(digested.sha256()).isEqualTo(java.util.HexFormat.of().formatHex(sha256(text)));
+        assertThat(plain.digested()).isFalse();
+        // a brief must not state a digest nobody computed
+        assertThatThrownBy(plain::sha256).isInstanceOf(IllegalStateException.class).hasMessageContaining("in.csv");
     }
 
     private static byte[] sha256(String text) {

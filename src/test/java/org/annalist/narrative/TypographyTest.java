@@ -26,6 +26,29 @@ class TypographyTest {
                 .isEqualTo("year to date 0.0 %; rolling year 0.0 %; Jan +0.05 %, Feb \u22120.0012, x 0.");
     }
 
+    /**
+     * The scan that sets minus signs does what the pattern it replaced did,
+     * {@code (?<![\p{L}\p{N}_\-])-(?=\d)} replaced by the true minus, on random sentences of the
+     * characters that matter to it (letters and digits of other scripts, a letter outside the basic
+     * plane, underscores, points, signs); the pattern is the reference, kept here.
+     */
+    @Test
+    void theMinusSignScanAgreesWithThePatternItReplaced() {
+        java.util.regex.Pattern reference = java.util.regex.Pattern.compile("(?<![\\p{L}\\p{N}_\\-])-(?=\\d)");
+        String[] pieces = {"-", "-", "-", "0", "7", "a", "Z", "é", "\u0663", "\u2163", "\u00B2", "_", ".", " ", "(", "e",
+            "\u2212", "+", "%", "\uD835\uDC00", "2024-03", "x-1"};
+        java.util.Random random = new java.util.Random(5);
+        for (int trial = 0; trial < 20_000; trial++) {
+            StringBuilder text = new StringBuilder();
+            for (int i = random.nextInt(12); i > 0; i--) {
+                text.append(pieces[random.nextInt(pieces.length)]);
+            }
+            String sentence = text.toString();
+            assertThat(Typography.minusSigns(sentence)).as(sentence)
+                    .isEqualTo(reference.matcher(sentence).replaceAll("\u2212"));
+        }
+    }
+
     @Test
     void printedTextAlsoJoinsANumberToItsPercentSign() {
         assertThat(Typography.printed("March and April together: -4.0 % on a year earlier; 95 % of days; +0.0 %."))

@@ -109,16 +109,17 @@ public final class SenSlope {
 
     /** Pairs of observed values {@code (i, j)} that lie a multiple of {@code stride} apart. */
     public static long pairs(double[] x, int stride) {
-        int n = x.length;
-        long count = 0;
-        for (int i = 0; i < n; i++) {
+        // two positions lie a multiple of the stride apart when they leave the same remainder: each
+        // remainder's m observed values make m(m − 1)/2 pairs
+        long[] observed = new long[stride];
+        for (int i = 0; i < x.length; i++) {
             if (!Double.isNaN(x[i])) {
-                for (int j = i + stride; j < n; j += stride) {
-                    if (!Double.isNaN(x[j])) {
-                        count++;
-                    }
-                }
+                observed[i % stride]++;
             }
+        }
+        long count = 0;
+        for (long m : observed) {
+            count += m * (m - 1) / 2;
         }
         return count;
     }

@@ -72,6 +72,25 @@ class TrendTestsTest {
     }
 
     @Test
+    void pairsCountsEveryPairAMultipleOfTheStrideApartWithBothValuesObserved() {
+        java.util.Random random = new java.util.Random(17);
+        for (int trial = 0; trial < 200; trial++) {
+            double[] x = new double[random.nextInt(300)];
+            for (int i = 0; i < x.length; i++) {
+                x[i] = random.nextInt(5) == 0 ? Double.NaN : random.nextGaussian();
+            }
+            int stride = 1 + random.nextInt(13);
+            long expected = 0;   // counted pair by pair (derived in the test)
+            for (int i = 0; i < x.length; i++) {
+                for (int j = i + stride; j < x.length; j += stride) {
+                    expected += Double.isNaN(x[i]) || Double.isNaN(x[j]) ? 0 : 1;
+                }
+            }
+            assertThat(SenSlope.pairs(x, stride)).as("stride %d, %d values", stride, x.length).isEqualTo(expected);
+        }
+    }
+
+    @Test
     void aSeasonalSlopeOverTooManyPairsIsNotTried() {
         // 6,400 values one season apart (period 1): 20,476,800 pairs, above SenSlope.MAX_PAIRS
         double[] x = new double[6400];
