@@ -33,12 +33,12 @@ class OutlookTest {
      * Eight public series with the last two seasons held out (forecast_accuracy_holdout8.csv, made by
      * make-holdout8.R with R 4.2.2 and forecast 8.20). The goal is a mean MASE at most R's automatic
      * ets() (1.084 over the eight rows); the mean of the eight rows' MASE of the mean of R's ets,
-     * auto.arima and thetaf is 1.214. Measured in December 2026: 1.128, ahead of that mean of three,
-     * behind ets on USAccDeaths (0.609 against 0.431, two years of training values) and JohnsonJohnson
-     * (2.217 against 1.856); 1.142 since quarterly ETS models are fitted by R's simplex search
-     * (JohnsonJohnson 2.290, austres 0.061 → 0.086, UKgas 2.670 → 2.680, while the M3 quarterly
-     * outlook went from 1.078 to 1.060). This pins that the outlook stays within 6 % of R's ets and
-     * below the mean of three while that gap is open.
+     * auto.arima and thetaf is 1.214. Measured in December 2026: 1.142 with the ARIMA member searched
+     * by conditional sum of squares on seasonal data; 1.128 since it is searched by exact likelihood
+     * as R's default does for these lengths (USAccDeaths 0.609 → 0.523 against ets's 0.431, two
+     * years of training values; ldeaths 0.569 → 0.536), still behind ets on JohnsonJohnson (2.292
+     * against 1.856). This pins that the outlook stays within 5 % of R's ets and below the mean of
+     * three while that gap is open.
      */
     @Test
     void onEightPublicSeriesTheOutlookStaysWithinFivePercentOfRsEtsAndBelowTheMeanOfThree() {
@@ -57,7 +57,7 @@ class OutlookTest {
             ets += split.rValue("ets_MASE") / AgainstR.EIGHT.length;
             mean3 += split.rValue("mean3_MASE") / AgainstR.EIGHT.length;
         }
-        assertThat(ours).as("%s; R's mean of three %.3f", each, mean3).isLessThanOrEqualTo(1.06 * ets)
+        assertThat(ours).as("%s; R's mean of three %.3f", each, mean3).isLessThanOrEqualTo(1.05 * ets)
                 .isLessThan(mean3);
     }
 
