@@ -9,7 +9,9 @@ package org.annalist.analysis.forecast;
  * differencing block from a diffuse prior of variance κ = 10⁶. Innovations whose variance exceeds
  * 10⁴ (those absorbed by the diffuse prior) are left out of the likelihood, as in R. Everything is
  * in units of the innovation variance σ², which the likelihood concentrates out:
- * −2 log L = n log(2π σ̂²) + n + Σ log Fₜ with σ̂² = Σ vₜ²/Fₜ / n [2, eq. 3.2].
+ * −2 log L = n log(2π σ̂²) + n + Σ log Fₜ with σ̂² = Σ vₜ²/Fₜ / n [2, eq. 3.2]. The maximum-likelihood
+ * search uses {@link ArmaLikelihood}, the limit of this likelihood as κ grows, at a fraction of
+ * the cost; this filter gives the reported likelihood, the residuals and the forecasts' state.
  *
  * <h2>References</h2>
  * <ol>
