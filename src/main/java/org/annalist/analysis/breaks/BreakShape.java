@@ -1,13 +1,5 @@
 package org.annalist.analysis.breaks;
 
-import java.util.ArrayList;
-import java.util.List;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.QRDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.RealVector;
-
 /**
  * What a break in a segmented line changed, as evidence for the words: the span of its two regimes
  * is fitted three ways, each a linear regression with the break instant τ between the old regime's
@@ -41,46 +33,23 @@ public record BreakShape(double bicStep, double bicSlope, double bicBoth) {
      * distinct times on each side the designs have full rank.
      */
     static BreakShape of(double[] y, int from, int start, int to) {
-        double tau = start - 0.5;
-        List<double[]> rows = new ArrayList<>();
-        List<Double> values = new ArrayList<>();
-        int before = 0;
-        int after = 0;
-        for (int i = from; i <= to; i++) {
-            if (!Double.isNaN(y[i])) {
-                double t = i - tau;   // centred at the break: keeps the design well conditioned
-                double d = i >= start ? 1 : 0;
-                rows.add(new double[] {1, t, d, t * d});
-                values.add(y[i]);
-                before += i < start ? 1 : 0;
-                after += i >= start ? 1 : 0;
-            }
-        }
-        if (before < 2 || after < 2) {
+        SpanDesign design = SpanDesign.of(y, from, start, to);
+        if (design.before() < 2 || design.after() < 2) {
             // a line needs two observed values on each side; else no description can be compared
             return new BreakShape(Double.NaN, Double.NaN, Double.NaN);
         }
-        return new BreakShape(bic(rows, values, new int[] {0, 1, 2}), bic(rows, values, new int[] {0, 1, 3}),
-                bic(rows, values, new int[] {0, 1, 2, 3}));
+        return new BreakShape(bic(design, new int[] {SpanDesign.INTERCEPT, SpanDesign.SLOPE, SpanDesign.STEP}),
+                bic(design, new int[] {SpanDesign.INTERCEPT, SpanDesign.SLOPE, SpanDesign.SLOPE_CHANGE}),
+                bic(design, new int[] {SpanDesign.INTERCEPT, SpanDesign.SLOPE, SpanDesign.STEP, SpanDesign.SLOPE_CHANGE}));
     }
 
-    private static double bic(List<double[]> rows, List<Double> values, int[] columns) {
-        int n = rows.size();
+    private static double bic(SpanDesign design, int[] columns) {
+        int n = design.size();
         int k = columns.length;
         if (n <= k) {
             return Double.NaN;
         }
-        RealMatrix x = new Array2DRowRealMatrix(n, k);
-        RealVector v = new ArrayRealVector(n);
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < k; j++) {
-                x.setEntry(i, j, rows.get(i)[columns[j]]);
-            }
-            v.setEntry(i, values.get(i));
-        }
-        RealVector beta = new QRDecomposition(x, 1e-12).getSolver().solve(v);
-        RealVector residuals = v.subtract(x.operate(beta));
         // [1] BIC; a perfect fit has no finite score, so its RSS is floored at a negligible value
-        return n * Math.log(Math.max(residuals.dotProduct(residuals), 1e-300) / n) + k * Math.log(n);
+        return n * Math.log(Math.max(design.rss(columns, null), 1e-300) / n) + k * Math.log(n);
     }
 }

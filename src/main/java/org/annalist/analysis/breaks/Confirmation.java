@@ -42,8 +42,8 @@ final class Confirmation {
             for (int j = 0; j < starts.length && all; j++) {
                 int from = j == 0 ? 0 : starts[j - 1];
                 int to = j + 1 < starts.length ? starts[j + 1] - 1 : y.length - 1;
-                all = Math.max(Math.abs(changePct(from, starts[j], to)), Math.abs(divergencePct(from, starts[j], to)))
-                        >= minimumChangePct && localVerdict(from, starts[j], to) == SupF.Verdict.REJECTS;
+                all = change(from, starts[j], to) >= minimumChangePct
+                        && localVerdict(from, starts[j], to) == SupF.Verdict.REJECTS;
             }
             if (all) {
                 return starts;
@@ -67,8 +67,7 @@ final class Confirmation {
             for (int j = 0; j < starts.size(); j++) {
                 int from = j == 0 ? 0 : starts.get(j - 1);
                 int to = j + 1 < starts.size() ? starts.get(j + 1) - 1 : y.length - 1;
-                double change = Math.max(Math.abs(changePct(from, starts.get(j), to)),
-                        Math.abs(divergencePct(from, starts.get(j), to)));
+                double change = change(from, starts.get(j), to);
                 boolean holds = change >= minimumChangePct
                         && localVerdict(from, starts.get(j), to) == SupF.Verdict.REJECTS;
                 if (!holds && change < weakestChange) {
@@ -85,13 +84,23 @@ final class Confirmation {
     }
 
     /**
+     * How much a break changes, in %: the larger of its step and of how far its change of slope
+     * carries the lines apart, with its step tested against a bend once ({@link StepOrBend}).
+     */
+    private double change(int from, int start, int to) {
+        Optional<StepOrBend> bend = Regimes.stepTest(y, model, h, log, from, start, to)
+                .filter(test -> !test.stepSupported(alpha));
+        return Math.max(Math.abs(changePct(from, start, to, bend)), Math.abs(divergencePct(from, start, to, bend)));
+    }
+
+    /**
      * The gap between the two regimes' fitted lines at the break instant {@code start − ½} (regimes
      * {@code from..start−1} and {@code start..to}), in % of the level before; on logs,
-     * {@code 100 (e^{after − before} − 1)}. 0 when that gap is no step the data carry
-     * ({@link StepOrBend}): the break is then a bend, as {@link Regimes#describe} reports it.
+     * {@code 100 (e^{after − before} − 1)}. 0 when that gap is no step the data carry ({@code bend}
+     * present): the break is then a bend, as {@link Regimes#describeAll} reports it.
      */
-    private double changePct(int from, int start, int to) {
-        if (bend(from, start, to).isPresent()) {
+    private double changePct(int from, int start, int to, Optional<StepOrBend> bend) {
+        if (bend.isPresent()) {
             return 0;
         }
         double before = atBreak(from, start - 1, start);
@@ -101,30 +110,21 @@ final class Confirmation {
 
     /**
      * How far the change of slope carries the lines apart over the minimum regime, in % (0 for
-     * levels, and between regimes too short for a slope to count: {@link Regimes#slopesCount}).
+     * levels, and between regimes too short for a slope to count: {@link Regimes#slopesCount}); the
+     * bent line's slopes where the break is a bend.
      */
-    private double divergencePct(int from, int start, int to) {
+    private double divergencePct(int from, int start, int to, Optional<StepOrBend> bend) {
         if (!Regimes.slopesCount(h, from, start, to)) {
             return 0;
         }
-        Optional<StepOrBend> bend = bend(from, start, to);
+        Regimes regimes = new Regimes(y, model, h, log, alpha);
         if (bend.isPresent()) {
             StepOrBend line = bend.get();
-            return new Regimes(y, model, h, log, alpha).divergencePct(line.slopeBefore(), line.slopeAfter(),
-                    line.levelAtBreak());
+            return regimes.divergencePct(line.slopeBefore(), line.slopeAfter(), line.levelAtBreak());
         }
         double slopeOld = BaiPerron.regimeFit(y, model, from, start - 1, start)[1];
         double slopeNew = BaiPerron.regimeFit(y, model, start, to, start)[1];
-        return new Regimes(y, model, h, log, alpha).divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start));
-    }
-
-    /** The continuous bend at the break when the two lines' gap is no supported step; empty otherwise or for levels. */
-    private Optional<StepOrBend> bend(int from, int start, int to) {
-        if (model == BaiPerron.Model.LEVEL || !Regimes.slopesCount(h, from, start, to)) {
-            return Optional.empty();
-        }
-        StepOrBend test = StepOrBend.of(y, from, start, to, log);
-        return test.stepSupported(alpha) ? Optional.empty() : Optional.of(test);
+        return regimes.divergencePct(slopeOld, slopeNew, atBreak(from, start - 1, start));
     }
 
     private double atBreak(int a, int b, int start) {

@@ -44,8 +44,7 @@ final class Regimes {
         for (int j = 0; j < m; j++) {
             int from = j == 0 ? 0 : starts[j - 1];
             int to = j + 1 < m ? starts[j + 1] - 1 : y.length - 1;
-            Optional<StepOrBend> test = model == BaiPerron.Model.LEVEL || !slopesCount(h, from, starts[j], to)
-                    ? Optional.empty() : Optional.of(StepOrBend.of(y, from, starts[j], to, log));
+            Optional<StepOrBend> test = stepTest(y, model, h, log, from, starts[j], to);
             tests.add(test);
             bent[j] = test.isPresent() && !test.get().stepSupported(alpha);
             anyBent |= bent[j];
@@ -154,6 +153,16 @@ final class Regimes {
      */
     static boolean slopesCount(int h, int from, int start, int to) {
         return Math.min(start - from, to - start + 1) >= Math.ceil(1.5 * h);
+    }
+
+    /**
+     * The test of the step against a bend at {@code start} ({@link StepOrBend}) where a bend is a
+     * credible description: lines, not levels, over regimes long enough for slopes to count.
+     */
+    static Optional<StepOrBend> stepTest(double[] y, BaiPerron.Model model, int h, boolean log, int from, int start,
+                                         int to) {
+        return model == BaiPerron.Model.LEVEL || !slopesCount(h, from, start, to) ? Optional.empty()
+                : Optional.of(StepOrBend.of(y, from, start, to, log));
     }
 
     /** Intercept at the break instant start − ½ and slope per period of the fit over {@code a..b}. */

@@ -1,14 +1,7 @@
 package org.annalist.analysis.breaks;
 
-import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.List;
 import org.apache.commons.math3.distribution.FDistribution;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.QRDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.RealVector;
 
 /**
  * Whether the gap between two regimes' fitted lines at a break is a step the data carry, or what a
@@ -104,43 +97,21 @@ public record StepOrBend(double pWorking, double pOther, double levelAtBreak, do
     /** Both least-squares fits of one scale: the bent line's coefficients and the step's p-value. */
     private record Fit(double[] bend, double pStep) {
 
+        private static final int[] BENT = {SpanDesign.INTERCEPT, SpanDesign.SLOPE, SpanDesign.SLOPE_CHANGE};
+        private static final int[] LINES = {SpanDesign.INTERCEPT, SpanDesign.SLOPE, SpanDesign.STEP,
+            SpanDesign.SLOPE_CHANGE};
+
         static Fit of(double[] v, int start) {
-            double tau = start - 0.5;
-            List<double[]> rows = new ArrayList<>();
-            List<Double> values = new ArrayList<>();
-            int before = 0;
-            int after = 0;
-            for (int i = 0; i < v.length; i++) {
-                if (!Double.isNaN(v[i])) {
-                    double t = i - tau;   // centred at τ: the bent line's intercept is its value there
-                    double d = i >= start ? 1 : 0;
-                    rows.add(new double[] {1, t, t * d, d});
-                    values.add(v[i]);
-                    before += i < start ? 1 : 0;
-                    after += i >= start ? 1 : 0;
-                }
-            }
-            if (before < 2 || after < 2) {
+            SpanDesign design = SpanDesign.of(v, 0, start, v.length - 1);
+            if (design.before() < 2 || design.after() < 2) {
                 return new Fit(new double[] {Double.NaN, Double.NaN, Double.NaN}, Double.NaN);
             }
             double[] bent = new double[3];
-            rss(rows, values, 3, bent);
-            double rho = lagOneAutocorrelation(rows, values);
-            List<double[]> whitenedRows = new ArrayList<>();
-            List<Double> whitenedValues = new ArrayList<>();
-            // [5] Prais–Winsten: the first row scaled by √(1 − ρ²), each later one less ρ times the one before
-            double first = Math.sqrt(1 - rho * rho);
-            for (int i = 0; i < rows.size(); i++) {
-                double[] row = new double[4];
-                for (int j = 0; j < 4; j++) {
-                    row[j] = i == 0 ? first * rows.get(0)[j] : rows.get(i)[j] - rho * rows.get(i - 1)[j];
-                }
-                whitenedRows.add(row);
-                whitenedValues.add(i == 0 ? first * values.get(0) : values.get(i) - rho * values.get(i - 1));
-            }
-            double rssBend = rss(whitenedRows, whitenedValues, 3, new double[3]);
-            double rssLines = rss(whitenedRows, whitenedValues, 4, new double[4]);
-            int df = values.size() - 4;
+            design.rss(BENT, bent);
+            SpanDesign whitened = design.whitened(lagOneAutocorrelation(design));   // [5]
+            double rssBend = whitened.rss(BENT, null);
+            double rssLines = whitened.rss(LINES, null);
+            int df = design.size() - 4;
             if (df < 1) {
                 return new Fit(bent, Double.NaN);
             }
@@ -155,15 +126,19 @@ public record StepOrBend(double pWorking, double pOther, double levelAtBreak, do
          * The lag-1 autocorrelation of the two separate lines' residuals, clipped to [0, 0.95] as the
          * sup-F test's null clips it ({@link SupF}); consecutive observed values count as adjacent.
          */
-        private static double lagOneAutocorrelation(List<double[]> rows, List<Double> values) {
+        private static double lagOneAutocorrelation(SpanDesign design) {
             double[] beta = new double[4];
-            rss(rows, values, 4, beta);
+            design.rss(LINES, beta);
             double lagged = 0;
             double squares = 0;
             double previous = Double.NaN;
-            for (int i = 0; i < rows.size(); i++) {
-                double[] row = rows.get(i);
-                double e = values.get(i) - (beta[0] * row[0] + beta[1] * row[1] + beta[2] * row[2] + beta[3] * row[3]);
+            for (int i = 0; i < design.size(); i++) {
+                double[] row = design.rows().get(i);
+                double fitted = 0;
+                for (int j = 0; j < LINES.length; j++) {
+                    fitted += beta[j] * row[LINES[j]];
+                }
+                double e = design.values().get(i) - fitted;
                 squares += e * e;
                 if (i > 0) {
                     lagged += e * previous;
@@ -171,25 +146,6 @@ public record StepOrBend(double pWorking, double pOther, double levelAtBreak, do
                 previous = e;
             }
             return squares > 0 ? Math.max(0, Math.min(0.95, lagged / squares)) : 0;
-        }
-
-        /** RSS of the least-squares fit on the first {@code k} columns; its coefficients into {@code beta}. */
-        private static double rss(List<double[]> rows, List<Double> values, int k, double[] beta) {
-            int n = rows.size();
-            RealMatrix x = new Array2DRowRealMatrix(n, k);
-            RealVector v = new ArrayRealVector(n);
-            for (int i = 0; i < n; i++) {
-                for (int j = 0; j < k; j++) {
-                    x.setEntry(i, j, rows.get(i)[j]);
-                }
-                v.setEntry(i, values.get(i));
-            }
-            RealVector b = new QRDecomposition(x, 1e-12).getSolver().solve(v);
-            for (int j = 0; j < k; j++) {
-                beta[j] = b.getEntry(j);
-            }
-            RealVector residuals = v.subtract(x.operate(b));
-            return residuals.dotProduct(residuals);
         }
     }
 }
