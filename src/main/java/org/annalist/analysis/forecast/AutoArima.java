@@ -319,19 +319,14 @@ public final class AutoArima {
     private Tried refitted(ArimaOrder fallback) {
         List<Tried> ordered = new ArrayList<>(results.stream().filter(r -> !Double.isNaN(r.ic())).toList());
         ordered.sort(Comparator.comparingDouble(Tried::ic)); // stable: the refused keep the order tried
+        List<Tried> refitOrder = new ArrayList<>();
         List<Tried> refusedLast = new ArrayList<>();
         for (Tried r : ordered) {
-            if (!(r.checkedNow().ic() < Double.POSITIVE_INFINITY)) {
-                refusedLast.add(r);
-                continue;
-            }
-            Tried refit = evaluate(r.order(), false, Double.POSITIVE_INFINITY);
-            if (refit.ic() < Double.POSITIVE_INFINITY) {
-                return refit;
-            }
+            (r.checkedNow().ic() < Double.POSITIVE_INFINITY ? refitOrder : refusedLast).add(r);
         }
         refusedLast.sort(Comparator.comparingInt(results::indexOf));
-        for (Tried r : refusedLast) {
+        refitOrder.addAll(refusedLast);
+        for (Tried r : refitOrder) {
             Tried refit = evaluate(r.order(), false, Double.POSITIVE_INFINITY);
             if (refit.ic() < Double.POSITIVE_INFINITY) {
                 return refit;
