@@ -76,8 +76,8 @@ final class OutlookCautions {
         String pacePct = "about " + f.signedPercent(pace) + basis;
         // a change whose own 80 % interval holds zero is not called a fall or a rise outright
         boolean unsure = change.pctLo80() != null && change.pctLo80() <= 0 && 0 <= change.pctHi80();
-        String direction = unsure ? " points " + (next < 0 ? "down" : "up")
-                + " (its 80\u00A0% interval also holds no change)" : " is a " + (next < 0 ? "fall" : "rise");
+        String verb = unsure ? " points " + (next < 0 ? "down" : "up") : " is a " + (next < 0 ? "fall" : "rise");
+        String direction = verb + (unsure ? " (its 80\u00A0% interval also holds no change)" : "");
         String gap = opposite ? direction + ", while " + span + " "
                 + (pace > 0 ? "rises" : "falls") + " by " + pacePct
                 : (Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ") + span + ", " + pacePct;
@@ -126,8 +126,7 @@ final class OutlookCautions {
         if (!allReasons) {
             // the short sections give one reason: the uncertainty when it holds the trend's pace, else the
             // first the evidence shows; how the method works only when the evidence shows none
-            String against = opposite ? (unsure ? " points " + (next < 0 ? "down" : "up") + " against "
-                    : next < 0 ? " is a fall against " : " is a rise against ")
+            String against = opposite ? verb + " against "
                     : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
             String why = withinUncertainty != null ? withinUncertainty
                     : reasons.isEmpty() ? "the outlook does not extend the trend line but starts from the latest level"
