@@ -42,7 +42,7 @@ public final class OutlookChart {
      * graphical objects); the accent itself prints nearly as light as the band (1.9:1).
      */
     static final Color FORECAST = new Color(0x7A, 0x35, 0x10);
-    private static final BasicStroke FORECAST_STROKE = new BasicStroke(2.0f, BasicStroke.CAP_BUTT,
+    private static final BasicStroke FORECAST_STROKE = new BasicStroke(1.4f, BasicStroke.CAP_BUTT,
             BasicStroke.JOIN_ROUND, 1f, new float[] {5f, 3f}, 0f);
 
     private OutlookChart() {
