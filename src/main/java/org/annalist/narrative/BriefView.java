@@ -35,7 +35,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     /**
      * @param unitPerPeriod the unit with its period, e.g. {@code nights a month}; empty without a unit
      * @param logo          the logo's URI; empty without one
-     * @param measure       the sentence saying how the series is treated ("Treated as a rate: …")
+     * @param measure       the sentence saying how the series is treated ("Each value is a rate, so …")
      * @param percentChanges changes are given in % (else in points or units: the tables' % column is left out)
      */
     public record Header(String title, String organisation, String seriesName, String unit, String periodCovered,

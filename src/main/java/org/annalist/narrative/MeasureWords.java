@@ -122,7 +122,7 @@ final class MeasureWords {
         return measure.summed() && frequency != Frequency.ANNUAL ? perPeriod(frequency) + " each year" : "a year";
     }
 
-    /** The sentence that says once how the series is treated. */
+    /** The sentence that says once, in a board reader's words, how the series is treated (its measure). */
     String statement() {
         String changes = switch (scale) {
             case PERCENT -> "changes are given in %";
@@ -131,12 +131,14 @@ final class MeasureWords {
                     : "changes are given in " + unit + ", not in %";
         };
         return switch (measure) {
-            case FLOW -> "Treated as a flow: spans are summed; " + changes + ".";
-            case LEVEL -> "Treated as a level or stock: spans are averaged, never summed; " + changes + ".";
-            case RATE -> "Treated as a rate: spans are averaged, never summed; " + changes + ".";
-            case INTERVAL -> "Treated as a temperature-like quantity on an interval scale (its zero is arbitrary): "
-                    + "spans are averaged, never summed; " + changes + ".";
-            case RATIO -> "Treated as a ratio of two series: spans take the ratio of their sums; " + changes + ".";
+            case FLOW -> "Each value is a count for its period, so figures for longer periods are sums; " + changes + ".";
+            case LEVEL -> "Each value is a level or stock, so figures for longer periods are averages, never sums; "
+                    + changes + ".";
+            case RATE -> "Each value is a rate, so figures for longer periods are averages, never sums; " + changes + ".";
+            case INTERVAL -> "Each value is on a scale whose zero is arbitrary, like a temperature, so figures for "
+                    + "longer periods are averages, never sums; " + changes + ".";
+            case RATIO -> "Each value is a ratio of two series, so figures for longer periods are the ratio of their "
+                    + "sums; " + changes + ".";
         };
     }
 }

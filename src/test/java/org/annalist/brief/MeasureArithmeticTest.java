@@ -103,7 +103,7 @@ class MeasureArithmeticTest {
     void aTemperatureIsTakenForAnIntervalScaleAndDecomposedAdditively() {
         assertThat(nottemFindings.series().measure()).isEqualTo(Measure.INTERVAL);
         assertThat(nottemFindings.form().form()).isEqualTo(Form.ADDITIVE);
-        assertThat(nottemText).contains("Treated as a temperature-like quantity on an interval scale");
+        assertThat(nottemText).contains("Each value is on a scale whose zero is arbitrary, like a temperature");
     }
 
     @Test
@@ -154,7 +154,7 @@ class MeasureArithmeticTest {
         assertThat(occupancyText).containsPattern("Year to date \\+\\d\\.\\d\\d pp January 2026 to October 2026");
         assertThat(occupancyText).containsPattern("Trend \\+0\\.\\d+ pp a year whole period; Sen slope, p");
         assertThat(occupancyText).containsPattern("the average was \\d\\d\\.\\d\\d %, \\+\\d\\.\\d\\d percentage points on the same months");
-        assertThat(occupancyText).contains("Treated as a rate: spans are averaged, never summed; changes are given in "
+        assertThat(occupancyText).contains("Each value is a rate, so figures for longer periods are averages, never sums; changes are given in "
                 + "percentage points (pp)");
         assertThat(occupancyText).doesNotContain("% more", "% less", "% a year", "of its average level");
         assertThat(SIGNED_PERCENT.matcher(occupancyText).results().map(m -> m.group()).toList()).isEmpty();

@@ -82,7 +82,7 @@ class BatchFolderFormatsTest {
         assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
         String dom = PdfFacts.of(folder.resolve("out/dom.pdf")).text().replaceAll("\\s+", " ");
         String bre = PdfFacts.of(folder.resolve("out/bre.pdf")).text().replaceAll("\\s+", " ");
-        assertThat(dom).contains("(beds)").contains("Treated as a level");
-        assertThat(bre).contains("(guest nights)").contains("Treated as a flow");
+        assertThat(dom).contains("(beds)").contains("Each value is a level or stock");
+        assertThat(bre).contains("(guest nights)").contains("Each value is a count for its period");
     }
 }

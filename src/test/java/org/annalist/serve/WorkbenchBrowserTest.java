@@ -127,7 +127,7 @@ class WorkbenchBrowserTest {
         new WebDriverWait(browser, Duration.ofSeconds(60)).until(d -> {
             List<WebElement> leads = d.findElements(By.cssSelector(".draft .lead"));
             return !leads.isEmpty() && leads.get(0).getText().contains("April 2025")
-                    && d.findElement(By.cssSelector(".draft")).getText().contains("Treated as a level");
+                    && d.findElement(By.cssSelector(".draft")).getText().contains("Each value is a level or stock");
         });
         assertThat(browser.findElement(By.id("period")).getAttribute("value")).isEqualTo("2025-04");
         shot("5-series-changed");
