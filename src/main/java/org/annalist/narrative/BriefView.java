@@ -102,10 +102,13 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param drops      years of steps down of 10 % or more (by the fitted lines at the break)
      * @param leadBeforeChange that the trend-cycle starts to move before a sudden change the chart
      *                   holds, a sentence; empty without one ({@link ChartWords#leadBeforeSuddenChange})
+     * @param gapsInLines why the lines break at missing values, a sentence; empty without any
+     *                   ({@link ChartWords#gapsInLines})
      */
     public record Charts(ChartView overview, ChartView profile, ChartView years, ChartView irregular, String firstYear,
                          String lastYear, String firstLevel, String lastLevel, boolean rose, List<String> drops,
-                         String smoothingMethod, int smoothingWindow, String leadBeforeChange) {
+                         String smoothingMethod, int smoothingWindow, String leadBeforeChange,
+                         String gapsInLines) {
 
         public Charts {
             drops = List.copyOf(drops);

@@ -1,7 +1,9 @@
 package org.annalist.narrative;
 
+import java.util.List;
 import org.annalist.findings.Findings;
 import org.annalist.series.Frequency;
+import org.annalist.series.Period;
 import org.annalist.series.Series;
 
 /** The words the charts print: legend entries and axis titles, worded as the sentences word them. */
@@ -64,6 +66,41 @@ public final class ChartWords {
             return "";
         }
         return "A centred average starts to move up to " + span(ahead, series.frequency()) + " before a sudden change.";
+    }
+
+    /**
+     * Why the overview's lines break, when the series has missing values: the observed line stops at
+     * each one, and the trend-cycle, a centred average that needs every value of its window, stops for
+     * as long as a missing value sits inside the window (a 2×12 average: 13 months around a single gap);
+     * empty without missing values or without a trend-cycle line.
+     */
+    public static String gapsInLines(Series series, Findings findings, Formats f) {
+        List<Period> missing = series.missingPeriods();
+        if (missing.isEmpty()) {
+            return "";
+        }
+        String where = "The lines break where a value is missing (" + BriefViews.listPeriods(missing, f) + ")";
+        int longest = findings.smoothing() == null ? 0 : longestInnerGap(findings.smoothing().trendCycle());
+        return longest <= 1 ? where + "."
+                : where + "; the trend-cycle breaks for " + span(longest, series.frequency())
+                + " there, as long as a missing value lies within its average.";
+    }
+
+    /** The longest run of missing values between the first and the last value present. */
+    private static int longestInnerGap(double[] values) {
+        int longest = 0;
+        int run = 0;
+        boolean started = false;
+        for (double v : values) {
+            if (Double.isNaN(v)) {
+                run += started ? 1 : 0;
+            } else {
+                started = true;
+                longest = Math.max(longest, run);
+                run = 0;
+            }
+        }
+        return longest;
     }
 
     /** {@code periods} periods in words: "half a year" where that is what they make, else a count. */

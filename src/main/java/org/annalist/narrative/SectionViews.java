@@ -240,7 +240,7 @@ final class SectionViews {
                 BriefViews.dropYears(series, findings.breaks()),
                 findings.smoothing() == null ? "" : Terms.movingAverage(findings.smoothing().method()),
                 findings.smoothing() == null ? 0 : findings.smoothing().window(),
-                ChartWords.leadBeforeSuddenChange(series, findings));
+                ChartWords.leadBeforeSuddenChange(series, findings), ChartWords.gapsInLines(series, findings, f));
     }
 
     private BriefView.ChartView chart(FigurePlan.Chart chart) {

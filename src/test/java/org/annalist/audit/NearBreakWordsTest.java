@@ -98,4 +98,23 @@ class NearBreakWordsTest {
         // derived in the test: the 2×12 average at t weighs t − 6 … t + 6, so it first takes in the step at 36 − 6
         assertThat(first).isEqualTo(30);
     }
+    @Test
+    void theOverviewCaptionSaysWhyItsLinesBreakAtAMissingValue() {
+        // a steady seasonal series with March 2019 missing (invented)
+        double[] x = new double[96];
+        for (int t = 0; t < x.length; t++) {
+            x[t] = Math.round(1_000 * (1 + 0.3 * Math.sin(2 * Math.PI * t / 12)));
+        }
+        x[26] = Double.NaN;
+        AuditedBrief gap = AuditedBrief.of("gap", Series.builder("arrivals", Frequency.MONTHLY)
+                .append(Period.month(2017, 1), x).snapshot());
+        // derived in the test: a 2×12 average needs the 13 values t − 6 … t + 6, so one gap blanks 13 points
+        assertThat(gap.text()).contains("The lines break where a value is missing (March 2019); the trend-cycle "
+                + "breaks for 13 months there, as long as a missing value lies within its average.");
+
+        x[26] = 1_000;
+        AuditedBrief whole = AuditedBrief.of("whole", Series.builder("arrivals", Frequency.MONTHLY)
+                .append(Period.month(2017, 1), x).snapshot());
+        assertThat(whole.text()).doesNotContain("The lines break");
+    }
 }
