@@ -133,16 +133,18 @@ public final class Analyst {
 
         TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), measured, notes);
         LatestIndicators.Measure kind = measured.forIndicators();
+        // the change on the period before is a change of level: the season and the calendar both taken out
+        boolean calendarAtTheEnd = y.length > 1 && (calendar.part(y.length - 1) != 0 || calendar.part(y.length - 2) != 0);
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
                 : LatestIndicators.at(series, series.size() - 1, kind,
-                decomposition.map(Decomposition::adjusted).orElse(null), parts);
+                stl.map(fit -> levelAdjusted(y, fit, calendar, log, calendarAtTheEnd)).orElse(null), parts);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), breaks.episodes(), measured,
                 horizon);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest, measured, series), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
+                IndicatorsFindings.of(latest, measured, series, calendarAtTheEnd), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
                 outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
 
@@ -173,7 +175,7 @@ public final class Analyst {
         if (period < 2) {
             return Optional.empty();
         }
-        Stl stl = Stl.withPeriod(period).with(Stl.Robustness.ON);
+        Stl stl = decomposer(period);
         Optional<Stl.Obstacle> obstacle = stl.obstacle(y);
         if (obstacle.isPresent()) {
             if (obstacle.get() == Stl.Obstacle.SPARSE_POSITION) {
@@ -182,6 +184,30 @@ public final class Analyst {
             return Optional.empty();
         }
         return Optional.of(stl.fit(y));
+    }
+
+    private static Stl decomposer(int period) {
+        return Stl.withPeriod(period).with(Stl.Robustness.ON);
+    }
+
+    /**
+     * The values with the season and the kept calendar effects taken out, in the series' units: the
+     * calendar effects first, then the season by a second decomposition of what is left (calendar
+     * effects come out before seasonal adjustment: common practice in official statistics, no
+     * source). Subtracting them from the first decomposition's adjusted values would not do: its
+     * local seasonal component has already taken in part of a moving holiday, unevenly from year to
+     * year (an April Easter after a March one left half of it in a planted series).
+     */
+    private static double[] levelAdjusted(double[] y, Stl.Result stl, CalendarAnalysis.Fit calendar, boolean log,
+                                          boolean calendarAtTheEnd) {
+        if (!calendarAtTheEnd) {
+            return WorkingScale.toUnits(stl.adjusted(), log);
+        }
+        double[] calendarFree = new double[y.length];
+        for (int t = 0; t < y.length; t++) {
+            calendarFree[t] = y[t] - calendar.part(t);
+        }
+        return WorkingScale.toUnits(decomposer(stl.parameters().period()).fit(calendarFree).adjusted(), log);
     }
 
     private static Decomposition decomposition(Stl.Result stl, boolean log) {

@@ -14,22 +14,26 @@ import org.annalist.series.Period;
  *                    value; null when neither (and when an earlier value equals it: see {@code equalRecord})
  * @param equalRecord the value equals the series' highest or lowest so far, which an earlier period
  *                    also had: a tie, never called "the highest"; null when there is none
+ * @param seasonallyAdjustedChangePct the change on the period before of the seasonally adjusted values,
+ *                    with the calendar effects the analysis kept taken out as well where they touch
+ *                    either period ({@code adjustedForCalendar}); null where not stated
+ * @param adjustedForCalendar whether that change is also adjusted for calendar effects
  */
 public record IndicatorsFinding(Period period, double value, List<String> flagged, Measure measure,
                                 Comparison samePeriodLastYear, Comparison samePeriodTwoYearsAgo, Span yearToDate,
                                 Span rollingYear, Double seasonallyAdjustedChangePct, Rank rank, Extreme record,
-                                EqualRecord equalRecord) {
+                                EqualRecord equalRecord, boolean adjustedForCalendar) {
 
     public IndicatorsFinding {
         flagged = List.copyOf(flagged);
     }
 
-    /** Without a tie for the record. */
+    /** Without a tie for the record, and no calendar effect in the adjusted change. */
     public IndicatorsFinding(Period period, double value, List<String> flagged, Measure measure,
                              Comparison samePeriodLastYear, Comparison samePeriodTwoYearsAgo, Span yearToDate,
                              Span rollingYear, Double seasonallyAdjustedChangePct, Rank rank, Extreme record) {
         this(period, value, flagged, measure, samePeriodLastYear, samePeriodTwoYearsAgo, yearToDate, rollingYear,
-                seasonallyAdjustedChangePct, rank, record, null);
+                seasonallyAdjustedChangePct, rank, record, null, false);
     }
 
     /**

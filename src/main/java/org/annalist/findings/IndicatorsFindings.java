@@ -15,21 +15,16 @@ final class IndicatorsFindings {
     }
 
     /**
+     * The block, with the ties of the latest value found in {@code series}: the same periods of
+     * earlier years with exactly its value (its rank is shared), and the earlier periods with the
+     * series' highest or lowest value when the latest equals it.
+     *
      * @param measure the kind the figures were computed for; a rate's and an interval-scale
      *                quantity's changes have no % (their {@code changePct} are null)
-     */
-    static IndicatorsFinding of(LatestIndicators.Result r, Measure measure) {
-        return of(r, measure, null);
-    }
-
-    /**
-     * As {@link #of(LatestIndicators.Result, Measure)}, with the ties of the latest value found in
-     * {@code series}: the same periods of earlier years with exactly its value (its rank is shared),
-     * and the earlier periods with the series' highest or lowest value when the latest equals it.
-     *
      * @param series the series the indicators were computed on; null for none (no ties looked for)
+     * @param adjustedForCalendar whether the result's adjusted change also took out calendar effects
      */
-    static IndicatorsFinding of(LatestIndicators.Result r, Measure measure, Series series) {
+    static IndicatorsFinding of(LatestIndicators.Result r, Measure measure, Series series, boolean adjustedForCalendar) {
         if (r == null) {
             return null;
         }
@@ -46,7 +41,7 @@ final class IndicatorsFindings {
                 relative ? Numbers.orNull(r.adjustedChangePct()) : null,
                 new IndicatorsFinding.Rank(r.rank().position(), r.rank().of(), tiedWith),
                 r.extreme().map(e -> e == LatestIndicators.Extreme.HIGHEST ? IndicatorsFinding.Extreme.HIGH
-                        : IndicatorsFinding.Extreme.LOW).orElse(null), equalRecord);
+                        : IndicatorsFinding.Extreme.LOW).orElse(null), equalRecord, adjustedForCalendar);
     }
 
     /** The same periods of earlier years whose value equals the one at {@code i}, in time order. */

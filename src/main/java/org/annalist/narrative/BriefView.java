@@ -75,12 +75,14 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *
      * @param level       the measure is a level or rate (averaged over spans, changes in its own units)
      * @param rankWord    e.g. {@code the highest October of 16} or {@code the 3rd highest October of 16}
+     * @param adjustedChange the level's change on the period before, seasonally adjusted …
+     * @param adjustedForCalendar … and adjusted for the calendar effects found as well
      * @param calendar    sentences on the calendar of the period (Easter, weekend nights, leap day)
      */
     public record ThisPeriod(boolean available, boolean level, String ytdFrom, String ytdTo, String ytdChange,
                              String ytdTotal, String rollingChange, String rollingTotal, String rankWord,
-                             boolean recordHigh, boolean recordLow, String adjustedChange, List<String> calendar,
-                             boolean flagged) {
+                             boolean recordHigh, boolean recordLow, String adjustedChange, boolean adjustedForCalendar,
+                             List<String> calendar, boolean flagged) {
 
         public ThisPeriod {
             calendar = List.copyOf(calendar);

@@ -250,7 +250,7 @@ final class SectionViews {
     BriefView.ThisPeriod thisPeriod() {
         IndicatorsFinding i = findings.indicators();
         if (i == null) {
-            return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", false, false, "", List.of(), false);
+            return new BriefView.ThisPeriod(false, false, "", "", "", "", "", "", "", false, false, "", false, List.of(), false);
         }
         boolean level = !i.measure().summed();
         IndicatorsFinding.Span ytd = i.yearToDate();
@@ -277,7 +277,7 @@ final class SectionViews {
                 rolling == null ? "" : change(rolling), rolling == null ? "" : f.value(rolling.total()), rank,
                 i.record() == IndicatorsFinding.Extreme.HIGH, i.record() == IndicatorsFinding.Extreme.LOW,
                 i.seasonallyAdjustedChangePct() == null || !BriefViews.positive(series) || oneOffAtTheEnd() ? ""
-                        : f.signedPercent(i.seasonallyAdjustedChangePct()),
+                        : f.signedPercent(i.seasonallyAdjustedChangePct()), i.adjustedForCalendar(),
                 findings.calendar() == null ? List.of()
                         : findings.calendar().notes().stream().map(CalendarSentences::of).map(Typography::printed).toList(), !i.flagged().isEmpty());
     }
