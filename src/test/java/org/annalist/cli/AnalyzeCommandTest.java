@@ -47,7 +47,7 @@ class AnalyzeCommandTest {
         assertThat(f.get("outliers").isArray()).isTrue();
         JsonNode i = f.get("indicators");
         assertThat(keys(i)).contains("period", "value", "flagged", "measure", "same_period_last_year", "year_to_date",
-                "rolling_year", "seasonally_adjusted_change_pct", "rank");
+                "rolling_year", "seasonally_adjusted_change_pct", "adjusted_for_calendar", "rank");
         // AirPassengers, from the data: December 1960 = 432 against 405 a year earlier (+6.67 %)
         assertThat(i.get("period").asText()).isEqualTo("1960-12");
         assertThat(i.get("same_period_last_year").get("change_pct").asDouble()).isCloseTo(100 * (432.0 / 405 - 1),
