@@ -141,7 +141,7 @@ public final class Analyst {
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), breaks.episodes(), measured,
                 horizon);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
-                seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
+                seasonality, cycle, outliers, BreakAnalysis.withLatestRate(breaks.breaks(), trend.latestRegime()), irregular, smoothing(series),
                 IndicatorsFindings.of(latest, measured, series), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
                 outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
     }
@@ -222,6 +222,18 @@ public final class Analyst {
                     series.flags(i), earlier < 0 ? Set.of() : series.flags(earlier)));
         }
         return recent;
+    }
+
+    /**
+     * The mean of the last year's observed values (the last {@code periodsPerYear} periods): the
+     * level a reader has in mind for the latest regime's rate, the base of that rate in % wherever
+     * a brief gives it (the trend since the latest break, the break's slope after, the outlook's
+     * comparison with the trend). NaN when none of them is observed.
+     */
+    public static double latestYearMean(Series series) {
+        int n = (int) Math.round(series.frequency().periodsPerYear());
+        double[] values = series.values();
+        return meanOf(java.util.Arrays.copyOfRange(values, Math.max(0, values.length - n), values.length));
     }
 
     static double meanOf(double[] x) {

@@ -62,6 +62,30 @@ final class BreakAnalysis {
     }
 
     /**
+     * The breaks with the latest regime's one rate: the last break's slope after is the trend
+     * finding's slope over the regime it opens (Sen's slope, {@link TrendAnalysis}), not the fitted
+     * line's. The segmented line is fitted to every regime at once, joined at a bend, so its last
+     * slope leans on the regime before (on the demo's domestic nights +0.7 % a year, against Sen's
+     * +1.7 % over the same months, the planted growth being 1.5 %); a reader must find one rate for
+     * one span, and the trend's carries its interval and test. Unchanged when the trend has no
+     * latest regime or it starts elsewhere.
+     */
+    static List<BreakFinding> withLatestRate(List<BreakFinding> breaks, Optional<TrendFinding.LatestRegime> latest) {
+        if (breaks.isEmpty() || latest.isEmpty()) {
+            return breaks;
+        }
+        BreakFinding last = breaks.get(breaks.size() - 1);
+        if (!last.period().equals(latest.get().since())) {
+            return breaks;
+        }
+        List<BreakFinding> rated = new ArrayList<>(breaks.subList(0, breaks.size() - 1));
+        rated.add(new BreakFinding(last.period(), last.ci95(), last.levelBefore(), last.levelAfter(), last.changePct(),
+                last.statistic(), last.pValue(), last.provisional(), last.index(), last.kind(), last.slopeBefore(),
+                latest.get().slopePerYear(), last.regimeEnd(), last.endLevel()));
+        return List.copyOf(rated);
+    }
+
+    /**
      * What a break changed. A break of a level model is a step. Of a level-and-slope model, a step
      * is reported only when the data carry it against one line bent at the break, on the working
      * scale and the other, at {@link DecisionRules#ALPHA} (the search then leaves a gap; else it

@@ -54,12 +54,16 @@ final class TrendAnalysis {
         return new TrendFinding(direction(mk), new TrendFinding.Test(TestName.of(mk.test().method()), seasonal, block),
                 mk.test().statistic(), mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
                 level == 0 ? null : 100 * sen.perYear() / Math.abs(level), seasonalKendall, mk.test().n(),
-                latestRegime(series, adjusted, regimeStart));
+                latestRegime(series, adjusted, regimeStart, positive ? Analyst.latestYearMean(series) : Double.NaN));
     }
 
-    /** The same test and slope over the latest regime, when there is one with enough values. */
+    /**
+     * The same test and slope over the latest regime, when there is one with enough values.
+     *
+     * @param latestLevel the latest year's average observed level, the base of the slope in %; NaN for none
+     */
     private static Optional<TrendFinding.LatestRegime> latestRegime(Series series, double[] adjusted,
-                                                                    int regimeStart) {
+                                                                    int regimeStart, double latestLevel) {
         if (regimeStart <= 0) {
             return Optional.empty();
         }
@@ -73,8 +77,10 @@ final class TrendAnalysis {
         MannKendall.Result mk = MannKendall.test(regime, MannKendall.Correction.AR1_RANKS);
         SenSlope.Result sen = SenSlope.of(regime, series.frequency().periodsPerYear(), mk.varianceUsed());
         return Optional.of(new TrendFinding.LatestRegime(series.period(regimeStart), direction(mk), sen.perYear(), sen.lower95(),
-                sen.upper95(), mk.test().pValue(), (int) present));
+                sen.upper95(), mk.test().pValue(), (int) present,
+                latestLevel > 0 ? 100 * sen.perYear() / latestLevel : null));
     }
+
 
     /** A direction only where the test rejects "no trend" at {@link DecisionRules#ALPHA}. */
     private static Direction direction(MannKendall.Result mk) {

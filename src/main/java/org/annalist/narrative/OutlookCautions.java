@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.annalist.findings.CalendarFinding;
+import org.annalist.findings.Analyst;
 import org.annalist.findings.Claim;
 import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Findings;
@@ -58,7 +59,7 @@ final class OutlookCautions {
         boolean sinceBreak = trend.quantity() == Claim.Quantity.TREND_SINCE_BREAK;
         Double slope = sinceBreak ? findings.trend().latestRegime().map(r -> r.slopePerYear()).orElse(null)
                 : findings.trend().slopePerYear();
-        double level = latestYearMean(series);
+        double level = Analyst.latestYearMean(series);
         if (slope == null || !(level > 0)) {
             return "";
         }
@@ -178,19 +179,5 @@ final class OutlookCautions {
     private static boolean touchesMarchOrApril(Period p) {
         return p.startDate().getMonthValue() <= 4 && p.endDate().getMonthValue() >= 3
                 && p.startDate().getYear() == p.endDate().getYear();
-    }
-
-    /** The mean of the latest year's observed values (the last {@code periodsPerYear} periods). */
-    private static double latestYearMean(Series series) {
-        int n = (int) Math.round(series.frequency().periodsPerYear());
-        double sum = 0;
-        int count = 0;
-        for (int i = Math.max(0, series.size() - n); i < series.size(); i++) {
-            if (!series.isMissing(i)) {
-                sum += series.value(i);
-                count++;
-            }
-        }
-        return count == 0 ? Double.NaN : sum / count;
     }
 }
