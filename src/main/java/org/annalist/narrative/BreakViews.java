@@ -47,8 +47,7 @@ final class BreakViews {
                     b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), SectionViews.BREAK_P_FLOOR),
                     b.provisional(), b.kind().step(), b.kind().slope(),
                     slope(b.slopeBefore(), b.levelBefore(), slopesInPercent),
-                    latest.map(r -> latestSlope(r, slopesInPercent))
-                            .orElseGet(() -> slope(b.slopeAfter(), b.levelAfter(), slopesInPercent)), drifted,
+                    slope(b.slopeAfter(), b.levelAfter(), slopesInPercent), drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
                     overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
                     f.value(first.levelBefore()), f.period(first.period()), slopesInPercent ? "a year" : slopeTime(),
@@ -57,19 +56,13 @@ final class BreakViews {
         return rows;
     }
 
-    /** The trend finding's latest regime when it is the one {@code last} opens: its rate is the regime's one rate. */
-    private Optional<TrendFinding.LatestRegime> latestRegimeFrom(BreakFinding last) {
-        return findings.trend().latestRegime().filter(r -> r.since().equals(last.period()));
-    }
-
     /**
-     * The latest regime's slope as the trend section gives it: in % of the latest year's average
-     * level for a series worked in logs (the trend section's figure, not a second conversion of the
-     * same slope), else in units.
+     * The trend finding's latest regime when it is the one {@code last} opens and gave the break its
+     * slope after ({@code findings.BreakAnalysis.withLatestRate}): its rate is the regime's one rate.
      */
-    private String latestSlope(TrendFinding.LatestRegime r, boolean inPercent) {
-        return inPercent && r.changePctPerYear() != null ? f.signedPercent(r.changePctPerYear())
-                : f.signedSignificant(r.slopePerYear()) + measure.differenceUnit();
+    private Optional<TrendFinding.LatestRegime> latestRegimeFrom(BreakFinding last) {
+        return findings.trend().latestRegime().filter(r -> r.since().equals(last.period())
+                && (findings.transform() != Transform.LOG || r.changePctPerYear() != null));
     }
 
     /**
@@ -122,9 +115,41 @@ final class BreakViews {
                     e.extreme().equals(e.start()), f.period(e.extreme()), f.value(e.before()),
                     f.value(e.extremeLevel()), f.value(e.returnedLevel()), f.period(e.asOf()), e.asOf().equals(last),
                     Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%",
-                    stepBack(e)));
+                    stepBack(e), oldPath(e)));
         }
         return views;
+    }
+
+    /**
+     * The old path carried forward: "risen back to about its level before the fall" compares with
+     * a level the old line would have left behind had it gone on moving. Said when, by the period
+     * the return is measured at, the old line's slope would have carried the level at least
+     * {@link DecisionRules#MIN_BREAK_CHANGE_PCT} away from where it stood before the step: "Had the
+     * level gone on as before the fall (+1.3 % a year), it would have reached about 72,600 by
+     * October 2026; the fitted level there, 68,700, is 5.4 % below that." (invented figures). On logs the old
+     * line grows at its rate, else by its slope in units, as the break's fitted lines do.
+     */
+    private String oldPath(Episode e) {
+        Optional<BreakFinding> step = findings.breaks().stream().filter(b -> b.period().equals(e.start())).findFirst();
+        if (step.isEmpty() || step.get().slopeBefore() == 0 || !(step.get().levelBefore() > 0)
+                && findings.transform() == Transform.LOG) {
+            return "";
+        }
+        BreakFinding b = step.get();
+        // from the break instant, half a period before the step's first period, to the period measured at
+        double years = (e.start().until(e.asOf()) + 0.5) / series.frequency().periodsPerYear();
+        boolean log = findings.transform() == Transform.LOG;
+        double rate = b.slopeBefore() / b.levelBefore();
+        double carried = log ? b.levelBefore() * Math.exp(rate * years) : b.levelBefore() + b.slopeBefore() * years;
+        if (Math.abs(carried - b.levelBefore()) < DecisionRules.MIN_BREAK_CHANGE_PCT / 100 * Math.abs(b.levelBefore())) {
+            return "";
+        }
+        String pace = log ? f.signedPercent(100 * Math.expm1(rate)) + " a year"
+                : f.signedSignificant(b.slopeBefore()) + measure.differenceUnit() + " " + slopeTime();
+        return "Had the level gone on as before the " + (e.rise() ? "rise" : "fall") + " (" + pace
+                + "), it would have reached about " + f.significant(carried) + " by " + f.period(e.asOf()) + "; the fitted level"
+                + " there, " + f.value(e.returnedLevel()) + ", is " + size(carried, e.returnedLevel())
+                + (e.returnedLevel() < carried ? " below" : " above") + " that.";
     }
 
     /**

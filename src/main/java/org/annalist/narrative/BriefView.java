@@ -128,7 +128,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
 
     /**
      * @param since          the first period of the latest regime, in words
-     * @param percentPerYear the slope as % of the latest year's average level; empty where changes are not in %
+     * @param percentPerYear the regime's rate in % with what it is of ({@code +1.8 % a year}, or {@code +1.7 % a year of the latest year's average level}); empty where changes are not in %
      */
     public record SinceBreak(String since, boolean rising, boolean falling, String slopePerYear, String lower, String upper,
                              String pValue, String percentPerYear) {
@@ -205,11 +205,13 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param share      how far back it moved, in words ({@code about a quarter of the way})
      * @param sharePct   the same as a percentage of the step
      * @param latest     the return is measured at the series' latest period
-     * @param stepBack   a step the other way soon after the return, in words ({@link SectionViews}); empty when none
+     * @param stepBack   a step the other way soon after the return, in words ({@link BreakViews}); empty when none
+     * @param oldPath    the level the old line would have reached by {@code asOf}, against the level
+     *                   reached, in words ({@link BreakViews}); empty when the old line was about flat
      */
     public record EpisodeView(String start, boolean fell, String size, boolean atOnce, String extreme,
                               String before, String extremeLevel, String returned, String asOf, boolean latest,
-                              String share, String sharePct, String stepBack) {
+                              String share, String sharePct, String stepBack, String oldPath) {
     }
 
     /**

@@ -184,7 +184,7 @@ final class ClaimWords {
         String recent = t.qualification(QualifyReason.RECENT_CHANGE_OPPOSES).flatMap(q -> claims.find(q.by()))
                 .map(c -> "; " + (c.quantity() == Quantity.ROLLING_YEAR ? "last " + rollingSpan(c.to().frequency())[0]
                         : "year to date") + " " + signedShort(c)).orElse("");
-        return new String[] {signedShort(t), (total.isEmpty() ? "" : total + ", ") + span + "; " + evidence + recent};
+        return new String[] {signedShort(t), span + "; " + (total.isEmpty() ? "" : total + "; ") + evidence + recent};
     }
 
     /** The trend of the first page in a table cell: {@code increasing since Aug 2022}, {@code not stated}. */

@@ -63,10 +63,13 @@ final class OutlookCautions {
         if (slope == null || !(level > 0)) {
             return "";
         }
-        // the whole period's trend is given on its page as % of its average level: the same figure here
-        Double pagePct = sinceBreak ? null : findings.trend().changePctPerYear();
+        // the trend's pace as its page gives it: the whole period's as % of its average level, the
+        // latest regime's as that regime's one rate (the breaks section gives it too)
+        Double regimePct = sinceBreak ? findings.trend().latestRegime().map(r -> r.changePctPerYear()).orElse(null) : null;
+        Double pagePct = sinceBreak ? regimePct : findings.trend().changePctPerYear();
         double pace = pagePct != null ? pagePct : 100 * slope / level;
-        String basis = pagePct != null ? " a year of its average level" : " a year of the latest year's average level";
+        String basis = !sinceBreak && pagePct != null ? " a year of its average level"
+                : regimePct != null ? SectionViews.regimeRateBasis(findings) : " a year of the latest year's average level";
         OutlookFinding.YearChange change = o.nextYearChange();
         double next = change.pct();
         boolean opposite = Math.signum(pace) != Math.signum(next) && !change.aboutTheSame();

@@ -18,6 +18,7 @@ import org.annalist.findings.IrregularFinding;
 import org.annalist.findings.SeasonVerdict;
 import org.annalist.findings.Side;
 import org.annalist.findings.SeasonalityFinding;
+import org.annalist.findings.Transform;
 import org.annalist.findings.TrendFinding;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
@@ -53,7 +54,7 @@ final class SectionViews {
                 r.direction() == Direction.INCREASING, r.direction() == Direction.DECREASING,
                 f.signedSignificant(r.slopePerYear()), f.significant(r.lower95()), f.significant(r.upper95()),
                 f.pValue(r.pValue()), r.changePctPerYear() == null || !measure.percent() ? ""
-                : f.signedPercent(r.changePctPerYear()))).orElse(null);
+                : f.signedPercent(r.changePctPerYear()) + regimeRateBasis(findings))).orElse(null);
         String kendall = t.seasonalKendall().map(k -> Terms.test(k.test()) + " z = " + f.fixed(k.statistic(), 2) + ", "
                 + f.pValue(k.pValue())).orElse(null);
         return new BriefView.TrendView(true, t.direction() == Direction.INCREASING, t.direction() == Direction.DECREASING,
@@ -63,6 +64,15 @@ final class SectionViews {
                 f.significant(t.slopeCi95().get(1)),
                 t.changePctPerYear() == null || !measure.percent() ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%",
                 Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit(), slopeTime());
+    }
+
+    /**
+     * What the latest regime's rate in % is of, said after it: a compound rate a year for a series
+     * worked in logs, else a share of the latest year's level
+     * ({@link TrendFinding.LatestRegime#changePctPerYear()}).
+     */
+    static String regimeRateBasis(Findings findings) {
+        return findings.transform() == Transform.LOG ? " a year" : " a year of the latest year's average level";
     }
 
     /** What a slope in the series' units is counted over: {@code a year}, or {@code a year in the monthly total} for a flow. */

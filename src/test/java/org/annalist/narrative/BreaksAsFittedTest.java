@@ -226,7 +226,7 @@ class BreaksAsFittedTest {
         assertThat(Terms.shareOfTheWay(0.27)).isEqualTo("about a quarter of the way");
         assertThat(Terms.shareOfTheWay(0.5)).isEqualTo("about half way");
         assertThat(Terms.shareOfTheWay(0.7)).isEqualTo("about two thirds of the way");
-        assertThat(Terms.shareOfTheWay(1.0)).isEqualTo("all the way");
-        assertThat(Terms.shareOfTheWay(1.3)).isEqualTo("beyond the level before the step");
+        assertThat(Terms.shareOfTheWay(1.0)).isEqualTo("to about its level before the step");
+        assertThat(Terms.shareOfTheWay(1.3)).isEqualTo("past its level before the step");
     }
 }
