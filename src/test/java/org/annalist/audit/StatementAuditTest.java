@@ -566,6 +566,31 @@ class StatementAuditTest {
         }, "a joined bend printed as a step that moved nothing");
     }
 
+    /**
+     * A return is compared with the old path carried forward in the words of the same level: the
+     * level the episode's bracket gives at the period measured at is the one the old-path sentence
+     * sets against the old line (derived in the test from the brief's own words).
+     */
+    @Test
+    void theOldPathIsSetAgainstTheLevelTheEpisodeGives() {
+        Pattern episode = Pattern.compile("([\\d,.]+) (?:at the latest period|in [^:]{3,20}): [\\d,.]+\u00a0% of the step\\)\\."
+                + " Had the level gone on as before the (?:fall|rise) \\([^)]*\\), it would have reached about [\\d,.]+ by"
+                + " [^;]{3,20}; the fitted level there, ([\\d,.]+),");
+        int compared = 0;
+        List<String> found = new ArrayList<>();
+        for (AuditedBrief b : briefs) {
+            Matcher m = episode.matcher(b.text());
+            while (m.find()) {
+                compared++;
+                if (!m.group(1).equals(m.group(2))) {
+                    found.add(b + ": " + m.group());
+                }
+            }
+        }
+        assertThat(found).as("an old path set against another level than the episode's").isEmpty();
+        assertThat(compared).as("returns compared with the old path").isPositive();
+    }
+
     /** A flow's slope names the total it changes ("a year in the monthly total"), never "a month each year". */
     @Test
     void aFlowsSlopeIsNotSaidPerPeriodEachYear() {
