@@ -131,7 +131,8 @@ public final class Analyst {
         breaks.breaks().stream().filter(BreakFinding::provisional)
                 .forEach(b -> notes.add(new Caveat.ProvisionalBreak(series.period(b.index()))));
 
-        TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), measured, notes);
+        TrendFinding trend = TrendAnalysis.of(series, adjusted, seasonal, x, breaks.regimeStart(), measured, log,
+                notes);
         LatestIndicators.Measure kind = measured.forIndicators();
         // the change on the period before is a change of level: the season and the calendar both taken out
         boolean calendarAtTheEnd = y.length > 1 && (calendar.part(y.length - 1) != 0 || calendar.part(y.length - 2) != 0);
@@ -142,10 +143,15 @@ public final class Analyst {
         IrregularFinding irregular = irregular(y, remainder);
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), breaks.episodes(), measured,
                 horizon);
+        // the latest regime has one rate, the trend's: its break's slope after and the episodes read at it
+        List<BreakFinding> rated = BreakAnalysis.withLatestRate(breaks.breaks(), trend.latestRegime(), log,
+                series.frequency().periodsPerYear());
+        List<Episode> episodes = BreakAnalysis.alongLatestRate(breaks.episodes(), breaks.breaks(), rated);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
-                seasonality, cycle, outliers, breaks.breaks(), irregular, smoothing(series),
-                IndicatorsFindings.of(latest, measured, series, calendarAtTheEnd), CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
-                outlook, recent(series, measured), notes, form, decomposition, breaks.episodes(), breaks.method());
+                seasonality, cycle, outliers, rated, irregular, smoothing(series),
+                IndicatorsFindings.of(latest, measured, series, calendarAtTheEnd),
+                CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
+                outlook, recent(series, measured), notes, form, decomposition, episodes, breaks.method());
     }
 
     private FormChoice chooseForm(double[] x, int period, Measure measured) {
@@ -248,6 +254,18 @@ public final class Analyst {
                     series.flags(i), earlier < 0 ? Set.of() : series.flags(earlier)));
         }
         return recent;
+    }
+
+    /**
+     * The mean of the last year's observed values (the last {@code periodsPerYear} periods): the
+     * level a reader has in mind for the latest regime's rate, the base of that rate in % for a
+     * series worked in units ({@link TrendFinding.LatestRegime#changePctPerYear()}) and of the
+     * outlook's comparison with a trend. NaN when none of them is observed.
+     */
+    public static double latestYearMean(Series series) {
+        int n = (int) Math.round(series.frequency().periodsPerYear());
+        double[] values = series.values();
+        return meanOf(java.util.Arrays.copyOfRange(values, Math.max(0, values.length - n), values.length));
     }
 
     static double meanOf(double[] x) {

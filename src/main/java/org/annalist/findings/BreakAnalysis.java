@@ -62,6 +62,67 @@ final class BreakAnalysis {
     }
 
     /**
+     * The breaks with the latest regime's one rate: the last break's slope after is the trend
+     * finding's over the regime it opens (Sen's slope, {@link TrendAnalysis}), not the fitted
+     * line's. The segmented line is fitted to every regime at once, joined at a bend, so its last
+     * slope leans on the regime before (on the demo's domestic nights +0.7 % a year, against Sen's
+     * +1.7 % over the same months, the planted growth being 1.5 %); a reader must find one rate for
+     * one span, and the trend's carries its interval and test. On logs the slope is read as the
+     * fitted lines are, at the break: the compound rate's log times the level after, so that the
+     * brief's % a year of it is the trend finding's. Unchanged when the trend has no latest regime
+     * or it starts elsewhere.
+     */
+    static List<BreakFinding> withLatestRate(List<BreakFinding> breaks, Optional<TrendFinding.LatestRegime> latest,
+                                             boolean log, double periodsPerYear) {
+        if (breaks.isEmpty() || latest.isEmpty()) {
+            return breaks;
+        }
+        BreakFinding last = breaks.get(breaks.size() - 1);
+        TrendFinding.LatestRegime regime = latest.get();
+        if (!last.period().equals(regime.since()) || log && regime.changePctPerYear() == null) {
+            return breaks;
+        }
+        double logRate = log ? Math.log1p(regime.changePctPerYear() / 100) : Double.NaN;
+        double slope = log ? logRate * last.levelAfter() : regime.slopePerYear();
+        // the line at the regime's end, from the break instant half a period before its first period
+        double years = (last.period().until(last.regimeEnd()) + 0.5) / periodsPerYear;
+        double endLevel = log ? last.levelAfter() * Math.exp(logRate * years) : last.levelAfter() + slope * years;
+        List<BreakFinding> rated = new ArrayList<>(breaks.subList(0, breaks.size() - 1));
+        rated.add(new BreakFinding(last.period(), last.ci95(), last.levelBefore(), last.levelAfter(), last.changePct(),
+                last.statistic(), last.pValue(), last.provisional(), last.index(), last.kind(), last.slopeBefore(),
+                slope, last.regimeEnd(), endLevel));
+        return List.copyOf(rated);
+    }
+
+    /**
+     * The episodes with their return read on the latest regime's line at its one rate
+     * ({@link #withLatestRate}): an episode measured at the end of the latest regime gives the level
+     * that line reaches there, so that "at the latest period" agrees with the rate the brief gives.
+     * An episode whose furthest point is that end, or measured elsewhere, is unchanged.
+     */
+    static List<Episode> alongLatestRate(List<Episode> episodes, List<BreakFinding> fitted, List<BreakFinding> rated) {
+        if (fitted.isEmpty() || fitted.equals(rated)) {
+            return episodes;
+        }
+        BreakFinding before = fitted.get(fitted.size() - 1);
+        BreakFinding after = rated.get(rated.size() - 1);
+        List<Episode> read = new ArrayList<>();
+        for (Episode e : episodes) {
+            boolean atTheEnd = e.asOf().equals(before.regimeEnd()) && e.returnedLevel() == before.endLevel()
+                    && e.extremeLevel() != before.endLevel();
+            if (!atTheEnd) {
+                read.add(e);
+                continue;
+            }
+            double share = Math.min(BreakSearch.MAX_REGAINED_SHARE,
+                    (after.endLevel() - e.extremeLevel()) / (e.before() - e.extremeLevel()));
+            read.add(new Episode(e.start(), e.rise(), e.before(), e.extreme(), e.extremeLevel(), e.returnStart(), e.asOf(),
+                    after.endLevel(), share));
+        }
+        return List.copyOf(read);
+    }
+
+    /**
      * What a break changed. A break of a level model is a step. Of a level-and-slope model, a step
      * is reported only when the data carry it against one line bent at the break, on the working
      * scale and the other, at {@link DecisionRules#ALPHA} (the search then leaves a gap; else it

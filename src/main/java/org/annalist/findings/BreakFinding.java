@@ -22,7 +22,9 @@ import org.annalist.series.Period;
  * @param kind        what changed: a step in level, the slope, or both
  * @param slopeBefore the old line's slope at the break, in the series' units a year (0 when the
  *                    regimes were fitted as levels)
- * @param slopeAfter  the new line's slope at the break, in the series' units a year
+ * @param slopeAfter  the new line's slope at the break, in the series' units a year; for the last
+ *                    break, when the trend finding has a latest regime from it, that regime's rate
+ *                    instead ({@link BreakAnalysis#withLatestRate}), the one rate of the regime
  * @param regimeEnd   the last period of the new regime (the next break's old regime ends there too)
  * @param endLevel    the new regime's fitted line at {@code regimeEnd}
  */

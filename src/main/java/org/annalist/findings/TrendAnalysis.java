@@ -26,9 +26,11 @@ final class TrendAnalysis {
      * @param measure     the slope is also given as % of the mean level only where changes can be
      *                    read as % ({@link Measure#relativeChanges()}): a rate's slope is in points,
      *                    a temperature's in degrees
+     * @param log         the series is worked in logs: the latest regime's rate in % is then a
+     *                    compound rate, from Sen's slope of the logs
      */
     static TrendFinding of(Series series, double[] adjusted, boolean seasonal, double[] observed, int regimeStart,
-                           Measure measure, List<Caveat> notes) {
+                           Measure measure, boolean log, List<Caveat> notes) {
         int present = 0;
         for (double v : adjusted) {
             present += Double.isNaN(v) ? 0 : 1;
@@ -54,12 +56,19 @@ final class TrendAnalysis {
         return new TrendFinding(direction(mk), new TrendFinding.Test(TestName.of(mk.test().method()), seasonal, block),
                 mk.test().statistic(), mk.test().pValue(), sen.perYear(), List.of(sen.lower95(), sen.upper95()),
                 level == 0 ? null : 100 * sen.perYear() / Math.abs(level), seasonalKendall, mk.test().n(),
-                latestRegime(series, adjusted, regimeStart));
+                latestRegime(series, adjusted, regimeStart, positive, log));
     }
 
-    /** The same test and slope over the latest regime, when there is one with enough values. */
+    /**
+     * The same test and slope over the latest regime, when there is one with enough values, with
+     * the regime's rate in %: for a series worked in logs the compound rate exp(b) − 1 of Sen's
+     * slope b of the logs (growth at a steady rate is a straight line there, and the breaks' lines
+     * are read the same way), else Sen's slope as % of the latest year's average observed level.
+     *
+     * @param inPercent whether changes are read as % and every value is positive
+     */
     private static Optional<TrendFinding.LatestRegime> latestRegime(Series series, double[] adjusted,
-                                                                    int regimeStart) {
+                                                                    int regimeStart, boolean inPercent, boolean log) {
         if (regimeStart <= 0) {
             return Optional.empty();
         }
@@ -71,9 +80,19 @@ final class TrendAnalysis {
             return Optional.empty();
         }
         MannKendall.Result mk = MannKendall.test(regime, MannKendall.Correction.AR1_RANKS);
-        SenSlope.Result sen = SenSlope.of(regime, series.frequency().periodsPerYear(), mk.varianceUsed());
-        return Optional.of(new TrendFinding.LatestRegime(series.period(regimeStart), direction(mk), sen.perYear(), sen.lower95(),
-                sen.upper95(), mk.test().pValue(), (int) present));
+        double perYear = series.frequency().periodsPerYear();
+        SenSlope.Result sen = SenSlope.of(regime, perYear, mk.varianceUsed());
+        Double pct = null;
+        if (inPercent && log) {
+            // Kendall's S and its variance depend on the ranks only, the same on the logs
+            double logSlope = SenSlope.of(java.util.Arrays.stream(regime).map(Math::log).toArray(), perYear,
+                    mk.varianceUsed()).perYear();
+            pct = 100 * Math.expm1(logSlope);
+        } else if (inPercent && Analyst.latestYearMean(series) > 0) {
+            pct = 100 * sen.perYear() / Analyst.latestYearMean(series);
+        }
+        return Optional.of(new TrendFinding.LatestRegime(series.period(regimeStart), direction(mk), sen.perYear(),
+                sen.lower95(), sen.upper95(), mk.test().pValue(), (int) present, pct));
     }
 
     /** A direction only where the test rejects "no trend" at {@link DecisionRules#ALPHA}. */

@@ -33,12 +33,17 @@ public record TrendFinding(Direction direction, Test test, Double statistic, Dou
     }
 
     /**
-     * The trend since the latest structural break ("rising again since 2021-06").
+     * The trend since the latest structural break ("rising again since 2021-06"): the one rate every
+     * statement about that regime gives, the break's "slope after" included.
      *
-     * @param since the first period of the latest regime
+     * @param since            the first period of the latest regime
+     * @param changePctPerYear the regime's rate in % a year: for a series worked in logs the compound
+     *                         rate of Sen's slope of the logs, else the slope as % of the latest
+     *                         year's average observed level; null where changes are not read as %
+     *                         or a value is at or below zero
      */
     public record LatestRegime(Period since, Direction direction, double slopePerYear, double lower95, double upper95,
-                               double pValue, int n) {
+                               double pValue, int n, Double changePctPerYear) {
     }
 
     /** A test outcome quoted beside the main one. */

@@ -123,7 +123,7 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param sinceBreak the trend within the latest regime, or null
      * @param percentPerYear the slope as % of the average level; empty where changes are not in % (a rate, a temperature)
      * @param slopeUnit  what the slope is counted in, with a leading space: the unit, {@code  percentage points}, {@code  °F}
-     * @param slopeTime  what the slope is counted over, after its unit: {@code a year}, or {@code a month each year}
+     * @param slopeTime  what the slope is counted over, after its unit: {@code a year}, or {@code a year in the monthly total}
      *                   for a flow's monthly values ({@link MeasureWords#slopeTime})
      */
     public record TrendView(boolean assessed, boolean rising, boolean falling, String test, String statistic, String pValue,
@@ -131,9 +131,12 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                             String reason, SinceBreak sinceBreak, String seasonalKendall, String slopeUnit, String slopeTime) {
     }
 
-    /** @param since the first period of the latest regime, in words */
+    /**
+     * @param since          the first period of the latest regime, in words
+     * @param percentPerYear the regime's rate in % with what it is of ({@code +1.8 % a year}, or {@code +1.7 % a year of the latest year's average level}); empty where changes are not in %
+     */
     public record SinceBreak(String since, boolean rising, boolean falling, String slopePerYear, String lower, String upper,
-                             String pValue) {
+                             String pValue, String percentPerYear) {
     }
 
     /**
@@ -183,6 +186,9 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *                      logs), else as {@link TrendView#slopeTime()}
      * @param drifted       the regime before this break is the previous break's and its line moved from
      *                      {@code previousAfter} to {@code before}
+     * @param joined        the two lines join at the break (a bend): one level at the break, which runs on
+     * @param latestRate    {@code slopeAfter} is the trend section's rate since this break (Sen's slope
+     *                      over the latest regime), the one rate the brief gives that regime
      * @param overall       on the last of two or more breaks: the ratio of fitted levels from just before the
      *                      first break ({@code firstBefore}, {@code firstPeriod}) to just after this one,
      *                      without sign ({@code overallRise} its direction); else empty
@@ -191,7 +197,8 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
                            String change, boolean rise, String statistic, String pValue, boolean provisional,
                            boolean step, boolean slope, String slopeBefore, String slopeAfter, boolean drifted,
                            String previousAfter, String overall, boolean overallRise, String firstBefore,
-                           String firstPeriod, String slopeTime, boolean bendWithGap) {
+                           String firstPeriod, String slopeTime, boolean bendWithGap, boolean joined,
+                           boolean latestRate) {
     }
 
     /**
@@ -203,11 +210,13 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param share      how far back it moved, in words ({@code about a quarter of the way})
      * @param sharePct   the same as a percentage of the step
      * @param latest     the return is measured at the series' latest period
-     * @param stepBack   a step the other way soon after the return, in words ({@link SectionViews}); empty when none
+     * @param stepBack   a step the other way soon after the return, in words ({@link BreakViews}); empty when none
+     * @param oldPath    the level the old line would have reached by {@code asOf}, against the level
+     *                   reached, in words ({@link BreakViews}); empty when the old line was about flat
      */
     public record EpisodeView(String start, boolean fell, String size, boolean atOnce, String extreme,
                               String before, String extremeLevel, String returned, String asOf, boolean latest,
-                              String share, String sharePct, String stepBack) {
+                              String share, String sharePct, String stepBack, String oldPath) {
     }
 
     /**

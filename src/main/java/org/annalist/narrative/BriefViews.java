@@ -29,6 +29,7 @@ public final class BriefViews {
         Formats f = Formats.forValues(series.values(), masthead.language());
         MeasureWords measure = MeasureWords.of(series, findings, f);
         SectionViews sections = new SectionViews(series, findings, plan, f);
+        BreakViews breaks = new BreakViews(series, findings, f);
         String title = masthead.title().isEmpty() ? series.name() : masthead.title();
         String author = masthead.organisation().isEmpty() ? "Annalist" : masthead.organisation();
         BriefView.Document document = new BriefView.Document(masthead.language().toLanguageTag(), masthead.paper().css(),
@@ -45,7 +46,7 @@ public final class BriefViews {
         BriefView.ThisPeriod thisPeriod = sections.thisPeriod();
         return new BriefView(document, header, lead, thisPeriod, sections.keyFigures(lead, thisPeriod), sections.charts(),
                 sections.trend(),
-                sections.season(), sections.cycle(), sections.outliers(), sections.breaks(), sections.episodes(),
+                sections.season(), sections.cycle(), sections.outliers(), breaks.breaks(), breaks.episodes(),
                 sections.irregular(), findings.recent().stream().map(r -> row(r, f)).toList(),
                 OutlookViews.of(series, findings, f, measure), facts(series, findings, f),
                 notes, AppendixViews.methods(findings, f), AppendixViews.thresholds(), provenance);

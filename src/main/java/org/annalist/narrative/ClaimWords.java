@@ -35,7 +35,7 @@ final class ClaimWords {
 
     /**
      * The size of a claim without its sign: {@code 1.8 %}, {@code 0.9 percentage points},
-     * {@code 2,940 nights a month each year} (a monthly flow's slope, {@link MeasureWords#slopeTime}).
+     * {@code 2,940 nights a year in the monthly total} (a monthly flow's slope, {@link MeasureWords#slopeTime}).
      */
     String size(Claim c) {
         return size(c, units());
@@ -52,16 +52,23 @@ final class ClaimWords {
         };
     }
 
-    /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a month each year}. */
+    /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a year in the monthly total}. */
     String signedSize(Claim c) {
         return signed(c, size(c));
     }
 
-    /** As {@link #signedSize}, with percentage points abbreviated for the key figures' narrow tiles: {@code +0.9 pp a year}. */
+    /**
+     * As {@link #signedSize}, short for the key figures' narrow tiles: percentage points abbreviated
+     * ({@code +0.9 pp a year}), a flow's slope without its unit ({@code +2,940 a year}; the tile's
+     * note says {@code in monthly nights}).
+     */
     String signedShort(Claim c) {
         String units = units();
         if (c.unit() == Claim.SizeUnit.PERCENT_PER_YEAR) {
             return signed(c, f.percent(Math.abs(c.size())) + " a\u00A0year");   // the tile's note says "of the average level"
+        }
+        if (c.unit() == Claim.SizeUnit.UNITS_PER_YEAR && !MeasureWords.periodTotal(measure, c.to().frequency()).isEmpty()) {
+            return signed(c, f.significant(Math.abs(c.size())) + " a\u00A0year");   // the tile's note names the total
         }
         return signed(c, size(c, units.equals("\u00A0percentage points") ? "\u00a0pp" : units));
     }
@@ -159,6 +166,10 @@ final class ClaimWords {
             return new String[] {"no clear trend", "too few values"};
         }
         Claim t = trend.get();
+        // a flow's slope: the value "+3,050 a year", the note what it is a year of, "in monthly nights"
+        String total = t.unit() != Claim.SizeUnit.UNITS_PER_YEAR
+                || MeasureWords.periodTotal(measure, t.to().frequency()).isEmpty() ? ""
+                : "in " + MeasureWords.periodly(t.to().frequency()) + (unit.isEmpty() ? " values" : " " + unit);
         String span = t.quantity() == Quantity.TREND_SINCE_BREAK ? "since " + f.period(t.from())
                 : t.qualification(QualifyReason.SPANS_BREAKS).isPresent() ? "whole period, across " + breaks()
                 : "whole period";
@@ -173,7 +184,7 @@ final class ClaimWords {
         String recent = t.qualification(QualifyReason.RECENT_CHANGE_OPPOSES).flatMap(q -> claims.find(q.by()))
                 .map(c -> "; " + (c.quantity() == Quantity.ROLLING_YEAR ? "last " + rollingSpan(c.to().frequency())[0]
                         : "year to date") + " " + signedShort(c)).orElse("");
-        return new String[] {signedShort(t), span + "; " + evidence + recent};
+        return new String[] {signedShort(t), span + "; " + (total.isEmpty() ? "" : total + "; ") + evidence + recent};
     }
 
     /** The trend of the first page in a table cell: {@code increasing since Aug 2022}, {@code not stated}. */

@@ -114,12 +114,34 @@ final class MeasureWords {
     /**
      * What a slope in units is counted over, said after its unit: {@code a year} where one value is a
      * year's or the measure is not summed (a level's, a rate's or a temperature's change a year is
-     * what it reads as), else {@code a month each year}. A flow's slope is fitted to its monthly
-     * (quarterly, daily...) values, so it is the change of one period's total a year: a twelfth of
-     * the yearly total's change for monthly data, which "nights a year" would be read as.
+     * what it reads as), else {@code a year in the monthly total}. A flow's slope is fitted to its
+     * monthly (quarterly, daily...) values, so it is the change of one period's total a year: a
+     * twelfth of the yearly total's change for monthly data, which "nights a year" alone would be
+     * read as, and "nights a month each year" was read as a monthly change.
      */
     static String slopeTime(Measure measure, Frequency frequency) {
-        return measure.summed() && frequency != Frequency.ANNUAL ? perPeriod(frequency) + " each year" : "a year";
+        String total = periodTotal(measure, frequency);
+        return total.isEmpty() ? "a year" : "a year " + total;
+    }
+
+    /**
+     * Which total a flow's slope changes, said after "a year": {@code in the monthly total}; empty
+     * where one value is a year's or the measure is not summed ({@link #slopeTime}).
+     */
+    static String periodTotal(Measure measure, Frequency frequency) {
+        return measure.summed() && frequency != Frequency.ANNUAL ? "in the " + periodly(frequency) + " total" : "";
+    }
+
+    /** The adjective of one period's span: {@code monthly}, {@code quarterly}, {@code daily}. */
+    static String periodly(Frequency frequency) {
+        return switch (frequency) {
+            case ANNUAL -> "yearly";
+            case HALF_YEARLY -> "half-yearly";
+            case QUARTERLY -> "quarterly";
+            case MONTHLY -> "monthly";
+            case WEEKLY -> "weekly";
+            case DAILY, BUSINESS_DAILY -> "daily";
+        };
     }
 
     /** The sentence that says once, in a board reader's words, how the series is treated (its measure). */

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.annalist.findings.CalendarFinding;
+import org.annalist.findings.Analyst;
 import org.annalist.findings.Claim;
 import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Findings;
@@ -58,14 +59,17 @@ final class OutlookCautions {
         boolean sinceBreak = trend.quantity() == Claim.Quantity.TREND_SINCE_BREAK;
         Double slope = sinceBreak ? findings.trend().latestRegime().map(r -> r.slopePerYear()).orElse(null)
                 : findings.trend().slopePerYear();
-        double level = latestYearMean(series);
+        double level = Analyst.latestYearMean(series);
         if (slope == null || !(level > 0)) {
             return "";
         }
-        // the whole period's trend is given on its page as % of its average level: the same figure here
-        Double pagePct = sinceBreak ? null : findings.trend().changePctPerYear();
+        // the trend's pace as its page gives it: the whole period's as % of its average level, the
+        // latest regime's as that regime's one rate (the breaks section gives it too)
+        Double regimePct = sinceBreak ? findings.trend().latestRegime().map(r -> r.changePctPerYear()).orElse(null) : null;
+        Double pagePct = sinceBreak ? regimePct : findings.trend().changePctPerYear();
         double pace = pagePct != null ? pagePct : 100 * slope / level;
-        String basis = pagePct != null ? " a year of its average level" : " a year of the latest year's average level";
+        String basis = !sinceBreak && pagePct != null ? " a year of its average level"
+                : regimePct != null ? SectionViews.regimeRateBasis(findings) : " a year of the latest year's average level";
         OutlookFinding.YearChange change = o.nextYearChange();
         double next = change.pct();
         boolean opposite = Math.signum(pace) != Math.signum(next) && !change.aboutTheSame();
@@ -178,19 +182,5 @@ final class OutlookCautions {
     private static boolean touchesMarchOrApril(Period p) {
         return p.startDate().getMonthValue() <= 4 && p.endDate().getMonthValue() >= 3
                 && p.startDate().getYear() == p.endDate().getYear();
-    }
-
-    /** The mean of the latest year's observed values (the last {@code periodsPerYear} periods). */
-    private static double latestYearMean(Series series) {
-        int n = (int) Math.round(series.frequency().periodsPerYear());
-        double sum = 0;
-        int count = 0;
-        for (int i = Math.max(0, series.size() - n); i < series.size(); i++) {
-            if (!series.isMissing(i)) {
-                sum += series.value(i);
-                count++;
-            }
-        }
-        return count == 0 ? Double.NaN : sum / count;
     }
 }

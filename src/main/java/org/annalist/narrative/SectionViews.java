@@ -4,9 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.annalist.findings.BreakFinding;
-import org.annalist.findings.BreakKind;
 import org.annalist.findings.CycleFinding;
-import org.annalist.findings.Episode;
 import org.annalist.findings.FigurePlan;
 import org.annalist.findings.FormChoice;
 import org.annalist.findings.Findings;
@@ -19,8 +17,8 @@ import org.annalist.findings.Direction;
 import org.annalist.findings.IrregularFinding;
 import org.annalist.findings.SeasonVerdict;
 import org.annalist.findings.Side;
-import org.annalist.findings.Transform;
 import org.annalist.findings.SeasonalityFinding;
+import org.annalist.findings.Transform;
 import org.annalist.findings.TrendFinding;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
@@ -55,7 +53,8 @@ final class SectionViews {
         BriefView.SinceBreak since = t.latestRegime().map(r -> new BriefView.SinceBreak(f.period(r.since()),
                 r.direction() == Direction.INCREASING, r.direction() == Direction.DECREASING,
                 f.signedSignificant(r.slopePerYear()), f.significant(r.lower95()), f.significant(r.upper95()),
-                f.pValue(r.pValue()))).orElse(null);
+                f.pValue(r.pValue()), r.changePctPerYear() == null || !measure.percent() ? ""
+                : f.signedPercent(r.changePctPerYear()) + regimeRateBasis(findings))).orElse(null);
         String kendall = t.seasonalKendall().map(k -> Terms.test(k.test()) + " z = " + f.fixed(k.statistic(), 2) + ", "
                 + f.pValue(k.pValue())).orElse(null);
         return new BriefView.TrendView(true, t.direction() == Direction.INCREASING, t.direction() == Direction.DECREASING,
@@ -67,7 +66,16 @@ final class SectionViews {
                 Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit(), slopeTime());
     }
 
-    /** What a slope in the series' units is counted over: {@code a year}, or {@code a month each year} for a flow. */
+    /**
+     * What the latest regime's rate in % is of, said after it: a compound rate a year for a series
+     * worked in logs, else a share of the latest year's level
+     * ({@link TrendFinding.LatestRegime#changePctPerYear()}).
+     */
+    static String regimeRateBasis(Findings findings) {
+        return findings.transform() == Transform.LOG ? " a year" : " a year of the latest year's average level";
+    }
+
+    /** What a slope in the series' units is counted over: {@code a year}, or {@code a year in the monthly total} for a flow. */
     private String slopeTime() {
         return MeasureWords.slopeTime(measure.measure(), series.frequency());
     }
@@ -127,98 +135,6 @@ final class SectionViews {
         return findings.breaks().stream()
                 .filter(b -> b.ci95().get(0).compareTo(period) <= 0 && period.compareTo(b.ci95().get(1)) <= 0)
                 .reduce((first, second) -> second);
-    }
-
-    List<BriefView.BreakRow> breaks() {
-        List<BriefView.BreakRow> rows = new ArrayList<>();
-        List<BreakFinding> all = findings.breaks();
-        for (int j = 0; j < all.size(); j++) {
-            BreakFinding b = all.get(j);
-            BreakFinding previous = j == 0 ? null : all.get(j - 1);
-            // the regime between two breaks is one line: its level moved when its two ends differ visibly
-            boolean drifted = previous != null
-                    && Math.abs(b.levelBefore() - previous.levelAfter()) > 0.0005 * Math.abs(previous.levelAfter());
-            BreakFinding first = all.get(0);
-            boolean overall = j == all.size() - 1 && j > 0;
-            boolean slopesInPercent = findings.transform() == Transform.LOG && b.levelBefore() > 0 && b.levelAfter() > 0;
-            rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
-                    f.period(b.ci95().get(1)), b.ci95().get(0).equals(b.ci95().get(1)),
-                    f.value(b.levelBefore()), f.value(b.levelAfter()), size(b.levelBefore(), b.levelAfter()),
-                    b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), BREAK_P_FLOOR), b.provisional(),
-                    b.kind().step(), b.kind().slope(), slope(b.slopeBefore(), b.levelBefore(), slopesInPercent),
-                    slope(b.slopeAfter(), b.levelAfter(), slopesInPercent), drifted,
-                    previous == null ? "" : f.value(previous.levelAfter()),
-                    overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
-                    f.value(first.levelBefore()), f.period(first.period()), slopesInPercent ? "a year" : slopeTime(),
-                    bendWithGap(b)));
-        }
-        return rows;
-    }
-
-    /**
-     * Whether a break described as a change of slope still shows a gap between its two fitted lines
-     * as large as a reported step ({@link DecisionRules#MIN_BREAK_CHANGE_PCT}): BIC found a bend alone
-     * about as good as a bend and a step, yet the levels printed beside the words jump, so the words
-     * must name the gap too.
-     */
-    static boolean bendWithGap(BreakFinding b) {
-        return b.kind() == BreakKind.SLOPE && Math.abs(b.changePct()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
-    }
-
-    /**
-     * A regime's slope at a break, with its unit: for a series worked in logs, the line is a curve
-     * whose growth rate is what stays the same along it, so the slope is given as % a year
-     * (exp(log slope) − 1, the log slope being the slope over the level); else in units, counted
-     * over {@link #slopeTime()}.
-     */
-    private String slope(double perYear, double level, boolean inPercent) {
-        if (inPercent) {
-            return f.signedPercent(100 * Math.expm1(perYear / level));
-        }
-        return f.signedSignificant(perYear) + measure.differenceUnit();
-    }
-
-    /** The size of a move from one fitted level to another, without sign: in %, points or units as the measure has it. */
-    private String size(double from, double to) {
-        return measure.size(to - from, from > 0 ? 100 * (to / from - 1) : null);
-    }
-
-    List<BriefView.EpisodeView> episodes() {
-        List<BriefView.EpisodeView> views = new ArrayList<>();
-        Period last = series.period(series.size() - 1);
-        for (Episode e : findings.episodes()) {
-            views.add(new BriefView.EpisodeView(f.period(e.start()), !e.rise(), size(e.before(), e.extremeLevel()),
-                    e.extreme().equals(e.start()), f.period(e.extreme()), f.value(e.before()),
-                    f.value(e.extremeLevel()), f.value(e.returnedLevel()), f.period(e.asOf()), e.asOf().equals(last),
-                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%",
-                    stepBack(e)));
-        }
-        return views;
-    }
-
-    /**
-     * A step against the return within a year of the period the return is measured at: without it,
-     * "had risen back all the way" would stand beside a lower level that followed. Said with the
-     * level it left, against the level before the episode: "It did not stay there: in October 2021 the
-     * level stepped down by 15.2 %, to about 12.0 % below the level before the fall (fitted level 9,120 just after)."
-     * (invented figures). A bend that levels off has no step ({@code BreakKind.SLOPE}) and says nothing here.
-     */
-    private String stepBack(Episode e) {
-        double year = series.frequency().periodsPerYear();
-        for (BreakFinding b : findings.breaks()) {
-            long after = e.asOf().until(b.period());
-            // a step the same way as the return is part of it, not a step back
-            boolean withTheReturn = e.rise() ? b.changePct() < 0 : b.changePct() > 0;
-            if (!b.kind().step() || after <= 0 || after > year || withTheReturn) {
-                continue;
-            }
-            boolean below = b.levelAfter() < e.before();
-            return "It did not stay there: in " + f.period(b.period()) + " the level stepped " + (b.changePct() < 0 ? "down" : "up")
-                    + " by " + size(b.levelBefore(), b.levelAfter()) + ", to about "
-                    + size(e.before(), b.levelAfter()) + (below ? " below" : " above") + " the level before the "
-                    + (e.rise() ? "rise" : "fall") + " (fitted level " + f.value(b.levelAfter()) + " just after).";
-        }
-        return "";
     }
 
     BriefView.IrregularView irregular() {

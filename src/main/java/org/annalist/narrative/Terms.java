@@ -131,15 +131,17 @@ final class Terms {
 
     /**
      * How much of a step has been undone, as a reader would say it: the nearest of a tenth, a
-     * fifth, a quarter, a third, half, two thirds, three quarters, nearly all the way; all the way
-     * from 95 % to 105 %; beyond the level before the step above that.
+     * fifth, a quarter, a third, half, two thirds, three quarters, nearly all the way; to about its
+     * level before the step from 95 % to 105 %; above (below) it beyond that. A plain comparison of
+     * levels: where the level was moving before the step, the brief compares with the old path
+     * carried forward too ({@code BreakViews}).
      */
     static String shareOfTheWay(double share) {
         if (share > 1.05) {
-            return "beyond the level before the step";
+            return "past its level before the step";
         }
         if (share >= 0.95) {
-            return "all the way";
+            return "to about its level before the step";
         }
         double[] at = {0.1, 0.2, 0.25, 1.0 / 3, 0.5, 2.0 / 3, 0.75, 0.9};
         String[] words = {"about a tenth of the way", "about a fifth of the way", "about a quarter of the way",

@@ -19,6 +19,7 @@ import org.annalist.series.Series;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
+import org.apache.pdfbox.text.TextPosition;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.XYPlot;
 import org.junit.jupiter.api.BeforeAll;
@@ -79,6 +80,46 @@ class BoardBriefPagesTest {
                 // before: the body's bottom margin spilled onto a sixth page that held nothing else
                 assertThat(body).as("page %d of %d", page, document.getNumberOfPages()).isNotEmpty();
             }
+        }
+    }
+
+    /**
+     * Every page but the last is filled to below its middle: a series' section that did not fit
+     * whole used to move to the next page, leaving page 2 with the small multiples alone (its
+     * lowest line at about 45 % of the page, pdftoppm -r 70 of the demo before the change) and each later
+     * page with one series. The 60 % floor is our rule.
+     */
+    @Test
+    void noPageButTheLastEndsInItsUpperHalf() throws IOException {
+        try (PDDocument document = Loader.loadPDF(pdf.toFile())) {
+            for (int page = 1; page < document.getNumberOfPages(); page++) {
+                float height = document.getPage(page - 1).getMediaBox().getHeight();
+                float[] lowest = {0};
+                PDFTextStripper stripper = new PDFTextStripper() {
+                    @Override
+                    protected void writeString(String line, List<TextPosition> positions) throws IOException {
+                        // the footer sits in the bottom margin (22 mm of 297, brief.css); above it is the body
+                        for (TextPosition p : positions) {
+                            if (p.getYDirAdj() < height * (1 - 22.0 / 297)) {
+                                lowest[0] = Math.max(lowest[0], p.getYDirAdj());
+                            }
+                        }
+                        super.writeString(line, positions);
+                    }
+                };
+                stripper.setStartPage(page);
+                stripper.setEndPage(page);
+                stripper.getText(document);
+                assertThat(lowest[0] / height).as("lowest line of page %d of %d", page, document.getNumberOfPages())
+                        .isGreaterThan(0.6f);
+            }
+        }
+    }
+
+    @Test
+    void aSeriesChartNamesItsSeriesSoThatItReadsAloneAtThePageTop() {
+        for (String name : List.of("Total", "Domestic", "Brevania", "Long-haul")) {
+            assertThat(text).contains(name + " (nights), January 2011 to October 2026.");
         }
     }
 

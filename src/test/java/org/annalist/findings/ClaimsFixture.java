@@ -63,7 +63,7 @@ public final class ClaimsFixture {
         trend = new TrendFinding(trend.direction(), trend.test(), trend.statistic(), trend.pValue(), trend.slopePerYear(),
                 trend.slopeCi95(), trend.changePctPerYear(), Optional.empty(), trend.n(),
                 Optional.of(new TrendFinding.LatestRegime(since, direction, slopePerYear, slopePerYear - 500,
-                        slopePerYear + 500, p, (int) since.until(end) + 1)));
+                        slopePerYear + 500, p, (int) since.until(end) + 1, null)));
         return this;
     }
 

@@ -78,7 +78,7 @@ class BreaksAsFittedTest {
     }
 
     @Test
-    void aFlowsChangeOfSlopeInUnitsIsCountedPerMonthEachYear() {
+    void aFlowsChangeOfSlopeInUnitsIsCountedAYearInTheMonthlyTotal() {
         // flat at 10,000 nights a month for six years, then rising 1,800 a month each year, with a
         // season of constant size (so worked in units, not logs) and noise of 100
         Random random = new Random(29);
@@ -91,12 +91,12 @@ class BreaksAsFittedTest {
         Findings f = analyse(s);
         assertThat(f.transform()).as("a season of constant size is worked in units").isNotEqualTo(Transform.LOG);
         BreakFinding b = f.breaks().stream().filter(k -> k.kind().slope()).findFirst().orElseThrow();
-        SectionViews views = new SectionViews(s, f, FigurePlan.of(s, f), Formats.forValues(x, Locale.ENGLISH));
+        BreakViews views = new BreakViews(s, f, Formats.forValues(x, Locale.ENGLISH));
         BriefView.BreakRow row = views.breaks().get(f.breaks().indexOf(b));
         // a month's nights change by the slope each year: "a year" alone would read as the yearly total's change
         assertThat(row.slopeAfter()).endsWith("\u00A0nights");
-        assertThat(row.slopeTime()).isEqualTo("a month each year");
-        assertThat(AnalystNotes.of(f)).contains(" a month each year; sup-F").doesNotContain("per year (95%");
+        assertThat(row.slopeTime()).isEqualTo("a year in the monthly total");
+        assertThat(AnalystNotes.of(f)).contains(" a year in the monthly total; sup-F").doesNotContain("per year (95%");
     }
 
     /**
@@ -106,11 +106,11 @@ class BreaksAsFittedTest {
      */
     @Test
     void aBendIsSaidToHaveAGapOnlyWhenItsFittedLinesLieAStepApart() {
-        assertThat(SectionViews.bendWithGap(bend(BreakKind.SLOPE, 10_360, 10_970))).isTrue();
-        assertThat(SectionViews.bendWithGap(bend(BreakKind.SLOPE, 14_562, 14_006))).isTrue();
-        assertThat(SectionViews.bendWithGap(bend(BreakKind.SLOPE, 10_000, 10_100))).isFalse();
-        assertThat(SectionViews.bendWithGap(bend(BreakKind.BOTH, 10_360, 10_970))).isFalse();
-        assertThat(SectionViews.bendWithGap(bend(BreakKind.LEVEL, 10_360, 10_970))).isFalse();
+        assertThat(BreakViews.bendWithGap(bend(BreakKind.SLOPE, 10_360, 10_970))).isTrue();
+        assertThat(BreakViews.bendWithGap(bend(BreakKind.SLOPE, 14_562, 14_006))).isTrue();
+        assertThat(BreakViews.bendWithGap(bend(BreakKind.SLOPE, 10_000, 10_100))).isFalse();
+        assertThat(BreakViews.bendWithGap(bend(BreakKind.BOTH, 10_360, 10_970))).isFalse();
+        assertThat(BreakViews.bendWithGap(bend(BreakKind.LEVEL, 10_360, 10_970))).isFalse();
     }
 
     private static BreakFinding bend(BreakKind kind, double before, double after) {
@@ -226,7 +226,7 @@ class BreaksAsFittedTest {
         assertThat(Terms.shareOfTheWay(0.27)).isEqualTo("about a quarter of the way");
         assertThat(Terms.shareOfTheWay(0.5)).isEqualTo("about half way");
         assertThat(Terms.shareOfTheWay(0.7)).isEqualTo("about two thirds of the way");
-        assertThat(Terms.shareOfTheWay(1.0)).isEqualTo("all the way");
-        assertThat(Terms.shareOfTheWay(1.3)).isEqualTo("beyond the level before the step");
+        assertThat(Terms.shareOfTheWay(1.0)).isEqualTo("to about its level before the step");
+        assertThat(Terms.shareOfTheWay(1.3)).isEqualTo("past its level before the step");
     }
 }

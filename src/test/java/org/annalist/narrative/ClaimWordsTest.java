@@ -28,21 +28,22 @@ class ClaimWordsTest {
         String[] tile = words(claims).trendTile();
         // 2935 to three significant digits (Formats.significant); not the whole period's +1.9 % a year
         // a monthly flow: the slope is the change of a month's nights each year, not of the year's
-        assertThat(tile[0]).isEqualTo("+2,940\u00a0nights a month each year");
-        assertThat(tile[1]).startsWith("since August 2022");
+        // the tile's value is short; its note says what the slope is a year of
+        assertThat(tile[0]).isEqualTo("+2,940 a\u00a0year");
+        assertThat(tile[1]).startsWith("since August 2022; in monthly nights; Sen slope");
     }
 
     @Test
-    void aMonthlyFlowsSlopeIsSaidAsTheChangeOfAMonthsTotalEachYear() {
+    void aMonthlyFlowsSlopeIsSaidAsAYearlyChangeInTheMonthlyTotal() {
         Claims claims = ClaimsFixture.monthly(END, 190).latest(1).yearToDate(4).rollingYear(4)
                 .wholeTrend(Direction.INCREASING, 1.9, 0.0001).step(Period.month(2022, 8), 4)
                 .sinceBreak(Period.month(2022, 8), Direction.INCREASING, 2935, 0.0001).findings().claims();
         ClaimWords words = words(claims);
         assertThat(words.trendSentence())
-                .startsWith("Since August 2022 the level has been rising, by about 2,940\u00a0nights a month each year (p");
+                .startsWith("Since August 2022 the level has been rising, by about 2,940\u00a0nights a year in the monthly total (p");
         // analyze's claim lines size the same claim in the same words
         assertThat(words.signedSize(claims.find(Claim.Quantity.TREND_SINCE_BREAK).orElseThrow()))
-                .isEqualTo("+2,940\u00a0nights a month each year");
+                .isEqualTo("+2,940\u00a0nights a year in the monthly total");
     }
 
     @Test

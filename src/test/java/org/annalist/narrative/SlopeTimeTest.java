@@ -15,13 +15,13 @@ import org.junit.jupiter.api.Test;
 class SlopeTimeTest {
 
     @Test
-    void aFlowMeasuredMoreOftenThanYearlyCountsItsSlopePerPeriodEachYear() {
-        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.MONTHLY)).isEqualTo("a month each year");
-        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.QUARTERLY)).isEqualTo("a quarter each year");
-        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.HALF_YEARLY)).isEqualTo("a half-year each year");
-        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.WEEKLY)).isEqualTo("a week each year");
-        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.DAILY)).isEqualTo("a day each year");
-        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.BUSINESS_DAILY)).isEqualTo("a day each year");
+    void aFlowMeasuredMoreOftenThanYearlyCountsItsSlopeAYearInOnePeriodsTotal() {
+        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.MONTHLY)).isEqualTo("a year in the monthly total");
+        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.QUARTERLY)).isEqualTo("a year in the quarterly total");
+        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.HALF_YEARLY)).isEqualTo("a year in the half-yearly total");
+        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.WEEKLY)).isEqualTo("a year in the weekly total");
+        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.DAILY)).isEqualTo("a year in the daily total");
+        assertThat(MeasureWords.slopeTime(Measure.FLOW, Frequency.BUSINESS_DAILY)).isEqualTo("a year in the daily total");
     }
 
     @Test

@@ -1,0 +1,179 @@
+package org.annalist.narrative;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.annalist.findings.BreakFinding;
+import org.annalist.findings.BreakKind;
+import org.annalist.findings.DecisionRules;
+import org.annalist.findings.Episode;
+import org.annalist.findings.Findings;
+import org.annalist.findings.Transform;
+import org.annalist.findings.TrendFinding;
+import org.annalist.series.Period;
+import org.annalist.series.Series;
+
+/** The views of the brief's structural changes: the breaks as fitted and the episodes of a step and a return. */
+final class BreakViews {
+
+    private final Series series;
+    private final Findings findings;
+    private final Formats f;
+    private final MeasureWords measure;
+
+    BreakViews(Series series, Findings findings, Formats f) {
+        this.series = series;
+        this.findings = findings;
+        this.f = f;
+        this.measure = MeasureWords.of(series, findings, f);
+    }
+
+    List<BriefView.BreakRow> breaks() {
+        List<BriefView.BreakRow> rows = new ArrayList<>();
+        List<BreakFinding> all = findings.breaks();
+        for (int j = 0; j < all.size(); j++) {
+            BreakFinding b = all.get(j);
+            BreakFinding previous = j == 0 ? null : all.get(j - 1);
+            // the regime between two breaks is one line: its level moved when its two ends differ visibly
+            boolean drifted = previous != null
+                    && Math.abs(b.levelBefore() - previous.levelAfter()) > 0.0005 * Math.abs(previous.levelAfter());
+            BreakFinding first = all.get(0);
+            boolean overall = j == all.size() - 1 && j > 0;
+            boolean slopesInPercent = findings.transform() == Transform.LOG && b.levelBefore() > 0 && b.levelAfter() > 0;
+            Optional<TrendFinding.LatestRegime> latest = j == all.size() - 1 ? latestRegimeFrom(b) : Optional.empty();
+            rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
+                    f.period(b.ci95().get(1)), b.ci95().get(0).equals(b.ci95().get(1)),
+                    f.value(b.levelBefore()), f.value(b.levelAfter()), size(b.levelBefore(), b.levelAfter()),
+                    b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), SectionViews.BREAK_P_FLOOR),
+                    b.provisional(), b.kind().step(), b.kind().slope(),
+                    slope(b.slopeBefore(), b.levelBefore(), slopesInPercent),
+                    slope(b.slopeAfter(), b.levelAfter(), slopesInPercent), drifted,
+                    previous == null ? "" : f.value(previous.levelAfter()),
+                    overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
+                    f.value(first.levelBefore()), f.period(first.period()), slopesInPercent ? "a year" : slopeTime(),
+                    bendWithGap(b), joined(b), latest.isPresent() && b.kind().slope()));
+        }
+        return rows;
+    }
+
+    /**
+     * The trend finding's latest regime when it is the one {@code last} opens and gave the break its
+     * slope after ({@code findings.BreakAnalysis.withLatestRate}): its rate is the regime's one rate.
+     */
+    private Optional<TrendFinding.LatestRegime> latestRegimeFrom(BreakFinding last) {
+        return findings.trend().latestRegime().filter(r -> r.since().equals(last.period())
+                && (findings.transform() != Transform.LOG || r.changePctPerYear() != null));
+    }
+
+    /**
+     * Whether the two fitted levels at the break print as one: the lines join (a bend, no step), so
+     * the brief gives one level at the break, never "64,016 just before, 64,016 just after", which
+     * reads as a step that moved nothing.
+     */
+    private boolean joined(BreakFinding b) {
+        return f.value(b.levelBefore()).equals(f.value(b.levelAfter()));
+    }
+
+    /** What a slope in the series' units is counted over ({@link MeasureWords#slopeTime}). */
+    private String slopeTime() {
+        return MeasureWords.slopeTime(measure.measure(), series.frequency());
+    }
+
+    /**
+     * Whether a break described as a change of slope still shows a gap between its two fitted lines
+     * as large as a reported step ({@link DecisionRules#MIN_BREAK_CHANGE_PCT}): BIC found a bend alone
+     * about as good as a bend and a step, yet the levels printed beside the words jump, so the words
+     * must name the gap too.
+     */
+    static boolean bendWithGap(BreakFinding b) {
+        return b.kind() == BreakKind.SLOPE && Math.abs(b.changePct()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
+    }
+
+    /**
+     * A regime's slope at a break, with its unit: for a series worked in logs, the line is a curve
+     * whose growth rate is what stays the same along it, so the slope is given as % a year
+     * (exp(log slope) − 1, the log slope being the slope over the level); else in units, counted
+     * over {@link #slopeTime()}.
+     */
+    private String slope(double perYear, double level, boolean inPercent) {
+        if (inPercent) {
+            return f.signedPercent(100 * Math.expm1(perYear / level));
+        }
+        return f.signedSignificant(perYear) + measure.differenceUnit();
+    }
+
+    /** The size of a move from one fitted level to another, without sign: in %, points or units as the measure has it. */
+    private String size(double from, double to) {
+        return measure.size(to - from, from > 0 ? 100 * (to / from - 1) : null);
+    }
+
+    List<BriefView.EpisodeView> episodes() {
+        List<BriefView.EpisodeView> views = new ArrayList<>();
+        Period last = series.period(series.size() - 1);
+        for (Episode e : findings.episodes()) {
+            views.add(new BriefView.EpisodeView(f.period(e.start()), !e.rise(), size(e.before(), e.extremeLevel()),
+                    e.extreme().equals(e.start()), f.period(e.extreme()), f.value(e.before()),
+                    f.value(e.extremeLevel()), f.value(e.returnedLevel()), f.period(e.asOf()), e.asOf().equals(last),
+                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%",
+                    stepBack(e), oldPath(e)));
+        }
+        return views;
+    }
+
+    /**
+     * The old path carried forward: "risen back to about its level before the fall" compares with
+     * a level the old line would have left behind had it gone on moving. Said when, by the period
+     * the return is measured at, the old line's slope would have carried the level at least
+     * {@link DecisionRules#MIN_BREAK_CHANGE_PCT} away from where it stood before the step: "Had the
+     * level gone on as before the fall (+1.3 % a year), it would have reached about 72,600 by
+     * October 2026; the fitted level there, 68,700, is 5.4 % below that." (invented figures). On logs the old
+     * line grows at its rate, else by its slope in units, as the break's fitted lines do.
+     */
+    private String oldPath(Episode e) {
+        Optional<BreakFinding> step = findings.breaks().stream().filter(b -> b.period().equals(e.start())).findFirst();
+        if (step.isEmpty() || step.get().slopeBefore() == 0 || !(step.get().levelBefore() > 0)
+                && findings.transform() == Transform.LOG) {
+            return "";
+        }
+        BreakFinding b = step.get();
+        // from the break instant, half a period before the step's first period, to the period measured at
+        double years = (e.start().until(e.asOf()) + 0.5) / series.frequency().periodsPerYear();
+        boolean log = findings.transform() == Transform.LOG;
+        double rate = b.slopeBefore() / b.levelBefore();
+        double carried = log ? b.levelBefore() * Math.exp(rate * years) : b.levelBefore() + b.slopeBefore() * years;
+        if (Math.abs(carried - b.levelBefore()) < DecisionRules.MIN_BREAK_CHANGE_PCT / 100 * Math.abs(b.levelBefore())) {
+            return "";
+        }
+        String pace = log ? f.signedPercent(100 * Math.expm1(rate)) + " a year"
+                : f.signedSignificant(b.slopeBefore()) + measure.differenceUnit() + " " + slopeTime();
+        return "Had the level gone on as before the " + (e.rise() ? "rise" : "fall") + " (" + pace
+                + "), it would have reached about " + f.significant(carried) + " by " + f.period(e.asOf()) + "; the fitted level"
+                + " there, " + f.value(e.returnedLevel()) + ", is " + size(carried, e.returnedLevel())
+                + (e.returnedLevel() < carried ? " below" : " above") + " that.";
+    }
+
+    /**
+     * A step against the return within a year of the period the return is measured at: without it,
+     * "had risen back all the way" would stand beside a lower level that followed. Said with the
+     * level it left, against the level before the episode: "It did not stay there: in October 2021 the
+     * level stepped down by 15.2 %, to about 12.0 % below the level before the fall (fitted level 9,120 just after)."
+     * (invented figures). A bend that levels off has no step ({@code BreakKind.SLOPE}) and says nothing here.
+     */
+    private String stepBack(Episode e) {
+        double year = series.frequency().periodsPerYear();
+        for (BreakFinding b : findings.breaks()) {
+            long after = e.asOf().until(b.period());
+            // a step the same way as the return is part of it, not a step back
+            boolean withTheReturn = e.rise() ? b.changePct() < 0 : b.changePct() > 0;
+            if (!b.kind().step() || after <= 0 || after > year || withTheReturn) {
+                continue;
+            }
+            boolean below = b.levelAfter() < e.before();
+            return "It did not stay there: in " + f.period(b.period()) + " the level stepped " + (b.changePct() < 0 ? "down" : "up")
+                    + " by " + size(b.levelBefore(), b.levelAfter()) + ", to about "
+                    + size(e.before(), b.levelAfter()) + (below ? " below" : " above") + " the level before the "
+                    + (e.rise() ? "rise" : "fall") + " (fitted level " + f.value(b.levelAfter()) + " just after).";
+        }
+        return "";
+    }
+}
