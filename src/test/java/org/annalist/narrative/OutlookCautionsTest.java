@@ -80,14 +80,39 @@ class OutlookCautionsTest {
                 .doesNotContain("latest level");
     }
 
+    /**
+     * Easter 2027 is on 28 March (the published table of Easter dates), so all eight days before it
+     * fall in March; the forecasts carry March's average share of those days over the years fitted.
+     * The expected miss is derived here from the definition: on logs, exp(β · (share − average)) − 1.
+     */
     @Test
-    void anEasterEffectIsSaidNotToMoveWithTheDateWhenTheOutlookReachesMarchOrApril() {
+    void anEasterEffectNamesNextEastersDateAndWhichMonthTheForecastsMayMissAndByHowMuch() {
         CalendarFinding.Effect easter = findings.calendar().effects().stream()
                 .filter(e -> e.name().equals(CalendarFinding.EASTER)).findFirst().orElseThrow();
         assertThat(easter.kept()).as("the demo plants an Easter effect in the home market").isTrue();
-        String note = OutlookCautions.easter(findings, f, true);
+        assertThat(findings.transform()).isEqualTo(org.annalist.findings.Transform.LOG);
+        // March's share of the 8 days before Easter, averaged over the years fitted (derived in the test)
+        double sum = 0;
+        int years = 0;
+        for (int y = findings.outlook().fittedFrom().year(); y <= 2026; y++) {
+            java.time.LocalDate sunday = org.annalist.analysis.calendar.Easter.sunday(y);
+            long inMarch = 0;
+            for (int d = 1; d <= 8; d++) {
+                inMarch += sunday.minusDays(d).getMonthValue() == 3 ? 1 : 0;
+            }
+            sum += inMarch / 8.0;
+            years++;
+        }
+        double average = sum / years;
+        double march = 100 * Math.expm1(easter.coefficient() * (1 - average));
+        double april = 100 * Math.expm1(easter.coefficient() * (average - 1));
+        String note = OutlookCautions.easter(domestic, findings, f, true);
         assertThat(note).contains("about " + f.percent(easter.effectPct()) + " higher", "do not move it with Easter's date",
-                "wherever Easter falls in 2027");
+                "Easter 2027 falls on 28 March, with all 8 days before it in March, against "
+                        + f.fixed(100 * average, 0) + "\u00A0% of them on average in 2011 to 2026: by the estimated effect,"
+                        + " March 2027 may turn out about " + f.percent(march) + " above its forecast and April 2027 about "
+                        + f.percent(-april) + " below.");
+        assertThat(march).as("a late-March Easter in a year fitted mostly on later ones").isGreaterThan(3);
         assertThat(OutlookViews.of(domestic, findings, f, MeasureWords.of(domestic, findings, f)).caveats()).contains(note);
     }
 
@@ -95,6 +120,6 @@ class OutlookCautionsTest {
     void noEasterWordsWhenTheOutlookStopsBeforeMarch() {
         Findings shortOutlook = new Analyst(java.util.Optional.empty(), java.util.Optional.empty(), java.util.List.of(),
                 java.util.Optional.of(3)).analyse(domestic);   // November 2026 to January 2027
-        assertThat(OutlookCautions.easter(shortOutlook, f, true)).isEmpty();
+        assertThat(OutlookCautions.easter(domestic, shortOutlook, f, true)).isEmpty();
     }
 }
