@@ -210,7 +210,7 @@ public final class BriefPipeline {
         warnings.addAll(seriesWarnings);
         BriefWriter.Page page = new BriefWriter.Page(job.input(), file.read(), output.masthead(),
                 output.titleFor(job.series(), series), GenerationTime.orDefault(output.masthead().generatedAt()),
-                singleOutput(output, selected), seriesWarnings);
+                singleOutput(output, selected), seriesWarnings, selected.cut());
         BriefWriter.Draft draft = writer.draft(page, series, findings);
         warnings.addAll(draft.warnings());
         Map<String, String> charts = new LinkedHashMap<>();
@@ -266,7 +266,7 @@ public final class BriefPipeline {
         List<String> warnings = new ArrayList<>(ReadingWarnings.ofFile(file.read()));
         warnings.addAll(seriesWarnings);
         BriefWriter.Page page = new BriefWriter.Page(job.input(), file.read(), out.masthead(),
-                out.titleFor(job.series(), series.get(0)), generatedAt, output, seriesWarnings);
+                out.titleFor(job.series(), series.get(0)), generatedAt, output, seriesWarnings, selected.get(0).cut());
         if (out.combined().isPresent()) {
             BriefWriter.CombinedBrief combined = writer.combined(page, series, findings, out.combined().get());
             SideOutputs.write(combined, series, out.sideOutputs());

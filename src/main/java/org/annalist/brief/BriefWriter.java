@@ -67,9 +67,10 @@ final class BriefWriter {
      * @param title       the title as this brief prints it
      * @param generatedAt resolved: the time the brief states as made
      * @param notes       warnings about the series beside the reader's own (negative counts, holiday dates outside the data)
+     * @param cut         where the series was cut short of the file's end at the job's latest period, if it was
      */
     record Page(Job.Input input, ReadResult read, BriefOutput.MastheadChoices choices, String title,
-                Instant generatedAt, Path output, List<String> notes) {
+                Instant generatedAt, Path output, List<String> notes, Optional<SourceFacts.Cut> cut) {
         Page {
             notes = List.copyOf(notes);
         }
@@ -126,7 +127,7 @@ final class BriefWriter {
     Draft draft(Page page, Series series, Findings findings) {
         Fonts.registerWithAwt();
         Masthead masthead = masthead(page);
-        SourceFacts source = sourceFacts(page.read(), page.notes());
+        SourceFacts source = sourceFacts(page.read(), page.notes()).withCut(page.cut());
         List<String> warnings = new ArrayList<>();
         String missing = Fonts.missingGlyphs(String.join(" ", page.title(), page.choices().organisation(), series.name(),
                 series.unit(), source.file(), String.join(" ", source.notes())));
@@ -150,7 +151,8 @@ final class BriefWriter {
         Optional<PartsCheck> check = choices.total()
                 .flatMap(name -> series.stream().filter(s -> s.name().equals(name)).findFirst())
                 .map(t -> PartsCheck.of(t, series.stream().filter(s -> s != t).toList()));
-        MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read(), page.notes()), masthead, check,
+        MultiBriefView view = MultiBriefViews.of(series, findings, sourceFacts(page.read(), page.notes()).withCut(page.cut()),
+                masthead, check,
                 choices.sortBy());
         RenderedTemplate xhtml = engine(page).renderTraced(TemplateEngine.MULTI_TEMPLATE, view, masthead.language());
         Figure multiples = SmallMultiplesChart.of(series, findings);
@@ -238,7 +240,9 @@ final class BriefWriter {
                 read.sheet().map(s -> "sheet " + s.number() + " '" + s.name() + "' of an " + s.format() + " workbook"));
         return new SourceFacts(Path.of(read.file()).getFileName().toString(), read.sha256(), read.rowsRead(), reading,
                 java.util.stream.Stream.concat(java.util.stream.Stream.concat(dataSet(read),
-                        read.warnings().stream().map(p -> p.withFileNameOnly().toString())), notes.stream()).toList(), "");
+                        read.warnings().stream().map(DataProblem::withFileNameOnly)
+                        .map(p -> DataNotes.readerWarning(p.file(), p.where(), p.message()))), notes.stream()).toList(), "",
+                Optional.empty());
     }
 
     /** The dimensions a statistics portal's series share ({@code Unit: Number; Country: Austria}), as a note naming the file. */

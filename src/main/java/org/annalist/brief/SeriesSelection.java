@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import org.annalist.findings.RatioParts;
 import org.annalist.narrative.SeriesNames;
+import org.annalist.narrative.SourceFacts;
 import org.annalist.series.PeriodLength;
 import org.annalist.ingest.ReadResult;
 import org.annalist.series.Period;
@@ -26,8 +27,9 @@ public final class SeriesSelection {
      * @param asked  the name the job gave for it (the series' own name when it named none)
      * @param series the series, prepared and cut
      * @param parts  for a derived ratio, the series its spans are computed from
+     * @param cut    where the series was cut short of the file's end at the job's latest period, if it was
      */
-    public record Selected(String asked, Series series, Optional<RatioParts> parts) {
+    public record Selected(String asked, Series series, Optional<RatioParts> parts, Optional<SourceFacts.Cut> cut) {
 
         /** The series is a ratio derived from two of the file's series. */
         public boolean derived() {
@@ -135,11 +137,26 @@ public final class SeriesSelection {
                 throw new SelectionProblem(new SelectionProblem.NotPerDay(prepared, e.getMessage()));
             }
         }
-        return new Selected(asked, cut(prepared, choice, read, asked, false), Optional.empty());
+        Series cut = cut(prepared, choice, read, asked, false);
+        return new Selected(asked, cut, Optional.empty(), leftOut(prepared, cut));
     }
 
     private static Selected ratio(Job job, ReadResult read, String asked, Series ratio, RatioParts parts) {
-        return new Selected(asked, cut(ratio, job.series(), read, asked, true), Optional.of(parts));
+        Series cut = cut(ratio, job.series(), read, asked, true);
+        return new Selected(asked, cut, Optional.of(parts), leftOut(ratio, cut));
+    }
+
+    /** What cutting {@code whole} to {@code cut} left out: its later periods with a value; empty when none. */
+    private static Optional<SourceFacts.Cut> leftOut(Series whole, Series cut) {
+        int later = 0;
+        Period last = null;
+        for (int i = cut.size(); i < whole.size(); i++) {
+            if (!whole.isMissing(i)) {
+                later++;
+                last = whole.period(i);
+            }
+        }
+        return later == 0 ? Optional.empty() : Optional.of(new SourceFacts.Cut(cut.end(), later, last));
     }
 
     /** The series up to the latest period the job names, when it names one. */

@@ -224,7 +224,7 @@ final class CalendarAnalysis {
             int nightsBefore = CalendarRegressors.weekendNights(before);
             return nightsNow == nightsBefore ? Optional.empty()
                     : Optional.of(new CalendarNote.WeekendNights(now, before, nightsNow, nightsBefore,
-                    differencePct(series, r, fit, CalendarEffects.WEEKEND, log)));
+                    differencePct(series, r, fit, CalendarEffects.WEEKEND, log), estimatedP(fit, CalendarEffects.WEEKEND)));
         }
         int daysNow = CalendarRegressors.weekendDays(now);
         int daysBefore = CalendarRegressors.weekendDays(before);
@@ -232,7 +232,14 @@ final class CalendarAnalysis {
         if (daysNow == daysBefore || (fit.weekdays == WeekdayKind.OTHER && effect.isEmpty())) {
             return Optional.empty();
         }
-        return Optional.of(new CalendarNote.WeekendDays(now, before, daysNow, daysBefore, fit.weekdays, effect));
+        return Optional.of(new CalendarNote.WeekendDays(now, before, daysNow, daysBefore, fit.weekdays, effect,
+                estimatedP(fit, CalendarEffects.WEEKEND_DAYS)));
+    }
+
+    /** The p-value of the named effect where it was estimated, significant or not. */
+    private static Optional<Double> estimatedP(Fit fit, String name) {
+        return fit.result.flatMap(r -> r.effects().stream().filter(e -> e.name().equals(name)).findFirst())
+                .map(CalendarEffects.Effect::pValue);
     }
 
     /**

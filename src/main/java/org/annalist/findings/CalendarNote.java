@@ -43,9 +43,14 @@ public sealed interface CalendarNote {
                         Optional<Double> explainedPct) implements CalendarNote {
     }
 
-    /** A month had more or fewer Friday and Saturday nights than a year earlier (a series of overnight stays). */
-    record WeekendNights(Period now, Period before, int nightsNow, int nightsBefore, Optional<Double> effectPct)
-            implements CalendarNote {
+    /**
+     * A month had more or fewer Friday and Saturday nights than a year earlier (a series of overnight stays).
+     *
+     * @param effectPct what the difference did to the change, in %, when the effect counts
+     * @param pValue    the estimated effect's p-value, whether it counts or not; empty when it was not estimated
+     */
+    record WeekendNights(Period now, Period before, int nightsNow, int nightsBefore, Optional<Double> effectPct,
+                         Optional<Double> pValue) implements CalendarNote {
     }
 
     /**
@@ -55,9 +60,10 @@ public sealed interface CalendarNote {
      * @param weekdays  the kind of series the count was noted for
      * @param effectPct what the difference did to the change on a year earlier, in %, when the effect
      *                  counts: (1 + change) / (1 + change without it) − 1
+     * @param pValue    the estimated effect's p-value, whether it counts or not; empty when it was not estimated
      */
     record WeekendDays(Period now, Period before, int daysNow, int daysBefore, WeekdayKind weekdays,
-                       Optional<Double> effectPct) implements CalendarNote {
+                       Optional<Double> effectPct, Optional<Double> pValue) implements CalendarNote {
     }
 
     /**

@@ -7,6 +7,7 @@ import org.annalist.findings.CalendarFinding;
 import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookFinding;
+import org.annalist.findings.Transform;
 
 /** The methods appendix: each method with its source and the settings this brief used. */
 final class AppendixViews {
@@ -46,9 +47,10 @@ final class AppendixViews {
                 + "Bai (1997); PELT: Killick, Fearnhead & Eckley (2012)", Typography.printed(Terms.breakMethod(findings.breakMethod()))));
         rows.add(new BriefView.MethodRow("Outliers", "modified z-score of the decomposition remainder (Iglewicz & "
                 + "Hoaglin 1993), robust scale (MAD)", outlierSettings(findings, f)));
+        calendarRow(findings, f).ifPresent(rows::add);
         easterRow(findings).ifPresent(rows::add);
         rows.add(new BriefView.MethodRow("Irregular fluctuation", "share of the variation around the long-run "
-                + "straight line carried by the remainder", ""));
+                + "straight line carried by the remainder", irregularSettings(findings, f)));
         if (findings.outlook() != null) {
             OutlookFinding o = findings.outlook();
             boolean shortSeries = o.chosenBecause().basis() == OutlookFinding.Choice.Basis.SHORT_SERIES;
@@ -96,6 +98,58 @@ final class AppendixViews {
                     + " structural change's 95\u00A0% interval, " + (within.size() == 1 ? "is" : "are") + " reported as well";
         }
         return settings;
+    }
+
+    /**
+     * The calendar effects as {@code CalendarEffects.robust} and {@code CalendarAnalysis} estimate
+     * them: on the remainder of the decomposition, each regressor centred on its mean for its
+     * calendar month, a Huber start that sets one-offs aside, then least squares with Newey–West
+     * errors; an effect counts at {@link DecisionRules#ALPHA}. Every effect estimated is listed with
+     * its size and p-value, kept or not, so that "expected from trend, season and calendar" can be
+     * traced; no row where none was estimated.
+     */
+    static Optional<BriefView.MethodRow> calendarRow(Findings findings, Formats f) {
+        CalendarFinding c = findings.calendar();
+        if (c == null || c.effects().isEmpty()) {
+            return Optional.empty();
+        }
+        List<String> effects = new ArrayList<>();
+        for (CalendarFinding.Effect e : c.effects()) {
+            String per = e.name().equals(CalendarFinding.EASTER) ? " for a period holding all "
+                    + org.annalist.findings.EasterAhead.WINDOW + " days before Easter Sunday"
+                    : e.name().equals(CalendarFinding.WEEKEND_NIGHTS) ? " per extra Friday or Saturday night"
+                    : e.name().equals(CalendarFinding.WEEKEND_DAYS) ? " per extra Saturday or Sunday" : " for all its days";
+            effects.add(CalendarSentences.effectName(e.name()) + " " + f.signedPercent(e.effectPct()) + per + " ("
+                    + f.pValue(e.pValue()) + (e.kept() ? ", allowed for" : ", not significant, not allowed for") + ")");
+        }
+        String screened = c.screenedOut().isEmpty() ? "" : "; " + Terms.number(c.screenedOut().size())
+                + (c.screenedOut().size() == 1 ? " period" : " periods") + " set aside as one-offs";
+        return Optional.of(new BriefView.MethodRow("Calendar effects", "least squares on the decomposition remainder, "
+                + "each regressor centred on its calendar month's mean; Easter as the share of the days before Easter "
+                + "Sunday in each period (Bell & Hillmer 1983); one-offs set aside after a Huber start (Huber 1964; "
+                + "Rousseeuw & Leroy 1987); Newey\u2013West standard errors (Newey & West 1987, 1994)",
+                String.join("; ", effects) + screened + "; an effect is allowed for when p < "
+                        + f.fixed(DecisionRules.ALPHA, 2) + ": in what is expected from trend, season and calendar,"
+                        + " before one-offs and structural breaks are looked for"));
+    }
+
+    /**
+     * The irregular share as {@code Irregular.of} measures it: the variance of the remainder (the
+     * values less the decomposition's trend and seasonal, or less the centred moving average without
+     * one; on the logarithms for a multiplicative series) over the variance of the values around
+     * their least-squares line, with the cut-offs that name it.
+     */
+    static String irregularSettings(Findings findings, Formats f) {
+        if (findings.irregular() == null || findings.irregular().share() == null) {
+            return "not measured: too few periods";
+        }
+        String remainder = findings.decomposition().isPresent() ? "the values less the decomposition's trend and seasonal"
+                : "the values less their centred moving average";
+        String scale = findings.transform() == Transform.LOG ? ", on the logarithms" : "";
+        return "variance of the remainder (" + remainder + scale + ") over the variance of the values around their"
+                + " least-squares line: " + f.fixed(100 * findings.irregular().share(), 0) + "\u00A0%; small below "
+                + f.fixed(100 * DecisionRules.SMALL_IRREGULAR_SHARE, 0) + "\u00A0%, large above "
+                + f.fixed(100 * DecisionRules.LARGE_IRREGULAR_SHARE, 0) + "\u00A0%";
     }
 
     /**

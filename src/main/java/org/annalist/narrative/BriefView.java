@@ -280,15 +280,25 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
     }
 
     /** A row of the table of latest periods. */
+    /**
+     * A row of the latest periods' table.
+     *
+     * @param dashed        a dash stands for a missing value or change in the value, year-earlier or change column
+     * @param percentDashed a dash stands for a change in % that cannot be computed
+     */
     public record Row(String period, String value, String yearEarlier, String change, String changePercent,
-                      String note) {
+                      String note, boolean dashed, boolean percentDashed) {
     }
 
     /** A method of the appendix: what, its source, and the settings actually used. */
     public record MethodRow(String name, String citation, String settings) {
     }
 
+    /**
+     * @param cut that the data were cut short of the file's end on request, and how many later values were
+     *            left out, a sentence; empty when the series runs to the file's end
+     */
     public record Provenance(String file, String sha256, String rowsRead, String reading, String software,
-                             String generatedAt) {
+                             String generatedAt, String cut) {
     }
 }

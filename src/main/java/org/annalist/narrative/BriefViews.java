@@ -40,7 +40,8 @@ public final class BriefViews {
                 masthead.logoUri().orElse(""), measure.statement(), measure.percent());
         BriefView.Lead lead = lead(series, findings, f, measure);
         BriefView.Provenance provenance = new BriefView.Provenance(source.file(), source.sha256(),
-                f.count(source.rowsRead()), DataNotes.reading(source.reading()), masthead.software(), f.timestamp(masthead.generatedAt()));
+                f.count(source.rowsRead()), DataNotes.reading(source.reading()), masthead.software(), f.timestamp(masthead.generatedAt()),
+                source.cut().map(c -> DataNotes.cut(c, series.frequency(), f)).orElse(""));
         List<String> notes = DataNotes.notes(source);
         findings.notes().forEach(note -> notes.add(Terms.caveat(note)));
         BriefView.ThisPeriod thisPeriod = sections.thisPeriod();
@@ -108,7 +109,13 @@ public final class BriefViews {
 
     private static BriefView.Row row(RecentPeriod r, Formats f) {
         return new BriefView.Row(f.shortPeriod(r.period()), f.value(r.value()), f.value(r.yearEarlier()),
-                f.signedValue(r.change()), f.signedPercent(r.changePct()), Terms.flags(r.flags(), r.yearEarlierFlags()));
+                f.signedValue(r.change()), f.signedPercent(r.changePct()), Terms.flags(r.flags(), r.yearEarlierFlags()),
+                missing(r.value()) || missing(r.yearEarlier()) || missing(r.change()), missing(r.changePct()));
+    }
+
+    /** Whether a figure is printed as a dash. */
+    private static boolean missing(Double v) {
+        return v == null || v.isNaN();
     }
 
     /** True when every value is above zero, so that changes can be read as percentages. */

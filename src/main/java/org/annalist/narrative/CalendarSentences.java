@@ -20,6 +20,8 @@ import org.annalist.series.Period;
 final class CalendarSentences {
 
     static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("d MMMM yyyy", Locale.ENGLISH);
+    /** A day of a year named beside it: {@code 28 March}. */
+    static final DateTimeFormatter DAY_AND_MONTH = DateTimeFormatter.ofPattern("d MMMM", Locale.ENGLISH);
     private static final String[] COUNT = {"no", "one", "two", "three", "four", "five"};
     /** Percentages and p-values only: their format does not depend on the series' values. */
     static final Formats PCT = Formats.forValues(new double[0], Locale.ENGLISH);
@@ -49,15 +51,15 @@ final class CalendarSentences {
         }
         if (note instanceof CalendarNote.WeekendNights w) {
             int d = w.nightsNow() - w.nightsBefore();
-            return String.format(Locale.ROOT, "%s had %d Friday and Saturday nights, %s %s than %s.", name(w.now()),
+            return String.format(Locale.ROOT, "%s had %d Friday and Saturday nights, %s %s than %s%s", name(w.now()),
                     w.nightsNow(), COUNT[Math.min(Math.abs(d), COUNT.length - 1)], d > 0 ? "more" : "fewer",
-                    name(w.before()));
+                    name(w.before()), weekdayFinding("Friday and Saturday nights", w.effectPct(), w.pValue()));
         }
         if (note instanceof CalendarNote.WeekendDays w) {
             int d = w.daysNow() - w.daysBefore();
-            return String.format(Locale.ROOT, "%s had %d Saturdays and Sundays, %s %s than %s.", name(w.now()),
+            return String.format(Locale.ROOT, "%s had %d Saturdays and Sundays, %s %s than %s%s", name(w.now()),
                     w.daysNow(), COUNT[Math.min(Math.abs(d), COUNT.length - 1)], d > 0 ? "more" : "fewer",
-                    name(w.before()));
+                    name(w.before()), weekdayFinding("Saturdays and Sundays", w.effectPct(), w.pValue()));
         }
         if (note instanceof CalendarNote.CalendarAdjusted a) {
             return adjusted(a);
@@ -66,6 +68,22 @@ final class CalendarSentences {
         return String.format(Locale.ROOT, "February %d had %d days, February %d had %d: about %.1f %% %s days.",
                 f.now().year(), f.now().lengthInDays(), f.before().year(), f.before().lengthInDays(),
                 Math.abs(f.morePct()), f.morePct() > 0 ? "more" : "fewer");
+    }
+
+    /**
+     * What the calendar analysis found of a weekday count that differed, ending the sentence: nothing
+     * more where the effect counts (the change with the calendar allowed for follows, with its size);
+     * {@code ; the calendar analysis found no significant effect of Friday and Saturday nights on this
+     * series (p = 0.960), so the difference is not allowed for.} where it was estimated and does not
+     * count; that it was not estimated otherwise.
+     */
+    private static String weekdayFinding(String days, java.util.Optional<Double> effectPct, java.util.Optional<Double> p) {
+        if (effectPct.isPresent()) {
+            return ".";
+        }
+        return p.map(value -> "; the calendar analysis found no significant effect of " + days + " on this series ("
+                + PCT.pValue(value) + "), so the difference is not allowed for.")
+                .orElse("; the calendar analysis did not estimate their effect on this series.");
     }
 
     /**

@@ -3,6 +3,8 @@ package org.annalist.narrative;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.annalist.series.Frequency;
+import org.annalist.series.Period;
 
 /** The words on the data file: how it was read, and the reader's and the font's warnings. */
 public final class DataNotes {
@@ -32,6 +34,43 @@ public final class DataNotes {
         r.aggregatedTo().ifPresent(a -> reading.append("; aggregated to ").append(a).append(" by ")
                 .append(r.aggregatedBy().orElseThrow()));
         return reading.toString();
+    }
+
+    /**
+     * A reader's warning as a sentence for a printed page: its message, capitalised, then where in
+     * the file it arose ({@code Dates read day first (DD/MM/YYYY), because '13/01/2023' is no date the
+     * other way round (glassworks-daily-visitors.csv, line 14, column 1).}), rather than the
+     * {@code FILE:LINE:COLUMN: message} form of the command line's messages.
+     *
+     * @param where the place as a sentence names it ({@code line 14, column 1}, {@code cell C12}, or
+     *              {@code the file})
+     */
+    public static String readerWarning(String file, String where, String message) {
+        String text = message.isEmpty() ? message : Character.toUpperCase(message.charAt(0)) + message.substring(1);
+        String place = where.isEmpty() || where.equals("the file") ? file : file + ", " + where;
+        String body = text.endsWith(".") ? text.substring(0, text.length() - 1) : text;
+        return body + " (" + place + ").";
+    }
+
+    /**
+     * That the brief stops at a latest period the job named, before the file's end, so that its
+     * outlook for periods the file already holds is not taken for a forecast made in ignorance of
+     * them by mistake: {@code Data cut at April 2025 on request: 18 later months in the file (May
+     * 2025 to October 2026) left out.} Only later periods with a value are counted.
+     */
+    static String cut(SourceFacts.Cut c, Frequency frequency, Formats f) {
+        String periods = switch (frequency) {
+            case MONTHLY -> c.laterValues() == 1 ? "month" : "months";
+            case QUARTERLY -> c.laterValues() == 1 ? "quarter" : "quarters";
+            case ANNUAL -> c.laterValues() == 1 ? "year" : "years";
+            case WEEKLY -> c.laterValues() == 1 ? "week" : "weeks";
+            case HALF_YEARLY -> c.laterValues() == 1 ? "half-year" : "half-years";
+            case DAILY, BUSINESS_DAILY -> c.laterValues() == 1 ? "day" : "days";
+        };
+        Period first = c.at().plus(1);
+        String span = first.equals(c.lastInFile()) ? f.period(first) : f.period(first) + " to " + f.period(c.lastInFile());
+        String later = c.laterValues() == 1 ? "the one later " + periods : f.count(c.laterValues()) + " later " + periods;
+        return "Data cut at " + f.period(c.at()) + " on request: " + later + " in the file (" + span + ") left out.";
     }
 
     /** The appendix's notes: the reader's warnings, then the font's when it lacks a character. */

@@ -14,12 +14,17 @@ import java.util.List;
  * @param outlookMethods each outlook's method and why it was used, series by series ({@link MultiOutlookWords#methods})
  * @param partsForecasts whether the parts' next-year estimates add up to the total's, a sentence; empty
  *                       without a total or without such estimates
+ * @param unclearChanges the table's note on next-year changes whose 80 % interval includes no change
+ *                       (marked {@link #UNCLEAR_MARK}), with their intervals; empty when there are none
  */
 public record MultiBriefView(BriefView.Document document, Header header, List<ComparisonRow> rows, boolean listedOrder,
                              String sortedBy,
                              Consistency consistency, List<BriefView> sections, List<String> notes,
                              BriefView.Provenance provenance, boolean allProvisional, String provisional, String outlookMethods,
-                             String partsForecasts) {
+                             String partsForecasts, String unclearChanges) {
+
+    /** The mark beside a next-year change in the table whose 80 % interval includes no change. */
+    public static final String UNCLEAR_MARK = "\u2020";
 
     public MultiBriefView {
         rows = List.copyOf(rows);
@@ -35,7 +40,8 @@ public record MultiBriefView(BriefView.Document document, Header header, List<Co
      * One row of the comparison table, formatted; a dash where a figure cannot be given.
      *
      * @param nextYear       next year's central estimate, rounded as the series' outlook section prints it
-     * @param nextYearChange its change on the current year, e.g. {@code +1.4 % on 2026}; empty when not given
+     * @param nextYearChange its change on the current year, e.g. {@code +1.4 % on 2026}, the figure followed by
+     *                       {@link #UNCLEAR_MARK} when its 80 % interval includes no change; empty when not given
      */
     public record ComparisonRow(String series, String unit, String latest, String yearOnYear, String yearToDate,
                                 String trend, String peak, String breaks, String outliers, String nextYear,

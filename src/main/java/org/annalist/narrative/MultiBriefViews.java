@@ -38,6 +38,7 @@ public final class MultiBriefViews {
         };
         order.sort(byFigure);
         List<MultiBriefView.ComparisonRow> rows = new ArrayList<>();
+        List<String> unclearChanges = new ArrayList<>();
         for (int i : order) {
             BriefView v = sections.get(i);
             Formats f = Formats.forValues(series.get(i).values(), masthead.language());
@@ -47,9 +48,16 @@ public final class MultiBriefViews {
             String nextYear = printed.isEmpty() ? "\u2013"
                     : fi.outlook().nextYearTotal() == null ? printed + " (average)" : printed;
             OutlookFinding.YearChange change = printed.isEmpty() ? null : fi.outlook().nextYearChange();
-            String nextYearChange = change == null || change.pct() == null || fi.outlook().currentYear() == null ? ""
-                    : f.signedPercent(change.pct()) + " on " + change.againstYear()
-                    + (fi.outlook().currentYear().forecastPeriods() > 0 ? " (est.)" : "");
+            boolean given = change != null && change.pct() != null && fi.outlook().currentYear() != null;
+            // the mark right after the figure it qualifies
+            boolean unclear = given && holdsNoChange(change);
+            String nextYearChange = !given ? ""
+                    : f.signedPercent(change.pct()) + (unclear ? MultiBriefView.UNCLEAR_MARK : "") + " on "
+                    + change.againstYear() + (fi.outlook().currentYear().forecastPeriods() > 0 ? " (est.)" : "");
+            if (unclear) {
+                unclearChanges.add(series.get(i).name() + " " + f.signedPercent(change.pctLo80()) + " to "
+                        + f.signedPercent(change.pctHi80()));
+            }
             rows.add(new MultiBriefView.ComparisonRow(series.get(i).name(), series.get(i).unit(),
                     v.lead().value().isEmpty() ? "\u2013" : v.lead().value(),
                     change(series.get(i), fi, f, false), change(series.get(i), fi, f, true),
@@ -84,7 +92,31 @@ public final class MultiBriefViews {
                 provisional.isEmpty() || provisional.size() == series.size() ? "" : Terms.listed(provisional),
                 MultiOutlookWords.methods(series, findings),
                 check.map(c -> MultiOutlookWords.partsForecasts(c, series, findings, formatsOf(c.total(), series, masthead)))
-                        .orElse(""));
+                        .orElse(""), unclearNote(unclearChanges));
+    }
+
+    /**
+     * Whether a next-year change in % has an 80 % interval that holds no change: printed bare in the
+     * table, a "−1.0 %" would be read as a fall the outlook does not claim (its section says so).
+     */
+    static boolean holdsNoChange(OutlookFinding.YearChange c) {
+        return c != null && c.pctLo80() != null && c.pctHi80() != null && c.pctLo80() <= 0 && 0 <= c.pctHi80();
+    }
+
+    /**
+     * The table's note on the changes marked {@link MultiBriefView#UNCLEAR_MARK}: each with its
+     * 80 % interval; empty when none is marked.
+     */
+    static String unclearNote(List<String> marked) {
+        if (marked.isEmpty()) {
+            return "";
+        }
+        String mark = MultiBriefView.UNCLEAR_MARK;
+        return marked.size() == 1
+                ? "The change marked " + mark + " has an 80\u00A0% interval that includes no change (" + marked.get(0)
+                        + "), so it is neither a clear rise nor a clear fall."
+                : "The changes marked " + mark + " have 80\u00A0% intervals that include no change (" + Terms.listed(marked)
+                        + "), so none of them is a clear rise or a clear fall.";
     }
 
     /** The latest change on a year earlier, or the year to date's, in %, points or units as the measure has it. */

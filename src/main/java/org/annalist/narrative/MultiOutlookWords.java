@@ -46,7 +46,11 @@ final class MultiOutlookWords {
         List<String> groups = new ArrayList<>();
         seriesByMethod.forEach((method, names) -> groups.add(method.equals(NONE) ? NONE + " for " + Terms.listed(names)
                 : "for " + Terms.listed(names) + " " + method));
-        return String.join("; ", groups);
+        // the rule behind "clearly", once, wherever a choice said it
+        boolean clearly = findings.stream().map(Findings::outlook).anyMatch(o -> o != null
+                && (o.chosenBecause().basis() == OutlookFinding.Choice.Basis.COMBINATION_NOT_BEATEN
+                || o.chosenBecause().basis() == OutlookFinding.Choice.Basis.SINGLE_CLEARLY_BETTER));
+        return String.join("; ", groups) + (clearly ? " (" + OutlookMethodWords.clearlyRule() + ")" : "");
     }
 
     /**
@@ -72,16 +76,111 @@ final class MultiOutlookWords {
         double expected = total.get().nextYearTotal().mean();
         double gapPct = 100 * (sum / expected - 1);
         String estimates = "Their next-year estimates for " + total.get().nextYear();
+        String growth = growth(check, series, findings, f);
         if (Math.abs(gapPct) <= PartsCheck.TOLERANCE_PCT) {
-            return estimates + " add up to " + check.total() + "'s within " + f.percent(PartsCheck.TOLERANCE_PCT) + ".";
+            return estimates + " add up to " + check.total() + "'s within " + f.percent(PartsCheck.TOLERANCE_PCT) + "."
+                    + growth;
         }
         // the total's figure as its own section prints it; the parts' sum is the one to leave unquoted
         String own = OutlookViews.nextYearPrinted(total.get(), f);
         return estimates + " do not add up within " + f.percent(PartsCheck.TOLERANCE_PCT) + ": together about "
                 + f.significant(sum) + ", which is " + f.percent(Math.abs(gapPct)) + (gapPct < 0 ? " below " : " above ")
-                + check.total() + "'s " + own + ". For the total, quote " + check.total() + "'s own estimate (" + own
-                + "): it is forecast from " + check.total() + "'s own history, whereas each part is forecast apart and"
+                + check.total() + "'s " + own + "." + growth + " For the total, quote " + check.total() + "'s own estimate ("
+                + own + "): it is forecast from " + check.total() + "'s own history, whereas each part is forecast apart and"
                 + " their sum is no forecast of the total.";
+    }
+
+    /**
+     * The parts' growth taken together against the total's, when both can be given and differ in
+     * print: the sum of the parts' next-year estimates against the sum of their current-year
+     * estimates, beside the total's own change on its current-year estimate (the figure its section
+     * and the table print); and how far, month by month, the parts' forecasts of the next year sum
+     * below or above the total's. A reader who adds up the parts' changes otherwise finds a growth
+     * the total's outlook does not state, with nothing to say why: the outlooks are separate models.
+     * Empty when a series has no current-year estimate for the same year, or the two changes print alike.
+     */
+    static String growth(PartsCheck check, List<Series> series, List<Findings> findings, Formats f) {
+        Optional<OutlookFinding> total = outlookOf(check.total(), series, findings);
+        if (total.isEmpty() || total.get().nextYearChange() == null || total.get().nextYearChange().pct() == null
+                || total.get().currentYear() == null) {
+            return "";
+        }
+        int year = total.get().nextYear();
+        double next = 0;
+        double current = 0;
+        List<OutlookFinding> parts = new ArrayList<>();
+        for (String part : check.parts()) {
+            Optional<OutlookFinding> o = outlookOf(part, series, findings);
+            if (o.isEmpty() || o.get().nextYear() != year || o.get().currentYear() == null
+                    || o.get().currentYear().year() != total.get().currentYear().year()) {
+                return "";
+            }
+            next += o.get().nextYearTotal().mean();
+            current += o.get().currentYear().estimate().mean();
+            parts.add(o.get());
+        }
+        if (!(current > 0)) {
+            return "";
+        }
+        String partsChange = f.signedPercent(100 * (next / current - 1));
+        String totalChange = f.signedPercent(total.get().nextYearChange().pct());
+        if (partsChange.equals(totalChange)) {
+            return "";
+        }
+        String against = total.get().currentYear().forecastPeriods() > 0 ? "their estimates for " : "";
+        return " Taken together they change by " + partsChange + " on " + against + total.get().currentYear().year()
+                + ", whereas " + check.total() + "'s own outlook gives " + totalChange + ": the total and each part are"
+                + " forecast by separate models, each fitted to its own history, so the growth of the parts need not"
+                + " match the total's" + monthlyGaps(total.get(), parts, year, f) + ".";
+    }
+
+    /**
+     * How far the parts' forecasts of each period of {@code year} sum from the total's, as a range in
+     * %: {@code ; in each month of 2027 their forecasts sum to 1.0 % to 2.6 % below Total's}; empty
+     * when a period is missing from a forecast or the gaps lie on both sides of zero in print.
+     */
+    private static String monthlyGaps(OutlookFinding total, List<OutlookFinding> parts, int year, Formats f) {
+        double low = Double.POSITIVE_INFINITY;
+        double high = Double.NEGATIVE_INFINITY;
+        int periods = 0;
+        String each = "period";
+        for (OutlookFinding.Point p : total.forecasts()) {
+            if (p.period().year() != year) {
+                continue;
+            }
+            each = switch (p.period().frequency()) {
+                case MONTHLY -> "month";
+                case QUARTERLY -> "quarter";
+                case WEEKLY -> "week";
+                default -> "period";
+            };
+            double sum = 0;
+            for (OutlookFinding part : parts) {
+                Optional<OutlookFinding.Point> same = part.forecasts().stream()
+                        .filter(q -> q.period().equals(p.period())).findFirst();
+                if (same.isEmpty()) {
+                    return "";
+                }
+                sum += same.get().mean();
+            }
+            if (!(p.mean() > 0)) {
+                return "";
+            }
+            double gap = 100 * (sum / p.mean() - 1);
+            low = Math.min(low, gap);
+            high = Math.max(high, gap);
+            periods++;
+        }
+        if (periods < 2 || (low < 0 && high > 0)) {
+            return "";
+        }
+        boolean below = high <= 0;
+        double near = below ? -high : low;
+        double far = below ? -low : high;
+        String range = f.percent(near).equals(f.percent(far)) ? "about " + f.percent(far)
+                : f.fixed(near, 1) + " to " + f.percent(far);
+        return "; in each " + each + " of " + year + " their forecasts sum to " + range + (below ? " below " : " above ")
+                + "the total's";
     }
 
     /** The outlook of the named series when it has a next-year total, else empty. */

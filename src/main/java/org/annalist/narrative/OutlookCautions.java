@@ -3,13 +3,17 @@ package org.annalist.narrative;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.annalist.findings.BreakFinding;
 import org.annalist.findings.CalendarFinding;
 import org.annalist.findings.Analyst;
 import org.annalist.findings.Claim;
 import org.annalist.findings.DecisionRules;
+import org.annalist.findings.EasterAhead;
 import org.annalist.findings.Findings;
+import org.annalist.findings.Measure;
 import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
+import org.annalist.findings.Transform;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 
@@ -105,12 +109,12 @@ final class OutlookCautions {
                         + f.signedPercent(y) + " on a year earlier, " + (y > pace ? "above" : "below")
                         + " the trend's pace, and next year is set against that " + (y > pace ? "higher" : "lower")
                         + " base"));
-        Double wholeSlope = findings.trend().slopePerYear();
-        if (sinceBreak && wholeSlope != null && Math.signum(wholeSlope - slope) == side
-                && o.caveats().stream().anyMatch(c -> c instanceof OutlookCaveat.BreakTooRecent
+        if (sinceBreak && o.caveats().stream().anyMatch(c -> c instanceof OutlookCaveat.BreakTooRecent
                 || c instanceof OutlookCaveat.HistoryKept)) {
-            reasons.add("the outlook is fitted on all values from " + f.period(o.fittedFrom()) + ", the years before the change in "
-                    + f.period(trend.from()) + " included, over which the trend's rate was " + (side < 0 ? "lower" : "higher"));
+            earlierRegimes(series, findings, trend.from(), side, f).ifPresent(rates -> reasons.add(
+                    "the outlook is fitted on all values from " + f.period(o.fittedFrom()) + ", the years before the change in "
+                    + f.period(trend.from()) + " included, over which the fitted line rose " + (side < 0 ? "less" : "more")
+                    + " steeply (" + rates + ")"));
         }
         for (OutlookCaveat c : o.caveats()) {
             if (c instanceof OutlookCaveat.ShockBridged b && trend.from().compareTo(b.to()) <= 0
@@ -148,39 +152,138 @@ final class OutlookCautions {
     }
 
     /**
+     * The rates of the fitted lines the outlook's earlier years ran along, set against the latest
+     * regime's, as the structural changes table prints them ({@code +1.3 % a year before January
+     * 2021, against +0.7 % a year since October 2022}), when every earlier regime the outlook was
+     * fitted on lies on the side that explains the gap ({@code side}: −1 for an outlook below the
+     * trend's pace, which earlier lower rates would pull down); empty otherwise, so that the reason is
+     * given only where the table the reader sees bears it out. A regime wholly inside a bridged fall
+     * or rise (replaced before forecasting) or before the outlook's first value is left out; regimes
+     * fitted as levels have no rate to compare, and nothing is said.
+     */
+    static Optional<String> earlierRegimes(Series series, Findings findings, Period latestStart, double side, Formats f) {
+        OutlookFinding o = findings.outlook();
+        List<BreakFinding> breaks = findings.breaks().stream().filter(b -> b.period().compareTo(latestStart) <= 0).toList();
+        if (breaks.isEmpty() || side == 0 || !breaks.get(breaks.size() - 1).period().equals(latestStart)) {
+            return Optional.empty();
+        }
+        BreakFinding latest = breaks.get(breaks.size() - 1);
+        boolean inPercent = findings.transform() == Transform.LOG;
+        Optional<Double> latestRate = rate(latest.slopeAfter(), latest.levelAfter(), inPercent);
+        if (latestRate.isEmpty()) {
+            return Optional.empty();
+        }
+        String latestPrinted = printedRate(latestRate.get(), inPercent, series, findings, f);
+        List<String> earlier = new ArrayList<>();
+        for (int j = 0; j < breaks.size(); j++) {
+            BreakFinding end = breaks.get(j);
+            Period from = j == 0 ? series.start() : breaks.get(j - 1).period();
+            Period to = end.period().plus(-1);
+            if (to.compareTo(o.fittedFrom()) < 0 || bridged(o, from, to)) {
+                continue;
+            }
+            Optional<Double> r = rate(end.slopeBefore(), end.levelBefore(), inPercent);
+            if (r.isEmpty()) {
+                return Optional.empty();
+            }
+            String printed = printedRate(r.get(), inPercent, series, findings, f);
+            if (printed.equals(latestPrinted) || Math.signum(r.get() - latestRate.get()) != side) {
+                return Optional.empty();
+            }
+            earlier.add(printed + (j == 0 ? " before " + f.period(end.period())
+                    : " from " + f.period(from) + " to " + f.period(to)));
+        }
+        if (earlier.isEmpty() || breaks.stream().allMatch(b -> b.slopeBefore() == 0 && b.slopeAfter() == 0)) {
+            return Optional.empty();
+        }
+        return Optional.of(Terms.listed(earlier) + ", against " + latestPrinted + " since " + f.period(latestStart));
+    }
+
+    /** Whether a fall or rise bridged before forecasting covers the whole span {@code from}–{@code to}. */
+    private static boolean bridged(OutlookFinding o, Period from, Period to) {
+        return o.caveats().stream().anyMatch(c -> c instanceof OutlookCaveat.ShockBridged b
+                && b.from().compareTo(from) <= 0 && to.compareTo(b.to()) <= 0);
+    }
+
+    /**
+     * A regime's rate as the structural changes table gives it: for a series worked in logs % a
+     * year, exp(slope / level) − 1 (the log slope being the slope over the level); else the slope
+     * in units a year. Empty where a log rate has no positive level to be read at.
+     */
+    private static Optional<Double> rate(double slopePerYear, double level, boolean inPercent) {
+        if (inPercent) {
+            return level > 0 ? Optional.of(100 * Math.expm1(slopePerYear / level)) : Optional.empty();
+        }
+        return Optional.of(slopePerYear);
+    }
+
+    private static String printedRate(double rate, boolean inPercent, Series series, Findings findings, Formats f) {
+        if (inPercent) {
+            return f.signedPercent(rate) + " a year";
+        }
+        Measure m = MeasureWords.measureOf(findings);
+        return f.signedSignificant(rate) + MeasureWords.differenceUnit(m, series.unit()) + " "
+                + MeasureWords.slopeTime(m, series.frequency());
+    }
+
+    /**
      * That the forecasts do not move Easter's effect with its date, when the calendar analysis kept
      * an Easter effect and the outlook reaches March or April; empty otherwise. The forecasts are
      * made on the values as observed, Easter's effect in them, and no calendar effect is put back
-     * afterwards: March and April keep the share they had in the years fitted.
+     * afterwards: March and April keep the average share of the days before Easter they had in the
+     * years fitted. For each forecast year, Easter's date, the share of those days in March against
+     * that average, and what the estimated effect makes of the difference ({@link EasterAhead}).
      *
      * @param percent changes are given in % (else the effect's size is left out: a rate's is in points)
      */
-    static String easter(Findings findings, Formats f, boolean percent) {
-        CalendarFinding calendar = findings.calendar();
-        OutlookFinding o = findings.outlook();
-        if (calendar == null || o == null) {
+    static String easter(Series series, Findings findings, Formats f, boolean percent) {
+        List<EasterAhead> ahead = EasterAhead.of(series, findings);
+        if (ahead.isEmpty()) {
             return "";
         }
-        Optional<CalendarFinding.Effect> easter = calendar.effects().stream()
-                .filter(e -> e.name().equals(CalendarFinding.EASTER) && e.kept()).findFirst();
-        List<Integer> years = o.forecasts().stream().map(OutlookFinding.Point::period)
-                .filter(OutlookCautions::touchesMarchOrApril).map(Period::year).distinct().toList();
-        if (easter.isEmpty() || years.isEmpty()) {
-            return "";
-        }
-        CalendarFinding.Effect e = easter.get();
+        CalendarFinding.Effect e = findings.calendar().effects().stream()
+                .filter(x -> x.name().equals(CalendarFinding.EASTER) && x.kept()).findFirst().orElseThrow();
         // the effect's size in % only where changes are given in % (a rate's would be in points)
         String size = percent ? ": a month that holds all the days before Easter is about " + f.percent(Math.abs(e.effectPct()))
                 + (e.effectPct() < 0 ? " lower" : " higher") + " (" + f.pValue(e.pValue()) + ")"
                 : " (" + f.pValue(e.pValue()) + ")";
-        return "The calendar analysis found an Easter effect" + size + ". The forecasts do not move it with"
-                + " Easter's date: they give March and April the share they had in past years, wherever Easter falls in "
-                + Terms.listed(years.stream().map(String::valueOf).toList()) + ", so those two months may split"
-                + " differently; their sum is less affected.";
+        StringBuilder text = new StringBuilder("The calendar analysis found an Easter effect" + size + ". The forecasts"
+                + " do not move it with Easter's date: they give " + (ahead.get(0).months() ? "March and April"
+                : "the first two quarters") + " the share of the days before Easter they had on average in the years fitted.");
+        for (EasterAhead a : ahead) {
+            text.append(' ').append(easterYear(a, f, percent));
+        }
+        return text.append(" Their sum is less affected.").toString();
     }
 
-    private static boolean touchesMarchOrApril(Period p) {
-        return p.startDate().getMonthValue() <= 4 && p.endDate().getMonthValue() >= 3
-                && p.startDate().getYear() == p.endDate().getYear();
+    /**
+     * {@code Easter 2027 falls on 28 March, with all 8 days before it in March, against 36 % of them
+     * on average in 2011 to 2026: by the estimated effect, March 2027 may turn out about 6.2 % above
+     * its forecast and April 2027 about 5.8 % below.} A difference under {@link
+     * DecisionRules#CALENDAR_NAMED_PCT} is said to be small.
+     */
+    static String easterYear(EasterAhead a, Formats f, boolean percent) {
+        String earlier = a.months() ? "March" : "the first quarter";
+        String held = a.daysEarlier() == a.window() ? "all " + a.window() + " days before it in " + earlier
+                : a.daysEarlier() == 0 ? "none of the " + a.window() + " days before it in " + earlier
+                : a.daysEarlier() + " of the " + a.window() + " days before it in " + earlier;
+        String years = a.fromYear() == a.toYear() ? String.valueOf(a.fromYear()) : a.fromYear() + " to " + a.toYear();
+        String dated = "Easter " + a.year() + " falls on " + CalendarSentences.DAY_AND_MONTH.format(a.sunday()) + ", with "
+                + held + ", against " + f.fixed(100 * a.averageShare(), 0) + "\u00A0% of them on average in " + years;
+        if (a.moves().isEmpty()) {
+            return dated + ".";
+        }
+        if (a.moves().stream().allMatch(m -> Math.abs(m.pct()) < DecisionRules.CALENDAR_NAMED_PCT)) {
+            return dated + ": by the estimated effect, " + Terms.listed(a.moves().stream().map(m -> f.period(m.period())).toList())
+                    + (a.moves().size() == 1 ? " should differ" : " should each differ") + " from the forecast by less than "
+                    + f.percent(DecisionRules.CALENDAR_NAMED_PCT) + ".";
+        }
+        List<String> moves = new ArrayList<>();
+        for (EasterAhead.Move m : a.moves()) {
+            String by = percent ? " about " + f.percent(Math.abs(m.pct())) : "";
+            moves.add(moves.isEmpty() ? f.period(m.period()) + " may turn out" + by + (m.pct() > 0 ? " above" : " below")
+                    + " its forecast" : f.period(m.period()) + by + (m.pct() > 0 ? " above" : " below"));
+        }
+        return dated + ": by the estimated effect, " + String.join(" and ", moves) + ".";
     }
 }

@@ -1,5 +1,6 @@
 package org.annalist.narrative;
 
+import org.annalist.findings.DecisionRules;
 import org.annalist.findings.OutlookFinding;
 
 /**
@@ -36,6 +37,16 @@ final class OutlookMethodWords {
 
     /** What a single method must have done to replace the average, after its subject. */
     static final String DID_BETTER = "did clearly better than the average in the back-test";
+
+    /**
+     * What "clearly" means, in plain words, from {@link DecisionRules#OUTLOOK_METHOD_ADVANTAGE_PCT}
+     * and {@code Outlook.choose}: the method's mean error over the whole back-test at most that far
+     * below the average's, and below it in the earlier and in the later half of the test as well.
+     */
+    static String clearlyRule() {
+        return "clearly: its errors over the whole test " + Terms.number(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT)
+                + "\u00A0% or more below the average's, and below them in both the earlier and the later half of the test";
+    }
 
     /** Why the method was used, as a clause: {@code no single method did clearly better than the average in the back-test}. */
     static String reason(OutlookFinding.Choice.Basis basis) {

@@ -49,7 +49,7 @@ final class RulesInForce {
                         + " or more within two seasonal cycles an unusual stretch"),
                 new Rule("The outlook uses one method, not the average of three / only the values since the latest"
                         + " break, when", "its back-test error is at least " + Terms.number(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT)
-                        + "\u00A0% lower, in both halves of a test of at least "
+                        + "\u00A0% lower over the whole test and lower in both its halves, in a test of at least "
                         + Terms.number(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS) + " forecasts / at least "
                         + Terms.number(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT)
                         + "\u00A0% lower"),

@@ -2,6 +2,7 @@ package org.annalist.narrative;
 
 import java.util.List;
 import java.util.Optional;
+import org.annalist.series.Period;
 
 /**
  * Where the data came from, as the brief's data appendix states it.
@@ -9,9 +10,20 @@ import java.util.Optional;
  * @param reading       how the file was read
  * @param notes         the reader's warnings, each with file and line
  * @param missingGlyphs characters of the brief's own text that its font cannot draw (empty when none)
+ * @param cut           where the job cut the series short of the file's end, when it did
  */
 public record SourceFacts(String file, String sha256, int rowsRead, Reading reading, List<String> notes,
-                          String missingGlyphs) {
+                          String missingGlyphs, Optional<Cut> cut) {
+
+    /**
+     * The series cut at a latest period the job named, before the file's end.
+     *
+     * @param at          the latest period kept
+     * @param laterValues how many later periods of the file had a value, all left out
+     * @param lastInFile  the file's last period of the series with a value
+     */
+    public record Cut(Period at, int laterValues, Period lastInFile) {
+    }
 
     public SourceFacts {
         notes = List.copyOf(notes);
@@ -42,6 +54,11 @@ public record SourceFacts(String file, String sha256, int rowsRead, Reading read
 
     /** The same facts with the characters the font cannot draw. */
     public SourceFacts withMissingGlyphs(String characters) {
-        return new SourceFacts(file, sha256, rowsRead, reading, notes, characters);
+        return new SourceFacts(file, sha256, rowsRead, reading, notes, characters, cut);
+    }
+
+    /** The same facts with where the series was cut, if it was. */
+    public SourceFacts withCut(Optional<Cut> at) {
+        return new SourceFacts(file, sha256, rowsRead, reading, notes, missingGlyphs, at);
     }
 }

@@ -44,7 +44,7 @@ record AuditedBrief(String label, Series series, Findings findings, JsonNode jso
             JsonNode json = JSON.readTree(FindingsJson.write(findings, JsonTerms.ENGLISH));
             SourceFacts source = new SourceFacts("planted.csv", "0".repeat(64), series.size() + 1,
                     new SourceFacts.Reading("UTF-8", "comma", "wide", "YYYY-MM", Optional.empty(), Optional.empty(),
-                            Optional.empty(), Optional.empty()), List.of(), "");
+                            Optional.empty(), Optional.empty()), List.of(), "", Optional.empty());
             Masthead masthead = new Masthead("", "", Locale.UK, Masthead.Paper.A4, MADE, "Annalist", Optional.empty());
             String html = TEMPLATES.render(TemplateEngine.BRIEF_TEMPLATE,
                     BriefViews.of(series, findings, FigurePlan.of(series, findings), source, masthead), Locale.UK);

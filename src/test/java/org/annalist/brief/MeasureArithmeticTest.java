@@ -90,7 +90,7 @@ class MeasureArithmeticTest {
                 Instant.parse("2026-11-20T08:00:00Z"), "Annalist (test)", Optional.empty());
         SourceFacts source = new SourceFacts("test.csv", "0".repeat(64), s.size(), new SourceFacts.Reading("UTF-8",
                 "comma", "wide", "YYYY-MM", Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty()),
-                List.of(), "");
+                List.of(), "", Optional.empty());
         String xhtml = new TemplateEngine(Optional.empty()).render(TemplateEngine.BRIEF_TEMPLATE,
                 BriefViews.of(s, f, FigurePlan.of(s, f), source, masthead), Locale.ENGLISH);
         // up to the reading guide: the appendix states the rules' thresholds (a collapse is −10 %), no changes

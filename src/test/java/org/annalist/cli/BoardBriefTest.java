@@ -68,7 +68,83 @@ class BoardBriefTest {
         assertThat(text).contains("Their next-year estimates for 2027 do not add up within 0.5 %: together about "
                 + f.significant(parts).replace('\u00A0', ' ') + ", which is "
                 + f.percent(Math.abs(gapPct)).replace('\u00A0', ' ') + (gapPct < 0 ? " below" : " above")
-                + " Total's " + totalAsInItsSection(text) + ". For the total, quote Total's own estimate");
+                + " Total's " + totalAsInItsSection(text) + ". Taken together they change by")
+                .contains("For the total, quote Total's own estimate");
+    }
+
+    /**
+     * The parts' growth taken together is stated beside the total's where the two meet, since a reader
+     * who adds up the markets' rows finds another growth than the total's row: the sums are derived
+     * here from each series' findings (current-year estimate and next-year total).
+     */
+    @Test
+    void theNoteOnThePartsStatesTheirGrowthTogetherBesideTheTotalsAndThatSeparateModelsMakeThem() throws IOException {
+        double next = 0;
+        double current = 0;
+        for (String part : PARTS) {
+            next += findings(part).at("/outlook/next_year_total/mean").asDouble();
+            current += findings(part).at("/outlook/current_year/estimate/mean").asDouble();
+        }
+        double partsPct = 100 * (next / current - 1);
+        double totalPct = findings("total").at("/outlook/next_year_change/pct").asDouble();
+        Formats f = Formats.forValues(new double[] {current}, Locale.ENGLISH);
+        assertThat(f.signedPercent(partsPct)).as("the demo's markets grow less together than the total")
+                .isNotEqualTo(f.signedPercent(totalPct));
+        assertThat(text).contains(("Taken together they change by " + f.signedPercent(partsPct) + " on their estimates for"
+                + " 2026, whereas Total's own outlook gives " + f.signedPercent(totalPct) + ": the total and each part are"
+                + " forecast by separate models").replace('\u00A0', ' '));
+        // month by month, from the findings' forecasts of 2027: the parts' sum against the total's
+        double low = Double.POSITIVE_INFINITY;
+        double high = Double.NEGATIVE_INFINITY;
+        JsonNode totals = findings("total").at("/outlook/forecasts");
+        for (int k = 0; k < totals.size(); k++) {
+            String period = totals.get(k).get("period").asText();
+            if (!period.startsWith("2027-")) {
+                continue;
+            }
+            double sum = 0;
+            for (String part : PARTS) {
+                for (JsonNode p : findings(part).at("/outlook/forecasts")) {
+                    sum += p.get("period").asText().equals(period) ? p.get("mean").asDouble() : 0;
+                }
+            }
+            double gap = 100 * (sum / totals.get(k).get("mean").asDouble() - 1);
+            low = Math.min(low, gap);
+            high = Math.max(high, gap);
+        }
+        assertThat(high).as("every month of 2027 sums below the total's").isNegative();
+        assertThat(text).contains(("in each month of 2027 their forecasts sum to " + f.fixed(-high, 1) + " to "
+                + f.percent(-low) + " below the total's").replace('\u00A0', ' '));
+    }
+
+    /**
+     * A next-year change whose 80 % interval holds no change is marked in the table and the note
+     * names its interval, so that "−1.0 %" is not read as a fall (intervals from the findings).
+     */
+    @Test
+    void aNextYearChangeWhoseIntervalHoldsNoChangeIsMarkedWithItsInterval() throws IOException {
+        List<String> marked = new java.util.ArrayList<>();
+        for (String series : List.of("total", "domestic", "brevania", "long-haul")) {
+            JsonNode change = findings(series).at("/outlook/next_year_change");
+            double lo = change.get("pct_lo80").asDouble();
+            double hi = change.get("pct_hi80").asDouble();
+            Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
+            // the cell's words may be interleaved with its neighbours' in the extracted text: the figure and its mark
+            String cell = (f.signedPercent(change.get("pct").asDouble()) + "\u2020").replace('\u00A0', ' ');
+            if (lo <= 0 && 0 <= hi) {
+                assertThat(text).contains(cell);
+                String name = series.equals("long-haul") ? "Long-haul" : Character.toUpperCase(series.charAt(0)) + series.substring(1);
+                marked.add((name + " " + f.signedPercent(lo) + " to " + f.signedPercent(hi)).replace('\u00A0', ' '));
+            } else {
+                assertThat(text).doesNotContain(cell);
+            }
+        }
+        assertThat(marked).as("the demo's Domestic −1.0 % has an interval from below to above zero").isNotEmpty();
+        for (String interval : marked) {
+            assertThat(text).contains(interval);
+        }
+        assertThat(text).contains(marked.size() == 1 ? "so it is neither a clear rise nor a clear fall"
+                : "so none of them is a clear rise or a clear fall");
     }
 
     /** Total's next-year figure as its outlook section on the board prints it (the first outlook sentence). */
@@ -88,9 +164,13 @@ class BoardBriefTest {
             assertThat(outlook.get("chosen_because").asText()).contains("no single method did clearly better");
         }
         // the table's "Methods" label, centred beside the longer cell, falls inside the cell's text when extracted
-        assertThat(text).contains("Outlooks, each made for its series alone:").contains("for Total, Domestic, Brevania and"
+        String methods = text.replace("Methods ", "");   // the label, wherever it falls inside the cell's text
+        assertThat(methods).contains("Outlooks, each made for its series alone:").contains("for Total, Domestic, Brevania and"
                 + " Long-haul the average of three methods: exponential smoothing, an ARIMA model and the Theta method, as"
-                + " no single method did clearly better than the average in the back-test.");
+                + " no single method did clearly better than the average in the back-test (clearly:");
+        // what "clearly" means is printed beside it (DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT, Outlook.choose)
+        assertThat(methods).contains("(clearly: its errors over the whole test 50 % or more below the average's, and below"
+                + " them in both the earlier and the later half of the test)");
         assertThat(text).doesNotContain("ETS/Theta");
     }
 

@@ -55,6 +55,26 @@ class OutlookViewsTest {
     }
 
     /**
+     * Beside "did clearly better", the rule in plain words and the closest single method's score
+     * against the average's, with the % between them derived here from the two scores.
+     */
+    @Test
+    void whyTheAverageIsUsedPrintsTheRuleBehindClearlyAndHowCloseTheBestSingleMethodCame() {
+        Series s = cutInOctober();
+        Findings findings = new Analyst().analyse(s);
+        Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
+        OutlookFinding.Choice c = findings.outlook().chosenBecause();
+        BriefView.OutlookView v = OutlookViews.of(s, findings, f, MeasureWords.of(s, findings, f));
+        assertThat(c.basis()).isEqualTo(OutlookFinding.Choice.Basis.COMBINATION_NOT_BEATEN);
+        double below = 100 * (1 - c.bestSingleMase() / c.combinationMase());
+        assertThat(v.chosenBecause()).contains("no single method did clearly better than the average in the back-test"
+                + " (clearly: its errors over the whole test 50\u00A0% or more below the average's, and below them in both"
+                + " the earlier and the later half of the test; the best single method, " + c.bestSingle().orElseThrow().code()
+                + ", scored " + f.fixed(c.bestSingleMase(), 2) + " against the average's " + f.fixed(c.combinationMase(), 2)
+                + ", " + f.fixed(Math.abs(below), 0) + "\u00A0% " + (below > 0 ? "below" : "above") + "), so the average is used.");
+    }
+
+    /**
      * "About the same" only under the rule (DecisionRules.OUTLOOK_SAME_PCT); otherwise the signed
      * change with its interval, never a bare verb (invented numbers).
      */
