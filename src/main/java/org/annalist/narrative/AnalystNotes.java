@@ -70,9 +70,9 @@ public final class AnalystNotes {
         if (f.breaks().size() > 1) {
             BreakFinding first = f.breaks().get(0);
             BreakFinding last = f.breaks().get(f.breaks().size() - 1);
-            line(out, "breaks overall", "fitted level %s just before %s → %s just after %s (%s, ratio of the levels)",
-                    num(first.levelBefore()), first.period(), num(last.levelAfter()), last.period(),
-                    change(f, last.levelAfter() - first.levelBefore(), 100 * (last.levelAfter() / first.levelBefore() - 1)));
+            line(out, "breaks overall", "fitted level %s just before %s → %s in %s (%s, ratio of the levels)",
+                    num(first.levelBefore()), first.period(), num(last.endLevel()), last.regimeEnd(),
+                    change(f, last.endLevel() - first.levelBefore(), 100 * (last.endLevel() / first.levelBefore() - 1)));
         }
         for (Episode e : f.episodes()) {
             line(out, "episode", "%s %.1f %% from %s (%s → %s by %s), then moved back %s (%.0f %% of the step) by %s",

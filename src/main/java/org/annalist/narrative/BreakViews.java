@@ -49,8 +49,9 @@ final class BreakViews {
                     slope(b.slopeBefore(), b.levelBefore(), slopesInPercent),
                     slope(b.slopeAfter(), b.levelAfter(), slopesInPercent), drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
-                    overall ? size(first.levelBefore(), b.levelAfter()) : "", b.levelAfter() > first.levelBefore(),
-                    f.value(first.levelBefore()), f.period(first.period()), slopesInPercent ? "a year" : slopeTime(),
+                    overall ? size(first.levelBefore(), b.endLevel()) : "", b.endLevel() > first.levelBefore(),
+                    f.value(first.levelBefore()), f.period(first.period()), f.value(b.endLevel()),
+                    f.period(b.regimeEnd()), slopesInPercent ? "a year" : slopeTime(),
                     bendWithGap(b), joined(b), latest.isPresent() && b.kind().slope()));
         }
         return rows;

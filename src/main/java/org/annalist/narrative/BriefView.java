@@ -190,14 +190,16 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param latestRate    {@code slopeAfter} is the trend section's rate since this break (Sen's slope
      *                      over the latest regime), the one rate the brief gives that regime
      * @param overall       on the last of two or more breaks: the ratio of fitted levels from just before the
-     *                      first break ({@code firstBefore}, {@code firstPeriod}) to just after this one,
-     *                      without sign ({@code overallRise} its direction); else empty
+     *                      first break ({@code firstBefore}, {@code firstPeriod}) to the end of this one's
+     *                      regime ({@code end} in {@code endPeriod}, the latest period: where the level
+     *                      stands now, not where it stood at the break), without sign ({@code overallRise}
+     *                      its direction); else empty
      */
     public record BreakRow(String period, String from, String to, boolean onePeriod, String before, String after,
                            String change, boolean rise, String statistic, String pValue, boolean provisional,
                            boolean step, boolean slope, String slopeBefore, String slopeAfter, boolean drifted,
                            String previousAfter, String overall, boolean overallRise, String firstBefore,
-                           String firstPeriod, String slopeTime, boolean bendWithGap, boolean joined,
+                           String firstPeriod, String end, String endPeriod, String slopeTime, boolean bendWithGap, boolean joined,
                            boolean latestRate) {
     }
 

@@ -591,6 +591,35 @@ class StatementAuditTest {
         assertThat(compared).as("returns compared with the old path").isPositive();
     }
 
+    /**
+     * The sentence that takes several breaks together says where the level stands now: it ends at the
+     * latest period, not at the last break (where a bend's level once read as "still 4.9 % below" a
+     * level the series had long passed), and its change recomputes from the two levels it prints
+     * (derived in the test from the brief's own words; levels are rounded, so to within 0.15 points).
+     */
+    @Test
+    void severalBreaksTakenTogetherEndWhereTheLevelStandsNow() {
+        Pattern together = Pattern.compile("Taken together, the fitted level went from ([\\d,.]+) just before [^,]{3,20} to"
+                + " ([\\d,.]+) in ([A-Z][a-z]+ \\d{4}|\\d{4}(?:-Q\\d)?|Q\\d \\d{4}), (up|down) ([\\d.]+)\u00a0%");
+        int seen = 0;
+        List<String> found = new ArrayList<>();
+        for (AuditedBrief b : briefs) {
+            Matcher m = together.matcher(b.text());
+            while (m.find()) {
+                seen++;
+                double from = Double.parseDouble(m.group(1).replace(",", ""));
+                double to = Double.parseDouble(m.group(2).replace(",", ""));
+                double printed = (m.group(4).equals("up") ? 1 : -1) * Double.parseDouble(m.group(5));
+                boolean latest = b.text().contains("Latest period in this brief: " + m.group(3) + " ");
+                if (Math.abs(100 * (to / from - 1) - printed) > 0.15 || !latest) {
+                    found.add(b + ": " + m.group());
+                }
+            }
+        }
+        assertThat(found).as("levels taken together that do not recompute").isEmpty();
+        assertThat(seen).as("briefs with several breaks taken together").isPositive();
+    }
+
     /** A flow's slope names the total it changes ("a year in the monthly total"), never "a month each year". */
     @Test
     void aFlowsSlopeIsNotSaidPerPeriodEachYear() {
