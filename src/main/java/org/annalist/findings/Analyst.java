@@ -141,8 +141,9 @@ public final class Analyst {
                 stl.map(fit -> levelAdjusted(y, fit, calendar, log, calendarAtTheEnd)).orElse(null), parts);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
+        CalendarFinding calendarFinding = CalendarAnalysis.of(series, calendar, log, latest, holidays, measured);
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), breaks.episodes(), measured,
-                horizon);
+                horizon, calendarFinding, log);
         // the latest regime has one rate, the trend's: its break's slope after and the episodes read at it
         List<BreakFinding> rated = BreakAnalysis.withLatestRate(breaks.breaks(), trend.latestRegime(), log,
                 series.frequency().periodsPerYear());
@@ -150,8 +151,7 @@ public final class Analyst {
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
                 seasonality, cycle, outliers, rated, irregular, smoothing(series),
                 IndicatorsFindings.of(latest, measured, series, calendarAtTheEnd),
-                CalendarAnalysis.of(series, calendar, log, latest, holidays, measured),
-                outlook, recent(series, measured), notes, form, decomposition, episodes, breaks.method());
+                calendarFinding, outlook, recent(series, measured), notes, form, decomposition, episodes, breaks.method());
     }
 
     private FormChoice chooseForm(double[] x, int period, Measure measured) {

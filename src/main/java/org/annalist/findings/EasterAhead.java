@@ -11,13 +11,14 @@ import org.annalist.series.Period;
 import org.annalist.series.Series;
 
 /**
- * A forecast year's Easter against the years the outlook was fitted on. The forecasts are made on
- * the values as observed, Easter's effect in them, and no calendar effect is put back afterwards:
- * March and April (the first two quarters) keep the average share of the days before Easter they
- * had in the years fitted. The Easter effect is estimated on that share centred per calendar month
- * ({@code CalendarEffects}), so a forecast that carries the average share is off by the effect times
- * the year's share less that average, Δ: exp(β·Δ) − 1 on logs, β·Δ over the period's forecast
- * otherwise (the regressor of Bell &amp; Hillmer 1983, see {@link CalendarRegressors}).
+ * A forecast year's Easter against the years the outlook was fitted on. The forecasting methods see
+ * the values as observed, Easter's effect in them, so March and April (the first two quarters) come
+ * out with the average share of the days before Easter they had in the years fitted. The Easter
+ * effect is estimated on that share centred per calendar month ({@code CalendarEffects}), so a
+ * forecast that carries the average share is off by the effect times the year's share less that
+ * average, Δ: by exp(β·Δ) on logs, by β·Δ otherwise (the regressor of Bell &amp; Hillmer 1983, see
+ * {@link CalendarRegressors}). The outlook moves its forecasts by that much, Easter's date being
+ * known ahead ({@code OutlookAnalysis}).
  *
  * @param sunday       Easter Sunday of {@code year}
  * @param window       the days before Easter Sunday counted as Easter's
@@ -26,8 +27,8 @@ import org.annalist.series.Series;
  * @param fromYear     the first year of that average …
  * @param toYear       … and the last
  * @param months       the periods are months (else quarters)
- * @param moves        how far the outcome of each forecast period of March and April may lie from its
- *                     forecast by the estimated effect, in % (positive: above); only periods forecast
+ * @param moves        how far Easter's date moves the forecast of each forecast period of March and
+ *                     April from the average share's, by the estimated effect; only periods forecast
  */
 public record EasterAhead(int year, LocalDate sunday, int window, long daysEarlier, double averageShare, int fromYear,
                           int toYear, boolean months, List<Move> moves) {
@@ -39,19 +40,36 @@ public record EasterAhead(int year, LocalDate sunday, int window, long daysEarli
         moves = List.copyOf(moves);
     }
 
-    /** @param pct the outcome against the forecast by the estimated effect, in % */
-    public record Move(Period period, double pct) {
+    /**
+     * @param pct     the move in % of the forecast with the average share (positive: higher)
+     * @param working the move on the working scale: β·Δ, a log difference on logs, else in units
+     */
+    public record Move(Period period, double pct, double working) {
     }
 
     /**
      * One entry per forecast year that reaches March or April, when the calendar analysis kept an
      * Easter effect (monthly and quarterly data); empty otherwise, or when no year fitted has March
-     * and April both observed.
+     * and April both observed. The findings' forecasts already carry the moves.
      */
     public static List<EasterAhead> of(Series series, Findings findings) {
-        CalendarFinding calendar = findings.calendar();
         OutlookFinding o = findings.outlook();
-        if (calendar == null || o == null) {
+        if (o == null) {
+            return List.of();
+        }
+        return of(series, findings.calendar(), findings.transform() == Transform.LOG, o.fittedFrom(),
+                o.forecasts().stream().map(OutlookFinding.Point::period).toList(),
+                o.forecasts().stream().mapToDouble(OutlookFinding.Point::mean).toArray(), true);
+    }
+
+    /**
+     * As {@link #of(Series, Findings)}, for forecasts of {@code periods} with these means.
+     *
+     * @param moved the means already carry the moves (their % is then taken against the mean without)
+     */
+    static List<EasterAhead> of(Series series, CalendarFinding calendar, boolean log, Period fittedFrom,
+                                List<Period> periods, double[] means, boolean moved) {
+        if (calendar == null) {
             return List.of();
         }
         Optional<CalendarFinding.Effect> effect = calendar.effects().stream()
@@ -68,7 +86,7 @@ public record EasterAhead(int year, LocalDate sunday, int window, long daysEarli
         int toYear = 0;
         for (int t = 0; t + 1 < series.size(); t++) {
             Period p = series.period(t);
-            if (p.compareTo(o.fittedFrom()) >= 0 && p.seasonalPosition() == position
+            if (p.compareTo(fittedFrom) >= 0 && p.seasonalPosition() == position
                     && !series.isMissing(t) && !series.isMissing(t + 1)) {
                 sum += CalendarRegressors.easterShare(p, window);
                 fromYear = count == 0 ? p.year() : fromYear;
@@ -80,11 +98,11 @@ public record EasterAhead(int year, LocalDate sunday, int window, long daysEarli
             return List.of();
         }
         double average = sum / count;
-        boolean log = findings.transform() == Transform.LOG;
-        List<Integer> years = o.forecasts().stream().map(OutlookFinding.Point::period)
+        List<Integer> years = periods.stream()
                 .filter(p -> p.startDate().getMonthValue() <= 4 && p.endDate().getMonthValue() >= 3
                         && p.startDate().getYear() == p.endDate().getYear())
                 .map(Period::year).distinct().toList();
+        double beta = effect.get().coefficient();
         List<EasterAhead> ahead = new ArrayList<>();
         for (int year : years) {
             Period earlier = monthly ? Period.month(year, 3) : Period.quarter(year, 1);
@@ -92,15 +110,16 @@ public record EasterAhead(int year, LocalDate sunday, int window, long daysEarli
             List<Move> moves = new ArrayList<>();
             for (Period p : List.of(earlier, earlier.plus(1))) {
                 // the share moves from one period to the other: what March gains, April loses
-                double delta = p.equals(earlier) ? share - average : average - share;
-                o.forecasts().stream().filter(q -> q.period().equals(p)).findFirst().ifPresent(point -> {
-                    double beta = effect.get().coefficient();
-                    double pct = log ? 100 * Math.expm1(beta * delta)
-                            : point.mean() == 0 ? Double.NaN : 100 * beta * delta / point.mean();
-                    if (!Double.isNaN(pct)) {
-                        moves.add(new Move(p, pct));
-                    }
-                });
+                double working = beta * (p.equals(earlier) ? share - average : average - share);
+                int k = periods.indexOf(p);
+                if (k < 0) {
+                    continue;
+                }
+                double without = moved && !log ? means[k] - working : means[k];
+                double pct = log ? 100 * Math.expm1(working) : without == 0 ? Double.NaN : 100 * working / without;
+                if (!Double.isNaN(pct)) {
+                    moves.add(new Move(p, pct, working));
+                }
             }
             ahead.add(new EasterAhead(year, Easter.sunday(year), window, Math.round(share * window), average, fromYear,
                     toYear, monthly, moves));

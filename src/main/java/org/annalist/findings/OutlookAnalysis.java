@@ -6,6 +6,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.stream.IntStream;
 import org.annalist.analysis.forecast.Outlook;
 import org.annalist.analysis.forecast.YearSums;
 import org.annalist.analysis.indicators.LatestIndicators;
@@ -33,9 +34,13 @@ final class OutlookAnalysis {
     /**
      * @param episodes the falls and rises that moved back: each one that ended before the latest
      *                 values is bridged before forecasting ({@link #bridged})
+     * @param calendar the calendar analysis, whose Easter effect moves the forecasts of March and
+     *                 April with Easter's date ({@link EasterAhead}); null without one
+     * @param log      the analysis worked on logarithms (the calendar effects are log differences)
      */
     static OutlookFinding of(Series series, Optional<Decomposition> decomposition, int regimeStart,
-                             List<Episode> episodes, Measure kind, Optional<Integer> horizon) {
+                             List<Episode> episodes, Measure kind, Optional<Integer> horizon, CalendarFinding calendar,
+                             boolean log) {
         LatestIndicators.Measure measure = kind.forIndicators();
         int last = lastObserved(series);
         if (last < 0 || horizon.isPresent() && horizon.get() == 0) {
@@ -57,8 +62,10 @@ final class OutlookAnalysis {
             caveats.add(new OutlookCaveat.NoBacktest(Outlook.backtestPossible(y.length, period)
                     ? OutlookCaveat.NoBacktest.Reason.NO_SCALE : OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT));
         }
-        Outlook.Forecast f = outlook.chosen();
         Period lastPeriod = series.period(last);
+        Outlook.Forecast f = easterMoved(outlook.chosen(), EasterAhead.of(series, calendar, log, series.period(from),
+                IntStream.range(0, h).mapToObj(k -> lastPeriod.plus(k + 1)).toList(), outlook.chosen().mean(), false),
+                lastPeriod, log);
         double[] mean = f.mean();
         double[] lo80 = f.lo80();
         double[] hi80 = f.hi80();
@@ -92,6 +99,39 @@ final class OutlookAnalysis {
                 years.current(), years.change(), outlook.widened(), outlook.narrowed(),
                 tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null,
                 typicalYearError(outlook, period), months(lastPeriod, f, h, kind));
+    }
+
+    /**
+     * The forecast with March and April (the first two quarters) moved for Easter's date: every
+     * path, the mean and the interval limits by the same factor exp(β·Δ) on logs, or the same
+     * amount β·Δ otherwise, so the intervals, the year's totals from the paths and the table agree.
+     * A moved value is kept at zero or above where it was (a count cannot fall below zero).
+     */
+    static Outlook.Forecast easterMoved(Outlook.Forecast f, List<EasterAhead> ahead, Period last, boolean log) {
+        if (ahead.isEmpty()) {
+            return f;
+        }
+        double[] mean = f.mean();
+        double[][] limits = {f.lo80(), f.hi80(), f.lo95(), f.hi95()};
+        double[][] paths = f.paths();
+        for (EasterAhead a : ahead) {
+            for (EasterAhead.Move m : a.moves()) {
+                int k = (int) last.until(m.period()) - 1;
+                mean[k] = moved(mean[k], m.working(), log);
+                for (double[] limit : limits) {
+                    limit[k] = moved(limit[k], m.working(), log);
+                }
+                for (double[] path : paths) {
+                    path[k] = moved(path[k], m.working(), log);
+                }
+            }
+        }
+        return new Outlook.Forecast(f.model(), mean, limits[0], limits[1], limits[2], limits[3], paths);
+    }
+
+    private static double moved(double value, double working, boolean log) {
+        double v = log ? value * Math.exp(working) : value + working;
+        return value >= 0 ? Math.max(0, v) : v;
     }
 
     /** Daily data: every whole calendar month within the horizon, for a table a reader can print. */

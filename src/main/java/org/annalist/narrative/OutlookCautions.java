@@ -227,12 +227,11 @@ final class OutlookCautions {
     }
 
     /**
-     * That the forecasts do not move Easter's effect with its date, when the calendar analysis kept
-     * an Easter effect and the outlook reaches March or April; empty otherwise. The forecasts are
-     * made on the values as observed, Easter's effect in them, and no calendar effect is put back
-     * afterwards: March and April keep the average share of the days before Easter they had in the
-     * years fitted. For each forecast year, Easter's date, the share of those days in March against
-     * that average, and what the estimated effect makes of the difference ({@link EasterAhead}).
+     * That the forecasts move Easter's effect with its date, when the calendar analysis kept an
+     * Easter effect and the outlook reaches March or April; empty otherwise. The methods forecast
+     * the values as observed, so March and April come out with the average share of the days before
+     * Easter they had in the years fitted; the outlook then moves them by the estimated effect for
+     * each forecast year's Easter ({@link EasterAhead}), and says by how much.
      *
      * @param percent changes are given in % (else the effect's size is left out: a rate's is in points)
      */
@@ -248,18 +247,19 @@ final class OutlookCautions {
                 + (e.effectPct() < 0 ? " lower" : " higher") + " (" + f.pValue(e.pValue()) + ")"
                 : " (" + f.pValue(e.pValue()) + ")";
         StringBuilder text = new StringBuilder("The calendar analysis found an Easter effect" + size + ". The forecasts"
-                + " do not move it with Easter's date: they give " + (ahead.get(0).months() ? "March and April"
-                : "the first two quarters") + " the share of the days before Easter they had on average in the years fitted.");
+                + " move it with Easter's date, which is known ahead: the methods alone would give " + (ahead.get(0).months()
+                ? "March and April" : "the first two quarters") + " the share of the days before Easter they had on average"
+                + " in the years fitted.");
         for (EasterAhead a : ahead) {
             text.append(' ').append(easterYear(a, f, percent));
         }
-        return text.append(" Their sum is less affected.").toString();
+        return text.toString();
     }
 
     /**
      * {@code Easter 2027 falls on 28 March, with all 8 days before it in March, against 36 % of them
-     * on average in 2011 to 2026: by the estimated effect, March 2027 may turn out about 6.2 % above
-     * its forecast and April 2027 about 5.8 % below.} A difference under {@link
+     * on average in 2011 to 2026: by the estimated effect, the forecast for March 2027 is set about
+     * 6.2 % higher and that for April 2027 about 5.8 % lower.} A move under {@link
      * DecisionRules#CALENDAR_NAMED_PCT} is said to be small.
      */
     static String easterYear(EasterAhead a, Formats f, boolean percent) {
@@ -274,15 +274,16 @@ final class OutlookCautions {
             return dated + ".";
         }
         if (a.moves().stream().allMatch(m -> Math.abs(m.pct()) < DecisionRules.CALENDAR_NAMED_PCT)) {
-            return dated + ": by the estimated effect, " + Terms.listed(a.moves().stream().map(m -> f.period(m.period())).toList())
-                    + (a.moves().size() == 1 ? " should differ" : " should each differ") + " from the forecast by less than "
+            return dated + ": by the estimated effect, " + (a.moves().size() == 1 ? "the forecast for " : "the forecasts for ")
+                    + Terms.listed(a.moves().stream().map(m -> f.period(m.period())).toList())
+                    + (a.moves().size() == 1 ? " moves" : " each move") + " by less than "
                     + f.percent(DecisionRules.CALENDAR_NAMED_PCT) + ".";
         }
         List<String> moves = new ArrayList<>();
         for (EasterAhead.Move m : a.moves()) {
-            String by = percent ? " about " + f.percent(Math.abs(m.pct())) : "";
-            moves.add(moves.isEmpty() ? f.period(m.period()) + " may turn out" + by + (m.pct() > 0 ? " above" : " below")
-                    + " its forecast" : f.period(m.period()) + by + (m.pct() > 0 ? " above" : " below"));
+            String by = (percent ? " about " + f.percent(Math.abs(m.pct())) : "") + (m.pct() > 0 ? " higher" : " lower");
+            moves.add(moves.isEmpty() ? "the forecast for " + f.period(m.period()) + " is set" + by
+                    : "that for " + f.period(m.period()) + by);
         }
         return dated + ": by the estimated effect, " + String.join(" and ", moves) + ".";
     }

@@ -421,18 +421,17 @@ class StatementAuditTest {
 
     /**
      * Where the calendar analysis kept an Easter effect and the outlook forecasts a March or April,
-     * the outlook page says the forecasts do not move that effect with Easter's date (the forecasts
-     * are made on the observed values and put no calendar effect back).
+     * the outlook page says the forecasts move that effect with Easter's date (and only there).
      */
     @Test
-    void anOutlookOverEasterSaysItDoesNotMoveEastersEffect() {
+    void anOutlookOverEasterSaysItMovesEastersEffectWithItsDate() {
         assertNone(b -> {
             boolean kept = b.findings().calendar() != null && b.findings().calendar().effects().stream()
                     .anyMatch(e -> e.name().equals(CalendarFinding.EASTER) && e.kept());
             boolean spring = b.findings().outlook() != null && b.findings().outlook().forecasts().stream()
                     .anyMatch(p -> p.period().startDate().getMonthValue() <= 4 && p.period().endDate().getMonthValue() >= 3
                             && p.period().startDate().getYear() == p.period().endDate().getYear());
-            boolean said = b.body().contains("The forecasts do not move it with Easter");
+            boolean said = b.body().contains("The forecasts move it with Easter's date");
             return said != (kept && spring) ? List.of("Easter kept: " + kept + ", March or April forecast: " + spring
                     + ", said: " + said) : List.of();
         }, "an outlook over March or April silent on Easter's moving effect, or speaking of it without one");

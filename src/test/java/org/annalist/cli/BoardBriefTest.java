@@ -112,9 +112,11 @@ class BoardBriefTest {
             low = Math.min(low, gap);
             high = Math.max(high, gap);
         }
-        assertThat(high).as("every month of 2027 sums below the total's").isNegative();
-        assertThat(text).contains(("in each month of 2027 their forecasts sum to " + f.fixed(-high, 1) + " to "
-                + f.percent(-low) + " below the total's").replace('\u00A0', ' '));
+        // a month-by-month range is given only when every month lies on one side; with Easter's effect
+        // moved to its 2027 date in the markets that have one, March sums above the total's, April below
+        assertThat(low).as("some month of 2027 sums below the total's").isNegative();
+        assertThat(high).as("and March above it").isPositive();
+        assertThat(text).doesNotContain("in each month of 2027 their forecasts sum to");
     }
 
     /**

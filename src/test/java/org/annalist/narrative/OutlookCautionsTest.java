@@ -108,11 +108,12 @@ class OutlookCautionsTest {
 
     /**
      * Easter 2027 is on 28 March (the published table of Easter dates), so all eight days before it
-     * fall in March; the forecasts carry March's average share of those days over the years fitted.
-     * The expected miss is derived here from the definition: on logs, exp(β · (share − average)) − 1.
+     * fall in March; the methods carry March's average share of those days over the years fitted, and
+     * the outlook moves the two months by the effect. The move is derived here from the definition:
+     * on logs, exp(β · (share − average)) − 1.
      */
     @Test
-    void anEasterEffectNamesNextEastersDateAndWhichMonthTheForecastsMayMissAndByHowMuch() {
+    void anEasterEffectNamesNextEastersDateAndHowFarItMovesTheForecastsOfMarchAndApril() {
         CalendarFinding.Effect easter = findings.calendar().effects().stream()
                 .filter(e -> e.name().equals(CalendarFinding.EASTER)).findFirst().orElseThrow();
         assertThat(easter.kept()).as("the demo plants an Easter effect in the home market").isTrue();
@@ -133,11 +134,11 @@ class OutlookCautionsTest {
         double march = 100 * Math.expm1(easter.coefficient() * (1 - average));
         double april = 100 * Math.expm1(easter.coefficient() * (average - 1));
         String note = OutlookCautions.easter(domestic, findings, f, true);
-        assertThat(note).contains("about " + f.percent(easter.effectPct()) + " higher", "do not move it with Easter's date",
+        assertThat(note).contains("about " + f.percent(easter.effectPct()) + " higher", "move it with Easter's date",
                 "Easter 2027 falls on 28 March, with all 8 days before it in March, against "
                         + f.fixed(100 * average, 0) + "\u00A0% of them on average in 2011 to 2026: by the estimated effect,"
-                        + " March 2027 may turn out about " + f.percent(march) + " above its forecast and April 2027 about "
-                        + f.percent(-april) + " below.");
+                        + " the forecast for March 2027 is set about " + f.percent(march) + " higher and that for April 2027"
+                        + " about " + f.percent(-april) + " lower.");
         assertThat(march).as("a late-March Easter in a year fitted mostly on later ones").isGreaterThan(3);
         assertThat(OutlookViews.of(domestic, findings, f, MeasureWords.of(domestic, findings, f)).caveats()).contains(note);
     }
