@@ -46,11 +46,13 @@ public final class Batch {
     public static List<Outcome> run(BatchPlan plan, int threads, Consumer<Outcome> finished) {
         List<BatchPlan.Planned> briefs = plan.briefs();
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(threads, briefs.size())));
+        OldGenerationHeadroom headroom = OldGenerationHeadroom.ofThisJvm();
         try {
             List<Future<Outcome>> futures = new ArrayList<>();
             for (BatchPlan.Planned brief : briefs) {
                 futures.add(pool.submit(() -> {
                     Outcome outcome = make(plan.pipeline(), brief);
+                    headroom.afterBrief();
                     finished.accept(outcome);
                     return outcome;
                 }));

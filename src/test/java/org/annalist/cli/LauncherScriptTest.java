@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
@@ -76,6 +77,24 @@ class LauncherScriptTest {
         List<String> own = run(Map.of("JAVA_HOME", java.toString(), "ANNALIST_JAVA_OPTS", "-Xmx2g"), temp,
                 home.resolve("bin/annalist").toString(), "batch", "briefs.yaml").lines();
         assertThat(own).contains("-Xmx2g").doesNotContain("-Xmx640m", "-Xms192m");
+    }
+
+    /**
+     * A batch runs with at most two glibc malloc arenas, so that the native memory of its briefs'
+     * layout threads does not spread over more arenas as the batch goes on (the launcher's comment
+     * gives the measurement); other commands are left to glibc's default, and a limit of the user's
+     * own is kept.
+     */
+    @Test
+    void aBatchLimitsGlibcToTwoMallocArenasUnlessTheUserSetsALimit() throws Exception {
+        Path java = fakeJava("17.0.15");
+        String launcher = home.resolve("bin/annalist").toString();
+        Map<String, String> env = Map.of("JAVA_HOME", java.toString(), "SHOW_MALLOC_ARENA_MAX", "yes");
+        assertThat(run(env, temp, launcher, "batch", "b.yaml").lines()).contains("MALLOC_ARENA_MAX=2");
+        assertThat(run(env, temp, launcher, "brief", "f.csv").lines()).contains("MALLOC_ARENA_MAX=");
+        Map<String, String> own = new HashMap<>(env);
+        own.put("MALLOC_ARENA_MAX", "4");
+        assertThat(run(own, temp, launcher, "batch", "b.yaml").lines()).contains("MALLOC_ARENA_MAX=4");
     }
 
     /**
@@ -300,7 +319,8 @@ class LauncherScriptTest {
     }
 
     /**
-     * A JDK folder whose bin/java prints its arguments one per line and exits with {@code FAKE_EXIT}
+     * A JDK folder whose bin/java prints its arguments one per line (after the glibc arena limit it
+     * was started with, when {@code SHOW_MALLOC_ARENA_MAX} is set) and exits with {@code FAKE_EXIT}
      * (0 without it), and whose release file names {@code version}.
      */
     private Path fakeJava(String version) throws IOException {
@@ -313,6 +333,7 @@ class LauncherScriptTest {
         Files.writeString(java, """
                 #!/bin/sh
                 mode=; conf=; cache=; list=; archive=; dump=
+                if [ -n "${SHOW_MALLOC_ARENA_MAX:-}" ]; then printf 'MALLOC_ARENA_MAX=%s\n' "${MALLOC_ARENA_MAX-}"; fi
                 for a in "$@"; do
                     printf '%s\\n' "$a"
                     case $a in
@@ -362,6 +383,7 @@ class LauncherScriptTest {
         ProcessBuilder builder = new ProcessBuilder(command).directory(workingFolder.toFile());
         builder.environment().remove("JAVA_HOME");
         builder.environment().remove("ANNALIST_JAVA_OPTS");
+        builder.environment().remove("MALLOC_ARENA_MAX");
         builder.environment().putAll(env);
         Path out = Files.createTempFile("launcher", ".out");
         Path err = Files.createTempFile("launcher", ".err");
