@@ -52,7 +52,7 @@ class AppendixViewsTest {
         // the demo plants Easter and no weekend effect (demo-data/README.md)
         assertThat(findings.calendar().effects()).anyMatch(e -> e.name().equals(CalendarFinding.EASTER) && e.kept())
                 .anyMatch(e -> e.name().equals(CalendarFinding.WEEKEND_NIGHTS) && !e.kept());
-        assertThat(settings).contains(findings.calendar().screenedOut().size() + " periods set aside as one-offs");
+        assertThat(settings).contains(findings.calendar().screenedOut().size() + " periods left out of the fit as unusual (robust weighting; not the one-offs reported above)");
     }
 
     @Test

@@ -57,7 +57,11 @@ class TermsTest {
         Formats f = Formats.forValues(new double[] {1}, Locale.ENGLISH);
         assertThat(Terms.outlookCaveat(new OutlookCaveat.FittedSinceBreak(Period.month(2022, 8), 10, 8), f))
                 .isEqualTo("The outlook is fitted on the values since the structural change in August 2022 only: so"
-                        + " fitted, its forecasts of the last periods missed by less than when fitted on all values.");
+                        + " fitted, its forecasts of the last periods missed by at least 25\u00A0% less than when fitted on"
+                        + " all values.");
+        // the margin named is the rule's (Outlook.REGIME_ADVANTAGE_PCT), also when it was not reached
+        assertThat(Terms.outlookCaveat(new OutlookCaveat.HistoryKept(Period.month(2022, 8), 10, 8), f))
+                .endsWith("did not miss by at least 25\u00A0% less, the margin it would have needed.");
         assertThat(Terms.outlookCaveat(new OutlookCaveat.GapsFilled(1), f))
                 .isEqualTo("1 missing value was filled with what trend and season predict before forecasting.");
     }
