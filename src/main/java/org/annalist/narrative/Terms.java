@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import org.annalist.analysis.forecast.Outlook;
 import org.annalist.findings.BreakKind;
 import org.annalist.findings.BreakMethod;
 import org.annalist.findings.Caveat;
@@ -192,14 +191,14 @@ final class Terms {
     static String outlookCaveat(OutlookCaveat caveat, Formats f) {
         if (caveat instanceof OutlookCaveat.FittedSinceBreak b) {
             return "The outlook is fitted on the values since the structural change in " + f.period(b.start())
-                    + " only: so fitted, its forecasts of the last periods missed by at least " + Outlook.REGIME_ADVANTAGE_PCT
-                    + "\u00A0% less than when fitted on all values.";
+                    + " only: so fitted, its forecasts of the last periods missed by at least "
+                    + DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT + "\u00A0% less than when fitted on all values.";
         }
         if (caveat instanceof OutlookCaveat.HistoryKept b) {
             return "The outlook is fitted on all values, the years before the structural change in "
                     + f.period(b.start()) + " included: fitted on the values since then alone, its forecasts of the"
-                    + " last periods did not miss by at least " + Outlook.REGIME_ADVANTAGE_PCT + "\u00A0% less, the"
-                    + " margin it would have needed.";
+                    + " last periods did not miss by at least " + DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT
+                    + "\u00A0% less, the margin it would have needed.";
         }
         if (caveat instanceof OutlookCaveat.ShockBridged b) {
             // what was bridged, not a verdict on recovery: a step may have followed the climb back

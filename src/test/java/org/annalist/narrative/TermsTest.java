@@ -59,7 +59,7 @@ class TermsTest {
                 .isEqualTo("The outlook is fitted on the values since the structural change in August 2022 only: so"
                         + " fitted, its forecasts of the last periods missed by at least 25\u00A0% less than when fitted on"
                         + " all values.");
-        // the margin named is the rule's (Outlook.REGIME_ADVANTAGE_PCT), also when it was not reached
+        // the margin named is the rule's (DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT), also when it was not reached
         assertThat(Terms.outlookCaveat(new OutlookCaveat.HistoryKept(Period.month(2022, 8), 10, 8), f))
                 .endsWith("did not miss by at least 25\u00A0% less, the margin it would have needed.");
         assertThat(Terms.outlookCaveat(new OutlookCaveat.GapsFilled(1), f))
