@@ -138,7 +138,8 @@ public final class Analyst {
         boolean calendarAtTheEnd = y.length > 1 && (calendar.part(y.length - 1) != 0 || calendar.part(y.length - 2) != 0);
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
                 : LatestIndicators.at(series, series.size() - 1, kind,
-                stl.map(fit -> levelAdjusted(y, fit, calendar, log, calendarAtTheEnd)).orElse(null), parts);
+                (calendarAtTheEnd ? stl.map(fit -> seasonAndCalendarFree(y, fit, calendar, log))
+                        : decomposition.map(Decomposition::adjusted)).orElse(null), parts);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
         CalendarFinding calendarFinding = CalendarAnalysis.of(series, calendar, log, latest, holidays, measured);
@@ -204,11 +205,7 @@ public final class Analyst {
      * local seasonal component has already taken in part of a moving holiday, unevenly from year to
      * year (an April Easter after a March one left half of it in a planted series).
      */
-    private static double[] levelAdjusted(double[] y, Stl.Result stl, CalendarAnalysis.Fit calendar, boolean log,
-                                          boolean calendarAtTheEnd) {
-        if (!calendarAtTheEnd) {
-            return WorkingScale.toUnits(stl.adjusted(), log);
-        }
+    private static double[] seasonAndCalendarFree(double[] y, Stl.Result stl, CalendarAnalysis.Fit calendar, boolean log) {
         double[] calendarFree = new double[y.length];
         for (int t = 0; t < y.length; t++) {
             calendarFree[t] = y[t] - calendar.part(t);
