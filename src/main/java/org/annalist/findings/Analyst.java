@@ -138,7 +138,7 @@ public final class Analyst {
         boolean calendarAtTheEnd = y.length > 1 && (calendar.part(y.length - 1) != 0 || calendar.part(y.length - 2) != 0);
         LatestIndicators.Result latest = series.isMissing(series.size() - 1) ? null
                 : LatestIndicators.at(series, series.size() - 1, kind,
-                (calendarAtTheEnd ? stl.map(fit -> seasonAndCalendarFree(y, fit, calendar, log))
+                (calendarAtTheEnd ? stl.map(fit -> seasonAndCalendarFree(y, period, calendar, log))
                         : decomposition.map(Decomposition::adjusted)).orElse(null), parts);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
         IrregularFinding irregular = irregular(y, remainder);
@@ -205,12 +205,12 @@ public final class Analyst {
      * local seasonal component has already taken in part of a moving holiday, unevenly from year to
      * year (an April Easter after a March one left half of it in a planted series).
      */
-    private static double[] seasonAndCalendarFree(double[] y, Stl.Result stl, CalendarAnalysis.Fit calendar, boolean log) {
+    private static double[] seasonAndCalendarFree(double[] y, int period, CalendarAnalysis.Fit calendar, boolean log) {
         double[] calendarFree = new double[y.length];
         for (int t = 0; t < y.length; t++) {
             calendarFree[t] = y[t] - calendar.part(t);
         }
-        return WorkingScale.toUnits(decomposer(stl.parameters().period()).fit(calendarFree).adjusted(), log);
+        return WorkingScale.toUnits(decomposer(period).fit(calendarFree).adjusted(), log);
     }
 
     private static Decomposition decomposition(Stl.Result stl, boolean log) {

@@ -326,7 +326,7 @@ final class CalendarAnalysis {
     }
 
     /** A shift on the working scale as a % of {@code base}: exp(d) − 1 on logs, d / base otherwise. */
-    private static double shiftPct(double d, boolean log, double base) {
+    static double shiftPct(double d, boolean log, double base) {
         return log ? 100 * (Math.exp(d) - 1) : base == 0 ? Double.NaN : 100 * d / base;
     }
 

@@ -48,27 +48,14 @@ public record EasterAhead(int year, LocalDate sunday, int window, long daysEarli
     }
 
     /**
-     * One entry per forecast year that reaches March or April, when the calendar analysis kept an
-     * Easter effect (monthly and quarterly data); empty otherwise, or when no year fitted has March
-     * and April both observed. The findings' forecasts already carry the moves.
-     */
-    public static List<EasterAhead> of(Series series, Findings findings) {
-        OutlookFinding o = findings.outlook();
-        if (o == null) {
-            return List.of();
-        }
-        return of(series, findings.calendar(), findings.transform() == Transform.LOG, o.fittedFrom(),
-                o.forecasts().stream().map(OutlookFinding.Point::period).toList(),
-                o.forecasts().stream().mapToDouble(OutlookFinding.Point::mean).toArray(), true);
-    }
-
-    /**
-     * As {@link #of(Series, Findings)}, for forecasts of {@code periods} with these means.
+     * One entry per forecast year among {@code periods} that reaches March or April, when the
+     * calendar analysis kept an Easter effect (monthly and quarterly data); empty otherwise, or when
+     * no year fitted has March and April both observed.
      *
-     * @param moved the means already carry the moves (their % is then taken against the mean without)
+     * @param means the forecasts of {@code periods}, before any move (a move in units is taken in % of them)
      */
     static List<EasterAhead> of(Series series, CalendarFinding calendar, boolean log, Period fittedFrom,
-                                List<Period> periods, double[] means, boolean moved) {
+                                List<Period> periods, double[] means) {
         if (calendar == null) {
             return List.of();
         }
@@ -115,8 +102,7 @@ public record EasterAhead(int year, LocalDate sunday, int window, long daysEarli
                 if (k < 0) {
                     continue;
                 }
-                double without = moved && !log ? means[k] - working : means[k];
-                double pct = log ? 100 * Math.expm1(working) : without == 0 ? Double.NaN : 100 * working / without;
+                double pct = CalendarAnalysis.shiftPct(working, log, means[k]);
                 if (!Double.isNaN(pct)) {
                     moves.add(new Move(p, pct, working));
                 }

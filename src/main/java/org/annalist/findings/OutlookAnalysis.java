@@ -63,9 +63,9 @@ final class OutlookAnalysis {
                     ? OutlookCaveat.NoBacktest.Reason.NO_SCALE : OutlookCaveat.NoBacktest.Reason.SERIES_TOO_SHORT));
         }
         Period lastPeriod = series.period(last);
-        Outlook.Forecast f = easterMoved(outlook.chosen(), EasterAhead.of(series, calendar, log, series.period(from),
-                IntStream.range(0, h).mapToObj(k -> lastPeriod.plus(k + 1)).toList(), outlook.chosen().mean(), false),
-                lastPeriod, log);
+        List<EasterAhead> easter = EasterAhead.of(series, calendar, log, series.period(from),
+                IntStream.range(0, h).mapToObj(k -> lastPeriod.plus(k + 1)).toList(), outlook.chosen().mean());
+        Outlook.Forecast f = easterMoved(outlook.chosen(), easter, lastPeriod, log);
         double[] mean = f.mean();
         double[] lo80 = f.lo80();
         double[] hi80 = f.hi80();
@@ -98,7 +98,7 @@ final class OutlookAnalysis {
                 total, average, scores, choice(outlook.choice(), period), typical, nextYear, outlook.origins(), caveats,
                 years.current(), years.change(), outlook.widened(), outlook.narrowed(),
                 tested ? series.period(last + 1 - outlook.origins()) : null, tested ? lastPeriod : null,
-                typicalYearError(outlook, period), months(lastPeriod, f, h, kind));
+                typicalYearError(outlook, period), months(lastPeriod, f, h, kind), easter);
     }
 
     /**

@@ -33,6 +33,8 @@ import org.annalist.series.Period;
  *                        enough of them, or without a season)
  * @param months          for daily data, the whole calendar months forecast, each as its total (a
  *                        flow) or mean with intervals from the paths, for the printed table (empty otherwise)
+ * @param easterMoves     how Easter's date moved the forecasts of March and April, one entry per
+ *                        forecast year that reaches them (empty without a kept Easter effect)
  */
 @JsonPropertyOrder({"method", "model", "horizon", "fitted_from", "forecasts", "next_year_total", "next_year_average",
     "backtest", "chosen_because", "typical_error_pct", "current_year", "next_year_change", "intervals_widened",
@@ -43,13 +45,15 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
                              @JsonIgnore List<OutlookCaveat> caveats, CurrentYear currentYear,
                              YearChange nextYearChange, boolean intervalsWidened, boolean intervalsNarrowed,
                              Period backtestFrom,
-                             Period backtestTo, Double typicalYearErrorPct, List<Month> months) {
+                             Period backtestTo, Double typicalYearErrorPct, List<Month> months,
+                             @JsonIgnore List<EasterAhead> easterMoves) {
 
     public OutlookFinding {
         forecasts = List.copyOf(forecasts);
         backtest = List.copyOf(backtest);
         caveats = List.copyOf(caveats);
         months = List.copyOf(months);
+        easterMoves = List.copyOf(easterMoves);
     }
 
     /**
@@ -133,6 +137,11 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
      */
     public record YearChange(int year, int againstYear, Double pct, Double pctLo80, Double pctHi80,
                              double difference, double differenceLo80, double differenceHi80, boolean aboutTheSame) {
+
+        /** Whether the change's 80 % interval holds no change (a change not to be called a rise or a fall). */
+        public boolean holdsNoChange() {
+            return pctLo80 != null && pctHi80 != null && pctLo80 <= 0 && 0 <= pctHi80;
+        }
     }
 
     /** A whole calendar month of daily forecasts: its total (a flow) or mean, with 80 and 95 % intervals. */

@@ -88,8 +88,9 @@ final class TrendAnalysis {
             double logSlope = SenSlope.of(java.util.Arrays.stream(regime).map(Math::log).toArray(), perYear,
                     mk.varianceUsed()).perYear();
             pct = 100 * Math.expm1(logSlope);
-        } else if (inPercent && Analyst.latestYearMean(series) > 0) {
-            pct = 100 * sen.perYear() / Analyst.latestYearMean(series);
+        } else if (inPercent) {
+            double latestLevel = Analyst.latestYearMean(series);
+            pct = latestLevel > 0 ? 100 * sen.perYear() / latestLevel : null;
         }
         return Optional.of(new TrendFinding.LatestRegime(series.period(regimeStart), direction(mk), sen.perYear(),
                 sen.lower95(), sen.upper95(), mk.test().pValue(), (int) present, pct));

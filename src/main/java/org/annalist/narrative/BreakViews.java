@@ -31,13 +31,13 @@ final class BreakViews {
     List<BriefView.BreakRow> breaks() {
         List<BriefView.BreakRow> rows = new ArrayList<>();
         List<BreakFinding> all = findings.breaks();
+        BreakFinding first = all.isEmpty() ? null : all.get(0);
         for (int j = 0; j < all.size(); j++) {
             BreakFinding b = all.get(j);
             BreakFinding previous = j == 0 ? null : all.get(j - 1);
             // the regime between two breaks is one line: its level moved when its two ends differ visibly
             boolean drifted = previous != null
                     && Math.abs(b.levelBefore() - previous.levelAfter()) > 0.0005 * Math.abs(previous.levelAfter());
-            BreakFinding first = all.get(0);
             boolean overall = j == all.size() - 1 && j > 0;
             boolean slopesInPercent = findings.transform() == Transform.LOG && b.levelBefore() > 0 && b.levelAfter() > 0;
             Optional<TrendFinding.LatestRegime> latest = j == all.size() - 1 ? latestRegimeFrom(b) : Optional.empty();

@@ -49,8 +49,9 @@ public final class MultiBriefViews {
                     : fi.outlook().nextYearTotal() == null ? printed + " (average)" : printed;
             OutlookFinding.YearChange change = printed.isEmpty() ? null : fi.outlook().nextYearChange();
             boolean given = change != null && change.pct() != null && fi.outlook().currentYear() != null;
-            // the mark right after the figure it qualifies
-            boolean unclear = given && holdsNoChange(change);
+            // the mark right after the figure it qualifies: printed bare in the table, a "−1.0 %" whose
+            // 80 % interval holds no change would be read as a fall the outlook does not claim
+            boolean unclear = given && change.holdsNoChange();
             String nextYearChange = !given ? ""
                     : f.signedPercent(change.pct()) + (unclear ? MultiBriefView.UNCLEAR_MARK : "") + " on "
                     + change.againstYear() + (fi.outlook().currentYear().forecastPeriods() > 0 ? " (est.)" : "");
@@ -93,14 +94,6 @@ public final class MultiBriefViews {
                 MultiOutlookWords.methods(series, findings),
                 check.map(c -> MultiOutlookWords.partsForecasts(c, series, findings, formatsOf(c.total(), series, masthead)))
                         .orElse(""), unclearNote(unclearChanges));
-    }
-
-    /**
-     * Whether a next-year change in % has an 80 % interval that holds no change: printed bare in the
-     * table, a "−1.0 %" would be read as a fall the outlook does not claim (its section says so).
-     */
-    static boolean holdsNoChange(OutlookFinding.YearChange c) {
-        return c != null && c.pctLo80() != null && c.pctHi80() != null && c.pctLo80() <= 0 && 0 <= c.pctHi80();
     }
 
     /**

@@ -83,7 +83,7 @@ final class OutlookCautions {
         String span = sinceBreak ? "the trend since " + f.period(trend.from()) : "the trend over the whole period";
         String pacePct = "about " + f.signedPercent(pace) + basis;
         // a change whose own 80 % interval holds zero is not called a fall or a rise outright
-        boolean unsure = change.pctLo80() != null && change.pctLo80() <= 0 && 0 <= change.pctHi80();
+        boolean unsure = change.holdsNoChange();
         String verb = unsure ? " points " + (next < 0 ? "down" : "up") : " is a " + (next < 0 ? "fall" : "rise");
         String direction = verb + (unsure ? " (its 80\u00A0% interval also holds no change)" : "");
         String gap = opposite ? direction + ", while " + span + " "
@@ -236,7 +236,7 @@ final class OutlookCautions {
      * @param percent changes are given in % (else the effect's size is left out: a rate's is in points)
      */
     static String easter(Series series, Findings findings, Formats f, boolean percent) {
-        List<EasterAhead> ahead = EasterAhead.of(series, findings);
+        List<EasterAhead> ahead = findings.outlook() == null ? List.of() : findings.outlook().easterMoves();
         if (ahead.isEmpty()) {
             return "";
         }
@@ -285,6 +285,6 @@ final class OutlookCautions {
             moves.add(moves.isEmpty() ? "the forecast for " + f.period(m.period()) + " is set" + by
                     : "that for " + f.period(m.period()) + by);
         }
-        return dated + ": by the estimated effect, " + String.join(" and ", moves) + ".";
+        return dated + ": by the estimated effect, " + Terms.listed(moves) + ".";
     }
 }

@@ -41,7 +41,7 @@ class MultiOutlookWordsTest {
         OutlookFinding o = new OutlookFinding(model.method(), model, 12, Period.month(2020, 1), List.of(),
                 new OutlookFinding.Span(nextYear, nextYear * 0.9, nextYear * 1.1), null, List.of(),
                 new OutlookFinding.Choice(basis, 24, 0.5, Optional.empty(), 0.6), null, 2027, 24, List.of(), null,
-                null, false, false, null, null, null, List.of());
+                null, false, false, null, null, null, List.of(), List.of());
         return findings(o);
     }
 
