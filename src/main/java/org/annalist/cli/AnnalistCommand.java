@@ -3,10 +3,8 @@ package org.annalist.cli;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 
-/** The top-level command; the work is in its subcommands. */
+/** The top-level command; the work is in its subcommands, which {@link Main#commandLine} adds. */
 @Command(name = "annalist", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
-        subcommands = {CheckCommand.class, AnalyzeCommand.class, BriefCommand.class, BatchCommand.class,
-            DemoCommand.class, ServeCommand.class},
         description = "Reads a time series and writes a printable brief of what it is doing.",
         footer = {"", "Exit codes: 0 done, 1 internal error, 2 bad input or usage, 3 batch: some briefs failed "
             + "(the others were made)."})
