@@ -15,6 +15,7 @@ import org.annalist.analysis.decompose.Stl;
 import org.annalist.analysis.decompose.WorkingScale;
 import org.annalist.analysis.indicators.LatestIndicators;
 import org.annalist.analysis.indicators.YearOnYear;
+import org.annalist.series.Frequency;
 import org.annalist.series.Series;
 
 /**
@@ -141,7 +142,7 @@ public final class Analyst {
                 (calendarAtTheEnd ? stl.map(fit -> seasonAndCalendarFree(y, period, calendar, log))
                         : decomposition.map(Decomposition::adjusted)).orElse(null), parts);
         CycleFinding cycle = CycleAnalysis.of(series, workingAdjusted);
-        IrregularFinding irregular = irregular(y, remainder);
+        IrregularFinding irregular = irregular(y, remainder, breaks.breaks(), stl, series.frequency());
         CalendarFinding calendarFinding = CalendarAnalysis.of(series, calendar, log, latest, holidays, measured);
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), breaks.episodes(), measured,
                 horizon, calendarFinding, log);
@@ -220,8 +221,16 @@ public final class Analyst {
                 WorkingScale.toUnits(stl.remainder(), log), WorkingScale.toUnits(stl.adjusted(), log), log);
     }
 
-    private static IrregularFinding irregular(double[] y, double[] remainder) {
-        return Irregular.of(y, remainder).map(r -> IrregularFinding.of(r.share())).orElseGet(IrregularFinding::notMeasured);
+    /** The irregular share, leaving out the periods where the trend is still following a break ({@link Irregular}). */
+    private static IrregularFinding irregular(double[] y, double[] remainder, List<BreakFinding> breaks,
+            Optional<Stl.Result> stl, Frequency frequency) {
+        int movingAverage = CentredMovingAverage.windowFor(frequency);
+        int span = stl.map(fit -> fit.parameters().trendWindow())
+                .orElse(movingAverage % 2 == 0 ? movingAverage + 1 : movingAverage);
+        int[] starts = breaks.stream().mapToInt(BreakFinding::index).toArray();
+        return Irregular.of(y, remainder, starts, span)
+                .map(r -> IrregularFinding.of(r.share(), r.leftOut(), r.reach()))
+                .orElseGet(IrregularFinding::notMeasured);
     }
 
     private static Smoothing smoothing(Series series) {

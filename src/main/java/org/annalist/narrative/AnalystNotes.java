@@ -118,8 +118,10 @@ public final class AnalystNotes {
             }
         }
         line(out, "irregular", "%s", f.irregular().share() == null ? "not measured"
-                : String.format(Locale.ROOT, "%s (share %.2f of the variation around the long-run trend)",
-                f.irregular().size().code(), f.irregular().share()));
+                : String.format(Locale.ROOT, "%s (share %.2f of the variation around the long-run trend%s)",
+                f.irregular().size().code(), f.irregular().share(), f.irregular().leftOutNearBreaks() == 0 ? ""
+                        : "; " + f.irregular().leftOutNearBreaks() + " periods within " + f.irregular().reach()
+                        + " of a break left out, where the trend is still following it"));
         OutlookFinding o = f.outlook();
         if (o == null) {
             line(out, "outlook", "none");

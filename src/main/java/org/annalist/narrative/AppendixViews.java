@@ -8,6 +8,7 @@ import org.annalist.findings.DecisionRules;
 import org.annalist.findings.Findings;
 import org.annalist.findings.OutlookFinding;
 import org.annalist.findings.Transform;
+import org.annalist.series.Frequency;
 
 /** The methods appendix: each method with its source and the settings this brief used. */
 final class AppendixViews {
@@ -148,9 +149,16 @@ final class AppendixViews {
                 : "the values less their centred moving average";
         String scale = findings.transform() == Transform.LOG ? ", on the logarithms" : "";
         return "variance of the remainder (" + remainder + scale + ") over the variance of the values around their"
-                + " least-squares line: " + f.fixed(100 * findings.irregular().share(), 0) + "\u00A0%; small below "
+                + " least-squares line: " + f.fixed(100 * findings.irregular().share(), 0) + "\u00A0%"
+                + leftOutSaid(findings) + "; small below "
                 + f.fixed(100 * DecisionRules.SMALL_IRREGULAR_SHARE, 0) + "\u00A0%, large above "
                 + f.fixed(100 * DecisionRules.LARGE_IRREGULAR_SHARE, 0) + "\u00A0%";
+    }
+
+    private static String leftOutSaid(Findings findings) {
+        String leftOut = SectionViews.leftOutNearBreaks(findings.irregular(),
+                Frequency.fromLabel(findings.series().frequency()));
+        return leftOut.isEmpty() ? "" : ", leaving out " + leftOut;
     }
 
     /**

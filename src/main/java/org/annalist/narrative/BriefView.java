@@ -225,7 +225,8 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param label {@code small}, {@code moderate} or {@code large}; null when not measured
      * @param large the irregular part is large, so single periods are to be read with care
      */
-    public record IrregularView(String label, String share, boolean large) {
+    /** @param leftOut the periods left out around breaks, said after "leaving out"; empty when none */
+    public record IrregularView(String label, String share, boolean large, String leftOut) {
     }
 
     public record Fact(String label, String value) {

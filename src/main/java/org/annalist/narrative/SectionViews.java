@@ -139,9 +139,25 @@ final class SectionViews {
 
     BriefView.IrregularView irregular() {
         IrregularFinding irregular = findings.irregular();
-        return irregular.share() == null ? new BriefView.IrregularView(null, "", false)
+        return irregular.share() == null ? new BriefView.IrregularView(null, "", false, "")
                 : new BriefView.IrregularView(irregular.size().code(), roughShare(irregular.share()),
-                irregular.size() == IrregularFinding.Size.LARGE);
+                irregular.size() == IrregularFinding.Size.LARGE, leftOutNearBreaks(irregular, series.frequency()));
+    }
+
+    /**
+     * The periods the irregular share leaves out around structural changes, said after "leaving
+     * out": {@code the 41 months around its structural changes (10 on each side), where the trend
+     * is still following the new level}; empty when none.
+     */
+    static String leftOutNearBreaks(IrregularFinding irregular, Frequency frequency) {
+        int n = irregular.leftOutNearBreaks();
+        if (n == 0) {
+            return "";
+        }
+        String around = irregular.reach() + " on each side";
+        return (n == 1 ? "the one " : "the " + n + " ") + MeasureWords.periodNoun(n, frequency) + " around its structural "
+                + "change" + (n > 2 * irregular.reach() ? "s" : "") + " (" + around + "), where the trend is still"
+                + " following the new level";
     }
 
     BriefView.Charts charts() {

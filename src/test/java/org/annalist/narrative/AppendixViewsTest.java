@@ -61,4 +61,14 @@ class AppendixViewsTest {
         assertThat(settings).isNotEmpty().contains("on the logarithms", "least-squares line: "
                 + Math.round(100 * findings.irregular().share()) + "\u00A0%", "small below 20\u00A0%, large above 50\u00A0%");
     }
+
+    @Test
+    void theIrregularRowSaysWhichPeriodsAroundTheBreaksTheShareLeftOut() {
+        // the demo's series has structural changes (demo-data/README.md), so the share leaves periods out
+        assertThat(findings.breaks()).isNotEmpty();
+        assertThat(findings.irregular().leftOutNearBreaks()).isPositive();
+        assertThat(row("Irregular fluctuation").settings()).contains("leaving out the "
+                + findings.irregular().leftOutNearBreaks() + " months around its structural changes ("
+                + findings.irregular().reach() + " on each side)");
+    }
 }
