@@ -147,13 +147,13 @@ public final class Analyst {
         OutlookFinding outlook = OutlookAnalysis.of(series, decomposition, breaks.regimeStart(), breaks.episodes(), measured,
                 horizon, calendarFinding, log);
         // the latest regime has one rate, the trend's: its break's slope after and the episodes read at it
-        List<BreakFinding> rated = BreakAnalysis.withLatestRate(breaks.breaks(), trend.latestRegime(), log,
+        BreakAnalysis.Rated rated = BreakAnalysis.withLatestRate(breaks, trend.latestRegime(), log,
                 series.frequency().periodsPerYear());
-        List<Episode> episodes = BreakAnalysis.alongLatestRate(breaks.episodes(), breaks.breaks(), rated);
         return new Findings(SeriesFacts.of(series, measured), log ? Transform.LOG : Transform.NONE, trend,
-                seasonality, cycle, outliers, rated, irregular, smoothing(series),
+                seasonality, cycle, outliers, rated.breaks(), irregular, smoothing(series),
                 IndicatorsFindings.of(latest, measured, series, calendarAtTheEnd),
-                calendarFinding, outlook, recent(series, measured), notes, form, decomposition, episodes, breaks.method());
+                calendarFinding, outlook, recent(series, measured), notes, form, decomposition, rated.episodes(),
+                breaks.method());
     }
 
     private FormChoice chooseForm(double[] x, int period, Measure measured) {

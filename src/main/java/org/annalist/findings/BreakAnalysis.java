@@ -62,6 +62,15 @@ final class BreakAnalysis {
     }
 
     /**
+     * The breaks and episodes with the latest regime read at its one rate ({@link #withLatestRate}).
+     *
+     * @param breaks   the breaks, the last one's slope after and end level at that rate
+     * @param episodes the episodes, those whose return is read on the latest regime's line read again on it
+     */
+    record Rated(List<BreakFinding> breaks, List<Episode> episodes) {
+    }
+
+    /**
      * The breaks with the latest regime's one rate: the last break's slope after is the trend
      * finding's over the regime it opens (Sen's slope, {@link TrendAnalysis}), not the fitted
      * line's. The segmented line is fitted to every regime at once, joined at a bend, so its last
@@ -69,57 +78,49 @@ final class BreakAnalysis {
      * +1.7 % over the same months, the planted growth being 1.5 %); a reader must find one rate for
      * one span, and the trend's carries its interval and test. On logs the slope is read as the
      * fitted lines are, at the break: the compound rate's log times the level after, so that the
-     * brief's % a year of it is the trend finding's. Unchanged when the trend has no latest regime
-     * or it starts elsewhere.
+     * brief's % a year of it is the trend finding's. The regime's line is then read at its end as
+     * the search reads it ({@link BreakSearch#lineAt}). An episode whose return is measured on that
+     * regime (the regime that moved back is the latest one) gives the level that line reaches at
+     * its end, so that "at the latest period" agrees with the rate the brief gives; one whose
+     * furthest point is that end, or measured on an earlier regime, is unchanged. All unchanged when
+     * the trend has no latest regime or it starts elsewhere.
      */
-    static List<BreakFinding> withLatestRate(List<BreakFinding> breaks, Optional<TrendFinding.LatestRegime> latest,
-                                             boolean log, double periodsPerYear) {
+    static Rated withLatestRate(Result found, Optional<TrendFinding.LatestRegime> latest, boolean log,
+                                double periodsPerYear) {
+        List<BreakFinding> breaks = found.breaks();
+        Rated unchanged = new Rated(breaks, found.episodes());
         if (breaks.isEmpty() || latest.isEmpty()) {
-            return breaks;
+            return unchanged;
         }
         BreakFinding last = breaks.get(breaks.size() - 1);
         TrendFinding.LatestRegime regime = latest.get();
         if (!last.period().equals(regime.since()) || log && regime.changePctPerYear() == null) {
-            return breaks;
+            return unchanged;
         }
         double logRate = log ? Math.log1p(regime.changePctPerYear() / 100) : Double.NaN;
         double slope = log ? logRate * last.levelAfter() : regime.slopePerYear();
-        // the line at the regime's end, from the break instant half a period before its first period
-        double years = (last.period().until(last.regimeEnd()) + 0.5) / periodsPerYear;
-        double endLevel = log ? last.levelAfter() * Math.exp(logRate * years) : last.levelAfter() + slope * years;
+        // the regime's line on the working scale: from the level after at the break, the rate per period
+        double endLevel = BreakSearch.lineAt(log ? Math.log(last.levelAfter()) : last.levelAfter(),
+                (log ? logRate : slope) / periodsPerYear, last.period().until(last.regimeEnd()), log);
         List<BreakFinding> rated = new ArrayList<>(breaks.subList(0, breaks.size() - 1));
         rated.add(new BreakFinding(last.period(), last.ci95(), last.levelBefore(), last.levelAfter(), last.changePct(),
                 last.statistic(), last.pValue(), last.provisional(), last.index(), last.kind(), last.slopeBefore(),
                 slope, last.regimeEnd(), endLevel));
-        return List.copyOf(rated);
-    }
-
-    /**
-     * The episodes with their return read on the latest regime's line at its one rate
-     * ({@link #withLatestRate}): an episode measured at the end of the latest regime gives the level
-     * that line reaches there, so that "at the latest period" agrees with the rate the brief gives.
-     * An episode whose furthest point is that end, or measured elsewhere, is unchanged.
-     */
-    static List<Episode> alongLatestRate(List<Episode> episodes, List<BreakFinding> fitted, List<BreakFinding> rated) {
-        if (fitted.isEmpty() || fitted.equals(rated)) {
-            return episodes;
-        }
-        BreakFinding before = fitted.get(fitted.size() - 1);
-        BreakFinding after = rated.get(rated.size() - 1);
         List<Episode> read = new ArrayList<>();
-        for (Episode e : episodes) {
-            boolean atTheEnd = e.asOf().equals(before.regimeEnd()) && e.returnedLevel() == before.endLevel()
-                    && e.extremeLevel() != before.endLevel();
-            if (!atTheEnd) {
+        for (Episode e : found.episodes()) {
+            // the regime the return is read on: the later break's that moved back, else the stepped one
+            boolean onLatest = e.returnStart().orElse(e.start()).equals(last.period())
+                    && !e.extreme().equals(last.regimeEnd());
+            if (!onLatest) {
                 read.add(e);
                 continue;
             }
             double share = Math.min(BreakSearch.MAX_REGAINED_SHARE,
-                    (after.endLevel() - e.extremeLevel()) / (e.before() - e.extremeLevel()));
+                    (endLevel - e.extremeLevel()) / (e.before() - e.extremeLevel()));
             read.add(new Episode(e.start(), e.rise(), e.before(), e.extreme(), e.extremeLevel(), e.returnStart(), e.asOf(),
-                    after.endLevel(), share));
+                    endLevel, share));
         }
-        return List.copyOf(read);
+        return new Rated(List.copyOf(rated), List.copyOf(read));
     }
 
     /**

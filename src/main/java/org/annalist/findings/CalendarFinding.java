@@ -1,6 +1,7 @@
 package org.annalist.findings;
 
 import java.util.List;
+import java.util.Optional;
 import org.annalist.analysis.calendar.CalendarEffects;
 import org.annalist.series.Period;
 
@@ -33,6 +34,11 @@ public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, Lis
         effects = List.copyOf(effects);
         notes = List.copyOf(notes);
         screenedOut = List.copyOf(screenedOut);
+    }
+
+    /** The Easter effect, when it was estimated and kept; empty otherwise. */
+    public Optional<Effect> keptEaster() {
+        return effects.stream().filter(e -> e.name().equals(EASTER) && e.kept()).findFirst();
     }
 
     public record EasterDate(int year, String date) {

@@ -59,32 +59,23 @@ public record EasterAhead(int year, LocalDate sunday, int window, long daysEarli
         if (calendar == null) {
             return List.of();
         }
-        Optional<CalendarFinding.Effect> effect = calendar.effects().stream()
-                .filter(e -> e.name().equals(CalendarFinding.EASTER) && e.kept()).findFirst();
+        Optional<CalendarFinding.Effect> effect = calendar.keptEaster();
         if (effect.isEmpty() || !(series.frequency() == Frequency.MONTHLY || series.frequency() == Frequency.QUARTERLY)) {
             return List.of();
         }
         int window = WINDOW;
         boolean monthly = series.frequency() == Frequency.MONTHLY;
-        int position = monthly ? 3 : 1;
-        double sum = 0;
-        int count = 0;
-        int fromYear = 0;
-        int toYear = 0;
-        for (int t = 0; t + 1 < series.size(); t++) {
-            Period p = series.period(t);
-            if (p.compareTo(fittedFrom) >= 0 && p.seasonalPosition() == position
-                    && !series.isMissing(t) && !series.isMissing(t + 1)) {
-                sum += CalendarRegressors.easterShare(p, window);
-                fromYear = count == 0 ? p.year() : fromYear;
-                toYear = p.year();
-                count++;
-            }
-        }
-        if (count == 0) {
+        List<Period> fitted = EasterSplits.earlierPeriods(series, fittedFrom);
+        if (fitted.isEmpty()) {
             return List.of();
         }
-        double average = sum / count;
+        double sum = 0;
+        for (Period p : fitted) {
+            sum += CalendarRegressors.easterShare(p, window);
+        }
+        double average = sum / fitted.size();
+        int fromYear = fitted.get(0).year();
+        int toYear = fitted.get(fitted.size() - 1).year();
         List<Integer> years = periods.stream()
                 .filter(p -> p.startDate().getMonthValue() <= 4 && p.endDate().getMonthValue() >= 3
                         && p.startDate().getYear() == p.endDate().getYear())

@@ -24,14 +24,9 @@ final class EasterSplits {
      */
     static CalendarFinding.EasterEvidence of(Series series) {
         int window = CalendarRegressors.DEFAULT_EASTER_WINDOW;
-        int march = series.frequency() == Frequency.MONTHLY ? 3 : 1;
         List<Integer> earlier = new ArrayList<>();
         List<Integer> later = new ArrayList<>();
-        for (int t = 0; t + 1 < series.size(); t++) {
-            Period p = series.period(t);
-            if (p.seasonalPosition() != march || series.isMissing(t) || series.isMissing(t + 1)) {
-                continue;
-            }
+        for (Period p : earlierPeriods(series, series.period(0))) {
             double share = CalendarRegressors.easterShare(p, window);
             if (share > 0.5) {
                 earlier.add(p.year());
@@ -42,5 +37,24 @@ final class EasterSplits {
         int needed = DecisionRules.MIN_EASTER_YEARS_EACH_MONTH;
         return new CalendarFinding.EasterEvidence(earlier, later, needed,
                 earlier.size() >= needed && later.size() >= needed, series.frequency() == Frequency.MONTHLY);
+    }
+
+    /**
+     * The Marches (first quarters) from {@code from} on whose value and whose April's (second
+     * quarter's) are both observed, oldest first: the years in which the series shows where the days
+     * before Easter fell, the one set of years that both the evidence above and the outlook's
+     * average share ({@link EasterAhead}) count.
+     */
+    static List<Period> earlierPeriods(Series series, Period from) {
+        int march = series.frequency() == Frequency.MONTHLY ? 3 : 1;
+        List<Period> periods = new ArrayList<>();
+        for (int t = 0; t + 1 < series.size(); t++) {
+            Period p = series.period(t);
+            if (p.compareTo(from) >= 0 && p.seasonalPosition() == march
+                    && !series.isMissing(t) && !series.isMissing(t + 1)) {
+                periods.add(p);
+            }
+        }
+        return periods;
     }
 }

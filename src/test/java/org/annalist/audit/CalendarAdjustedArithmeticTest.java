@@ -9,6 +9,7 @@ import java.util.Random;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.annalist.analysis.calendar.CalendarRegressors;
+import org.annalist.analysis.calendar.PlantedEaster;
 import org.annalist.findings.CalendarFinding;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
@@ -26,6 +27,8 @@ class CalendarAdjustedArithmeticTest {
 
     /** Seasonal factors, January to December (invented). */
     private static final double[] SEASON = {0.55, 0.60, 0.80, 1.00, 1.05, 1.25, 1.60, 1.55, 1.10, 1.00, 0.70, 0.80};
+    /** Guest nights from 2011 with +20 % for a month holding all 8 days before Easter (invented). */
+    private static final PlantedEaster NIGHTS = new PlantedEaster(20_000, SEASON, 0.01);
     private static final Pattern SENTENCE = Pattern.compile("(added about|took about) ([0-9.]+)\u00A0% (?:to|off) \\w+ \\d{4}"
             + " \\([^)]*\\); allowing for it, \\w+ \\d{4} was about ([+\u2212][0-9.]+)\u00A0% on a year earlier rather than"
             + " ([+\u2212][0-9.]+)\u00A0%");
@@ -49,21 +52,6 @@ class CalendarAdjustedArithmeticTest {
         return Series.builder("museum_visitors", Frequency.MONTHLY).unit("visitors").append(start, x).snapshot();
     }
 
-    /** Guest nights with +20 % for a month holding all 8 days before Easter (invented). */
-    private static Series nights(Period end, long seed) {
-        Period start = Period.month(2011, 1);
-        Random random = new Random(seed);
-        int n = (int) start.until(end) + 1;
-        double[] x = new double[n];
-        for (int t = 0; t < n; t++) {
-            Period p = start.plus(t);
-            x[t] = Math.round(20_000 * Math.pow(1.02, t / 12.0) * SEASON[p.seasonalPosition() - 1]
-                    * Math.exp(0.01 * random.nextGaussian())
-                    * (1 + 0.20 * CalendarRegressors.easterShare(p, CalendarRegressors.DEFAULT_EASTER_WINDOW)));
-        }
-        return Series.builder("guest_nights", Frequency.MONTHLY).unit("nights").append(start, x).snapshot();
-    }
-
     private static List<Series> planted() {
         List<Series> all = new ArrayList<>();
         // latest months whose Saturdays and Sundays differ from a year earlier (counted from the calendar:
@@ -75,8 +63,8 @@ class CalendarAdjustedArithmeticTest {
             }
         }
         // April 2025 holds the days before Easter, April 2024 none
-        all.add(nights(Period.month(2025, 4), 1));
-        all.add(nights(Period.month(2025, 4), 2));
+        all.add(NIGHTS.nights(Period.month(2011, 1), Period.month(2025, 4), 1, 0.20));
+        all.add(NIGHTS.nights(Period.month(2011, 1), Period.month(2025, 4), 2, 0.20));
         return all;
     }
 

@@ -5,7 +5,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -27,10 +26,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The board's brief as the demo makes it (demo-data/monthly-briefs.yaml, its first brief, over the
- * invented guest nights by market): every page carries text of its own, the terms it uses are
- * explained in a reading guide, its methods line does not assume the reader holds another document,
- * and its small multiples are described, and drawn, so that they read in greyscale.
+ * The board's brief as the demo makes it ({@link DemoBoardBrief}): every page carries text of its
+ * own, the terms it uses are explained in a reading guide, its methods line does not assume the
+ * reader holds another document, and its small multiples are described, and drawn, so that they
+ * read in greyscale.
  */
 class BoardBriefPagesTest {
 
@@ -42,24 +41,7 @@ class BoardBriefPagesTest {
 
     @BeforeAll
     static void makeTheBoardBrief() throws IOException {
-        Files.copy(Path.of("demo-data/quennelmark-guest-nights.csv"), folder.resolve("quennelmark-guest-nights.csv"));
-        Path spec = folder.resolve("monthly-briefs.yaml");
-        // the demo's board brief, as demo-data/monthly-briefs.yaml gives it
-        Files.writeString(spec, """
-                briefs:
-                  - title: Guest nights in Quennelmark by market
-                    organisation: Quennelmark Visitor Board (invented demo)
-                    data: quennelmark-guest-nights.csv
-                    series: [Total, Domestic, Brevania, Long-haul]
-                    combined: true
-                    total: Total
-                    sort_by: order
-                    output: board-{period}.pdf
-                    generated_at: 2026-11-20T08:00:00Z
-                """);
-        Run run = Run.of("batch", spec.toString());
-        assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
-        pdf = folder.resolve("board-2026-10.pdf");
+        pdf = DemoBoardBrief.makeIn(folder);
         text = PdfFacts.of(pdf).text().replace('\u00A0', ' ').replaceAll("\\s+", " ");
     }
 

@@ -5,7 +5,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -15,9 +14,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The combined brief of the demo's guest nights by market (invented data): what its first page and
- * its methods line say of the outlooks and of provisional values comes from each series' findings,
- * which the batch writes beside the brief.
+ * The combined brief of the demo's guest nights by market ({@link DemoBoardBrief}): what its first
+ * page and its methods line say of the outlooks and of provisional values comes from each series'
+ * findings, which the batch writes beside the brief.
  */
 class BoardBriefTest {
 
@@ -29,23 +28,9 @@ class BoardBriefTest {
 
     @BeforeAll
     static void makeTheBoardBrief() throws IOException {
-        Files.copy(Path.of("demo-data/quennelmark-guest-nights.csv"), folder.resolve("nights.csv"));
-        Path spec = folder.resolve("briefs.yaml");
-        Files.writeString(spec, """
-                briefs:
-                  - title: Guest nights by market
-                    data: nights.csv
-                    series: [Total, Domestic, Brevania, Long-haul]
-                    combined: true
-                    total: Total
-                    output: board-{period}.pdf
-                    generated_at: 2026-11-20T08:00:00Z
-                    side_outputs: [findings]
-                """);
-        Run run = Run.of("batch", spec.toString());
-        assertThat(run.exitCode()).as(run.out() + run.err()).isZero();
+        Path pdf = DemoBoardBrief.makeIn(folder);
         // a hyphen that ends a line is followed by the line break in the extracted text
-        text = PdfFacts.of(folder.resolve("board-2026-10.pdf")).text().replace('\u00A0', ' ').replaceAll("\\s+", " ")
+        text = PdfFacts.of(pdf).text().replace('\u00A0', ' ').replaceAll("\\s+", " ")
                 .replaceAll("(\\p{L})- (\\p{L})", "$1-$2");
     }
 

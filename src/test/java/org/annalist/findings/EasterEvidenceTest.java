@@ -3,8 +3,7 @@ package org.annalist.findings;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
-import java.util.Random;
-import org.annalist.analysis.calendar.CalendarRegressors;
+import org.annalist.analysis.calendar.PlantedEaster;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
@@ -22,25 +21,14 @@ class EasterEvidenceTest {
     /** Seasonal factors, January to December (invented). */
     private static final double[] SEASON = {0.80, 0.90, 0.85, 0.95, 1.00, 1.10, 1.45, 1.50, 1.05, 0.90, 0.70, 0.90};
 
-    /** 2 % growth a year, season, 2 % noise, and {@code easter} × the share of the 8 days before Easter (invented). */
-    private static Series planted(Period start, Period end, long seed, double easter) {
-        Random random = new Random(seed);
-        int n = (int) start.until(end) + 1;
-        double[] x = new double[n];
-        for (int t = 0; t < n; t++) {
-            Period p = start.plus(t);
-            x[t] = Math.round(10_000 * Math.pow(1.02, t / 12.0) * SEASON[p.seasonalPosition() - 1]
-                    * Math.exp(0.02 * random.nextGaussian())
-                    * (1 + easter * CalendarRegressors.easterShare(p, CalendarRegressors.DEFAULT_EASTER_WINDOW)));
-        }
-        return Series.builder("guest_nights", Frequency.MONTHLY).unit("nights").append(start, x).snapshot();
-    }
+    /** Guest nights: 2 % growth a year, the season above, 2 % noise (invented). */
+    private static final PlantedEaster NIGHTS = new PlantedEaster(10_000, SEASON, 0.02);
 
     @Test
     void fourYearsWithOneMarchEasterCannotTellAnEasterEffectAndNoneIsEstimated() {
         // 2023: 1–8 April; 2024: 23–30 March; 2025: 12–19 April; 2026: 28 March–4 April, four days each
         for (long seed = 1; seed <= 5; seed++) {
-            Series s = planted(Period.month(2023, 1), Period.month(2026, 10), seed, 0);
+            Series s = NIGHTS.nights(Period.month(2023, 1), Period.month(2026, 10), seed, 0);
             CalendarFinding.EasterEvidence e = EasterSplits.of(s);
             assertThat(e.mostlyEarlier()).containsExactly(2024);
             assertThat(e.mostlyLater()).containsExactly(2023, 2025);
@@ -55,7 +43,7 @@ class EasterEvidenceTest {
     @Test
     void whenEasterMovedBetweenTheAprilsComparedTheNotesSayTheDataCannotYetTellItsEffect() {
         // April 2025 holds all 8 days before Easter, April 2024 none; 2022–2025 has one March year (2024)
-        Series s = planted(Period.month(2022, 1), Period.month(2025, 4), 3, 0.15);
+        Series s = NIGHTS.nights(Period.month(2022, 1), Period.month(2025, 4), 3, 0.15);
         Findings f = new Analyst().withoutOutlook().analyse(s);
         assertThat(f.calendar().notes()).anySatisfy(n -> assertThat(n).isInstanceOf(CalendarNote.EasterUntold.class));
         assertThat(f.calendar().notes()).noneMatch(n -> n instanceof CalendarNote.EasterShift shift
@@ -66,7 +54,7 @@ class EasterEvidenceTest {
     void aPlantedEasterEffectOverManyYearsIsStillEstimatedAndKept() {
         // 2011–2025: Easter's days mostly in March in 2013, 2016 and 2024, and in April in most other years
         for (long seed = 1; seed <= 3; seed++) {
-            Series s = planted(Period.month(2011, 1), Period.month(2025, 10), seed, 0.15);
+            Series s = NIGHTS.nights(Period.month(2011, 1), Period.month(2025, 10), seed, 0.15);
             CalendarFinding.EasterEvidence e = EasterSplits.of(s);
             assertThat(e.tested()).isTrue();
             assertThat(e.mostlyEarlier()).containsAll(List.of(2013, 2016, 2024));

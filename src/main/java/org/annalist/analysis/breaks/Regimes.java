@@ -87,7 +87,7 @@ final class Regimes {
         // slopes in the series' units per period at the break: on logs d e^{a+bt}/dt = b e^{a+bt}
         double slopeBefore = log ? old[1] * levelBefore : old[1];
         double slopeAfter = log ? fresh[1] * levelAfter : fresh[1];
-        double endLevel = units(after + fresh[1] * (to - start + 0.5));
+        double endLevel = BreakSearch.lineAt(after, fresh[1], to - start, log);
         // No regime may be shorter than h, so a break found as close to an end of the series as
         // that allows may really lie closer still, where the search could not place it: the
         // interval then reaches that end rather than claim a precision the search did not have.

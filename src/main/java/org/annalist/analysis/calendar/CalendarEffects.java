@@ -7,11 +7,6 @@ import org.annalist.analysis.anomaly.RemainderOutliers;
 import org.annalist.series.Frequency;
 import org.annalist.series.Holiday;
 import org.annalist.series.Period;
-import org.apache.commons.math3.distribution.NormalDistribution;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.DecompositionSolver;
-import org.apache.commons.math3.linear.LUDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
 
 /**
  * Calendar effects estimated on the irregular component (logs for a multiplicative series, so a
@@ -45,6 +40,10 @@ import org.apache.commons.math3.linear.RealMatrix;
  * <p>The length of the month is not estimated: only February varies, in one year of four, too
  * rarely for a robust standard error; a leap-year February is noted instead (29/28, +3.6 % more
  * days), see the indicators.
+ *
+ * <p>The parts: {@link CentredRegressors} (the regressors, centred), {@link NeweyWestLeastSquares}
+ * (the fit and its standard errors), {@link HuberRegression} (the robust start); here the
+ * procedure that joins them and the results.
  *
  * <p>Monthly and quarterly data only: weekly and daily data carry the weekday in their seasonal
  * pattern, and annual data have no calendar to speak of.
@@ -158,77 +157,11 @@ public final class CalendarEffects {
         }
     }
 
-    private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(null, 0, 1);
-
     private CalendarEffects() {
     }
 
     public static boolean applies(Frequency frequency) {
         return frequency == Frequency.MONTHLY || frequency == Frequency.QUARTERLY;
-    }
-
-    /** The centred regressors of each period, columns in the order of {@code names}. */
-    static double[][] regressors(Period start, int n, int easterWindow, List<String> names) {
-        return regressors(start, n, easterWindow, List.of(), names);
-    }
-
-    static double[][] regressors(Period start, int n, int easterWindow, List<Holiday> holidays, List<String> names) {
-        return regressors(start, n, easterWindow, holidays, Weekdays.FRIDAY_SATURDAY_NIGHTS, names);
-    }
-
-    static double[][] regressors(Period start, int n, int easterWindow, List<Holiday> holidays, Weekdays weekdays,
-                                 List<String> names) {
-        return regressors(start, n, easterWindow, true, holidays, weekdays, names);
-    }
-
-    /** As above; without the Easter regressor when {@code easter} is false (the caller's rule). */
-    static double[][] regressors(Period start, int n, int easterWindow, boolean easter, List<Holiday> holidays,
-                                 Weekdays weekdays, List<String> names) {
-        int period = start.frequency().seasonalPeriod();
-        int columns = 2 + holidays.size();
-        double[][] raw = new double[n][columns];
-        for (int t = 0; t < n; t++) {
-            Period p = start.plus(t);
-            raw[t][0] = CalendarRegressors.easterShare(p, easterWindow);
-            raw[t][1] = weekdays.count(p);
-            for (int h = 0; h < holidays.size(); h++) {
-                raw[t][2 + h] = holidays.get(h).share(p);
-            }
-        }
-        String[] all = new String[columns];
-        all[0] = EASTER;
-        all[1] = weekdays.effectName();
-        for (int h = 0; h < holidays.size(); h++) {
-            all[2 + h] = holidays.get(h).name();
-        }
-        List<Integer> keep = new ArrayList<>();
-        double[][] centred = new double[n][columns];
-        for (int c = 0; c < columns; c++) {
-            double[] sum = new double[period];
-            int[] count = new int[period];
-            for (int t = 0; t < n; t++) {
-                sum[t % period] += raw[t][c];
-                count[t % period]++;
-            }
-            double ss = 0;
-            // each regressor less its mean for the calendar month (or quarter) over the data's years
-            for (int t = 0; t < n; t++) {
-                centred[t][c] = raw[t][c] - sum[t % period] / count[t % period];
-                ss += centred[t][c] * centred[t][c];
-            }
-            // a regressor that does not vary within the calendar months carries nothing (our rule)
-            if (ss > 1e-12 && (c != 0 || easter)) {
-                keep.add(c);
-            }
-        }
-        double[][] x = new double[n][keep.size()];
-        for (int j = 0; j < keep.size(); j++) {
-            names.add(all[keep.get(j)]);
-            for (int t = 0; t < n; t++) {
-                x[t][j] = centred[t][keep.get(j)];
-            }
-        }
-        return x;
     }
 
     /**
@@ -250,8 +183,9 @@ public final class CalendarEffects {
     /** As {@link #estimate(double[], Period, int, List)}, counting the given days of the week. */
     public static Optional<Result> estimate(double[] irregular, Period start, int easterWindow,
                                             List<Holiday> holidays, Weekdays weekdays) {
-        Design d = design(irregular, start, easterWindow, holidays, weekdays);
-        return d == null ? Optional.empty() : leastSquares(d, List.of());
+        NeweyWestLeastSquares.Design d = NeweyWestLeastSquares.design(irregular,
+                CentredRegressors.of(start, irregular.length, easterWindow, true, holidays, weekdays), easterWindow);
+        return d == null ? Optional.empty() : NeweyWestLeastSquares.fit(d, List.of());
     }
 
     /**
@@ -274,20 +208,21 @@ public final class CalendarEffects {
     public static Optional<Result> robust(double[] irregular, Period start, int easterWindow, boolean easter,
                                           List<Holiday> holidays, Weekdays weekdays, double screenScore) {
         // the regressors depend on the calendar alone: made once for both designs below
-        Regressors calendar = Regressors.of(start, irregular.length, easterWindow, easter, holidays, weekdays);
-        Design d = design(irregular, calendar, easterWindow);
+        CentredRegressors calendar = CentredRegressors.of(start, irregular.length, easterWindow, easter, holidays,
+                weekdays);
+        NeweyWestLeastSquares.Design d = NeweyWestLeastSquares.design(irregular, calendar, easterWindow);
         if (d == null) {
             return Optional.empty();
         }
-        Optional<double[]> huber = HuberRegression.fit(d.x, d.y);
+        Optional<double[]> huber = HuberRegression.fit(d.x(), d.y());
         if (huber.isEmpty()) {
             return Optional.empty();
         }
         double[] beta = huber.get();
         double[] residual = new double[irregular.length];
         java.util.Arrays.fill(residual, Double.NaN);
-        for (int r = 0; r < d.y.length; r++) {
-            residual[d.rows.get(r)] = d.y[r] - HuberRegression.dot(d.x[r], beta);
+        for (int r = 0; r < d.y().length; r++) {
+            residual[d.rows().get(r)] = d.y()[r] - HuberRegression.dot(d.x()[r], beta);
         }
         double[] z = RemainderOutliers.scores(residual);
         List<Integer> screened = new ArrayList<>();
@@ -298,115 +233,13 @@ public final class CalendarEffects {
             }
         }
         if (screened.isEmpty()) {
-            return leastSquares(d, List.of());
+            return NeweyWestLeastSquares.fit(d, List.of());
         }
         double[] kept = irregular.clone();
         for (int t : screened) {
             kept[t] = Double.NaN;
         }
-        Design rest = design(kept, calendar, easterWindow);
-        return rest == null ? Optional.empty() : leastSquares(rest, screened);
-    }
-
-    /** The rows with a value, the design with an intercept column first, and every position's centred regressors. */
-    private record Design(List<Integer> rows, double[][] x, double[] y, List<String> names, double[][] all,
-                          int easterWindow) {
-    }
-
-    /** Every position's centred regressors with their names ({@link #regressors}). */
-    private record Regressors(double[][] all, List<String> names) {
-
-        static Regressors of(Period start, int n, int easterWindow, boolean easter, List<Holiday> holidays,
-                             Weekdays weekdays) {
-            if (!applies(start.frequency())) {
-                throw new IllegalArgumentException("calendar effects are estimated for monthly or quarterly data, not "
-                        + start.frequency());
-            }
-            List<String> names = new ArrayList<>();
-            return new Regressors(regressors(start, n, easterWindow, easter, holidays, weekdays, names), names);
-        }
-    }
-
-    private static Design design(double[] irregular, Period start, int easterWindow, List<Holiday> holidays,
-                                 Weekdays weekdays) {
-        return design(irregular, Regressors.of(start, irregular.length, easterWindow, true, holidays, weekdays),
-                easterWindow);
-    }
-
-    private static Design design(double[] irregular, Regressors calendar, int easterWindow) {
-        List<String> names = calendar.names();
-        double[][] all = calendar.all();
-        List<Integer> rows = new ArrayList<>();
-        for (int t = 0; t < irregular.length; t++) {
-            if (!Double.isNaN(irregular[t])) {
-                rows.add(t);
-            }
-        }
-        int n = rows.size();
-        int k = names.size() + 1;
-        if (n < 3 * k + 10) {
-            return null;   // too few values for the regressors (our rule)
-        }
-        double[][] x = new double[n][k];
-        double[] y = new double[n];
-        for (int r = 0; r < n; r++) {
-            int t = rows.get(r);
-            x[r][0] = 1;
-            System.arraycopy(all[t], 0, x[r], 1, k - 1);
-            y[r] = irregular[t];
-        }
-        return new Design(rows, x, y, names, all, easterWindow);
-    }
-
-    private static Optional<Result> leastSquares(Design d, List<Integer> screened) {
-        int n = d.y.length;
-        int k = d.names.size() + 1;
-        double[][] x = d.x;
-        double[] y = d.y;
-        List<String> names = d.names;
-        RealMatrix design = new Array2DRowRealMatrix(x, false);
-        // ordinary least squares: β = (X′X)⁻¹ X′y
-        DecompositionSolver solver = new LUDecomposition(design.transpose().multiply(design)).getSolver();
-        if (!solver.isNonSingular()) {
-            return Optional.empty();   // regressors that move together (two holidays on the same days) cannot be told apart
-        }
-        RealMatrix xtxInverse = solver.getInverse();
-        double[] beta = xtxInverse.operate(design.transpose().operate(y));
-        double[] e = new double[n];
-        for (int r = 0; r < n; r++) {
-            double fit = 0;
-            for (int j = 0; j < k; j++) {
-                fit += x[r][j] * beta[j];
-            }
-            e[r] = y[r] - fit;
-        }
-        // [2] the lag ⌊4 (n/100)^{2/9}⌋ (see the note on the lag above)
-        int lags = (int) Math.floor(4 * Math.pow(n / 100.0, 2.0 / 9.0));
-        double[][] s = new double[k][k];
-        for (int lag = 0; lag <= lags; lag++) {
-            // [1] Bartlett weight w_j = 1 − j/(L + 1) in
-            // S = Σ_t e_t² x_t x′_t + Σ_{j≥1} w_j Σ_t e_t e_{t−j} (x_t x′_{t−j} + x_{t−j} x′_t)
-            double w = lag == 0 ? 1 : 1 - lag / (lags + 1.0);
-            for (int r = lag; r < n; r++) {
-                double ee = e[r] * e[r - lag];
-                for (int a = 0; a < k; a++) {
-                    for (int b = 0; b < k; b++) {
-                        double term = x[r][a] * x[r - lag][b];
-                        s[a][b] += w * ee * (lag == 0 ? term : term + x[r - lag][a] * x[r][b]);
-                    }
-                }
-            }
-        }
-        // [1] the sandwich (X′X)⁻¹ S (X′X)⁻¹, times n/(n − k) (the degrees-of-freedom adjustment)
-        RealMatrix covariance = xtxInverse.multiply(new Array2DRowRealMatrix(s, false)).multiply(xtxInverse)
-                .scalarMultiply(n / (double) (n - k));
-        List<Effect> effects = new ArrayList<>();
-        for (int j = 1; j < k; j++) {
-            double se = Math.sqrt(Math.max(0, covariance.getEntry(j, j)));
-            // two-sided p from the normal approximation of β/se; p = 1 when se is 0 (our rule)
-            double p = se == 0 ? 1 : 2 * STANDARD_NORMAL.cumulativeProbability(-Math.abs(beta[j] / se));
-            effects.add(new Effect(names.get(j - 1), beta[j], se, p));
-        }
-        return Optional.of(new Result(effects, n, lags, d.easterWindow, screened, d.all));
+        NeweyWestLeastSquares.Design rest = NeweyWestLeastSquares.design(kept, calendar, easterWindow);
+        return rest == null ? Optional.empty() : NeweyWestLeastSquares.fit(rest, screened);
     }
 }

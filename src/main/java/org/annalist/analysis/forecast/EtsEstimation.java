@@ -55,13 +55,6 @@ final class EtsEstimation {
     private static final double RELATIVE_CHANGE = 1e-8;
     /** The most quasi-Newton iterations per search. */
     private static final int MAX_ITERATIONS = 500;
-    /**
-     * The series' period for which the models are fitted by {@link EtsSimplexSearch} instead: on the
-     * M3 quarterly series its coarser optimum forecast better (the whole outlook's mean MASE 1.078 →
-     * 1.059), on the monthly and yearly ones worse (0.830 → 0.832, 2.663 → 2.688; December 2026,
-     * README "The outlook on the M3 competition").
-     */
-    static final int SIMPLEX_PERIOD = 4;
 
     private EtsEstimation() {
     }
@@ -71,7 +64,7 @@ final class EtsEstimation {
      * @throws IllegalArgumentException for a seasonal model with fewer than two full seasons of values
      */
     static Optional<EtsModel.Fit> fit(EtsModel model, double[] y) {
-        if (model.period() == SIMPLEX_PERIOD) {
+        if (model.estimator() == EtsModel.Estimator.SIMPLEX) {
             return EtsSimplexSearch.fit(model, y);
         }
         Coordinates coordinates = new Coordinates(model, y);

@@ -52,8 +52,8 @@ public final class EtsSelection {
                         continue;
                     }
                     EtsModel.Trend trend = trendChoice == 0 ? EtsModel.Trend.NONE : EtsModel.Trend.ADDITIVE;
-                    // the series' period also without a season: it decides the estimator (EtsEstimation)
-                    EtsModel model = new EtsModel(error, trend, trendChoice == 2, season, Math.max(1, period));
+                    EtsModel model = new EtsModel(error, trend, trendChoice == 2, season,
+                            season == EtsModel.Season.NONE ? 1 : period, EtsModel.Estimator.forPeriod(period));
                     if (y.length <= model.parameterCount() + 2) {
                         continue; // AICc is undefined with fewer observations than parameters + 2
                     }

@@ -181,7 +181,8 @@ public final class Theta {
         double[] seasonalIndex = index;
         double[] values = adjusted;
         boolean onLogarithms = logarithmic;
-        return new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1)
+        return new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1,
+                EtsModel.Estimator.QUASI_NEWTON)
                 .fit(values)
                 .map(ses -> new Fit(seasonalIndex, ses, StartLine.through(values, n).slope() / 2, n, onLogarithms)); // [2] §3: b/2
     }

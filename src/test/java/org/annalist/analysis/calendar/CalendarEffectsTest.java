@@ -15,8 +15,10 @@ class CalendarEffectsTest {
     private static double[] simulated(double easterEffect, double weekendEffect, long seed) {
         Random random = new Random(seed);
         Period start = Period.month(2010, 1);
-        java.util.List<String> names = new java.util.ArrayList<>();
-        double[][] x = CalendarEffects.regressors(start, 192, CalendarRegressors.DEFAULT_EASTER_WINDOW, names);
+        CentredRegressors regressors = CentredRegressors.of(start, 192, CalendarRegressors.DEFAULT_EASTER_WINDOW, true,
+                java.util.List.of(), CalendarEffects.Weekdays.FRIDAY_SATURDAY_NIGHTS);
+        java.util.List<String> names = regressors.names();
+        double[][] x = regressors.all();
         double[] y = new double[192];
         double noise = 0;
         for (int t = 0; t < y.length; t++) {
@@ -71,8 +73,10 @@ class CalendarEffectsTest {
         Random random = new Random(4);
         double[] y = new double[192];
         Period start = Period.month(2010, 1);
-        java.util.List<String> names = new java.util.ArrayList<>();
-        double[][] x = CalendarEffects.regressors(start, 192, 8, java.util.List.of(festival), names);
+        CentredRegressors regressors = CentredRegressors.of(start, 192, 8, true, java.util.List.of(festival),
+                CalendarEffects.Weekdays.FRIDAY_SATURDAY_NIGHTS);
+        java.util.List<String> names = regressors.names();
+        double[][] x = regressors.all();
         for (int t = 0; t < y.length; t++) {
             y[t] = 0.06 * x[t][names.indexOf("festival")] + 0.01 * random.nextGaussian();
         }

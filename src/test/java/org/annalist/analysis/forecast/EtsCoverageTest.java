@@ -21,7 +21,7 @@ class EtsCoverageTest {
     @Test
     void intervalsOfAFittedEtsMnmCoverTheirNominalShareOfSimulatedOutcomes() {
         EtsModel model = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.NONE, false,
-                EtsModel.Season.MULTIPLICATIVE, 12);
+                EtsModel.Season.MULTIPLICATIVE, 12, EtsModel.Estimator.QUASI_NEWTON);
         double[] state = new double[2 + 12];
         state[0] = 1000;
         for (int j = 0; j < 12; j++) {

@@ -28,7 +28,8 @@ class EtsGradientTest {
                 for (boolean damped : new boolean[] {false, true}) {
                     for (EtsModel.Season season : EtsModel.Season.values()) {
                         if (!damped || trend != EtsModel.Trend.NONE) {
-                            models.add(new EtsModel(error, trend, damped, season, 12));
+                            models.add(new EtsModel(error, trend, damped, season, 12,
+                                    EtsModel.Estimator.QUASI_NEWTON));
                         }
                     }
                 }

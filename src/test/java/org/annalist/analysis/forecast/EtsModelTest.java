@@ -129,7 +129,7 @@ class EtsModelTest {
             throws IOException {
         double rAicc = reference(key).get("AICc").asDouble();
         EtsModel model = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, damped,
-                EtsModel.Season.MULTIPLICATIVE, period);
+                EtsModel.Season.MULTIPLICATIVE, period, EtsModel.Estimator.forPeriod(period));
         EtsModel.Fit fit = model.fit(Reference.dataset(dataset + ".csv")).orElseThrow();
         assertThat(fit.aicc()).as("AICc: ours against R's %s", rAicc).isLessThanOrEqualTo(rAicc + 0.005 * Math.abs(rAicc));
         if (!sameOptimum) {
@@ -177,7 +177,8 @@ class EtsModelTest {
         for (int t = 0; t < y.length; t++) {
             y[t] = 100 + 5 * random.nextGaussian();
         }
-        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1);
+        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1,
+                EtsModel.Estimator.QUASI_NEWTON);
         EtsModel.Fit fit = model.filter(y, new EtsModel.Parameters(0.3, 0, 0, 1, new double[] {100})).orElseThrow();
         Prediction prediction = fit.predict(5);
         for (int h = 1; h <= 5; h++) {
@@ -194,7 +195,8 @@ class EtsModelTest {
             for (EtsModel.Season season : EtsModel.Season.values()) {
                 for (int trend = 0; trend < 3; trend++) {
                     EtsModel model = new EtsModel(error, trend == 0 ? EtsModel.Trend.NONE : EtsModel.Trend.ADDITIVE,
-                            trend == 2, season, season == EtsModel.Season.NONE ? 1 : 12);
+                            trend == 2, season, season == EtsModel.Season.NONE ? 1 : 12,
+                            EtsModel.Estimator.QUASI_NEWTON);
                     double[] initial = EtsEstimation.initialStates(model, y, false);
                     EtsModel.Parameters p = new EtsModel.Parameters(0.4, 0.04, 0.1, 0.95, initial);
                     EtsModel.Fit fit = model.filter(y, p).orElseThrow();
@@ -207,7 +209,8 @@ class EtsModelTest {
     /** A level that makes the one-step forecast infinite: the filter gives no fit, and says so by an empty result. */
     @Test
     void filterGivesNoFitWhenAForecastIsNotFinite() {
-        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1);
+        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1,
+                EtsModel.Estimator.QUASI_NEWTON);
         double[] y = {1, 2, 3, 4, 5};
         assertThat(model.filter(y, new EtsModel.Parameters(0.3, 0, 0, 1, new double[] {Double.POSITIVE_INFINITY})))
                 .isEmpty();
@@ -219,7 +222,8 @@ class EtsModelTest {
     void fitGivesNoFitWithoutAFiniteLikelihood() {
         double[] constant = new double[20];
         Arrays.fill(constant, 5);
-        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1);
+        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1,
+                EtsModel.Estimator.QUASI_NEWTON);
         assertThat(model.fit(constant)).isEmpty();
         assertThat(Theta.fit(constant, 1)).isEmpty();
         assertThat(Theta.fit(new double[] {1, 2, 3}, 1)).as("fewer than four values").isEmpty();
@@ -242,7 +246,7 @@ class EtsModelTest {
             initial[1 + j] = init.get("s" + j).asDouble();
         }
         EtsModel model = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, damped,
-                EtsModel.Season.MULTIPLICATIVE, period);
+                EtsModel.Season.MULTIPLICATIVE, period, EtsModel.Estimator.forPeriod(period));
         return model.filter(Reference.dataset(dataset + ".csv"), new EtsModel.Parameters(
                 par.get("alpha").asDouble(), par.get("beta").asDouble(), par.get("gamma").asDouble(),
                 par.has("phi") ? par.get("phi").asDouble() : 1, initial)).orElseThrow();

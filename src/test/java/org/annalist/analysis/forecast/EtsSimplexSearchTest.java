@@ -17,7 +17,7 @@ class EtsSimplexSearchTest {
     void reachesRsFitOfUkGas() {
         double[] y = Reference.dataset("UKgas.csv");
         EtsModel model = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, false,
-                EtsModel.Season.MULTIPLICATIVE, 4);
+                EtsModel.Season.MULTIPLICATIVE, 4, EtsModel.Estimator.SIMPLEX);
         EtsModel.Fit fit = EtsSimplexSearch.fit(model, y).orElseThrow();
         AgainstR.relative(fit.aicc(), 1256.55829416009, 1e-4, "AICc");
         assertThat(fit.parameters().alpha()).isCloseTo(0.0305368688940664, within(0.005));
@@ -31,9 +31,10 @@ class EtsSimplexSearchTest {
     void quarterlyModelsAreFittedByTheSimplexSearch() {
         double[] y = Reference.dataset("UKgas.csv");
         EtsModel quarterly = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, false,
-                EtsModel.Season.NONE, 4);
+                EtsModel.Season.NONE, 1, EtsModel.Estimator.forPeriod(4));
         EtsModel yearly = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, false,
-                EtsModel.Season.NONE, 1);
+                EtsModel.Season.NONE, 1, EtsModel.Estimator.forPeriod(1));
+        assertThat(EtsModel.Estimator.forPeriod(12)).isEqualTo(EtsModel.Estimator.QUASI_NEWTON);
         assertThat(quarterly.fit(y).orElseThrow().aicc()).isEqualTo(EtsSimplexSearch.fit(quarterly, y).orElseThrow().aicc());
         assertThat(yearly.fit(y).orElseThrow().aicc()).isNotEqualTo(EtsSimplexSearch.fit(yearly, y).orElseThrow().aicc());
     }

@@ -35,7 +35,7 @@ class MembersTest {
     @Test
     void etsForecastsFromEveryOriginEqualThoseOfTheModelRefilteredOnTheValuesBeforeIt() {
         EtsModel model = new EtsModel(EtsModel.Error.MULTIPLICATIVE, EtsModel.Trend.ADDITIVE, true,
-                EtsModel.Season.MULTIPLICATIVE, 12);
+                EtsModel.Season.MULTIPLICATIVE, 12, EtsModel.Estimator.QUASI_NEWTON);
         EtsModel.Fit fit = model.fit(Arrays.copyOf(AIR, FIRST_ORIGIN)).orElseThrow();
         double[][] onePass = EtsFilter.forecastsFromOrigins(model, AIR, fit.parameters(), FIRST_ORIGIN, REACH)
                 .orElseThrow();

@@ -20,7 +20,8 @@ class RecordsCopyTheirArraysTest {
         assertThat(p.initial()).containsExactly(100);
 
         double[] state = {5, 0, 1};
-        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1);
+        EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, EtsModel.Trend.NONE, false, EtsModel.Season.NONE, 1,
+                EtsModel.Estimator.QUASI_NEWTON);
         EtsModel.Fit fit = new EtsModel.Fit(model, p, 0, 0, 0, 0, 0, 1, 1, state, 10);
         state[0] = -1;
         fit.state()[0] = -2;

@@ -23,7 +23,8 @@ class SeasonalForecastabilityTest {
                     if (damped && trend == EtsModel.Trend.NONE) {
                         continue;
                     }
-                    EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, trend, damped, EtsModel.Season.ADDITIVE, period);
+                    EtsModel model = new EtsModel(EtsModel.Error.ADDITIVE, trend, damped, EtsModel.Season.ADDITIVE, period,
+                            EtsModel.Estimator.forPeriod(period));
                     for (int i = 0; i < 400; i++) {
                         double alpha = 1.3 * random.nextDouble();
                         double beta = trend == EtsModel.Trend.NONE ? 0 : alpha * (1.4 * random.nextDouble() - 0.2);
