@@ -57,6 +57,22 @@ class NearBreakWordsTest {
         assertThat(sawOne).as("Long-haul's August 2022 lies inside the interval of the change from March 2023").isTrue();
     }
 
+    @Test
+    void theIrregularShareTheCaptionAndTheAppendixAgreeOnThePeriodsLeftOutAroundBreaks() {
+        ReadResult file = new SeriesFileReader(ReadOptions.defaults()).read(Path.of("demo-data/quennelmark-guest-nights.csv"));
+        for (String name : List.of("Total", "Domestic", "Brevania", "Long-haul")) {
+            AuditedBrief brief = AuditedBrief.of(name, file.require(name));
+            int leftOut = brief.findings().irregular().leftOutNearBreaks();
+            // the demo's January 2021 collapse is a step in every market (demo-data/README.md)
+            assertThat(leftOut).as(name).isPositive();
+            String text = brief.text().replaceAll("\\s+", " ");
+            assertThat(text).as(name).contains("leaving out the " + leftOut + " months around its structural")
+                    .contains("The share above leaves those periods out.");
+            long sentences = text.split("leaving out the " + leftOut + " months", -1).length - 1;
+            assertThat(sentences).as(name + ": the section and the methods row").isEqualTo(2);
+        }
+    }
+
     private static boolean within(Period p, BreakFinding b) {
         return b.ci95().get(0).compareTo(p) <= 0 && p.compareTo(b.ci95().get(1)) <= 0;
     }
