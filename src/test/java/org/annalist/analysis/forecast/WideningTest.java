@@ -267,6 +267,61 @@ class WideningTest {
     }
 
     /**
+     * The 95 % interval's allowance for a scale set from few back-test origins: Student's t with
+     * origins − 1 degrees of freedom against the normal, as ratios of the 97.5 % and 90 % quantiles —
+     * from published tables, t_7: 2.365 and 1.415, t_23: 2.069 and 1.319, normal 1.960 and 1.282 (so
+     * 1.093 for eight origins, 1.025 for 24); none with fewer than two origins, next to none with
+     * thousands.
+     */
+    @Test
+    void aScaleSetFromFewOriginsWidensTheNinetyFivePercentIntervalAsStudentsT() {
+        assertThat(Widening.studentTail(8)).isCloseTo((2.365 / 1.415) / (1.960 / 1.282), within(2e-3));
+        assertThat(Widening.studentTail(24)).isCloseTo((2.069 / 1.319) / (1.960 / 1.282), within(2e-3));
+        assertThat(Widening.studentTail(1)).isEqualTo(1);
+        assertThat(Widening.studentTail(0)).isEqualTo(1);
+        assertThat(Widening.studentTail(100_000)).isCloseTo(1, within(1e-4));
+        assertThat(Widening.studentTail(8)).isGreaterThan(Widening.studentTail(24));
+    }
+
+    /**
+     * Planted back-test errors from eight origins (counts 8 at one step ahead) that widen a flat
+     * forecast's 80 % interval: its 95 % interval is widened by the same factor times the Student
+     * allowance for eight origins; where the model's own 80 % interval is wide enough (the errors
+     * ask for no change of scale) the 95 % interval stays the model's own.
+     */
+    @Test
+    void theStudentAllowanceAppliesOnlyWhereTheErrorsSetTheScale() {
+        int h = 4;
+        Outlook.Forecast f = centredForecast(h, k -> 1.0);
+        int n = 8 * h;
+        for (double size : new double[] {3.0, 0.5}) {
+            double[] absolute = new double[n];
+            double[] forecast = new double[n];
+            int[] horizon = new int[n];
+            for (int i = 0; i < n; i++) {
+                horizon[i] = i % h;
+                absolute[i] = size * (0.5 + i / (double) n); // spread, so that the quantiles differ
+            }
+            int[] counts = {8, 8, 8, 8};
+            HorizonErrors errors = new HorizonErrors(new double[h], new double[h], counts,
+                    new HorizonErrors.CycleSums(Double.NaN, Double.NaN, Double.NaN, 0),
+                    new HorizonErrors.Pairs(absolute, forecast, horizon));
+            Widening.Widened w = Widening.apply(f, errors, false, Outlook.Bounds.NONE);
+            double c = w.factors()[0];
+            for (int k = 0; k < h; k++) {
+                double c95 = w.forecast().hi95()[k] / 1.9599640;
+                if (size > 1) {
+                    assertThat(c).isGreaterThan(1);
+                    assertThat(c95).as("step %d", k + 1).isGreaterThanOrEqualTo(c * Widening.studentTail(8) * (1 - 1e-12));
+                } else {
+                    assertThat(c).isEqualTo(1);
+                    assertThat(c95).as("step %d", k + 1).isCloseTo(1, within(1e-12));
+                }
+            }
+        }
+    }
+
+    /**
      * A forecast of 0 with normal intervals, ±1.2816 and ±1.96 (published normal tables) times
      * {@code scale} at each 0-based step.
      */
