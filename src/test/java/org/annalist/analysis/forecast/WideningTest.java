@@ -78,7 +78,7 @@ class WideningTest {
      * {@value Widening#NARROWING_PAIRS} errors the 80 % intervals narrow until eight in ten of the
      * errors lie inside (no fewer than ⌊(n + 1)·0.8⌋, no more than ⌈(n + 1)·0.8⌉), and the 95 %
      * intervals narrow by the same factor — the errors' largest are well inside them, so the tail
-     * check asks for nothing more (before, they stayed R's and over-covered on M3 monthly data, 0.975);
+     * check asks for nothing more (before, they stayed R's and over-covered on M3 monthly data, 0.971);
      * with one error fewer nothing changes.
      */
     @ParameterizedTest
