@@ -204,7 +204,8 @@ public final class DecisionRules {
     /**
      * The outlook's 80 % interval is narrowed to the back-test's errors, where it is wider than they
      * support, only with at least this many errors (our rule: their share inside the interval is then
-     * known within about ±4 points, the binomial standard error; fewer errors only ever widen it).
+     * known within about ±4 points, the binomial standard error; fewer errors only ever widen it). The
+     * 95 % interval is narrowed by the same factor, unless the back-test's largest errors ask for more.
      */
     public static final int OUTLOOK_NARROWING_ERRORS = 100;
     /**

@@ -25,7 +25,8 @@ import org.annalist.series.Period;
  * @param nextYearChange  the next year against {@code currentYear} (null when either is missing)
  * @param intervalsWidened whether the model's intervals were widened to the back-test's errors
  * @param intervalsNarrowed whether the model's 80 % intervals were narrowed to the back-test's errors
- *                        (only with at least a hundred of them)
+ *                        (only with at least a hundred of them; the 95 % intervals by the same
+ *                        factor unless the largest errors asked for more)
  * @param backtestFrom    the first period the back-test forecast (null without a back-test) …
  * @param backtestTo      … and the last
  * @param typicalYearErrorPct the median absolute percentage error of the chosen method's sums of

@@ -156,7 +156,7 @@ public final class AnalystNotes {
                 line(out, "back-test span", "%s to %s%s", o.backtestFrom(), o.backtestTo(),
                         o.intervalsWidened() && o.intervalsNarrowed() ? "; intervals widened or narrowed to its errors"
                                 : o.intervalsWidened() ? "; intervals widened to its errors"
-                                : o.intervalsNarrowed() ? "; 80\u00A0% intervals narrowed to its errors" : "");
+                                : o.intervalsNarrowed() ? "; intervals narrowed to its errors" : "");
             }
             for (OutlookFinding.Score score : o.backtest()) {
                 line(out, "back-test", "%s: MASE %.2f, sMAPE %.1f %%", score.method().code(), score.mase(),

@@ -69,8 +69,9 @@ final class AppendixViews {
                     + "; intervals analytic or from 2,000 simulated paths"
                     + (o.intervalsWidened() ? ", widened where narrower than the back-test's errors (empirical"
                     + " intervals, Williams & Goodman 1971)" : "")
-                    + (o.intervalsNarrowed() ? (o.intervalsWidened() ? "; " : ", ") + "the 80\u00A0% intervals narrowed"
-                    + " where wider than 100 or more of the back-test's errors support" : "")
+                    + (o.intervalsNarrowed() ? (o.intervalsWidened() ? "; " : ", ") + "narrowed"
+                    + " where wider than 100 or more of the back-test's errors support (the 95\u00A0% intervals"
+                    + " by the same factor as the 80\u00A0% ones unless the largest errors asked for more)" : "")
                     + "; year totals and their intervals from the simulated paths"));
         }
         return rows;

@@ -248,7 +248,8 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param currentYear the sentence on the current year as observed plus forecast; empty without one
      * @param backtestRange the periods the back-test forecast, e.g. {@code January 2024 to December 2025}
      * @param widened     the intervals were widened to the back-test's errors
-     * @param narrowed    the 80 % intervals were narrowed to the back-test's errors (at some steps)
+     * @param narrowed    the intervals were narrowed to the back-test's errors (the 80 % ones at some
+     *                    steps, the 95 % ones by the same factor unless the largest errors asked for more)
      * @param noBacktest  why the forecasts could not be tested, as a sentence; empty with a back-test
      * @param typicalYearError the back-test's typical error of a year's total ({@code 1.9 %}); empty without
      * @param yearSteadier the year's typical error is smaller than a single period's (errors partly cancelled)

@@ -38,8 +38,8 @@ import java.util.Optional;
  * common shocks, so that its intervals keep the members' correlation. Where the intervals are
  * narrower than the errors the chosen method made in the back-test — the combination's errors when a
  * single method was chosen over it ({@link Widening#yardstick}) — they and the paths are widened
- * to those errors; an 80 % interval wider than several hundred such errors support is narrowed to
- * them ({@link Widening}). Sums over several periods come from the paths
+ * to those errors by one factor over all steps; intervals wider than a hundred or more such errors
+ * support are narrowed to them by that factor ({@link Widening}). Sums over several periods come from the paths
  * ({@link YearSums}). Everything is clipped to the measure's bounds: counts are never forecast below
  * zero.
  *
