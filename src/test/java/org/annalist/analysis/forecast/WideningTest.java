@@ -28,7 +28,7 @@ class WideningTest {
         Reference r = Reference.csv("ets_AirPassengers_MAM_forecast.csv");
         double[] mean = r.column("mean");
         int h = mean.length;
-        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(), false), mean, r.column("lo80"),
+        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(), false, false), mean, r.column("lo80"),
                 r.column("hi80"), r.column("lo95"), r.column("hi95"), new double[0][h]);
         double[] planted = new double[12];
         Arrays.fill(planted, 0.075);
@@ -68,7 +68,7 @@ class WideningTest {
     void onlyAHundredErrorsOrMoreNarrowTheEightyPercentInterval(int planted) {
         Reference r = Reference.csv("ets_AirPassengers_MAM_forecast.csv");
         double[] mean = Arrays.copyOf(r.column("mean"), 12);
-        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(), false),
+        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(), false, false),
                 mean, Arrays.copyOf(r.column("lo80"), 12), Arrays.copyOf(r.column("hi80"), 12),
                 Arrays.copyOf(r.column("lo95"), 12), Arrays.copyOf(r.column("hi95"), 12), new double[0][12]);
         double[] absolute = new double[planted];
@@ -268,7 +268,7 @@ class WideningTest {
             hi95[k] = 1.9599640 * s;
         }
         return new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(),
-                false), new double[h], lo80, hi80, lo95, hi95, new double[0][h]);
+                false, false), new double[h], lo80, hi80, lo95, hi95, new double[0][h]);
     }
 
     /**
