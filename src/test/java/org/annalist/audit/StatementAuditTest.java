@@ -525,7 +525,7 @@ class StatementAuditTest {
     @Test
     void theSlopeAfterTheLatestBreakIsTheTrendSectionsRateSinceIt() {
         Pattern since = Pattern.compile("Since (.{1,30}?), the latest structural change, the level has [^:]{1,40}: "
-                + "([+\u2212]?[\\d,.]+)[^(]{0,80}\\((?:([+\u2212]?[\\d,.]+)\u00a0% a year(?: of the latest year's average level)?; )?");
+                + "([+\u2212]?[\\d,.]+)[^(]{0,80}\\(95\u00a0% interval [^;]+; (?:([+\u2212]?[\\d,.]+)\u00a0% a year(?: of the latest year's average level)?; )?");
         int compared = 0;
         List<String> found = new ArrayList<>();
         for (AuditedBrief b : briefs) {
@@ -668,6 +668,17 @@ class StatementAuditTest {
         }
         assertThat(found).as("levels taken together that do not recompute").isEmpty();
         assertThat(seen).as("briefs with several breaks taken together").isPositive();
+    }
+
+    /**
+     * A trend's 95 % interval follows the figure it bounds: "+753 nights a year in the monthly total
+     * (95 % interval 585 to 912; +5.1 % a year; …)", never after the % in between, where "+5.1 % a year;
+     * 95 % interval 585 to 912" read as an interval of the % (the demo's long-haul market).
+     */
+    @Test
+    void aTrendsIntervalFollowsTheFigureItBounds() {
+        Pattern after = Pattern.compile("(?:%\u00a0a year|% a year|average level|latest year's average level); 95\u00a0% interval");
+        assertNone(b -> matches(after, b.text()), "an interval in units printed after the trend's %");
     }
 
     /** A flow's slope names the total it changes ("a year in the monthly total"), never "a month each year". */
