@@ -97,8 +97,10 @@ final class OutlookCautions {
         List<String> reasons = new ArrayList<>();
         findings.claims().find(Claim.Quantity.ROLLING_YEAR).flatMap(Claim::relativePct)
                 .filter(r -> Math.signum(r - pace) == side)
+                // a change the same way as the trend but smaller explains a slower outlook by being small: "only"
                 .ifPresent(r -> reasons.add((series.frequency().periodsPerYear() == 12 ? "the last twelve months were "
-                        : "the latest year was ") + f.percent(Math.abs(r)) + (r < 0 ? " below" : " above")
+                        : "the latest year was ") + (Math.signum(r) == Math.signum(pace) && Math.abs(r) < Math.abs(pace)
+                        ? "only " : "") + f.percent(Math.abs(r)) + (r < 0 ? " below" : " above")
                         + (series.frequency().periodsPerYear() == 12 ? " the twelve before" : " the year before")));
         // a base effect: the year next year is set against ran on the other side of the trend's pace
         int baseYear = change.againstYear();

@@ -99,6 +99,25 @@ class OutlookCautionsTest {
         assertThat(OutlookCautions.againstTrend(domestic, findings, f, false)).contains("holds the trend's pace");
     }
 
+    /**
+     * The long-haul market (same demo file): next year's +1.8 % is slower than the +5.1 % a year since
+     * March 2023, and the last twelve months rose by less than that pace: given as a reason, they are
+     * said to have risen "only" so much, or "2.4 % above the twelve before" would read as a reason for
+     * growth. The figures are read from the findings.
+     */
+    @Test
+    void aSmallerRiseOfTheLastTwelveMonthsIsSaidToBeOnlyThatMuch() throws IOException {
+        Series longHaul = new SeriesFileReader(ReadOptions.defaults()).read(Path.of("demo-data/quennelmark-guest-nights.csv"))
+                .series().stream().filter(s -> s.name().startsWith("Long-haul")).findFirst().orElseThrow();
+        Findings lh = new Analyst().analyse(longHaul);
+        Formats lf = Formats.forValues(longHaul.values(), Locale.UK);
+        double rolling = lh.claims().find(Claim.Quantity.ROLLING_YEAR).flatMap(Claim::relativePct).orElseThrow();
+        double pace = lh.trend().latestRegime().orElseThrow().changePctPerYear();
+        assertThat(rolling).isPositive().isLessThan(pace);
+        assertThat(OutlookCautions.againstTrend(longHaul, lh, lf))
+                .contains("the last twelve months were only " + lf.percent(rolling) + " above the twelve before");
+    }
+
     /** A single method without a term for growth is named as such; one with a trend is not (invented models). */
     @Test
     void aSingleMethodWithoutGrowthIsSaidToHoldTheLevel() {
