@@ -206,7 +206,7 @@ final class CalendarAnalysis {
             Optional<Boolean> later = latest.effects().stream().anyMatch(p -> p.name().equals(CalendarEffects.EASTER))
                     ? Optional.of(MonthDay.from(Easter.sunday(now.year())).isAfter(MonthDay.from(Easter.sunday(before.year()))))
                     : Optional.empty();
-            notes.add(new CalendarNote.CalendarAdjusted(latest, later, fit.weekdays, series.unit()));
+            notes.add(new CalendarNote.CalendarAdjusted(latest, later, fit.weekdays, series.unit(), log));
         }
         return notes;
     }

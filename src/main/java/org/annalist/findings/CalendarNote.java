@@ -73,9 +73,13 @@ public sealed interface CalendarNote {
      *                    is not among the effects that differed)
      * @param weekdays    which days the weekday effect counts
      * @param unit        the series' unit, for a change that cannot be given in %
+     * @param inLogs      the effects were estimated on logs, each a % of the value; else in the series'
+     *                    units, each the same number of units whatever the value (the appendix gives
+     *                    such an effect in units and as a % of the average period, a base other than
+     *                    the change's; the latest period's share is then said in units too)
      */
     record CalendarAdjusted(CalendarFinding.AdjustedChange change, Optional<Boolean> easterLater,
-                            WeekdayKind weekdays, String unit) implements CalendarNote {
+                            WeekdayKind weekdays, String unit, boolean inLogs) implements CalendarNote {
     }
 
     /** A February compared with one of another length. */

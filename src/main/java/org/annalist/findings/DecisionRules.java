@@ -28,6 +28,15 @@ public final class DecisionRules {
      */
     public static final int MIN_REGIME_CYCLES_FOR_TREND = 2;
 
+    /**
+     * A regime's fitted slope is given as a rate a year only when the regime lasts at least this many
+     * years; a shorter one is told by its fitted levels at its two ends and its length (our rule: a
+     * rate a year read off a shorter span, such as a 21-month recovery, states a pace the series
+     * never kept for a year and reads as growth; the same two years that {@link
+     * #MIN_REGIME_CYCLES_FOR_TREND} asks before the trend of a monthly series' latest regime is stated).
+     */
+    public static final int MIN_REGIME_YEARS_FOR_RATE = 2;
+
     // ---- measure kinds ------------------------------------------------------------------------
 
     /**

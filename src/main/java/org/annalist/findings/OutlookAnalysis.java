@@ -224,7 +224,7 @@ final class OutlookAnalysis {
 
     private static OutlookFinding.Model model(Outlook.Model model, int period) {
         return new OutlookFinding.Model(method(model.method(), period), model.label(), model.seasonallyAdjusted(),
-                model.members().stream().map(m -> model(m, period)).toList());
+                model.members().stream().map(m -> model(m, period)).toList(), model.trended());
     }
 
     private static OutlookFinding.Choice choice(Outlook.Choice choice, int period) {

@@ -64,8 +64,12 @@ public record OutlookFinding(OutlookMethod method, Model model, int horizon, Per
      *                           {@code ARIMA(0,1,1)(0,1,1)[12]}, for ETS and ARIMA (empty otherwise)
      * @param seasonallyAdjusted Theta worked on seasonally adjusted values
      * @param members            the combination's members (empty for a single method)
+     * @param trended            the model has a term that carries growth forward (an ETS trend, an ARIMA drift
+     *                           or two differences, Theta's drift; a combination's when any member's has);
+     *                           without one its forecasts hold the latest level with its season
      */
-    public record Model(OutlookMethod method, Optional<String> label, boolean seasonallyAdjusted, List<Model> members) {
+    public record Model(OutlookMethod method, Optional<String> label, boolean seasonallyAdjusted, List<Model> members,
+                        boolean trended) {
 
         public Model {
             members = List.copyOf(members);

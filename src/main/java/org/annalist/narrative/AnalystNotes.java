@@ -58,14 +58,17 @@ public final class AnalystNotes {
         if (f.breaks().isEmpty()) {
             line(out, "breaks", "none (%s)", Terms.breakMethod(f.breakMethod()));
         }
-        for (BreakFinding b : f.breaks()) {
+        Frequency frequency = Frequency.fromLabel(f.series().frequency());
+        List<RegimeRates.Regime> regimes = RegimeRates.regimes(f.breaks(), frequency, f.transform() == Transform.LOG);
+        for (int j = 0; j < f.breaks().size(); j++) {
+            BreakFinding b = f.breaks().get(j);
             String interval = b.ci95().get(0).equals(b.ci95().get(1)) ? b.ci95().get(0) + " only"
                     : b.ci95().get(0) + " to " + b.ci95().get(1);
-            line(out, "break", "%s (95%% interval %s): %s; fitted lines at the break %s → %s (%s), slope %s → %s %s"
+            line(out, "break", "%s (95%% interval %s): %s; fitted lines at the break %s → %s (%s), slope %s"
                             + "; sup-F %.1f, %s%s", b.period(), interval, Terms.breakKind(b.kind()),
                     num(b.levelBefore()), num(b.levelAfter()), change(f, b.levelAfter() - b.levelBefore(), b.changePct()),
-                    num(b.slopeBefore()), num(b.slopeAfter()), slopeTime(f),
-                    b.statistic(), p(b.pValue()), b.provisional() ? "; provisional" : "");
+                    slopes(f, regimes.get(j), regimes.get(j + 1)), b.statistic(), p(b.pValue()),
+                    b.provisional() ? "; provisional" : "");
         }
         if (f.breaks().size() > 1) {
             BreakFinding first = f.breaks().get(0);
@@ -193,6 +196,26 @@ public final class AnalystNotes {
                     c.from().equals(c.to()) ? c.from() : c.from() + " to " + c.to(), c.direction().code(),
                     words.signedSize(c), c.pValue().map(pv -> ", " + p(pv)).orElse(""), decided);
         }
+    }
+
+    /**
+     * The slopes of the regimes either side of a break, in units a year ({@code 885.1 → 1167.6 a year
+     * in the monthly total}); a regime too short for a rate a year ({@link RegimeRates#lastsForARate})
+     * by its length and the fitted levels at its ends ({@code over 21 months 23359.7 to 64016.3}).
+     */
+    private static String slopes(Findings f, RegimeRates.Regime before, RegimeRates.Regime after) {
+        Frequency frequency = Frequency.fromLabel(f.series().frequency());
+        boolean rateBefore = RegimeRates.lastsForARate(before.periods(), frequency);
+        boolean rateAfter = RegimeRates.lastsForARate(after.periods(), frequency);
+        if (rateBefore && rateAfter) {
+            return num(before.slopePerYear()) + " → " + num(after.slopePerYear()) + " " + slopeTime(f);
+        }
+        return slope(f, before, rateBefore, frequency) + " → " + slope(f, after, rateAfter, frequency);
+    }
+
+    private static String slope(Findings f, RegimeRates.Regime r, boolean rate, Frequency frequency) {
+        return rate ? num(r.slopePerYear()) + " " + slopeTime(f)
+                : "over " + Terms.periods(r.periods(), frequency) + " " + num(r.startLevel()) + " to " + num(r.endLevel());
     }
 
     /** What the slopes in units are counted over: {@code a year}, or {@code a month each year} for a flow. */

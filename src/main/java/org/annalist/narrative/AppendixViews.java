@@ -116,12 +116,21 @@ final class AppendixViews {
             return Optional.empty();
         }
         List<String> effects = new ArrayList<>();
+        boolean log = findings.transform() == Transform.LOG;
+        String unit = MeasureWords.differenceUnit(MeasureWords.measureOf(findings),
+                findings.series().unit() == null ? "" : findings.series().unit());
+        Frequency frequency = Frequency.fromLabel(findings.series().frequency());
         for (CalendarFinding.Effect e : c.effects()) {
             String per = e.name().equals(CalendarFinding.EASTER) ? " for a period holding all "
                     + org.annalist.findings.EasterAhead.WINDOW + " days before Easter Sunday"
                     : e.name().equals(CalendarFinding.WEEKEND_NIGHTS) ? " per extra Friday or Saturday night"
                     : e.name().equals(CalendarFinding.WEEKEND_DAYS) ? " per extra Saturday or Sunday" : " for all its days";
-            effects.add(CalendarSentences.effectName(e.name()) + " " + f.signedPercent(e.effectPct()) + per + " ("
+            // estimated in units (not on logs), an effect is so many units in every period: given so, with
+            // its % of the average period, the base of that % (the latest change's % has another)
+            String size = log ? f.signedPercent(e.effectPct()) + per
+                    : f.signedSignificant(e.coefficient()) + unit + per + (Double.isFinite(e.effectPct()) ? ", "
+                    + f.percent(Math.abs(e.effectPct())) + " of an average " + Terms.periodName(frequency, false) : "");
+            effects.add(CalendarSentences.effectName(e.name()) + " " + size + " ("
                     + f.pValue(e.pValue()) + (e.kept() ? ", allowed for" : ", not significant, not allowed for") + ")");
         }
         String screened = c.screenedOut().isEmpty() ? "" : "; " + Terms.number(c.screenedOut().size())

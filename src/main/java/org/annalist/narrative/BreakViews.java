@@ -20,12 +20,14 @@ final class BreakViews {
     private final Findings findings;
     private final Formats f;
     private final MeasureWords measure;
+    private final RegimeRates regimes;
 
     BreakViews(Series series, Findings findings, Formats f) {
         this.series = series;
         this.findings = findings;
         this.f = f;
         this.measure = MeasureWords.of(series, findings, f);
+        this.regimes = new RegimeRates(series, findings, f);
     }
 
     List<BriefView.BreakRow> breaks() {
@@ -35,24 +37,23 @@ final class BreakViews {
         for (int j = 0; j < all.size(); j++) {
             BreakFinding b = all.get(j);
             BreakFinding previous = j == 0 ? null : all.get(j - 1);
-            // the regime between two breaks is one line: its level moved when its two ends differ visibly
-            boolean drifted = previous != null
+            // the regime between two breaks is one line: its level moved when its two ends differ visibly,
+            // said here unless the break before already told that movement in levels (a short regime)
+            boolean toldBefore = previous != null && previous.kind().slope() && !regimes.annualised(regimes.before(j));
+            boolean drifted = previous != null && !toldBefore
                     && Math.abs(b.levelBefore() - previous.levelAfter()) > 0.0005 * Math.abs(previous.levelAfter());
             boolean overall = j == all.size() - 1 && j > 0;
-            boolean slopesInPercent = findings.transform() == Transform.LOG && b.levelBefore() > 0 && b.levelAfter() > 0;
             Optional<TrendFinding.LatestRegime> latest = j == all.size() - 1 ? latestRegimeFrom(b) : Optional.empty();
             rows.add(new BriefView.BreakRow(f.period(b.period()), f.period(b.ci95().get(0)),
                     f.period(b.ci95().get(1)), b.ci95().get(0).equals(b.ci95().get(1)),
                     f.value(b.levelBefore()), f.value(b.levelAfter()), size(b.levelBefore(), b.levelAfter()),
                     b.changePct() > 0, f.fixed(b.statistic(), 1), f.pValue(b.pValue(), SectionViews.BREAK_P_FLOOR),
-                    b.provisional(), b.kind().step(), b.kind().slope(),
-                    slope(b.slopeBefore(), b.levelBefore(), slopesInPercent),
-                    slope(b.slopeAfter(), b.levelAfter(), slopesInPercent), drifted,
+                    b.provisional(), b.kind().step(), b.kind().slope(), regimes.change(j), drifted,
                     previous == null ? "" : f.value(previous.levelAfter()),
                     overall ? size(first.levelBefore(), b.endLevel()) : "", b.endLevel() > first.levelBefore(),
                     f.value(first.levelBefore()), f.period(first.period()), f.value(b.endLevel()),
-                    f.period(b.regimeEnd()), slopesInPercent ? "a year" : slopeTime(),
-                    bendWithGap(b), joined(b), latest.isPresent() && b.kind().slope()));
+                    f.period(b.regimeEnd()), bendWithGap(b), joined(b),
+                    latest.isPresent() && b.kind().slope() && regimes.annualised(regimes.after(j))));
         }
         return rows;
     }
@@ -75,11 +76,6 @@ final class BreakViews {
         return f.value(b.levelBefore()).equals(f.value(b.levelAfter()));
     }
 
-    /** What a slope in the series' units is counted over ({@link MeasureWords#slopeTime}). */
-    private String slopeTime() {
-        return MeasureWords.slopeTime(measure.measure(), series.frequency());
-    }
-
     /**
      * Whether a break described as a change of slope still shows a gap between its two fitted lines
      * as large as a reported step ({@link DecisionRules#MIN_BREAK_CHANGE_PCT}): BIC found a bend alone
@@ -88,19 +84,6 @@ final class BreakViews {
      */
     static boolean bendWithGap(BreakFinding b) {
         return b.kind() == BreakKind.SLOPE && Math.abs(b.changePct()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
-    }
-
-    /**
-     * A regime's slope at a break, with its unit: for a series worked in logs, the line is a curve
-     * whose growth rate is what stays the same along it, so the slope is given as % a year
-     * (exp(log slope) − 1, the log slope being the slope over the level); else in units, counted
-     * over {@link #slopeTime()}.
-     */
-    private String slope(double perYear, double level, boolean inPercent) {
-        if (inPercent) {
-            return f.signedPercent(100 * Math.expm1(perYear / level));
-        }
-        return f.signedSignificant(perYear) + measure.differenceUnit();
     }
 
     /** The size of a move from one fitted level to another, without sign: in %, points or units as the measure has it. */
@@ -131,12 +114,16 @@ final class BreakViews {
      * line grows at its rate, else by its slope in units, as the break's fitted lines do.
      */
     private String oldPath(Episode e) {
-        Optional<BreakFinding> step = findings.breaks().stream().filter(b -> b.period().equals(e.start())).findFirst();
-        if (step.isEmpty() || step.get().slopeBefore() == 0 || !(step.get().levelBefore() > 0)
-                && findings.transform() == Transform.LOG) {
+        int at = -1;
+        for (int j = 0; j < findings.breaks().size(); j++) {
+            at = findings.breaks().get(j).period().equals(e.start()) ? j : at;
+        }
+        // a pace read off less than {@link DecisionRules#MIN_REGIME_YEARS_FOR_RATE} years is not carried for years
+        if (at < 0 || findings.breaks().get(at).slopeBefore() == 0 || !regimes.annualised(regimes.before(at))
+                || regimes.rate(regimes.before(at)).isEmpty()) {
             return "";
         }
-        BreakFinding b = step.get();
+        BreakFinding b = findings.breaks().get(at);
         // from the break instant, half a period before the step's first period, to the period measured at
         double years = (e.start().until(e.asOf()) + 0.5) / series.frequency().periodsPerYear();
         boolean log = findings.transform() == Transform.LOG;
@@ -145,8 +132,7 @@ final class BreakViews {
         if (Math.abs(carried - b.levelBefore()) < DecisionRules.MIN_BREAK_CHANGE_PCT / 100 * Math.abs(b.levelBefore())) {
             return "";
         }
-        String pace = log ? f.signedPercent(100 * Math.expm1(rate)) + " a year"
-                : f.signedSignificant(b.slopeBefore()) + measure.differenceUnit() + " " + slopeTime();
+        String pace = regimes.printedRate(regimes.rate(regimes.before(at)).orElseThrow());
         return "Had the level gone on as before the " + (e.rise() ? "rise" : "fall") + " (" + pace
                 + "), it would have reached about " + f.significant(carried) + " by " + f.period(e.asOf()) + "; the fitted level"
                 + " there, " + f.value(e.returnedLevel()) + ", is " + size(carried, e.returnedLevel())

@@ -178,16 +178,15 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param change        size of the step without sign ({@code 23.1 %}, or in units with the unit when
      *                      the values are not all positive); {@code rise} gives its direction
      * @param step          the break is reported as a step in level
-     * @param slope         the break is reported as a change of slope ({@code slopeBefore} → {@code slopeAfter},
-     *                      each with its unit, then {@code slopeTime})
+     * @param slope         the break is reported as a change of slope, worded in {@code slopeChange}
+     * @param slopeChange   the change of slope from the regime before to the one after ({@link RegimeRates#change}):
+     *                      {@code from +1.3 % to +1.8 % a year}, or a short regime by its levels and length
      * @param bendWithGap   a change of slope whose two fitted lines still lie a reported step apart
      *                      ({@link SectionViews#bendWithGap}): the words name the gap ({@code change}) too
-     * @param slopeTime     what the slopes are counted over: {@code a year} for slopes in % (a series worked in
-     *                      logs), else as {@link TrendView#slopeTime()}
      * @param drifted       the regime before this break is the previous break's and its line moved from
      *                      {@code previousAfter} to {@code before}
      * @param joined        the two lines join at the break (a bend): one level at the break, which runs on
-     * @param latestRate    {@code slopeAfter} is the trend section's rate since this break (Sen's slope
+     * @param latestRate    the rate after the break is the trend section's rate since this break (Sen's slope
      *                      over the latest regime), the one rate the brief gives that regime
      * @param overall       on the last of two or more breaks: the ratio of fitted levels from just before the
      *                      first break ({@code firstBefore}, {@code firstPeriod}) to the end of this one's
@@ -197,9 +196,9 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      */
     public record BreakRow(String period, String from, String to, boolean onePeriod, String before, String after,
                            String change, boolean rise, String statistic, String pValue, boolean provisional,
-                           boolean step, boolean slope, String slopeBefore, String slopeAfter, boolean drifted,
+                           boolean step, boolean slope, String slopeChange, boolean drifted,
                            String previousAfter, String overall, boolean overallRise, String firstBefore,
-                           String firstPeriod, String end, String endPeriod, String slopeTime, boolean bendWithGap, boolean joined,
+                           String firstPeriod, String end, String endPeriod, boolean bendWithGap, boolean joined,
                            boolean latestRate) {
     }
 

@@ -114,8 +114,13 @@ final class CalendarSentences {
         String unit = a.unit() == null || a.unit().isEmpty() ? "" : a.unit().equals("%") ? " percentage points" : " " + a.unit();
         String adjustedChange = percent ? PCT.signedPercent(c.adjustedChangePct()) : units.signedValue(c.adjustedChange()) + unit;
         String change = percent ? PCT.signedPercent(c.changePct()) : units.signedValue(c.change()) + unit;
-        String size = percent ? PCT.percent(Math.abs(c.calendarPct()))
-                : units.value(Math.abs(c.change() - c.adjustedChange())) + unit;
+        // an effect in units (not worked in logs) is the same number of units in every year: said in
+        // units, as the appendix gives it, not as a % on a base of its own
+        boolean inUnits = !percent || !a.inLogs() && parts.size() == 1;
+        double calendarUnits = Math.abs(c.change() - c.adjustedChange());
+        // three significant digits, as the appendix gives the effect per day ("+274 per extra …")
+        String size = !percent ? units.value(calendarUnits) + unit : inUnits ? PCT.significant(calendarUnits) + unit
+                : PCT.percent(Math.abs(c.calendarPct()));
         String moved = c.calendarPct() >= 0 ? "added about " + size + " to" : "took about " + size + " off";
         // a change that rounds to zero is said in words, never as "−0.0 %"
         boolean level = percent ? Math.abs(c.adjustedChangePct()) < 0.05

@@ -59,7 +59,7 @@ public final class DataNotes {
      * 2025 to October 2026) left out.} Only later periods with a value are counted.
      */
     static String cut(SourceFacts.Cut c, Frequency frequency, Formats f) {
-        String periods = MeasureWords.periodNoun(c.laterValues(), frequency);
+        String periods = Terms.periodName(frequency, c.laterValues() != 1);
         Period first = c.at().plus(1);
         String span = first.equals(c.lastInFile()) ? f.period(first) : f.period(first) + " to " + f.period(c.lastInFile());
         String later = c.laterValues() == 1 ? "the one later " + periods : f.count(c.laterValues()) + " later " + periods;

@@ -132,19 +132,6 @@ final class MeasureWords {
         return measure.summed() && frequency != Frequency.ANNUAL ? "in the " + periodly(frequency) + " total" : "";
     }
 
-    /** The noun for a count of periods: {@code month} for one, else {@code months}, {@code quarters}. */
-    static String periodNoun(int count, Frequency frequency) {
-        String one = switch (frequency) {
-            case ANNUAL -> "year";
-            case HALF_YEARLY -> "half-year";
-            case QUARTERLY -> "quarter";
-            case MONTHLY -> "month";
-            case WEEKLY -> "week";
-            case DAILY, BUSINESS_DAILY -> "day";
-        };
-        return count == 1 ? one : one + "s";
-    }
-
     /** The adjective of one period's span: {@code monthly}, {@code quarterly}, {@code daily}. */
     static String periodly(Frequency frequency) {
         return switch (frequency) {

@@ -10,10 +10,8 @@ import org.annalist.findings.Claim;
 import org.annalist.findings.DecisionRules;
 import org.annalist.findings.EasterAhead;
 import org.annalist.findings.Findings;
-import org.annalist.findings.Measure;
 import org.annalist.findings.OutlookCaveat;
 import org.annalist.findings.OutlookFinding;
-import org.annalist.findings.Transform;
 import org.annalist.series.Period;
 import org.annalist.series.Series;
 
@@ -93,11 +91,16 @@ final class OutlookCautions {
         // how the method works is no reason by itself (recent periods may pull either way): said apart
         String method = " The outlook does not extend the trend line: its methods start from the latest level and"
                 + " give the most recent periods the most weight.";
+        // methods without a term for growth pull next year towards no change, away from a trend either way
+        Optional<String> flat = pace != 0 && side == -Math.signum(pace) ? withoutGrowth(o.model()) : Optional.empty();
+        method += flat.map(t -> " " + Character.toUpperCase(t.charAt(0)) + t.substring(1) + ".").orElse("");
         List<String> reasons = new ArrayList<>();
         findings.claims().find(Claim.Quantity.ROLLING_YEAR).flatMap(Claim::relativePct)
                 .filter(r -> Math.signum(r - pace) == side)
+                // a change the same way as the trend but smaller explains a slower outlook by being small: "only"
                 .ifPresent(r -> reasons.add((series.frequency().periodsPerYear() == 12 ? "the last twelve months were "
-                        : "the latest year was ") + f.percent(Math.abs(r)) + (r < 0 ? " below" : " above")
+                        : "the latest year was ") + (Math.signum(r) == Math.signum(pace) && Math.abs(r) < Math.abs(pace)
+                        ? "only " : "") + f.percent(Math.abs(r)) + (r < 0 ? " below" : " above")
                         + (series.frequency().periodsPerYear() == 12 ? " the twelve before" : " the year before")));
         // a base effect: the year next year is set against ran on the other side of the trend's pace
         int baseYear = change.againstYear();
@@ -136,7 +139,7 @@ final class OutlookCautions {
             // first the evidence shows; how the method works only when the evidence shows none
             String against = opposite ? verb + " against "
                     : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
-            String why = withinUncertainty != null ? withinUncertainty
+            String why = withinUncertainty != null ? withinUncertainty : flat.isPresent() ? flat.get()
                     : reasons.isEmpty() ? "the outlook does not extend the trend line but starts from the latest level"
                     : reasons.get(0);
             return "Next year's " + f.signedPercent(next) + against + span + " (" + f.signedPercent(pace)
@@ -149,6 +152,58 @@ final class OutlookCautions {
         String last = reasons.remove(reasons.size() - 1);
         return opening + " On this series, " + String.join("; ", reasons) + (reasons.isEmpty() ? "" : "; and ")
                 + last + ".";
+    }
+
+    /**
+     * That the outlook's methods, or some of those it averages, have no term that carries growth
+     * forward ({@link OutlookFinding.Model#trended()}: an ETS model without trend, an ARIMA model
+     * without drift), so that their forecasts hold the latest level with its season whatever the
+     * trend: {@code two of the three methods averaged, exponential smoothing (ETS(M,N,M)) and an
+     * ARIMA model (ARIMA(3,0,3)(0,1,1)[12]), have no term for growth (no trend, no drift) and carry
+     * the latest level forward with its season; only the Theta method carries a trend, with a third
+     * of the weight}. Empty when every method has one.
+     */
+    static Optional<String> withoutGrowth(OutlookFinding.Model model) {
+        if (model.members().isEmpty()) {
+            return model.trended() ? Optional.empty() : Optional.of("the method used, "
+                    + OutlookMethodWords.method(model, true) + ", has no term for growth (" + missing(List.of(model))
+                    + ") and carries the latest level forward with its season");
+        }
+        List<OutlookFinding.Model> flat = model.members().stream().filter(m -> !m.trended()).toList();
+        List<OutlookFinding.Model> trended = model.members().stream().filter(OutlookFinding.Model::trended).toList();
+        if (flat.isEmpty()) {
+            return Optional.empty();
+        }
+        int n = model.members().size();
+        String names = Terms.listed(flat.stream().map(m -> OutlookMethodWords.method(m, true)).toList());
+        if (flat.size() == n) {
+            return Optional.of((n == 2 ? "neither of the two methods averaged, " : "none of the " + counted(n)
+                    + " methods averaged, ") + names + ", has a term for growth (" + missing(flat)
+                    + "): each carries the latest level forward with its season");
+        }
+        String weight = trended.size() * 3 == n ? "a third" : trended.size() * 2 == n ? "half"
+                : trended.size() * 3 == 2 * n ? "two thirds" : trended.size() + " parts in " + n;
+        return Optional.of(counted(flat.size()) + " of the " + counted(n) + " methods averaged, " + names
+                + (flat.size() == 1 ? ", has" : ", have") + " no term for growth (" + missing(flat) + ") and "
+                + (flat.size() == 1 ? "carries" : "carry") + " the latest level forward with its season; only "
+                + Terms.listed(trended.stream().map(m -> OutlookMethodWords.method(m, false)).toList())
+                + (trended.size() == 1 ? " carries" : " carry") + " a trend, with " + weight + " of the weight");
+    }
+
+    /** A count of methods in words (a combination has two or three). */
+    private static String counted(int n) {
+        return n >= 1 && n <= 3 ? List.of("one", "two", "three").get(n - 1) : String.valueOf(n);
+    }
+
+    /** What the models lack: {@code no trend}, {@code no drift}, {@code no trend, no drift}. */
+    private static String missing(List<OutlookFinding.Model> models) {
+        return String.join(", ", models.stream().map(m -> switch (m.method()) {
+            case ETS -> "no trend";
+            case ARIMA -> "no drift";
+            case SEASONAL_NAIVE -> "each period as a year before";
+            case NAIVE -> "each period as the latest";
+            default -> "no drift";
+        }).distinct().toList());
     }
 
     /**
@@ -167,31 +222,32 @@ final class OutlookCautions {
         if (breaks.isEmpty() || side == 0 || !breaks.get(breaks.size() - 1).period().equals(latestStart)) {
             return Optional.empty();
         }
-        BreakFinding latest = breaks.get(breaks.size() - 1);
-        boolean inPercent = findings.transform() == Transform.LOG;
-        Optional<Double> latestRate = rate(latest.slopeAfter(), latest.levelAfter(), inPercent);
+        RegimeRates regimes = new RegimeRates(series, findings, f);
+        int latestIndex = breaks.size() - 1;
+        RegimeRates.Regime latest = regimes.after(latestIndex);
+        Optional<Double> latestRate = regimes.rate(latest);
         if (latestRate.isEmpty()) {
             return Optional.empty();
         }
-        String latestPrinted = printedRate(latestRate.get(), inPercent, series, findings, f);
+        String latestPrinted = regimes.described(latest);
         List<String> earlier = new ArrayList<>();
         for (int j = 0; j < breaks.size(); j++) {
             BreakFinding end = breaks.get(j);
-            Period from = j == 0 ? series.start() : breaks.get(j - 1).period();
+            RegimeRates.Regime regime = regimes.before(j);
             Period to = end.period().plus(-1);
-            if (to.compareTo(o.fittedFrom()) < 0 || bridged(o, from, to)) {
+            if (to.compareTo(o.fittedFrom()) < 0 || bridged(o, regime.from(), to)) {
                 continue;
             }
-            Optional<Double> r = rate(end.slopeBefore(), end.levelBefore(), inPercent);
+            Optional<Double> r = regimes.rate(regime);
             if (r.isEmpty()) {
                 return Optional.empty();
             }
-            String printed = printedRate(r.get(), inPercent, series, findings, f);
+            String printed = regimes.described(regime);
             if (printed.equals(latestPrinted) || Math.signum(r.get() - latestRate.get()) != side) {
                 return Optional.empty();
             }
             earlier.add(printed + (j == 0 ? " before " + f.period(end.period())
-                    : " from " + f.period(from) + " to " + f.period(to)));
+                    : " from " + f.period(regime.from()) + " to " + f.period(to)));
         }
         if (earlier.isEmpty() || breaks.stream().allMatch(b -> b.slopeBefore() == 0 && b.slopeAfter() == 0)) {
             return Optional.empty();
@@ -203,27 +259,6 @@ final class OutlookCautions {
     private static boolean bridged(OutlookFinding o, Period from, Period to) {
         return o.caveats().stream().anyMatch(c -> c instanceof OutlookCaveat.ShockBridged b
                 && b.from().compareTo(from) <= 0 && to.compareTo(b.to()) <= 0);
-    }
-
-    /**
-     * A regime's rate as the structural changes table gives it: for a series worked in logs % a
-     * year, exp(slope / level) − 1 (the log slope being the slope over the level); else the slope
-     * in units a year. Empty where a log rate has no positive level to be read at.
-     */
-    private static Optional<Double> rate(double slopePerYear, double level, boolean inPercent) {
-        if (inPercent) {
-            return level > 0 ? Optional.of(100 * Math.expm1(slopePerYear / level)) : Optional.empty();
-        }
-        return Optional.of(slopePerYear);
-    }
-
-    private static String printedRate(double rate, boolean inPercent, Series series, Findings findings, Formats f) {
-        if (inPercent) {
-            return f.signedPercent(rate) + " a year";
-        }
-        Measure m = MeasureWords.measureOf(findings);
-        return f.signedSignificant(rate) + MeasureWords.differenceUnit(m, series.unit()) + " "
-                + MeasureWords.slopeTime(m, series.frequency());
     }
 
     /**

@@ -37,8 +37,9 @@ final class RulesInForce {
                         + " two separate lines lower BIC by " + Terms.number(DecisionRules.BREAK_KIND_BIC_MARGIN) + " more"),
                 new Rule("A break is provisional when", "the regime after it runs to the latest period and is too short"
                         + " to date it: its 95\u00A0% interval reaches the latest period"),
-                new Rule("Shortest regime between breaks", "one seasonal period; "
-                        + DecisionRules.MIN_REGIME_YEARS_ANNUAL + " years for annual data"),
+                new Rule("Shortest regime between breaks / its slope given a year from", "one seasonal period; "
+                        + DecisionRules.MIN_REGIME_YEARS_ANNUAL + " years for annual data / "
+                        + DecisionRules.MIN_REGIME_YEARS_FOR_RATE + " years (else the fitted levels at its ends)"),
                 new Rule("Breaks searched with PELT instead of Bai-Perron above", DecisionRules.PELT_ABOVE + " periods"),
                 new Rule("A step and a movement back read as one episode", "a step of "
                         + Terms.number(Math.abs(DecisionRules.COLLAPSE_PCT)) + "\u00A0% or more either way, then a move back"

@@ -155,7 +155,7 @@ final class SectionViews {
             return "";
         }
         String around = irregular.reach() + " on each side";
-        return (n == 1 ? "the one " : "the " + n + " ") + MeasureWords.periodNoun(n, frequency) + " around its structural "
+        return (n == 1 ? "the one " : "the " + n + " ") + Terms.periodName(frequency, n != 1) + " around its structural "
                 + "change" + (n > 2 * irregular.reach() ? "s" : "") + " (" + around + "), where the trend is still"
                 + " following the new level";
     }

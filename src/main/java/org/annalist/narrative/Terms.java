@@ -19,6 +19,7 @@ import org.annalist.findings.SeasonalityFinding;
 import org.annalist.findings.Smoothing;
 import org.annalist.findings.TestName;
 import org.annalist.findings.TrendFinding;
+import org.annalist.series.Frequency;
 import org.annalist.series.ValueFlag;
 
 /**
@@ -154,6 +155,29 @@ final class Terms {
             }
         }
         return words[best];
+    }
+
+    /** A number of periods of the frequency: {@code 21 months}, {@code 1 quarter}, {@code 400 days}. */
+    static String periods(long n, Frequency frequency) {
+        return n + " " + periodName(frequency, n != 1);
+    }
+
+    /** The same before a noun: {@code 21-month}, {@code 5-quarter}. */
+    static String periodsAsAdjective(long n, Frequency frequency) {
+        return n + "-" + periodName(frequency, false);
+    }
+
+    /** The name of one period of the frequency, or of several: {@code month}, {@code months}. */
+    static String periodName(Frequency frequency, boolean plural) {
+        String one = switch (frequency) {
+            case MONTHLY -> "month";
+            case QUARTERLY -> "quarter";
+            case ANNUAL -> "year";
+            case WEEKLY -> "week";
+            case HALF_YEARLY -> "half-year";
+            case DAILY, BUSINESS_DAILY -> "day";
+        };
+        return plural ? one + "s" : one;
     }
 
     /** {@code Brevania}, {@code Total and Brevania}, {@code Domestic, Brevania and Long-haul}. */

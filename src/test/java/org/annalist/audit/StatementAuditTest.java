@@ -525,7 +525,7 @@ class StatementAuditTest {
     @Test
     void theSlopeAfterTheLatestBreakIsTheTrendSectionsRateSinceIt() {
         Pattern since = Pattern.compile("Since (.{1,30}?), the latest structural change, the level has [^:]{1,40}: "
-                + "([+\u2212]?[\\d,.]+)[^(]{0,80}\\((?:([+\u2212]?[\\d,.]+)\u00a0% a year(?: of the latest year's average level)?; )?");
+                + "([+\u2212]?[\\d,.]+)[^(]{0,80}\\(95\u00a0% interval [^;]+; (?:([+\u2212]?[\\d,.]+)\u00a0% a year(?: of the latest year's average level)?; )?");
         int compared = 0;
         List<String> found = new ArrayList<>();
         for (AuditedBrief b : briefs) {
@@ -534,7 +534,7 @@ class StatementAuditTest {
                 continue;
             }
             Matcher bend = Pattern.compile("in " + Pattern.quote(m.group(1))
-                    + "[^()]{0,60}? a change of slope from \\S+(?: [a-z]+)* to ([+\u2212]?[\\d,.]+)(\u00a0%)?").matcher(b.text());
+                    + "[^()]{0,60}? a change of slope from " + REGIME_BEFORE + " to ([+\u2212]?[\\d,.]+)(\u00a0%)?").matcher(b.text());
             if (!bend.find()) {
                 continue;   // the latest break changed the level only: no slope to agree with
             }
@@ -543,7 +543,7 @@ class StatementAuditTest {
             if (!bend.group(1).equals(expected)) {
                 found.add(b + ": trend since " + m.group(1) + " " + m.group(2) + " (" + m.group(3)
                         + " %), breaks section " + bend.group(0));
-            } else if (!Pattern.compile("slope \\S+(?: [a-z]+)* to " + Pattern.quote(bend.group(1))).matcher(
+            } else if (!Pattern.compile("slope from " + REGIME_BEFORE + " to " + Pattern.quote(bend.group(1))).matcher(
                     b.text().substring(bend.end())).find()) {
                 found.add(b + ": the breaks table does not give " + bend.group(1) + " for " + m.group(1));
             }
@@ -551,6 +551,57 @@ class StatementAuditTest {
         assertThat(found).as("a regime given two rates").isEmpty();
         assertThat(compared).as("briefs whose latest break changed the slope and whose trend is stated since it")
                 .isGreaterThanOrEqualTo(5);
+    }
+
+    /**
+     * The regime before a change of slope as the breaks section names it: a rate ({@code +1.3 %},
+     * {@code +1.3 % a year}, {@code +885 nights}) or a short regime named again ({@code the 21-month rise}).
+     */
+    private static final String REGIME_BEFORE = "(?:the \\d+-[a-z-]+ (?:rise|fall|level line)|\\S+(?: [a-z]+)*)";
+
+    /**
+     * A regime shorter than DecisionRules.MIN_REGIME_YEARS_FOR_RATE years is told by the fitted levels
+     * at its two ends and its length, and its slope is never printed as a rate a year: a 21-month
+     * recovery once read "a change of slope from +1.3 % to +77.9 % a year", which a board member takes
+     * for growth. The levels, the length and the rate that must not appear are derived in the test
+     * from the findings JSON (a regime's slope a year at its start, over its level, on logs).
+     */
+    @Test
+    void aRegimeShorterThanTwoYearsIsToldInLevelsNotAsARateAYear() {
+        int seen = 0;
+        List<String> found = new ArrayList<>();
+        for (AuditedBrief b : briefs) {
+            JsonNode breaks = b.json().path("breaks");
+            Formats f = Formats.forValues(b.series().values(), java.util.Locale.UK);
+            boolean log = b.json().get("transform").asText().equals("log");
+            double perYear = b.series().frequency().periodsPerYear();
+            for (int k = 0; k + 1 < breaks.size(); k++) {
+                JsonNode one = breaks.get(k);
+                JsonNode next = breaks.get(k + 1);
+                long periods = period(b.series(), one).until(period(b.series(), next));
+                if (periods >= DecisionRules.MIN_REGIME_YEARS_FOR_RATE * perYear || !one.get("kind").asText().matches("slope|both")
+                        || b.series().frequency() != org.annalist.series.Frequency.MONTHLY) {
+                    continue;
+                }
+                seen++;
+                String levels = "from " + f.value(one.get("level_after").asDouble()) + " to "
+                        + f.value(next.get("level_before").asDouble()) + " over " + periods + " months";
+                if (!b.text().contains(levels)) {
+                    found.add(b + ": no «" + levels + "» for the regime from " + one.get("period").asText());
+                }
+                double after = one.get("level_after").asDouble();
+                double slope = one.get("slope_after").asDouble();
+                String rate = log ? f.signedPercent(100 * Math.expm1(slope / after)) : f.signedSignificant(slope);
+                boolean annualised = log ? b.text().contains(rate + " a year") || b.text().contains("from " + rate + " to")
+                        : b.text().contains("from " + rate + "\u00a0") || b.text().contains("to " + rate + "\u00a0");
+                if (annualised) {
+                    found.add(b + ": the short regime from " + one.get("period").asText() + " given as " + rate + " a year");
+                }
+            }
+        }
+        assertThat(found).as("short regimes annualised or not told in levels").isEmpty();
+        assertThat(seen).as("short regimes between two breaks (the demo's recoveries of 2021–2022 among them)")
+                .isGreaterThanOrEqualTo(3);
     }
 
     /** A bend joins its two lines: one level at the break, never "64,016 just before, 64,016 just after". */
@@ -617,6 +668,17 @@ class StatementAuditTest {
         }
         assertThat(found).as("levels taken together that do not recompute").isEmpty();
         assertThat(seen).as("briefs with several breaks taken together").isPositive();
+    }
+
+    /**
+     * A trend's 95 % interval follows the figure it bounds: "+753 nights a year in the monthly total
+     * (95 % interval 585 to 912; +5.1 % a year; …)", never after the % in between, where "+5.1 % a year;
+     * 95 % interval 585 to 912" read as an interval of the % (the demo's long-haul market).
+     */
+    @Test
+    void aTrendsIntervalFollowsTheFigureItBounds() {
+        Pattern after = Pattern.compile("(?:%\u00a0a year|% a year|average level|latest year's average level); 95\u00a0% interval");
+        assertNone(b -> matches(after, b.text()), "an interval in units printed after the trend's %");
     }
 
     /** A flow's slope names the total it changes ("a year in the monthly total"), never "a month each year". */

@@ -29,12 +29,12 @@ class MultiOutlookWordsTest {
     }
 
     private static OutlookFinding.Model single(OutlookMethod method) {
-        return new OutlookFinding.Model(method, Optional.empty(), false, List.of());
+        return new OutlookFinding.Model(method, Optional.empty(), false, List.of(), method == OutlookMethod.THETA);
     }
 
     private static final OutlookFinding.Model COMBINATION = new OutlookFinding.Model(OutlookMethod.COMBINATION,
             Optional.empty(), false, List.of(single(OutlookMethod.ETS), single(OutlookMethod.ARIMA),
-            single(OutlookMethod.THETA)));
+            single(OutlookMethod.THETA)), true);
 
     /** Findings holding only an outlook for 2027 of {@code nextYear} in all, by {@code model}, chosen on {@code basis}. */
     private static Findings outlook(double nextYear, OutlookFinding.Model model, OutlookFinding.Choice.Basis basis) {

@@ -64,6 +64,73 @@ class OutlookCautionsTest {
     }
 
     /**
+     * The home market's outlook averages three methods of which two have no term for growth: the
+     * exponential smoothing model has no trend (its notation's second letter N) and the ARIMA model no
+     * drift and one difference (d + D = 1: its forecasts hold the level a year on). Read in the test
+     * from the models' notation, the findings' flags must agree, and the page must say it plainly
+     * beside the trend it falls short of: before, it said only that the methods "start from the
+     * latest level", which holds for every method and explains no −1.0 % against a +1.8 % trend.
+     */
+    @Test
+    void methodsWithoutATermForGrowthAreNamedWhenTheOutlookFallsShortOfTheTrend() {
+        OutlookFinding.Model model = findings.outlook().model();
+        assertThat(model.members()).hasSize(3);
+        for (OutlookFinding.Model m : model.members()) {
+            String label = m.label().orElse("");
+            java.util.regex.Matcher arima = java.util.regex.Pattern.compile("ARIMA\\(\\d+,(\\d+),\\d+\\)(?:\\(\\d+,(\\d+),\\d+\\))?")
+                    .matcher(label);
+            boolean expected = switch (m.method()) {
+                case ETS -> !label.matches("ETS\\([AM],N,[ANM]\\)");
+                case ARIMA -> arima.find() && (label.endsWith("with drift")
+                        || Integer.parseInt(arima.group(1)) + (arima.group(2) == null ? 0 : Integer.parseInt(arima.group(2))) >= 2);
+                default -> true;
+            };
+            assertThat(m.trended()).as(m.method() + " " + label).isEqualTo(expected);
+        }
+        assertThat(model.members().stream().filter(m -> !m.trended()).map(OutlookFinding.Model::method))
+                .as("the demo's home market: ETS(M,N,M) and an ARIMA without drift")
+                .containsExactly(org.annalist.findings.OutlookMethod.ETS, org.annalist.findings.OutlookMethod.ARIMA);
+        String why = OutlookCautions.againstTrend(domestic, findings, f);
+        assertThat(why).contains("Two of the three methods averaged, exponential smoothing ("
+                + model.members().get(0).label().orElseThrow() + ") and an ARIMA model ("
+                + model.members().get(1).label().orElseThrow() + "), have no term for growth (no trend, no drift)")
+                .contains("only the Theta method carries a trend, with a third of the weight");
+        // the board's short form gives the interval first, which holds the trend's pace here
+        assertThat(OutlookCautions.againstTrend(domestic, findings, f, false)).contains("holds the trend's pace");
+    }
+
+    /**
+     * The long-haul market (same demo file): next year's +1.8 % is slower than the +5.1 % a year since
+     * March 2023, and the last twelve months rose by less than that pace: given as a reason, they are
+     * said to have risen "only" so much, or "2.4 % above the twelve before" would read as a reason for
+     * growth. The figures are read from the findings.
+     */
+    @Test
+    void aSmallerRiseOfTheLastTwelveMonthsIsSaidToBeOnlyThatMuch() throws IOException {
+        Series longHaul = new SeriesFileReader(ReadOptions.defaults()).read(Path.of("demo-data/quennelmark-guest-nights.csv"))
+                .series().stream().filter(s -> s.name().startsWith("Long-haul")).findFirst().orElseThrow();
+        Findings lh = new Analyst().analyse(longHaul);
+        Formats lf = Formats.forValues(longHaul.values(), Locale.UK);
+        double rolling = lh.claims().find(Claim.Quantity.ROLLING_YEAR).flatMap(Claim::relativePct).orElseThrow();
+        double pace = lh.trend().latestRegime().orElseThrow().changePctPerYear();
+        assertThat(rolling).isPositive().isLessThan(pace);
+        assertThat(OutlookCautions.againstTrend(longHaul, lh, lf))
+                .contains("the last twelve months were only " + lf.percent(rolling) + " above the twelve before");
+    }
+
+    /** A single method without a term for growth is named as such; one with a trend is not (invented models). */
+    @Test
+    void aSingleMethodWithoutGrowthIsSaidToHoldTheLevel() {
+        var flat = new OutlookFinding.Model(org.annalist.findings.OutlookMethod.ETS, java.util.Optional.of("ETS(A,N,A)"),
+                false, java.util.List.of(), false);
+        var trended = new OutlookFinding.Model(org.annalist.findings.OutlookMethod.ETS, java.util.Optional.of("ETS(A,A,A)"),
+                false, java.util.List.of(), true);
+        assertThat(OutlookCautions.withoutGrowth(flat)).contains("the method used, exponential smoothing (ETS(A,N,A)),"
+                + " has no term for growth (no trend) and carries the latest level forward with its season");
+        assertThat(OutlookCautions.withoutGrowth(trended)).isEmpty();
+    }
+
+    /**
      * The reason "the years before the change included" names the rates of the fitted lines, as the
      * structural changes table prints them, and is given only when they lie on the side that would
      * pull the outlook the way it differs. The home market's outlook lies below its trend's pace, and

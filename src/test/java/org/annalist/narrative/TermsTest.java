@@ -43,12 +43,12 @@ class TermsTest {
 
     @Test
     void theCombinationNamesItsMembers() {
-        OutlookFinding.Model ets = new OutlookFinding.Model(OutlookMethod.ETS, Optional.of("ETS(A,N,N)"), false, List.of());
+        OutlookFinding.Model ets = new OutlookFinding.Model(OutlookMethod.ETS, Optional.of("ETS(A,N,N)"), false, List.of(), false);
         OutlookFinding.Model arima = new OutlookFinding.Model(OutlookMethod.ARIMA, Optional.of("ARIMA(0,1,1)"), false,
-                List.of());
-        OutlookFinding.Model theta = new OutlookFinding.Model(OutlookMethod.THETA, Optional.empty(), true, List.of());
+                List.of(), false);
+        OutlookFinding.Model theta = new OutlookFinding.Model(OutlookMethod.THETA, Optional.empty(), true, List.of(), true);
         assertThat(Terms.forecastModel(new OutlookFinding.Model(OutlookMethod.COMBINATION, Optional.empty(), false,
-                List.of(ets, arima, theta)))).isEqualTo("average of ETS(A,N,N), ARIMA(0,1,1) and Theta, seasonally adjusted");
+                List.of(ets, arima, theta), true))).isEqualTo("average of ETS(A,N,N), ARIMA(0,1,1) and Theta, seasonally adjusted");
         assertThat(Terms.forecastModel(theta)).isEqualTo("Theta, seasonally adjusted");
     }
 

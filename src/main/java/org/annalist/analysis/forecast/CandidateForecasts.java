@@ -87,16 +87,18 @@ final class CandidateForecasts {
         double[] y = searched.y();
         return switch (method) {
             case ETS -> searched.ets().map(fit -> new Fitted(
-                    Outlook.Model.single(Outlook.Method.ETS, Optional.of(fit.model().label()), false), fit.forecast(horizon),
+                    Outlook.Model.single(Outlook.Method.ETS, Optional.of(fit.model().label()), false,
+                            fit.model().trend() != EtsModel.Trend.NONE), fit.forecast(horizon),
                     fit.paths(shocks), () -> fit.hasAnalyticIntervals() ? Optional.of(fit.predict(horizon)) : Optional.empty()));
             case ARIMA -> searched.arima().map(fit -> new Fitted(
-                    Outlook.Model.single(Outlook.Method.ARIMA, Optional.of(fit.label()), false), fit.forecast(horizon),
+                    Outlook.Model.single(Outlook.Method.ARIMA, Optional.of(fit.label()), false,
+                            fit.order().hasDrift() || fit.order().differences() >= 2), fit.forecast(horizon),
                     fit.paths(shocks), () -> Optional.of(fit.predict(horizon))));
             case THETA -> searched.theta().map(theta -> new Fitted(
-                    Outlook.Model.single(Outlook.Method.THETA, Optional.empty(), theta.deseasonalised()),
+                    Outlook.Model.single(Outlook.Method.THETA, Optional.empty(), theta.deseasonalised(), true),
                     theta.forecast(horizon), theta.paths(shocks), () -> Optional.of(theta.predict(horizon))));
             case SEASONAL_NAIVE -> y.length <= cycle ? Optional.empty() : Optional.of(new Fitted(
-                    Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, Optional.empty(), false),
+                    Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, Optional.empty(), false, false),
                     SeasonalNaive.forecast(y, cycle, horizon), SeasonalNaive.paths(y, cycle, shocks),
                     () -> Optional.of(SeasonalNaive.predict(y, cycle, horizon))));
             case COMBINATION, NAIVE_WITH_DRIFT -> throw new IllegalArgumentException("not a single method: " + method);

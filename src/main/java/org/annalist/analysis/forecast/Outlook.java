@@ -109,8 +109,15 @@ public final class Outlook {
      *                           {@code ARIMA(0,1,1)(0,1,1)[12]} — for ETS and ARIMA; empty otherwise
      * @param seasonallyAdjusted whether Theta worked on seasonally adjusted values (false for the others)
      * @param members            the combination's members, each with its own model (empty for a single method)
+     * @param trended            whether the model has a term that carries growth forward: an ETS trend
+     *                           (damped or not), an ARIMA drift or two differences (Box &amp; Jenkins: the
+     *                           forecasts of d + D = 2 follow the latest slope), Theta's drift, the naive
+     *                           rule's drift; for a combination, any member's. Without one (ETS(·,N,·), an
+     *                           ARIMA with one difference and no drift or none and a mean, the seasonal naive
+     *                           rule) the forecasts hold the latest level with its season
      */
-    public record Model(Method method, Optional<String> label, boolean seasonallyAdjusted, List<Model> members) {
+    public record Model(Method method, Optional<String> label, boolean seasonallyAdjusted, List<Model> members,
+                        boolean trended) {
 
         public Model {
             members = List.copyOf(members);
@@ -122,12 +129,12 @@ public final class Outlook {
             }
         }
 
-        static Model single(Method method, Optional<String> label, boolean seasonallyAdjusted) {
-            return new Model(method, label, seasonallyAdjusted, List.of());
+        static Model single(Method method, Optional<String> label, boolean seasonallyAdjusted, boolean trended) {
+            return new Model(method, label, seasonallyAdjusted, List.of(), trended);
         }
 
         static Model combination(List<Model> members) {
-            return new Model(Method.COMBINATION, Optional.empty(), false, members);
+            return new Model(Method.COMBINATION, Optional.empty(), false, members, members.stream().anyMatch(Model::trended));
         }
     }
 

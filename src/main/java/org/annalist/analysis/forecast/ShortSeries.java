@@ -82,7 +82,7 @@ final class ShortSeries {
             hi95[k] = mean[k] + t95 * sd[k];
         }
         Outlook.Method method = seasonal ? Outlook.Method.SEASONAL_NAIVE : Outlook.Method.NAIVE_WITH_DRIFT;
-        return Optional.of(Intervals.clipped(Outlook.Model.single(method, Optional.empty(), false), mean, lo80, hi80,
+        return Optional.of(Intervals.clipped(Outlook.Model.single(method, Optional.empty(), false, !seasonal), mean, lo80, hi80,
                 lo95, hi95, paths, bounds));
     }
 }

@@ -89,7 +89,7 @@ class RecordsCopyTheirArraysTest {
         double[] mean = {1, 2};
         double[][] paths = {{1, 2}, {3, 4}};
         Outlook.Forecast forecast = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE,
-                Optional.empty(), false), mean, new double[] {0, 1}, new double[] {2, 3}, new double[] {-1, 0},
+                Optional.empty(), false, false), mean, new double[] {0, 1}, new double[] {2, 3}, new double[] {-1, 0},
                 new double[] {3, 4}, paths);
         mean[0] = 9;
         paths[0][0] = 9;

@@ -38,7 +38,7 @@ class WideningTest {
         double[] lo95 = Arrays.copyOf(r.column("lo95"), h);
         double[] hi95 = Arrays.copyOf(r.column("hi95"), h);
         Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE,
-                java.util.Optional.empty(), false), mean, lo80, hi80, lo95, hi95, new double[0][h]);
+                java.util.Optional.empty(), false, false), mean, lo80, hi80, lo95, hi95, new double[0][h]);
         int n = 2 * h;
         double[] absolute = new double[n];
         double[] forecast = new double[n];
@@ -86,7 +86,7 @@ class WideningTest {
     void onlyAHundredErrorsOrMoreNarrowTheIntervalsBothByTheSameFactor(int planted) {
         Reference r = Reference.csv("ets_AirPassengers_MAM_forecast.csv");
         double[] mean = Arrays.copyOf(r.column("mean"), 12);
-        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(), false),
+        Outlook.Forecast f = new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(), false, false),
                 mean, Arrays.copyOf(r.column("lo80"), 12), Arrays.copyOf(r.column("hi80"), 12),
                 Arrays.copyOf(r.column("lo95"), 12), Arrays.copyOf(r.column("hi95"), 12), new double[0][12]);
         double[] absolute = new double[planted];
@@ -338,7 +338,7 @@ class WideningTest {
             hi95[k] = 1.9599640 * s;
         }
         return new Outlook.Forecast(Outlook.Model.single(Outlook.Method.SEASONAL_NAIVE, java.util.Optional.empty(),
-                false), new double[h], lo80, hi80, lo95, hi95, new double[0][h]);
+                false, false), new double[h], lo80, hi80, lo95, hi95, new double[0][h]);
     }
 
     /**
