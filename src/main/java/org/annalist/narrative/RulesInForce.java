@@ -48,8 +48,7 @@ final class RulesInForce {
                 new Rule("An outlier", "robust score \u2265 " + Terms.number(DecisionRules.OUTLIER_SCORE) + "; runs of "
                         + DecisionRules.OUTLIER_SHIFT_RUN + " or more are shifts; " + DecisionRules.OUTLIER_STRETCH_FLAGS
                         + " or more within two seasonal cycles an unusual stretch"),
-                new Rule("The outlook uses one method, not the average of three / only the values since the latest"
-                        + " break, when", "its back-test error is at least " + Terms.number(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT)
+                new Rule("The outlook uses one method, not the average / only the values since the latest break, when", "its back-test error is at least " + Terms.number(DecisionRules.OUTLOOK_METHOD_ADVANTAGE_PCT)
                         + "\u00A0% lower over the whole test and lower in both its halves, in a test of at least "
                         + Terms.number(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS) + " forecasts / at least "
                         + Terms.number(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT)
@@ -66,10 +65,10 @@ final class RulesInForce {
                 new Rule("The first page leads with", "a break of " + Terms.number(DecisionRules.HEADLINE_STEP_PCT)
                         + "\u00A0% or more within " + DecisionRules.RECENT_BREAK_YEARS + " years; else a latest change of "
                         + Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + "\u00A0% or more; else the trend"),
-                new Rule("A trend is qualified / not stated on the first page when the year to date or the rolling year "
-                        + "went the other way by", Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + "\u00A0% / both by "
+                new Rule("A trend is qualified / not stated on page 1 when the year to date or rolling year went "
+                        + "the other way by", Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + "\u00A0% / both by "
                         + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT) + "\u00A0%"),
-                new Rule("A series named a rate, share or occupancy, without a unit, is a rate in points when its values stay within",
+                new Rule("A rate, share or occupancy without a unit is read in points when its values stay within",
                         "0 to " + Terms.number(DecisionRules.RATE_MAX_VALUE)));
     }
 }
