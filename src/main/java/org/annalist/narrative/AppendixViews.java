@@ -166,7 +166,7 @@ final class AppendixViews {
     }
 
     private static String leftOutSaid(Findings findings) {
-        String leftOut = SectionViews.leftOutNearBreaks(findings.irregular(),
+        String leftOut = SectionViews.leftOutNearBreaks(findings.irregular(), findings.breaks().size(),
                 Frequency.fromLabel(findings.series().frequency()));
         return leftOut.isEmpty() ? "" : ", leaving out " + leftOut;
     }

@@ -141,22 +141,26 @@ final class SectionViews {
         IrregularFinding irregular = findings.irregular();
         return irregular.share() == null ? new BriefView.IrregularView(null, "", false, "")
                 : new BriefView.IrregularView(irregular.size().code(), roughShare(irregular.share()),
-                irregular.size() == IrregularFinding.Size.LARGE, leftOutNearBreaks(irregular, series.frequency()));
+                irregular.size() == IrregularFinding.Size.LARGE, leftOutNearBreaks(irregular, findings.breaks().size(), series.frequency()));
     }
 
     /**
      * The periods the irregular share leaves out around structural changes, said after "leaving
      * out": {@code the 41 months around its structural changes (10 on each side), where the trend
-     * is still following the new level}; empty when none.
+     * is still following the new level}; {@code up to 10 on each side, each month counted once} where
+     * windows overlap or the series' ends cut them, so that the count is not read as a slip; empty
+     * when none.
      */
-    static String leftOutNearBreaks(IrregularFinding irregular, Frequency frequency) {
+    static String leftOutNearBreaks(IrregularFinding irregular, int breaks, Frequency frequency) {
         int n = irregular.leftOutNearBreaks();
         if (n == 0) {
             return "";
         }
-        String around = irregular.reach() + " on each side";
+        String around = n == breaks * 2 * irregular.reach() ? irregular.reach() + " on each side"
+                : "up to " + irregular.reach() + " on each side, each " + Terms.periodName(frequency, false)
+                + " counted once";
         return (n == 1 ? "the one " : "the " + n + " ") + Terms.periodName(frequency, n != 1) + " around its structural "
-                + "change" + (n > 2 * irregular.reach() ? "s" : "") + " (" + around + "), where the trend is still"
+                + "change" + (breaks > 1 ? "s" : "") + " (" + around + "), where the trend is still"
                 + " following the new level";
     }
 

@@ -220,9 +220,9 @@ final class Terms {
         }
         if (caveat instanceof OutlookCaveat.HistoryKept b) {
             return "The outlook is fitted on all values, the years before the structural change in "
-                    + f.period(b.start()) + " included: fitted on the values since then alone, its forecasts of the"
-                    + " last periods did not miss by at least " + DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT
-                    + "\u00A0% less, the margin it would have needed.";
+                    + f.period(b.start()) + " included: fitting on the values since then alone did not cut the errors"
+                    + " of its forecasts of the last periods by the " + DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT
+                    + "\u00A0% needed to prefer it.";
         }
         if (caveat instanceof OutlookCaveat.ShockBridged b) {
             // what was bridged, not a verdict on recovery: a step may have followed the climb back

@@ -32,6 +32,20 @@ record PdfFacts(int pages, String text, List<String> fonts, List<String> unembed
         }
     }
 
+    /** The text of each page in turn, as {@code pdftotext -f K -l K} would show it. */
+    static List<String> pageTexts(Path pdf) throws IOException {
+        try (PDDocument document = Loader.loadPDF(pdf.toFile())) {
+            List<String> pages = new ArrayList<>();
+            PDFTextStripper stripper = new PDFTextStripper();
+            for (int k = 1; k <= document.getNumberOfPages(); k++) {
+                stripper.setStartPage(k);
+                stripper.setEndPage(k);
+                pages.add(stripper.getText(document));
+            }
+            return pages;
+        }
+    }
+
     private static void walk(PDResources resources, List<String> fonts, List<String> unembedded, int[] images, int depth)
             throws IOException {
         if (resources == null || depth > 8) {

@@ -67,8 +67,12 @@ class AppendixViewsTest {
         // the demo's series has structural changes (demo-data/README.md), so the share leaves periods out
         assertThat(findings.breaks()).isNotEmpty();
         assertThat(findings.irregular().leftOutNearBreaks()).isPositive();
-        assertThat(row("Irregular fluctuation").settings()).contains("leaving out the "
-                + findings.irregular().leftOutNearBreaks() + " months around its structural changes ("
-                + findings.irregular().reach() + " on each side)");
+        int leftOut = findings.irregular().leftOutNearBreaks();
+        int reach = findings.irregular().reach();
+        // every window whole and apart: 2 · reach months a break; else some month was near two breaks or an end
+        String around = leftOut == findings.breaks().size() * 2 * reach ? reach + " on each side"
+                : "up to " + reach + " on each side, each month counted once";
+        assertThat(row("Irregular fluctuation").settings()).contains("leaving out the " + leftOut
+                + " months around its structural change" + (findings.breaks().size() > 1 ? "s" : "") + " (" + around + ")");
     }
 }

@@ -61,7 +61,7 @@ class TermsTest {
                         + " all values.");
         // the margin named is the rule's (DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT), also when it was not reached
         assertThat(Terms.outlookCaveat(new OutlookCaveat.HistoryKept(Period.month(2022, 8), 10, 8), f))
-                .endsWith("did not miss by at least 25\u00A0% less, the margin it would have needed.");
+                .endsWith("did not cut the errors of its forecasts of the last periods by the 25\u00A0% needed to prefer it.");
         assertThat(Terms.outlookCaveat(new OutlookCaveat.GapsFilled(1), f))
                 .isEqualTo("1 missing value was filled with what trend and season predict before forecasting.");
     }
