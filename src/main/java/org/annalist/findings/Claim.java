@@ -1,6 +1,7 @@
 package org.annalist.findings;
 
 import com.fasterxml.jackson.annotation.JsonIgnore;
+import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import com.fasterxml.jackson.annotation.JsonPropertyOrder;
 import com.fasterxml.jackson.annotation.JsonValue;
@@ -116,7 +117,14 @@ public record Claim(Quantity quantity, Period from, Period to, Direction directi
         /** The trend runs across structural breaks and the latest regime is too short for its own. */
         SPANS_BREAKS,
         /** A calendar effect moved the raw change; the calendar-adjusted change is the one to quote. */
-        CALENDAR_EFFECT;
+        CALENDAR_EFFECT,
+        /** The latest period's change on a year earlier went the other way by a material amount. */
+        LATEST_PERIOD_OPPOSES,
+        /**
+         * The break that opens the trend's span is dated no closer than
+         * {@link DecisionRules#VAGUE_START_YEARS}: the span's start is said as "about", with the interval.
+         */
+        START_UNCERTAIN;
 
         @JsonValue
         public String code() {
@@ -137,8 +145,22 @@ public record Claim(Quantity quantity, Period from, Period to, Direction directi
         }
     }
 
-    /** @param by the quantity of the claim that qualifies this one */
-    public record Qualification(QualifyReason reason, Quantity by) {
+    /**
+     * @param by     the quantity of the claim that qualifies this one (for
+     *               {@link QualifyReason#START_UNCERTAIN}, the claim itself, whose start is uncertain)
+     * @param within for {@link QualifyReason#START_UNCERTAIN}: the earliest and the latest period the
+     *               span may start at (the break's 95 % interval); empty for the other reasons
+     */
+    public record Qualification(QualifyReason reason, Quantity by,
+                                @JsonInclude(JsonInclude.Include.NON_EMPTY) List<Period> within) {
+
+        public Qualification {
+            within = List.copyOf(within);
+        }
+
+        public Qualification(QualifyReason reason, Quantity by) {
+            this(reason, by, List.of());
+        }
     }
 
     /** @param by the quantity of the claim that outweighs this one */

@@ -20,7 +20,9 @@ import org.annalist.series.Period;
  * the whole period's when there are breaks (the whole period's is qualified when it runs across
  * breaks without a regime of its own); a trend is qualified when the year to date or the rolling
  * year, over spans it covers, moved the other way by at least {@link DecisionRules#MATERIAL_CHANGE_PCT},
- * and withheld when both did by at least {@link DecisionRules#CONTRADICTING_CHANGE_PCT}; a raw
+ * and withheld when both did by at least {@link DecisionRules#CONTRADICTING_CHANGE_PCT}, and
+ * qualified too when the latest period's change did by the first; the trend since a break dated no
+ * closer than {@link DecisionRules#VAGUE_START_YEARS} is qualified by that uncertainty; a raw
  * change is qualified by its calendar-adjusted one. The headline is the first of: a recent large
  * step, the latest change when material, the page's trend when it has a direction, the latest change.
  *
@@ -91,7 +93,7 @@ public record Claims(List<Claim> statements, @JsonIgnore Optional<Claim> headlin
                 tested(r.direction()), Status.STATED, List.of(), Optional.empty()));
         ConsistencyPass.Trends trends = ConsistencyPass.trends(whole, since, !findings.breaks().isEmpty(), claims);
         trends.whole().ifPresent(claims::add);
-        trends.since().ifPresent(claims::add);
+        trends.since().map(s -> s.said() ? withUncertainStart(s, findings.breaks()) : s).ifPresent(claims::add);
         // a step of a rate or a temperature is a difference, as every other change of theirs
         boolean relative = findings.series().measure() == null || findings.series().measure().relativeChanges();
         for (BreakFinding b : findings.breaks()) {
@@ -106,6 +108,20 @@ public record Claims(List<Claim> statements, @JsonIgnore Optional<Claim> headlin
                     List.of(), Optional.empty()));
         }
         return new Claims(claims, headline(claims, end));
+    }
+
+    /**
+     * The trend since a break, qualified when that break's date is uncertain by
+     * {@link DecisionRules#VAGUE_START_YEARS} or more (its 95 % interval's ends that far apart): the
+     * page then says "since about" the date, with the interval, not a month it cannot vouch for.
+     */
+    private static Claim withUncertainStart(Claim since, List<BreakFinding> breaks) {
+        return breaks.stream().filter(b -> b.period().equals(since.from())).findFirst()
+                .filter(b -> b.ci95().get(0).until(b.ci95().get(1))
+                        >= DecisionRules.VAGUE_START_YEARS * since.from().frequency().periodsPerYear())
+                .map(b -> since.qualified(new Claim.Qualification(Claim.QualifyReason.START_UNCERTAIN,
+                        Quantity.TREND_SINCE_BREAK, b.ci95())))
+                .orElse(since);
     }
 
     /** The first claim about a quantity (for {@link Quantity#BREAK_STEP}, the oldest break). */

@@ -48,7 +48,9 @@ final class ConsistencyPass {
     /**
      * A trend with a direction against the year to date and the rolling year over spans it covers:
      * qualified when one went the other way by a material amount, withheld when both did by a
-     * contradicting amount. The rolling year is named first: it holds a whole seasonal cycle.
+     * contradicting amount. The rolling year is named first: it holds a whole seasonal cycle. The
+     * latest period's change on a year earlier (calendar-adjusted when the calendar moved it) going
+     * the other way by a material amount qualifies it too: the page opens with that change.
      */
     static Claim againstRecent(Claim trend, List<Claim> changes) {
         if (!trend.directional()) {
@@ -60,8 +62,14 @@ final class ConsistencyPass {
             return trend.withheld(new Claim.Withholding(WithholdReason.RECENT_CHANGES_CONTRADICT, Quantity.ROLLING_YEAR));
         }
         Optional<Claim> by = rolling.isPresent() ? rolling : ytd;
-        return by.map(c -> trend.qualified(new Claim.Qualification(QualifyReason.RECENT_CHANGE_OPPOSES, c.quantity())))
-                .orElse(trend);
+        Claim checked = by.map(c -> trend.qualified(new Claim.Qualification(QualifyReason.RECENT_CHANGE_OPPOSES,
+                c.quantity()))).orElse(trend);
+        // the month the page opens with, quoted as counted unless the calendar moved it
+        Optional<Claim> latest = opposing(trend, changes, Quantity.LATEST_CALENDAR_ADJUSTED)
+                .or(() -> changes.stream().anyMatch(c -> c.quantity() == Quantity.LATEST_CALENDAR_ADJUSTED)
+                        ? Optional.empty() : opposing(trend, changes, Quantity.LATEST_VS_YEAR_EARLIER));
+        return latest.map(c -> checked.qualified(new Claim.Qualification(QualifyReason.LATEST_PERIOD_OPPOSES,
+                c.quantity()))).orElse(checked);
     }
 
     /** The change of this quantity when the trend's span covers it and it went the other way materially. */

@@ -241,7 +241,8 @@ public final class DecisionRules {
     public static final double FLAT_CHANGE_PCT = 0.05;
     /**
      * An observed change of at least this, in %, is material: it leads the first page when nothing
-     * larger happened, and a trend going the other way over the same span is qualified by it (our rule).
+     * larger happened, and a trend going the other way over the same span is qualified by it, be it
+     * the latest period's change on a year earlier, the year to date's or the rolling year's (our rule).
      */
     public static final double MATERIAL_CHANGE_PCT = 1.0;
     /**
@@ -250,6 +251,12 @@ public final class DecisionRules {
      * larger than the yearly rise of most tourism series' trends).
      */
     public static final double CONTRADICTING_CHANGE_PCT = 5.0;
+    /**
+     * When the 95 % interval of the date of the break that opens the latest regime spans at least
+     * this many years, the first page gives that regime's start as "about" its date, with the
+     * interval (our rule: a start uncertain by a year or more is no month to lead with).
+     */
+    public static final double VAGUE_START_YEARS = 1.0;
     /** A break that began within this many years of the latest period is recent news (our rule). */
     public static final int RECENT_BREAK_YEARS = 3;
     /**

@@ -15,7 +15,8 @@ import org.annalist.series.Period;
  * @param returnStart   first period of the regime that moved back, when a later break did; empty
  *                      when the stepped regime's own line moved back
  * @param asOf          the period the return is measured at (end of the regime that moved back)
- * @param returnedLevel the fitted level there
+ * @param returnedLevel the fitted level there: where a later break ends that regime, its line at that
+ *                      break (the break's level before), else at {@code asOf}
  * @param returnedShare how much of the step had been undone by {@code asOf} (1 = all)
  */
 public record Episode(Period start, boolean rise, double before, Period extreme, double extremeLevel,

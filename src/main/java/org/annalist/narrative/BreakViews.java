@@ -78,9 +78,11 @@ final class BreakViews {
 
     /**
      * Whether a break described as a change of slope still shows a gap between its two fitted lines
-     * as large as a reported step ({@link DecisionRules#MIN_BREAK_CHANGE_PCT}): BIC found a bend alone
-     * about as good as a bend and a step, yet the levels printed beside the words jump, so the words
-     * must name the gap too.
+     * as large as a reported step ({@link DecisionRules#MIN_BREAK_CHANGE_PCT}). The gap is there because
+     * a bend without it fits worse ({@code analysis.breaks.StepOrBend}'s F-test; else the search joins
+     * the lines), yet the two separate lines did not lower BIC by {@link DecisionRules#BREAK_KIND_BIC_MARGIN}
+     * against the bend, so the break is called a change of slope; the levels printed beside the words
+     * jump, so the words name the gap and say both.
      */
     static boolean bendWithGap(BreakFinding b) {
         return b.kind() == BreakKind.SLOPE && Math.abs(b.changePct()) >= DecisionRules.MIN_BREAK_CHANGE_PCT;
@@ -98,10 +100,19 @@ final class BreakViews {
             views.add(new BriefView.EpisodeView(f.period(e.start()), !e.rise(), size(e.before(), e.extremeLevel()),
                     e.extreme().equals(e.start()), f.period(e.extreme()), f.value(e.before()),
                     f.value(e.extremeLevel()), f.value(e.returnedLevel()), f.period(e.asOf()), e.asOf().equals(last),
-                    Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%",
+                    closingBreak(e).map(b -> f.period(b.period())).orElse(""), Terms.shareOfTheWay(e.returnedShare()), f.fixed(100 * e.returnedShare(), 0) + "\u00A0%",
                     stepBack(e), oldPath(e)));
         }
         return views;
+    }
+
+    /**
+     * The break that ends the regime an episode's return is measured on: the episode's level there is
+     * that break's level just before it (the regime's line at the break), and is said so, as the
+     * break says it.
+     */
+    private Optional<BreakFinding> closingBreak(Episode e) {
+        return findings.breaks().stream().filter(b -> b.period().equals(e.asOf().plus(1))).findFirst();
     }
 
     /**
@@ -124,8 +135,10 @@ final class BreakViews {
             return "";
         }
         BreakFinding b = findings.breaks().get(at);
-        // from the break instant, half a period before the step's first period, to the period measured at
-        double years = (e.start().until(e.asOf()) + 0.5) / series.frequency().periodsPerYear();
+        // from the break instant, half a period before the step's first period, to where the return is
+        // measured: the middle of the latest period, or the instant of the break that closed the regime
+        Optional<BreakFinding> closing = closingBreak(e);
+        double years = (e.start().until(e.asOf()) + (closing.isPresent() ? 1 : 0.5)) / series.frequency().periodsPerYear();
         boolean log = findings.transform() == Transform.LOG;
         double rate = b.slopeBefore() / b.levelBefore();
         double carried = log ? b.levelBefore() * Math.exp(rate * years) : b.levelBefore() + b.slopeBefore() * years;
@@ -134,7 +147,8 @@ final class BreakViews {
         }
         String pace = regimes.printedRate(regimes.rate(regimes.before(at)).orElseThrow());
         return "Had the level gone on as before the " + (e.rise() ? "rise" : "fall") + " (" + pace
-                + "), it would have reached about " + f.significant(carried) + " by " + f.period(e.asOf()) + "; the fitted level"
+                + "), it would have reached about " + f.significant(carried)
+                + closing.map(c -> " just before " + f.period(c.period())).orElse(" by " + f.period(e.asOf())) + "; the fitted level"
                 + " there, " + f.value(e.returnedLevel()) + ", is " + size(carried, e.returnedLevel())
                 + (e.returnedLevel() < carried ? " below" : " above") + " that.";
     }

@@ -211,13 +211,15 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param share      how far back it moved, in words ({@code about a quarter of the way})
      * @param sharePct   the same as a percentage of the step
      * @param latest     the return is measured at the series' latest period
+     * @param closedBy   the break that ends the regime the return is measured on, whose level just
+     *                   before it {@code returned} is; empty when that regime runs to the latest period
      * @param stepBack   a step the other way soon after the return, in words ({@link BreakViews}); empty when none
      * @param oldPath    the level the old line would have reached by {@code asOf}, against the level
      *                   reached, in words ({@link BreakViews}); empty when the old line was about flat
      */
     public record EpisodeView(String start, boolean fell, String size, boolean atOnce, String extreme,
                               String before, String extremeLevel, String returned, String asOf, boolean latest,
-                              String share, String sharePct, String stepBack, String oldPath) {
+                              String closedBy, String share, String sharePct, String stepBack, String oldPath) {
     }
 
     /**

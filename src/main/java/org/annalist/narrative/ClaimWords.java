@@ -106,7 +106,7 @@ final class ClaimWords {
             return "No statement on the trend: " + Terms.trendNotAssessed() + ".";
         }
         boolean latest = trend.quantity() == Quantity.TREND_SINCE_BREAK;
-        String opening = latest ? "Since " + f.period(trend.from()) + " the level has "
+        String opening = latest ? "Since " + start(trend) + " the level has "
                 : trend.qualification(QualifyReason.SPANS_BREAKS).isPresent()
                 ? "Across the whole period, which has " + breaks() + ", the underlying trend has " : "The underlying trend has ";
         if (!trend.said()) {
@@ -124,9 +124,41 @@ final class ClaimWords {
         trend.qualification(QualifyReason.LONGER_RUN_DIFFERS).flatMap(q -> whole).ifPresent(w -> s.append(
                 w.direction() == Direction.INCREASING ? ", whereas over the whole period it rose"
                         : ", whereas over the whole period it fell"));
-        trend.qualification(QualifyReason.RECENT_CHANGE_OPPOSES).flatMap(q -> claims.find(q.by()))
-                .ifPresent(c -> s.append(", although ").append(recent(c.quantity())));
+        Optional<String> recent = trend.qualification(QualifyReason.RECENT_CHANGE_OPPOSES)
+                .flatMap(q -> claims.find(q.by())).map(c -> recent(c.quantity()));
+        Optional<String> latestPeriod = trend.qualification(QualifyReason.LATEST_PERIOD_OPPOSES)
+                .flatMap(q -> claims.find(q.by())).map(this::latestAgainst);
+        if (recent.isPresent() || latestPeriod.isPresent()) {
+            s.append(", although ").append(recent.orElse(""))
+                    .append(recent.isPresent() && latestPeriod.isPresent() ? " and " : "").append(latestPeriod.orElse(""));
+        }
         return s.append('.').toString();
+    }
+
+    /**
+     * The start of the trend's span: its month, or "about" it with the interval of the break's date
+     * when that is uncertain ({@link QualifyReason#START_UNCERTAIN}).
+     */
+    private String start(Claim trend) {
+        return trend.qualification(QualifyReason.START_UNCERTAIN).filter(q -> q.within().size() == 2)
+                .map(q -> "about " + f.period(trend.from()) + " (the change may have begun between "
+                        + f.period(q.within().get(0)) + " and " + f.period(q.within().get(1)) + ")")
+                .orElse(f.period(trend.from()));
+    }
+
+    /** The start of the trend's span, short, for a tile or a table cell: {@code about Mar 2023}. */
+    private String shortStart(Claim trend, String period) {
+        return (trend.qualification(QualifyReason.START_UNCERTAIN).isPresent() ? "about " : "") + period;
+    }
+
+    /**
+     * "October 2026 itself was below October 2025", from the claim of the latest period's change:
+     * without its size, which the sentence on the latest period beside it gives.
+     */
+    private String latestAgainst(Claim c) {
+        return f.period(c.to()) + " itself was" + (c.direction() == Direction.INCREASING ? " above " : " below ")
+                + f.period(c.from()) + (c.quantity() == Quantity.LATEST_CALENDAR_ADJUSTED
+                ? " with the calendar's effect taken out" : "");
     }
 
     private String breaks() {
@@ -170,7 +202,7 @@ final class ClaimWords {
         String total = t.unit() != Claim.SizeUnit.UNITS_PER_YEAR
                 || MeasureWords.periodTotal(measure, t.to().frequency()).isEmpty() ? ""
                 : "in " + MeasureWords.periodly(t.to().frequency()) + (unit.isEmpty() ? " values" : " " + unit);
-        String span = t.quantity() == Quantity.TREND_SINCE_BREAK ? "since " + f.period(t.from())
+        String span = t.quantity() == Quantity.TREND_SINCE_BREAK ? "since " + shortStart(t, f.period(t.from()))
                 : t.qualification(QualifyReason.SPANS_BREAKS).isPresent() ? "whole period, across " + breaks()
                 : "whole period";
         String evidence = (t.unit() == Claim.SizeUnit.PERCENT_PER_YEAR ? "of the average level; " : "") + "Sen slope, "
@@ -196,7 +228,7 @@ final class ClaimWords {
         }
         Claim t = trend.get();
         return (t.said() ? Terms.direction(t.direction()) : "not stated")
-                + (since.isPresent() ? " since " + f.shortPeriod(t.from()) : "");
+                + (since.isPresent() ? " since " + shortStart(t, f.shortPeriod(t.from())) : "");
     }
 
     /** The latest change as the first tile's note: {@code +1.0 % on a year earlier}, calendar-adjusted first when there is one. */

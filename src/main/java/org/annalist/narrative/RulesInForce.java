@@ -65,9 +65,11 @@ final class RulesInForce {
                 new Rule("The first page leads with", "a break of " + Terms.number(DecisionRules.HEADLINE_STEP_PCT)
                         + "\u00A0% or more within " + DecisionRules.RECENT_BREAK_YEARS + " years; else a latest change of "
                         + Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + "\u00A0% or more; else the trend"),
-                new Rule("A trend is qualified / not stated on page 1 when the year to date or rolling year went "
-                        + "the other way by", Terms.number(DecisionRules.MATERIAL_CHANGE_PCT) + "\u00A0% / both by "
-                        + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT) + "\u00A0%"),
+                new Rule("A trend is qualified / not stated on page 1 when", "the latest period, year to date or rolling"
+                        + " year went the other way by " + Terms.number(DecisionRules.MATERIAL_CHANGE_PCT)
+                        + "\u00A0% / the last two both by " + Terms.number(DecisionRules.CONTRADICTING_CHANGE_PCT)
+                        + "\u00A0%; its start said as \u201Cabout\u201D when its break's 95\u00A0% interval spans "
+                        + Terms.number(DecisionRules.VAGUE_START_YEARS) + " year or more"),
                 new Rule("A rate, share or occupancy without a unit is read in points when its values stay within",
                         "0 to " + Terms.number(DecisionRules.RATE_MAX_VALUE)));
     }

@@ -278,8 +278,9 @@ final class Terms {
             case BAI_PERRON -> "Bai-Perron, changes in " + (m.levelAndSlope() ? "level and slope" : "level")
                     + ", number of breaks by BIC, then reduced until every break passes " + checked
                     + ", minimum regime " + m.minimumRegime()
-                    // StepOrBend: an F-test at the brief's level, in the values and in their logs
-                    + (m.levelAndSlope() ? "; a step only if a bend fits worse" : "");
+                    // StepOrBend: an F-test at the brief's level, in the values and in their logs; what the
+                    // break is then called is BIC's choice (BreakAnalysis.kind), said in the decision rules
+                    + (m.levelAndSlope() ? "; a gap at a break only if a bend fits worse (F-test)" : "");
         };
     }
 

@@ -31,7 +31,7 @@ class EpisodeStepBackTest {
      * noise (seed 1); in January 2020 a collapse to 35 %, three months at the low, a straight climb
      * (in units) to 90 % over 18 months, then a genuine step down of 10 % from October 2021.
      */
-    private static Series climbThenStepDown() {
+    static Series climbThenStepDown() {
         Random random = new Random(1);
         double[] x = new double[192];
         for (int t = 0; t < x.length; t++) {

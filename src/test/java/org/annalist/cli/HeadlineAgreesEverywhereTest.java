@@ -82,8 +82,15 @@ class HeadlineAgreesEverywhereTest {
                 Period from = Period.month(Integer.parseInt(since.get("from").asText().substring(0, 4)),
                         Integer.parseInt(since.get("from").asText().substring(5, 7)));
                 assertThat(from.frequency()).isEqualTo(Frequency.MONTHLY);
-                assertThat(text).contains("Since " + F.period(from) + " the level has been " + verb);
-                assertThat(text).contains("since " + F.period(from) + ";");
+                // a start dated no closer than a year is "about" its month, with the interval, in the lead and the tile
+                boolean about = false;
+                for (JsonNode q : since.path("qualifications")) {
+                    about |= q.path("reason").asText().equals("start_uncertain");
+                }
+                assertThat(text).contains("Since " + (about ? "about " : "") + F.period(from)
+                        + (about ? " (the change may have begun between " : " the level has been " + verb));
+                assertThat(text).contains((about ? ") the level has been " : " the level has been ") + verb);
+                assertThat(text).contains("since " + (about ? "about " : "") + F.period(from) + ";");
                 // the whole period's trend is not the first page's
                 assertThat(text).doesNotContain("The underlying trend has been");
             } else {

@@ -75,6 +75,17 @@ public final class ClaimsFixture {
         return this;
     }
 
+    /**
+     * A change of slope at {@code at} whose date's 95 % interval runs from {@code earliest} to
+     * {@code latest}, the lines joined there (no step).
+     */
+    public ClaimsFixture bend(Period at, Period earliest, Period latest) {
+        int index = (int) (observations - 1 - at.until(end));
+        breaks.add(new BreakFinding(at, List.of(earliest, latest), 100_000, 100_000, 0, 30, 0.004, false, index,
+                BreakKind.SLOPE, 100, 700, end, 110_000));
+        return this;
+    }
+
     public Findings findings() {
         Period start = end.plus(1L - observations);
         SeriesFacts facts = new SeriesFacts("Total", "nights", Frequency.MONTHLY.label(), start.label(), end.label(),

@@ -109,6 +109,54 @@ class ClaimsTest {
     }
 
     @Test
+    void aTrendSinceABreakDatedNoCloserThanAYearStartsAboutItsDateWithTheInterval() {
+        Period at = Period.month(2023, 3);
+        // 19 months between the interval's ends: at least VAGUE_START_YEARS (1) of 12 months
+        Claim vague = ClaimsFixture.monthly(END, 190).latest(2).yearToDate(3).rollingYear(2.5)
+                .bend(at, Period.month(2022, 7), Period.month(2024, 2))
+                .sinceBreak(at, Direction.INCREASING, 750, 0.0001).findings().claims()
+                .find(Quantity.TREND_SINCE_BREAK).orElseThrow();
+        Claim.Qualification q = vague.qualification(QualifyReason.START_UNCERTAIN).orElseThrow();
+        assertThat(q.within()).containsExactly(Period.month(2022, 7), Period.month(2024, 2));
+        assertThat(vague.said()).isTrue();
+        // 11 months between the ends: below a year, the date stands as it is
+        Claim dated = ClaimsFixture.monthly(END, 190).latest(2).yearToDate(3).rollingYear(2.5)
+                .bend(at, Period.month(2022, 9), Period.month(2023, 8))
+                .sinceBreak(at, Direction.INCREASING, 750, 0.0001).findings().claims()
+                .find(Quantity.TREND_SINCE_BREAK).orElseThrow();
+        assertThat(dated.qualification(QualifyReason.START_UNCERTAIN)).isEmpty();
+        assertThat(dated.status()).isEqualTo(Status.STATED);
+    }
+
+    @Test
+    void aLatestPeriodThatFellOnAYearEarlierQualifiesARisingTrendThoughTheYearRose() {
+        Period at = Period.month(2023, 3);
+        Claim since = ClaimsFixture.monthly(END, 190).latest(-4.3).yearToDate(2.7).rollingYear(2.4)
+                .step(at, 4).sinceBreak(at, Direction.INCREASING, 750, 0.0001).findings().claims()
+                .find(Quantity.TREND_SINCE_BREAK).orElseThrow();
+        assertThat(since.status()).isEqualTo(Status.QUALIFIED);
+        assertThat(since.qualification(QualifyReason.LATEST_PERIOD_OPPOSES).orElseThrow().by())
+                .isEqualTo(Quantity.LATEST_VS_YEAR_EARLIER);
+        // the year to date and the rolling year rose with it: nothing else qualifies it
+        assertThat(since.qualification(QualifyReason.RECENT_CHANGE_OPPOSES)).isEmpty();
+        // −0.5 % is below the material 1 %: stated as it is
+        Claim small = ClaimsFixture.monthly(END, 190).latest(-0.5).yearToDate(2.7).rollingYear(2.4)
+                .step(at, 4).sinceBreak(at, Direction.INCREASING, 750, 0.0001).findings().claims()
+                .find(Quantity.TREND_SINCE_BREAK).orElseThrow();
+        assertThat(small.status()).isEqualTo(Status.STATED);
+    }
+
+    @Test
+    void aLatestFallMadeByTheCalendarDoesNotQualifyTheTrend() {
+        Findings findings = ClaimsFixture.monthly(END, 120).latest(-4.3).yearToDate(2).rollingYear(2)
+                .wholeTrend(Direction.INCREASING, 2.0, 0.001).findings();
+        // the calendar-adjusted change, +0.6 %, is the one the page quotes, and it did not fall
+        Claims claims = Claims.of(findings, Optional.of(new Claims.AdjustedChange(600, Optional.of(0.6))));
+        assertThat(claims.find(Quantity.TREND_WHOLE).orElseThrow().qualification(QualifyReason.LATEST_PERIOD_OPPOSES))
+                .isEmpty();
+    }
+
+    @Test
     void noTwoSaidClaimsAboutTheTrendOfTheFirstPageDisagreeInDirection() {
         Claims claims = ClaimsFixture.monthly(END, 190).latest(1).yearToDate(3).rollingYear(3)
                 .wholeTrend(Direction.DECREASING, -1.0, 0.01).step(Period.month(2022, 8), 12)

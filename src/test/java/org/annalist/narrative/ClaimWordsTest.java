@@ -57,6 +57,20 @@ class ClaimWordsTest {
     }
 
     @Test
+    void anUncertainStartIsSaidAsAboutWithItsIntervalAndALatestFallBesideARisingTrend() {
+        Period at = Period.month(2023, 3);
+        Claims claims = ClaimsFixture.monthly(END, 190).latest(-4.3).yearToDate(2.7).rollingYear(2.4)
+                .bend(at, Period.month(2022, 7), Period.month(2024, 2))
+                .sinceBreak(at, Direction.INCREASING, 753, 0.0001).findings().claims();
+        ClaimWords words = words(claims);
+        assertThat(words.trendSentence()).startsWith("Since about March 2023 (the change may have begun between July 2022"
+                + " and February 2024) the level has been rising, by about 753\u00a0nights")
+                .endsWith(", although October 2026 itself was below October 2025.");
+        assertThat(words.trendTile()[1]).startsWith("since about March 2023; ");
+        assertThat(words.trendCell()).isEqualTo("increasing since about Mar 2023");
+    }
+
+    @Test
     void aQualifiedRisingTrendIsWordedWithTheRollingYearThatFell() {
         Claims claims = ClaimsFixture.monthly(END, 190).latest(0.5).yearToDate(-4.0).rollingYear(-1.8)
                 .wholeTrend(Direction.INCREASING, 1.9, 0.0001).step(Period.month(2022, 8), 4)

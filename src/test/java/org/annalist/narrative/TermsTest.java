@@ -99,7 +99,8 @@ class TermsTest {
                 + " own sup-F test (AR(1) Monte Carlo null, 5 %)");
         assertThat(Terms.breakMethod(new BreakMethod(BreakMethod.Search.BAI_PERRON, true, 12))).isEqualTo("Bai-Perron,"
                 + " changes in level and slope, number of breaks by BIC, then reduced until every break passes its own"
-                + " sup-F test (AR(1) Monte Carlo null, 5 %), minimum regime 12; a step only if a bend fits worse");
+                + " sup-F test (AR(1) Monte Carlo null, 5 %), minimum regime 12; a gap at a break only if a bend fits"
+                + " worse (F-test)");
         assertThat(Terms.breakMethod(new BreakMethod(BreakMethod.Search.BAI_PERRON, false, 12))).isEqualTo("Bai-Perron,"
                 + " changes in level, number of breaks by BIC, then reduced until every break passes its own"
                 + " sup-F test (AR(1) Monte Carlo null, 5 %), minimum regime 12");

@@ -161,7 +161,8 @@ public final class BreakSearch {
      *                      stepped regime's own line moved back
      * @param asOf          index of the period at which the return is measured: the end of the
      *                      regime that moved back
-     * @param returnedLevel the fitted level at {@code asOf}
+     * @param returnedLevel the fitted level that regime closes at: at the break after {@code asOf}
+     *                      when one ends the regime (that break's level before), else at {@code asOf}
      * @param returnedShare how much of the step had been undone by {@code asOf} (1 = all, capped at
      *                      {@value BreakSearch#MAX_REGAINED_SHARE})
      */

@@ -209,7 +209,7 @@ final class Regimes {
      * the regime after the next break. The furthest point is the end of the
      * stepped regime's line that lies further from the level before the step; the return is
      * measured at the end of the regime that moved back (the next regime when it lies further back,
-     * else the stepped regime's end). A gradual decline followed by a step up has no large step to
+     * else the stepped regime's end): at the break that ends it, else at the latest period. A gradual decline followed by a step up has no large step to
      * start from and is no episode; a step that is not undone is described by the break alone.
      */
     List<BreakSearch.Episode> episodes(List<BreakSearch.Break> breaks, double stepPct, double minimumChangePct) {
@@ -222,17 +222,17 @@ final class Regimes {
             }
             boolean rise = step.changePct() > 0;
             double sign = rise ? 1 : -1;
-            boolean furtherAtEnd = sign * (step.endLevel() - step.levelAfter()) > 0;
+            boolean furtherAtEnd = sign * (closingLevel(breaks, j) - step.levelAfter()) > 0;
             int extreme = furtherAtEnd ? step.end() : step.start();
-            double extremeLevel = furtherAtEnd ? step.endLevel() : step.levelAfter();
+            double extremeLevel = furtherAtEnd ? closingLevel(breaks, j) : step.levelAfter();
             int asOf = step.end();
-            double returned = step.endLevel();
+            double returned = closingLevel(breaks, j);
             OptionalInt returnStart = OptionalInt.empty();
-            if (j + 1 < breaks.size() && sign * (breaks.get(j + 1).endLevel() - returned) < 0) {
+            if (j + 1 < breaks.size() && sign * (closingLevel(breaks, j + 1) - returned) < 0) {
                 BreakSearch.Break next = breaks.get(j + 1);
                 returnStart = OptionalInt.of(next.start());
                 asOf = next.end();
-                returned = next.endLevel();
+                returned = closingLevel(breaks, j + 1);
             }
             double moved = -sign * (returned - extremeLevel);
             if (returnStart.isEmpty()) {
@@ -261,5 +261,15 @@ final class Regimes {
         List<Integer> starts = episodes.stream().map(BreakSearch.Episode::start).toList();
         episodes.removeIf(e -> e.returnStart().isPresent() && starts.contains(e.returnStart().getAsInt()));
         return episodes;
+    }
+
+    /**
+     * The fitted level a regime closes at, the one the brief prints for its end: where a later break
+     * ends it, its line at that break instant (the later break's level before, so that an episode and
+     * the break report one figure for one moment, not the line half a period apart); where it runs to
+     * the latest period, its line there ({@link BreakSearch.Break#endLevel}).
+     */
+    private static double closingLevel(List<BreakSearch.Break> breaks, int j) {
+        return j + 1 < breaks.size() ? breaks.get(j + 1).levelBefore() : breaks.get(j).endLevel();
     }
 }

@@ -26,9 +26,10 @@ class RegimesEpisodesTest {
     @Test
     void aFallThatClimbsBackFarFasterThanTheOldLineRoseIsAnEpisodeThoughALaterStepTakesSomeBack() {
         // rising 1.3 % a year to 67,000; at 120 a fall to 22,500, climbing back along its own line to
-        // 67,000 by 140; then a step down of 10 % whose regime ends at 66,700, below the climb's end
-        BreakSearch.Break fall = fitted(120, 67_000, 22_500, 73, 2_120, 140, 67_000);
-        BreakSearch.Break stepDown = fitted(141, 68_700, 62_100, 2_120, 90, 189, 66_700);
+        // 67,000 at the instant of the next break (its level before); then a step down of 9.6 % whose
+        // regime ends at 66,700, below the climb's end
+        BreakSearch.Break fall = fitted(120, 67_000, 22_500, 73, 2_120, 140, 67_000 - 2_120 / 2.0);
+        BreakSearch.Break stepDown = fitted(141, 67_000, 60_600, 2_120, 90, 189, 66_700);
         List<BreakSearch.Episode> episodes = REGIMES.episodes(List.of(fall, stepDown), -10, 3);
         assertThat(episodes).hasSize(1);
         BreakSearch.Episode e = episodes.get(0);
@@ -37,6 +38,19 @@ class RegimesEpisodesTest {
         assertThat(e.returnStart()).isEmpty();   // the stepped line moved back by itself
         assertThat(e.asOf()).isEqualTo(140);
         assertThat(e.returnedShare()).isEqualTo(1.0);   // (67,000 − 22,500) / (67,000 − 22,500)
+    }
+
+    @Test
+    void aReturnOnARegimeALaterBreakEndsIsReadAtThatBreakNotHalfAPeriodBefore() {
+        // a fall at 120 from 10,000 to 4,000 whose line climbs 300 a period: at the middle of its last
+        // period, 139, it stands at 4,000 + 300 × 19.5 = 9,850; at the next break's instant, 10,000
+        // (derived in the test), the level the next break prints just before it
+        BreakSearch.Break fall = fitted(120, 10_000, 4_000, 0, 300, 139, 4_000 + 300 * 19.5);
+        BreakSearch.Break bend = fitted(140, 4_000 + 300 * 20, 4_000 + 300 * 20, 300, 0, 179, 10_000);
+        BreakSearch.Episode e = REGIMES.episodes(List.of(fall, bend), -10, 3).get(0);
+        assertThat(e.asOf()).isEqualTo(139);
+        assertThat(e.returnedLevel()).isEqualTo(bend.levelBefore());
+        assertThat(e.returnedShare()).isEqualTo(1.0);   // (10,000 − 4,000) / (10,000 − 4,000)
     }
 
     @Test
