@@ -47,10 +47,21 @@ public final class ChartStyle {
     private ChartStyle() {
     }
 
-    /** The 8 pt font of chart labels and annotations (the minimum the brief prints). */
+    /**
+     * The font of chart labels and annotations, the smallest a chart prints. A chart is drawn in CSS
+     * pixels of 0.75 pt ({@code render.PdfRenderer} draws it at its box's size in px), so its 9 units
+     * print at 6.75 pt, as the axes' tick labels do; 8 printed at 6 pt, too small to read on paper (our
+     * floor, 6.5 pt, is {@link #MIN_PRINTED_LABEL_PT}).
+     */
     public static Font smallFont() {
-        return new Font(FONT_FAMILY, Font.PLAIN, 8);
+        return new Font(FONT_FAMILY, Font.PLAIN, SMALL_FONT_UNITS);
     }
+
+    /** The size of {@link #smallFont()} in the chart's own units (CSS pixels). */
+    static final int SMALL_FONT_UNITS = 9;
+
+    /** The smallest size a chart's words may print at, in points: our rule for text read on paper at arm's length. */
+    public static final double MIN_PRINTED_LABEL_PT = 6.5;
 
     /** A period as a chart label: {@code Jul 2019}, {@code Q3 2019}, {@code 2019}, {@code 3 Mar 2024}. */
     public static String shortLabel(org.annalist.series.Period p) {
@@ -92,8 +103,8 @@ public final class ChartStyle {
     }
 
     /**
-     * An arrow to (x, y) from above (for a high value) or below, carrying {@code label} in the 8 pt
-     * font. The label is centred on the arrow, except near either end of the time axis, where it
+     * An arrow to (x, y) from above (for a high value) or below, carrying {@code label} in the
+     * {@link #smallFont()}. The label is centred on the arrow, except near either end of the time axis, where it
      * would be cut by the plot's edge: there it extends inwards from the arrow.
      *
      * @param across where x lies along the axis, 0 at the first period and 1 at the last
@@ -122,8 +133,9 @@ public final class ChartStyle {
     }
 
     /**
-     * Half a period label ("Sep 2026", about 36 pt at 8 pt) as a share of the narrowest plot a
-     * pointer is drawn in (about 300 pt), rounded up: closer to an end, a centred label is cut.
+     * Half a period label ("Sep 2026", about 43 units wide in the {@link #smallFont()}) as a share of
+     * the narrowest plot a pointer is drawn in (about 400 units, 300 pt), with room to spare: closer
+     * to an end, a centred label is cut.
      */
     static final double LABEL_EDGE_SHARE = 0.07;
 

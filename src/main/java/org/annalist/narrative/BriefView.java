@@ -106,11 +106,13 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      *                   holds, a sentence; empty without one ({@link ChartWords#leadBeforeSuddenChange})
      * @param gapsInLines why the lines break at missing values, a sentence; empty without any
      *                   ({@link ChartWords#gapsInLines})
+     * @param overviewMarks what each mark of the overview chart means, its caption after the series'
+     *                   name and span ({@link ChartWords#overviewMarks})
      */
     public record Charts(ChartView overview, ChartView profile, ChartView years, ChartView irregular, String firstYear,
                          String lastYear, String firstLevel, String lastLevel, boolean rose, List<String> drops,
                          String smoothingMethod, int smoothingWindow, String leadBeforeChange,
-                         String gapsInLines) {
+                         String gapsInLines, String overviewMarks) {
 
         public Charts {
             drops = List.copyOf(drops);

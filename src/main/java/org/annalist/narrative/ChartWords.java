@@ -51,6 +51,39 @@ public final class ChartWords {
     }
 
     /**
+     * What each mark of the overview chart ({@code chart.OverviewChart}) means, the caption's words
+     * after the series' name and span, shared by the one-series and the multi-series brief so that a
+     * chart reads alone wherever it is printed: the thick dashed trend-cycle line and its moving
+     * average, the thin dashed upright line at each structural change's first period over the grey
+     * band of its 95 % interval, the arrows to one-offs; with the trend-cycle's lead before a sudden
+     * change and the gaps at missing values. Only the marks the chart draws are named.
+     */
+    public static String overviewMarks(Series series, Findings findings, Formats f) {
+        List<String> marks = new java.util.ArrayList<>();
+        if (findings.smoothing() != null) {
+            marks.add("The thick dashed line is the trend-cycle, a " + Terms.movingAverage(findings.smoothing().method())
+                    + ": each point averages the " + findings.smoothing().window() + " periods around it, evening out "
+                    + (series.frequency() == Frequency.ANNUAL ? "year-to-year fluctuation." : "the seasonal pattern."));
+            String lead = leadBeforeSuddenChange(series, findings);
+            if (!lead.isEmpty()) {
+                marks.add(lead);
+            }
+        }
+        String gaps = gapsInLines(series, findings, f);
+        if (!gaps.isEmpty()) {
+            marks.add(gaps);
+        }
+        if (!findings.breaks().isEmpty()) {
+            marks.add("Thin dashed upright lines, labelled with their date: the first period of each structural change;"
+                    + " the grey band around each: the 95\u00A0% interval of that date.");
+        }
+        if (!findings.outliers().isEmpty()) {
+            marks.add("Arrows, labelled with their date: single periods far from what trend and season predict.");
+        }
+        return String.join(" ", marks);
+    }
+
+    /**
      * That the trend-cycle starts to move before a sudden change, when the chart holds one (a break
      * that steps the level, or a fall or rise that moved back); empty otherwise. A centred average of
      * w periods puts the values of up to ⌊w/2⌋ periods ahead into each point (a 2×12 average: six

@@ -106,9 +106,9 @@ public final class MultiBriefViews {
         }
         String mark = MultiBriefView.UNCLEAR_MARK;
         return marked.size() == 1
-                ? "The change marked " + mark + " has an 80\u00A0% interval that includes no change (" + marked.get(0)
+                ? "The change on the current year marked " + mark + " has an 80\u00A0% interval that includes no change (" + marked.get(0)
                         + "), so it is neither a clear rise nor a clear fall."
-                : "The changes marked " + mark + " have 80\u00A0% intervals that include no change (" + Terms.listed(marked)
+                : "The changes on the current year marked " + mark + " have 80\u00A0% intervals that include no change (" + Terms.listed(marked)
                         + "), so none of them is a clear rise or a clear fall.";
     }
 

@@ -83,7 +83,8 @@ final class MultiOutlookWords {
         }
         // the total's figure as its own section prints it; the parts' sum is the one to leave unquoted
         String own = OutlookViews.nextYearPrinted(total.get(), f);
-        return estimates + " do not add up within " + f.percent(PartsCheck.TOLERANCE_PCT) + ": together about "
+        return estimates + " do not add up to " + check.total() + "'s within " + f.percent(PartsCheck.TOLERANCE_PCT)
+                + ": together about "
                 + f.significant(sum) + ", which is " + f.percent(Math.abs(gapPct)) + (gapPct < 0 ? " below " : " above ")
                 + check.total() + "'s " + own + "." + growth + " For the total, quote " + check.total() + "'s own estimate ("
                 + own + "): it is forecast from " + check.total() + "'s own history, whereas each part is forecast apart and"
@@ -129,7 +130,8 @@ final class MultiOutlookWords {
         }
         String against = total.get().currentYear().forecastPeriods() > 0 ? "their estimates for " : "";
         return " Taken together they change by " + partsChange + " on " + against + total.get().currentYear().year()
-                + ", whereas " + check.total() + "'s own outlook gives " + totalChange + ": the total and each part are"
+                + ", whereas " + check.total() + "'s own outlook gives " + totalChange + " on "
+                + (against.isEmpty() ? "" : "its estimate for ") + total.get().currentYear().year() + ": the total and each part are"
                 + " forecast by separate models, each fitted to its own history, so the growth of the parts need not"
                 + " match the total's" + monthlyGaps(total.get(), parts, year, f) + ".";
     }

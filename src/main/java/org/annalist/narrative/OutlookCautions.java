@@ -39,7 +39,8 @@ final class OutlookCautions {
      * trend's pace (a base effect: its year to date); the outlook fitted on all values, the years
      * before the latest break included; a bridged fall or rise whose movement back lifts (or lowers)
      * the trend; and the change's own 80 % interval holding the trend's pace. A change whose own
-     * 80 % interval holds zero "points" down or up; it is not called a fall or a rise.
+     * 80 % interval holds zero is "no clear fall" (or rise), by {@link OutlookViews#clearness}, the rule
+     * the multi-series brief's table marks such changes by.
      */
     static String againstTrend(Series series, Findings findings, Formats f) {
         return againstTrend(series, findings, f, true);
@@ -80,10 +81,8 @@ final class OutlookCautions {
         }
         String span = sinceBreak ? "the trend since " + f.period(trend.from()) : "the trend over the whole period";
         String pacePct = "about " + f.signedPercent(pace) + basis;
-        // a change whose own 80 % interval holds zero is not called a fall or a rise outright
-        boolean unsure = change.holdsNoChange();
-        String verb = unsure ? " points " + (next < 0 ? "down" : "up") : " is a " + (next < 0 ? "fall" : "rise");
-        String direction = verb + (unsure ? " (its 80\u00A0% interval also holds no change)" : "");
+        // whether it is a clear fall or rise, by the rule the board's table marks its changes with too
+        String direction = " " + OutlookViews.clearness(change, f, true);
         String gap = opposite ? direction + ", while " + span + " "
                 + (pace > 0 ? "rises" : "falls") + " by " + pacePct
                 : (Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ") + span + ", " + pacePct;
@@ -137,7 +136,7 @@ final class OutlookCautions {
         if (!allReasons) {
             // the short sections give one reason: the uncertainty when it holds the trend's pace, else the
             // first the evidence shows; how the method works only when the evidence shows none
-            String against = opposite ? verb + " against "
+            String against = opposite ? " " + OutlookViews.clearness(change, f, false) + " and runs against "
                     : Math.abs(next) < Math.abs(pace) ? " is slower than " : " is faster than ";
             String why = withinUncertainty != null ? withinUncertainty : flat.isPresent() ? flat.get()
                     : reasons.isEmpty() ? "the outlook does not extend the trend line but starts from the latest level"

@@ -126,6 +126,28 @@ final class OutlookViews {
     }
 
     /**
+     * Whether next year's change (in %) is a clear fall or rise, said after "Next year's −1.0 %": the
+     * one rule both briefs follow, so that a change the multi-series brief's table marks as neither
+     * ({@link MultiBriefViews#unclearNote}) is never called a fall in a series' own brief. Clear only
+     * when the change's 80 % interval excludes no change ({@link OutlookFinding.YearChange#holdsNoChange()}):
+     * {@code is no clear fall (its 80 % interval, −4.2 % to +2.2 %, includes no change)}.
+     *
+     * @param withInterval give the interval's ends (else the interval is named only, where the
+     *                     sentence before has just given them)
+     */
+    static String clearness(OutlookFinding.YearChange c, Formats f, boolean withInterval) {
+        String way = c.pct() < 0 ? "fall" : "rise";
+        if (c.pctLo80() == null || c.pctHi80() == null) {
+            return "is a " + way + " by its central estimate";   // no interval to tell how clear
+        }
+        String interval = withInterval ? "its 80\u00A0% interval, " + f.signedPercent(c.pctLo80()) + " to "
+                + f.signedPercent(c.pctHi80()) + "," : "its 80\u00A0% interval";
+        return c.holdsNoChange() ? "is no clear " + way + " (" + interval + " includes no change)"
+                : "is a clear " + way + " (" + interval + " lies wholly " + (c.pct() < 0 ? "below" : "above")
+                + " no change)";
+    }
+
+    /**
      * The clause after next year's value: its change on the current year's estimate with the
      * change's own 80 % interval — "about the same" only under {@link
      * org.annalist.findings.DecisionRules#OUTLOOK_SAME_PCT}, never a bare verb that could contradict

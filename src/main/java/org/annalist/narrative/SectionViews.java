@@ -176,7 +176,8 @@ final class SectionViews {
                 BriefViews.dropYears(series, findings.breaks()),
                 findings.smoothing() == null ? "" : Terms.movingAverage(findings.smoothing().method()),
                 findings.smoothing() == null ? 0 : findings.smoothing().window(),
-                ChartWords.leadBeforeSuddenChange(series, findings), ChartWords.gapsInLines(series, findings, f));
+                ChartWords.leadBeforeSuddenChange(series, findings), ChartWords.gapsInLines(series, findings, f),
+                ChartWords.overviewMarks(series, findings, f));
     }
 
     private BriefView.ChartView chart(FigurePlan.Chart chart) {

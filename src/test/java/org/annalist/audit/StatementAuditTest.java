@@ -420,6 +420,32 @@ class StatementAuditTest {
     }
 
     /**
+     * Next year's change is called a clear fall or rise only where its 80 % interval (from the JSON)
+     * leaves out no change, and "no clear" fall or rise exactly where it holds no change: the rule
+     * the multi-series brief's table marks changes by, so that a series' brief and the board never
+     * disagree on whether a market fell. Nor does any brief say a change "points" down or up.
+     */
+    @Test
+    void aNextYearChangeIsCalledAClearFallOrRiseOnlyWhenItsIntervalLeavesOutNoChange() {
+        Pattern called = Pattern.compile("Next year's \\S+ is (a|no) clear (fall|rise)");
+        assertNone(b -> {
+            List<String> found = new ArrayList<>(matches(Pattern.compile("Next year's \\S+ points (?:down|up)"), b.body()));
+            JsonNode change = b.json().path("outlook").path("next_year_change");
+            Matcher m = called.matcher(b.body());
+            while (m.find()) {
+                double lo = change.path("pct_lo80").asDouble(Double.NaN);
+                double hi = change.path("pct_hi80").asDouble(Double.NaN);
+                boolean holdsNoChange = lo <= 0 && 0 <= hi;
+                boolean fall = change.path("pct").asDouble() < 0;
+                if (holdsNoChange != m.group(1).equals("no") || fall != m.group(2).equals("fall")) {
+                    found.add(m.group() + " with an 80 % interval of " + lo + " to " + hi);
+                }
+            }
+            return found;
+        }, "a next-year change called clear (or not) against its interval");
+    }
+
+    /**
      * Where the calendar analysis kept an Easter effect and the outlook forecasts a March or April,
      * the outlook page says the forecasts move that effect with Easter's date (and only there).
      */

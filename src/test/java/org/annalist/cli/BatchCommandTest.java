@@ -119,7 +119,7 @@ class BatchCommandTest {
         // June 2020: the parts are 1/1.05 of the total, 4.8 % short of it (hand arithmetic); of the 60
         // months, 59 have all three values and were checked
         assertThat(text).contains("The series side by side", "The parts do not add up.",
-                "North, South miss Total by more than 0.5 % in 1 of the 59 periods where all three have a value: June 2020 (parts ",
+                "North, South miss Total by more than 0.5 % of it in 1 of the 59 periods where all three have a value: June 2020 (parts ",
                 ", \u22124.8 %). Not checked: March 2021 (South missing).");
         Path pdf = folder.resolve("regions-2022-12.pdf");
         assertThat(folder.resolve("regions-2022-12-north.findings.json")).exists();

@@ -47,10 +47,10 @@ class BoardBriefTest {
         }
         double gapPct = 100 * (parts / total - 1);
         Formats f = Formats.forValues(new double[] {total}, Locale.ENGLISH);
-        assertThat(text).contains("In the recorded values, Domestic, Brevania, Long-haul add up to Total, within 0.5 %");
+        assertThat(text).contains("In the recorded values, Domestic, Brevania, Long-haul add up to Total within 0.5 % of it");
         // each market's outlook is made apart from the total's: their sum is its own figure, not the total's
         assertThat(Math.abs(gapPct)).as("the demo's forecasts of the parts miss the total's").isGreaterThan(0.5);
-        assertThat(text).contains("Their next-year estimates for 2027 do not add up within 0.5 %: together about "
+        assertThat(text).contains("Their next-year estimates for 2027 do not add up to Total's within 0.5 %: together about "
                 + f.significant(parts).replace('\u00A0', ' ') + ", which is "
                 + f.percent(Math.abs(gapPct)).replace('\u00A0', ' ') + (gapPct < 0 ? " below" : " above")
                 + " Total's " + totalAsInItsSection(text) + ". Taken together they change by")
@@ -76,7 +76,8 @@ class BoardBriefTest {
         assertThat(f.signedPercent(partsPct)).as("the demo's markets grow less together than the total")
                 .isNotEqualTo(f.signedPercent(totalPct));
         assertThat(text).contains(("Taken together they change by " + f.signedPercent(partsPct) + " on their estimates for"
-                + " 2026, whereas Total's own outlook gives " + f.signedPercent(totalPct) + ": the total and each part are"
+                + " 2026, whereas Total's own outlook gives " + f.signedPercent(totalPct) + " on its estimate for 2026: the total"
+                + " and each part are"
                 + " forecast by separate models").replace('\u00A0', ' '));
         // month by month, from the findings' forecasts of 2027: the parts' sum against the total's
         double low = Double.POSITIVE_INFINITY;

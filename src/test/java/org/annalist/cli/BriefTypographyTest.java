@@ -29,6 +29,9 @@ class BriefTypographyTest {
     /** Each demo brief's file name and its text, lines kept, no-break spaces kept. */
     private static final Map<String, String> TEXTS = new LinkedHashMap<>();
 
+    /** Each demo brief's file name and its words as printed, with their boxes and sizes. */
+    private static final Map<String, List<PdfFacts.Word>> WORDS = new LinkedHashMap<>();
+
     /** Each demo brief's file name and the number of words on each of its pages. */
     private static final Map<String, List<Integer>> WORDS_BY_PAGE = new LinkedHashMap<>();
 
@@ -39,6 +42,7 @@ class BriefTypographyTest {
         try (Stream<Path> pdfs = Files.list(folder)) {
             for (Path pdf : pdfs.filter(p -> p.toString().endsWith(".pdf")).sorted().toList()) {
                 TEXTS.put(pdf.getFileName().toString(), PdfFacts.of(pdf).text());
+                WORDS.put(pdf.getFileName().toString(), PdfFacts.words(pdf));
                 WORDS_BY_PAGE.put(pdf.getFileName().toString(), PdfFacts.pageTexts(pdf).stream()
                         .map(page -> page.isBlank() ? 0 : page.trim().split("\\s+").length).toList());
             }
@@ -57,6 +61,40 @@ class BriefTypographyTest {
             }
         });
         return hits;
+    }
+
+    /**
+     * Every word of every demo brief prints at 6.5 pt or more (our floor for paper,
+     * {@code ChartStyle.MIN_PRINTED_LABEL_PT}), the labels of the charts included: a chart is drawn in
+     * CSS pixels of 0.75 pt, so its 8-unit labels printed at 6 pt, the structural changes' dates
+     * among them. Sizes read from the PDF (PDFBox, the text's scaling with the drawing's).
+     */
+    @Test
+    void everyWordOfTheChartsAndTheTextPrintsAtALegibleSize() {
+        List<String> small = new ArrayList<>();
+        WORDS.forEach((file, words) -> words.stream().filter(w -> w.sizePt() < 6.5).forEach(w -> small.add(file
+                + " page " + w.page() + ": \"" + w.text() + "\" at " + String.format(java.util.Locale.ROOT, "%.2f", w.sizePt()) + " pt")));
+        assertThat(small).isEmpty();
+    }
+
+    /**
+     * No two words of a page overlap: the dates of structural changes close together, and an
+     * arrow's date beside them, are set in rows that clear each other (boxes read from the PDF).
+     */
+    @Test
+    void noTwoWordsOfAPageOverlapTheChartsLabelsIncluded() {
+        List<String> overlaps = new ArrayList<>();
+        WORDS.forEach((file, words) -> {
+            for (int i = 0; i < words.size(); i++) {
+                for (int j = i + 1; j < words.size(); j++) {
+                    if (words.get(i).overlaps(words.get(j))) {
+                        overlaps.add(file + " page " + words.get(i).page() + ": \"" + words.get(i).text() + "\" and \""
+                                + words.get(j).text() + "\"");
+                    }
+                }
+            }
+        });
+        assertThat(overlaps).isEmpty();
     }
 
     @Test

@@ -69,7 +69,7 @@ class MultiOutlookWordsTest {
         List<Findings> findings = List.of(outlook(1000, COMBINATION, basis), outlook(600, COMBINATION, basis),
                 outlook(370, COMBINATION, basis));
         assertThat(MultiOutlookWords.partsForecasts(CHECK, SERIES, findings, F)).isEqualTo("Their next-year estimates "
-                + "for 2027 do not add up within 0.5\u00A0%: together about 970, which is 3.0\u00A0% below Total's 1,000."
+                + "for 2027 do not add up to Total's within 0.5\u00A0%: together about 970, which is 3.0\u00A0% below Total's 1,000."
                 + " For the total, quote Total's own estimate (1,000): it is forecast from Total's own history, whereas"
                 + " each part is forecast apart and their sum is no forecast of the total.");
     }

@@ -45,11 +45,12 @@ class OutlookCautionsTest {
         assertThat(trend.quantity()).isEqualTo(Claim.Quantity.TREND_SINCE_BREAK);
         assertThat(change.pct()).isNegative();
         String why = OutlookCautions.againstTrend(domestic, findings, f);
-        // its own 80 % interval holds zero: the change points down, it is not called a fall
+        // its own 80 % interval holds zero: no clear fall, by the rule the board's table marks it with too
         assertThat(change.pctLo80()).isNegative();
         assertThat(change.pctHi80()).isPositive();
-        assertThat(why).startsWith("Next year's " + f.signedPercent(change.pct())
-                + " points down (its 80\u00A0% interval also holds no change), while the trend since "
+        assertThat(why).startsWith("Next year's " + f.signedPercent(change.pct()) + " is no clear fall (its 80\u00A0% interval, "
+                + f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
+                + ", includes no change), while the trend since "
                 + f.period(trend.from()) + " rises")
                 .contains("does not extend the trend line");
         // how the method works is said apart, not as the cause: this market's recent months rose strongly
@@ -166,7 +167,8 @@ class OutlookCautionsTest {
     void theShortSectionGivesTheUncertaintyAsItsReasonWhenTheIntervalHoldsTheTrendsPace() {
         OutlookFinding.YearChange change = findings.outlook().nextYearChange();
         String shortWhy = OutlookCautions.againstTrend(domestic, findings, f, false);
-        assertThat(shortWhy).startsWith("Next year's " + f.signedPercent(change.pct()) + " points down against the trend since ")
+        assertThat(shortWhy).startsWith("Next year's " + f.signedPercent(change.pct()) + " is no clear fall (its 80\u00A0% interval"
+                + " includes no change) and runs against the trend since ")
                 .endsWith("the difference lies within the outlook's uncertainty (the 80\u00A0% interval of the change, "
                         + f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
                         + ", holds the trend's pace).")
