@@ -75,7 +75,8 @@ final class OutlookCautions {
         OutlookFinding.YearChange change = o.nextYearChange();
         double next = change.pct();
         boolean opposite = Math.signum(pace) != Math.signum(next) && !change.aboutTheSame();
-        if (!opposite && Math.abs(pace - next) < DecisionRules.OUTLOOK_TREND_GAP_POINTS) {
+        // the gap a reader sees: the two paces as printed, to one decimal
+        if (!opposite && Math.abs(Math.round(10 * pace) - Math.round(10 * next)) < 10 * DecisionRules.OUTLOOK_TREND_GAP_POINTS) {
             return "";
         }
         String span = sinceBreak ? "the trend since " + f.period(trend.from()) : "the trend over the whole period";
