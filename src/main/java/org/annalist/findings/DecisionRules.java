@@ -272,4 +272,10 @@ public final class DecisionRules {
      * against a trend of +2.5 % a year went unexplained, and readers took it for a contradiction).
      */
     public static final double OUTLOOK_TREND_GAP_POINTS = 1.0;
+    /**
+     * From this gap (points, as printed) or for an outlook opposite to the trend, the outlook page
+     * gives every reason its evidence shows; below it, one sentence with the first reason in what the
+     * methods did (our rule: a gap of a point or so needs a reason, not a paragraph).
+     */
+    public static final double OUTLOOK_TREND_FULL_ACCOUNT_POINTS = 2.0;
 }
