@@ -203,8 +203,8 @@ final class BriefWriter {
                 "Annalist " + Version.current(), c.logo().map(p -> p.toAbsolutePath().toUri().toString()));
     }
 
-    /** The charts the template places; those the view does not draw are left out. */
-    private static List<Figure> figures(Series series, Findings findings, FigurePlan plan) {
+    /** The charts the template places; those the view does not draw are left out (package-private for its tests). */
+    static List<Figure> figures(Series series, Findings findings, FigurePlan plan) {
         Captions captions = captions(series, findings);
         List<Figure> figures = new ArrayList<>();
         figures.add(OverviewChart.of(series, findings, captions));
@@ -228,7 +228,7 @@ final class BriefWriter {
         return new Captions(ChartWords.observed(), ChartWords.trendCycle(findings), ChartWords.forecast(),
                 ChartWords.forecastMean(), ChartWords.interval(80), ChartWords.interval(95),
                 ChartWords.profileAxis(series, findings), ChartWords.irregularAxis(series, findings),
-                ChartWords.earlierYears(series));
+                ChartWords.earlierYears(series), ChartWords.valueAxis(series));
     }
 
     /** What the appendix says about the file and how it was read. */

@@ -9,7 +9,10 @@ package org.annalist.chart;
  * @param profileAxis  the seasonal profile's value axis
  * @param irregularAxis the irregular chart's value axis
  * @param earlierYears the year-over-year chart's legend entry for the thin lines, e.g. {@code 2011 to 2023 (thin)}
+ * @param valueAxis    the value axis of the charts drawn in the series' own values (overview, years, outlook),
+ *                     e.g. {@code nights}; empty for none
  */
 public record Captions(String observed, String trendCycle, String forecast, String forecastMean, String interval80,
-                       String interval95, String profileAxis, String irregularAxis, String earlierYears) {
+                       String interval95, String profileAxis, String irregularAxis, String earlierYears,
+                       String valueAxis) {
 }

@@ -96,7 +96,7 @@ public final class OutlookChart {
         lines.addSeries(mean);
 
         JFreeChart chart = ChartFactory.createXYLineChart(null, null,
-                series.unit().isEmpty() ? null : ChartStyle.drawable(series.unit()), lines);
+                ChartStyle.axisTitle(captions.valueAxis()), lines);
         XYPlot plot = chart.getXYPlot();
         double[] span = new double[outlook.horizon() + last - first + 1];
         Arrays.fill(span, 0);

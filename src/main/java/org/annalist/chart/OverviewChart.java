@@ -60,7 +60,7 @@ public final class OverviewChart {
             }
             data.addSeries(trend);
         }
-        JFreeChart chart = ChartFactory.createXYLineChart(null, null, series.unit().isEmpty() ? null : ChartStyle.drawable(series.unit()),
+        JFreeChart chart = ChartFactory.createXYLineChart(null, null, ChartStyle.axisTitle(captions.valueAxis()),
                 data);
         XYPlot plot = chart.getXYPlot();
         DateAxis time = ChartStyle.timeAxis(series);

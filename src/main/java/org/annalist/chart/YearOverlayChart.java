@@ -49,7 +49,7 @@ public final class YearOverlayChart {
             data.addSeries(byYear.get(year));
         }
         JFreeChart chart = ChartFactory.createXYLineChart(null, null,
-                series.unit().isEmpty() ? null : ChartStyle.drawable(series.unit()), data);
+                ChartStyle.axisTitle(captions.valueAxis()), data);
         XYPlot plot = chart.getXYPlot();
         SymbolAxis positions = new SymbolAxis(null, labels);
         positions.setGridBandsVisible(false);

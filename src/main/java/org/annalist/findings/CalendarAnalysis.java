@@ -278,7 +278,14 @@ final class CalendarAnalysis {
         }
         // a rate changes in points and a temperature in degrees: their changes are differences, never %
         Double changePct = relative ? Numbers.orNull(lastYear.changePct()) : null;
-        Double adjustedPct = changePct == null || adjustedBefore <= 0 ? null : 100 * (adjustedNow / adjustedBefore - 1);
+        // on logs, both values adjusted and the latest put on a year earlier's calendar give the same %;
+        // in units they do not, and the brief says "the difference added about 274 to October 2026;
+        // allowing for it, October 2026 was about +7.5 %": the latest value less the difference's part,
+        // printed to three significant digits, against a year earlier as counted, so that a reader's
+        // (13,201 − 274) / 12,025 recomputes the printed change
+        Double adjustedPct = changePct == null || adjustedBefore <= 0 || valueBefore <= 0 ? null : log
+                ? 100 * (adjustedNow / adjustedBefore - 1)
+                : 100 * ((valueNow - threeSignificant(moved)) / valueBefore - 1);
         Double share = changePct == null || adjustedPct == null || Math.abs(changePct) < 0.05 ? null
                 : (changePct - adjustedPct) / changePct;
         double calendarPct = changePct != null && adjustedPct != null
@@ -310,19 +317,28 @@ final class CalendarAnalysis {
      * What the calendar's difference between the two periods did to the change on a year earlier, in %:
      * the factor by which it multiplied the ratio of the two values, (1 + change as counted) /
      * (1 + change without it) − 1, where "without it" takes the effect's part out of each value (on
-     * logs exp(partNow − partBefore) − 1, whatever the values). So defined, the change as counted, the
-     * change without the calendar and this figure recompute from one another as printed; NaN where a
-     * value without the effect is not positive.
+     * logs exp(partNow − partBefore) − 1, whatever the values), or, in units, takes the difference of
+     * the parts, to the three significant digits the brief prints it with, out of the latest value
+     * (the latest value on a year earlier's calendar, as {@code adjusted} has it). So defined, the
+     * change as counted, the change without the calendar and this figure recompute from one another
+     * as printed; NaN where a value without the effect is not positive.
      */
     private static double differencePct(double valueNow, double valueBefore, double partNow, double partBefore,
                                         boolean log) {
         if (log) {
             return 100 * (Math.exp(partNow - partBefore) - 1);
         }
-        double withoutNow = valueNow - partNow;
-        double withoutBefore = valueBefore - partBefore;
-        return withoutNow <= 0 || withoutBefore <= 0 || valueBefore <= 0 ? Double.NaN
-                : 100 * ((valueNow / valueBefore) * (withoutBefore / withoutNow) - 1);
+        double withoutNow = valueNow - threeSignificant(partNow - partBefore);
+        return withoutNow <= 0 || valueBefore <= 0 ? Double.NaN : 100 * (valueNow / withoutNow - 1);
+    }
+
+    /** {@code v} rounded to three significant digits, as a brief prints a calendar effect in units. */
+    static double threeSignificant(double v) {
+        if (v == 0 || !Double.isFinite(v)) {
+            return v;
+        }
+        double step = Math.pow(10, Math.floor(Math.log10(Math.abs(v))) - 2);
+        return Math.round(v / step) * step;
     }
 
     /** A shift on the working scale as a % of {@code base}: exp(d) − 1 on logs, d / base otherwise. */

@@ -77,7 +77,10 @@ public record CalendarFinding(List<EasterDate> easter, List<Effect> effects, Lis
      * @param change            observed change, in the series' units (percentage points for a rate in %)
      * @param changePct         observed change in %; null where a % change means nothing (a value ≤ 0 a year earlier)
      * @param adjustedChange    the change of the calendar-adjusted values, in the series' units
-     * @param adjustedChangePct the same in %; null as {@code changePct}
+     * @param adjustedChangePct the same in %; null as {@code changePct}. In units (not on logs), the
+     *                          latest value less the calendar's difference (to the three significant
+     *                          digits the brief prints it with) against a year earlier as counted, as the
+     *                          brief's sentence reads; on logs the two ways agree
      * @param calendarPct       how much the calendar's difference moved the change, in %:
      *                          (1 + changePct/100) / (1 + adjustedChangePct/100) − 1, so that the three
      *                          recompute from one another (on logs the latest value's calendar factor

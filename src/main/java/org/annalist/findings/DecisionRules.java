@@ -274,8 +274,15 @@ public final class DecisionRules {
     public static final double OUTLOOK_SAME_PCT = 2.0;
     /**
      * The outlook page says why next year's change differs from the trend stated on the first page
-     * when they go opposite ways, or when their paces (both in % a year) differ by this many
-     * percentage points or more (our rule).
+     * when they go opposite ways, or when their paces (both in % a year, as printed to one decimal)
+     * differ by this many percentage points or more (our rule: at 2 points, a total's +1.5 % next year
+     * against a trend of +2.5 % a year went unexplained, and readers took it for a contradiction).
      */
-    public static final double OUTLOOK_TREND_GAP_POINTS = 2.0;
+    public static final double OUTLOOK_TREND_GAP_POINTS = 1.0;
+    /**
+     * From this gap (points, as printed) or for an outlook opposite to the trend, the outlook page
+     * gives every reason its evidence shows; below it, one sentence with the first reason in what the
+     * methods did (our rule: a gap of a point or so needs a reason, not a paragraph).
+     */
+    public static final double OUTLOOK_TREND_FULL_ACCOUNT_POINTS = 2.0;
 }

@@ -200,7 +200,7 @@ public final class AnalystNotes {
 
     /**
      * The slopes of the regimes either side of a break, in units a year ({@code 885.1 → 1167.6 a year
-     * in the monthly total}); a regime too short for a rate a year ({@link RegimeRates#lastsForARate})
+     * in each month's total}); a regime too short for a rate a year ({@link RegimeRates#lastsForARate})
      * by its length and the fitted levels at its ends ({@code over 21 months 23359.7 to 64016.3}).
      */
     private static String slopes(Findings f, RegimeRates.Regime before, RegimeRates.Regime after) {

@@ -135,7 +135,9 @@ final class AppendixViews {
         }
         String screened = c.screenedOut().isEmpty() ? "" : "; " + Terms.number(c.screenedOut().size())
                 + (c.screenedOut().size() == 1 ? " period" : " periods")
-                + " left out of the fit as unusual (robust weighting; not the one-offs reported above)";
+                + " left out of the fit as unusual (robust weighting" + (findings.outliers().isEmpty() ? ")"
+                        // the one-offs the brief reports are found apart; said only where it reports some
+                        : "; not the one-offs reported above)");
         return Optional.of(new BriefView.MethodRow("Calendar effects", "least squares on the decomposition remainder, "
                 + "each regressor centred on its calendar month's mean; Easter as the share of the days before Easter "
                 + "Sunday in each period (Bell & Hillmer 1983); one-offs set aside after a Huber start (Huber 1964; "

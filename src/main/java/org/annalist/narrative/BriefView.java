@@ -125,20 +125,24 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param sinceBreak the trend within the latest regime, or null
      * @param percentPerYear the slope as % of the average level; empty where changes are not in % (a rate, a temperature)
      * @param slopeUnit  what the slope is counted in, with a leading space: the unit, {@code  percentage points}, {@code  °F}
-     * @param slopeTime  what the slope is counted over, after its unit: {@code a year}, or {@code a year in the monthly total}
+     * @param slopeTime  what the slope is counted over, after its unit: {@code a year}, or {@code a year in each month's total}
      *                   for a flow's monthly values ({@link MeasureWords#slopeTime})
+     * @param yearTotal  the slope as the year's total's change, {@code about 25,400 nights a year in the year's
+     *                   total}; empty where the slope is not one period's total ({@link MeasureWords#yearTotal})
      */
     public record TrendView(boolean assessed, boolean rising, boolean falling, String test, String statistic, String pValue,
                             String slopePerYear, String slopeSize, String lower, String upper, String percentPerYear, String basis,
-                            String reason, SinceBreak sinceBreak, String seasonalKendall, String slopeUnit, String slopeTime) {
+                            String reason, SinceBreak sinceBreak, String seasonalKendall, String slopeUnit, String slopeTime,
+                            String yearTotal) {
     }
 
     /**
      * @param since          the first period of the latest regime, in words
      * @param percentPerYear the regime's rate in % with what it is of ({@code +1.8 % a year}, or {@code +1.7 % a year of the latest year's average level}); empty where changes are not in %
+     * @param yearTotal      the regime's slope as the year's total's change ({@link TrendView#yearTotal})
      */
     public record SinceBreak(String since, boolean rising, boolean falling, String slopePerYear, String lower, String upper,
-                             String pValue, String percentPerYear) {
+                             String pValue, String percentPerYear, String yearTotal) {
     }
 
     /**

@@ -9,6 +9,9 @@ import org.annalist.series.Series;
 /** The words the charts print: legend entries and axis titles, worded as the sentences word them. */
 public final class ChartWords {
 
+    /** The longest series name used as an axis title: about the height of the shortest value axis at 9 pt. */
+    private static final int LONGEST_AXIS_NAME = 32;
+
     private ChartWords() {
     }
 
@@ -41,6 +44,24 @@ public final class ChartWords {
     /** The irregular chart's axis: % for a multiplicative series, else the series' unit. */
     public static String irregularAxis(Series series, Findings findings) {
         return against(series, findings, "trend and season");
+    }
+
+    /**
+     * The value axis of the charts drawn in the series' own values: its unit ({@code nights}), else,
+     * for a series without one, what it counts as its name says ({@code visitors} for "Visitors"),
+     * so that no such chart is left with bare numbers; empty when the name is too long for the axis.
+     */
+    public static String valueAxis(Series series) {
+        if (!series.unit().isEmpty()) {
+            return series.unit();
+        }
+        String name = series.name().strip();
+        if (name.isEmpty() || name.length() > LONGEST_AXIS_NAME) {
+            return "";
+        }
+        // "Visitors" reads as a unit in lower case; a name that starts with an acronym ("GDP") keeps its capitals
+        boolean word = name.length() > 1 && Character.isUpperCase(name.charAt(0)) && Character.isLowerCase(name.charAt(1));
+        return word ? Character.toLowerCase(name.charAt(0)) + name.substring(1) : name;
     }
 
     /** The legend entry for the thin lines of the year-over-year chart: every year but the last two. */
@@ -159,6 +180,6 @@ public final class ChartWords {
 
     private static String against(Series series, Findings findings, String what) {
         return findings.form().multiplicative() ? "% against " + what
-                : series.unit().isEmpty() ? "against " + what : series.unit() + " against " + what;
+                : valueAxis(series).isEmpty() ? "against " + what : valueAxis(series) + " against " + what;
     }
 }

@@ -35,7 +35,7 @@ final class ClaimWords {
 
     /**
      * The size of a claim without its sign: {@code 1.8 %}, {@code 0.9 percentage points},
-     * {@code 2,940 nights a year in the monthly total} (a monthly flow's slope, {@link MeasureWords#slopeTime}).
+     * {@code 2,940 nights a year in each month's total} (a monthly flow's slope, {@link MeasureWords#slopeTime}).
      */
     String size(Claim c) {
         return size(c, units());
@@ -52,7 +52,7 @@ final class ClaimWords {
         };
     }
 
-    /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a year in the monthly total}. */
+    /** The size of a claim with its sign: {@code +1.0 %}, {@code −2,940 nights a year in each month's total}. */
     String signedSize(Claim c) {
         return signed(c, size(c));
     }
@@ -60,7 +60,7 @@ final class ClaimWords {
     /**
      * As {@link #signedSize}, short for the key figures' narrow tiles: percentage points abbreviated
      * ({@code +0.9 pp a year}), a flow's slope without its unit ({@code +2,940 a year}; the tile's
-     * note says {@code in monthly nights}).
+     * note says {@code in each month's total}).
      */
     String signedShort(Claim c) {
         String units = units();
@@ -118,8 +118,8 @@ final class ClaimWords {
         s.append(trend.direction() == Direction.INCREASING ? "been rising" : trend.direction() == Direction.DECREASING
                 ? "been falling" : "shown no clear direction");
         if (trend.directional()) {
-            s.append(", by about ").append(size(trend)).append(" (").append(trend.pValue().map(f::pValue).orElse(""))
-                    .append(')');
+            s.append(", by about ").append(size(trend)).append(" (").append(yearTotal(trend))
+                    .append(trend.pValue().map(f::pValue).orElse("")).append(')');
         }
         trend.qualification(QualifyReason.LONGER_RUN_DIFFERS).flatMap(q -> whole).ifPresent(w -> s.append(
                 w.direction() == Direction.INCREASING ? ", whereas over the whole period it rose"
@@ -161,6 +161,13 @@ final class ClaimWords {
                 ? " with the calendar's effect taken out" : "");
     }
 
+    /** A flow's slope as the year's total's change with a closing "; " ({@link MeasureWords#yearTotal}), else empty. */
+    private String yearTotal(Claim c) {
+        String total = c.unit() != Claim.SizeUnit.UNITS_PER_YEAR ? ""
+                : MeasureWords.yearTotal(c.size(), measure, c.to().frequency(), units(), f);
+        return total.isEmpty() ? "" : total + "; ";
+    }
+
     private String breaks() {
         long n = claims.statements().stream().filter(c -> c.quantity() == Quantity.BREAK_STEP).count();
         return n == 1 ? "one structural break" : n + " structural breaks";
@@ -198,10 +205,8 @@ final class ClaimWords {
             return new String[] {"no clear trend", "too few values"};
         }
         Claim t = trend.get();
-        // a flow's slope: the value "+3,050 a year", the note what it is a year of, "in monthly nights"
-        String total = t.unit() != Claim.SizeUnit.UNITS_PER_YEAR
-                || MeasureWords.periodTotal(measure, t.to().frequency()).isEmpty() ? ""
-                : "in " + MeasureWords.periodly(t.to().frequency()) + (unit.isEmpty() ? " values" : " " + unit);
+        // a flow's slope: the value "+3,050 a year", the note what it is a year of, "in each month's total"
+        String total = t.unit() != Claim.SizeUnit.UNITS_PER_YEAR ? "" : MeasureWords.periodTotal(measure, t.to().frequency());
         String span = t.quantity() == Quantity.TREND_SINCE_BREAK ? "since " + shortStart(t, f.period(t.from()))
                 : t.qualification(QualifyReason.SPANS_BREAKS).isPresent() ? "whole period, across " + breaks()
                 : "whole period";

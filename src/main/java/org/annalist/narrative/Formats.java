@@ -101,8 +101,17 @@ public final class Formats {
         }
         double magnitude = Math.floor(Math.log10(Math.abs(v)));
         int places = (int) Math.max(0, 2 - magnitude);
-        double rounded = Math.round(v / Math.pow(10, magnitude - 2)) * Math.pow(10, magnitude - 2);
+        double rounded = significantValue(v);
         return (rounded < 0 ? MINUS : "") + pattern(places).format(Math.abs(rounded));
+    }
+
+    /** The number {@link #significant} prints: {@code v} to three significant digits. */
+    public static double significantValue(double v) {
+        if (v == 0 || !Double.isFinite(v)) {
+            return v;
+        }
+        double step = Math.pow(10, Math.floor(Math.log10(Math.abs(v))) - 2);
+        return Math.round(v / step) * step;
     }
 
     /** As {@link #significant}, with a sign: {@code +2,940}. */

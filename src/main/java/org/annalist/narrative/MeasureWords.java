@@ -114,10 +114,11 @@ final class MeasureWords {
     /**
      * What a slope in units is counted over, said after its unit: {@code a year} where one value is a
      * year's or the measure is not summed (a level's, a rate's or a temperature's change a year is
-     * what it reads as), else {@code a year in the monthly total}. A flow's slope is fitted to its
+     * what it reads as), else {@code a year in each month's total}. A flow's slope is fitted to its
      * monthly (quarterly, daily...) values, so it is the change of one period's total a year: a
      * twelfth of the yearly total's change for monthly data, which "nights a year" alone would be
-     * read as, and "nights a month each year" was read as a monthly change.
+     * read as, "nights a month each year" was read as a monthly change, and "a year in the monthly
+     * total" was still read as the yearly total's change.
      */
     static String slopeTime(Measure measure, Frequency frequency) {
         String total = periodTotal(measure, frequency);
@@ -125,23 +126,44 @@ final class MeasureWords {
     }
 
     /**
-     * Which total a flow's slope changes, said after "a year": {@code in the monthly total}; empty
+     * Which total a flow's slope changes, said after "a year": {@code in each month's total}; empty
      * where one value is a year's or the measure is not summed ({@link #slopeTime}).
      */
     static String periodTotal(Measure measure, Frequency frequency) {
-        return measure.summed() && frequency != Frequency.ANNUAL ? "in the " + periodly(frequency) + " total" : "";
+        return measure.summed() && frequency != Frequency.ANNUAL ? "in each " + periodsOwn(frequency) + " total" : "";
     }
 
-    /** The adjective of one period's span: {@code monthly}, {@code quarterly}, {@code daily}. */
-    static String periodly(Frequency frequency) {
+    /** One period's name as an owner: {@code month's}, {@code quarter's}, {@code day's}. */
+    static String periodsOwn(Frequency frequency) {
         return switch (frequency) {
-            case ANNUAL -> "yearly";
-            case HALF_YEARLY -> "half-yearly";
-            case QUARTERLY -> "quarterly";
-            case MONTHLY -> "monthly";
-            case WEEKLY -> "weekly";
-            case DAILY, BUSINESS_DAILY -> "daily";
+            case ANNUAL -> "year's";
+            case HALF_YEARLY -> "half-year's";
+            case QUARTERLY -> "quarter's";
+            case MONTHLY -> "month's";
+            case WEEKLY -> "week's";
+            case DAILY, BUSINESS_DAILY -> "day's";
         };
+    }
+
+    /**
+     * A flow's slope as the change of the year's total it adds up to, {@code about 35,200 nights a
+     * year in the year's total}, beside the slope of each month's ({@link #slopeTime}) so that
+     * neither is taken for the other; empty where {@link #periodTotal} is, and for weekly and daily
+     * data, whose periods do not make a whole year. The printed slope (three significant digits)
+     * times the periods in a year, so that a reader's 2,930 × 12 gives it; a straight line's
+     * change summed over a year's periods, the seasonal factors of a multiplicative series
+     * averaging one over the year.
+     *
+     * @param units the slope's unit with its leading space ({@link #differenceUnit()}), or empty
+     */
+    static String yearTotal(double slopePerYear, Measure measure, Frequency frequency, String units, Formats f) {
+        double periods = frequency.periodsPerYear();
+        if (periodTotal(measure, frequency).isEmpty() || periods != Math.rint(periods) || periods > 12
+                || !Double.isFinite(slopePerYear) || slopePerYear == 0) {
+            return "";
+        }
+        double printed = Formats.significantValue(Math.abs(slopePerYear));
+        return "about " + f.significant(printed * periods) + units + " a year in the year's total";
     }
 
     /** The sentence that says once, in a board reader's words, how the series is treated (its measure). */

@@ -76,7 +76,9 @@ final class OutlookCautions {
         OutlookFinding.YearChange change = o.nextYearChange();
         double next = change.pct();
         boolean opposite = Math.signum(pace) != Math.signum(next) && !change.aboutTheSame();
-        if (!opposite && Math.abs(pace - next) < DecisionRules.OUTLOOK_TREND_GAP_POINTS) {
+        // the gap a reader sees: the two paces as printed, to one decimal
+        double printedGap = Math.abs(Math.round(10 * pace) - Math.round(10 * next)) / 10.0;
+        if (!opposite && printedGap < DecisionRules.OUTLOOK_TREND_GAP_POINTS) {
             return "";
         }
         String span = sinceBreak ? "the trend since " + f.period(trend.from()) : "the trend over the whole period";
@@ -94,6 +96,14 @@ final class OutlookCautions {
         Optional<String> flat = pace != 0 && side == -Math.signum(pace) ? withoutGrowth(o.model()) : Optional.empty();
         method += flat.map(t -> " " + Character.toUpperCase(t.charAt(0)) + t.substring(1) + ".").orElse("");
         List<String> reasons = new ArrayList<>();
+        // what the methods did, for the one sentence of a smaller gap: damped, without growth, fitted on earlier years
+        List<String> fromMethods = new ArrayList<>();
+        // a damped trend slows the growth it carries forward, whatever the trend: a reason for a slower outlook only
+        (pace != 0 && side == -Math.signum(pace) ? dampedTrend(o.model()) : Optional.<String>empty()).ifPresent(d -> {
+            reasons.add(d);
+            fromMethods.add(d);
+        });
+        flat.ifPresent(fromMethods::add);
         findings.claims().find(Claim.Quantity.ROLLING_YEAR).flatMap(Claim::relativePct)
                 .filter(r -> Math.signum(r - pace) == side)
                 // a change the same way as the trend but smaller explains a slower outlook by being small: "only"
@@ -113,10 +123,13 @@ final class OutlookCautions {
                         + " base"));
         if (sinceBreak && o.caveats().stream().anyMatch(c -> c instanceof OutlookCaveat.BreakTooRecent
                 || c instanceof OutlookCaveat.HistoryKept)) {
-            earlierRegimes(series, findings, trend.from(), side, f).ifPresent(rates -> reasons.add(
-                    "the outlook is fitted on all values from " + f.period(o.fittedFrom()) + ", the years before the change in "
-                    + f.period(trend.from()) + " included, over which the fitted line rose " + (side < 0 ? "less" : "more")
-                    + " steeply (" + rates + ")"));
+            earlierRegimes(series, findings, trend.from(), side, f).map(rates -> "the outlook is fitted on all values from "
+                    + f.period(o.fittedFrom()) + ", the years before the change in " + f.period(trend.from())
+                    + " included, over which the fitted line rose " + (side < 0 ? "less" : "more") + " steeply (" + rates + ")")
+                    .ifPresent(r -> {
+                        reasons.add(r);
+                        fromMethods.add(r);
+                    });
         }
         for (OutlookCaveat c : o.caveats()) {
             if (c instanceof OutlookCaveat.ShockBridged b && trend.from().compareTo(b.to()) <= 0
@@ -132,6 +145,12 @@ final class OutlookCautions {
                     + " change, " + f.signedPercent(change.pctLo80()) + " to " + f.signedPercent(change.pctHi80())
                     + ", holds the trend's pace)";
             reasons.add(withinUncertainty);
+        }
+        if (allReasons && !opposite && printedGap < DecisionRules.OUTLOOK_TREND_FULL_ACCOUNT_POINTS) {
+            // a smaller gap in one sentence, its reason what the methods did where the evidence shows it
+            String why = !fromMethods.isEmpty() ? fromMethods.get(0) : withinUncertainty != null ? withinUncertainty
+                    : "the outlook does not extend the trend line but starts from the latest level";
+            return "Next year's " + f.signedPercent(next) + gap + ": " + why + ".";
         }
         if (!allReasons) {
             // the short sections give one reason: the uncertainty when it holds the trend's pace, else the
@@ -187,6 +206,21 @@ final class OutlookCautions {
                 + (flat.size() == 1 ? "carries" : "carry") + " the latest level forward with its season; only "
                 + Terms.listed(trended.stream().map(m -> OutlookMethodWords.method(m, false)).toList())
                 + (trended.size() == 1 ? " carries" : " carry") + " a trend, with " + weight + " of the weight");
+    }
+
+    /**
+     * That the exponential smoothing model the outlook uses, alone or in its average, damps its trend
+     * ({@code Ad} in its notation; Gardner & McKenzie 1985, Management Science 31, 1237–1246: the
+     * trend multiplied by φ < 1 at each step ahead), so that its growth fades over the forecast: {@code exponential smoothing
+     * (ETS(M,Ad,M)) damps its trend, so the growth it carries forward fades over the forecast}.
+     * Empty without a damped model.
+     */
+    static Optional<String> dampedTrend(OutlookFinding.Model model) {
+        List<OutlookFinding.Model> models = model.members().isEmpty() ? List.of(model) : model.members();
+        return models.stream().filter(m -> m.method() == org.annalist.findings.OutlookMethod.ETS
+                        && m.label().filter(l -> l.contains(",Ad,")).isPresent()).findFirst()
+                .map(m -> OutlookMethodWords.method(m, true) + (model.members().isEmpty() ? "" : ", one of the methods averaged,")
+                        + " damps its trend, so the growth it carries forward fades over the forecast");
     }
 
     /** A count of methods in words (a combination has two or three). */

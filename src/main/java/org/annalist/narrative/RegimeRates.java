@@ -111,7 +111,7 @@ final class RegimeRates {
         return Optional.of(r.slopePerYear());
     }
 
-    /** A rate ({@link #rate}) with its unit and time: {@code +1.3 % a year}, {@code +885 nights a year in the monthly total}. */
+    /** A rate ({@link #rate}) with its unit and time: {@code +1.3 % a year}, {@code +885 nights a year in each month's total}. */
     String printedRate(double rate) {
         return number(rate) + " " + time();
     }

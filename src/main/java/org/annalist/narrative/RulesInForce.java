@@ -58,7 +58,8 @@ final class RulesInForce {
                 new Rule("Next year called about the same / set against the trend when",
                         "the 80\u00A0% interval of the change contains zero and lies within \u00B1"
                         + Terms.number(DecisionRules.OUTLOOK_SAME_PCT) + "\u00A0% / opposite to it or "
-                        + Terms.number(DecisionRules.OUTLOOK_TREND_GAP_POINTS) + " points a year apart"),
+                        + Terms.number(DecisionRules.OUTLOOK_TREND_GAP_POINTS)
+                        + (DecisionRules.OUTLOOK_TREND_GAP_POINTS == 1 ? " point" : " points") + " a year apart as printed"),
                 new Rule("Irregular fluctuation called small / large", "share below "
                         + Terms.number(100 * DecisionRules.SMALL_IRREGULAR_SHARE) + "\u00A0% / above "
                         + Terms.number(100 * DecisionRules.LARGE_IRREGULAR_SHARE) + "\u00A0%"),

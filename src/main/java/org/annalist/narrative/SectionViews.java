@@ -48,13 +48,14 @@ final class SectionViews {
         TrendFinding t = findings.trend();
         if (!t.assessed()) {
             return new BriefView.TrendView(false, false, false, "", "", "", "", "", "", "", "", "",
-                    Terms.trendNotAssessed(), null, null, measure.differenceUnit(), slopeTime());
+                    Terms.trendNotAssessed(), null, null, measure.differenceUnit(), slopeTime(), "");
         }
         BriefView.SinceBreak since = t.latestRegime().map(r -> new BriefView.SinceBreak(f.period(r.since()),
                 r.direction() == Direction.INCREASING, r.direction() == Direction.DECREASING,
                 f.signedSignificant(r.slopePerYear()), f.significant(r.lower95()), f.significant(r.upper95()),
                 f.pValue(r.pValue()), r.changePctPerYear() == null || !measure.percent() ? ""
-                : f.signedPercent(r.changePctPerYear()) + regimeRateBasis(findings))).orElse(null);
+                : f.signedPercent(r.changePctPerYear()) + regimeRateBasis(findings), yearTotal(r.slopePerYear())))
+                .orElse(null);
         String kendall = t.seasonalKendall().map(k -> Terms.test(k.test()) + " z = " + f.fixed(k.statistic(), 2) + ", "
                 + f.pValue(k.pValue())).orElse(null);
         return new BriefView.TrendView(true, t.direction() == Direction.INCREASING, t.direction() == Direction.DECREASING,
@@ -63,7 +64,13 @@ final class SectionViews {
                 f.significant(t.slopeCi95().get(0)),
                 f.significant(t.slopeCi95().get(1)),
                 t.changePctPerYear() == null || !measure.percent() ? "" : f.signedFixed(t.changePctPerYear(), 1) + "\u00A0%",
-                Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit(), slopeTime());
+                Terms.trendBasis(t.test()), null, since, kendall, measure.differenceUnit(), slopeTime(),
+                yearTotal(t.slopePerYear()));
+    }
+
+    /** A flow's slope as the year's total's change ({@link MeasureWords#yearTotal}); empty for other measures. */
+    private String yearTotal(double slopePerYear) {
+        return MeasureWords.yearTotal(slopePerYear, measure.measure(), series.frequency(), measure.differenceUnit(), f);
     }
 
     /**
@@ -75,7 +82,7 @@ final class SectionViews {
         return findings.transform() == Transform.LOG ? " a year" : " a year of the latest year's average level";
     }
 
-    /** What a slope in the series' units is counted over: {@code a year}, or {@code a year in the monthly total} for a flow. */
+    /** What a slope in the series' units is counted over: {@code a year}, or {@code a year in each month's total} for a flow. */
     private String slopeTime() {
         return MeasureWords.slopeTime(measure.measure(), series.frequency());
     }

@@ -54,7 +54,7 @@ class OutlookChartPrintTest {
                 .series().stream().filter(s -> s.name().startsWith("Long-haul")).findFirst().orElseThrow();
         Findings findings = new Analyst().analyse(longHaul);
         chart = OutlookChart.of(longHaul, findings.outlook(), new Captions("Observed", "", "Forecast", "Forecast",
-                "80 % interval", "95 % interval", "", "", "")).chart();
+                "80 % interval", "95 % interval", "", "", "", "nights")).chart();
         image = new BufferedImage((int) (WIDTH * SCALE), (int) (HEIGHT * SCALE), BufferedImage.TYPE_INT_RGB);
         Graphics2D g = image.createGraphics();
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);

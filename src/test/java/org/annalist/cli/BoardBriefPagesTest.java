@@ -112,7 +112,7 @@ class BoardBriefPagesTest {
         String before = text.substring(0, guide);
         String glossary = text.substring(guide, text.indexOf("Data and methods", guide));
         // each term the pages before the guide use, and its entry (worded once, in report-templates/guide.ftlx)
-        assertThat(before).contains("(p < ").contains("80 % interval").contains("back-tests").contains("Structural changes")
+        assertThat(before).contains("p < ").contains("80 % interval").contains("back-tests").contains("Structural changes")
                 .contains("Unusual single periods").contains("Trend-cycle");
         assertThat(glossary).contains("p-value The probability of seeing a pattern")
                 .contains("Forecast interval The range the outcome should fall in with the stated probability (80 %)")

@@ -54,8 +54,11 @@ class BriefDocumentTest {
         String text = flat(totalFacts.text());
         Findings f = totalFindings;
         // a monthly flow's slope is the change of a month's total each year: never "nights a year" (12 times too small)
-        assertThat(text).contains("the series has been increasing, by about 2,120 nights a year in the monthly total");
-        assertThat(text.replace("nights a year in the monthly total", "")).doesNotContain("nights a year");
+        assertThat(text).contains("the series has been increasing, by about 2,120 nights a year in each month's total");
+        // and the year's total beside it: 2,120 × 12 = 25,440, three significant digits (derived in the test)
+        assertThat(text).contains("about 25,400 nights a year in the year's total");
+        assertThat(text.replace("nights a year in each month's total", "").replace("nights a year in the year's total", ""))
+                .doesNotContain("nights a year");
         assertThat(text).contains(String.format(java.util.Locale.ROOT, "z = %.2f", f.trend().statistic()));
         assertThat(text).contains("It peaks in August");
         assertThat(text).contains("No cycle longer than a year stands out");

@@ -35,6 +35,9 @@ class BriefTypographyTest {
     /** Each demo brief's file name and the number of words on each of its pages. */
     private static final Map<String, List<Integer>> WORDS_BY_PAGE = new LinkedHashMap<>();
 
+    /** Each demo brief's file name and the text of each of its pages. */
+    private static final Map<String, List<String>> PAGES = new LinkedHashMap<>();
+
     @BeforeAll
     static void writeTheDemo() throws IOException {
         Run run = Run.of("demo", "--data", "demo-data", "--out", folder.toString());
@@ -43,7 +46,9 @@ class BriefTypographyTest {
             for (Path pdf : pdfs.filter(p -> p.toString().endsWith(".pdf")).sorted().toList()) {
                 TEXTS.put(pdf.getFileName().toString(), PdfFacts.of(pdf).text());
                 WORDS.put(pdf.getFileName().toString(), PdfFacts.words(pdf));
-                WORDS_BY_PAGE.put(pdf.getFileName().toString(), PdfFacts.pageTexts(pdf).stream()
+                List<String> pages = PdfFacts.pageTexts(pdf);
+                PAGES.put(pdf.getFileName().toString(), pages);
+                WORDS_BY_PAGE.put(pdf.getFileName().toString(), pages.stream()
                         .map(page -> page.isBlank() ? 0 : page.trim().split("\\s+").length).toList());
             }
         }
@@ -111,6 +116,31 @@ class BriefTypographyTest {
             }
         });
         assertThat(bare).isEmpty();
+    }
+
+    @Test
+    void theIrregularSectionsWordsShareThePageOfTheChartTheyIntroduce() {
+        // the heading is a line of its own; the chart's caption, kept with the chart, opens with the same words
+        Pattern heading = Pattern.compile("(?m)^\\s*Irregular fluctuation\\s*$");
+        List<String> apart = new ArrayList<>();
+        int sections = 0;
+        for (Map.Entry<String, List<String>> brief : PAGES.entrySet()) {
+            List<String> pages = brief.getValue();
+            int words = -1;
+            int chart = -1;
+            for (int k = 0; k < pages.size(); k++) {
+                words = words < 0 && heading.matcher(pages.get(k)).find() ? k : words;
+                chart = chart < 0 && pages.get(k).contains("Irregular fluctuation: each period") ? k : chart;
+            }
+            if (words >= 0 && chart >= 0) {
+                sections++;
+                if (words != chart) {
+                    apart.add(brief.getKey() + ": words on page " + (words + 1) + ", chart on page " + (chart + 1));
+                }
+            }
+        }
+        assertThat(apart).isEmpty();
+        assertThat(sections).as("demo briefs with an irregular section and its chart").isGreaterThanOrEqualTo(7);
     }
 
     @Test

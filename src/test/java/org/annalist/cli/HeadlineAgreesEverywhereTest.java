@@ -77,7 +77,7 @@ class HeadlineAgreesEverywhereTest {
             String slope = trend.get("unit").asText().equals("percent_per_year")
                     ? F.fixed(Math.abs(trend.get("size").asDouble()), 1) + " % a year"
                     : F.significant(Math.abs(trend.get("size").asDouble())) + (unit.isEmpty() ? "" : " " + unit)
-                    + " a year in the monthly total";
+                    + " a year in each month's total";
             if (since != null) {
                 Period from = Period.month(Integer.parseInt(since.get("from").asText().substring(0, 4)),
                         Integer.parseInt(since.get("from").asText().substring(5, 7)));

@@ -78,7 +78,7 @@ class BreaksAsFittedTest {
     }
 
     @Test
-    void aFlowsChangeOfSlopeInUnitsIsCountedAYearInTheMonthlyTotal() {
+    void aFlowsChangeOfSlopeInUnitsIsCountedAYearInEachMonthsTotal() {
         // flat at 10,000 nights a month for six years, then rising 1,800 a month each year, with a
         // season of constant size (so worked in units, not logs) and noise of 100
         Random random = new Random(29);
@@ -94,8 +94,8 @@ class BreaksAsFittedTest {
         BreakViews views = new BreakViews(s, f, Formats.forValues(x, Locale.ENGLISH));
         BriefView.BreakRow row = views.breaks().get(f.breaks().indexOf(b));
         // a month's nights change by the slope each year: "a year" alone would read as the yearly total's change
-        assertThat(row.slopeChange()).matches("from [+−][0-9,.]+\u00A0nights to [+−][0-9,.]+\u00A0nights a year in the monthly total");
-        assertThat(AnalystNotes.of(f)).contains(" a year in the monthly total; sup-F").doesNotContain("per year (95%");
+        assertThat(row.slopeChange()).matches("from [+−][0-9,.]+\u00A0nights to [+−][0-9,.]+\u00A0nights a year in each month's total");
+        assertThat(AnalystNotes.of(f)).contains(" a year in each month's total; sup-F").doesNotContain("per year (95%");
     }
 
     /**

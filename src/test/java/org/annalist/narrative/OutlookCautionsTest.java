@@ -122,10 +122,8 @@ class OutlookCautionsTest {
     /** A single method without a term for growth is named as such; one with a trend is not (invented models). */
     @Test
     void aSingleMethodWithoutGrowthIsSaidToHoldTheLevel() {
-        var flat = new OutlookFinding.Model(org.annalist.findings.OutlookMethod.ETS, java.util.Optional.of("ETS(A,N,A)"),
-                false, java.util.List.of(), false);
-        var trended = new OutlookFinding.Model(org.annalist.findings.OutlookMethod.ETS, java.util.Optional.of("ETS(A,A,A)"),
-                false, java.util.List.of(), true);
+        var flat = ets("ETS(A,N,A)", false);
+        var trended = ets("ETS(A,A,A)", true);
         assertThat(OutlookCautions.withoutGrowth(flat)).contains("the method used, exponential smoothing (ETS(A,N,A)),"
                 + " has no term for growth (no trend) and carries the latest level forward with its season");
         assertThat(OutlookCautions.withoutGrowth(trended)).isEmpty();
@@ -139,6 +137,30 @@ class OutlookCautionsTest {
      * the trend section's Sen slope (its break findings; the bridged fall between is left out): the
      * reason is given, with both rates; read the other way it would not be.
      */
+    /** An exponential smoothing model in its notation (invented), with or without a term for growth. */
+    private static OutlookFinding.Model ets(String label, boolean trended) {
+        return new OutlookFinding.Model(org.annalist.findings.OutlookMethod.ETS, java.util.Optional.of(label), false,
+                java.util.List.of(), trended);
+    }
+
+    /** A damped trend (Gardner & McKenzie 1985) is a reason for a slower outlook; an undamped one is not (invented models). */
+    @Test
+    void aDampedExponentialSmoothingIsSaidToSlowTheGrowthItCarriesForward() {
+        var damped = ets("ETS(M,Ad,M)", true);
+        var straight = ets("ETS(M,A,M)", true);
+        var theta = new OutlookFinding.Model(org.annalist.findings.OutlookMethod.THETA, java.util.Optional.empty(),
+                true, java.util.List.of(), true);
+        var average = new OutlookFinding.Model(org.annalist.findings.OutlookMethod.COMBINATION, java.util.Optional.empty(),
+                false, java.util.List.of(damped, theta), true);
+        assertThat(OutlookCautions.dampedTrend(damped)).contains(
+                "exponential smoothing (ETS(M,Ad,M)) damps its trend, so the growth it carries forward fades over the forecast");
+        assertThat(OutlookCautions.dampedTrend(average)).contains("exponential smoothing (ETS(M,Ad,M)), one of the methods"
+                + " averaged, damps its trend, so the growth it carries forward fades over the forecast");
+        assertThat(OutlookCautions.dampedTrend(straight)).isEmpty();
+        assertThat(OutlookCautions.dampedTrend(new OutlookFinding.Model(org.annalist.findings.OutlookMethod.COMBINATION,
+                java.util.Optional.empty(), false, java.util.List.of(straight, theta), true))).isEmpty();
+    }
+
     @Test
     void theEarlierYearsAreGivenAsAReasonOnlyWhenTheBreakTablesRatesBearItOut() {
         var breaks = findings.breaks();
