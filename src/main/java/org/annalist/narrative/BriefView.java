@@ -58,6 +58,8 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param atPeriod  {@code In October 2026} / {@code On Saturday 31 October 2026}
      * @param up        higher than a year earlier ({@code up} and {@code down} both false: about the same)
      * @param changePercent the size of the change without its sign, in % or in the series' units (the claim's)
+     * @param provisionalSince where more than the latest value is provisional or estimated, the first
+     *                      of them ("September 2026"); else empty
      * @param step          the sentence on a recent structural step when it is the headline, else empty
      * @param trendSentence the trend since the latest break (else over the whole period), with its qualifications
      * @param trendFirst    the trend is the headline and leads the paragraph
@@ -65,7 +67,8 @@ public record BriefView(Document document, Header header, Lead lead, ThisPeriod 
      * @param difference    the change is a difference (points or units), worded "higher", not "more"
      */
     public record Lead(boolean comparable, String atPeriod, String period, String value, String yearEarlier,
-                       String changePercent, boolean up, boolean down, boolean provisional, String step,
+                       String changePercent, boolean up, boolean down, boolean provisional, String provisionalSince,
+                       String step,
                        String trendSentence, boolean trendFirst, String calendarNote,
                        boolean difference, String calendarLead) {
     }

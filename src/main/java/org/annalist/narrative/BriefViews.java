@@ -61,15 +61,17 @@ public final class BriefViews {
         boolean trendFirst = words.trendFirst();
         if (findings.recent().isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(series.end()), f.period(series.end()), "", "", "", false, false,
-                    false, step, trend, trendFirst, "", false, "");
+                    false, "", step, trend, trendFirst, "", false, "");
         }
         RecentPeriod last = findings.recent().get(findings.recent().size() - 1);
-        boolean provisional = series.flags(series.size() - 1).contains(ValueFlag.PROVISIONAL)
-                || series.flags(series.size() - 1).contains(ValueFlag.ESTIMATED);
+        int firstRevisable = firstOfRevisableEnd(series);
+        boolean provisional = firstRevisable < series.size();
+        // more than the latest value may be revised: the caveat says from when, so that it agrees with the table
+        String provisionalSince = firstRevisable < series.size() - 1 ? f.period(series.period(firstRevisable)) : "";
         Optional<Claim> latest = claims.pageLatest();
         if (last.value() == null || latest.isEmpty()) {
             return new BriefView.Lead(false, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
-                    "", "", false, false, provisional, step, trend, trendFirst, "", false, "");
+                    "", "", false, false, provisional, provisionalSince, step, trend, trendFirst, "", false, "");
         }
         // the sign and size are the claim's, which the key figures and the findings JSON carry too
         Claim change = latest.get();
@@ -84,9 +86,18 @@ public final class BriefViews {
                         + words.signedSize(raw) + " as counted)").orElse("") : "";
         return new BriefView.Lead(true, f.atPeriod(last.period()), f.period(last.period()), f.value(last.value()),
                 yearEarlier, words.size(change), change.direction() == Direction.INCREASING,
-                change.direction() == Direction.DECREASING, provisional, step, trend, trendFirst, calendar,
+                change.direction() == Direction.DECREASING, provisional, provisionalSince, step, trend, trendFirst, calendar,
                 change.unit() != Claim.SizeUnit.PERCENT, calendarLead.withholdsSinglePeriod()
                         ? calendarLead.sentence(words, claims, f.period(last.period()), yearEarlier) : "");
+    }
+
+    /** The index where the run of provisional or estimated values that ends the series starts; the size when there is none. */
+    private static int firstOfRevisableEnd(Series series) {
+        int i = series.size();
+        while (i > 0 && (series.flags(i - 1).contains(ValueFlag.PROVISIONAL) || series.flags(i - 1).contains(ValueFlag.ESTIMATED))) {
+            i--;
+        }
+        return i;
     }
 
     private static List<BriefView.Fact> facts(Series series, Findings findings, Formats f) {

@@ -147,8 +147,11 @@ final class OutlookCautions {
             reasons.add(withinUncertainty);
         }
         if (allReasons && !opposite && printedGap < DecisionRules.OUTLOOK_TREND_FULL_ACCOUNT_POINTS) {
-            // a smaller gap in one sentence, its reason what the methods did where the evidence shows it
-            String why = !fromMethods.isEmpty() ? fromMethods.get(0) : withinUncertainty != null ? withinUncertainty
+            // a smaller gap in one sentence: first whether it is within the outlook's uncertainty, as the
+            // board's short form says it, then what the methods did where the evidence shows it
+            String why = withinUncertainty != null
+                    ? withinUncertainty + (fromMethods.isEmpty() ? "" : ", and " + fromMethods.get(0))
+                    : !fromMethods.isEmpty() ? fromMethods.get(0)
                     : "the outlook does not extend the trend line but starts from the latest level";
             return "Next year's " + f.signedPercent(next) + gap + ": " + why + ".";
         }

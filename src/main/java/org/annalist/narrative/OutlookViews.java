@@ -151,7 +151,9 @@ final class OutlookViews {
      * The clause after next year's value: its change on the current year's estimate with the
      * change's own 80 % interval — "about the same" only under {@link
      * org.annalist.findings.DecisionRules#OUTLOOK_SAME_PCT}, never a bare verb that could contradict
-     * a trend stated on page 1.
+     * a trend stated on page 1; "too uncertain to call a rise" (or fall) where that interval holds no
+     * change but is too wide to call the years about the same, so that a wider uncertainty never reads
+     * firmer than a narrow one.
      */
     static String comparison(OutlookFinding.YearChange c, OutlookFinding.CurrentYear current, Series series,
                              Formats f) {
@@ -178,7 +180,14 @@ final class OutlookViews {
             return ", about the same as " + against + " (" + change + "; 80\u00A0% interval of the change " + low
                     + " to " + high + ")";
         }
-        return ", " + change + " on " + against + " (80\u00A0% interval of the change " + low + " to " + high + ")";
+        // a change whose interval holds no change is not a rise or a fall, however large its central
+        // estimate (the rule of clearness above): said beside the number a board may quote
+        double central = c.pct() != null ? c.pct() : c.difference();
+        boolean unclear = c.pct() != null ? c.holdsNoChange() : c.differenceLo80() <= 0 && 0 <= c.differenceHi80();
+        boolean printsAsZero = c.pct() != null && Math.abs(c.pct()) < 0.05;   // "0.0 %" is neither
+        String caution = unclear && !printsAsZero ? ", too uncertain to call a " + (central < 0 ? "fall" : "rise") : "";
+        return ", " + change + " on " + against + " (80\u00A0% interval of the change " + low + " to " + high + ")"
+                + caution;
     }
 
     /**

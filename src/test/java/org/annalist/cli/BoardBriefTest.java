@@ -167,6 +167,8 @@ class BoardBriefTest {
         // the demo file flags September and October 2026 of every series "p"
         assertThat(text).contains("The latest values are provisional and may be revised; so may the figures computed "
                 + "from them.");
-        assertThat(text.split("The latest value is provisional and may be revised\\.", -1)).hasSize(5);
+        // each of the four sections says from when: both flagged months, not only the latest
+        assertThat(text.split("The values from September 2026 on are provisional and may be revised\\.", -1)).hasSize(5);
+        assertThat(text).doesNotContain("The latest value is provisional");
     }
 }

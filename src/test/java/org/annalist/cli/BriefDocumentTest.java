@@ -118,6 +118,26 @@ class BriefDocumentTest {
         return String.format(java.util.Locale.ROOT, "%,.0f", Math.round(v / magnitude) * magnitude);
     }
 
+    /**
+     * The caveat on revisions names every provisional value, not only the latest: the demo's file
+     * flags its last months provisional (demo-data/README.md), and the caveat starts where the run of
+     * flagged values that ends the series starts (derived in the test from the flags as read).
+     */
+    @Test
+    void theRevisionCaveatStartsAtTheFirstOfTheProvisionalValuesThatEndTheSeries() throws IOException {
+        Series s = new SeriesFileReader(ReadOptions.defaults()).read(Path.of(NIGHTS)).require("Total");
+        int first = s.size();
+        while (first > 0 && s.flags(first - 1).contains(org.annalist.series.ValueFlag.PROVISIONAL)) {
+            first--;
+        }
+        assertThat(s.size() - first).as("the demo ends in more than one provisional value").isGreaterThan(1);
+        String month = s.period(first).toString();   // ISO, e.g. 2026-09
+        String said = java.time.YearMonth.parse(month).format(java.time.format.DateTimeFormatter.ofPattern("MMMM yyyy",
+                java.util.Locale.ENGLISH));
+        assertThat(flat(totalFacts.text())).contains("The values from " + said + " on are provisional and may be revised.")
+                .doesNotContain("The latest value is provisional");
+    }
+
     @Test
     void fontsAreEmbeddedAndChartsAreVectors() {
         assertThat(totalFacts.unembeddedFonts()).isEmpty();

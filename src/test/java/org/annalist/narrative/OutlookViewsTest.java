@@ -95,6 +95,29 @@ class OutlookViewsTest {
     }
 
     /**
+     * A change whose 80 % interval holds no change but is too wide for "about the same" is said to be
+     * too uncertain to call a rise or a fall, beside its number; one whose interval lies wholly on
+     * one side is not (invented numbers).
+     */
+    @Test
+    void aChangeWhoseIntervalHoldsNoChangeIsNotLeftToReadAsARiseOrAFall() {
+        Series s = cutInOctober();
+        Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
+        OutlookFinding.CurrentYear current = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
+                Period.month(2026, 10), 10, 1_000_000, 2, new OutlookFinding.Span(1_200_000, 1_190_000, 1_210_000));
+        OutlookFinding.YearChange rise = new OutlookFinding.YearChange(2027, 2026, 1.8, -1.8, 5.7, 21_600, -21_600,
+                68_400, false);
+        assertThat(OutlookViews.comparison(rise, current, s, f)).isEqualTo(", +1.8\u00A0% on the estimate for 2026"
+                + " (80\u00A0% interval of the change \u22121.8\u00A0% to +5.7\u00A0%), too uncertain to call a rise");
+        OutlookFinding.YearChange fall = new OutlookFinding.YearChange(2027, 2026, -1.0, -4.2, 2.2, -12_000, -50_400,
+                26_400, false);
+        assertThat(OutlookViews.comparison(fall, current, s, f)).endsWith(", too uncertain to call a fall");
+        OutlookFinding.YearChange clear = new OutlookFinding.YearChange(2027, 2026, 3.5, 0.6, 6.4, 42_000, 7_200,
+                76_800, false);
+        assertThat(OutlookViews.comparison(clear, current, s, f)).endsWith("+6.4\u00A0%)");
+    }
+
+    /**
      * The current year's estimate is printed to the digit at which its interval shows, the observed
      * part as it is (invented numbers).
      */
