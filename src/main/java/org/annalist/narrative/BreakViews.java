@@ -146,10 +146,15 @@ final class BreakViews {
             return "";
         }
         String pace = regimes.printedRate(regimes.rate(regimes.before(at)).orElseThrow());
+        // three significant digits ("about 48,600"), or the series' own precision where a reader's division
+        // of the two printed figures would not give the gap (13,100 against 12,452.9: 4.9 %, not 5.1 %)
+        String gap = size(carried, e.returnedLevel());
+        String carriedSaid = size(Formats.significantValue(carried), e.returnedLevel()).equals(gap)
+                ? f.significant(carried) : f.value(carried);
         return "Had the level gone on as before the " + (e.rise() ? "rise" : "fall") + " (" + pace
-                + "), it would have reached about " + f.significant(carried)
+                + "), it would have reached about " + carriedSaid
                 + closing.map(c -> " just before " + f.period(c.period())).orElse(" by " + f.period(e.asOf())) + "; the fitted level"
-                + " there, " + f.value(e.returnedLevel()) + ", is " + size(carried, e.returnedLevel())
+                + " there, " + f.value(e.returnedLevel()) + ", is " + gap
                 + (e.returnedLevel() < carried ? " below" : " above") + " that.";
     }
 

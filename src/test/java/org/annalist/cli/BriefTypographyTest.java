@@ -144,6 +144,30 @@ class BriefTypographyTest {
     }
 
     @Test
+    void theGapToTheOldPathRecomputesFromTheTwoFiguresPrinted() {
+        // "it would have reached about 48,600 by October 2026; the fitted level there, 45,171, is 7.1 % below
+        // that": a reader divides the two printed figures (the rounding is Formats', common practice)
+        Pattern gap = Pattern.compile("would have reached about ([\\d,]+)[^;]*; the fitted level\\s+there,\\s+([\\d,]+),"
+                + "\\s+is\\s+([\\d.]+)\\s?%\\s+(below|above)");
+        List<String> wrong = new ArrayList<>();
+        int seen = 0;
+        for (Map.Entry<String, String> brief : TEXTS.entrySet()) {
+            Matcher m = gap.matcher(brief.getValue().replace('\u00A0', ' ').replace('\n', ' '));
+            while (m.find()) {
+                seen++;
+                double path = Double.parseDouble(m.group(1).replace(",", ""));
+                double level = Double.parseDouble(m.group(2).replace(",", ""));
+                String recomputed = String.format(java.util.Locale.ROOT, "%.1f", Math.abs(100 * (level / path - 1)));
+                if (!recomputed.equals(m.group(3)) || (level < path) != m.group(4).equals("below")) {
+                    wrong.add(brief.getKey() + ": " + m.group() + " (recomputed " + recomputed + ")");
+                }
+            }
+        }
+        assertThat(seen).as("the demo's falls and returns state their old paths (demo-data/README.md)").isPositive();
+        assertThat(wrong).isEmpty();
+    }
+
+    @Test
     void negativeNumbersCarryTheTrueMinusInTextTablesAndChartAxes() {
         // a hyphen-minus opening a number; one between digits (2024-03) or after a letter or hyphen
         // (a file name, a period label, a hash wrapped across lines) is not a minus sign
