@@ -82,8 +82,7 @@ class OutlookViewsTest {
     void aSmallChangeWithAWideIntervalIsGivenAsANumberNotAVerb() {
         Series s = cutInOctober();
         Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
-        OutlookFinding.CurrentYear current = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
-                Period.month(2026, 10), 10, 1_000_000, 2, new OutlookFinding.Span(1_200_000, 1_190_000, 1_210_000));
+        OutlookFinding.CurrentYear current = observedToOctober();
         OutlookFinding.YearChange wide = new OutlookFinding.YearChange(2027, 2026, 0.02, -3.1, 4.4, 240, -37_000, 53_000,
                 false);
         assertThat(OutlookViews.comparison(wide, current, s, f))
@@ -103,8 +102,7 @@ class OutlookViewsTest {
     void aChangeWhoseIntervalHoldsNoChangeIsNotLeftToReadAsARiseOrAFall() {
         Series s = cutInOctober();
         Formats f = Formats.forValues(s.values(), Locale.ENGLISH);
-        OutlookFinding.CurrentYear current = new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1),
-                Period.month(2026, 10), 10, 1_000_000, 2, new OutlookFinding.Span(1_200_000, 1_190_000, 1_210_000));
+        OutlookFinding.CurrentYear current = observedToOctober();
         OutlookFinding.YearChange rise = new OutlookFinding.YearChange(2027, 2026, 1.8, -1.8, 5.7, 21_600, -21_600,
                 68_400, false);
         assertThat(OutlookViews.comparison(rise, current, s, f)).isEqualTo(", +1.8\u00A0% on the estimate for 2026"
@@ -211,5 +209,11 @@ class OutlookViewsTest {
                 0.73, java.util.Optional.of(org.annalist.findings.OutlookMethod.THETA), 0.57);
         assertThat(OutlookViews.closest(apart, f)).isEqualTo("; the best single method, Theta, scored 0.57 against the"
                 + " average's 0.73, 22\u00A0% below");
+    }
+
+    /** A current year of 2026 observed to October, estimated at 1,200,000 in all (invented numbers). */
+    private static OutlookFinding.CurrentYear observedToOctober() {
+        return new OutlookFinding.CurrentYear(2026, true, Period.month(2026, 1), Period.month(2026, 10), 10, 1_000_000, 2,
+                new OutlookFinding.Span(1_200_000, 1_190_000, 1_210_000));
     }
 }
