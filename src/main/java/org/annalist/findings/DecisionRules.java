@@ -218,6 +218,12 @@ public final class DecisionRules {
      */
     public static final int OUTLOOK_NARROWING_ERRORS = 100;
     /**
+     * The outlook's intervals are widened to the back-test's errors, where narrower than they support,
+     * from this many errors pooled over the horizons (our rule: the non-seasonal origins of the
+     * shortest back-test).
+     */
+    public static final int OUTLOOK_WIDENING_ERRORS = 8;
+    /**
      * Beyond the horizons the back-test scored, the outlook's 95 % interval grows at least as the
      * back-test's errors grew, extended as h to a power between these two: 1/2, a random walk's
      * errors (Hyndman &amp; Athanasopoulos 2021, §5.5, from memory), and 1, a mis-estimated slope's

@@ -53,7 +53,9 @@ final class RulesInForce {
                         + Terms.number(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS) + " forecasts / at least "
                         + Terms.number(DecisionRules.OUTLOOK_REGIME_ADVANTAGE_PCT)
                         + "\u00A0% lower"),
-                new Rule("Outlook intervals narrowed with", "at least " + Terms.number(DecisionRules.OUTLOOK_NARROWING_ERRORS)
+                new Rule("Outlook intervals widened / narrowed with", "at least "
+                        + Terms.number(DecisionRules.OUTLOOK_WIDENING_ERRORS) + " / "
+                        + Terms.number(DecisionRules.OUTLOOK_NARROWING_ERRORS)
                         + " back-test errors (the 95\u00A0% interval with the 80\u00A0% one, unless the largest errors ask for more)"),
                 new Rule("Next year called about the same / set against the trend when",
                         "the 80\u00A0% interval of the change contains zero and lies within \u00B1"

@@ -33,6 +33,8 @@ class DecisionRulesTest {
                 .isEqualTo(DecisionRules.OUTLOOK_MIN_CHOICE_FORECASTS);
         assertThat(org.annalist.analysis.forecast.Outlook.NARROWING_ERRORS)
                 .isEqualTo(DecisionRules.OUTLOOK_NARROWING_ERRORS);
+        assertThat(org.annalist.analysis.forecast.Outlook.WIDENING_ERRORS)
+                .isEqualTo(DecisionRules.OUTLOOK_WIDENING_ERRORS);
         assertThat(org.annalist.analysis.forecast.Outlook.SLOWEST_FAR_GROWTH)
                 .isEqualTo(DecisionRules.OUTLOOK_SLOWEST_FAR_GROWTH);
         assertThat(org.annalist.analysis.forecast.Outlook.FASTEST_FAR_GROWTH)

@@ -82,6 +82,8 @@ public final class Outlook {
     public static final int MIN_CHOICE_FORECASTS = 20;
     /** The back-test errors from which the 80 % interval may be narrowed to them ({@link Widening#NARROWING_PAIRS}). */
     public static final int NARROWING_ERRORS = Widening.NARROWING_PAIRS;
+    /** The fewest back-test errors from which the intervals are widened to them ({@link Widening#POOLED_PAIRS}). */
+    public static final int WIDENING_ERRORS = Widening.POOLED_PAIRS;
     /** The slowest and fastest growth exponents of the back-test's errors beyond the horizons tested ({@link Widening}). */
     public static final double SLOWEST_FAR_GROWTH = Widening.SLOWEST_FAR_GROWTH;
     public static final double FASTEST_FAR_GROWTH = Widening.FASTEST_FAR_GROWTH;
