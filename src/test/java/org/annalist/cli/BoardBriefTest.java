@@ -163,6 +163,15 @@ class BoardBriefTest {
     }
 
     @Test
+    void theReadingGuideExplainsTheIntervalsAndLevelsTheBoardQuotes() {
+        String guide = text.substring(text.indexOf("Reading guide"));
+        // the captions give 95 % intervals of the breaks' dates and the sections fitted levels (demo-data/README.md)
+        assertThat(text).contains("95 % interval").contains("fitted level");
+        assertThat(guide).contains("95 % interval The range within which the true value")
+                .contains("Fitted level Where the line fitted to the seasonally adjusted series");
+    }
+
+    @Test
     void theProvisionalLatestValuesAreSaidOnTheFirstPageAndInEachSection() {
         // the demo file flags September and October 2026 of every series "p"
         assertThat(text).contains("The latest values are provisional and may be revised; so may the figures computed "
