@@ -75,6 +75,8 @@ class OutlookChartPrintTest {
         double start = plot.getDomainAxis().getRange().getLowerBound();
         double perMonth = plot.getDomainAxis().valueToJava2D(start + monthMillis, area, RectangleEdge.BOTTOM)
                 - plot.getDomainAxis().valueToJava2D(start, area, RectangleEdge.BOTTOM);
+        // our rule (no source): a forecast month gets at least 3.5 mm, against the 3 mm at which the bands
+        // of neighbouring months ran into one another on this page
         assertThat(perMonth / PX_PER_MM).as("mm of print per month").isGreaterThanOrEqualTo(3.5);
     }
 
@@ -115,6 +117,8 @@ class OutlookChartPrintTest {
     /** The 95 % band prints darker than the grid lines (which it covered unseen when both were one grey) and than paper. */
     @Test
     void the95PercentBandIsNotTheGridsGrey() {
+        // WCAG 2.1 contrast ratios (OutlookChartGreyTest.contrast); the floors are our rule (no source): 1.1 tells
+        // the band from a grid line it covers, 1.55 from paper, as the 80 % band stands from the 95 % one (> 1.5)
         assertThat(OutlookChartGreyTest.contrast(OutlookChart.BAND_95, ChartStyle.GRID)).isGreaterThanOrEqualTo(1.1);
         assertThat(OutlookChartGreyTest.contrast(OutlookChart.BAND_95, Color.WHITE)).isGreaterThanOrEqualTo(1.55);
     }
