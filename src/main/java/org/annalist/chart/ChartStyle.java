@@ -139,15 +139,15 @@ public final class ChartStyle {
      */
     static final double LABEL_EDGE_SHARE = 0.07;
 
-    /**
-     * Replaces the characters the embedded font cannot draw by {@code ?}: chart text drawn by AWT
-     * has no per-glyph fallback and would show empty boxes instead.
-     */
     /** An axis title as drawn ({@link #drawable}), or none (null) for an empty one. */
     static String axisTitle(String text) {
         return text == null || text.isEmpty() ? null : drawable(text);
     }
 
+    /**
+     * Replaces the characters the embedded font cannot draw by {@code ?}: chart text drawn by AWT
+     * has no per-glyph fallback and would show empty boxes instead.
+     */
     public static String drawable(String text) {
         Font font = new Font(FONT_FAMILY, Font.PLAIN, 9);
         StringBuilder out = new StringBuilder(text.length());

@@ -73,8 +73,10 @@ public final class OverviewChart {
         // room above the highest value for an outlier's label, and for every row of the breaks' labels:
         // the least that holds them, as more room lowers the arrows that push labels into further rows
         int rows = 1;
-        while (breakLabelRows(series, findings, upperMargin(rows)).rows() > rows) {
+        BreakLabels labels = breakLabelRows(series, findings, upperMargin(rows));
+        while (labels.rows() > rows) {
             rows++;
+            labels = breakLabelRows(series, findings, upperMargin(rows));
         }
         values.setUpperMargin(upperMargin(rows));
         plot.setOutlineVisible(false);
@@ -95,7 +97,7 @@ public final class OverviewChart {
         }
         plot.setRenderer(renderer);
         plot.setSeriesRenderingOrder(SeriesRenderingOrder.FORWARD);   // the trend-cycle on top of the data
-        markBreaks(plot, series, findings.breaks(), breakLabelRows(series, findings, values.getUpperMargin()));
+        markBreaks(plot, series, findings.breaks(), labels);
         markOutliers(plot, series, findings.outliers());
         LegendTitle legend = chart.getLegend();
         legend.setPosition(RectangleEdge.TOP);

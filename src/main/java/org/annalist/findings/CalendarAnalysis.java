@@ -285,7 +285,7 @@ final class CalendarAnalysis {
         // (13,201 − 274) / 12,025 recomputes the printed change
         Double adjustedPct = changePct == null || adjustedBefore <= 0 || valueBefore <= 0 ? null : log
                 ? 100 * (adjustedNow / adjustedBefore - 1)
-                : 100 * ((valueNow - threeSignificant(moved)) / valueBefore - 1);
+                : 100 * ((valueNow - Numbers.threeSignificant(moved)) / valueBefore - 1);
         Double share = changePct == null || adjustedPct == null || Math.abs(changePct) < 0.05 ? null
                 : (changePct - adjustedPct) / changePct;
         double calendarPct = changePct != null && adjustedPct != null
@@ -328,17 +328,8 @@ final class CalendarAnalysis {
         if (log) {
             return 100 * (Math.exp(partNow - partBefore) - 1);
         }
-        double withoutNow = valueNow - threeSignificant(partNow - partBefore);
+        double withoutNow = valueNow - Numbers.threeSignificant(partNow - partBefore);
         return withoutNow <= 0 || valueBefore <= 0 ? Double.NaN : 100 * (valueNow / withoutNow - 1);
-    }
-
-    /** {@code v} rounded to three significant digits, as a brief prints a calendar effect in units. */
-    static double threeSignificant(double v) {
-        if (v == 0 || !Double.isFinite(v)) {
-            return v;
-        }
-        double step = Math.pow(10, Math.floor(Math.log10(Math.abs(v))) - 2);
-        return Math.round(v / step) * step;
     }
 
     /** A shift on the working scale as a % of {@code base}: exp(d) − 1 on logs, d / base otherwise. */

@@ -10,6 +10,7 @@ import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.time.format.TextStyle;
 import java.util.Locale;
+import org.annalist.findings.Numbers;
 import org.annalist.series.Frequency;
 import org.annalist.series.Period;
 
@@ -107,11 +108,7 @@ public final class Formats {
 
     /** The number {@link #significant} prints: {@code v} to three significant digits. */
     public static double significantValue(double v) {
-        if (v == 0 || !Double.isFinite(v)) {
-            return v;
-        }
-        double step = Math.pow(10, Math.floor(Math.log10(Math.abs(v))) - 2);
-        return Math.round(v / step) * step;
+        return Numbers.threeSignificant(v);
     }
 
     /** As {@link #significant}, with a sign: {@code +2,940}. */

@@ -140,7 +140,7 @@ public final class BreakSearch {
      * A regime's fitted line {@code periods} periods after its first period, in the series' units:
      * the line starts at the break instant, half a period before that first period, at {@code level}
      * and climbs by {@code slope} a period, both on the scale searched (logs when {@code log}, then
-     * taken back with {@code exp}). The one reading of a regime's end ({@link Break#endLevel}).
+     * taken back with {@code exp}). Read at a regime's last period it gives {@link Break#endLevel}.
      */
     public static double lineAt(double level, double slope, long periods, boolean log) {
         double working = level + slope * (periods + 0.5);

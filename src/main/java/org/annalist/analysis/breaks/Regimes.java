@@ -222,17 +222,19 @@ final class Regimes {
             }
             boolean rise = step.changePct() > 0;
             double sign = rise ? 1 : -1;
-            boolean furtherAtEnd = sign * (closingLevel(breaks, j) - step.levelAfter()) > 0;
+            double closing = closingLevel(breaks, j);
+            boolean furtherAtEnd = sign * (closing - step.levelAfter()) > 0;
             int extreme = furtherAtEnd ? step.end() : step.start();
-            double extremeLevel = furtherAtEnd ? closingLevel(breaks, j) : step.levelAfter();
+            double extremeLevel = furtherAtEnd ? closing : step.levelAfter();
             int asOf = step.end();
-            double returned = closingLevel(breaks, j);
+            double returned = closing;
             OptionalInt returnStart = OptionalInt.empty();
-            if (j + 1 < breaks.size() && sign * (closingLevel(breaks, j + 1) - returned) < 0) {
+            double nextClosing = j + 1 < breaks.size() ? closingLevel(breaks, j + 1) : Double.NaN;
+            if (j + 1 < breaks.size() && sign * (nextClosing - returned) < 0) {
                 BreakSearch.Break next = breaks.get(j + 1);
                 returnStart = OptionalInt.of(next.start());
                 asOf = next.end();
-                returned = closingLevel(breaks, j + 1);
+                returned = nextClosing;
             }
             double moved = -sign * (returned - extremeLevel);
             if (returnStart.isEmpty()) {

@@ -80,7 +80,7 @@ public final class Outlook {
      * always) to 2.716; quarterly data give 26 and monthly data some 200.
      */
     public static final int MIN_CHOICE_FORECASTS = 20;
-    /** The back-test errors from which the 80 % interval may be narrowed to them ({@link Widening#NARROWING_PAIRS}). */
+    /** The back-test errors from which the intervals may be narrowed to them, the 95 % with the 80 % ({@link Widening#NARROWING_PAIRS}). */
     public static final int NARROWING_ERRORS = Widening.NARROWING_PAIRS;
     /** The fewest back-test errors from which the intervals are widened to them ({@link Widening#POOLED_PAIRS}). */
     public static final int WIDENING_ERRORS = Widening.POOLED_PAIRS;
