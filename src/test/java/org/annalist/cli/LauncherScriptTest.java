@@ -80,6 +80,26 @@ class LauncherScriptTest {
     }
 
     /**
+     * A batch lowers the compile thresholds tenfold, so that its compiled code stops growing within
+     * its first hundred or so briefs rather than creeping up with its length (the launcher's comment
+     * and the README give the measurement); single commands keep the JVM's thresholds, and a
+     * scaling of the user's own replaces ours.
+     */
+    @Test
+    void aBatchCompilesAtATenthOfTheUsualThresholdsUnlessTheUserScalesThem() throws Exception {
+        Path java = fakeJava("17.0.15");
+        String launcher = home.resolve("bin/annalist").toString();
+        List<String> batch = run(Map.of("JAVA_HOME", java.toString()), temp, launcher, "batch", "b.yaml").lines();
+        assertThat(batch.subList(0, batch.indexOf("org.annalist.cli.Main")))
+                .contains("-XX:CompileThresholdScaling=0.1");
+        assertThat(run(Map.of("JAVA_HOME", java.toString()), temp, launcher, "brief", "f.csv").lines())
+                .noneMatch(arg -> arg.contains("CompileThresholdScaling"));
+        List<String> own = run(Map.of("JAVA_HOME", java.toString(), "ANNALIST_JAVA_OPTS",
+                "-XX:CompileThresholdScaling=0.5"), temp, launcher, "batch", "b.yaml").lines();
+        assertThat(own).contains("-XX:CompileThresholdScaling=0.5").doesNotContain("-XX:CompileThresholdScaling=0.1");
+    }
+
+    /**
      * A batch runs with at most two glibc malloc arenas, so that the native memory of its briefs'
      * layout threads does not spread over more arenas as the batch goes on (the launcher's comment
      * gives the measurement); other commands are left to glibc's default, and a limit of the user's
