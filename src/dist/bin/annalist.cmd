@@ -47,9 +47,10 @@ exit /b 2
 :run
 set "ANNALIST_DEFAULTS=-XX:TieredStopAtLevel=1 -XX:-UsePerfData -Xshare:auto -Xlog:cds*=off"
 echo %ANNALIST_JAVA_OPTS% | findstr /r /c:"-XX:+Use[A-Za-z]*GC" >nul || set "ANNALIST_DEFAULTS=-XX:+UseSerialGC %ANNALIST_DEFAULTS%"
-rem a batch starts its heap at 192 MB, so that its footprint does not creep up with its length
+rem a batch starts its heap at 192 MB, all of it touched as it starts, so that its footprint does
+rem not creep up with its length
 set "ANNALIST_START_HEAP=-Xms64m"
-if /i "%~1"=="batch" set "ANNALIST_START_HEAP=-Xms192m"
+if /i "%~1"=="batch" set "ANNALIST_START_HEAP=-Xms192m -XX:+AlwaysPreTouch"
 rem a batch compiles methods at a tenth of the usual thresholds, so that its compiled code stops
 rem growing early; a scaling of the user's own wins
 set "ANNALIST_SCALING="

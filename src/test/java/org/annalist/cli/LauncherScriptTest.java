@@ -63,20 +63,22 @@ class LauncherScriptTest {
     }
 
     /**
-     * A batch starts its heap above what two briefs at a time make the collector grow it to, so that
-     * its peak does not creep up with its length (README, "Start-up and memory": 200 and 1,000
-     * briefs); a heap bound of the user's still replaces both settings.
+     * A batch starts its heap above what two briefs at a time make the collector grow it to, all of it
+     * touched at the start, so that its peak does not creep up with its length (README, "Start-up and
+     * memory": 200 and 1,000 briefs); a heap bound of the user's still replaces these settings.
      */
     @Test
-    void aBatchStartsItsHeapLargerThanASingleCommandDoes() throws Exception {
+    void aBatchStartsItsHeapLargerThanASingleCommandDoesAndTouchesItAtOnce() throws Exception {
         Path java = fakeJava("17.0.15");
         List<String> batch = run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(),
                 "batch", "briefs.yaml").lines();
-        assertThat(batch.subList(0, batch.indexOf("org.annalist.cli.Main"))).contains("-Xmx640m", "-Xms192m")
-                .doesNotContain("-Xms64m");
+        assertThat(batch.subList(0, batch.indexOf("org.annalist.cli.Main")))
+                .contains("-Xmx640m", "-Xms192m", "-XX:+AlwaysPreTouch").doesNotContain("-Xms64m");
+        assertThat(run(Map.of("JAVA_HOME", java.toString()), temp, home.resolve("bin/annalist").toString(),
+                "brief", "f.csv").lines()).contains("-Xms64m").doesNotContain("-XX:+AlwaysPreTouch");
         List<String> own = run(Map.of("JAVA_HOME", java.toString(), "ANNALIST_JAVA_OPTS", "-Xmx2g"), temp,
                 home.resolve("bin/annalist").toString(), "batch", "briefs.yaml").lines();
-        assertThat(own).contains("-Xmx2g").doesNotContain("-Xmx640m", "-Xms192m");
+        assertThat(own).contains("-Xmx2g").doesNotContain("-Xmx640m", "-Xms192m", "-XX:+AlwaysPreTouch");
     }
 
     /**
