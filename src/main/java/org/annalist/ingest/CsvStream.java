@@ -4,7 +4,12 @@ import java.io.IOException;
 import java.io.Reader;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
+import java.util.ArrayList;
 import java.util.Iterator;
+import java.util.List;
+import java.util.concurrent.ArrayBlockingQueue;
+import java.util.concurrent.BlockingQueue;
+import java.util.concurrent.TimeUnit;
 import java.util.function.Consumer;
 import org.annalist.ingest.CsvRows.Row;
 import org.apache.commons.csv.CSVParser;
@@ -18,6 +23,12 @@ import org.apache.commons.csv.CSVRecord;
  * (its cells trimmed of surrounding spaces); a record with a quote, which may run over several lines,
  * is handed to Commons CSV whole, so that quoting follows its rules exactly. Line breaks are
  * {@code \n}, {@code \r\n} or a lone {@code \r}, as an editor counts them.
+ *
+ * <p>A large text is read {@linkplain #streamAhead ahead on a thread of its own}: the decoding and
+ * splitting of its lines run there while the caller's thread gives the rows to the sink, so that a
+ * file of thousands of series is read on two cores. The sink sees the same rows in the same order,
+ * and the problems found are logged on the caller's thread in the same order, as when one thread
+ * reads.
  */
 final class CsvStream {
 
@@ -28,7 +39,6 @@ final class CsvStream {
 
     private final Reader in;
     private final char delimiter;
-    private final ProblemLog log;
     private final Consumer<Row> sink;
     private char[] buffer = new char[1 << 16];
     private int position;
@@ -37,18 +47,185 @@ final class CsvStream {
     private int line = 1;
     private int lastLine;
 
-    private CsvStream(Reader in, char delimiter, ProblemLog log, Consumer<Row> sink) {
+    /** Rows handed from the reading thread to the caller's at a time ({@link #streamAhead}). */
+    private static final int ROWS_PER_BATCH = 1024;
+    /** Batches read ahead at most: the rows in flight stay a few MB whatever the file's size. */
+    private static final int BATCHES_AHEAD = 4;
+
+    private CsvStream(Reader in, char delimiter, Consumer<Row> sink) {
         this.in = in;
         this.delimiter = delimiter;
-        this.log = log;
         this.sink = sink;
     }
 
+    /** Gives every record of {@code text} to {@code sink}, on this thread. */
     static void stream(Reader text, char delimiter, ProblemLog log, Consumer<Row> sink) {
         try {
-            new CsvStream(text, delimiter, log, sink).run();
+            new CsvStream(text, delimiter, sink).run();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
+        } catch (Unreadable unreadable) {
+            throw unreadable.logIn(log);
+        }
+    }
+
+    /**
+     * As {@link #stream}, with the text read and split on a thread of its own, at most
+     * {@value #BATCHES_AHEAD} batches of {@value #ROWS_PER_BATCH} rows ahead of {@code sink}, which
+     * runs on this thread. Whatever stops the reading (a fatal problem of the text, a failure of the
+     * reader such as {@link TextDecoding.NotUtf8}) reaches this thread after the rows before it, as it
+     * would have reached {@link #stream}'s caller; whatever stops the sink stops the reading thread,
+     * which has ended when this returns or throws, so that the caller may read on from {@code text}.
+     * {@code text} must not write to the log as it is read (the reading thread never touches it).
+     */
+    static void streamAhead(Reader text, char delimiter, ProblemLog log, Consumer<Row> sink) {
+        BlockingQueue<Object> batches = new ArrayBlockingQueue<>(BATCHES_AHEAD);
+        ReadingAhead reading = new ReadingAhead(text, delimiter, batches);
+        Thread thread = new Thread(reading, "annalist-csv-read-ahead");
+        thread.setDaemon(true);
+        thread.start();
+        boolean finished = false;
+        try {
+            while (true) {
+                Object next = take(batches);
+                if (next instanceof List<?> rows) {
+                    for (Object row : rows) {
+                        sink.accept((Row) row);
+                    }
+                } else if (next == ReadingAhead.END) {
+                    finished = true;
+                    return;
+                } else {
+                    finished = true;
+                    Throwable stop = (Throwable) next;
+                    if (stop instanceof Unreadable unreadable) {
+                        throw unreadable.logIn(log);
+                    }
+                    if (stop instanceof IOException io) {
+                        throw new UncheckedIOException(io);
+                    }
+                    if (stop instanceof RuntimeException runtime) {
+                        throw runtime;
+                    }
+                    throw (Error) stop;
+                }
+            }
+        } finally {
+            if (!finished) {
+                reading.cancelled = true;
+                while (thread.isAlive()) {
+                    batches.clear();   // a reading thread waiting for room sees the cancellation
+                    joinBriefly(thread);
+                }
+            }
+        }
+    }
+
+    private static Object take(BlockingQueue<Object> batches) {
+        try {
+            return batches.take();
+        } catch (InterruptedException interrupted) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while reading", interrupted);
+        }
+    }
+
+    private static void joinBriefly(Thread thread) {
+        try {
+            thread.join(10);
+        } catch (InterruptedException interrupted) {
+            Thread.currentThread().interrupt();
+        }
+    }
+
+    /** The reading thread of {@link #streamAhead}: batches of rows, then {@link #END} or what stopped it. */
+    private static final class ReadingAhead implements Runnable {
+        static final Object END = new Object();
+
+        private final Reader text;
+        private final char delimiter;
+        private final BlockingQueue<Object> batches;
+        volatile boolean cancelled;
+        private List<Row> batch = new ArrayList<>(ROWS_PER_BATCH);
+
+        ReadingAhead(Reader text, char delimiter, BlockingQueue<Object> batches) {
+            this.text = text;
+            this.delimiter = delimiter;
+            this.batches = batches;
+        }
+
+        @Override
+        public void run() {
+            Object last;
+            try {
+                new CsvStream(text, delimiter, this::add).run();
+                hand(batch);
+                last = END;
+            } catch (Cancelled cancelled) {
+                return;
+            } catch (Throwable stop) {   // handed to the caller's thread, which throws it there
+                last = stop;
+            }
+            try {
+                if (!batch.isEmpty()) {
+                    hand(batch);
+                }
+                hand(last);
+            } catch (Cancelled cancelled) {
+                // the caller stopped first
+            }
+        }
+
+        private void add(Row row) {
+            batch.add(row);
+            if (batch.size() == ROWS_PER_BATCH) {
+                hand(batch);
+            }
+        }
+
+        /** Puts {@code item} in the queue, waiting for room; a batch handed is replaced by a new one. */
+        private void hand(Object item) {
+            if (item == batch && batch.isEmpty()) {
+                return;
+            }
+            try {
+                while (!batches.offer(item, 10, TimeUnit.MILLISECONDS)) {
+                    if (cancelled) {
+                        throw new Cancelled();
+                    }
+                }
+            } catch (InterruptedException interrupted) {
+                throw new Cancelled();
+            }
+            if (item == batch) {
+                batch = new ArrayList<>(ROWS_PER_BATCH);
+            }
+        }
+    }
+
+    /** The caller of {@link #streamAhead} stopped taking rows. */
+    private static final class Cancelled extends RuntimeException {
+        Cancelled() {
+            super(null, null, false, false);
+        }
+    }
+
+    /**
+     * A problem of the text that ends its reading, found by the splitting; logged by the thread that
+     * owns the log ({@link #logIn}), after the rows before it have gone to the sink.
+     */
+    private static final class Unreadable extends RuntimeException {
+        private final int line;
+        private final String problem;
+
+        Unreadable(int line, String problem) {
+            super(problem, null, false, false);
+            this.line = line;
+            this.problem = problem;
+        }
+
+        DataProblemException logIn(ProblemLog log) {
+            return log.fatal(line, 0, problem);
         }
     }
 
@@ -92,7 +269,7 @@ final class CsvStream {
             fill();
             scanned += position;
             if (limit - position > LINE_LIMIT) {
-                throw log.fatal(line, 0, "the line is longer than " + LINE_LIMIT + " characters; expected the rows of a table");
+                throw new Unreadable(line, "the line is longer than " + LINE_LIMIT + " characters; expected the rows of a table");
             }
         }
     }
@@ -242,7 +419,7 @@ final class CsvStream {
                     }
                     record = records.next();
                 } catch (UncheckedIOException | IllegalStateException malformed) {
-                    throw log.fatal(lastLine + 1, 0, "a quoted cell is never closed (" + inFile(CsvRows.rootMessage(malformed),
+                    throw new Unreadable(lastLine + 1, "a quoted cell is never closed (" + inFile(CsvRows.rootMessage(malformed),
                             firstLine) + "); expected a closing double quote before the end of the file");
                 }
                 String[] cells = new String[record.size()];

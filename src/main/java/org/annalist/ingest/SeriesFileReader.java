@@ -26,6 +26,13 @@ import org.annalist.series.Series;
  */
 public final class SeriesFileReader {
 
+    /**
+     * From this size on, a delimited file's text is split into rows on a thread of its own while
+     * this one reads the rows ({@link CsvStream#streamAhead}); below it, the second thread would
+     * cost more than it saves (our rule: a brief's usual file is a few hundred KB at most).
+     */
+    static final long READ_AHEAD_FROM_BYTES = 4L << 20;
+
     private final ReadOptions options;
     private final boolean digest;
 
@@ -118,7 +125,11 @@ public final class SeriesFileReader {
         long expectedRows = head.sampleLines() == 0 ? 16
                 : (long) (size / Math.max(1.0, head.sample().length() / (double) head.sampleLines()) * 1.02) + 16;
         RowReader rows = new RowReader(options, log, baseName(log.file()), expectedRows);
-        CsvStream.stream(head.whole(), delimiter, log, rows::row);
+        if (size >= READ_AHEAD_FROM_BYTES && !text.logsWhileRead() && Runtime.getRuntime().availableProcessors() > 1) {
+            CsvStream.streamAhead(head.whole(), delimiter, log, rows::row);
+        } else {
+            CsvStream.stream(head.whole(), delimiter, log, rows::row);
+        }
         RowReader.Read read = rows.end();
         List<Series> series = Aggregator.aggregateAll(read.series(), options.aggregation(), log);
         log.throwIfErrors();

@@ -58,13 +58,24 @@ final class TextDecoding {
         private final Reader reader;
         private final String charsetName;
         private final boolean utf8Assumed;
+        private final boolean logsWhileRead;
 
-        private Text(InputStream bytes, MessageDigest digest, Reader reader, String charsetName, boolean utf8Assumed) {
+        private Text(InputStream bytes, MessageDigest digest, Reader reader, String charsetName, boolean utf8Assumed,
+                     boolean logsWhileRead) {
             this.bytes = bytes;
             this.digest = digest;
             this.reader = reader;
             this.charsetName = charsetName;
             this.utf8Assumed = utf8Assumed;
+            this.logsWhileRead = logsWhileRead;
+        }
+
+        /**
+         * Whether reading the text may write to the log (a byte-order mark's encoding that the bytes
+         * break is logged as it is met), so that it must be read on the thread that owns the log.
+         */
+        boolean logsWhileRead() {
+            return logsWhileRead;
         }
 
         Reader reader() {
@@ -136,7 +147,7 @@ final class TextDecoding {
                 throw log.fatal(0, 0, "the file starts with a " + bomCharset.name()
                         + " byte-order mark but is not valid " + bomCharset.name() + "; expected text in that encoding");
             });
-            return new Text(in, sha256, strict, bomCharset.name() + " with byte-order mark", false);
+            return new Text(in, sha256, strict, bomCharset.name() + " with byte-order mark", false, true);
         }
         for (int i = 0; i < probe.length; i++) {
             if (probe[i] == 0) {
@@ -147,12 +158,13 @@ final class TextDecoding {
         if (windows1252) {
             log.warn(0, 0, "the file is not valid UTF-8; read it as Windows-1252. "
                     + "Save it as UTF-8 if accented names look wrong");
-            return new Text(in, sha256, new InputStreamReader(in, Charset.forName("windows-1252")), "windows-1252", false);
+            return new Text(in, sha256, new InputStreamReader(in, Charset.forName("windows-1252")), "windows-1252", false,
+                    false);
         }
         Reader utf8 = checked(new InputStreamReader(in, reporting(StandardCharsets.UTF_8)), () -> {
             throw new NotUtf8();
         });
-        return new Text(in, sha256, utf8, "UTF-8", true);
+        return new Text(in, sha256, utf8, "UTF-8", true, false);
     }
 
     private static CharsetDecoder reporting(Charset charset) {
