@@ -107,73 +107,120 @@ final class Loess {
      * [1] {@code stlest}: the local fit at position {@code xs} (1-based, may lie outside 1..n) from
      * neighbours {@code nleft..nright} (1-based), written to {@code ys[at]}.
      *
+     * <p>Each sum adds the same terms in the same order as [1], so every bit agrees with it. A bulk
+     * analysis spends much of its time here, and the launcher's C1 compiler does little to such
+     * loops itself, so the work is cut in the source: the tricube weights come from a table
+     * ({@link #TRICUBE}), the loops of [1] that run one after the other over the same neighbours
+     * are joined where one's results do not feed the next's, and each weight is held in a local
+     * between its reads and stored only where a later loop reads it.
+     *
+     * @param w scratch for the neighbourhood weights, at least {@code nright} long; what it holds
+     *          afterwards is of no use to the caller
      * @return false when every neighbour has weight zero (nothing written)
      */
-    static boolean estimate(double[] y, int n, int len, int degree, double xs, double[] ys, int at, int nleft,
+    static boolean estimate(double[] y, int n, int len, int degree, int xs, double[] ys, int at, int nleft,
                             int nright, double[] w, boolean userw, double[] rw) {
         double range = n - 1.0;
-        double h = Math.max(xs - nleft, nright - xs);
-        if (len > n) {
-            h += (len - n) / 2;                                  // integer division, as in [1]
-        }
+        // [1] works in double precision here; with whole positions every step is exact in int
+        int farthest = Math.max(xs - nleft, nright - xs);
+        int halfWidth = len > n ? farthest + (len - n) / 2 : farthest;   // integer division, as in [1]
+        double h = halfWidth;
         double h9 = Stl.SINGLE_0_999 * h;
-        double h1 = Stl.SINGLE_0_001 * h;
+        double[] tricube = tricubeWeights(halfWidth, farthest);
+        // arrays are 0-based: neighbour j (1-based, as in [1]) is at index i = j − 1
+        int first = nleft - 1;
+        int last = nright - 1;
         double a = 0;
-        for (int j = nleft; j <= nright; j++) {
-            w[j - 1] = 0;
-            double r = Math.abs(j - xs);
-            if (r <= h9) {
-                if (r <= h1) {
-                    w[j - 1] = 1;
-                } else {
-                    // [3] tricube weight (1 − (r/h)³)³; 1 within 0.001 h and 0 beyond 0.999 h as in [1]
-                    double q = r / h;
-                    double t = 1 - q * q * q;
-                    w[j - 1] = t * t * t;                        // tricube
-                }
+        for (int i = first; i <= last; i++) {
+            int distance = Math.abs((i + 1) - xs);
+            double weight = 0;
+            if (distance <= h9) {
+                weight = tricube[distance];
                 if (userw) {
-                    w[j - 1] = rw[j - 1] * w[j - 1];
+                    weight = rw[i] * weight;
                 }
-                a += w[j - 1];
+                a += weight;
             }
+            w[i] = weight;
         }
         if (a <= 0) {
             return false;
         }
-        // The loops of [1] that run one after the other over the same neighbours are joined where
-        // one's results do not feed the next's (each sum still adds in the same order, so every bit
-        // agrees with [1]): a bulk analysis spends much of its time here.
         double fit = 0;
         if (h > 0 && degree > 0) {
             // [1] stlest, degree 1: the weights of the local weighted least-squares line at xs
             double mean = 0;
-            for (int j = nleft; j <= nright; j++) {
-                w[j - 1] /= a;
-                mean += w[j - 1] * j;
+            for (int i = first; i <= last; i++) {
+                double weight = w[i] / a;
+                w[i] = weight;
+                mean += weight * (i + 1);
             }
             double b = xs - mean;
             double c = 0;
-            for (int j = nleft; j <= nright; j++) {
-                c += w[j - 1] * (j - mean) * (j - mean);
+            for (int i = first; i <= last; i++) {
+                double fromMean = (i + 1) - mean;
+                c += w[i] * fromMean * fromMean;
             }
             if (Math.sqrt(c) > Stl.SINGLE_0_001 * range) {
                 b /= c;
-                for (int j = nleft; j <= nright; j++) {
-                    w[j - 1] = w[j - 1] * (b * (j - mean) + 1.0);
-                    fit += w[j - 1] * y[j - 1];
+                for (int i = first; i <= last; i++) {
+                    fit += w[i] * (b * ((i + 1) - mean) + 1.0) * y[i];
                 }
-                ys[at] = fit;
-                return true;
+            } else {
+                for (int i = first; i <= last; i++) {
+                    fit += w[i] * y[i];
+                }
             }
         } else {
-            for (int j = nleft; j <= nright; j++) {
-                w[j - 1] /= a;
+            for (int i = first; i <= last; i++) {
+                fit += w[i] / a * y[i];
             }
-        }
-        for (int j = nleft; j <= nright; j++) {
-            fit += w[j - 1] * y[j - 1];
         }
         ys[at] = fit;
         return true;
+    }
+
+    /** Half-widths up to this one have their tricube weights in {@link #TRICUBE}. */
+    private static final int TABULATED_HALF_WIDTH = 128;
+
+    /**
+     * {@code TRICUBE[h][r]}: the neighbourhood weight of [1] {@code stlest} at whole distance
+     * {@code r ≤ 0.999 h} from the fitted position, for half-width {@code h}. Every distance and
+     * half-width STL meets is whole, and these cover its windows for every frequency but the
+     * longest seasonal windows, so the divisions and cubes of the weights are done once here
+     * rather than at every neighbour of every local fit.
+     */
+    private static final double[][] TRICUBE = new double[TABULATED_HALF_WIDTH + 1][];
+
+    static {
+        for (int h = 0; h <= TABULATED_HALF_WIDTH; h++) {
+            TRICUBE[h] = computeTricubeWeights(h, h);
+        }
+    }
+
+    /** {@code weights[r]} for whole distances {@code r ≤ min(farthest, 0.999 h)} (beyond: unused). */
+    private static double[] tricubeWeights(int halfWidth, int farthest) {
+        return halfWidth <= TABULATED_HALF_WIDTH ? TRICUBE[halfWidth] : computeTricubeWeights(halfWidth, farthest);
+    }
+
+    private static double[] computeTricubeWeights(int halfWidth, int farthest) {
+        double h = halfWidth;
+        double h9 = Stl.SINGLE_0_999 * h;
+        double h1 = Stl.SINGLE_0_001 * h;
+        double[] weights = new double[farthest + 1];
+        for (int distance = 0; distance <= farthest; distance++) {
+            double r = distance;
+            if (r <= h9) {
+                if (r <= h1) {
+                    weights[distance] = 1;
+                } else {
+                    // [3] tricube weight (1 − (r/h)³)³; 1 within 0.001 h and 0 beyond 0.999 h as in [1]
+                    double q = r / h;
+                    double t = 1 - q * q * q;
+                    weights[distance] = t * t * t;
+                }
+            }
+        }
+        return weights;
     }
 }
