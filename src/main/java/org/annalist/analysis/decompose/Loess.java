@@ -41,11 +41,12 @@ final class Loess {
         int newnj = Math.min(jump, n - 1);
         int nleft = 0;
         int nright = 0;
+        LocalFits fits = new LocalFits(y, n, len, degree, userw, rw, ys, offset, work);
         if (len >= n) {
             nleft = 1;
             nright = n;
             for (int i = 1; i <= n; i += newnj) {
-                fitAt(y, n, len, degree, i, ys, offset, nleft, nright, work, userw, rw);
+                fits.at(i, nleft, nright);
             }
         } else if (newnj == 1) {
             int nsh = (len + 1) / 2;
@@ -56,7 +57,7 @@ final class Loess {
                     nleft++;
                     nright++;
                 }
-                fitAt(y, n, len, degree, i, ys, offset, nleft, nright, work, userw, rw);
+                fits.at(i, nleft, nright);
             }
         } else {
             int nsh = (len + 1) / 2;
@@ -71,9 +72,10 @@ final class Loess {
                     nleft = i - nsh + 1;
                     nright = len + i - nsh;
                 }
-                fitAt(y, n, len, degree, i, ys, offset, nleft, nright, work, userw, rw);
+                fits.at(i, nleft, nright);
             }
         }
+        fits.finish();
         // [1] stless: between the evaluated points the smooth is interpolated linearly
         if (newnj != 1) {
             for (int i = 1; i <= n - newnj; i += newnj) {
@@ -104,6 +106,75 @@ final class Loess {
     }
 
     /**
+     * The local fits of one {@link #smooth}, run two at a time ({@link #estimatePair}) where two
+     * neighbourhoods in a row have the same size, else one at a time, each as [1] {@code stless}
+     * would run it. A fit is held back until the next one shows whether the two can go together;
+     * none reads what another writes, so the order in which they are written does not matter.
+     */
+    private static final class LocalFits {
+        private final double[] y;
+        private final int n;
+        private final int len;
+        private final int degree;
+        private final boolean userw;
+        private final double[] rw;
+        private final double[] ys;
+        private final int offset;
+        private final double[] work;
+        private final double[] secondWork;
+        private int heldAt;                 // 1-based position of the fit held back, 0 for none
+        private int heldLeft;
+        private int heldRight;
+
+        LocalFits(double[] y, int n, int len, int degree, boolean userw, double[] rw, double[] ys, int offset,
+                  double[] work) {
+            this.y = y;
+            this.n = n;
+            this.len = len;
+            this.degree = degree;
+            this.userw = userw;
+            this.rw = rw;
+            this.ys = ys;
+            this.offset = offset;
+            this.work = work;
+            this.secondWork = new double[Math.min(len, n)];
+        }
+
+        /** The fit at position {@code i} (1-based) from neighbours {@code nleft..nright}. */
+        void at(int i, int nleft, int nright) {
+            if (heldAt == 0) {
+                hold(i, nleft, nright);
+                return;
+            }
+            if (nright - nleft == heldRight - heldLeft) {
+                if (!estimatePair(y, n, len, degree, userw, rw, heldAt, heldLeft, i, nleft, nright - nleft + 1,
+                        work, secondWork, ys, offset)) {
+                    fitAt(y, n, len, degree, heldAt, ys, offset, heldLeft, heldRight, work, userw, rw);
+                    fitAt(y, n, len, degree, i, ys, offset, nleft, nright, work, userw, rw);
+                }
+                heldAt = 0;
+                return;
+            }
+            fitAt(y, n, len, degree, heldAt, ys, offset, heldLeft, heldRight, work, userw, rw);
+            hold(i, nleft, nright);
+        }
+
+        /** Runs the fit held back, if any. */
+        void finish() {
+            if (heldAt != 0) {
+                fitAt(y, n, len, degree, heldAt, ys, offset, heldLeft, heldRight, work, userw, rw);
+                heldAt = 0;
+            }
+        }
+
+        private void hold(int i, int nleft, int nright) {
+            heldAt = i;
+            heldLeft = nleft;
+            heldRight = nright;
+        }
+    }
+
+    /**
      * [1] {@code stlest}: the local fit at position {@code xs} (1-based, may lie outside 1..n) from
      * neighbours {@code nleft..nright} (1-based), written to {@code ys[at]}.
      *
@@ -125,7 +196,7 @@ final class Loess {
         int farthest = Math.max(xs - nleft, nright - xs);
         int halfWidth = len > n ? farthest + (len - n) / 2 : farthest;   // integer division, as in [1]
         double h = halfWidth;
-        double h9 = Stl.SINGLE_0_999 * h;
+        int reach = reach(halfWidth);
         double[] tricube = tricubeWeights(halfWidth, farthest);
         // arrays are 0-based: neighbour j (1-based, as in [1]) is at index i = j − 1
         int first = nleft - 1;
@@ -134,7 +205,7 @@ final class Loess {
         for (int i = first; i <= last; i++) {
             int distance = Math.abs((i + 1) - xs);
             double weight = 0;
-            if (distance <= h9) {
+            if (distance <= reach) {
                 weight = tricube[distance];
                 if (userw) {
                     weight = rw[i] * weight;
@@ -180,6 +251,111 @@ final class Loess {
         return true;
     }
 
+    /**
+     * Two fits of {@link #estimate} at once, at positions {@code xs} and {@code xs2} (1-based) of
+     * the same series, from neighbourhoods of the same {@code size} starting at {@code nleft} and
+     * {@code nleft2}, written to {@code ys[offset + xs − 1]} and {@code ys[offset + xs2 − 1]}.
+     * Each fit's sums add the same terms in the same order as {@link #estimate}, so the bits are
+     * the same; the two run in one loop so that the processor can add to one sum while the other's
+     * last addition is still under way (each sum alone waits on its previous addition).
+     *
+     * @param w  scratch for the first fit's weights, at least {@code size} long
+     * @param w2 scratch for the second fit's weights, at least {@code size} long
+     * @return false, with nothing written, where {@link #estimate} would leave its usual path for
+     *         either fit (every weight zero, a half-width of zero, a degenerate local line): the
+     *         caller then runs both fits one at a time
+     */
+    private static boolean estimatePair(double[] y, int n, int len, int degree, boolean userw, double[] rw, int xs,
+                                        int nleft, int xs2, int nleft2, int size, double[] w, double[] w2, double[] ys,
+                                        int offset) {
+        double range = n - 1.0;
+        int farthest = Math.max(xs - nleft, nleft + size - 1 - xs);
+        int farthest2 = Math.max(xs2 - nleft2, nleft2 + size - 1 - xs2);
+        int halfWidth = len > n ? farthest + (len - n) / 2 : farthest;
+        int halfWidth2 = len > n ? farthest2 + (len - n) / 2 : farthest2;
+        if (degree > 0 && (halfWidth == 0 || halfWidth2 == 0)) {
+            return false;
+        }
+        int reach = reach(halfWidth);
+        int reach2 = reach(halfWidth2);
+        double[] tricube = tricubeWeights(halfWidth, farthest);
+        double[] tricube2 = tricubeWeights(halfWidth2, farthest2);
+        // m counts the neighbours; the first fit's neighbour m is at index first + m, the second's at first2 + m
+        int first = nleft - 1;
+        int first2 = nleft2 - 1;
+        double a = 0;
+        double a2 = 0;
+        for (int m = 0; m < size; m++) {
+            int i = first + m;
+            int i2 = first2 + m;
+            int distance = Math.abs((i + 1) - xs);
+            int distance2 = Math.abs((i2 + 1) - xs2);
+            double weight = 0;
+            double weight2 = 0;
+            if (distance <= reach) {
+                weight = tricube[distance];
+                if (userw) {
+                    weight = rw[i] * weight;
+                }
+                a += weight;
+            }
+            if (distance2 <= reach2) {
+                weight2 = tricube2[distance2];
+                if (userw) {
+                    weight2 = rw[i2] * weight2;
+                }
+                a2 += weight2;
+            }
+            w[m] = weight;
+            w2[m] = weight2;
+        }
+        if (a <= 0 || a2 <= 0) {
+            return false;
+        }
+        double fit = 0;
+        double fit2 = 0;
+        if (degree > 0) {
+            double mean = 0;
+            double mean2 = 0;
+            for (int m = 0; m < size; m++) {
+                double weight = w[m] / a;
+                double weight2 = w2[m] / a2;
+                w[m] = weight;
+                w2[m] = weight2;
+                mean += weight * (first + m + 1);
+                mean2 += weight2 * (first2 + m + 1);
+            }
+            double c = 0;
+            double c2 = 0;
+            for (int m = 0; m < size; m++) {
+                double fromMean = (first + m + 1) - mean;
+                double fromMean2 = (first2 + m + 1) - mean2;
+                c += w[m] * fromMean * fromMean;
+                c2 += w2[m] * fromMean2 * fromMean2;
+            }
+            double least = Stl.SINGLE_0_001 * range;
+            if (!(Math.sqrt(c) > least && Math.sqrt(c2) > least)) {
+                return false;
+            }
+            double b = (xs - mean) / c;
+            double b2 = (xs2 - mean2) / c2;
+            for (int m = 0; m < size; m++) {
+                int i = first + m;
+                int i2 = first2 + m;
+                fit += w[m] * (b * ((i + 1) - mean) + 1.0) * y[i];
+                fit2 += w2[m] * (b2 * ((i2 + 1) - mean2) + 1.0) * y[i2];
+            }
+        } else {
+            for (int m = 0; m < size; m++) {
+                fit += w[m] / a * y[first + m];
+                fit2 += w2[m] / a2 * y[first2 + m];
+            }
+        }
+        ys[offset + xs - 1] = fit;
+        ys[offset + xs2 - 1] = fit2;
+        return true;
+    }
+
     /** Half-widths up to this one have their tricube weights in {@link #TRICUBE}. */
     private static final int TABULATED_HALF_WIDTH = 128;
 
@@ -196,6 +372,14 @@ final class Loess {
         for (int h = 0; h <= TABULATED_HALF_WIDTH; h++) {
             TRICUBE[h] = computeTricubeWeights(h, h);
         }
+    }
+
+    /**
+     * The farthest whole distance with a weight: [1] gives weight to neighbours within 0.999 h,
+     * and a whole distance is within it exactly when it is within its whole part.
+     */
+    private static int reach(int halfWidth) {
+        return (int) (Stl.SINGLE_0_999 * halfWidth);
     }
 
     /** {@code weights[r]} for whole distances {@code r ≤ min(farthest, 0.999 h)} (beyond: unused). */
