@@ -1,5 +1,7 @@
 package org.annalist.analysis.trend;
 
+import org.annalist.analysis.Ranks;
+
 
 /**
  * Kendall's S of a sequence against time, and its variance under no trend with the ties
@@ -24,7 +26,7 @@ record KendallScore(int n, long s, double variance, int tieGroups) {
         int n = v.length;
         long[] keys = new long[n];
         for (int i = 0; i < n; i++) {
-            keys[i] = orderKey(v[i]);
+            keys[i] = Ranks.orderKey(v[i]);
         }
         long s = sortCountingScore(keys);
         double[] sorted = new double[n];
@@ -70,15 +72,7 @@ record KendallScore(int n, long s, double variance, int tieGroups) {
         return v;
     }
 
-    /**
-     * A long whose order is {@link Double#compare}'s order of the (non-NaN) values: the bits of a
-     * negative value have their magnitude bits flipped, so a larger magnitude sorts lower.
-     */
-    private static long orderKey(double value) {
-        long bits = Double.doubleToRawLongBits(value);
-        return bits ^ ((bits >> 63) & Long.MAX_VALUE);
-    }
-
+    /** The value of a key of {@link Ranks#orderKey} (of a value that is not NaN). */
     private static double valueOf(long key) {
         return Double.longBitsToDouble(key ^ ((key >> 63) & Long.MAX_VALUE));
     }
