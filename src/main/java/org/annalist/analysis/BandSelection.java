@@ -1,6 +1,8 @@
 package org.annalist.analysis;
 
 import java.util.Arrays;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReferenceArray;
 
 /**
  * Order statistics of a large array from a narrow band of its values, as Floyd and Rivest's
@@ -37,7 +39,7 @@ final class BandSelection {
      * deviations of a sample rank (at most √s / 2 for a sample of s): three leave a wanted rank
      * outside the band in about one search of a thousand (our rule).
      */
-    private static final double MARGIN_SDS = 3;
+    static final double MARGIN_SDS = 3;
 
     private BandSelection() {
     }
@@ -81,28 +83,12 @@ final class BandSelection {
      * lies outside them or {@code a} holds NaN.
      */
     private static boolean fromBand(double[] a, double low, double high, long expected, int[] ranks, double[] values) {
-        int n = a.length;
-        double[] band = new double[(int) Math.min(n, expected + expected / 2 + 16)];
-        int below = 0;
-        int above = 0;
-        int kept = 0;
-        for (int i = 0; i < n; i++) {
-            double v = a[i];
-            if (v < low) {
-                below++;
-            } else if (v <= high) {
-                if (kept == band.length) {
-                    band = Arrays.copyOf(band, Math.min(n, 2 * kept));   // more between the bounds than expected
-                }
-                band[kept++] = v;
-            } else {
-                above++;
-            }
-        }
-        if (below + kept + above != n) {
+        Band band = Band.of(a, low, high, expected);
+        if (band == null) {
             return false;   // NaN, which no comparison counts
         }
-        if (ranks[0] < below || ranks[ranks.length - 1] >= below + kept) {
+        int below = band.below();
+        if (ranks[0] < below || ranks[ranks.length - 1] >= below + band.size()) {
             return false;
         }
         // the values below the band are smaller than all of it, those above it larger: a rank in the
@@ -111,11 +97,42 @@ final class BandSelection {
         for (int i = 0; i < ranks.length; i++) {
             inBand[i] = ranks[i] - below;
         }
-        OrderStatistics.selectAll(band, 0, kept - 1, inBand, 0, inBand.length - 1);
+        OrderStatistics.selectAll(band.values(), 0, band.size() - 1, inBand, 0, inBand.length - 1);
         for (int i = 0; i < ranks.length; i++) {
-            values[i] = band[inBand[i]];
+            values[i] = band.values()[inBand[i]];
         }
         return true;
+    }
+
+    /**
+     * The values of an array within [low, high], in the order found, and how many lie below low.
+     *
+     * @param values holds them in its first {@code size} places
+     */
+    record Band(double[] values, int size, int below) {
+
+        /** The band of {@code a} (about {@code expected} values); null when {@code a} holds NaN. */
+        static Band of(double[] a, double low, double high, long expected) {
+            int n = a.length;
+            double[] band = new double[(int) Math.min(n, expected + expected / 2 + 16)];
+            int below = 0;
+            int above = 0;
+            int kept = 0;
+            for (int i = 0; i < n; i++) {
+                double v = a[i];
+                if (v < low) {
+                    below++;
+                } else if (v <= high) {
+                    if (kept == band.length) {
+                        band = Arrays.copyOf(band, Math.min(n, 2 * kept));   // more between the bounds than expected
+                    }
+                    band[kept++] = v;
+                } else {
+                    above++;
+                }
+            }
+            return below + kept + above == n ? new Band(band, kept, below) : null;
+        }
     }
 
     /** How many values the sample of an array of {@code n} takes. */
@@ -143,9 +160,34 @@ final class BandSelection {
         return places;
     }
 
+    /**
+     * The places lately drawn, for a few lengths: the trend of a monthly series takes the plain
+     * slopes of its values and the seasonal ones of its observations, and other series of the same
+     * length take the same places again.
+     */
+    private static final AtomicReferenceArray<SamplePlaces> RECENT_PLACES = new AtomicReferenceArray<>(4);
+    private static final AtomicInteger NEXT_REPLACED = new AtomicInteger();
+
+    private record SamplePlaces(int n, int size, int[] places) {
+    }
+
+    /** {@link #samplePlaces}, drawn again only for a length not lately seen (each place costs a 64-bit division). */
+    private static int[] placesFor(int n, int size) {
+        for (int i = 0; i < RECENT_PLACES.length(); i++) {
+            SamplePlaces recent = RECENT_PLACES.get(i);
+            if (recent != null && recent.n() == n && recent.size() == size) {
+                return recent.places();
+            }
+        }
+        int[] places = samplePlaces(n, size);
+        RECENT_PLACES.set(Math.floorMod(NEXT_REPLACED.getAndIncrement(), RECENT_PLACES.length()),
+                new SamplePlaces(n, size, places));
+        return places;
+    }
+
     /** The values of {@code a} at {@link #samplePlaces}; null when one is NaN. */
-    private static double[] sample(double[] a, int size) {
-        int[] places = samplePlaces(a.length, size);
+    static double[] sample(double[] a, int size) {
+        int[] places = placesFor(a.length, size);
         double[] sample = new double[size];
         for (int i = 0; i < size; i++) {
             double v = a[places[i]];

@@ -33,7 +33,7 @@ public final class OrderStatistics {
      * ({@link BandSelection}); below, a sample would save less than it costs (our rule, from timing
      * the pairwise slopes of monthly series: 2,280 seasonal and 28,680 plain pairs for 20 years).
      */
-    private static final int SAMPLED_FROM = 2048;
+    static final int SAMPLED_FROM = 2048;
 
     private OrderStatistics() {
     }
@@ -124,7 +124,7 @@ public final class OrderStatistics {
      * Moves the values of a[lo..hi] below {@code pivot} (or, with {@code andEqual}, at or below it)
      * to the front; returns the index after them.
      */
-    private static int moveToFront(double[] a, int lo, int hi, double pivot, boolean andEqual) {
+    static int moveToFront(double[] a, int lo, int hi, double pivot, boolean andEqual) {
         int next = lo;
         for (int i = lo; i <= hi; i++) {
             double v = a[i];

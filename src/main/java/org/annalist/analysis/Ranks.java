@@ -24,11 +24,7 @@ public final class Ranks {
     /** Ranks 1..n of {@code x} (no NaN), ties given their mean rank. */
     public static double[] of(double[] x) {
         int n = x.length;
-        Integer[] order = new Integer[n];
-        for (int i = 0; i < n; i++) {
-            order[i] = i;
-        }
-        Arrays.sort(order, (a, b) -> Double.compare(x[a], x[b]));
+        int[] order = sortedOrder(x);
         double[] ranks = new double[n];
         for (int i = 0; i < n; ) {
             int j = i;
@@ -43,6 +39,52 @@ public final class Ranks {
             i = j + 1;
         }
         return ranks;
+    }
+
+    /**
+     * The positions of {@code x} in the order of {@link Double#compare}, equal values in the order
+     * of their positions: what a stable sort of the positions by that comparison gives, by merging
+     * runs of doubling length on long keys of the same order (no boxed positions, no comparator).
+     */
+    static int[] sortedOrder(double[] x) {
+        int n = x.length;
+        long[] keys = new long[n];
+        int[] from = new int[n];
+        for (int i = 0; i < n; i++) {
+            keys[i] = orderKey(x[i]);
+            from[i] = i;
+        }
+        int[] to = new int[n];
+        for (int width = 1; width < n; width *= 2) {
+            for (int lo = 0; lo < n; lo += 2 * width) {
+                int mid = Math.min(lo + width, n);
+                int hi = Math.min(lo + 2 * width, n);
+                int i = lo;
+                int j = mid;
+                for (int k = lo; k < hi; k++) {
+                    // the left run first among equal keys: stable
+                    if (j >= hi || (i < mid && keys[from[i]] <= keys[from[j]])) {
+                        to[k] = from[i++];
+                    } else {
+                        to[k] = from[j++];
+                    }
+                }
+            }
+            int[] swap = from;
+            from = to;
+            to = swap;
+        }
+        return from;
+    }
+
+    /**
+     * A long whose order is {@link Double#compare}'s order of the values (NaN, taken as one value,
+     * last): the bits of a negative value have their magnitude bits flipped, so that a larger
+     * magnitude sorts lower.
+     */
+    public static long orderKey(double value) {
+        long bits = Double.doubleToLongBits(value);
+        return bits ^ ((bits >> 63) & Long.MAX_VALUE);
     }
 
     /** Σ over groups of tied values of (t³ − t). */

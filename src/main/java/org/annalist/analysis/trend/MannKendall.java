@@ -1,7 +1,6 @@
 package org.annalist.analysis.trend;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import org.annalist.analysis.Ranks;
 import org.annalist.analysis.TestResult;
@@ -85,7 +84,7 @@ public final class MannKendall {
      * already known (NaN to compute it): the corrections detrend with it.
      */
     public static Result test(double[] x, Correction correction, double senSlopePerStep) {
-        double[] observed = Arrays.stream(x).filter(d -> !Double.isNaN(d)).toArray();
+        double[] observed = KendallScore.observed(x);
         int n = observed.length;
         if (n < 3) {
             throw new IllegalArgumentException("the Mann-Kendall test needs at least 3 values, got " + n);

@@ -1,8 +1,7 @@
 package org.annalist.analysis.trend;
 
-import java.util.HashMap;
-import java.util.Map;
-import java.util.TreeSet;
+import java.util.Arrays;
+import org.annalist.analysis.CentralBand;
 import org.annalist.analysis.OrderStatistics;
 import org.apache.commons.math3.distribution.NormalDistribution;
 
@@ -59,39 +58,93 @@ public final class SenSlope {
      */
     public static Result of(double[] x, double periodsPerYear, double varianceS) {
         double[] slopes = pairwise(x, 1);
-        return interval(slopes, periodsPerYear, varianceS, false);
+        return interval(slopes, null, periodsPerYear, varianceS, false);
     }
 
     /** The seasonal Sen slope [3]: within-season pairs only, time in years. */
     public static Result seasonal(double[] x, int period, double varianceS) {
         double[] slopes = pairwise(x, period);
-        return interval(slopes, period, varianceS, true);
+        return interval(slopes, null, period, varianceS, true);
     }
 
     /**
+     * How far beyond the median's core (about 4.7 % of the slopes either side of the middle for
+     * the 28,680 slopes of 20 monthly years) the median's pass keeps slopes for the interval
+     * limits, as a fraction of the slopes. Gilbert's limits lie C/2 ranks from the middle; on 2,000
+     * monthly series of 20 years C/N′ (with the serial correction) ran from 0.07 to 0.21, half of
+     * them below 0.1, so most limits lie within 10 % of the middle. Of reaches 0.03, 0.05, 0.07 and
+     * 0.11, 0.05 took the least time on those series (our rule); limits further out are selected
+     * from all the slopes in a pass of their own, exactly as well.
+     */
+    private static final double LIMITS_REACH = 0.05;
+
+    /**
      * The pairwise slopes of a series, computed once: their median (which the serial-correlation
-     * correction of the Kendall test needs first) and then the estimate with its interval.
+     * correction of the Kendall test needs first) and then the estimate with its interval. The
+     * median's pass over the slopes keeps those around the middle ({@link CentralBand}), from which
+     * the interval's limits are then selected without another pass.
      */
     public static final class Pairwise {
         private final double[] slopes;
+        /**
+         * No slope is NaN or −0.0 ({@link #slopesHaveOneBitPatternPerValue}): every order statistic
+         * then has one bit pattern whichever search finds it, so the kept band may serve the
+         * limits. Otherwise they are selected as they always were, for the same bits.
+         */
+        private final boolean oneBitPatternPerValue;
+        /** The slopes around the median, kept by {@link #medianPerStep} for {@link #estimate}; null until then. */
+        private CentralBand middle;
 
-        private Pairwise(double[] slopes) {
+        private Pairwise(double[] slopes, boolean oneBitPatternPerValue) {
             this.slopes = slopes;
+            this.oneBitPatternPerValue = oneBitPatternPerValue;
         }
 
         /** Median slope per period. */
         public double medianPerStep() {
+            if (oneBitPatternPerValue) {
+                middle = CentralBand.around(slopes, LIMITS_REACH);
+                int n = slopes.length;
+                int[] ranks = n % 2 == 1 ? new int[] {n / 2} : new int[] {n / 2 - 1, n / 2};
+                double[] values = new double[ranks.length];
+                if (middle != null && middle.select(ranks, values)) {
+                    // [1] the median of the pairwise slopes, as medianOf takes it
+                    return n % 2 == 1 ? values[0] : (values[0] + values[1]) / 2;
+                }
+            }
             return medianOf(slopes);
         }
 
         /** The estimate per year with the Gilbert interval from {@code varianceS}. */
         public Result estimate(double periodsPerYear, double varianceS) {
-            return interval(slopes, periodsPerYear, varianceS, false);
+            return interval(slopes, middle, periodsPerYear, varianceS, false);
         }
     }
 
     public static Pairwise pairwise(double[] x) {
-        return new Pairwise(pairwise(x, 1));
+        return new Pairwise(pairwise(x, 1), slopesHaveOneBitPatternPerValue(x));
+    }
+
+    /** Values of this size or more (or +0.0) give pairwise slopes of one bit pattern per value. */
+    private static final double SMALLEST_PLAIN = 0x1p-960;
+
+    /**
+     * Whether no pairwise slope of {@code x} can be NaN or −0.0. With finite observed values each
+     * +0.0 or at least 2^−960 in size: two equal values differ by +0.0, two unequal ones (multiples
+     * of 2^−1012 both) by at least 2^−1012, which over fewer than 2^31 steps still rounds to a
+     * non-zero slope; and no difference of finite values is NaN (one that overflows is ±∞, of one
+     * bit pattern each).
+     */
+    static boolean slopesHaveOneBitPatternPerValue(double[] x) {
+        for (double v : x) {
+            if (Double.isNaN(v)) {
+                continue;   // missing: it makes no slope
+            }
+            if (Double.isInfinite(v) || (v == 0 ? Double.doubleToRawLongBits(v) != 0 : Math.abs(v) < SMALLEST_PLAIN)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Median slope per step of a gap-free sequence (used to detrend in the Hamed–Rao correction). */
@@ -137,12 +190,25 @@ public final class SenSlope {
         }
         double[] slopes = new double[(int) count];
         int k = 0;
+        if (stride == 1 && count == (long) n * (n - 1) / 2) {
+            // no value missing: the same slopes in the same order, without testing each value for NaN
+            for (int i = 0; i < n; i++) {
+                double first = x[i];
+                for (int j = i + 1; j < n; j++) {
+                    // [1] the pair's slope over the time between them
+                    slopes[k++] = (x[j] - first) / (j - i);
+                }
+            }
+            return slopes;
+        }
         for (int i = 0; i < n; i++) {
-            if (!Double.isNaN(x[i])) {
+            double first = x[i];
+            if (!Double.isNaN(first)) {
                 for (int j = i + stride; j < n; j += stride) {
-                    if (!Double.isNaN(x[j])) {
+                    double second = x[j];
+                    if (!Double.isNaN(second)) {
                         // [1] the pair's slope over the real time between them ([3] with stride = period)
-                        slopes[k++] = (x[j] - x[i]) / (j - i);
+                        slopes[k++] = (second - first) / (j - i);
                     }
                 }
             }
@@ -150,30 +216,51 @@ public final class SenSlope {
         return slopes;
     }
 
-    private static Result interval(double[] slopes, double periodsPerYear, double varianceS, boolean seasonal) {
+    /**
+     * @param middle the slopes around the median kept by its pass, to select the limits from (null
+     *               when there are none, or when the slopes may hold −0.0 or NaN)
+     */
+    private static Result interval(double[] slopes, CentralBand middle, double periodsPerYear, double varianceS,
+                                   boolean seasonal) {
         int pairs = slopes.length;
         // [2] §16.5: C = z_{0.975} √Var(S); limits at ranks M1 = (N′ − C)/2 and M2 + 1 = (N′ + C)/2 + 1
         double c = Z_975 * Math.sqrt(varianceS);
         double lowerRank = clip((pairs - c) / 2, pairs);
         double upperRank = clip((pairs + c) / 2 + 1, pairs);
         // Only the order statistics the estimate needs: the median and the neighbours of each limit's rank.
-        TreeSet<Integer> ranks = new TreeSet<>();
-        ranks.add((pairs - 1) / 2);
-        ranks.add(pairs / 2);
-        for (double r : new double[] {lowerRank, upperRank}) {
-            ranks.add((int) Math.floor(r) - 1);
-            ranks.add(Math.min(pairs - 1, (int) Math.floor(r)));
-        }
-        int[] wanted = ranks.stream().mapToInt(Integer::intValue).toArray();
-        double[] values = OrderStatistics.select(slopes, wanted);
-        Map<Integer, Double> at = new HashMap<>();
-        for (int i = 0; i < wanted.length; i++) {
-            at.put(wanted[i], values[i]);
+        int[] wanted = ascendingDistinct((pairs - 1) / 2, pairs / 2, (int) Math.floor(lowerRank) - 1,
+                Math.min(pairs - 1, (int) Math.floor(lowerRank)), (int) Math.floor(upperRank) - 1,
+                Math.min(pairs - 1, (int) Math.floor(upperRank)));
+        double[] values = new double[wanted.length];
+        if (middle == null || !middle.select(wanted, values)) {
+            values = OrderStatistics.select(slopes, wanted);
         }
         // [1] the median of the slopes (the mean of the two middle ones for an even count)
-        double median = (at.get((pairs - 1) / 2) + at.get(pairs / 2)) / 2;
-        return new Result(median * periodsPerYear, atRank(at, lowerRank, pairs) * periodsPerYear,
-                atRank(at, upperRank, pairs) * periodsPerYear, pairs, seasonal);
+        double median = (valueAt(wanted, values, (pairs - 1) / 2) + valueAt(wanted, values, pairs / 2)) / 2;
+        return new Result(median * periodsPerYear, atRank(wanted, values, lowerRank, pairs) * periodsPerYear,
+                atRank(wanted, values, upperRank, pairs) * periodsPerYear, pairs, seasonal);
+    }
+
+    /** The ranks in ascending order, each once. */
+    private static int[] ascendingDistinct(int... ranks) {
+        int[] sorted = ranks.clone();
+        Arrays.sort(sorted);
+        int distinct = 0;
+        for (int rank : sorted) {
+            if (distinct == 0 || rank != sorted[distinct - 1]) {
+                sorted[distinct++] = rank;
+            }
+        }
+        return Arrays.copyOf(sorted, distinct);
+    }
+
+    /** The selected value of {@code rank}, one of {@code wanted}. */
+    private static double valueAt(int[] wanted, double[] values, int rank) {
+        int i = 0;
+        while (wanted[i] != rank) {
+            i++;
+        }
+        return values[i];
     }
 
     private static double clip(double rank, int pairs) {
@@ -181,11 +268,12 @@ public final class SenSlope {
     }
 
     /** The value at 1-based rank {@code r}, interpolated linearly between its neighbours (our rule). */
-    private static double atRank(Map<Integer, Double> at, double r, int pairs) {
+    private static double atRank(int[] wanted, double[] values, double r, int pairs) {
         int below = (int) Math.floor(r);
         if (below >= pairs) {
-            return at.get(pairs - 1);
+            return valueAt(wanted, values, pairs - 1);
         }
-        return at.get(below - 1) + (r - below) * (at.get(below) - at.get(below - 1));
+        double lowerValue = valueAt(wanted, values, below - 1);
+        return lowerValue + (r - below) * (valueAt(wanted, values, below) - lowerValue);
     }
 }
