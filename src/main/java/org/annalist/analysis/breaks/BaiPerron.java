@@ -118,34 +118,37 @@ public final class BaiPerron {
         }
         // strucchange: at most ceil(n / h) − 2 breaks
         int maxM = Math.min(maxBreaks, Math.max(0, (int) Math.ceil(n / (double) h) - 2));
-        // [2] §3: the triangular table of segment costs, stored by segment end so
-        // that the inner loop below reads it in order: byEnd[j][s] = RSS of s..j.
-        double[][] byEnd = new double[n][];
-        for (int j = 0; j < n; j++) {
-            byEnd[j] = new double[Math.max(0, j - h + 2)];
-            for (int start = 0; start <= j - h + 1; start++) {
-                byEnd[j][start] = cost.rss(start, j);
-            }
-        }
+        // [2] §3: SSR(T_{m,j}) = min over i of SSR(T_{m−1,i}) + SSR(i+1..j). The minimum for an end j
+        // reads the m−1 row only before j, so the ends are taken in order and each needs one row of
+        // segment costs, those ending at j: no table of all n²/2 segments is kept.
+        double[] ending = new double[n];   // ending[s] = RSS of s..j, for the current end j
         double[][] best = new double[maxM + 1][n];
         int[][] from = new int[maxM + 1][n];
-        for (int j = 0; j < n; j++) {
-            best[0][j] = j >= h - 1 ? byEnd[j][0] : Double.POSITIVE_INFINITY;
-        }
-        for (int m = 1; m <= maxM; m++) {
-            double[] previous = best[m - 1];
+        for (int m = 0; m <= maxM; m++) {
             Arrays.fill(best[m], Double.POSITIVE_INFINITY);
             Arrays.fill(from[m], -1);
-            // the most breaks are only ever read at the series' end; fewer are also read earlier
-            for (int j = m == maxM ? n - 1 : (m + 1) * h - 1; j < n; j++) {
-                double[] ending = byEnd[j];
+        }
+        for (int j = h - 1; j < n; j++) {
+            // Ends that nothing reads are skipped: an optimum is read at the series' end (for the
+            // BIC), and before it only where a last regime of h values can still follow.
+            if (j > n - 1 - h && j != n - 1) {
+                continue;
+            }
+            // no break: the segment 0..j; the last of m ≥ 1 regimes starts at m·h or later
+            cost.rssEndingAt(j, 0, 0, ending);
+            cost.rssEndingAt(j, h, j - h + 1, ending);
+            best[0][j] = ending[0];
+            for (int m = 1; m <= maxM; m++) {
+                if (m == maxM && j != n - 1) {
+                    continue;   // the most breaks are only read at the series' end
+                }
+                double[] previous = best[m - 1];
                 // the last regime is i+1..j with j − i ≥ h; the m earlier regimes need m·h values
                 double bestHere = Double.POSITIVE_INFINITY;
                 int bestFrom = -1;
                 for (int i = m * h - 1; i <= j - h; i++) {
-                    // [2] §3: SSR(T_{m,j}) = min over i of SSR(T_{m−1,i}) + SSR(i+1..j)
                     double candidate = previous[i] + ending[i + 1];
-                    if (candidate < bestHere) {
+                    if (candidate < bestHere) {   // strict: the earliest of equal minima
                         bestHere = candidate;
                         bestFrom = i;
                     }
