@@ -91,6 +91,16 @@ final class SegmentCost {
      * operation for operation, so every value is the same bit for bit; a test holds the two equal.
      */
     void rssEndingAt(int to, int firstStart, int lastStart, double[] into) {
+        rssEndingAt(to, firstStart, lastStart, into, into);
+    }
+
+    /**
+     * As {@link #rssEndingAt(int, int, int, double[])}, and also each segment's cost about its
+     * mean, the level model's {@link #rss}, into {@code levelInto[start]} ({@code into} itself when
+     * only one row is wanted). The line's cost starts from the mean's, so one pass gives both
+     * models' rows for what the line's alone costs.
+     */
+    void rssEndingAt(int to, int firstStart, int lastStart, double[] into, double[] levelInto) {
         boolean levelOnly = model == BaiPerron.Model.LEVEL;
         double countTo = count[to + 1];
         double sumYTo = sumY[to + 1];
@@ -101,14 +111,17 @@ final class SegmentCost {
         for (int from = firstStart; from <= lastStart; from++) {
             double n = countTo - count[from];
             if (n < 1) {
+                levelInto[from] = 0;
                 into[from] = 0;
                 continue;
             }
             double sy = sumYTo - sumY[from];
             double syy = sumYYTo - sumYY[from];
             double level = syy - sy * sy / n;
+            double aboutMean = atLeastZero(level);
+            levelInto[from] = aboutMean;   // first: into may be the same row, and then the line's cost wins
             if (levelOnly || n < 2) {
-                into[from] = atLeastZero(level);
+                into[from] = aboutMean;
                 continue;
             }
             double st = sumTTo - sumT[from];
@@ -116,7 +129,7 @@ final class SegmentCost {
             double sty = sumTYTo - sumTY[from];
             double ctt = stt - st * st / n;
             double cty = sty - st * sy / n;
-            into[from] = ctt <= 0 ? atLeastZero(level) : atLeastZero(level - cty * cty / ctt);
+            into[from] = ctt <= 0 ? aboutMean : atLeastZero(level - cty * cty / ctt);
         }
     }
 

@@ -94,6 +94,20 @@ class BaiPerronTest {
     }
 
     @Test
+    void bothModelsTogetherAreEachModelsOwnFit() {
+        for (long seed = 1; seed <= 4; seed++) {
+            double[] y = stepsAndTrends(seed, 100 + 50 * (int) seed, seed % 2 == 1);
+            for (int[] minima : new int[][] {{3, 3}, {12, 12}, {2, 3}, {12, 13}}) {
+                BaiPerron.BothModels both = BaiPerron.fitBothModels(y, minima[0], minima[1]);
+                assertThat(both.level()).as("seed %d, minimum regimes %s", seed, Arrays.toString(minima))
+                        .isEqualTo(BaiPerron.withMinimumRegime(minima[0]).fit(y));
+                assertThat(both.levelAndSlope()).as("seed %d, minimum regimes %s", seed, Arrays.toString(minima))
+                        .isEqualTo(BaiPerron.withMinimumRegime(minima[1]).with(BaiPerron.Model.LEVEL_AND_SLOPE).fit(y));
+            }
+        }
+    }
+
+    @Test
     void equalCostsGoToTheEarliestBreaks() {
         double[] flat = new double[100];
         Arrays.fill(flat, 3);

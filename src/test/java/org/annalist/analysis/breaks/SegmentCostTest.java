@@ -49,6 +49,26 @@ class SegmentCostTest {
     }
 
     @Test
+    void theLinesRowComesWithTheLevelModelsRowBitForBit() {
+        for (long seed = 1; seed <= 3; seed++) {
+            double[] y = awkwardSeries(seed, 150);
+            SegmentCost line = new SegmentCost(y, BaiPerron.Model.LEVEL_AND_SLOPE);
+            SegmentCost level = new SegmentCost(y, BaiPerron.Model.LEVEL);
+            for (int to = 0; to < y.length; to++) {
+                double[] lineRow = new double[y.length];
+                double[] levelRow = new double[y.length];
+                line.rssEndingAt(to, 0, to, lineRow, levelRow);
+                for (int from = 0; from <= to; from++) {
+                    assertThat(Double.doubleToRawLongBits(lineRow[from])).as("line, seed %d, %d..%d", seed, from, to)
+                            .isEqualTo(Double.doubleToRawLongBits(line.rss(from, to)));
+                    assertThat(Double.doubleToRawLongBits(levelRow[from])).as("level, seed %d, %d..%d", seed, from, to)
+                            .isEqualTo(Double.doubleToRawLongBits(level.rss(from, to)));
+                }
+            }
+        }
+    }
+
+    @Test
     void aRowOfCostsFillsOnlyTheStartsAskedFor() {
         double[] y = awkwardSeries(4, 40);
         SegmentCost cost = new SegmentCost(y, BaiPerron.Model.LEVEL_AND_SLOPE);
