@@ -112,40 +112,121 @@ public final class BaiPerron {
         int n = y.length;
         int h = minimumRegime;
         SegmentCost cost = new SegmentCost(y, model);
-        int k = cost.parameters();
-        if (h <= k) {
-            throw new IllegalArgumentException("the minimum regime must exceed the " + k + " coefficients per regime");
-        }
-        // strucchange: at most ceil(n / h) − 2 breaks
-        int maxM = Math.min(maxBreaks, Math.max(0, (int) Math.ceil(n / (double) h) - 2));
-        // [2] §3: the triangular table of segment costs, stored by segment end so
-        // that the inner loop below reads it in order: byEnd[j][s] = RSS of s..j.
-        double[][] byEnd = new double[n][];
-        for (int j = 0; j < n; j++) {
-            byEnd[j] = new double[Math.max(0, j - h + 2)];
-            for (int start = 0; start <= j - h + 1; start++) {
-                byEnd[j][start] = cost.rss(start, j);
+        checkMinimumRegime(cost.parameters());
+        Programme programme = new Programme(n, h, maxBreaksFor(n));
+        double[] ending = new double[n];   // ending[s] = RSS of s..j, for the current end j
+        for (int j = h - 1; j < n; j++) {
+            if (programme.reads(j)) {
+                // no break: the segment 0..j; the last of m ≥ 1 regimes starts at m·h or later
+                cost.rssEndingAt(j, 0, 0, ending);
+                cost.rssEndingAt(j, h, j - h + 1, ending);
+                programme.end(j, ending);
             }
         }
-        double[][] best = new double[maxM + 1][n];
-        int[][] from = new int[maxM + 1][n];
-        for (int j = 0; j < n; j++) {
-            best[0][j] = j >= h - 1 ? byEnd[j][0] : Double.POSITIVE_INFINITY;
+        return programme.result(model, cost);
+    }
+
+    /** The fits of the two models to one series. */
+    public record BothModels(Result level, Result levelAndSlope) {
+    }
+
+    /**
+     * {@code withMinimumRegime(levelMinimumRegime).fit(y)} and
+     * {@code withMinimumRegime(slopeMinimumRegime).with(LEVEL_AND_SLOPE).fit(y)}, value for value,
+     * each with at most {@link #DEFAULT_MAX_BREAKS} breaks. When the two minimum regimes are equal,
+     * one pass over the segments gives both models' costs: a line's cost starts from the mean's.
+     *
+     * @throws IllegalArgumentException as {@link #fit} does, the level model's reasons first
+     */
+    public static BothModels fitBothModels(double[] y, int levelMinimumRegime, int slopeMinimumRegime) {
+        BaiPerron level = withMinimumRegime(levelMinimumRegime);
+        BaiPerron line = withMinimumRegime(slopeMinimumRegime).with(Model.LEVEL_AND_SLOPE);
+        int n = y.length;
+        int h = levelMinimumRegime;
+        if (h != slopeMinimumRegime || h <= 2 || n < h) {
+            return new BothModels(level.fit(y), line.fit(y));   // and any exception in fit's order
         }
-        for (int m = 1; m <= maxM; m++) {
-            double[] previous = best[m - 1];
-            Arrays.fill(best[m], Double.POSITIVE_INFINITY);
-            Arrays.fill(from[m], -1);
-            // the most breaks are only ever read at the series' end; fewer are also read earlier
-            for (int j = m == maxM ? n - 1 : (m + 1) * h - 1; j < n; j++) {
-                double[] ending = byEnd[j];
-                // the last regime is i+1..j with j − i ≥ h; the m earlier regimes need m·h values
+        SegmentCost cost = new SegmentCost(y, Model.LEVEL_AND_SLOPE);
+        Programme forLevel = new Programme(n, h, level.maxBreaksFor(n));
+        Programme forLine = new Programme(n, h, line.maxBreaksFor(n));
+        double[] levelEnding = new double[n];
+        double[] lineEnding = new double[n];
+        for (int j = h - 1; j < n; j++) {
+            if (forLevel.reads(j)) {
+                cost.rssEndingAt(j, 0, 0, lineEnding, levelEnding);
+                cost.rssEndingAt(j, h, j - h + 1, lineEnding, levelEnding);
+                forLevel.end(j, levelEnding);
+                forLine.end(j, lineEnding);
+            }
+        }
+        return new BothModels(forLevel.result(Model.LEVEL, cost), forLine.result(Model.LEVEL_AND_SLOPE, cost));
+    }
+
+    private void checkMinimumRegime(int coefficients) {
+        if (minimumRegime <= coefficients) {
+            throw new IllegalArgumentException("the minimum regime must exceed the " + coefficients
+                    + " coefficients per regime");
+        }
+    }
+
+    /** strucchange: at most ceil(n / h) − 2 breaks. */
+    private int maxBreaksFor(int n) {
+        return Math.min(maxBreaks, Math.max(0, (int) Math.ceil(n / (double) minimumRegime) - 2));
+    }
+
+    /**
+     * [2] §3: SSR(T_{m,j}) = min over i of SSR(T_{m−1,i}) + SSR(i+1..j), for every number of breaks m
+     * up to the maximum and every end j. The minimum for an end j reads the optima with m − 1 breaks
+     * only before j, so the ends are taken in order, each with its one row of segment costs (those
+     * ending at j): no table of all n²/2 segments is kept.
+     */
+    private static final class Programme {
+
+        private final int n;
+        private final int h;
+        private final int maxM;
+        private final double[][] best;   // best[m][j]: least RSS of 0..j in m + 1 regimes
+        private final int[][] from;      // from[m][j]: the last index of the m-th regime at that optimum
+
+        Programme(int n, int h, int maxM) {
+            this.n = n;
+            this.h = h;
+            this.maxM = maxM;
+            best = new double[maxM + 1][n];
+            from = new int[maxM + 1][n];
+            for (int m = 0; m <= maxM; m++) {
+                Arrays.fill(best[m], Double.POSITIVE_INFINITY);
+                Arrays.fill(from[m], -1);
+            }
+        }
+
+        /**
+         * Whether any optimum ending at {@code j} is read: at the series' end (for the BIC), and
+         * before it only where a last regime of h values can still follow.
+         */
+        boolean reads(int j) {
+            return j <= n - 1 - h || j == n - 1;
+        }
+
+        /**
+         * The optima ending at {@code j}, once those ending before it are in.
+         *
+         * @param ending the RSS of {@code s..j} at {@code ending[s]}, for s = 0 and s = h..j − h + 1
+         */
+        void end(int j, double[] ending) {
+            best[0][j] = ending[0];
+            int lastEarlierEnd = j - h;   // the last regime is i+1..j with j − i ≥ h
+            for (int m = 1; m <= maxM; m++) {
+                if (m == maxM && j != n - 1) {
+                    continue;   // the most breaks are only read at the series' end
+                }
+                double[] previous = best[m - 1];
                 double bestHere = Double.POSITIVE_INFINITY;
                 int bestFrom = -1;
-                for (int i = m * h - 1; i <= j - h; i++) {
-                    // [2] §3: SSR(T_{m,j}) = min over i of SSR(T_{m−1,i}) + SSR(i+1..j)
+                // the m earlier regimes need m·h values
+                for (int i = m * h - 1; i <= lastEarlierEnd; i++) {
                     double candidate = previous[i] + ending[i + 1];
-                    if (candidate < bestHere) {
+                    if (candidate < bestHere) {   // strict: the earliest of equal minima
                         bestHere = candidate;
                         bestFrom = i;
                     }
@@ -154,34 +235,39 @@ public final class BaiPerron {
                 from[m][j] = bestFrom;
             }
         }
-        double observed = cost.observed(0, n - 1);
-        List<Segmentation> byBreaks = new ArrayList<>();
-        Segmentation chosen = null;
-        for (int m = 0; m <= maxM; m++) {
-            double rss = best[m][n - 1];
-            if (Double.isInfinite(rss)) {
-                break;
+
+        /** The best partition for each number of breaks, and the one BIC chooses. */
+        Result result(Model model, SegmentCost cost) {
+            int k = model == Model.LEVEL ? 1 : 2;
+            double observed = cost.observed(0, n - 1);
+            List<Segmentation> byBreaks = new ArrayList<>();
+            Segmentation chosen = null;
+            for (int m = 0; m <= maxM; m++) {
+                double rss = best[m][n - 1];
+                if (Double.isInfinite(rss)) {
+                    break;
+                }
+                int[] starts = new int[m];
+                int j = n - 1;
+                for (int b = m; b >= 1; b--) {
+                    int i = from[b][j];
+                    starts[b - 1] = i + 1;
+                    j = i;
+                }
+                // [3] the BIC of strucchange's summary of breakpoints
+                double logLik = -observed / 2 * (Math.log(rss) + 1 - Math.log(observed) + Math.log(2 * Math.PI));
+                double bic = -2 * logLik + Math.log(observed) * (k + 1) * (m + 1);
+                Segmentation s = new Segmentation(m, starts, rss, bic);
+                byBreaks.add(s);
+                if (chosen == null || bic < chosen.bic()) {
+                    chosen = s;
+                }
             }
-            int[] starts = new int[m];
-            int j = n - 1;
-            for (int b = m; b >= 1; b--) {
-                int i = from[b][j];
-                starts[b - 1] = i + 1;
-                j = i;
+            if (chosen == null) {
+                throw new IllegalArgumentException("the series (" + n + " values) is shorter than one regime of " + h);
             }
-            // [3] the BIC of strucchange's summary of breakpoints
-            double logLik = -observed / 2 * (Math.log(rss) + 1 - Math.log(observed) + Math.log(2 * Math.PI));
-            double bic = -2 * logLik + Math.log(observed) * (k + 1) * (m + 1);
-            Segmentation s = new Segmentation(m, starts, rss, bic);
-            byBreaks.add(s);
-            if (chosen == null || bic < chosen.bic()) {
-                chosen = s;
-            }
+            return new Result(model, h, List.copyOf(byBreaks), chosen, (int) observed);
         }
-        if (chosen == null) {
-            throw new IllegalArgumentException("the series (" + n + " values) is shorter than one regime of " + h);
-        }
-        return new Result(model, h, List.copyOf(byBreaks), chosen, (int) observed);
     }
 
     /** Level of the fitted regime {@code from..to} at {@code position} (start of the next regime, say). */

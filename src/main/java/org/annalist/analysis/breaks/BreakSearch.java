@@ -337,9 +337,9 @@ public final class BreakSearch {
             used = h;
             starts = new Confirmation(y, model, h, log, minimumChangePct, alpha).pruned(Pelt.fit(y, h).starts());
         } else {
-            BaiPerron.Result level = BaiPerron.withMinimumRegime(Math.max(h, 2)).fit(y);
-            BaiPerron.Result slope = BaiPerron.withMinimumRegime(Math.max(h, 3))
-                    .with(BaiPerron.Model.LEVEL_AND_SLOPE).fit(y);
+            BaiPerron.BothModels fits = BaiPerron.fitBothModels(y, Math.max(h, 2), Math.max(h, 3));
+            BaiPerron.Result level = fits.level();
+            BaiPerron.Result slope = fits.levelAndSlope();
             BaiPerron.Result best = slope.chosen().bic() < level.chosen().bic() ? slope : level;
             method = Method.BAI_PERRON;
             model = best.model();

@@ -83,6 +83,65 @@ final class SegmentCost {
         return ctt <= 0 ? Math.max(0, level) : Math.max(0, level - cty * cty / ctt);
     }
 
+    /**
+     * {@link #rss} of every segment that ends at {@code to} and starts in
+     * {@code firstStart..lastStart}, into {@code into[start]}. Dynamic programming needs a whole
+     * row of segment costs for each end; one call per row rather than one per segment saves the
+     * call that the quick compiler (C1) does not inline. The arithmetic is that of {@link #rss},
+     * operation for operation, so every value is the same bit for bit; a test holds the two equal.
+     */
+    void rssEndingAt(int to, int firstStart, int lastStart, double[] into) {
+        rssEndingAt(to, firstStart, lastStart, into, into);
+    }
+
+    /**
+     * As {@link #rssEndingAt(int, int, int, double[])}, and also each segment's cost about its
+     * mean, the level model's {@link #rss}, into {@code levelInto[start]} ({@code into} itself when
+     * only one row is wanted). The line's cost starts from the mean's, so one pass gives both
+     * models' rows for what the line's alone costs.
+     */
+    void rssEndingAt(int to, int firstStart, int lastStart, double[] into, double[] levelInto) {
+        boolean levelOnly = model == BaiPerron.Model.LEVEL;
+        double countTo = count[to + 1];
+        double sumYTo = sumY[to + 1];
+        double sumYYTo = sumYY[to + 1];
+        double sumTTo = sumT[to + 1];
+        double sumTTTo = sumTT[to + 1];
+        double sumTYTo = sumTY[to + 1];
+        for (int from = firstStart; from <= lastStart; from++) {
+            double n = countTo - count[from];
+            if (n < 1) {
+                levelInto[from] = 0;
+                into[from] = 0;
+                continue;
+            }
+            double sy = sumYTo - sumY[from];
+            double syy = sumYYTo - sumYY[from];
+            double level = syy - sy * sy / n;
+            double aboutMean = atLeastZero(level);
+            levelInto[from] = aboutMean;   // first: into may be the same row, and then the line's cost wins
+            if (levelOnly || n < 2) {
+                into[from] = aboutMean;
+                continue;
+            }
+            double st = sumTTo - sumT[from];
+            double stt = sumTTTo - sumTT[from];
+            double sty = sumTYTo - sumTY[from];
+            double ctt = stt - st * st / n;
+            double cty = sty - st * sy / n;
+            into[from] = ctt <= 0 ? aboutMean : atLeastZero(level - cty * cty / ctt);
+        }
+    }
+
+    /**
+     * {@code Math.max(0, x)} for every x, NaN and −0 included (both give what {@code Math.max}
+     * gives: NaN, and +0), small enough for C1 to inline, which {@code Math.max(double, double)}
+     * is not.
+     */
+    private static double atLeastZero(double x) {
+        return 0 >= x ? 0 : x;
+    }
+
     /** Least-squares coefficients over the segment: {intercept at t = position, slope per period}. */
     double[] fitAt(int from, int to, int position, double[] y) {
         double n = count[to + 1] - count[from];
