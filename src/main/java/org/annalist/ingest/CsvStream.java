@@ -111,12 +111,14 @@ final class CsvStream {
                 }
             }
         } finally {
+            // the reading thread has handed its last item and is returning, or must be stopped;
+            // either way it has ended before the caller reads on from the text
             if (!finished) {
                 reading.cancelled = true;
-                while (thread.isAlive()) {
-                    batches.clear();   // a reading thread waiting for room sees the cancellation
-                    joinBriefly(thread);
-                }
+            }
+            while (thread.isAlive()) {
+                batches.clear();   // a reading thread waiting for room sees the cancellation
+                joinBriefly(thread);
             }
         }
     }
