@@ -85,9 +85,18 @@ final class CsvStream {
         thread.setDaemon(true);
         thread.start();
         boolean finished = false;
+        boolean interrupted = false;
         try {
             while (true) {
-                Object next = take(batches);
+                Object next;
+                try {
+                    next = batches.take();
+                } catch (InterruptedException interruption) {
+                    // a read on one thread goes on when interrupted, and so does this one; the
+                    // interruption is kept for the caller below
+                    interrupted = true;
+                    continue;
+                }
                 if (next instanceof List<?> rows) {
                     for (Object row : rows) {
                         sink.accept((Row) row);
@@ -118,25 +127,15 @@ final class CsvStream {
             }
             while (thread.isAlive()) {
                 batches.clear();   // a reading thread waiting for room sees the cancellation
-                joinBriefly(thread);
+                try {
+                    thread.join(10);
+                } catch (InterruptedException interruption) {
+                    interrupted = true;
+                }
             }
-        }
-    }
-
-    private static Object take(BlockingQueue<Object> batches) {
-        try {
-            return batches.take();
-        } catch (InterruptedException interrupted) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while reading", interrupted);
-        }
-    }
-
-    private static void joinBriefly(Thread thread) {
-        try {
-            thread.join(10);
-        } catch (InterruptedException interrupted) {
-            Thread.currentThread().interrupt();
+            if (interrupted) {
+                Thread.currentThread().interrupt();
+            }
         }
     }
 
@@ -191,11 +190,13 @@ final class CsvStream {
                 return;
             }
             try {
-                while (!batches.offer(item, 10, TimeUnit.MILLISECONDS)) {
+                // cancelled is read before every offer: the caller that stopped empties the queue
+                // as it waits, so an offer after the cancellation would find room and read on
+                do {
                     if (cancelled) {
                         throw new Cancelled();
                     }
-                }
+                } while (!batches.offer(item, 10, TimeUnit.MILLISECONDS));
             } catch (InterruptedException interrupted) {
                 throw new Cancelled();
             }

@@ -94,17 +94,49 @@ class ReadAheadTest {
     }
 
     @Test
-    void aSinkThatStopsEndsTheReadingThreadBeforeTheCallThrows() {
+    void aSinkThatStopsEndsTheReadingThreadWithoutReadingOnBeforeTheCallThrows() {
         String text = mixedText(200_000);
         IllegalStateException stop = new IllegalStateException("enough");
         int[] seen = {0};
-        Throwable thrown = catchThrowable(() -> CsvStream.streamAhead(new StringReader(text), ';',
-                new ProblemLog("in.csv"), row -> {
-                    if (++seen[0] == 5_000) {
-                        throw stop;
-                    }
-                }));
+        int[] charsRead = {0};
+        Reader counting = new Reader() {
+            private final StringReader in = new StringReader(text);
+
+            @Override
+            public int read(char[] into, int offset, int length) throws IOException {
+                int n = in.read(into, offset, length);
+                charsRead[0] += Math.max(0, n);
+                return n;
+            }
+
+            @Override
+            public void close() {
+                in.close();
+            }
+        };
+        Throwable thrown = catchThrowable(() -> CsvStream.streamAhead(counting, ';', new ProblemLog("in.csv"), row -> {
+            if (++seen[0] == 5_000) {
+                throw stop;
+            }
+        }));
         assertThat(thrown).isSameAs(stop);
+        assertThat(aReadingThreadIsAlive()).isFalse();
+        // 5,000 rows taken, at most a few batches ahead and a buffer of text: far from the 200,000
+        assertThat(charsRead[0]).isLessThan(text.length() / 10);
+    }
+
+    @Test
+    void anInterruptedCallerReadsOnAsOneThreadWouldAndKeepsTheInterruption() {
+        String text = mixedText(20_000);
+        List<String> rows = new ArrayList<>();
+        Thread.currentThread().interrupt();
+        try {
+            CsvStream.streamAhead(new StringReader(text), ';', new ProblemLog("in.csv"), row -> rows.add(describe(row)));
+            assertThat(Thread.currentThread().isInterrupted()).isTrue();
+        } finally {
+            Thread.interrupted();
+        }
+        assertThat(rows).isEqualTo(rowsOneThread(text));
         assertThat(aReadingThreadIsAlive()).isFalse();
     }
 

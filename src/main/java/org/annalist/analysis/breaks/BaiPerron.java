@@ -117,7 +117,7 @@ public final class BaiPerron {
         double[] ending = new double[n];   // ending[s] = RSS of s..j, for the current end j
         for (int j = h - 1; j < n; j++) {
             if (programme.reads(j)) {
-                // no break: the segment 0..j; the last of m ≥ 1 regimes starts at m·h or later
+                // no break: the segment 0..j; after m ≥ 1 breaks the last regime starts at m·h or later
                 cost.rssEndingAt(j, 0, 0, ending);
                 cost.rssEndingAt(j, h, j - h + 1, ending);
                 programme.end(j, ending);
