@@ -87,6 +87,11 @@ public final class Ranks {
         return bits ^ ((bits >> 63) & Long.MAX_VALUE);
     }
 
+    /** The value whose {@link #orderKey} is {@code key} (the flip undoes itself; NaN comes back as Java's NaN). */
+    public static double valueOfOrderKey(long key) {
+        return Double.longBitsToDouble(key ^ ((key >> 63) & Long.MAX_VALUE));
+    }
+
     /** Σ over groups of tied values of (t³ − t). */
     public static double tieSum(double[] x) {
         double[] sorted = x.clone();

@@ -64,6 +64,7 @@ class ReadAheadTest {
         String text = mixedText(25_000);
         List<String> ahead = rowsAhead(text);
         assertThat(ahead).hasSize(25_001).isEqualTo(rowsOneThread(text));
+        // mixedText's first row: line 2 (after the header), its quoted cell over two lines kept whole
         assertThat(ahead.get(1)).isEqualTo("2:[1900-01, 0, a\r\nb]");
         assertThat(aReadingThreadIsAlive()).isFalse();
     }
@@ -170,6 +171,7 @@ class ReadAheadTest {
         assertThat(read.series()).hasSize(series);
         Series last = read.series().get(series - 1);
         assertThat(last.size()).isEqualTo(months);
+        // the generator above writes s·1000 + t and ".5": series 899, months 0 and 239
         assertThat(last.value(0)).isEqualTo(899_000.5);
         assertThat(last.value(months - 1)).isEqualTo(899_239.5);
         assertThat(aReadingThreadIsAlive()).isFalse();

@@ -30,7 +30,14 @@ import java.util.List;
 public final class BaiPerron {
 
     /** What changes at a break: the level only (y ~ 1), or level and slope (y ~ 1 + t). */
-    public enum Model { LEVEL, LEVEL_AND_SLOPE }
+    public enum Model {
+        LEVEL, LEVEL_AND_SLOPE;
+
+        /** Coefficients a regime of this model has: a level, or a level and a slope. */
+        int coefficients() {
+            return this == LEVEL ? 1 : 2;
+        }
+    }
 
     /**
      * The best partition with a given number of breaks. The array is copied in and out, so a
@@ -238,7 +245,7 @@ public final class BaiPerron {
 
         /** The best partition for each number of breaks, and the one BIC chooses. */
         Result result(Model model, SegmentCost cost) {
-            int k = model == Model.LEVEL ? 1 : 2;
+            int k = model.coefficients();
             double observed = cost.observed(0, n - 1);
             List<Segmentation> byBreaks = new ArrayList<>();
             Segmentation chosen = null;

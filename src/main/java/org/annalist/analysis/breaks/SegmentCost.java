@@ -169,6 +169,6 @@ final class SegmentCost {
     }
 
     int parameters() {
-        return model == BaiPerron.Model.LEVEL ? 1 : 2;
+        return model.coefficients();
     }
 }

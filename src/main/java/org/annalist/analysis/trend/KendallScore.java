@@ -31,7 +31,7 @@ record KendallScore(int n, long s, double variance, int tieGroups) {
         long s = sortCountingScore(keys);
         double[] sorted = new double[n];
         for (int i = 0; i < n; i++) {
-            sorted[i] = valueOf(keys[i]);
+            sorted[i] = Ranks.valueOfOrderKey(keys[i]);
         }
         double tieTerm = 0;
         int groups = 0;
@@ -70,11 +70,6 @@ record KendallScore(int n, long s, double variance, int tieGroups) {
             }
         }
         return v;
-    }
-
-    /** The value of a key of {@link Ranks#orderKey} (of a value that is not NaN). */
-    private static double valueOf(long key) {
-        return Double.longBitsToDouble(key ^ ((key >> 63) & Long.MAX_VALUE));
     }
 
     /**
